@@ -1,0 +1,93 @@
+/**
+ * The `taut` command line: the same core as the app, for scripts. Exit codes: 0 success,
+ * 2 bad input (with the field and the rule broken), 1 internal error.
+ */
+import { parseArgs, type ParseArgsConfig } from "node:util";
+import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "./errors.js";
+import { planCommand } from "./commands/plan.js";
+
+export interface Command {
+  name: string;
+  summary: string;
+  usage: string;
+  help: string;
+  options: NonNullable<ParseArgsConfig["options"]>;
+  run(args: { values: Record<string, unknown>; positionals: string[] }, out: Output): number | Promise<number>;
+}
+
+/** Where commands write: stdout for results, stderr for progress and errors. */
+export interface Output {
+  out(text: string): void;
+  err(text: string): void;
+}
+
+const COMMANDS: Command[] = [planCommand];
+
+/** Register a command (each issue's command adds itself here). */
+export function commands(): readonly Command[] {
+  return COMMANDS;
+}
+
+export function addCommand(c: Command): void {
+  if (!COMMANDS.some((x) => x.name === c.name)) COMMANDS.push(c);
+}
+
+function topHelp(): string {
+  const width = Math.max(...COMMANDS.map((c) => c.name.length));
+  return [
+    "taut — starting advisor for heavy trains (advisory only: operating rules, local instructions",
+    "and the locomotive's own instructions prevail)",
+    "",
+    "Usage: taut <command> [options]",
+    "",
+    "Commands:",
+    ...COMMANDS.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`),
+    "",
+    "Run `taut <command> --help` for a command's options.",
+    "Exit codes: 0 success, 2 bad input, 1 internal error.",
+  ].join("\n");
+}
+
+const stdio: Output = {
+  out: (t) => process.stdout.write(t.endsWith("\n") ? t : `${t}\n`),
+  err: (t) => process.stderr.write(t.endsWith("\n") ? t : `${t}\n`),
+};
+
+/** Run the command line; returns the exit code. */
+export async function main(argv: string[], io: Output = stdio): Promise<number> {
+  const [name, ...rest] = argv;
+  if (name === undefined || name === "--help" || name === "-h" || name === "help") {
+    io.out(topHelp());
+    return name === undefined ? EXIT_BAD_INPUT : EXIT_OK;
+  }
+  if (name === "--version") {
+    io.out("taut 0.1.0");
+    return EXIT_OK;
+  }
+  const cmd = COMMANDS.find((c) => c.name === name);
+  if (!cmd) {
+    io.err(`taut: unknown command "${name}". Commands: ${COMMANDS.map((c) => c.name).join(", ")}. See taut --help.`);
+    return EXIT_BAD_INPUT;
+  }
+  try {
+    let parsed;
+    try {
+      parsed = parseArgs({ args: rest, options: { ...cmd.options, help: { type: "boolean", short: "h" } }, allowPositionals: true, strict: true });
+    } catch (e) {
+      throw new InputError(`${(e as Error).message.replace(/\. To specify a positional.*$/s, "")}\n  usage: ${cmd.usage}`);
+    }
+    if (parsed.values.help) {
+      io.out(`Usage: ${cmd.usage}\n\n${cmd.help}`);
+      return EXIT_OK;
+    }
+    return await cmd.run(parsed as { values: Record<string, unknown>; positionals: string[] }, io);
+  } catch (e) {
+    if (e instanceof InputError) {
+      io.err(`taut ${cmd.name}: ${e.describe()}`);
+      return EXIT_BAD_INPUT;
+    }
+    io.err(`taut ${cmd.name}: internal error: ${(e as Error).message}\nPlease report this with the input file.`);
+    if (process.env.TAUT_DEBUG) io.err(String((e as Error).stack));
+    return EXIT_INTERNAL;
+  }
+}

@@ -1,0 +1,29 @@
+/** Plain-text tables for the terminal: columns padded, numbers right-aligned. */
+
+export function textTable(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<string>>): string {
+  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
+  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+%?$|^—$/.test(r[i] ?? "")));
+  const line = (cells: readonly string[]) =>
+    cells.map((c, i) => (isNum[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join("  ").trimEnd();
+  return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");
+}
+
+/** Format with fixed decimals, or a dash when absent. */
+export function num(x: number | null | undefined, decimals = 0): string {
+  if (x === null || x === undefined || !Number.isFinite(x)) return "—";
+  return x.toFixed(decimals);
+}
+
+export function pct(x: number, decimals = 0): string {
+  return `${(x * 100).toFixed(decimals)}%`;
+}
+
+/** Quote a CSV field when needed (RFC 4180). */
+export function csvField(v: unknown): string {
+  const s = v === null || v === undefined ? "" : String(v);
+  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+
+export function csv(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<unknown>>): string {
+  return [header, ...rows].map((r) => r.map(csvField).join(",")).join("\n") + "\n";
+}

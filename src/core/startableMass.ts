@@ -1,0 +1,42 @@
+/**
+ * The largest trailing mass that still starts, everything else unchanged (same wagons, same length),
+ * found by bisection over a verdict function. The verdict must be monotonic in mass.
+ */
+import type { StartCase } from "./types.js";
+
+/** The case with a different trailing mass, wagons and length unchanged. */
+export function withTrailingMass(c: StartCase, trailingMassKg: number): StartCase {
+  return { ...c, train: { ...c.train, trailingMassKg } };
+}
+
+export interface MassSearchOptions {
+  /** Stop when the bracket is this narrow, kg. */
+  toleranceKg?: number;
+  /** Never search above this, kg. */
+  ceilingKg?: number;
+}
+
+/**
+ * Largest trailing mass (kg) for which `starts(case)` holds; 0 when even a near-empty train does not
+ * start. Doubles up from the case's mass to bracket the limit, then bisects.
+ */
+export function largestStartableMassKg(c: StartCase, starts: (c: StartCase) => boolean, opts: MassSearchOptions = {}): number {
+  const tol = opts.toleranceKg ?? 500;
+  const ceiling = opts.ceilingKg ?? 5e7;
+  const floorKg = c.train.wagons * 1000; // one tonne per wagon: lighter is not a train
+  const ok = (m: number): boolean => starts(withTrailingMass(c, m));
+  if (!ok(floorKg)) return 0;
+  let lo = floorKg;
+  let hi = Math.max(c.train.trailingMassKg, 2 * floorKg);
+  while (ok(hi)) {
+    lo = hi;
+    if (hi >= ceiling) return ceiling;
+    hi = Math.min(ceiling, hi * 2);
+  }
+  while (hi - lo > tol) {
+    const mid = 0.5 * (lo + hi);
+    if (ok(mid)) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}

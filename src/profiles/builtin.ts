@@ -1,0 +1,65 @@
+/**
+ * The built-in profiles shipped in `profiles/`: illustrative locomotives, wagon types, the rail-condition
+ * table, demo location notes, trains and start cases. Bundled into the app and read by the CLI.
+ */
+import loco4 from "../../profiles/locomotives/illustrative-4axle-1100.json" with { type: "json" };
+import loco6a from "../../profiles/locomotives/illustrative-6axle-1800.json" with { type: "json" };
+import loco6b from "../../profiles/locomotives/illustrative-6axle-3000.json" with { type: "json" };
+import wagonLoaded from "../../profiles/wagons/bogie-hopper-loaded.json" with { type: "json" };
+import wagonEmpty from "../../profiles/wagons/bogie-hopper-empty.json" with { type: "json" };
+import wagonVan from "../../profiles/wagons/bogie-van-buffered.json" with { type: "json" };
+import railConditions from "../../profiles/conditions/rail-conditions.json" with { type: "json" };
+import locAshvale from "../../profiles/locations/ashvale-loop-up.json" with { type: "json" };
+import locCinderfield from "../../profiles/locations/cinderfield-yard.json" with { type: "json" };
+import locLantern from "../../profiles/locations/lantern-dip.json" with { type: "json" };
+import trainAggregate from "../../profiles/trains/aggregate-1500.json" with { type: "json" };
+import trainOre from "../../profiles/trains/ore-5200.json" with { type: "json" };
+import trainGoods from "../../profiles/trains/goods-1100.json" with { type: "json" };
+import caseAggregate from "../../profiles/cases/demo-aggregate-ashvale.json" with { type: "json" };
+import caseOre from "../../profiles/cases/demo-ore-lantern.json" with { type: "json" };
+import caseGoods from "../../profiles/cases/demo-goods-cinderfield.json" with { type: "json" };
+import { adhesionFromFile, locomotiveFromFile, wagonFromFile } from "./convert.js";
+import { formatIssues, type ParseResult } from "./issues.js";
+import type { Library } from "./library.js";
+import {
+  parseLocationNote,
+  parseLocomotiveFile,
+  parseRailConditionsFile,
+  parseStartCaseFile,
+  parseTrainPreset,
+  parseWagonFile,
+} from "./parse.js";
+import type { LocationNoteFile, RailConditionsFile, StartCaseFile, TrainPresetFile } from "./schemas.js";
+
+/** The built-in files are part of the program: an invalid one is a programming error. */
+function must<T>(r: ParseResult<T>, what: string): T {
+  if (!r.ok) throw new Error(`built-in ${what} is invalid:\n${formatIssues(r.issues)}`);
+  return r.value;
+}
+
+const locoFiles = [loco4, loco6a, loco6b].map((f) => must(parseLocomotiveFile(f), `locomotive ${String(f.id)}`));
+const wagonFiles = [wagonLoaded, wagonEmpty, wagonVan].map((f) => must(parseWagonFile(f), `wagon ${String(f.id)}`));
+
+/** The rail-condition table with its sources. */
+export const builtinRailConditions: RailConditionsFile = must(parseRailConditionsFile(railConditions), "rail-condition table");
+/** Demo location notes (illustrative). */
+export const builtinLocations: LocationNoteFile[] = [locAshvale, locCinderfield, locLantern].map((f) => must(parseLocationNote(f), `location ${String(f.id)}`));
+/** Demo trains (illustrative). */
+export const builtinTrains: TrainPresetFile[] = [trainAggregate, trainOre, trainGoods].map((f) => must(parseTrainPreset(f), `train ${String(f.id)}`));
+/** Demo start cases (illustrative); the first is the built-in demo. */
+export const builtinCases: StartCaseFile[] = [caseAggregate, caseOre, caseGoods].map((f) => must(parseStartCaseFile(f), `case ${String(f.id)}`));
+/** Raw demo case files, as a user would write them. */
+export const builtinCaseJson: unknown[] = [caseAggregate, caseOre, caseGoods];
+
+/** The library of built-in profiles. */
+export function builtinLibrary(): Library {
+  return {
+    locomotives: new Map(locoFiles.map((f) => [f.id, { spec: locomotiveFromFile(f), file: f }])),
+    wagons: new Map(wagonFiles.map((f) => [f.id, wagonFromFile(f)])),
+    locations: new Map(builtinLocations.map((n) => [n.id, n])),
+    adhesion: adhesionFromFile(builtinRailConditions),
+  };
+}
+
+/** The id of the case `taut plan --demo` and the app open with. */
+export const DEMO_CASE_ID = "demo-aggregate-ashvale";
