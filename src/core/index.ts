@@ -15,3 +15,5 @@ export * from "./staticCheck.js";
 export * from "./startableMass.js";
 export * from "./rating.js";
 export * from "./cautions.js";
+export * from "./planner/index.js";
+export * from "./loadTable.js";

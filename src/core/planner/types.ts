@@ -1,0 +1,79 @@
+/**
+ * What the start planner returns, in SI. The CLI turns it into the INTERFACE.md JSON; the app formats
+ * it for display in the chosen units.
+ */
+import type { StaticCheck } from "../staticCheck.js";
+import type { Reason, Verdict } from "../types.js";
+
+export type Phase = "prepare" | "stretch" | "build" | "accelerate";
+
+/** What the driver watches for before moving to the next step. */
+export type Trigger = "time" | "moved" | "speed" | "target";
+
+export interface PlanStep {
+  phase: Phase;
+  notch: number;
+  /** Observable conditions at which to advance; `primary` says which one leads. */
+  advanceWhen: { afterS: number; movedM: number; speedMps: number; primary: Trigger };
+  /** Seconds from the start of the plan at which the step begins. */
+  startS: number;
+  /** Locomotive speed expected when the step ends, m/s. */
+  speedMps: number;
+  /** Tractive effort demanded during the step (all powered units), N. */
+  tractiveEffortN: number;
+  /** Demanded ÷ median available adhesion (worst unit), 0..1. */
+  adhesionUse: number;
+  /** Probability that the rails give less than the demand, 0..1. */
+  slipRisk: number;
+  /** Largest coupler force (tension) during the step, N. */
+  peakCouplerForceN: number;
+  /** Notch to drop to if the wheels slip in this step. */
+  fallbackNotch: number;
+  /** One plain line of physics saying why. */
+  why: string;
+}
+
+/** The "If wheels slip" card: what the protection does, what the driver does, what to do on a stall. */
+export interface SlipGuidance {
+  protection: string[];
+  driver: string[];
+  stall: string[];
+}
+
+/** Time series of the verifying dynamics run, decimated for charts. */
+export interface PlanSeries {
+  timeS: Float64Array;
+  speedMps: Float64Array;
+  notch: Float64Array;
+  locoTravelM: Float64Array;
+  /** Largest coupler tension anywhere in the train at each sample, N. */
+  maxTensionN: Float64Array;
+}
+
+export interface PlanResult {
+  verdict: Verdict;
+  reasons: Reason[];
+  /** Smallest of the margins (available ÷ needed). */
+  margin: number;
+  margins: StaticCheck["margins"];
+  static: StaticCheck;
+  steps: PlanStep[];
+  peakCouplerForceN: number;
+  peakCompressionN: number;
+  /** Peak tension of each coupling, head to tail, N. */
+  couplerPeaksN: Float64Array;
+  /** Seconds from taking power to reaching the target; null when it is not reached. */
+  timeToTargetS: number | null;
+  maxStartableMassKg: number;
+  slipGuidance: SlipGuidance;
+  cautions: string[];
+  series: PlanSeries;
+}
+
+/** Progress and cancellation hooks; the caller owns the clock. */
+export interface PlanOptions {
+  onProgress?: (fraction: number) => void;
+  shouldStop?: () => boolean;
+  /** Skip the largest-startable-mass search (used inside that search and by batch screens). */
+  skipMassSearch?: boolean;
+}
