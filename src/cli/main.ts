@@ -5,6 +5,7 @@
 import { parseArgs, type ParseArgsConfig } from "node:util";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "./errors.js";
 import { planCommand } from "./commands/plan.js";
+import { simulateCommand } from "./commands/simulate.js";
 
 export interface Command {
   name: string;
@@ -21,7 +22,7 @@ export interface Output {
   err(text: string): void;
 }
 
-const COMMANDS: Command[] = [planCommand];
+const COMMANDS: Command[] = [planCommand, simulateCommand];
 
 /** Register a command (each issue's command adds itself here). */
 export function commands(): readonly Command[] {

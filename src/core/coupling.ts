@@ -6,14 +6,18 @@
  */
 import type { CouplingKind } from "./types.js";
 
-/** One side of the connection (draft = tension, buff = compression): F_load(e) = F_rated·(e/travel)^p. */
+/**
+ * One side of the connection (draft = tension, buff = compression). Loading curve with ξ = e/travel:
+ * F_load(e) = F_rated·ξ·(a + (1 − a)·ξ): a = 1 is a linear spring, smaller a stiffens with travel the way
+ * friction gears and buffers do (and costs no power function in the inner loop).
+ */
 export interface GearSide {
   /** Travel of the gear(s) in series before the end stop, m. */
   travelM: number;
   /** Loading force at full travel, N. */
   forceAtTravelN: number;
-  /** Shape exponent of the loading curve (1 = linear; >1 stiffens with travel). */
-  exponent: number;
+  /** Share of the linear term in the loading curve, 0..1 (1 = linear). */
+  linearShare: number;
 }
 
 export interface CouplingSpec {
@@ -38,7 +42,7 @@ export interface CouplingSpec {
  * 2.52 MN at 148 mm. Friction gears absorb ≈ 50–70 % of the energy per cycle [M]: unloading ratio 0.4.
  */
 export function knuckleCoupling(freeSlackM: number): CouplingSpec {
-  const side: GearSide = { travelM: 0.148, forceAtTravelN: 2.52e6, exponent: 1.5 };
+  const side: GearSide = { travelM: 0.148, forceAtTravelN: 2.52e6, linearShare: 0.3 };
   return {
     kind: "knuckle",
     freeSlackM,
@@ -60,8 +64,8 @@ export function screwCoupling(freeSlackM: number): CouplingSpec {
   return {
     kind: "screw",
     freeSlackM,
-    draft: { travelM: 0.1, forceAtTravelN: 1.0e6, exponent: 1.3 },
-    buff: { travelM: 0.21, forceAtTravelN: 1.0e6, exponent: 2 },
+    draft: { travelM: 0.1, forceAtTravelN: 1.0e6, linearShare: 0.6 },
+    buff: { travelM: 0.21, forceAtTravelN: 1.0e6, linearShare: 0.1 },
     unloadingRatio: 0.5,
     transitionStiffnessNPerM: 8e7,
     endStopStiffnessNPerM: 2e8,
@@ -74,9 +78,19 @@ export function couplingOfKind(kind: CouplingKind, freeSlackM: number): Coupling
   return kind === "knuckle" ? knuckleCoupling(freeSlackM) : screwCoupling(freeSlackM);
 }
 
+/** Loading force of one gear side at deflection e ≥ 0 (end stop not included), N. */
+export function gearLoadingForceN(side: GearSide, deflectionM: number): number {
+  const xi = Math.min(Math.max(deflectionM, 0) / side.travelM, 1);
+  return side.forceAtTravelN * xi * (side.linearShare + (1 - side.linearShare) * xi);
+}
+
 /** Deflection of one gear side under a steady loading force, m (inverse of the loading curve). */
 export function gearDeflectionM(side: GearSide, forceN: number): number {
   if (forceN <= 0) return 0;
   if (forceN >= side.forceAtTravelN) return side.travelM;
-  return side.travelM * Math.pow(forceN / side.forceAtTravelN, 1 / side.exponent);
+  const a = side.linearShare;
+  const f = forceN / side.forceAtTravelN;
+  // Solve (1 − a)ξ² + aξ − f = 0 for ξ ≥ 0.
+  const xi = a >= 1 ? f : (-a + Math.sqrt(a * a + 4 * (1 - a) * f)) / (2 * (1 - a));
+  return side.travelM * xi;
 }

@@ -1,0 +1,192 @@
+/** `taut simulate CASE.json --sequence "1@0,2@20,4@35,8@50"` — run a given notch sequence through the dynamics model. */
+import { simulate, sequenceControls, type SimResult } from "../../core/simulate.js";
+import { modelFromCase } from "../../core/trainModel.js";
+import type { StartCase } from "../../core/types.js";
+import { InputError } from "../errors.js";
+import { library, readStartCase } from "../files.js";
+import type { Command } from "../main.js";
+import { num, textTable } from "../table.js";
+
+/** Longest run when the target is not reached, s. */
+const MAX_DURATION_S = 180;
+
+export interface SequenceEntry {
+  notch: number;
+  atS: number;
+}
+
+/** Parse "1@0,2@20,4@35" into notch/time pairs; throws InputError naming the bad entry. */
+export function parseSequence(text: string, maxNotch: number): SequenceEntry[] {
+  const entries = text
+    .split(",")
+    .map((p) => p.trim())
+    .filter((p) => p.length > 0);
+  if (entries.length === 0) throw new InputError('--sequence: give at least one notch@seconds, e.g. "1@0,2@20,4@35"');
+  const out = entries.map((p, k) => {
+    const m = /^(\d+)\s*@\s*(\d+(?:\.\d+)?)$/.exec(p);
+    if (!m) throw new InputError(`--sequence: entry ${k + 1} ("${p}") must be notch@seconds, e.g. 4@35`);
+    const notch = Number(m[1]);
+    const atS = Number(m[2]);
+    if (notch > maxNotch) throw new InputError(`--sequence: entry ${k + 1} asks for notch ${notch}; the locomotive has ${maxNotch}`);
+    return { notch, atS };
+  });
+  for (let k = 1; k < out.length; k++) {
+    if (out[k]!.atS < out[k - 1]!.atS) throw new InputError(`--sequence: entry ${k + 1} (${entries[k]}) is earlier than the one before it`);
+  }
+  return out;
+}
+
+export interface SimulateReport {
+  schema: "taut/simulation@1";
+  sequence: SequenceEntry[];
+  locoBrakeRelease_s: number;
+  adhesionQuantile: number;
+  lastVehicleMoves_s: number | null;
+  locoTravelToStretch_m: number | null;
+  peakCouplerForce_kN: number;
+  peakCompression_kN: number;
+  peakAt: { coupling: number; time_s: number };
+  peakCompressionAt: { coupling: number; time_s: number };
+  couplerPeaks_kN: number[];
+  maxRunOut_kmh: number;
+  maxRunIn_kmh: number;
+  slipEvents: Array<{ unit: number; start_s: number; end_s: number; cuts: number; speed_kmh: number }>;
+  final: { time_s: number; speed_kmh: number; distance_m: number };
+  targetReached: boolean;
+  series?: { time_s: number[]; speed_kmh: number[]; notch: number[]; distance_m: number[]; maxTension_kN: number[] };
+}
+
+const r1 = (x: number) => Math.round(x * 10) / 10;
+const r2 = (x: number) => Math.round(x * 100) / 100;
+
+/** Run the sequence on the case and express the result with units in names. */
+export function simulateCase(c: StartCase, seq: SequenceEntry[], opts: { durationS?: number; releaseAtS?: number; adhesionQuantile?: number; series?: boolean }): SimulateReport {
+  const q = opts.adhesionQuantile ?? 0.5;
+  const model = modelFromCase(c, { adhesionQuantile: q });
+  const firstPower = seq.find((e) => e.notch > 0)?.atS ?? 0;
+  // The train brake is released before the sequence starts; the locomotive brake holds until the first
+  // notch's effort has built up (common practice on a rising grade), unless told otherwise.
+  const release = opts.releaseAtS ?? firstPower + 3;
+  const controls = sequenceControls(seq, { trainBrakeReleaseS: -1e6, locoBrakeReleaseS: release });
+  const target = c.target;
+  const reached = (o: { leadSpeedMps: number; tailTravelM: number }) =>
+    target.kind === "speed" ? o.leadSpeedMps >= target.speedMps : o.tailTravelM >= target.distanceM;
+  let hit = false;
+  const res: SimResult = simulate(model, controls, {
+    durationS: opts.durationS ?? MAX_DURATION_S,
+    ...(opts.durationS === undefined
+      ? {
+          stopWhen: (o) => {
+            hit = reached(o);
+            return hit;
+          },
+        }
+      : {}),
+  });
+  if (opts.durationS !== undefined) hit = reached({ leadSpeedMps: res.final.leadSpeedMps, tailTravelM: res.final.tailTravelM });
+  const report: SimulateReport = {
+    schema: "taut/simulation@1",
+    sequence: seq,
+    locoBrakeRelease_s: release,
+    adhesionQuantile: q,
+    lastVehicleMoves_s: res.lastVehicleMovesS === null ? null : r1(res.lastVehicleMovesS),
+    locoTravelToStretch_m: res.locoTravelToStretchM === null ? null : r2(res.locoTravelToStretchM),
+    peakCouplerForce_kN: r1(res.peakTensionN / 1000),
+    peakCompression_kN: r1(res.peakCompressionN / 1000),
+    peakAt: { coupling: res.peakTensionAt.coupling, time_s: r1(res.peakTensionAt.timeS) },
+    peakCompressionAt: { coupling: res.peakCompressionAt.coupling, time_s: r1(res.peakCompressionAt.timeS) },
+    couplerPeaks_kN: Array.from(res.couplerPeakTensionN, (f) => r1(f / 1000)),
+    maxRunOut_kmh: r2(res.maxRunOutMps * 3.6),
+    maxRunIn_kmh: r2(res.maxRunInMps * 3.6),
+    slipEvents: res.slipEpisodes.map((e) => ({ unit: e.unit, start_s: r1(e.startS), end_s: r1(e.endS), cuts: e.cuts, speed_kmh: r1(e.speedMps * 3.6) })),
+    final: { time_s: r1(res.final.timeS), speed_kmh: r1(res.final.leadSpeedMps * 3.6), distance_m: r1(res.final.leadTravelM) },
+    targetReached: hit,
+  };
+  if (opts.series) {
+    const s = res.series;
+    report.series = {
+      time_s: Array.from(s.timeS, r1),
+      speed_kmh: Array.from(s.leadSpeedMps, (v) => r2(v * 3.6)),
+      notch: Array.from(s.notch),
+      distance_m: Array.from(s.leadTravelM, r2),
+      maxTension_kN: Array.from(s.maxTensionN, (f) => r1(f / 1000)),
+    };
+  }
+  return report;
+}
+
+export function renderSimulation(r: SimulateReport): string {
+  const lines = [
+    `Sequence: ${r.sequence.map((e) => `notch ${e.notch} at ${e.atS} s`).join(", ")}; locomotive brake off at ${r.locoBrakeRelease_s} s`,
+    `Adhesion assumed: ${r.adhesionQuantile === 0.5 ? "median" : `the ${Math.round(r.adhesionQuantile * 100)} % quantile`}`,
+    `Last vehicle moves: ${r.lastVehicleMoves_s === null ? "never (the train did not start)" : `${num(r.lastVehicleMoves_s, 1)} s, after ${num(r.locoTravelToStretch_m, 2)} m of locomotive travel`}`,
+    `Peak coupler force: ${num(r.peakCouplerForce_kN)} kN at coupling ${r.peakAt.coupling + 1} (${num(r.peakAt.time_s, 1)} s); peak compression ${num(r.peakCompression_kN)} kN`,
+    `Fastest take-up: run-out ${num(r.maxRunOut_kmh, 2)} km/h, run-in ${num(r.maxRunIn_kmh, 2)} km/h`,
+    `Wheel slip: ${r.slipEvents.length === 0 ? "none" : r.slipEvents.map((e) => `unit ${e.unit + 1} ${num(e.start_s, 1)}–${num(e.end_s, 1)} s (${e.cuts} cuts)`).join("; ")}`,
+    `End: ${num(r.final.time_s, 1)} s, ${num(r.final.speed_kmh, 1)} km/h, ${num(r.final.distance_m, 1)} m${r.targetReached ? " (target reached)" : ""}`,
+    "",
+    "Peak force along the train (every tenth coupling):",
+    textTable(
+      ["coupling", "peak kN"],
+      r.couplerPeaks_kN.map((f, j) => [String(j + 1), num(f)]).filter((_, j) => j % 10 === 0 || j === r.couplerPeaks_kN.length - 1),
+    ),
+    "",
+    "Advisory only: operating rules, local instructions and the locomotive's own instructions prevail.",
+  ];
+  return lines.join("\n");
+}
+
+export const simulateCommand: Command = {
+  name: "simulate",
+  summary: "run a given notch sequence through the train dynamics model",
+  usage: 'taut simulate CASE.json --sequence "1@0,2@20,4@35,8@50" [--duration S] [--release-at S] [--adhesion-quantile Q] [--json] [--series]',
+  help: [
+    "Runs the notches you give (notch@seconds) and reports when the last vehicle moves, coupler forces",
+    "along the train, take-up speeds, wheel slips and the final speed and distance.",
+    "The train brake is taken as released; the locomotive brake holds until --release-at (default: 3 s after",
+    "the first notch).",
+    "",
+    "Options:",
+    "  --sequence S          notch@seconds, comma separated (required)",
+    "  --duration S          simulate exactly S seconds (default: until the case's target, at most 180 s)",
+    "  --release-at S        when the locomotive brake is eased off, s",
+    "  --adhesion-quantile Q adhesion the run assumes: 0.5 median (default), 0.1 the 10 % worst",
+    "  --json                JSON output",
+    "  --series              with --json, include the decimated time series",
+  ].join("\n"),
+  options: {
+    sequence: { type: "string" },
+    duration: { type: "string" },
+    "release-at": { type: "string" },
+    "adhesion-quantile": { type: "string" },
+    json: { type: "boolean" },
+    series: { type: "boolean" },
+  },
+  run({ values, positionals }, io) {
+    const path = positionals[0];
+    if (!path) throw new InputError("a start-case file is needed\n  usage: taut simulate CASE.json --sequence \"1@0,4@20\"");
+    if (typeof values.sequence !== "string") throw new InputError('--sequence is required, e.g. --sequence "1@0,2@20,4@35,8@50"');
+    const { c } = readStartCase(path, library());
+    const maxNotch = Math.min(...c.locomotives.map((g) => g.spec.notchPower.length));
+    const seq = parseSequence(values.sequence, maxNotch);
+    const opts: Parameters<typeof simulateCase>[2] = { series: values.series === true };
+    if (values.duration !== undefined) opts.durationS = positiveNumber("--duration", values.duration, 3600);
+    if (values["release-at"] !== undefined) opts.releaseAtS = positiveNumber("--release-at", values["release-at"], 3600, true);
+    if (values["adhesion-quantile"] !== undefined) {
+      const q = Number(values["adhesion-quantile"]);
+      if (!(q > 0 && q < 1)) throw new InputError(`--adhesion-quantile must be between 0 and 1 (got ${String(values["adhesion-quantile"])})`);
+      opts.adhesionQuantile = q;
+    }
+    const report = simulateCase(c, seq, opts);
+    io.out(values.json ? JSON.stringify(report, null, 2) : renderSimulation(report));
+    return 0;
+  },
+};
+
+function positiveNumber(name: string, raw: unknown, max: number, allowZero = false): number {
+  const x = Number(raw);
+  if (!Number.isFinite(x) || x < 0 || (!allowZero && x === 0) || x > max) {
+    throw new InputError(`${name} must be a number of seconds ${allowZero ? "from 0" : "above 0"} up to ${max} (got ${String(raw)})`);
+  }
+  return x;
+}

@@ -1,0 +1,422 @@
+/**
+ * Longitudinal train dynamics: the chain of vehicle masses and couplings integrated with a fixed-step
+ * leapfrog (kick–drift–kick) scheme. m_i(1+γ_i)·a_i = F_c,i−1 − F_c,i + F_t,i − F_r,i − m_i·g·sin θ_i − F_curve,i
+ * (PHYSICS.md §5). Coupling law: dead band of free slack, loading/unloading curves with a steep
+ * change-over between them (hysteresis), end stop and light damping (PHYSICS.md §4). A standing vehicle
+ * stays put until the net force on it exceeds what holds it (breakaway, curve, brakes).
+ * `step` advances the state by dt; the caller owns the clock.
+ */
+import { GRAVITY_MPS2 } from "./constants.js";
+import type { TrainModel } from "./trainModel.js";
+
+export interface DynamicsState {
+  t: number;
+  /** Displacement of each vehicle from where it stood, m (forward positive). */
+  x: Float64Array;
+  v: Float64Array;
+  acc: Float64Array;
+  /** Cached track segment of each vehicle. */
+  seg: Int32Array;
+  /** Hysteretic gear force of each coupling (magnitude on its engaged side), N. */
+  gearF: Float64Array;
+  /** Gear deflection at the last evaluation (magnitude), m. */
+  gearDefl: Float64Array;
+  /** Total coupling force, tension positive, N. */
+  couplerF: Float64Array;
+  /** −1 buff engaged, 0 in the slack, +1 draft engaged. */
+  engaged: Int8Array;
+  /** Tractive effort each vehicle receives (0 for wagons), N. */
+  tractionN: Float64Array;
+  /** Brake holding capacity now, N (set by the caller from the brake schedule). */
+  brakeN: Float64Array;
+  /** Per powered unit: notch, lagged effort, target effort. */
+  notch: Int32Array;
+  effortN: Float64Array;
+  targetN: Float64Array;
+
+  // Running records, updated in the force evaluation so the hot loop reads each value once.
+  peakTensionN: Float64Array;
+  peakTensionT: Float64Array;
+  peakCompressionN: Float64Array;
+  peakCompressionT: Float64Array;
+  /** Largest tension / compression anywhere since the last `resetInterval`. */
+  intervalMaxTensionN: number;
+  intervalMaxCompressionN: number;
+  /** Slip triggers since the start, and per unit the time of the last one. */
+  slipCount: Int32Array;
+  lastSlipT: Float64Array;
+  /** Take-up events: a coupling going from slack to engaged. */
+  takeUp: TakeUpLog;
+  energy: EnergyLedger | null;
+}
+
+/** Couplings coming out of the slack: when, which, and how fast the two vehicles closed or parted. */
+export interface TakeUpLog {
+  count: number;
+  timeS: Float64Array;
+  coupling: Int32Array;
+  /** Relative speed at engagement, m/s: positive run-out (parting), negative run-in (closing). */
+  relSpeedMps: Float64Array;
+  maxRunOutMps: number;
+  maxRunInMps: number;
+}
+
+/** Work and energy, J, for the energy-balance check. */
+export interface EnergyLedger {
+  traction: number;
+  resistance: number;
+  brakes: number;
+  grade: number;
+  coupling: number;
+  /** Forces at the last evaluation (for trapezoidal work), per vehicle and coupling. */
+  lastX: Float64Array;
+  lastTraction: Float64Array;
+  lastResist: Float64Array;
+  lastBrake: Float64Array;
+  lastGrade: Float64Array;
+  lastExt: Float64Array;
+  lastCoupler: Float64Array;
+}
+
+const TAKE_UP_CAPACITY = 4096;
+/** Below this relative speed an engagement is not logged as a take-up event, m/s. */
+const TAKE_UP_LOG_SPEED = 0.02;
+const MIN_POWER_SPEED = 1e-3;
+const CK0 = 7.5 / 44 + 0.161;
+
+/** A fresh state: all vehicles standing, slack as the model sets it, brakes as given. */
+export function createState(m: TrainModel, opts: { trackEnergy?: boolean } = {}): DynamicsState {
+  const n = m.n;
+  const nc = Math.max(0, n - 1);
+  const s: DynamicsState = {
+    t: 0,
+    x: new Float64Array(n),
+    v: new Float64Array(n),
+    acc: new Float64Array(n),
+    seg: new Int32Array(n),
+    gearF: new Float64Array(nc),
+    gearDefl: new Float64Array(nc),
+    couplerF: new Float64Array(nc),
+    engaged: new Int8Array(nc),
+    tractionN: new Float64Array(n),
+    brakeN: new Float64Array(n),
+    notch: new Int32Array(m.nl),
+    effortN: new Float64Array(m.nl),
+    targetN: new Float64Array(m.nl),
+    peakTensionN: new Float64Array(nc),
+    peakTensionT: new Float64Array(nc),
+    peakCompressionN: new Float64Array(nc),
+    peakCompressionT: new Float64Array(nc),
+    intervalMaxTensionN: 0,
+    intervalMaxCompressionN: 0,
+    slipCount: new Int32Array(m.nl),
+    lastSlipT: new Float64Array(m.nl).fill(-Infinity),
+    takeUp: {
+      count: 0,
+      timeS: new Float64Array(TAKE_UP_CAPACITY),
+      coupling: new Int32Array(TAKE_UP_CAPACITY),
+      relSpeedMps: new Float64Array(TAKE_UP_CAPACITY),
+      maxRunOutMps: 0,
+      maxRunInMps: 0,
+    },
+    energy: null,
+  };
+  for (let i = 0; i < n; i++) s.seg[i] = segmentOf(m, m.chainage0M[i]!, 0);
+  // Couplings that stand exactly at the edge of their slack start engaged with no load.
+  for (let j = 0; j < nc; j++) {
+    const ext = m.ext0M[j]!;
+    s.engaged[j] = ext > m.halfSlackM[j]! - 1e-12 ? 1 : ext < -m.halfSlackM[j]! + 1e-12 ? -1 : 0;
+  }
+  if (opts.trackEnergy) {
+    s.energy = {
+      traction: 0,
+      resistance: 0,
+      brakes: 0,
+      grade: 0,
+      coupling: 0,
+      lastX: new Float64Array(n),
+      lastTraction: new Float64Array(n),
+      lastResist: new Float64Array(n),
+      lastBrake: new Float64Array(n),
+      lastGrade: new Float64Array(n),
+      lastExt: Float64Array.from(m.ext0M),
+      lastCoupler: new Float64Array(nc),
+    };
+  }
+  evaluate(m, s, 0);
+  return s;
+}
+
+function segmentOf(m: TrainModel, chainage: number, guess: number): number {
+  let k = guess;
+  while (chainage >= m.segEndM[k]!) k++;
+  while (chainage < m.segStartM[k]!) k--;
+  return k;
+}
+
+/** Advance the state by dt seconds (kick–drift–kick). Notches and brake capacities are read from the state. */
+export function step(m: TrainModel, s: DynamicsState, dt: number): void {
+  const h = 0.5 * dt;
+  const n = m.n;
+  const x = s.x;
+  const v = s.v;
+  const acc = s.acc;
+  // First half-kick fused with the drift.
+  for (let i = 0; i < n; i++) {
+    let vi = v[i]!;
+    const ai = acc[i]!;
+    if (ai !== 0) {
+      const vn = vi + ai * h;
+      // A vehicle whose speed would change sign stops; the next evaluation decides whether it sticks.
+      vi = (vi > 0 && vn < 0) || (vi < 0 && vn > 0) ? 0 : vn;
+      v[i] = vi;
+    }
+    x[i]! += vi * dt;
+  }
+  s.t += dt;
+  evaluate(m, s, dt, h);
+}
+
+/**
+ * Evaluate coupler forces, traction and accelerations at the current positions and speeds. `dt` is the
+ * time since the previous evaluation (for the effort lag); `kickH` > 0 also applies the closing half-kick.
+ */
+export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0): void {
+  const n = m.n;
+  const x = s.x;
+  const v = s.v;
+  const t = s.t;
+  const F = s.couplerF;
+  let maxT = s.intervalMaxTensionN;
+  let maxC = s.intervalMaxCompressionN;
+
+  // Couplings.
+  const ext0 = m.ext0M;
+  const halfSlack = m.halfSlackM;
+  const gearF = s.gearF;
+  const gearDefl = s.gearDefl;
+  const engaged = s.engaged;
+  const transK = m.transitionK;
+  const unloadR = m.unloadRatio;
+  const damp = m.dampingC;
+  const peakT = s.peakTensionN;
+  const peakC = s.peakCompressionN;
+  for (let j = 0; j < n - 1; j++) {
+    const ext = ext0[j]! + x[j]! - x[j + 1]!;
+    const hs = halfSlack[j]!;
+    const w = v[j]! - v[j + 1]!;
+    let f = 0;
+    if (ext > hs) {
+      if (engaged[j] !== 1) engage(s, j, 1, w, t);
+      const e = ext - hs;
+      const travel = m.draftTravelM[j]!;
+      let xi = e / travel;
+      if (xi > 1) xi = 1;
+      const lin = m.draftLinear[j]!;
+      const load = m.draftRatedN[j]! * xi * (lin + (1 - lin) * xi);
+      let g = gearF[j]! + transK[j]! * (e - gearDefl[j]!);
+      if (g > load) g = load;
+      else {
+        const unload = load * unloadR[j]!;
+        if (g < unload) g = unload;
+      }
+      gearF[j] = g;
+      gearDefl[j] = e;
+      f = g + damp[j]! * w;
+      if (e > travel) f += m.endStopK[j]! * (e - travel);
+      if (f < 0) f = 0;
+    } else if (ext < -hs) {
+      if (engaged[j] !== -1) engage(s, j, -1, w, t);
+      const e = -ext - hs;
+      const travel = m.buffTravelM[j]!;
+      let xi = e / travel;
+      if (xi > 1) xi = 1;
+      const lin = m.buffLinear[j]!;
+      const load = m.buffRatedN[j]! * xi * (lin + (1 - lin) * xi);
+      let g = gearF[j]! + transK[j]! * (e - gearDefl[j]!);
+      if (g > load) g = load;
+      else {
+        const unload = load * unloadR[j]!;
+        if (g < unload) g = unload;
+      }
+      gearF[j] = g;
+      gearDefl[j] = e;
+      f = -g + damp[j]! * w;
+      if (e > travel) f -= m.endStopK[j]! * (e - travel);
+      if (f > 0) f = 0;
+    } else if (engaged[j] !== 0) {
+      engaged[j] = 0;
+      gearF[j] = 0;
+      gearDefl[j] = 0;
+    }
+    F[j] = f;
+    if (f > 0) {
+      if (f > maxT) maxT = f;
+      if (f > peakT[j]!) {
+        peakT[j] = f;
+        s.peakTensionT[j] = t;
+      }
+    } else if (f < 0) {
+      if (-f > maxC) maxC = -f;
+      if (-f > peakC[j]!) {
+        peakC[j] = -f;
+        s.peakCompressionT[j] = t;
+      }
+    }
+  }
+  s.intervalMaxTensionN = maxT;
+  s.intervalMaxCompressionN = maxC;
+
+  // Traction: effort follows the notch with a lag, limited by adhesion; a slip cuts it back.
+  const stride = m.notchStride;
+  const rise = dt > 0 ? 1 - Math.exp(-dt / m.effortRiseS) : 0;
+  const fall = dt > 0 ? 1 - Math.exp(-dt / m.effortFallS) : 0;
+  for (let k = 0; k < m.nl; k++) {
+    const i = m.locoVehicle[k]!;
+    const sp = Math.abs(v[i]!);
+    const notch = s.notch[k]!;
+    let target = 0;
+    if (notch > 0) {
+      const cur = m.notchCurrentN[k * stride + notch]!;
+      const pow = m.notchPowerW[k * stride + notch]! / (sp > MIN_POWER_SPEED ? sp : MIN_POWER_SPEED);
+      target = cur < pow ? cur : pow;
+    }
+    s.targetN[k] = target;
+    let e = s.effortN[k]!;
+    e += (target - e) * (target > e ? rise : fall);
+    // Curtius–Kniffler shape scales the standstill adhesion with speed.
+    const limit = m.adhesiveWeightN[k]! * m.mu0[k]! * ((7.5 / (sp * 3.6 + 44) + 0.161) / CK0);
+    if (e > limit) {
+      s.slipCount[k]! += 1;
+      s.lastSlipT[k] = t;
+      e = m.slipCutFraction * limit;
+    }
+    s.effortN[k] = e;
+    s.tractionN[i] = e;
+  }
+
+  // Vehicles.
+  const fade = m.fadeSpeedMps;
+  const g = GRAVITY_MPS2;
+  const en = s.energy;
+  const chain0 = m.chainage0M;
+  const segEnd = m.segEndM;
+  const segStart = m.segStartM;
+  const segSin = m.segSin;
+  const segCurve = m.segCurveNPerKg;
+  const seg = s.seg;
+  const massA = m.massKg;
+  const dA = m.davisA;
+  const dB = m.davisB;
+  const dC = m.davisC;
+  const excess = m.breakawayExcessN;
+  const traction = s.tractionN;
+  const brakeA = s.brakeN;
+  const invM = m.invEffMass;
+  const acc = s.acc;
+  for (let i = 0; i < n; i++) {
+    const ch = chain0[i]! + x[i]!;
+    let k = seg[i]!;
+    if (ch >= segEnd[k]! || ch < segStart[k]!) {
+      k = segmentOf(m, ch, k);
+      seg[i] = k;
+    }
+    const mass = massA[i]!;
+    const grade = mass * g * segSin[k]!;
+    let fApp = traction[i]! - grade;
+    if (i > 0) fApp += F[i - 1]!;
+    if (i < n - 1) fApp -= F[i]!;
+    const vi = v[i]!;
+    const sp = vi < 0 ? -vi : vi;
+    let res = dA[i]! + (dB[i]! + dC[i]! * sp) * sp + mass * segCurve[k]!;
+    if (sp < fade) res += excess[i]! * (1 - sp / fade);
+    const brake = brakeA[i]!;
+    const hold = res + brake;
+    let a = 0;
+    let resisting = 0;
+    if (vi === 0) {
+      if (fApp > hold || fApp < -hold) {
+        resisting = fApp > 0 ? hold : -hold;
+        a = (fApp - resisting) * invM[i]!;
+      }
+    } else {
+      resisting = vi > 0 ? hold : -hold;
+      a = (fApp - resisting) * invM[i]!;
+    }
+    acc[i] = a;
+    if (kickH > 0 && a !== 0) {
+      const vn = vi + a * kickH;
+      v[i] = (vi > 0 && vn < 0) || (vi < 0 && vn > 0) ? 0 : vn;
+    }
+    if (en !== null) account(en, i, x[i]!, traction[i]!, resisting, res, brake, grade);
+  }
+  if (en !== null) {
+    for (let j = 0; j < n - 1; j++) {
+      const ext = m.ext0M[j]! + x[j]! - x[j + 1]!;
+      en.coupling += 0.5 * (en.lastCoupler[j]! + F[j]!) * (ext - en.lastExt[j]!);
+      en.lastExt[j] = ext;
+      en.lastCoupler[j] = F[j]!;
+    }
+  }
+}
+
+function engage(s: DynamicsState, j: number, side: 1 | -1, relSpeed: number, t: number): void {
+  s.engaged[j] = side;
+  s.gearF[j] = 0;
+  s.gearDefl[j] = 0;
+  const log = s.takeUp;
+  if (side === 1 && relSpeed > log.maxRunOutMps) log.maxRunOutMps = relSpeed;
+  if (side === -1 && -relSpeed > log.maxRunInMps) log.maxRunInMps = -relSpeed;
+  if (Math.abs(relSpeed) >= TAKE_UP_LOG_SPEED && log.count < TAKE_UP_CAPACITY) {
+    log.timeS[log.count] = t;
+    log.coupling[log.count] = j;
+    log.relSpeedMps[log.count] = relSpeed;
+    log.count++;
+  }
+}
+
+/** Trapezoidal work of each force over the displacement since the last evaluation. */
+function account(en: EnergyLedger, i: number, xi: number, traction: number, resisting: number, res: number, brake: number, grade: number): void {
+  const dx = xi - en.lastX[i]!;
+  en.traction += 0.5 * (en.lastTraction[i]! + traction) * dx;
+  en.grade += 0.5 * (en.lastGrade[i]! + grade) * dx;
+  // Split the resisting force between running resistance and brakes in proportion.
+  const hold = res + brake;
+  const r = hold > 0 ? (resisting * res) / hold : 0;
+  const b = hold > 0 ? (resisting * brake) / hold : 0;
+  en.resistance += 0.5 * (en.lastResist[i]! + r) * dx;
+  en.brakes += 0.5 * (en.lastBrake[i]! + b) * dx;
+  en.lastX[i] = xi;
+  en.lastTraction[i] = traction;
+  en.lastGrade[i] = grade;
+  en.lastResist[i] = r;
+  en.lastBrake[i] = b;
+}
+
+/** Kinetic energy including rotating mass, J. */
+export function kineticEnergyJ(m: TrainModel, s: DynamicsState): number {
+  let e = 0;
+  for (let i = 0; i < m.n; i++) e += 0.5 * m.effMassKg[i]! * s.v[i]! * s.v[i]!;
+  return e;
+}
+
+/** Set the brake holding capacities for time t from the release schedule. */
+export function applyBrakes(m: TrainModel, s: DynamicsState, trainReleaseS: number, locoReleaseS: number): void {
+  const t = s.t;
+  const ramp = m.brakeReleaseRampS;
+  for (let i = 0; i < m.n; i++) {
+    let cap = 0;
+    const tb = m.trainBrakeN[i]!;
+    if (tb > 0) {
+      const start = trainReleaseS + m.brakeReleaseDelayS[i]!;
+      cap += t <= start ? tb : t >= start + ramp ? 0 : tb * (1 - (t - start) / ramp);
+    }
+    const lb = m.locoBrakeN[i]!;
+    if (lb > 0) {
+      // The locomotive brake is eased off over a few seconds.
+      const lr = 3;
+      cap += t <= locoReleaseS ? lb : t >= locoReleaseS + lr ? 0 : lb * (1 - (t - locoReleaseS) / lr);
+    }
+    s.brakeN[i] = cap;
+  }
+}

@@ -1,0 +1,266 @@
+/**
+ * The train as the dynamics loop sees it: one mass per vehicle and one connection per coupling, all
+ * parameters flattened into Float64Arrays so the inner loop reads memory in order and allocates nothing.
+ */
+import { adhesionQuantile, standstillMedian } from "./adhesion.js";
+import { GRAVITY_MPS2 } from "./constants.js";
+import { buildConsist, type Consist } from "./consist.js";
+import type { CouplingSpec } from "./coupling.js";
+import { BREAKAWAY_FADE_SPEED_MPS, curveResistancePermille } from "./resistance.js";
+import { initialSlack } from "./slack.js";
+import type { LocomotiveSpec, SlackState, StartCase, TrackProfile } from "./types.js";
+
+export interface TrainModel {
+  /** Vehicles, head to tail. */
+  n: number;
+  massKg: Float64Array;
+  effMassKg: Float64Array;
+  invEffMass: Float64Array;
+  /** Davis terms R = a + b|v| + c v², N. */
+  davisA: Float64Array;
+  davisB: Float64Array;
+  davisC: Float64Array;
+  /** Breakaway in excess of the Davis constant term, fading out by `fadeSpeedMps`, N. */
+  breakawayExcessN: Float64Array;
+  fadeSpeedMps: number;
+  /** Chainage of each vehicle's centre when standing, m. */
+  chainage0M: Float64Array;
+  lengthM: Float64Array;
+
+  /** Couplings: `n − 1`; coupling j joins vehicles j and j + 1. */
+  halfSlackM: Float64Array;
+  /** Initial extension inside the slack: −half bunched, +half stretched, m. */
+  ext0M: Float64Array;
+  draftTravelM: Float64Array;
+  draftRatedN: Float64Array;
+  draftLinear: Float64Array;
+  buffTravelM: Float64Array;
+  buffRatedN: Float64Array;
+  buffLinear: Float64Array;
+  unloadRatio: Float64Array;
+  transitionK: Float64Array;
+  endStopK: Float64Array;
+  dampingC: Float64Array;
+
+  /** Powered units. */
+  nl: number;
+  locoVehicle: Int32Array;
+  locoSpecs: LocomotiveSpec[];
+  /** Highest notch of each unit. */
+  locoNotches: Int32Array;
+  /** Current-limited effort per notch, N: [k·stride + notch], notch 0 = idle. */
+  notchCurrentN: Float64Array;
+  /** Rail power per notch, W: [k·stride + notch]. */
+  notchPowerW: Float64Array;
+  notchStride: number;
+  /** u·m_adh·g of each unit, N: multiply by μ for the adhesion limit. */
+  adhesiveWeightN: Float64Array;
+  /** Adhesion coefficient at standstill this run assumes for each unit (sand included). */
+  mu0: Float64Array;
+  /** Time constants of the tractive-effort build-up and fall, s. */
+  effortRiseS: number;
+  effortFallS: number;
+  /** After a slip the protection cuts effort to this fraction of what the rails held, then reapplies. */
+  slipCutFraction: number;
+
+  /** Brake holding capacity when fully applied, N. */
+  trainBrakeN: Float64Array;
+  locoBrakeN: Float64Array;
+  /** Train-brake release: delay from the head to each vehicle, s. */
+  brakeReleaseDelayS: Float64Array;
+  brakeReleaseRampS: number;
+
+  /** Track: segment bounds, sin θ and curve resistance per kg (N/kg). */
+  segStartM: Float64Array;
+  segEndM: Float64Array;
+  segSin: Float64Array;
+  segCurveNPerKg: Float64Array;
+}
+
+/** Options for building a model from a case. */
+export interface ModelOptions {
+  /** Quantile of the adhesion spread this run assumes (0.5 = median; 0.1 = the 10 % worst). */
+  adhesionQuantile?: number;
+  /** Override the case's slack state. */
+  slackState?: SlackState;
+  effortRiseS?: number;
+  effortFallS?: number;
+}
+
+/** Effort build-up time constant: current settles within ≈ 3τ (common practice: ≥ 2–3 s between notches) [M]. */
+export const DEFAULT_EFFORT_RISE_S = 1.5;
+export const DEFAULT_EFFORT_FALL_S = 0.5;
+/** Share of the slipping effort the protection keeps before reapplying [M]. */
+export const DEFAULT_SLIP_CUT = 0.7;
+/** Brake holding capacity as a fraction of weight: train brake 10 %, locomotive brake 15 % [M]. */
+export const TRAIN_BRAKE_FRACTION = 0.1;
+export const LOCO_BRAKE_FRACTION = 0.15;
+/** A vehicle's brake releases over this time once the release reaches it, s [M]. */
+export const BRAKE_RELEASE_RAMP_S = 8;
+
+/**
+ * Time for the train-brake release to reach the rear: about 1–3 minutes for 100–150 wagons (PRACTICE.md,
+ * [M]); modelled as 10 s plus one second per 15 m of train.
+ */
+export function trainBrakeReleaseS(trainLengthM: number): number {
+  return 10 + trainLengthM / 15;
+}
+
+/** Build the dynamics model of a start case. */
+export function modelFromCase(c: StartCase, opts: ModelOptions = {}): TrainModel {
+  const consist = buildConsist(c);
+  const slack = initialSlack(consist, c.location.track, opts.slackState ?? c.train.slackState);
+  const q = opts.adhesionQuantile ?? 0.5;
+  const cond = c.adhesion[c.conditions.rail];
+  return modelFromConsist(consist, slack, c.location.track, {
+    muFor: (spec) => {
+      const median = standstillMedian(cond, c.conditions.sand && spec.sanders);
+      return q === 0.5 ? median : adhesionQuantile(median, cond.sigmaLn, q);
+    },
+    effortRiseS: opts.effortRiseS ?? DEFAULT_EFFORT_RISE_S,
+    effortFallS: opts.effortFallS ?? DEFAULT_EFFORT_FALL_S,
+  });
+}
+
+export interface ConsistModelOptions {
+  muFor: (spec: LocomotiveSpec) => number;
+  effortRiseS: number;
+  effortFallS: number;
+}
+
+/** Build the model from a placed consist, its initial slack signs and the track. */
+export function modelFromConsist(consist: Consist, slack: Int8Array, track: TrackProfile, o: ConsistModelOptions): TrainModel {
+  const vs = consist.vehicles;
+  const n = vs.length;
+  const nc = Math.max(0, n - 1);
+  const f = (len: number) => new Float64Array(len);
+  const m: TrainModel = {
+    n,
+    massKg: f(n),
+    effMassKg: f(n),
+    invEffMass: f(n),
+    davisA: f(n),
+    davisB: f(n),
+    davisC: f(n),
+    breakawayExcessN: f(n),
+    fadeSpeedMps: BREAKAWAY_FADE_SPEED_MPS,
+    chainage0M: f(n),
+    lengthM: f(n),
+    halfSlackM: f(nc),
+    ext0M: f(nc),
+    draftTravelM: f(nc),
+    draftRatedN: f(nc),
+    draftLinear: f(nc),
+    buffTravelM: f(nc),
+    buffRatedN: f(nc),
+    buffLinear: f(nc),
+    unloadRatio: f(nc),
+    transitionK: f(nc),
+    endStopK: f(nc),
+    dampingC: f(nc),
+    nl: consist.locoIndices.length,
+    locoVehicle: Int32Array.from(consist.locoIndices),
+    locoSpecs: consist.locoIndices.map((i) => vs[i]!.loco!),
+    locoNotches: new Int32Array(consist.locoIndices.length),
+    notchCurrentN: f(0),
+    notchPowerW: f(0),
+    notchStride: 0,
+    adhesiveWeightN: f(consist.locoIndices.length),
+    mu0: f(consist.locoIndices.length),
+    effortRiseS: o.effortRiseS,
+    effortFallS: o.effortFallS,
+    slipCutFraction: DEFAULT_SLIP_CUT,
+    trainBrakeN: f(n),
+    locoBrakeN: f(n),
+    brakeReleaseDelayS: f(n),
+    brakeReleaseRampS: BRAKE_RELEASE_RAMP_S,
+    segStartM: f(track.segments.length),
+    segEndM: f(track.segments.length),
+    segSin: f(track.segments.length),
+    segCurveNPerKg: f(track.segments.length),
+  };
+  const releaseS = trainBrakeReleaseS(consist.lengthM);
+  const frontM = vs[0] ? vs[0].centreChainageM + vs[0].lengthM / 2 : 0;
+  vs.forEach((v, i) => {
+    m.massKg[i] = v.massKg;
+    m.effMassKg[i] = v.effectiveMassKg;
+    m.invEffMass[i] = 1 / v.effectiveMassKg;
+    m.davisA[i] = v.davis.aN;
+    m.davisB[i] = v.davis.bNsPerM;
+    m.davisC[i] = v.davis.cNs2PerM2;
+    m.breakawayExcessN[i] = Math.max(0, v.breakawayN - v.davis.aN);
+    m.chainage0M[i] = v.centreChainageM;
+    m.lengthM[i] = v.lengthM;
+    const weight = v.massKg * GRAVITY_MPS2;
+    if (v.kind === "locomotive") m.locoBrakeN[i] = LOCO_BRAKE_FRACTION * weight;
+    else m.trainBrakeN[i] = TRAIN_BRAKE_FRACTION * weight;
+    // The release travels from the head: 0 s at the front, `releaseS` at the rear.
+    m.brakeReleaseDelayS[i] = consist.lengthM > 0 ? ((frontM - v.centreChainageM) / consist.lengthM) * (releaseS - BRAKE_RELEASE_RAMP_S) : 0;
+  });
+  consist.couplings.forEach((cp: CouplingSpec, j) => {
+    m.halfSlackM[j] = cp.freeSlackM / 2;
+    m.ext0M[j] = (slack[j]! > 0 ? 1 : -1) * (cp.freeSlackM / 2);
+    m.draftTravelM[j] = cp.draft.travelM;
+    m.draftRatedN[j] = cp.draft.forceAtTravelN;
+    m.draftLinear[j] = cp.draft.linearShare;
+    m.buffTravelM[j] = cp.buff.travelM;
+    m.buffRatedN[j] = cp.buff.forceAtTravelN;
+    m.buffLinear[j] = cp.buff.linearShare;
+    m.unloadRatio[j] = cp.unloadingRatio;
+    m.transitionK[j] = cp.transitionStiffnessNPerM;
+    m.endStopK[j] = cp.endStopStiffnessNPerM;
+    m.dampingC[j] = cp.dampingNsPerM;
+  });
+  const stride = 1 + Math.max(0, ...m.locoSpecs.map((s) => s.notchPower.length));
+  m.notchStride = stride;
+  m.notchCurrentN = f(stride * m.nl);
+  m.notchPowerW = f(stride * m.nl);
+  m.locoSpecs.forEach((s, k) => {
+    m.locoNotches[k] = s.notchPower.length;
+    for (let notch = 1; notch < stride; notch++) {
+      const idx = Math.min(notch, s.notchPower.length) - 1;
+      m.notchCurrentN[k * stride + notch] = s.startingTractiveEffortN * s.notchStartingEffort[idx]!;
+      m.notchPowerW[k * stride + notch] = s.railPowerW * s.notchPower[idx]!;
+    }
+    m.adhesiveWeightN[k] = s.adhesionUtilisation * s.adhesiveMassKg * GRAVITY_MPS2;
+    m.mu0[k] = o.muFor(s);
+  });
+  track.segments.forEach((s, k) => {
+    m.segStartM[k] = k === 0 ? -Infinity : s.startM;
+    m.segEndM[k] = k === track.segments.length - 1 ? Infinity : s.startM + s.lengthM;
+    m.segSin[k] = Math.sin(Math.atan(s.gradePermille / 1000));
+    m.segCurveNPerKg[k] = (curveResistancePermille(s.curveRadiusM) / 1000) * GRAVITY_MPS2;
+  });
+  return m;
+}
+
+/**
+ * Largest stable fixed step for the explicit integrator, s. For a chain of masses the highest natural
+ * frequency is at most ω = 2·√(k_max/m_min) (Gershgorin bound on K/M); leapfrog is stable for ω·dt < 2.
+ * We take `margin` (default 0.5) of that limit for stability, and never more than ACCURACY_STEP_S: slack
+ * engagement is resolved to within one step, a first-order error in the coupler-force history, and 3 ms
+ * keeps it near 1 % of peak against a high-order adaptive integrator (tests/core/dynamics.reference.test.ts).
+ */
+export function stableTimeStep(m: TrainModel, margin = 0.5): number {
+  let kMax = 0;
+  let cMax = 0;
+  for (let j = 0; j < m.halfSlackM.length; j++) {
+    const gearK = Math.max(
+      ((2 - m.draftLinear[j]!) * m.draftRatedN[j]!) / m.draftTravelM[j]!,
+      ((2 - m.buffLinear[j]!) * m.buffRatedN[j]!) / m.buffTravelM[j]!,
+    );
+    kMax = Math.max(kMax, gearK, m.transitionK[j]!, m.endStopK[j]!);
+    cMax = Math.max(cMax, m.dampingC[j]!);
+  }
+  let mMin = Infinity;
+  for (let i = 0; i < m.n; i++) mMin = Math.min(mMin, m.effMassKg[i]!);
+  if (kMax === 0) return ACCURACY_STEP_S;
+  const omega = 2 * Math.sqrt(kMax / mMin);
+  // Damping shrinks the stable step: ω·dt < 2(√(1+ζ²) − ζ), ζ = c_eff/(2 m ω) with c_eff ≤ 4c.
+  const zeta = (4 * cMax) / (2 * mMin * omega);
+  const limit = (2 * (Math.sqrt(1 + zeta * zeta) - zeta)) / omega;
+  return Math.min(ACCURACY_STEP_S, margin * limit);
+}
+
+/** Largest step the accuracy of slack engagement allows, s. */
+export const ACCURACY_STEP_S = 0.003;
