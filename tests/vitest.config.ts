@@ -15,7 +15,6 @@ export default defineConfig({
   test: {
     projects: [
       {
-        extends: false,
         test: {
           name: "unit",
           root,
@@ -25,7 +24,6 @@ export default defineConfig({
         },
       },
       {
-        extends: false,
         plugins: [solid()],
         resolve: { conditions: ["development", "browser"] },
         test: {
@@ -38,7 +36,6 @@ export default defineConfig({
         },
       },
       {
-        extends: false,
         test: {
           name: "e2e",
           root,

@@ -28,4 +28,18 @@ describe("unit conversions against NIST SP 811 factors", () => {
     expect(convertTemperature(-40, "C", "F")).toBe(-40);
     expect(convertTemperature(100, "C", "F")).toBe(212);
   });
+  it("inch, mile, square foot, kip and horsepower", () => {
+    // NIST SP 811 Appendix B.8: inch = 2.54E-02 m (exact); mile (international) = 1.609344E+03 m (exact);
+    // square foot = 9.290304E-02 m² (exact); kip (1000 lbf) = 4.448222E+03 N; horsepower (550 ft·lbf/s) = 7.456999E+02 W.
+    expect(convert("length", 1, "in", "m")).toBeCloseTo(0.0254, 15);
+    expect(convert("length", 1, "mi", "m")).toBeCloseTo(1609.344, 9);
+    expect(convert("area", 1, "ft2", "m2")).toBeCloseTo(0.09290304, 15);
+    expect(convert("force", 1, "klbf", "N")).toBeCloseTo(4448.222, 3);
+    expect(convert("power", 1, "hp", "W")).toBeCloseTo(745.6999, 4);
+  });
+  it("specific resistance: 1 lb per short ton is g/2 N per tonne", () => {
+    // [D] from the NIST factors: 1 lbf = 0.45359237 kg × g_n, 1 short ton = 2000 × 0.45359237 kg.
+    expect(convert("specificForce", 1, "lbfPerShortTon", "NPerT")).toBeCloseTo(9.80665 / 2, 12);
+    expect(convert("grade", 10, "permille", "percent")).toBeCloseTo(1, 15);
+  });
 });

@@ -1,0 +1,16 @@
+/** Run the command line in-process with its output captured (fast: no process, no loader). */
+import { main, type Output } from "../../src/cli/main.js";
+
+export interface Run {
+  code: number;
+  stdout: string;
+  stderr: string;
+}
+
+export async function taut(...argv: string[]): Promise<Run> {
+  const out: string[] = [];
+  const err: string[] = [];
+  const io: Output = { out: (t) => out.push(t), err: (t) => err.push(t) };
+  const code = await main(argv, io);
+  return { code, stdout: out.join("\n"), stderr: err.join("\n") };
+}
