@@ -17,3 +17,8 @@ export * from "./rating.js";
 export * from "./cautions.js";
 export * from "./planner/index.js";
 export * from "./loadTable.js";
+export * from "./slip.js";
+export * from "./runner.js";
+export * from "./trainModel.js";
+export * from "./dynamics.js";
+export * from "./simulate.js";

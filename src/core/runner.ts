@@ -1,0 +1,368 @@
+/**
+ * A run of the dynamics model that can be advanced, observed and cloned: the state plus the brake
+ * schedule and the running records (when each vehicle first moved, slips, a decimated series).
+ * `simulate` drives one run to the end; the planner clones runs to try alternatives from a shared start.
+ */
+import { adhesionSpeedFactor, slipRisk } from "./adhesion.js";
+import { applyBrakes, createState, evaluate, step, type DynamicsState } from "./dynamics.js";
+import { stableTimeStep, type TrainModel } from "./trainModel.js";
+
+/** What a controller (a driver, or the planner's policy) can observe. */
+export interface Observation {
+  timeS: number;
+  leadSpeedMps: number;
+  leadTravelM: number;
+  /** Travel of the last vehicle, m. */
+  tailTravelM: number;
+  tailSpeedMps: number;
+  /** Every vehicle has moved forward since the start. */
+  allMoving: boolean;
+  /** Σ effort transmitted by all units and Σ of what their notches ask for at this speed, N. */
+  effortN: number;
+  effortTargetN: number;
+  /** Effort within 5 % of what the notch asks for (traction current has settled). */
+  effortSettled: boolean;
+  /** A unit slipped since the previous observation. */
+  slipped: boolean;
+  notch: number;
+  /** Largest coupler tension and compression since the previous observation, N. */
+  maxTensionN: number;
+  maxCompressionN: number;
+}
+
+export interface SlipEpisode {
+  unit: number;
+  startS: number;
+  endS: number;
+  /** Times the protection cut in during the episode. */
+  cuts: number;
+  speedMps: number;
+}
+
+export interface SeriesBuffer {
+  n: number;
+  timeS: Float64Array;
+  leadSpeedMps: Float64Array;
+  tailSpeedMps: Float64Array;
+  notch: Float64Array;
+  leadTravelM: Float64Array;
+  maxTensionN: Float64Array;
+  maxCompressionN: Float64Array;
+  effortN: Float64Array;
+}
+
+export interface BrakeSchedule {
+  /** When the train brake release starts at the head, s. */
+  trainBrakeReleaseS: number;
+  /** When the locomotive brake is eased off, s. */
+  locoBrakeReleaseS: number;
+}
+
+/** A vehicle counts as moving forward above this speed, m/s. */
+export const MOVING_MPS = 0.01;
+/** Slips closer together than this belong to one episode, s. */
+const SLIP_EPISODE_GAP_S = 3;
+/** Time the locomotive brake takes to ease off, s (matches `applyBrakes`). */
+const LOCO_BRAKE_EASE_S = 3;
+
+export interface RunOptions {
+  dt?: number;
+  controlIntervalS?: number;
+  seriesIntervalS?: number;
+  trackEnergy?: boolean;
+}
+
+export class Run {
+  readonly dt: number;
+  readonly controlIntervalS: number;
+  readonly seriesEvery: number;
+  lead: number;
+  brakes: BrakeSchedule;
+  brakesDoneS: number;
+  started: Uint8Array;
+  startedCount = 0;
+  lastVehicleMovesS: number | null = null;
+  locoTravelToStretchM: number | null = null;
+  episodes: SlipEpisode[] = [];
+  private lastSlipCount: Int32Array;
+  private openEpisode: Array<SlipEpisode | null>;
+  series: SeriesBuffer;
+  private stepsSinceSeries = 0;
+  private seriesMaxT = 0;
+  private seriesMaxC = 0;
+  /** Steps actually integrated (quiescent intervals are skipped in one evaluation). */
+  steps = 0;
+
+  constructor(
+    readonly m: TrainModel,
+    public s: DynamicsState,
+    brakes: BrakeSchedule,
+    opts: RunOptions = {},
+  ) {
+    this.dt = opts.dt ?? stableTimeStep(m);
+    this.controlIntervalS = opts.controlIntervalS ?? 0.1;
+    this.seriesEvery = Math.max(1, Math.round((opts.seriesIntervalS ?? 0.5) / this.dt));
+    this.lead = m.nl > 0 ? m.locoVehicle[0]! : 0;
+    this.brakes = brakes;
+    this.brakesDoneS = brakesEnd(m, brakes);
+    this.started = new Uint8Array(m.n);
+    this.lastSlipCount = new Int32Array(m.nl);
+    this.openEpisode = Array.from({ length: m.nl }, () => null);
+    this.series = emptySeries(256);
+    applyBrakes(m, s, brakes.trainBrakeReleaseS, brakes.locoBrakeReleaseS);
+    evaluate(m, s, 0);
+  }
+
+  /** A fresh run of the model from standing. */
+  static start(m: TrainModel, brakes: BrakeSchedule, opts: RunOptions = {}): Run {
+    const r = new Run(m, createState(m, opts.trackEnergy ? { trackEnergy: true } : {}), brakes, opts);
+    r.record();
+    return r;
+  }
+
+  /** Change when the locomotive brake comes off (it must not be in the past). */
+  setLocoBrakeRelease(atS: number): void {
+    this.brakes = { ...this.brakes, locoBrakeReleaseS: atS };
+    this.brakesDoneS = brakesEnd(this.m, this.brakes);
+  }
+
+  setNotch(notch: number): void {
+    const max = this.m.notchStride - 1;
+    this.s.notch.fill(notch < 0 ? 0 : notch > max ? max : Math.round(notch));
+  }
+
+  get notch(): number {
+    return this.s.notch[0] ?? 0;
+  }
+
+  /** Advance by one control interval: integrate, or skip at once when nothing can move. */
+  advanceInterval(): void {
+    const m = this.m;
+    const s = this.s;
+    const steps = Math.max(1, Math.round(this.controlIntervalS / this.dt));
+    if (this.quiescent()) {
+      // Everything stands and is held: only brakes and the effort lag change. One evaluation over the
+      // interval finds the moment (to within the interval) when something breaks away.
+      const span = steps * this.dt;
+      s.t += span;
+      if (s.t <= this.brakesDoneS + span) applyBrakes(m, s, this.brakes.trainBrakeReleaseS, this.brakes.locoBrakeReleaseS);
+      evaluate(m, s, span);
+      this.afterStep(steps);
+      return;
+    }
+    for (let k = 0; k < steps; k++) {
+      if (s.t <= this.brakesDoneS) applyBrakes(m, s, this.brakes.trainBrakeReleaseS, this.brakes.locoBrakeReleaseS);
+      step(m, s, this.dt);
+      this.steps++;
+      this.afterStep(1);
+    }
+  }
+
+  /** Nothing moves, nothing accelerates, the effort is not changing. */
+  private quiescent(): boolean {
+    const s = this.s;
+    for (let i = 0; i < this.m.n; i++) if (s.v[i] !== 0 || s.acc[i] !== 0) return false;
+    for (let k = 0; k < this.m.nl; k++) if (Math.abs(s.targetN[k]! - s.effortN[k]!) > 1) return false;
+    return true;
+  }
+
+  private afterStep(count: number): void {
+    const s = this.s;
+    if (s.intervalMaxTensionN > this.seriesMaxT) this.seriesMaxT = s.intervalMaxTensionN;
+    if (s.intervalMaxCompressionN > this.seriesMaxC) this.seriesMaxC = s.intervalMaxCompressionN;
+    if (this.startedCount < this.m.n) {
+      for (let i = 0; i < this.m.n; i++) {
+        if (this.started[i] === 0 && s.v[i]! > MOVING_MPS) {
+          this.started[i] = 1;
+          this.startedCount++;
+        }
+      }
+      if (this.startedCount === this.m.n) {
+        this.lastVehicleMovesS = s.t;
+        this.locoTravelToStretchM = s.x[this.lead]!;
+      }
+    }
+    this.stepsSinceSeries += count;
+    if (this.stepsSinceSeries >= this.seriesEvery) {
+      this.stepsSinceSeries = 0;
+      this.record();
+    }
+  }
+
+  /** Append a sample to the series. */
+  record(): void {
+    const s = this.s;
+    let b = this.series;
+    if (b.n === b.timeS.length) b = this.series = growSeries(b);
+    const k = b.n++;
+    b.timeS[k] = s.t;
+    b.leadSpeedMps[k] = s.v[this.lead]!;
+    b.tailSpeedMps[k] = s.v[this.m.n - 1]!;
+    b.notch[k] = s.notch[0] ?? 0;
+    b.leadTravelM[k] = s.x[this.lead]!;
+    b.maxTensionN[k] = this.seriesMaxT;
+    b.maxCompressionN[k] = this.seriesMaxC;
+    let e = 0;
+    for (let u = 0; u < this.m.nl; u++) e += s.effortN[u]!;
+    b.effortN[k] = e;
+    this.seriesMaxT = 0;
+    this.seriesMaxC = 0;
+  }
+
+  /** Observe, resetting the interval maxima and updating slip episodes. */
+  observe(): Observation {
+    const m = this.m;
+    const s = this.s;
+    let effort = 0;
+    let target = 0;
+    let slipped = false;
+    for (let k = 0; k < m.nl; k++) {
+      effort += s.effortN[k]!;
+      target += s.targetN[k]!;
+      const c = s.slipCount[k]!;
+      if (c > this.lastSlipCount[k]!) {
+        slipped = true;
+        const ep = this.openEpisode[k];
+        if (ep && s.t - ep.endS <= SLIP_EPISODE_GAP_S) {
+          ep.endS = s.t;
+          ep.cuts += c - this.lastSlipCount[k]!;
+        } else {
+          const fresh: SlipEpisode = { unit: k, startS: s.lastSlipT[k]!, endS: s.t, cuts: c - this.lastSlipCount[k]!, speedMps: Math.abs(s.v[m.locoVehicle[k]!]!) };
+          this.episodes.push(fresh);
+          this.openEpisode[k] = fresh;
+        }
+        this.lastSlipCount[k] = c;
+      }
+    }
+    const obs: Observation = {
+      timeS: s.t,
+      leadSpeedMps: s.v[this.lead]!,
+      leadTravelM: s.x[this.lead]!,
+      tailTravelM: s.x[m.n - 1]!,
+      tailSpeedMps: s.v[m.n - 1]!,
+      allMoving: this.startedCount === m.n,
+      effortN: effort,
+      effortTargetN: target,
+      effortSettled: Math.abs(target - effort) <= 0.05 * Math.max(target, 1),
+      slipped,
+      notch: s.notch[0] ?? 0,
+      maxTensionN: s.intervalMaxTensionN,
+      maxCompressionN: s.intervalMaxCompressionN,
+    };
+    s.intervalMaxTensionN = 0;
+    s.intervalMaxCompressionN = 0;
+    return obs;
+  }
+
+  /** Slip risk of asking for `notch` at the lead unit's current speed, worst unit (median adhesion, condition's σ). */
+  slipRiskOfNotch(notch: number, speedMps: number, sigmaLn: number, medianMu0: Float64Array): number {
+    const m = this.m;
+    let worst = 0;
+    for (let k = 0; k < m.nl; k++) {
+      const demand = notchTargetN(m, k, notch, speedMps);
+      const mu = medianMu0[k]! * adhesionSpeedFactor(speedMps);
+      const r = slipRisk(demand / m.adhesiveWeightN[k]!, mu, sigmaLn);
+      if (r > worst) worst = r;
+    }
+    return worst;
+  }
+
+  /** A deep copy that can be advanced independently. */
+  clone(): Run {
+    const r = Object.create(Run.prototype) as Run;
+    Object.assign(r, this);
+    r.s = cloneState(this.s);
+    r.started = this.started.slice();
+    r.episodes = this.episodes.map((e) => ({ ...e }));
+    r.lastSlipCount = this.lastSlipCount.slice();
+    r.openEpisode = this.openEpisode.map((e) => (e ? (r.episodes[this.episodes.indexOf(e)] ?? null) : null));
+    r.series = copySeries(this.series);
+    return r;
+  }
+
+  /** The recorded series, trimmed. */
+  seriesView(): SeriesBuffer {
+    const b = this.series;
+    const t = (a: Float64Array) => a.slice(0, b.n);
+    return {
+      n: b.n,
+      timeS: t(b.timeS),
+      leadSpeedMps: t(b.leadSpeedMps),
+      tailSpeedMps: t(b.tailSpeedMps),
+      notch: t(b.notch),
+      leadTravelM: t(b.leadTravelM),
+      maxTensionN: t(b.maxTensionN),
+      maxCompressionN: t(b.maxCompressionN),
+      effortN: t(b.effortN),
+    };
+  }
+}
+
+/** Effort unit k asks for in `notch` at a speed, N (before adhesion). */
+export function notchTargetN(m: TrainModel, k: number, notch: number, speedMps: number): number {
+  if (notch <= 0) return 0;
+  const idx = k * m.notchStride + Math.min(notch, m.notchStride - 1);
+  const sp = Math.max(Math.abs(speedMps), 1e-3);
+  return Math.min(m.notchCurrentN[idx]!, m.notchPowerW[idx]! / sp);
+}
+
+function brakesEnd(m: TrainModel, b: BrakeSchedule): number {
+  let maxDelay = 0;
+  for (let i = 0; i < m.n; i++) if (m.brakeReleaseDelayS[i]! > maxDelay) maxDelay = m.brakeReleaseDelayS[i]!;
+  return Math.max(b.trainBrakeReleaseS + maxDelay + m.brakeReleaseRampS, b.locoBrakeReleaseS + LOCO_BRAKE_EASE_S);
+}
+
+function emptySeries(cap: number): SeriesBuffer {
+  const f = () => new Float64Array(cap);
+  return { n: 0, timeS: f(), leadSpeedMps: f(), tailSpeedMps: f(), notch: f(), leadTravelM: f(), maxTensionN: f(), maxCompressionN: f(), effortN: f() };
+}
+
+function growSeries(b: SeriesBuffer): SeriesBuffer {
+  const next = emptySeries(b.timeS.length * 2);
+  next.n = b.n;
+  for (const key of ["timeS", "leadSpeedMps", "tailSpeedMps", "notch", "leadTravelM", "maxTensionN", "maxCompressionN", "effortN"] as const) next[key].set(b[key]);
+  return next;
+}
+
+function copySeries(b: SeriesBuffer): SeriesBuffer {
+  return {
+    n: b.n,
+    timeS: b.timeS.slice(),
+    leadSpeedMps: b.leadSpeedMps.slice(),
+    tailSpeedMps: b.tailSpeedMps.slice(),
+    notch: b.notch.slice(),
+    leadTravelM: b.leadTravelM.slice(),
+    maxTensionN: b.maxTensionN.slice(),
+    maxCompressionN: b.maxCompressionN.slice(),
+    effortN: b.effortN.slice(),
+  };
+}
+
+/** Deep copy of a dynamics state. */
+export function cloneState(s: DynamicsState): DynamicsState {
+  const copy: DynamicsState = { ...s };
+  for (const key of Object.keys(s) as Array<keyof DynamicsState>) {
+    const v = s[key];
+    if (ArrayBuffer.isView(v)) (copy as unknown as Record<string, unknown>)[key] = (v as Float64Array).slice();
+  }
+  copy.takeUp = {
+    ...s.takeUp,
+    timeS: s.takeUp.timeS.slice(),
+    coupling: s.takeUp.coupling.slice(),
+    relSpeedMps: s.takeUp.relSpeedMps.slice(),
+  };
+  if (s.energy) {
+    const e = s.energy;
+    copy.energy = {
+      ...e,
+      lastX: e.lastX.slice(),
+      lastTraction: e.lastTraction.slice(),
+      lastResist: e.lastResist.slice(),
+      lastBrake: e.lastBrake.slice(),
+      lastGrade: e.lastGrade.slice(),
+      lastExt: e.lastExt.slice(),
+      lastCoupler: e.lastCoupler.slice(),
+    };
+  }
+  return copy;
+}
