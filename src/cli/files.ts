@@ -6,6 +6,7 @@ import { withLocations, type Library } from "../profiles/library.js";
 import type { StartCase } from "../core/types.js";
 import { InputError } from "./errors.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
+import { readNotesText } from "../profiles/notes.js";
 
 /** Read a file as text; a missing or unreadable file is bad input. */
 export function readText(path: string): string {
@@ -29,11 +30,12 @@ export function library(extraNotes: LocationNoteFile[] = []): Library {
   return withLocations(builtinLibrary(), extraNotes);
 }
 
-/** Read a start case and resolve it into the core's form. */
-export function readStartCase(path: string, lib: Library): { c: StartCase; raw: Record<string, unknown> } {
+/** Read a start case and resolve it into the core's form; `location` (a note id) replaces the case's location. */
+export function readStartCase(path: string, lib: Library, overrides: { location?: string } = {}): { c: StartCase; raw: Record<string, unknown> } {
   const raw = readJson(path);
   const kind = fileKind(raw);
   if (kind !== undefined && kind !== "taut/start-case@1") throw new InputError(`${path}: this is a ${kind} file; a start case (taut/start-case@1) is needed here`);
+  if (overrides.location !== undefined && raw && typeof raw === "object" && !Array.isArray(raw)) (raw as Record<string, unknown>).location = overrides.location;
   const r = parseStartCase(raw, lib);
   if (!r.ok) throw new InputError(`${path}: the start case is not valid`, r.issues);
   return { c: r.value, raw: raw as Record<string, unknown> };
@@ -45,4 +47,24 @@ export function readLocationNote(path: string): LocationNoteFile {
   const r = parseLocationNote(raw);
   if (!r.ok) throw new InputError(`${path}: the location note is not valid`, r.issues);
   return r.value;
+}
+
+/**
+ * Read location notes from files, each a single note (taut/location@1) or a bundle
+ * (taut/notes-bundle@1); a note id given twice across files is bad input.
+ */
+export function readNotesFiles(paths: readonly string[]): LocationNoteFile[] {
+  const notes: LocationNoteFile[] = [];
+  const from = new Map<string, string>();
+  for (const path of paths) {
+    const r = readNotesText(readText(path));
+    if (!r.ok) throw new InputError(`${path}: ${r.message.replace(/ Nothing was changed\.$/, "")}`, r.issues);
+    for (const n of r.notes) {
+      const earlier = from.get(n.id);
+      if (earlier !== undefined) throw new InputError(`${path}: the location note "${n.id}" is also in ${earlier}; give each note once`);
+      from.set(n.id, path);
+      notes.push(n);
+    }
+  }
+  return notes;
 }

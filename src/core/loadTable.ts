@@ -3,7 +3,7 @@
  * rail condition, with and without sand. Computed by bisection over the same verdict the planner gives,
  * so a mass just below a table value starts and one just above does not.
  */
-import { planStart } from "./planner/index.js";
+import { plannerStarts } from "./planner/index.js";
 import { largestStartableMassKg } from "./startableMass.js";
 import { RAIL_CONDITIONS, type RailCondition, type StartCase } from "./types.js";
 
@@ -13,8 +13,6 @@ export interface LoadTableRow {
   maxTrailingMassKg: number;
 }
 
-/** The planner's verdict as a yes/no: does this case start? */
-export const plannerStarts = (c: StartCase): boolean => planStart(c, { skipMassSearch: true }).verdict === "starts";
 
 /** Every rail condition, without then with sand. `base` supplies location, locomotives and the train make-up. */
 export function loadTable(base: StartCase, starts: (c: StartCase) => boolean = plannerStarts): LoadTableRow[] {

@@ -14,6 +14,8 @@ export interface MassSearchOptions {
   toleranceKg?: number;
   /** Never search above this, kg. */
   ceilingKg?: number;
+  /** A mass known not to be exceeded (e.g. the static limit): tried first, and the search stays below it. */
+  upperBoundKg?: number;
 }
 
 /**
@@ -25,10 +27,16 @@ export function largestStartableMassKg(c: StartCase, starts: (c: StartCase) => b
   const ceiling = opts.ceilingKg ?? 5e7;
   const floorKg = c.train.wagons * 1000; // one tonne per wagon: lighter is not a train
   const ok = (m: number): boolean => starts(withTrailingMass(c, m));
+  const bound = opts.upperBoundKg;
+  if (bound !== undefined) {
+    if (bound < floorKg) return 0;
+    // The bound itself usually holds (when the static limit is what binds): one evaluation then.
+    if (ok(bound)) return bound;
+  }
   if (!ok(floorKg)) return 0;
   let lo = floorKg;
-  let hi = Math.max(c.train.trailingMassKg, 2 * floorKg);
-  while (ok(hi)) {
+  let hi = bound ?? Math.max(c.train.trailingMassKg, 2 * floorKg);
+  while (bound === undefined && ok(hi)) {
     lo = hi;
     if (hi >= ceiling) return ceiling;
     hi = Math.min(ceiling, hi * 2);

@@ -3,6 +3,7 @@
  * field names, rounded for people and scripts. Add fields freely; never rename.
  */
 import { caseCautions, STANDARD_CAUTIONS } from "../core/cautions.js";
+import type { PlanResult, PlanStep } from "../core/planner/types.js";
 import type { StaticCheck } from "../core/staticCheck.js";
 import type { Reason, StartCase, Verdict } from "../core/types.js";
 
@@ -54,6 +55,12 @@ export interface PlanReport {
   maxStartableMass_t: number;
   assistance: AssistanceReport[];
   cautions: string[];
+  /** What to do if the wheels slip or the train stalls. */
+  ifWheelsSlip?: { protection: string[]; driver: string[]; stall: string[] };
+  /** The stretch as the dynamics run showed it. */
+  stretch?: { lastVehicleMoves_s: number | null; locoTravelToStretch_m: number | null; maxRunOut_kmh: number };
+  /** The verifying re-run with pessimistic adhesion. */
+  verification?: { adhesionQuantile: number; slipEvents: number; peakCouplerForce_kN: number; passed: boolean } | null;
 }
 
 /** Round to a number of decimals (for output only). */
@@ -93,8 +100,53 @@ export function staticReport(c: StartCase, s: StaticCheck, maxStartableMassKg: n
     steps: [],
     peakCouplerForce_kN: kN(s.peakTensionN),
     timeToTarget_s: null,
-    maxStartableMass_t: Math.floor(maxStartableMassKg / 1000),
+    maxStartableMass_t: Number.isFinite(maxStartableMassKg) ? Math.floor(maxStartableMassKg / 1000) : 0,
     assistance: [],
     cautions: [...STANDARD_CAUTIONS, ...caseCautions(c, s.resistance.totalN)],
   };
+}
+
+const kmh = (mps: number, d = 1): number => r(mps * 3.6, d);
+
+export function stepReport(s: PlanStep): StepReport {
+  return {
+    phase: s.phase,
+    notch: s.notch,
+    advanceWhen: { after_s: r(s.advanceWhen.afterS, 0), moved_m: r(s.advanceWhen.movedM, 1), speed_kmh: kmh(s.advanceWhen.speedMps), primary: s.advanceWhen.primary },
+    speed_kmh: kmh(s.speedMps),
+    tractiveEffort_kN: kN(s.tractiveEffortN, 0),
+    adhesionUse: r(s.adhesionUse, 3),
+    slipRisk: r(s.slipRisk, 3),
+    peakCouplerForce_kN: kN(s.peakCouplerForceN, 0),
+    fallbackNotch: s.fallbackNotch,
+    why: s.why,
+  };
+}
+
+/** The plan report (INTERFACE.md) from the planner's result. */
+export function planReport(c: StartCase, p: PlanResult, meta: PlanReport["case"] = {}): PlanReport {
+  const rep = staticReport(c, p.static, p.maxStartableMassKg, meta);
+  rep.verdict = p.verdict;
+  rep.reasons = p.reasons;
+  rep.margin = r(p.margin, 3);
+  rep.margins = { adhesion: r(p.margins.adhesion, 3), power: r(p.margins.power, 3), coupler: r(p.margins.coupler, 3), distance: r(p.margins.distance, 3) };
+  rep.steps = p.steps.map(stepReport);
+  rep.peakCouplerForce_kN = kN(p.peakCouplerForceN);
+  rep.timeToTarget_s = p.timeToTargetS === null ? null : r(p.timeToTargetS, 0);
+  rep.cautions = p.cautions;
+  rep.ifWheelsSlip = p.slipGuidance;
+  rep.stretch = {
+    lastVehicleMoves_s: p.stretch.lastVehicleMovesS === null ? null : r(p.stretch.lastVehicleMovesS, 1),
+    locoTravelToStretch_m: p.stretch.locoTravelToStretchM === null ? null : r(p.stretch.locoTravelToStretchM, 2),
+    maxRunOut_kmh: kmh(p.stretch.maxRunOutMps, 2),
+  };
+  rep.verification = p.verification
+    ? {
+        adhesionQuantile: r(p.verification.adhesionQuantile, 3),
+        slipEvents: p.verification.slipEpisodes,
+        peakCouplerForce_kN: kN(p.verification.peakCouplerForceN),
+        passed: !p.verification.slipped && !p.verification.overAllowance,
+      }
+    : null;
+  return rep;
 }

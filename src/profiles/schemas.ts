@@ -169,6 +169,18 @@ export const revisionSchema = z.object({
   change: z.string().check(z.minLength(1), z.maxLength(400)),
 });
 
+/**
+ * The train a note's drawing and load table are worked out for: a train preset (its wagons, length,
+ * slack), optionally with another locomotive profile or count at the head, and the air temperature.
+ */
+export const referenceTrainSchema = z.object({
+  train: id(),
+  locomotive: z.optional(id()),
+  count: z.optional(z.int().check(z.gte(1), z.lte(8))),
+  temperature_C: z.optional(z.number().check(z.gte(-60), z.lte(60))),
+});
+export type ReferenceTrainFile = z.infer<typeof referenceTrainSchema>;
+
 export const locationNoteSchema = z.object({
   schema: z.literal("taut/location@1"),
   id: id(),
@@ -176,6 +188,9 @@ export const locationNoteSchema = z.object({
   line: z.optional(z.string().check(z.maxLength(120))),
   direction: z.optional(z.string().check(z.maxLength(120))),
   illustrative: z.optional(z.boolean()),
+  /** Where the train stands, in the trainer's words (e.g. "front at the loop exit signal"). */
+  standing: z.optional(z.string().check(z.maxLength(400))),
+  referenceTrain: z.optional(referenceTrainSchema),
   segments: contiguousSegments(),
   frontAt_m: finite(),
   clearAhead_m: nonNegative(),

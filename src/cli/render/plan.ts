@@ -19,12 +19,17 @@ export function renderPlan(p: PlanReport): string {
     `Adhesion: μ ${num(p.adhesion.mu, 3)} median, ${num(p.adhesion.muDesign, 3)} at ${pct(p.adhesion.slipRiskThreshold)} slip risk → ${num(p.adhesion.maxTractiveEffort_kN)} kN; needed ${num(p.adhesion.requiredTractiveEffort_kN)} kN (slip risk ${pct(p.adhesion.slipRiskAtStart, 1)})`,
   );
   lines.push(`Largest trailing mass that starts here: ${num(p.maxStartableMass_t)} t`);
-  if (p.timeToTarget_s !== null) lines.push(`Time to target: ${num(p.timeToTarget_s)} s   peak coupler force ${num(p.peakCouplerForce_kN)} kN`);
+  if (p.stretch && p.stretch.lastVehicleMoves_s !== null) {
+    lines.push(`Stretch: last vehicle moves ${num(p.stretch.lastVehicleMoves_s, 0)} s after taking power, after ${num(p.stretch.locoTravelToStretch_m, 1)} m of locomotive travel`);
+  }
+  if (p.steps.length > 0) {
+    lines.push(`Time to target: ${p.timeToTarget_s === null ? "not reached" : `${num(p.timeToTarget_s)} s from taking power`}   peak coupler force ${num(p.peakCouplerForce_kN)} kN`);
+  }
   if (p.steps.length > 0) {
     lines.push("");
     lines.push(
       textTable(
-        ["#", "phase", "notch", "advance when", "speed km/h", "TE kN", "adhesion", "slip risk", "coupler kN", "if slip", "why"],
+        ["#", "phase", "notch", "advance when", "km/h", "TE kN", "adhesion", "slip risk", "coupler kN", "if slip"],
         p.steps.map((s, i) => [
           String(i + 1),
           s.phase,
@@ -35,11 +40,26 @@ export function renderPlan(p: PlanReport): string {
           pct(s.adhesionUse),
           pct(s.slipRisk, 1),
           num(s.peakCouplerForce_kN),
-          String(s.fallbackNotch),
-          s.why,
+          s.notch === 0 ? "—" : `notch ${s.fallbackNotch}`,
         ]),
       ),
     );
+    lines.push("");
+    lines.push("Why:");
+    p.steps.forEach((s, i) => lines.push(...wrap(`${i + 1}. ${s.why}`, 100, "   ")));
+  } else if (p.verdict === "needs-assistance") {
+    lines.push("");
+    lines.push("No notch sequence is offered: this train should not be started here as it stands.");
+  }
+  if (p.ifWheelsSlip && p.steps.length > 0) {
+    lines.push("");
+    lines.push("If wheels slip:");
+    lines.push("  The protection:");
+    for (const t of p.ifWheelsSlip.protection) lines.push(...wrap(`  - ${t}`, 100, "    "));
+    lines.push("  You:");
+    for (const t of p.ifWheelsSlip.driver) lines.push(...wrap(`  - ${t}`, 100, "    "));
+    lines.push("  If the train stalls:");
+    for (const t of p.ifWheelsSlip.stall) lines.push(...wrap(`  - ${t}`, 100, "    "));
   }
   if (p.assistance.length > 0) {
     lines.push("");
@@ -48,8 +68,24 @@ export function renderPlan(p: PlanReport): string {
   }
   lines.push("");
   lines.push("Cautions:");
-  for (const c of p.cautions) lines.push(`  - ${c}`);
+  for (const c of p.cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
   return lines.join("\n");
+}
+
+/** Break a line at spaces so it fits `width` columns; continuation lines get `indent`. */
+export function wrap(text: string, width: number, indent: string): string[] {
+  const lead = /^\s*/.exec(text)![0];
+  const words = text.slice(lead.length).split(" ");
+  const out: string[] = [];
+  let line = lead;
+  for (const w of words) {
+    if (line.trim().length > 0 && line.length + 1 + w.length > width) {
+      out.push(line);
+      line = indent + w;
+    } else line = line.trim().length > 0 ? `${line} ${w}` : line + w;
+  }
+  if (line.length > 0) out.push(line);
+  return out;
 }
 
 function advance(a: PlanReport["steps"][number]["advanceWhen"]): string {

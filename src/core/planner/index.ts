@@ -1,35 +1,127 @@
 /**
- * The start planner: from a start case to a notch sequence with slip risk, coupler forces and a
- * verdict. (Until the dynamics-verified search lands, the verdict comes from the static check and the
- * step list is empty.)
+ * The start planner: from a start case to a notch sequence with slip risk, coupler forces and a verdict.
+ * Static screen first; then a deterministic, phase-by-phase search in the full dynamics model
+ * (median adhesion), and a verifying re-run of the chosen notch timing with pessimistic adhesion.
  */
 import { caseCautions, STANDARD_CAUTIONS } from "../cautions.js";
+import { modelFromCase } from "../trainModel.js";
+import { sequenceControls, simulate } from "../simulate.js";
+import { slipGuidance } from "../slip.js";
 import { largestStartableMassKg } from "../startableMass.js";
 import { staticCheck } from "../staticCheck.js";
+import { gradeAt } from "../track.js";
 import type { StartCase } from "../types.js";
-import type { PlanOptions, PlanResult } from "./types.js";
+import { plannerContext, type PlannerContext } from "./context.js";
+import { searchPlan, type SearchResult } from "./search.js";
+import { planSteps } from "./steps.js";
+import type { PlanOptions, PlanResult, PlanSeries } from "./types.js";
+import { planVerdict } from "./verdict.js";
 
 export * from "./types.js";
+export { isCancelled } from "./search.js";
 
+/** Plan the start of a case. Throws a "cancelled" error when `shouldStop` says so. */
 export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
-  const s = staticCheck(c);
-  const maxKg = opts.skipMassSearch ? Number.NaN : largestStartableMassKg(c, (x) => planStart(x, { skipMassSearch: true }).verdict === "starts");
+  const ctx = plannerContext(c);
+  const search = searchPlan(ctx, searchOptions(opts));
+  const used = { ...ctx, riskCap: search.riskCap };
+  const verification = opts.skipVerification || search.failure !== null ? null : verify(used, search);
+  const v = planVerdict(used, search, { slip: verification?.slipped ?? false, coupler: verification?.overAllowance ?? false }, search.riskCap > ctx.riskCap || stretchAboveCap(ctx, search));
+  const steps = search.failure === null ? planSteps(used, search) : [];
+  const maxKg = opts.skipMassSearch ? Number.NaN : maxStartableMassKg(c, opts.shouldStop);
   opts.onProgress?.(1);
-  const empty = new Float64Array(0);
+  const run = search.branch.run;
+  const series = run.seriesView();
   return {
-    verdict: s.verdict,
-    reasons: s.reasons,
-    margin: s.margin,
-    margins: s.margins,
-    static: s,
-    steps: [],
-    peakCouplerForceN: s.peakTensionN,
-    peakCompressionN: s.peakCompressionN,
-    couplerPeaksN: empty,
-    timeToTargetS: null,
+    verdict: v.verdict,
+    reasons: v.reasons,
+    margin: v.margin,
+    margins: v.margins,
+    static: ctx.st,
+    steps,
+    peakCouplerForceN: search.failure === null ? search.branch.peakTensionN() : ctx.st.peakTensionN,
+    peakCompressionN: search.failure === null ? search.branch.steps.reduce((m, s) => Math.max(m, s.peakCompressionN), 0) : ctx.st.peakCompressionN,
+    couplerPeaksN: run.s.peakTensionN.slice(),
+    timeToTargetS: search.targetReachedS === null ? null : search.targetReachedS - search.powerS,
     maxStartableMassKg: maxKg,
-    slipGuidance: { protection: [], driver: [], stall: [] },
-    cautions: [...STANDARD_CAUTIONS, ...caseCautions(c, s.resistance.totalN)],
-    series: { timeS: empty, speedMps: empty, notch: empty, locoTravelM: empty, maxTensionN: empty },
+    slipGuidance: slipGuidance({
+      sand: c.conditions.sand,
+      sanders: ctx.model.locoSpecs.some((s) => s.sanders),
+      risingGrade: gradeAt(c.location.track, c.location.frontAtM - 1) > 2 || ctx.rollBackPullN > 0,
+      pointsAhead: true,
+    }),
+    cautions: [...STANDARD_CAUTIONS, ...caseCautions(c, ctx.st.resistance.totalN)],
+    series: {
+      timeS: series.timeS,
+      speedMps: series.leadSpeedMps,
+      notch: series.notch,
+      locoTravelM: series.leadTravelM,
+      maxTensionN: series.maxTensionN,
+    } satisfies PlanSeries,
+    verification,
+    stretch: {
+      lastVehicleMovesS: run.lastVehicleMovesS === null ? null : run.lastVehicleMovesS - search.powerS,
+      locoTravelToStretchM: run.locoTravelToStretchM,
+      maxRunOutMps: run.s.takeUp.maxRunOutMps,
+    },
   };
 }
+
+/** The stretch notch itself carried more slip risk than the case accepts. */
+function stretchAboveCap(ctx: PlannerContext, r: SearchResult): boolean {
+  const st = r.branch.steps.find((s) => s.phase === "stretch");
+  return st !== undefined && st.maxRisk > ctx.riskCap + 1e-9;
+}
+
+function searchOptions(opts: PlanOptions) {
+  return {
+    ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}),
+    ...(opts.onProgress ? { onProgress: (f: number) => opts.onProgress!(opts.skipMassSearch ? f : 0.5 * f) } : {}),
+    mode: opts.verdictOnly ? ("verdict" as const) : ("full" as const),
+  };
+}
+
+/** Does the planner say this case starts? The static verdict is checked first: the plan cannot do better. */
+export function plannerStarts(c: StartCase, shouldStop?: () => boolean): boolean {
+  if (staticCheck(c).verdict !== "starts") return false;
+  return planStart(c, { skipMassSearch: true, skipVerification: true, verdictOnly: true, ...(shouldStop ? { shouldStop } : {}) }).verdict === "starts";
+}
+
+/**
+ * Largest trailing mass the planner says starts: bisection over the planner's verdict, below the static
+ * limit (which the planner can only lower).
+ */
+export function maxStartableMassKg(c: StartCase, shouldStop?: () => boolean): number {
+  const staticMax = largestStartableMassKg(c, (x) => staticCheck(x).verdict === "starts");
+  if (staticMax <= 0) return 0;
+  return largestStartableMassKg(c, (x) => plannerStarts(x, shouldStop), {
+    upperBoundKg: staticMax,
+    toleranceKg: Math.max(500, 0.002 * staticMax),
+  });
+}
+
+/**
+ * Re-run the chosen notch timing in the full model with adhesion at the accepted risk (the pessimistic
+ * quantile): no wheel slip and couplers within their allowance confirm the plan.
+ */
+function verify(ctx: PlannerContext, r: SearchResult): NonNullable<PlanResult["verification"]> {
+  // At the cap's quantile every step's demand is within what the rails give (risk ≤ cap ⟺ demand ≤ μ_cap).
+  const q = Math.max(0.01, ctx.riskCap);
+  const model = modelFromCase(ctx.c, { adhesionQuantile: q });
+  const seq = r.branch.steps.map((s) => ({ notch: s.notch, atS: s.startS }));
+  // Slips and coupler peaks come with notch changes: verify through the last change and a minute after
+  // it (the notch then held was checked for its slip risk up to the target speed).
+  const lastChange = r.branch.steps[r.branch.steps.length - 1]!.startS;
+  const end = Math.min(r.branch.run.s.t, lastChange + 60);
+  const res = simulate(model, sequenceControls(seq, { trainBrakeReleaseS: 0, locoBrakeReleaseS: r.powerS }), { durationS: end });
+  return {
+    adhesionQuantile: q,
+    slipped: res.slipEpisodes.length > 0,
+    slipEpisodes: res.slipEpisodes.length,
+    peakCouplerForceN: res.peakTensionN,
+    overAllowance: res.peakTensionN > ctx.couplerAllowanceN * 1.02,
+    finalSpeedMps: res.final.leadSpeedMps,
+  };
+}
+
+export type { PlannerContext };

@@ -68,6 +68,17 @@ export interface PlanResult {
   slipGuidance: SlipGuidance;
   cautions: string[];
   series: PlanSeries;
+  /** The verifying re-run at pessimistic adhesion; null when there is no plan to verify or it was skipped. */
+  verification: {
+    adhesionQuantile: number;
+    slipped: boolean;
+    slipEpisodes: number;
+    peakCouplerForceN: number;
+    overAllowance: boolean;
+    finalSpeedMps: number;
+  } | null;
+  /** How the stretch went in the planned run (times from taking power). */
+  stretch: { lastVehicleMovesS: number | null; locoTravelToStretchM: number | null; maxRunOutMps: number };
 }
 
 /** Progress and cancellation hooks; the caller owns the clock. */
@@ -76,4 +87,8 @@ export interface PlanOptions {
   shouldStop?: () => boolean;
   /** Skip the largest-startable-mass search (used inside that search and by batch screens). */
   skipMassSearch?: boolean;
+  /** Skip the verifying re-run at pessimistic adhesion. */
+  skipVerification?: boolean;
+  /** Only the verdict is wanted: follow the acceleration with the one-mass model, no risk relaxing. */
+  verdictOnly?: boolean;
 }

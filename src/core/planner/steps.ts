@@ -1,0 +1,94 @@
+/**
+ * From the search's step records to the plan a driver reads: what to watch for before advancing, the
+ * expected figures, the fallback notch if the wheels slip, and one plain line of physics saying why.
+ */
+import { adhesionSpeedFactor, slipRiskAfterSlip } from "../adhesion.js";
+import { notchTargetN } from "../runner.js";
+import { mpsToKmh } from "../units.js";
+import type { StepRecord } from "./branch.js";
+import type { PlannerContext } from "./context.js";
+import type { SearchResult } from "./search.js";
+import type { PlanStep } from "./types.js";
+
+/**
+ * Fallback notch: the highest lower notch that, given a slip has just shown adhesion to be below this
+ * step's demand, would itself slip with no more than the threshold probability (PHYSICS.md §2).
+ */
+export function fallbackNotch(ctx: PlannerContext, notch: number, speedMps: number): number {
+  if (notch <= 1) return notch;
+  const m = ctx.model;
+  const threshold = ctx.c.settings.slipRiskThreshold;
+  const factor = adhesionSpeedFactor(speedMps);
+  for (let f = notch - 1; f >= 1; f--) {
+    let worst = 0;
+    for (let k = 0; k < m.nl; k++) {
+      const w = m.adhesiveWeightN[k]!;
+      const p = slipRiskAfterSlip(notchTargetN(m, k, f, speedMps) / w, notchTargetN(m, k, notch, speedMps) / w, ctx.mu0Median[k]! * factor, ctx.sigmaLn);
+      worst = Math.max(worst, p);
+    }
+    if (worst <= threshold) return f;
+  }
+  return 1;
+}
+
+const kN = (n: number): string => `${Math.round(n / 1000)} kN`;
+const pct = (x: number): string => `${Math.round(x * 100)} %`;
+const km = (mps: number): string => `${mpsToKmh(mps).toFixed(1)} km/h`;
+
+/** Turn the chosen branch into plan steps. */
+export function planSteps(ctx: PlannerContext, r: SearchResult): PlanStep[] {
+  const recs = r.branch.steps;
+  const resistanceN = ctx.st.resistance.totalN;
+  // Power steps after the stretch notch up to the running notch (build); the last is held to the target.
+  const lastPower = recs.length - 1;
+  return recs.map((rec, k) => {
+    if (rec.phase === "build" || rec.phase === "accelerate") rec.phase = k === lastPower && r.targetReachedS !== null ? "accelerate" : "build";
+    const duration = rec.endS - rec.startS;
+    const moved = rec.endTravelM - rec.startTravelM;
+    const speed = Math.max(0, rec.endSpeedMps);
+    return {
+      phase: rec.phase,
+      notch: rec.notch,
+      advanceWhen: { afterS: duration, movedM: Math.max(0, moved), speedMps: speed, primary: rec.trigger },
+      startS: rec.startS,
+      speedMps: speed,
+      tractiveEffortN: rec.effortN,
+      adhesionUse: rec.maxUse,
+      slipRisk: rec.maxRisk,
+      peakCouplerForceN: rec.peakTensionN,
+      fallbackNotch: rec.notch === 0 ? 0 : fallbackNotch(ctx, rec.notch, speed),
+      why: whyLine(ctx, r, rec, k, resistanceN),
+    };
+  });
+}
+
+function whyLine(ctx: PlannerContext, r: SearchResult, rec: StepRecord, k: number, resistanceN: number): string {
+  const c = ctx.c;
+  const allowance = ctx.couplerAllowanceN;
+  switch (rec.phase) {
+    case "prepare": {
+      const release = `the train brake releases along ${Math.round(ctx.consist.lengthM)} m in about ${Math.round(ctx.releaseS)} s`;
+      const sand = c.conditions.sand && ctx.model.locoSpecs.some((s) => s.sanders) ? "; sand before the wheels turn" : "";
+      if (rec.notch > 0) {
+        return `Grade pulls the train back with ${kN(ctx.rollBackPullN)} more than its brakes-off resistance holds: notch ${rec.notch} (${kN(rec.effortN)}) on the locomotive brake holds it while ${release}${sand}.`;
+      }
+      if (ctx.runAwayPullN > 0) {
+        return `On this falling grade the released train runs forward with ${kN(ctx.runAwayPullN)} to spare: hold it on the brakes while ${release}; take no power yet${sand}.`;
+      }
+      return `No power on a standing train until its brakes are off: the locomotive brake holds while ${release}${sand}.`;
+    }
+    case "stretch": {
+      const moved = r.branch.run.locoTravelToStretchM;
+      const travel = moved !== null ? `the last vehicle moves after about ${Math.max(0, moved).toFixed(1)} m of locomotive travel` : "the slack comes out wagon by wagon";
+      const tooFast = r.stretch?.outcome === "fast" ? ` The locomotive runs faster than ${km(c.settings.stretchSpeedMps)} here even in the lowest notch that moves the train: check it with the locomotive brake.` : "";
+      return `Notch ${rec.notch} gives ${kN(rec.effortN)} against ${kN(resistanceN)} to start the whole train at once: wagons break away one by one at walking pace and ${travel}; peak coupler ${kN(rec.peakTensionN)} of ${kN(allowance)} allowed.${tooFast}`;
+    }
+    case "build":
+      return `Effort ${kN(rec.effortN)} uses ${pct(rec.maxUse)} of the median adhesion (slip risk ${pct(rec.maxRisk)}); advance only once the current has settled${k === 2 ? ` — at least ${Math.round(r.buildDwellS ?? 3)} s per notch` : ""}; peak coupler ${kN(rec.peakTensionN)} of ${kN(allowance)}.`;
+    case "accelerate": {
+      const reason = r.adhesionCapped && rec.notch < ctx.maxNotch ? ` A higher notch would raise the slip risk above ${pct(ctx.riskCap)}.` : "";
+      const to = c.target.kind === "speed" ? `to ${km(c.target.speedMps)}` : `until the train has cleared ${Math.round(c.target.distanceM)} m`;
+      return `Hold notch ${rec.notch} ${to}: ${kN(rec.effortN)} against the running, grade and curve resistance accelerates the stretched train; slip risk ${pct(rec.maxRisk)}.${reason}`;
+    }
+  }
+}

@@ -1,0 +1,129 @@
+/**
+ * The engine and a general-purpose integrator (odex: Hairer & Wanner's ODEX Gragg–Bulirsch–Stoer
+ * extrapolation code, ported to JavaScript, from the registry) on the same chain equations, sampled on one
+ * time grid — shared by the reference test and the benchmark.
+ */
+import odex from "odex";
+import { createState, evaluate, step } from "../../../src/core/dynamics.js";
+import { stableTimeStep } from "../../../src/core/trainModel.js";
+import { chainModel } from "./chainModel.js";
+import { refCouplerForce, refDerivative, type RefChain } from "./referenceChain.js";
+
+const G = 9.80665;
+
+/** A 10-vehicle train rolling at 1 m/s on level track with its slack bunched, when the locomotive takes power. */
+export function tenVehicleCase(): RefChain {
+  const n = 10;
+  const masses = [120_000, ...Array.from({ length: n - 1 }, (_, i) => 50_000 + 5_000 * i)];
+  return {
+    masses,
+    effMasses: masses.map((m, i) => m * (i === 0 ? 1.15 : 1.03)),
+    davisA: masses.map((m) => 0.0011 * m * G),
+    davisB: masses.map((m) => 0.00002 * m),
+    davisC: masses.map(() => 6),
+    breakawayExcess: masses.map((m) => 0.0013 * m * G),
+    fadeSpeed: 2 / 3.6,
+    sinTheta: 0,
+    halfSlack: 0.03,
+    ext0: Array.from({ length: n - 1 }, () => -0.03),
+    travel: 0.148,
+    rated: 2.52e6,
+    linear: 0.3,
+    endStopK: 2e8,
+    damping: 5e4,
+    loco: 0,
+    effortN: 300_000,
+    powerW: 1.5e6,
+    riseS: 1.5,
+    fallS: 0.5,
+  };
+}
+
+export function engineModel(c: RefChain) {
+  return chainModel({
+    masses: c.masses,
+    effMasses: c.effMasses,
+    davisA: c.davisA,
+    davisB: c.davisB,
+    davisC: c.davisC,
+    breakawayExcessN: c.breakawayExcess,
+    gradePermille: Math.tan(Math.asin(c.sinTheta)) * 1000,
+    halfSlackM: c.halfSlack,
+    ext0M: c.ext0,
+    travelM: c.travel,
+    ratedN: c.rated,
+    linearShare: c.linear,
+    unloadRatio: 1, // elastic: the reference ODE has no hysteresis state
+    endStopK: c.endStopK,
+    dampingC: c.damping,
+    loco: c.loco,
+    effortN: c.effortN,
+    powerW: c.powerW,
+    effortRiseS: c.riseS,
+  });
+}
+
+/** Coupler force histories sampled every `every` seconds up to T, from the engine. */
+export function engineHistory(c: RefChain, T: number, every: number, dt?: number): number[][] {
+  const m = engineModel(c);
+  const s = createState(m);
+  const v0 = 1;
+  s.v.fill(v0);
+  s.notch[0] = 8;
+  evaluate(m, s, 0);
+  const h = dt ?? stableTimeStep(m);
+  const out: number[][] = [Array.from(s.couplerF)];
+  let next = every;
+  let prevT = s.t;
+  let prevF = Array.from(s.couplerF);
+  while (s.t < T - 1e-9) {
+    step(m, s, h);
+    // Sample on the exact grid by linear interpolation between steps.
+    while (next <= s.t + 1e-12 && next <= T + 1e-9) {
+      const f = (next - prevT) / (s.t - prevT);
+      out.push(prevF.map((p, j) => p + f * (s.couplerF[j]! - p)));
+      next += every;
+    }
+    prevT = s.t;
+    prevF = Array.from(s.couplerF);
+  }
+  return out;
+}
+
+/** The same histories from odex at the given tolerance. */
+export function odexHistory(c: RefChain, T: number, every: number, tol: number): number[][] {
+  const n = c.masses.length;
+  const solver = new odex.Solver(2 * n + 1);
+  solver.absoluteTolerance = tol;
+  solver.relativeTolerance = tol;
+  solver.denseOutput = true;
+  solver.maxSteps = 1e7;
+  const y0 = [...new Array<number>(n).fill(0), ...new Array<number>(n).fill(1), 0];
+  const out: number[][] = [];
+  solver.solve(
+    refDerivative(c),
+    0,
+    y0,
+    T,
+    solver.grid(every, (_t: number, y: number[]) => {
+      const f: number[] = [];
+      for (let j = 0; j < n - 1; j++) f.push(refCouplerForce(c, c.ext0[j]! + y[j]! - y[j + 1]!, y[n + j]! - y[n + j + 1]!));
+      out.push(f);
+    }),
+  );
+  return out;
+}
+
+export function maxDeviationOverPeak(a: number[][], b: number[][]): { dev: number; peak: number } {
+  let peak = 0;
+  let dev = 0;
+  const len = Math.min(a.length, b.length);
+  for (let k = 0; k < len; k++) {
+    for (let j = 0; j < a[k]!.length; j++) {
+      peak = Math.max(peak, Math.abs(b[k]![j]!));
+      dev = Math.max(dev, Math.abs(a[k]![j]! - b[k]![j]!));
+    }
+  }
+  return { dev, peak };
+}
+
