@@ -45,6 +45,10 @@ export interface DynamicsState {
   /** Slip triggers since the start, and per unit the time of the last one. */
   slipCount: Int32Array;
   lastSlipT: Float64Array;
+  /** Effort-lag factors for the last evaluation interval (recomputed when it changes). */
+  lagDt: number;
+  lagRise: number;
+  lagFall: number;
   /** Take-up events: a coupling going from slack to engaged. */
   takeUp: TakeUpLog;
   energy: EnergyLedger | null;
@@ -111,6 +115,9 @@ export function createState(m: TrainModel, opts: { trackEnergy?: boolean } = {})
     intervalMaxCompressionN: 0,
     slipCount: new Int32Array(m.nl),
     lastSlipT: new Float64Array(m.nl).fill(-Infinity),
+    lagDt: -1,
+    lagRise: 0,
+    lagFall: 0,
     takeUp: {
       count: 0,
       timeS: new Float64Array(TAKE_UP_CAPACITY),
@@ -180,8 +187,10 @@ export function step(m: TrainModel, s: DynamicsState, dt: number): void {
 /**
  * Evaluate coupler forces, traction and accelerations at the current positions and speeds. `dt` is the
  * time since the previous evaluation (for the effort lag); `kickH` > 0 also applies the closing half-kick.
+ * One pass head to tail: each coupling's force is computed just before the vehicle behind needs it.
  */
 export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0): void {
+  updateTraction(m, s, dt);
   const n = m.n;
   const x = s.x;
   const v = s.v;
@@ -189,8 +198,6 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
   const F = s.couplerF;
   let maxT = s.intervalMaxTensionN;
   let maxC = s.intervalMaxCompressionN;
-
-  // Couplings.
   const ext0 = m.ext0M;
   const halfSlack = m.halfSlackM;
   const gearF = s.gearF;
@@ -201,101 +208,6 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
   const damp = m.dampingC;
   const peakT = s.peakTensionN;
   const peakC = s.peakCompressionN;
-  for (let j = 0; j < n - 1; j++) {
-    const ext = ext0[j]! + x[j]! - x[j + 1]!;
-    const hs = halfSlack[j]!;
-    const w = v[j]! - v[j + 1]!;
-    let f = 0;
-    if (ext > hs) {
-      if (engaged[j] !== 1) engage(s, j, 1, w, t);
-      const e = ext - hs;
-      const travel = m.draftTravelM[j]!;
-      let xi = e / travel;
-      if (xi > 1) xi = 1;
-      const lin = m.draftLinear[j]!;
-      const load = m.draftRatedN[j]! * xi * (lin + (1 - lin) * xi);
-      let g = gearF[j]! + transK[j]! * (e - gearDefl[j]!);
-      if (g > load) g = load;
-      else {
-        const unload = load * unloadR[j]!;
-        if (g < unload) g = unload;
-      }
-      gearF[j] = g;
-      gearDefl[j] = e;
-      f = g + damp[j]! * w;
-      if (e > travel) f += m.endStopK[j]! * (e - travel);
-      if (f < 0) f = 0;
-    } else if (ext < -hs) {
-      if (engaged[j] !== -1) engage(s, j, -1, w, t);
-      const e = -ext - hs;
-      const travel = m.buffTravelM[j]!;
-      let xi = e / travel;
-      if (xi > 1) xi = 1;
-      const lin = m.buffLinear[j]!;
-      const load = m.buffRatedN[j]! * xi * (lin + (1 - lin) * xi);
-      let g = gearF[j]! + transK[j]! * (e - gearDefl[j]!);
-      if (g > load) g = load;
-      else {
-        const unload = load * unloadR[j]!;
-        if (g < unload) g = unload;
-      }
-      gearF[j] = g;
-      gearDefl[j] = e;
-      f = -g + damp[j]! * w;
-      if (e > travel) f -= m.endStopK[j]! * (e - travel);
-      if (f > 0) f = 0;
-    } else if (engaged[j] !== 0) {
-      engaged[j] = 0;
-      gearF[j] = 0;
-      gearDefl[j] = 0;
-    }
-    F[j] = f;
-    if (f > 0) {
-      if (f > maxT) maxT = f;
-      if (f > peakT[j]!) {
-        peakT[j] = f;
-        s.peakTensionT[j] = t;
-      }
-    } else if (f < 0) {
-      if (-f > maxC) maxC = -f;
-      if (-f > peakC[j]!) {
-        peakC[j] = -f;
-        s.peakCompressionT[j] = t;
-      }
-    }
-  }
-  s.intervalMaxTensionN = maxT;
-  s.intervalMaxCompressionN = maxC;
-
-  // Traction: effort follows the notch with a lag, limited by adhesion; a slip cuts it back.
-  const stride = m.notchStride;
-  const rise = dt > 0 ? 1 - Math.exp(-dt / m.effortRiseS) : 0;
-  const fall = dt > 0 ? 1 - Math.exp(-dt / m.effortFallS) : 0;
-  for (let k = 0; k < m.nl; k++) {
-    const i = m.locoVehicle[k]!;
-    const sp = Math.abs(v[i]!);
-    const notch = s.notch[k]!;
-    let target = 0;
-    if (notch > 0) {
-      const cur = m.notchCurrentN[k * stride + notch]!;
-      const pow = m.notchPowerW[k * stride + notch]! / (sp > MIN_POWER_SPEED ? sp : MIN_POWER_SPEED);
-      target = cur < pow ? cur : pow;
-    }
-    s.targetN[k] = target;
-    let e = s.effortN[k]!;
-    e += (target - e) * (target > e ? rise : fall);
-    // Curtius–Kniffler shape scales the standstill adhesion with speed.
-    const limit = m.adhesiveWeightN[k]! * m.mu0[k]! * ((7.5 / (sp * 3.6 + 44) + 0.161) / CK0);
-    if (e > limit) {
-      s.slipCount[k]! += 1;
-      s.lastSlipT[k] = t;
-      e = m.slipCutFraction * limit;
-    }
-    s.effortN[k] = e;
-    s.tractionN[i] = e;
-  }
-
-  // Vehicles.
   const fade = m.fadeSpeedMps;
   const g = GRAVITY_MPS2;
   const en = s.energy;
@@ -314,7 +226,72 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
   const brakeA = s.brakeN;
   const invM = m.invEffMass;
   const acc = s.acc;
+  let fFront = 0;
   for (let i = 0; i < n; i++) {
+    // The coupling behind vehicle i.
+    let f = 0;
+    if (i < n - 1) {
+      const ext = ext0[i]! + x[i]! - x[i + 1]!;
+      const hs = halfSlack[i]!;
+      if (ext > hs) {
+        const w = v[i]! - v[i + 1]!;
+        if (engaged[i] !== 1) engage(s, i, 1, w, t);
+        const e = ext - hs;
+        const travel = m.draftTravelM[i]!;
+        let xi = e / travel;
+        if (xi > 1) xi = 1;
+        const lin = m.draftLinear[i]!;
+        const load = m.draftRatedN[i]! * xi * (lin + (1 - lin) * xi);
+        let gf = gearF[i]! + transK[i]! * (e - gearDefl[i]!);
+        if (gf > load) gf = load;
+        else {
+          const unload = load * unloadR[i]!;
+          if (gf < unload) gf = unload;
+        }
+        gearF[i] = gf;
+        gearDefl[i] = e;
+        f = gf + damp[i]! * w;
+        if (e > travel) f += m.endStopK[i]! * (e - travel);
+        if (f < 0) f = 0;
+        if (f > maxT) maxT = f;
+        if (f > peakT[i]!) {
+          peakT[i] = f;
+          s.peakTensionT[i] = t;
+        }
+      } else if (ext < -hs) {
+        const w = v[i]! - v[i + 1]!;
+        if (engaged[i] !== -1) engage(s, i, -1, w, t);
+        const e = -ext - hs;
+        const travel = m.buffTravelM[i]!;
+        let xi = e / travel;
+        if (xi > 1) xi = 1;
+        const lin = m.buffLinear[i]!;
+        const load = m.buffRatedN[i]! * xi * (lin + (1 - lin) * xi);
+        let gf = gearF[i]! + transK[i]! * (e - gearDefl[i]!);
+        if (gf > load) gf = load;
+        else {
+          const unload = load * unloadR[i]!;
+          if (gf < unload) gf = unload;
+        }
+        gearF[i] = gf;
+        gearDefl[i] = e;
+        f = -gf + damp[i]! * w;
+        if (e > travel) f -= m.endStopK[i]! * (e - travel);
+        if (f > 0) f = 0;
+        if (-f > maxC) maxC = -f;
+        if (-f > peakC[i]!) {
+          peakC[i] = -f;
+          s.peakCompressionT[i] = t;
+        }
+      } else if (engaged[i] !== 0) {
+        engaged[i] = 0;
+        gearF[i] = 0;
+        gearDefl[i] = 0;
+      }
+      F[i] = f;
+    }
+
+    // Vehicle i.
     const ch = chain0[i]! + x[i]!;
     let k = seg[i]!;
     if (ch >= segEnd[k]! || ch < segStart[k]!) {
@@ -323,9 +300,8 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
     }
     const mass = massA[i]!;
     const grade = mass * g * segSin[k]!;
-    let fApp = traction[i]! - grade;
-    if (i > 0) fApp += F[i - 1]!;
-    if (i < n - 1) fApp -= F[i]!;
+    const fApp = traction[i]! - grade + fFront - f;
+    fFront = f;
     const vi = v[i]!;
     const sp = vi < 0 ? -vi : vi;
     let res = dA[i]! + (dB[i]! + dC[i]! * sp) * sp + mass * segCurve[k]!;
@@ -350,13 +326,52 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
     }
     if (en !== null) account(en, i, x[i]!, traction[i]!, resisting, res, brake, grade);
   }
+  s.intervalMaxTensionN = maxT;
+  s.intervalMaxCompressionN = maxC;
   if (en !== null) {
     for (let j = 0; j < n - 1; j++) {
-      const ext = m.ext0M[j]! + x[j]! - x[j + 1]!;
+      const ext = ext0[j]! + x[j]! - x[j + 1]!;
       en.coupling += 0.5 * (en.lastCoupler[j]! + F[j]!) * (ext - en.lastExt[j]!);
       en.lastExt[j] = ext;
       en.lastCoupler[j] = F[j]!;
     }
+  }
+}
+
+/** Traction: effort follows the notch with a lag, limited by adhesion; a slip cuts it back. */
+function updateTraction(m: TrainModel, s: DynamicsState, dt: number): void {
+  if (m.nl === 0) return;
+  if (dt !== s.lagDt) {
+    s.lagDt = dt;
+    s.lagRise = dt > 0 ? 1 - Math.exp(-dt / m.effortRiseS) : 0;
+    s.lagFall = dt > 0 ? 1 - Math.exp(-dt / m.effortFallS) : 0;
+  }
+  const rise = s.lagRise;
+  const fall = s.lagFall;
+  const stride = m.notchStride;
+  const v = s.v;
+  for (let k = 0; k < m.nl; k++) {
+    const i = m.locoVehicle[k]!;
+    const sp = Math.abs(v[i]!);
+    const notch = s.notch[k]!;
+    let target = 0;
+    if (notch > 0) {
+      const cur = m.notchCurrentN[k * stride + notch]!;
+      const pow = m.notchPowerW[k * stride + notch]! / (sp > MIN_POWER_SPEED ? sp : MIN_POWER_SPEED);
+      target = cur < pow ? cur : pow;
+    }
+    s.targetN[k] = target;
+    let e = s.effortN[k]!;
+    e += (target - e) * (target > e ? rise : fall);
+    // Curtius–Kniffler shape scales the standstill adhesion with speed.
+    const limit = m.adhesiveWeightN[k]! * m.mu0[k]! * ((7.5 / (sp * 3.6 + 44) + 0.161) / CK0);
+    if (e > limit) {
+      s.slipCount[k]! += 1;
+      s.lastSlipT[k] = s.t;
+      e = m.slipCutFraction * limit;
+    }
+    s.effortN[k] = e;
+    s.tractionN[i] = e;
   }
 }
 

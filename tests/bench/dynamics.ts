@@ -7,7 +7,7 @@ import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { modelFromCase } from "../../src/core/trainModel.js";
 import { sequenceControls, simulate } from "../../src/core/simulate.js";
-import { engineHistory, maxDeviationOverPeak, odexHistory } from "../core/helpers/compare.js";
+import { engineHistory, maxDeviationOverPeak, odexHistory, peakForceError } from "../core/helpers/compare.js";
 import type { RefChain } from "../core/helpers/referenceChain.js";
 import { heading, line, median, memoryMB, timeRuns } from "./util.js";
 
@@ -99,20 +99,28 @@ export function benchDynamics(opts: { compare: boolean }): void {
   const oursMs = median(oursRuns.times);
   const oursErr = maxDeviationOverPeak(ours, truth);
   const oursRel = oursErr.dev / oursErr.peak;
-  line("Taut engine (default step)", `${oursMs.toFixed(0)} ms`, `max deviation ${(oursRel * 100).toFixed(2)} % of peak ${(oursErr.peak / 1000).toFixed(0)} kN`);
-  let matched: { tol: number; ms: number; rel: number } | null = null;
+  const oursPeak = peakForceError(ours, truth);
+  line("Taut engine (default step)", `${oursMs.toFixed(0)} ms`, `history deviation ${(oursRel * 100).toFixed(2)} %, peak-force error ${(oursPeak * 100).toFixed(2)} % of the ${(oursErr.peak / 1000).toFixed(0)} kN peak`);
+  // Accuracy matched two ways: the whole force history (sensitive to the timing of every slack impact over
+  // 180 s) and each coupling's peak force (what the planner checks against the coupling allowance).
+  let byHistory: { tol: number; ms: number } | null = null;
+  let byPeak: { tol: number; ms: number } | null = null;
   for (const tol of [1e-3, 1e-4, 1e-5, 1e-6, 1e-7]) {
     const ta = performance.now();
     const h = odexHistory(ref, T, every, tol);
     const ms = performance.now() - ta;
     const e = maxDeviationOverPeak(h, truth);
     const rel = e.dev / e.peak;
-    line(`odex at tolerance ${tol.toExponential(0)}`, `${ms.toFixed(0)} ms`, `max deviation ${(rel * 100).toFixed(2)} % of peak`);
-    if (rel <= oursRel) {
-      matched = { tol, ms, rel };
-      break;
-    }
+    const pk = peakForceError(h, truth);
+    line(`odex at tolerance ${tol.toExponential(0)}`, `${ms.toFixed(0)} ms`, `history deviation ${(rel * 100).toFixed(2)} %, peak-force error ${(pk * 100).toFixed(2)} %`);
+    if (!byHistory && rel <= oursRel) byHistory = { tol, ms };
+    if (!byPeak && pk <= oursPeak) byPeak = { tol, ms };
+    if (byHistory && byPeak) break;
   }
-  if (matched) line("speed ratio at matched accuracy (odex ÷ Taut)", `${(matched.ms / oursMs).toFixed(1)}×`, `odex needs tolerance ${matched.tol.toExponential(0)} to match; target ≥ 10×`);
-  else line("speed ratio", "n/a", "odex did not reach the engine's accuracy in the tolerances tried");
+  const ratio = (m: { tol: number; ms: number } | null, what: string) =>
+    m
+      ? line(`speed ratio, ${what} matched (odex ÷ Taut)`, `${(m.ms / oursMs).toFixed(1)}×`, `odex needs tolerance ${m.tol.toExponential(0)}; target ≥ 10×`)
+      : line(`speed ratio, ${what} matched`, "> measured", "odex did not reach the engine's accuracy in the tolerances tried");
+  ratio(byPeak, "peak coupler forces");
+  ratio(byHistory, "force histories");
 }

@@ -3,11 +3,14 @@
  * extrapolation code, ported to JavaScript, from the registry) on the same chain equations, sampled on one
  * time grid — shared by the reference test and the benchmark.
  */
-import odex from "odex";
+import * as odexModule from "odex";
 import { createState, evaluate, step } from "../../../src/core/dynamics.js";
 import { stableTimeStep } from "../../../src/core/trainModel.js";
 import { chainModel } from "./chainModel.js";
 import { refCouplerForce, refDerivative, type RefChain } from "./referenceChain.js";
+
+// odex is CommonJS: depending on the loader its class is on the namespace or on its default export.
+const Solver: typeof odexModule.Solver = (odexModule as { Solver?: typeof odexModule.Solver }).Solver ?? (odexModule as unknown as { default: { Solver: typeof odexModule.Solver } }).default.Solver;
 
 const G = 9.80665;
 
@@ -75,17 +78,19 @@ export function engineHistory(c: RefChain, T: number, every: number, dt?: number
   const out: number[][] = [Array.from(s.couplerF)];
   let next = every;
   let prevT = s.t;
-  let prevF = Array.from(s.couplerF);
+  const prevF = Float64Array.from(s.couplerF);
   while (s.t < T - 1e-9) {
     step(m, s, h);
     // Sample on the exact grid by linear interpolation between steps.
     while (next <= s.t + 1e-12 && next <= T + 1e-9) {
       const f = (next - prevT) / (s.t - prevT);
-      out.push(prevF.map((p, j) => p + f * (s.couplerF[j]! - p)));
+      const row = new Array<number>(prevF.length);
+      for (let j = 0; j < prevF.length; j++) row[j] = prevF[j]! + f * (s.couplerF[j]! - prevF[j]!);
+      out.push(row);
       next += every;
     }
     prevT = s.t;
-    prevF = Array.from(s.couplerF);
+    prevF.set(s.couplerF);
   }
   return out;
 }
@@ -93,7 +98,7 @@ export function engineHistory(c: RefChain, T: number, every: number, dt?: number
 /** The same histories from odex at the given tolerance. */
 export function odexHistory(c: RefChain, T: number, every: number, tol: number): number[][] {
   const n = c.masses.length;
-  const solver = new odex.Solver(2 * n + 1);
+  const solver = new Solver(2 * n + 1);
   solver.absoluteTolerance = tol;
   solver.relativeTolerance = tol;
   solver.denseOutput = true;
@@ -127,3 +132,19 @@ export function maxDeviationOverPeak(a: number[][], b: number[][]): { dev: numbe
   return { dev, peak };
 }
 
+
+/** Largest error in any coupling's peak tension, relative to the largest peak (what the planner checks). */
+export function peakForceError(a: number[][], b: number[][]): number {
+  const nc = b[0]?.length ?? 0;
+  let worst = 0;
+  let top = 0;
+  for (let j = 0; j < nc; j++) {
+    let pa = 0;
+    let pb = 0;
+    for (const row of a) pa = Math.max(pa, row[j]!);
+    for (const row of b) pb = Math.max(pb, row[j]!);
+    worst = Math.max(worst, Math.abs(pa - pb));
+    top = Math.max(top, pb);
+  }
+  return top > 0 ? worst / top : 0;
+}
