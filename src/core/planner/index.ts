@@ -14,7 +14,7 @@ import type { StartCase } from "../types.js";
 import { plannerContext, type PlannerContext } from "./context.js";
 import { searchPlan, type SearchResult } from "./search.js";
 import { planSteps } from "./steps.js";
-import type { PlanOptions, PlanResult, PlanSeries } from "./types.js";
+import type { PlanOptions, PlanResult, PlanSeries, PlanStep } from "./types.js";
 import { planVerdict } from "./verdict.js";
 
 export * from "./types.js";
@@ -50,7 +50,7 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
       risingGrade: gradeAt(c.location.track, c.location.frontAtM - 1) > 2 || ctx.rollBackPullN > 0,
       pointsAhead: true,
     }),
-    cautions: [...STANDARD_CAUTIONS, ...caseCautions(c, ctx.st.resistance.totalN)],
+    cautions: [...STANDARD_CAUTIONS, ...caseCautions(c, ctx.st.resistance.totalN), ...heatingCautions(ctx, steps)],
     series: {
       timeS: series.timeS,
       speedMps: series.leadSpeedMps,
@@ -65,6 +65,26 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
       maxRunOutMps: run.s.takeUp.maxRunOutMps,
     },
   };
+}
+
+/** Longest a plan may hold current above the continuous rating at low speed before we say so, s [M]. */
+const HEATING_WARN_S = 60;
+
+/**
+ * DC traction motors heat fast at low speed and high current (Alaska Railroad manual p. 64-18 [P]: do not
+ * keep power on a standing locomotive longer than needed). Flag steps that hold effort above the continuous
+ * rating below the continuous speed for long.
+ */
+function heatingCautions(ctx: PlannerContext, steps: PlanStep[]): string[] {
+  const spec = ctx.model.locoSpecs[0];
+  if (!spec) return [];
+  const perUnitContinuous = spec.continuousTractiveEffortN * ctx.model.nl;
+  const hot = steps.filter((s) => s.notch > 0 && s.tractiveEffortN > perUnitContinuous && s.speedMps < spec.continuousSpeedMps && s.advanceWhen.afterS > HEATING_WARN_S);
+  if (hot.length === 0) return [];
+  const longest = Math.max(...hot.map((s) => s.advanceWhen.afterS));
+  return [
+    `The plan holds traction current above the continuous rating at low speed for up to ${Math.round(longest)} s: keep within the locomotive's short-time ratings and do not hold power on a train that is not moving.`,
+  ];
 }
 
 /** The stretch notch itself carried more slip risk than the case accepts. */
