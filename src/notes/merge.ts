@@ -1,0 +1,105 @@
+/**
+ * Merging notes from a file into the library: which notes are new, which are the same as ours, and
+ * which share an id with ours but carry another revision (a conflict the user settles: keep mine,
+ * take theirs, or keep both, the imported copy then getting a new id). Pure: no storage here.
+ */
+import { canonicalNote, latestRevision } from "../profiles/notes.js";
+import type { LocationNoteFile } from "../profiles/schemas.js";
+
+export type ConflictChoice = "mine" | "theirs" | "both";
+
+/** An imported note whose id is already in the library with different content. */
+export interface ImportConflict {
+  id: string;
+  mine: LocationNoteFile;
+  theirs: LocationNoteFile;
+  /** True when both carry the same latest revision entry yet differ (edited without a revision). */
+  sameRevision: boolean;
+}
+
+/** What importing a set of notes would do, before any choice is made. */
+export interface MergePreview {
+  added: LocationNoteFile[];
+  unchanged: LocationNoteFile[];
+  conflicts: ImportConflict[];
+  /** Imported notes that take the place of a damaged record with the same key. */
+  repairs: LocationNoteFile[];
+}
+
+/** The writes an import makes once every conflict has a choice. */
+export interface MergeWrites {
+  put: LocationNoteFile[];
+  summary: { added: string[]; replaced: string[]; keptMine: string[]; copies: Array<{ from: string; to: string }>; unchanged: string[]; repaired: string[] };
+}
+
+/** Compare incoming notes with the library (`mine` by id; `damaged` are keys of unreadable records). */
+export function previewMerge(incoming: readonly LocationNoteFile[], mine: ReadonlyMap<string, LocationNoteFile>, damaged: ReadonlySet<string>): MergePreview {
+  const out: MergePreview = { added: [], unchanged: [], conflicts: [], repairs: [] };
+  for (const theirs of incoming) {
+    const ours = mine.get(theirs.id);
+    if (!ours) {
+      (damaged.has(theirs.id) ? out.repairs : out.added).push(theirs);
+      continue;
+    }
+    if (canonicalNote(ours) === canonicalNote(theirs)) {
+      out.unchanged.push(theirs);
+      continue;
+    }
+    const a = latestRevision(ours);
+    const b = latestRevision(theirs);
+    out.conflicts.push({ id: theirs.id, mine: ours, theirs, sameRevision: a.date === b.date && a.initials === b.initials && a.change === b.change });
+  }
+  return out;
+}
+
+/**
+ * The writes for a preview and the user's choices. Throws a RangeError when a conflict has no choice:
+ * the caller must settle all of them (or cancel) before anything is written.
+ */
+export function mergeWrites(preview: MergePreview, choices: Readonly<Record<string, ConflictChoice>>, takenIds: ReadonlySet<string>): MergeWrites {
+  const taken = new Set(takenIds);
+  for (const n of preview.added) taken.add(n.id);
+  const w: MergeWrites = {
+    put: [...preview.added, ...preview.repairs],
+    summary: {
+      added: preview.added.map((n) => n.id),
+      replaced: [],
+      keptMine: [],
+      copies: [],
+      unchanged: preview.unchanged.map((n) => n.id),
+      repaired: preview.repairs.map((n) => n.id),
+    },
+  };
+  for (const c of preview.conflicts) {
+    const choice = choices[c.id];
+    if (choice === undefined) throw new RangeError(`no choice made for the conflicting note "${c.id}"`);
+    if (choice === "mine") w.summary.keptMine.push(c.id);
+    else if (choice === "theirs") {
+      w.put.push(c.theirs);
+      w.summary.replaced.push(c.id);
+    } else {
+      const copy = importedCopy(c.theirs, taken);
+      taken.add(copy.id);
+      w.put.push(copy);
+      w.summary.copies.push({ from: c.id, to: copy.id });
+    }
+  }
+  return w;
+}
+
+const ID_MAX = 80;
+const NAME_MAX = 120;
+
+/** The imported note under a new, unused id, its name marked as the imported copy. */
+export function importedCopy(n: LocationNoteFile, taken: ReadonlySet<string>): LocationNoteFile {
+  let k = 1;
+  let id: string;
+  do {
+    const suffix = k === 1 ? "-imported" : `-imported-${k}`;
+    id = `${n.id.slice(0, ID_MAX - suffix.length)}${suffix}`;
+    k++;
+  } while (taken.has(id));
+  const mark = " (imported copy)";
+  const name = n.name.endsWith(mark) ? n.name : `${n.name.slice(0, NAME_MAX - mark.length)}${mark}`;
+  return { ...n, id, name };
+}

@@ -1,0 +1,77 @@
+/**
+ * Schema versions of the notes database and the steps between them.
+ *
+ * Version 1 kept one record per place in the `notes` store with the profile nested under `profile`,
+ * hazards as plain lines of text, the usual rail condition as a map from season to condition, and a
+ * single "last revised" date and initials instead of a revision history.
+ *
+ * Version 2 (current) keeps each note as a whole `taut/location@1` file inside a record that says
+ * where it came from and when it was saved, and adds a `meta` store (last export, demo notes added).
+ */
+import { parseLocationNote } from "../profiles/parse.js";
+import { formatIssues } from "../profiles/issues.js";
+import type { NoteRecord } from "./records.js";
+
+export const NOTES_DB_VERSION = 2;
+
+/** A version-1 record, as version 1 wrote it. */
+export interface NoteRecordV1 {
+  id: string;
+  title: string;
+  line?: string;
+  direction?: string;
+  profile: {
+    segments: Array<{ start_m: number; length_m: number; grade_permille: number; radius_m: number }>;
+    front_m: number;
+    clear_m: number;
+  };
+  speedLimit_kmh?: number;
+  /** One line of text per hazard. */
+  hazards: string[];
+  /** Usual rail condition by season. */
+  rail?: Partial<Record<"spring" | "summer" | "autumn" | "winter", string>>;
+  practice: string;
+  /** Date of the last revision, YYYY-MM-DD. */
+  revised: string;
+  /** Initials of whoever revised it. */
+  by: string;
+  /** True for the demo notes version 1 shipped with. */
+  demo?: boolean;
+}
+
+/** The change entry written into a migrated note's revision record. */
+export const V1_CARRIED_OVER = "Carried over from the earlier notes format, which kept only the last revision.";
+
+const SEASON_ORDER = ["spring", "summer", "autumn", "winter"] as const;
+
+/**
+ * Turn a version-1 record into a version-2 record; a record that cannot be carried over (missing or
+ * invalid fields) is returned as a failure with the reason, and is left in place to be reported on read.
+ */
+export function migrateV1Record(raw: unknown): { ok: true; record: NoteRecord } | { ok: false; message: string } {
+  if (!raw || typeof raw !== "object") return { ok: false, message: "not an object" };
+  const v1 = raw as Partial<NoteRecordV1>;
+  const p = v1.profile;
+  const candidate = {
+    schema: "taut/location@1",
+    id: v1.id,
+    name: v1.title,
+    ...(v1.line ? { line: v1.line } : {}),
+    ...(v1.direction ? { direction: v1.direction } : {}),
+    ...(v1.demo ? { illustrative: true } : {}),
+    segments: Array.isArray(p?.segments)
+      ? p.segments.map((s) => ({ from_m: s?.start_m, length_m: s?.length_m, gradient_permille: s?.grade_permille, curveRadius_m: s?.radius_m }))
+      : undefined,
+    frontAt_m: p?.front_m,
+    clearAhead_m: p?.clear_m,
+    ...(v1.speedLimit_kmh !== undefined ? { speedLimit_kmh: v1.speedLimit_kmh } : {}),
+    hazards: Array.isArray(v1.hazards) ? v1.hazards.filter((h) => typeof h === "string" && h.trim() !== "").map((h) => ({ kind: "other", note: h.trim() })) : [],
+    seasons: SEASON_ORDER.filter((s) => v1.rail?.[s] !== undefined).map((s) => ({ season: s, rail: v1.rail?.[s] })),
+    practice: typeof v1.practice === "string" ? v1.practice : "",
+    revisions: [{ date: v1.revised, initials: v1.by, change: V1_CARRIED_OVER }],
+  };
+  const parsed = parseLocationNote(candidate);
+  if (!parsed.ok) return { ok: false, message: formatIssues(parsed.issues).replace(/\n/g, "; ") };
+  const savedAt = typeof v1.revised === "string" ? `${v1.revised}T00:00:00.000Z` : new Date(0).toISOString();
+  return { ok: true, record: { id: parsed.value.id, origin: v1.demo ? "demo" : "mine", savedAt, note: parsed.value } };
+}
