@@ -238,16 +238,7 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
         if (engaged[i] !== 1) engage(s, i, 1, w, t);
         const e = ext - hs;
         const travel = m.draftTravelM[i]!;
-        let xi = e / travel;
-        if (xi > 1) xi = 1;
-        const lin = m.draftLinear[i]!;
-        const load = m.draftRatedN[i]! * xi * (lin + (1 - lin) * xi);
-        let gf = gearF[i]! + transK[i]! * (e - gearDefl[i]!);
-        if (gf > load) gf = load;
-        else {
-          const unload = load * unloadR[i]!;
-          if (gf < unload) gf = unload;
-        }
+        const gf = gearForce(gearF[i]!, gearDefl[i]!, e, travel, m.draftRatedN[i]!, m.draftLinear[i]!, unloadR[i]!, transK[i]!);
         gearF[i] = gf;
         gearDefl[i] = e;
         f = gf + damp[i]! * w;
@@ -263,16 +254,7 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
         if (engaged[i] !== -1) engage(s, i, -1, w, t);
         const e = -ext - hs;
         const travel = m.buffTravelM[i]!;
-        let xi = e / travel;
-        if (xi > 1) xi = 1;
-        const lin = m.buffLinear[i]!;
-        const load = m.buffRatedN[i]! * xi * (lin + (1 - lin) * xi);
-        let gf = gearF[i]! + transK[i]! * (e - gearDefl[i]!);
-        if (gf > load) gf = load;
-        else {
-          const unload = load * unloadR[i]!;
-          if (gf < unload) gf = unload;
-        }
+        const gf = gearForce(gearF[i]!, gearDefl[i]!, e, travel, m.buffRatedN[i]!, m.buffLinear[i]!, unloadR[i]!, transK[i]!);
         gearF[i] = gf;
         gearDefl[i] = e;
         f = -gf + damp[i]! * w;
@@ -336,6 +318,20 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
       en.lastCoupler[j] = F[j]!;
     }
   }
+}
+
+/**
+ * Hysteretic gear force at deflection e (magnitude, m): the previous force moved along the steep
+ * change-over line, then held between the unloading and loading curves (PHYSICS.md §4).
+ */
+function gearForce(prevF: number, prevE: number, e: number, travel: number, rated: number, lin: number, unloadRatio: number, kTransition: number): number {
+  let xi = e / travel;
+  if (xi > 1) xi = 1;
+  const load = rated * xi * (lin + (1 - lin) * xi);
+  const g = prevF + kTransition * (e - prevE);
+  if (g > load) return load;
+  const unload = load * unloadRatio;
+  return g < unload ? unload : g;
 }
 
 /** Traction: effort follows the notch with a lag, limited by adhesion; a slip cuts it back. */

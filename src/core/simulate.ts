@@ -4,7 +4,7 @@
  * last vehicle moves, coupler peaks with time and place, take-up speeds, slips, a decimated series.
  */
 import { kineticEnergyJ, type DynamicsState } from "./dynamics.js";
-import { Run, type Observation, type SlipEpisode } from "./runner.js";
+import { Run, type Observation, type SeriesBuffer, type SlipEpisode } from "./runner.js";
 import type { TrainModel } from "./trainModel.js";
 
 export type { Observation, SlipEpisode } from "./runner.js";
@@ -30,16 +30,8 @@ export interface SimulateOptions {
   shouldStop?: () => boolean;
 }
 
-export interface SimSeries {
-  timeS: Float64Array;
-  leadSpeedMps: Float64Array;
-  tailSpeedMps: Float64Array;
-  notch: Float64Array;
-  leadTravelM: Float64Array;
-  maxTensionN: Float64Array;
-  maxCompressionN: Float64Array;
-  effortN: Float64Array;
-}
+/** The decimated time series of a run. */
+export type SimSeries = Omit<SeriesBuffer, "n">;
 
 export interface SimResult {
   dt: number;
@@ -131,16 +123,7 @@ export function resultOf(run: Run, stoppedBy: SimResult["stoppedBy"]): SimResult
     takeUpEvents: Array.from({ length: log.count }, (_, k) => ({ timeS: log.timeS[k]!, coupling: log.coupling[k]!, relSpeedMps: log.relSpeedMps[k]! })),
     slipEpisodes: run.episodes,
     final: { timeS: s.t, leadSpeedMps: s.v[run.lead]!, leadTravelM: s.x[run.lead]!, tailTravelM: s.x[m.n - 1]! },
-    series: {
-      timeS: view.timeS,
-      leadSpeedMps: view.leadSpeedMps,
-      tailSpeedMps: view.tailSpeedMps,
-      notch: view.notch,
-      leadTravelM: view.leadTravelM,
-      maxTensionN: view.maxTensionN,
-      maxCompressionN: view.maxCompressionN,
-      effortN: view.effortN,
-    },
+    series: view,
     state: s,
   };
   if (s.energy) {
