@@ -22,3 +22,8 @@ export * from "./runner.js";
 export * from "./trainModel.js";
 export * from "./dynamics.js";
 export * from "./simulate.js";
+export * from "./assistPlacement.js";
+export * from "./assistance.js";
+export * from "./divideTrain.js";
+export * from "./conditionMargins.js";
+export * from "./sensitivity.js";

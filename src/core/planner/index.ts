@@ -6,6 +6,7 @@
 import { caseCautions, STANDARD_CAUTIONS } from "../cautions.js";
 import { modelFromCase } from "../trainModel.js";
 import { sequenceControls, simulate } from "../simulate.js";
+import { sensitivity } from "../sensitivity.js";
 import { slipGuidance } from "../slip.js";
 import { largestStartableMassKg } from "../startableMass.js";
 import { staticCheck } from "../staticCheck.js";
@@ -42,6 +43,7 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
     peakCouplerForceN: search.failure === null ? search.branch.peakTensionN() : ctx.st.peakTensionN,
     peakCompressionN: search.failure === null ? search.branch.steps.reduce((m, s) => Math.max(m, s.peakCompressionN), 0) : ctx.st.peakCompressionN,
     couplerPeaksN: run.s.peakTensionN.slice(),
+    couplerCompressionPeaksN: run.s.peakCompressionN.slice(),
     timeToTargetS: search.targetReachedS === null ? null : search.targetReachedS - search.powerS,
     maxStartableMassKg: maxKg,
     slipGuidance: slipGuidance({
@@ -59,6 +61,7 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
       maxTensionN: series.maxTensionN,
     } satisfies PlanSeries,
     verification,
+    sensitivity: sensitivity(c),
     stretch: {
       lastVehicleMovesS: run.lastVehicleMovesS === null ? null : run.lastVehicleMovesS - search.powerS,
       locoTravelToStretchM: run.locoTravelToStretchM,

@@ -2,6 +2,7 @@
  * What the start planner returns, in SI. The CLI turns it into the INTERFACE.md JSON; the app formats
  * it for display in the chosen units.
  */
+import type { SensitivityRow } from "../sensitivity.js";
 import type { StaticCheck } from "../staticCheck.js";
 import type { Reason, Verdict } from "../types.js";
 
@@ -62,6 +63,8 @@ export interface PlanResult {
   peakCompressionN: number;
   /** Peak tension of each coupling, head to tail, N. */
   couplerPeaksN: Float64Array;
+  /** Peak compression of each coupling, head to tail, N. */
+  couplerCompressionPeaksN: Float64Array;
   /** Seconds from taking power to reaching the target; null when it is not reached. */
   timeToTargetS: number | null;
   maxStartableMassKg: number;
@@ -77,6 +80,8 @@ export interface PlanResult {
     overAllowance: boolean;
     finalSpeedMps: number;
   } | null;
+  /** Which input moves the margin most, largest effect first. */
+  sensitivity: SensitivityRow[];
   /** How the stretch went in the planned run (times from taking power). */
   stretch: { lastVehicleMovesS: number | null; locoTravelToStretchM: number | null; maxRunOutMps: number };
 }
