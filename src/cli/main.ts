@@ -6,6 +6,8 @@ import { parseArgs, type ParseArgsConfig } from "node:util";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "./errors.js";
 import { planCommand } from "./commands/plan.js";
 import { simulateCommand } from "./commands/simulate.js";
+import { checkCommand } from "./commands/check.js";
+import { tableCommand } from "./commands/table.js";
 
 export interface Command {
   name: string;
@@ -22,7 +24,7 @@ export interface Output {
   err(text: string): void;
 }
 
-const COMMANDS: Command[] = [planCommand, simulateCommand];
+const COMMANDS: Command[] = [planCommand, checkCommand, tableCommand, simulateCommand];
 
 /** Register a command (each issue's command adds itself here). */
 export function commands(): readonly Command[] {

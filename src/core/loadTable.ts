@@ -1,9 +1,10 @@
 /**
  * Load table: the largest trailing mass that starts at a location with a locomotive set, for every
- * rail condition, with and without sand. Computed by bisection over the same verdict the planner gives,
- * so a mass just below a table value starts and one just above does not.
+ * rail condition, with and without sand. Each row is a bisection over the same verdict the planner gives
+ * (below the static check's limit, with the planner's verdict runs), so a mass just below a table value
+ * starts and one just above does not. Rows are independent: one can be computed on its own (in a worker).
  */
-import { plannerStarts } from "./planner/index.js";
+import { maxStartableMassKg } from "./planner/index.js";
 import { largestStartableMassKg } from "./startableMass.js";
 import { RAIL_CONDITIONS, type RailCondition, type StartCase } from "./types.js";
 
@@ -13,15 +14,41 @@ export interface LoadTableRow {
   maxTrailingMassKg: number;
 }
 
+export interface LoadTableOptions {
+  shouldStop?: () => boolean;
+  /** With a custom `starts`: stop the bisection when the bracket is this narrow, kg (default 500). */
+  toleranceKg?: number;
+  /** Called after each row with the fraction done. */
+  onProgress?: (fraction: number) => void;
+}
+
+/** The rows of a table, in order: every rail condition, without then with sand. */
+export function loadTableCells(): Array<{ rail: RailCondition; sand: boolean }> {
+  return RAIL_CONDITIONS.flatMap((rail) => [false, true].map((sand) => ({ rail, sand })));
+}
+
+/**
+ * One row: the largest trailing mass for a rail condition and sanding. With `starts` given, a plain bisection
+ * over that verdict; by default the planner's (static bound first, then verdict runs).
+ */
+export function loadTableRow(
+  base: StartCase,
+  rail: RailCondition,
+  sand: boolean,
+  starts?: (c: StartCase) => boolean,
+  opts: Pick<LoadTableOptions, "shouldStop" | "toleranceKg"> = {},
+): LoadTableRow {
+  const c: StartCase = { ...base, conditions: { ...base.conditions, rail, sand } };
+  const kg = starts ? largestStartableMassKg(c, starts, opts.toleranceKg !== undefined ? { toleranceKg: opts.toleranceKg } : {}) : maxStartableMassKg(c, opts.shouldStop);
+  return { rail, sand, maxTrailingMassKg: kg };
+}
 
 /** Every rail condition, without then with sand. `base` supplies location, locomotives and the train make-up. */
-export function loadTable(base: StartCase, starts: (c: StartCase) => boolean = plannerStarts): LoadTableRow[] {
-  const rows: LoadTableRow[] = [];
-  for (const rail of RAIL_CONDITIONS) {
-    for (const sand of [false, true]) {
-      const c: StartCase = { ...base, conditions: { ...base.conditions, rail, sand } };
-      rows.push({ rail, sand, maxTrailingMassKg: largestStartableMassKg(c, starts) });
-    }
-  }
-  return rows;
+export function loadTable(base: StartCase, starts?: (c: StartCase) => boolean, opts: LoadTableOptions = {}): LoadTableRow[] {
+  const cells = loadTableCells();
+  return cells.map(({ rail, sand }, k) => {
+    const row = loadTableRow(base, rail, sand, starts, opts);
+    opts.onProgress?.((k + 1) / cells.length);
+    return row;
+  });
 }

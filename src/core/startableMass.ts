@@ -4,14 +4,22 @@
  */
 import type { StartCase } from "./types.js";
 
+/** The bracket never needs to be narrower than this, kg. */
+const MIN_TOLERANCE_KG = 50;
+
 /** The case with a different trailing mass, wagons and length unchanged. */
 export function withTrailingMass(c: StartCase, trailingMassKg: number): StartCase {
   return { ...c, train: { ...c.train, trailingMassKg } };
 }
 
 export interface MassSearchOptions {
-  /** Stop when the bracket is this narrow, kg. */
+  /** Stop when the bracket is this narrow, kg… */
   toleranceKg?: number;
+  /**
+   * …and no wider than this fraction of the mass found (default 0.5 %, never below 50 kg), so that a small
+   * limit is found as closely, relatively, as a large one.
+   */
+  relativeTolerance?: number;
   /** Never search above this, kg. */
   ceilingKg?: number;
   /** A mass known not to be exceeded (e.g. the static limit): tried first, and the search stays below it. */
@@ -41,7 +49,8 @@ export function largestStartableMassKg(c: StartCase, starts: (c: StartCase) => b
     if (hi >= ceiling) return ceiling;
     hi = Math.min(ceiling, hi * 2);
   }
-  while (hi - lo > tol) {
+  const rel = opts.relativeTolerance ?? 0.005;
+  while (hi - lo > Math.min(tol, Math.max(MIN_TOLERANCE_KG, rel * lo))) {
     const mid = 0.5 * (lo + hi);
     if (ok(mid)) lo = mid;
     else hi = mid;

@@ -5,3 +5,4 @@ export * from "./parse.js";
 export * from "./convert.js";
 export * from "./library.js";
 export * from "./report.js";
+export * from "./assistanceReport.js";

@@ -23,12 +23,51 @@ export interface StepReport {
 }
 
 export interface AssistanceReport {
+  /** What is added, e.g. "1 × illustrative-6axle-3000". */
   add: string;
+  /** Where, e.g. "rear", "head", "after wagon 30", "after wagon 30 + rear". */
   position: string;
   verdict: Verdict;
   peakCouplerForce_kN: number;
   timeToTarget_s?: number | null;
   peakCompression_kN?: number;
+  reasons?: Reason[];
+  margin?: number;
+  /** Units added. */
+  units?: number;
+  /** The added units as start-case entries (paste into `locomotives` to plan the option). */
+  locomotives?: Array<{ profile: string; count: number; position: "head" | "rear" | { afterWagon: number } }>;
+  /** Coupling (1 = behind the first vehicle) of the peak compression, and how many couplings there are. */
+  peakCompressionAt?: { coupling: number; of: number };
+  /** Largest compression in the front quarter of the couplings. */
+  headCompression_kN?: number;
+  /** What to watch with this option. */
+  note?: string;
+}
+
+/** Dividing the train: the largest first part that starts with the train's own locomotives. */
+export interface DivideReport {
+  firstPart: { wagons: number; trailingMass_t: number; length_m: number };
+  remaining: { wagons: number; trailingMass_t: number };
+  /** Trips if every trip takes a part of this size (a guide: the rest stands on other track). */
+  trips: number;
+  /** "starts" when a full plan confirmed the first part; null when only a verdict run judged it. */
+  verdict: Verdict | null;
+  peakCouplerForce_kN: number | null;
+  timeToTarget_s: number | null;
+}
+
+/** How far the assistance search went. */
+export interface AssistanceSearchReport {
+  /** Profile the options add. */
+  profile: string;
+  /** Planner runs used, and the cap. */
+  plannerRuns: number;
+  budget: number;
+  /** False when the cap stopped the search before every candidate was judged. */
+  complete: boolean;
+  /** Options judged and ruled out, with the verdict that ruled each out. */
+  ruledOut: Array<{ add: string; position: string; verdict: Verdict; reasons: Reason[]; by: "static" | "planner" }>;
 }
 
 export interface PlanReport {
@@ -54,13 +93,30 @@ export interface PlanReport {
   timeToTarget_s: number | null;
   maxStartableMass_t: number;
   assistance: AssistanceReport[];
+  /** When no assistance option within two added units works: dividing the train. */
+  divide?: DivideReport | null;
+  assistanceSearch?: AssistanceSearchReport;
+  /** Verdict and margins for every rail condition, without and with sand (`taut plan --conditions`). */
+  byCondition?: ConditionMarginReport[];
   cautions: string[];
   /** What to do if the wheels slip or the train stalls. */
   ifWheelsSlip?: { protection: string[]; driver: string[]; stall: string[] };
   /** The stretch as the dynamics run showed it. */
   stretch?: { lastVehicleMoves_s: number | null; locoTravelToStretch_m: number | null; maxRunOut_kmh: number };
+  /** Which input moves the margin most, largest first. */
+  sensitivity?: Array<{ input: string; change: string; marginBefore: number; marginAfter: number; stretchTravelChange_m: number }>;
   /** The verifying re-run with pessimistic adhesion. */
   verification?: { adhesionQuantile: number; slipEvents: number; peakCouplerForce_kN: number; passed: boolean } | null;
+}
+
+export interface ConditionMarginReport {
+  rail: string;
+  sand: boolean;
+  verdict: Verdict;
+  reasons: Reason[];
+  margin: number;
+  margins: { adhesion: number; power: number; coupler: number; distance: number };
+  limitedBy: Reason;
 }
 
 /** Round to a number of decimals (for output only). */
@@ -140,6 +196,13 @@ export function planReport(c: StartCase, p: PlanResult, meta: PlanReport["case"]
     locoTravelToStretch_m: p.stretch.locoTravelToStretchM === null ? null : r(p.stretch.locoTravelToStretchM, 2),
     maxRunOut_kmh: kmh(p.stretch.maxRunOutMps, 2),
   };
+  rep.sensitivity = p.sensitivity.map((x) => ({
+    input: x.input,
+    change: x.change,
+    marginBefore: r(x.marginBefore, 3),
+    marginAfter: r(x.marginAfter, 3),
+    stretchTravelChange_m: r(x.stretchTravelChangeM, 2),
+  }));
   rep.verification = p.verification
     ? {
         adhesionQuantile: r(p.verification.adhesionQuantile, 3),

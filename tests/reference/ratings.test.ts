@@ -12,12 +12,15 @@ import {
   GRAVITY_MPS2,
   KG_PER_SHORT_TON,
   largestStartableMassKg,
+  loadTable,
   M_PER_FT,
   NEWTONS_PER_LBF,
   ratingDrawbarPullN,
   ratingTons,
   rulingGradePermille,
   staticCheck,
+  withAddedUnits,
+  type StartCase,
 } from "../../src/core/index.js";
 import { ampleAdhesion, testLoco, testWagon, uniformCase } from "../tools/cases.js";
 
@@ -52,6 +55,50 @@ describe("gross trailing load at continuous tractive effort (TR 0603 §2.10–2.
     expect(2 * Math.ceil(one)).toBe(1_196);
     // The formula is linear in drawbar pull: two units' pull gives twice the unrounded load.
     expect(grossTrailingLoadKg(2 * dbp, 0.8, [rr, gr, cr]) / KG_PER_SHORT_TON).toBeCloseTo(2 * one, 9);
+  });
+});
+
+describe("gross trailing load through the load-table and assistance code path (TR 0603 §2.10–2.11 [P])", () => {
+  // The same worked example with the same simplified inputs, put as a start case: one 120-short-ton unit whose
+  // effort is W·DBP = 0.80 × 33,600 lb plus what lifts its own weight up the grade (the rating's 20 lb/ton for
+  // the locomotive is already in the drawbar pull, so it has no breakaway of its own); wagons resisting RR + CR
+  // = 7 + 8 lb/ton = 7.5 ‰ of their weight; a straight, uniform 15 ‰ grade (GR 30 lb/ton, §2.7); adhesion and
+  // couplings not limiting. The rating question is "does the effort cover the resistance": power margin ≥ 1.
+  const locoMass = shortTons(120);
+  const dbp = ratingDrawbarPullN(lbf(36_000), locoMass);
+  const unit = testLoco({
+    massKg: locoMass,
+    adhesiveMassKg: locoMass,
+    startingTractiveEffortN: 0.8 * dbp + locoMass * GRAVITY_MPS2 * Math.sin(Math.atan(0.015)),
+    startingResistancePermille: 0,
+  });
+  const one: StartCase = uniformCase({
+    locos: [{ spec: unit, count: 1, position: "head" }],
+    wagon: testWagon({ startingResistancePermille: 7.5 }),
+    gradePermille: 15,
+    curveRadiusM: 0,
+    adhesion: ampleAdhesion(),
+    couplerLimitN: 1e9,
+    clearAheadM: 1e5,
+  });
+  const rating = (x: StartCase) => staticCheck(x).margins.power >= 1;
+  const table = (c: StartCase) => loadTable(c, rating, { toleranceKg: 5 }).map((r) => r.maxTrailingMassKg / KG_PER_SHORT_TON);
+
+  it("one unit: every row of the load table rounds up to 598 short tons [P]", () => {
+    const rows = table(one);
+    expect(rows.length).toBe(12);
+    for (const t of rows) expect(Math.ceil(t)).toBe(598);
+  });
+
+  it("one unit added at the head by the assistance search's case builder: twice the load, rated 2 × 598 = 1,196 [P]", () => {
+    const two = withAddedUnits(one, unit, [{ count: 1, position: "head" }]);
+    expect(two.locomotives.reduce((s, g) => s + g.count, 0)).toBe(2);
+    const [a] = table(one);
+    const [b] = table(two);
+    // Unrounded, two units haul twice what one does (1,194.7 short tons); the source rates a consist as the
+    // number of units times one unit's rating rounded up: 2 × 598.
+    expect(b! / a!).toBeCloseTo(2, 3);
+    expect(2 * Math.ceil(b! / 2)).toBe(1_196);
   });
 });
 
@@ -109,6 +156,13 @@ describe("starting limit mass through the start check (PHYSICS.md §6)", () => {
     const above = staticCheck({ ...base, train: { ...base.train, trailingMassKg: 1_810_000 } });
     expect(above.verdict).toBe("needs-assistance");
     expect(above.reasons).toEqual(["power"]);
+  });
+
+  it("a second unit added at the head (assistance case builder) doubles it: 3,580 t [D]", () => {
+    const two = withAddedUnits(base, base.locomotives[0]!.spec, [{ count: 1, position: "head" }]);
+    const kg = largestStartableMassKg(two, (x) => staticCheck(x).margins.power >= 1, { toleranceKg: 100 });
+    // [D] m_A = (2F − 2·m_L·g·i) / (g·(i + f_WA)) = 2 × 1,790 t.
+    expect(Math.abs(kg / (2 * formulaKg) - 1)).toBeLessThan(0.005);
   });
 
   it("the start check and the running rating are different: 4 ‰ breakaway vs the running terms", () => {

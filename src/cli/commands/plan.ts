@@ -1,20 +1,36 @@
-/** `taut plan CASE.json [--json]` — the start plan for one case. */
+/** `taut plan CASE.json [--json]` — the start plan for one case, with assistance options when it does not start. */
+import { searchAssistance } from "../../core/assistance.js";
+import { conditionMargins } from "../../core/conditionMargins.js";
 import { planStart } from "../../core/planner/index.js";
 import { builtinCaseJson, DEMO_CASE_ID } from "../../profiles/builtin.js";
 import { parseStartCase } from "../../profiles/parse.js";
 import { planReport as reportOf, type PlanReport } from "../../profiles/report.js";
-import type { StartCase } from "../../core/types.js";
+import { assistanceReport, conditionMarginReport } from "../../profiles/assistanceReport.js";
+import type { LocomotiveSpec, StartCase } from "../../core/types.js";
+import type { Library } from "../../profiles/library.js";
 import { InputError } from "../errors.js";
 import { library, readNotesFiles, readStartCase } from "../files.js";
 import type { Command } from "../main.js";
 import { renderPlan } from "../render/plan.js";
 
+/** Planner runs the assistance search may use inside `taut plan` for the options, and for dividing the train. */
+export const PLAN_ASSISTANCE_BUDGET = 10;
+export const PLAN_DIVIDE_BUDGET = 6;
+/** Options `taut plan` confirms with a full, verified plan. */
+export const PLAN_ASSISTANCE_FULL_PLANS = 2;
+
 export const planCommand: Command = {
   name: "plan",
-  summary: "start plan for one train: verdict, resistance, adhesion, steps",
-  usage: "taut plan CASE.json [--notes FILE]... [--location NOTE-ID] [--json] | taut plan --demo [--json]",
+  summary: "start plan for one train: verdict, resistance, adhesion, steps, assistance",
+  usage: "taut plan CASE.json [--notes FILE]... [--location NOTE-ID] [--helper ID] [--no-assistance] [--conditions] [--json] | taut plan --demo [--json]",
   help: [
     "Computes whether the locomotives can start the train at the location, and how.",
+    "When the verdict is not \"starts\", it also searches for assistance: one or two more units of the",
+    "lead unit's profile (or --helper) at the head, at the rear or mid-train, each option checked by the",
+    "planner's dynamics; options that start are listed cheapest first. When no option works it gives the",
+    "largest first part of the train that starts (dividing the train). To keep `plan` to a few seconds the",
+    `search is capped here at ${PLAN_ASSISTANCE_BUDGET} planner runs for the options (${PLAN_ASSISTANCE_FULL_PLANS} of them fully verified) and ${PLAN_DIVIDE_BUDGET}`,
+    "for dividing; the output says when the cap cut the search short.",
     "",
     "Options:",
     "  --json              print the plan as JSON (INTERFACE.md shape) instead of a table",
@@ -22,11 +38,24 @@ export const planCommand: Command = {
     "  --notes FILE        location notes (a taut/location@1 note or a taut/notes-bundle@1 bundle)",
     "                      the case's \"location\" may name by id; may be given more than once",
     "  --location NOTE-ID  start at this location note instead of the case's own location",
+    "  --helper ID         locomotive profile the assistance options add (default: the lead unit's)",
+    "  --no-assistance     do not search for assistance",
+    "  --conditions        also give the verdict and margins for every rail condition, without and with",
+    "                      sand (12 more plans: several seconds)",
   ].join("\n"),
-  options: { json: { type: "boolean" }, demo: { type: "boolean" }, notes: { type: "string", multiple: true }, location: { type: "string" } },
+  options: {
+    json: { type: "boolean" },
+    demo: { type: "boolean" },
+    notes: { type: "string", multiple: true },
+    location: { type: "string" },
+    helper: { type: "string" },
+    "no-assistance": { type: "boolean" },
+    conditions: { type: "boolean" },
+  },
   run({ values, positionals }, io) {
     const lib = library(readNotesFiles((values.notes as string[] | undefined) ?? []));
     const location = values.location as string | undefined;
+    const helper = helperSpec(lib, values.helper as string | undefined);
     let c: StartCase;
     let meta: PlanReport["case"];
     if (values.demo) {
@@ -45,11 +74,20 @@ export const planCommand: Command = {
       c = read.c;
       meta = caseMeta(read.raw);
     }
-    const report = planReport(c, meta);
+    const report = planReport(c, meta, { assistance: !values["no-assistance"], ...(helper ? { helper } : {}) });
+    if (values.conditions) report.byCondition = conditionMargins(c).map(conditionMarginReport);
     io.out(values.json ? JSON.stringify(report, null, 2) : renderPlan(report));
     return 0;
   },
 };
+
+/** The locomotive profile named by --helper, or undefined for the lead unit's. */
+export function helperSpec(lib: Library, id: string | undefined): LocomotiveSpec | undefined {
+  if (id === undefined) return undefined;
+  const found = lib.locomotives.get(id);
+  if (!found) throw new InputError(`--helper: no locomotive profile "${id}" (known: ${[...lib.locomotives.keys()].join(", ")})`);
+  return found.spec;
+}
 
 export function caseMeta(raw: Record<string, unknown>): PlanReport["case"] {
   const meta: PlanReport["case"] = {};
@@ -59,7 +97,22 @@ export function caseMeta(raw: Record<string, unknown>): PlanReport["case"] {
   return meta;
 }
 
-/** The plan report for a case: the planner's result with units in names. */
-export function planReport(c: StartCase, meta: PlanReport["case"]): PlanReport {
-  return reportOf(c, planStart(c), meta);
+/** The plan report for a case: the planner's result with units in names, and assistance when it does not start. */
+export function planReport(c: StartCase, meta: PlanReport["case"], opts: { assistance?: boolean; helper?: LocomotiveSpec } = {}): PlanReport {
+  const p = planStart(c);
+  const rep = reportOf(c, p, meta);
+  if (opts.assistance !== false && p.verdict !== "starts") {
+    const a = searchAssistance(c, {
+      baseVerdict: p.verdict,
+      budget: PLAN_ASSISTANCE_BUDGET,
+      divideBudget: PLAN_DIVIDE_BUDGET,
+      maxFullPlans: PLAN_ASSISTANCE_FULL_PLANS,
+      ...(opts.helper ? { spec: opts.helper } : {}),
+    });
+    const ar = assistanceReport(a, PLAN_ASSISTANCE_BUDGET + PLAN_DIVIDE_BUDGET);
+    rep.assistance = ar.assistance;
+    rep.divide = ar.divide;
+    rep.assistanceSearch = ar.search;
+  }
+  return rep;
 }

@@ -1,12 +1,10 @@
 /** The readable form of a plan: verdict first, then the figures and a numbered step table. */
 import type { PlanReport } from "../../profiles/report.js";
 import { num, pct, textTable } from "../table.js";
+import { renderAssistance, renderConditions, VERDICT_WORDS } from "./assistance.js";
+import { wrap } from "./wrap.js";
 
-const VERDICT_WORDS: Record<PlanReport["verdict"], string> = {
-  starts: "STARTS",
-  marginal: "MARGINAL",
-  "needs-assistance": "NEEDS ASSISTANCE",
-};
+export { wrap };
 
 export function renderPlan(p: PlanReport): string {
   const lines: string[] = [];
@@ -61,31 +59,12 @@ export function renderPlan(p: PlanReport): string {
     lines.push("  If the train stalls:");
     for (const t of p.ifWheelsSlip.stall) lines.push(...wrap(`  - ${t}`, 100, "    "));
   }
-  if (p.assistance.length > 0) {
-    lines.push("");
-    lines.push("Assistance options:");
-    for (const a of p.assistance) lines.push(`  ${a.add} at ${a.position}: ${VERDICT_WORDS[a.verdict].toLowerCase()}, peak coupler ${num(a.peakCouplerForce_kN)} kN`);
-  }
+  lines.push(...renderAssistance(p));
+  lines.push(...renderConditions(p.byCondition ?? []));
   lines.push("");
   lines.push("Cautions:");
   for (const c of p.cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
   return lines.join("\n");
-}
-
-/** Break a line at spaces so it fits `width` columns; continuation lines get `indent`. */
-export function wrap(text: string, width: number, indent: string): string[] {
-  const lead = /^\s*/.exec(text)![0];
-  const words = text.slice(lead.length).split(" ");
-  const out: string[] = [];
-  let line = lead;
-  for (const w of words) {
-    if (line.trim().length > 0 && line.length + 1 + w.length > width) {
-      out.push(line);
-      line = indent + w;
-    } else line = line.trim().length > 0 ? `${line} ${w}` : line + w;
-  }
-  if (line.length > 0) out.push(line);
-  return out;
 }
 
 function advance(a: PlanReport["steps"][number]["advanceWhen"]): string {

@@ -1,0 +1,114 @@
+/**
+ * Check a day's departures: for each good row, the plan's verdict, reasons and margin, the largest startable
+ * mass and the cheapest assistance, worked out in a pool of worker threads. Identical work is done once:
+ * departures with the same case share one check, and those that differ only in trailing mass share one
+ * mass search (the largest startable mass does not depend on the mass the train has today).
+ */
+import type { LocomotiveSpec, StartCase } from "../../core/types.js";
+import type { AssistanceReport, DivideReport } from "../../profiles/report.js";
+import type { Departure } from "./departures.js";
+import type { CheckOutcome, JobOutcome, MassOutcome } from "./jobs.js";
+import type { JobPool } from "./pool.js";
+
+/** One answered (or refused) departure, in output units. */
+export interface DepartureRow {
+  id: string;
+  /** CSV line (1-based, header is line 1) or JSON array index (0-based) of the row. */
+  line?: number;
+  index?: number;
+  rail?: string;
+  sand?: boolean;
+  trailingMass_t?: number;
+  verdict?: CheckOutcome["verdict"];
+  reasons?: CheckOutcome["reasons"];
+  margin?: number;
+  maxStartableMass_t?: number;
+  peakCouplerForce_kN?: number;
+  timeToTarget_s?: number | null;
+  /** The cheapest assistance option that starts (null when none is needed or none works). */
+  assistance?: AssistanceReport | null;
+  /** When no option works: the largest first part that starts. */
+  divide?: DivideReport | null;
+  /** The assistance search was cut short by its cap. */
+  searchCapped?: boolean;
+  /** Bad input (the row names its line or index) or an internal failure. */
+  error?: string;
+  /** "input" for a row that could not be read, "internal" for one the calculation failed on. */
+  errorKind?: "input" | "internal";
+}
+
+export interface CheckProgress {
+  done: number;
+  total: number;
+}
+
+export interface CheckStats {
+  /** Distinct checks and mass searches run (identical work is shared). */
+  checks: number;
+  massSearches: number;
+  /** Time each distinct check and each mass search took on its thread, ms. */
+  checkMs: number[];
+  massMs: number[];
+}
+
+/** The key of a case, and of the case without its trailing mass. */
+function keys(c: StartCase): { check: string; mass: string } {
+  return { check: JSON.stringify(c), mass: JSON.stringify({ ...c, train: { ...c.train, trailingMassKg: 0 } }) };
+}
+
+/** Answer every departure; bad rows come back with their error, the others with their figures. */
+export async function checkDepartures(
+  deps: readonly Departure[],
+  pool: JobPool,
+  opts: { helper?: LocomotiveSpec; onProgress?: (p: CheckProgress) => void } = {},
+): Promise<{ rows: DepartureRow[]; stats: CheckStats }> {
+  const checks = new Map<string, Promise<JobOutcome>>();
+  const masses = new Map<string, Promise<JobOutcome>>();
+  const stats: CheckStats = { checks: 0, massSearches: 0, checkMs: [], massMs: [] };
+  const timed = (p: Promise<JobOutcome>) => p.then((o) => ((o.kind === "check" ? stats.checkMs : stats.massMs).push(o.elapsedMs), o));
+  let done = 0;
+  const total = deps.length;
+  const tick = () => opts.onProgress?.({ done: ++done, total });
+  const rows = deps.map(async (d): Promise<DepartureRow> => {
+    const base: DepartureRow = { id: d.id, ...(d.line !== undefined ? { line: d.line } : {}), ...(d.index !== undefined ? { index: d.index } : {}) };
+    if (!d.case) {
+      tick();
+      return { ...base, error: d.error ?? `${d.where}: cannot be read`, errorKind: "input" };
+    }
+    const c = d.case;
+    const k = keys(c);
+    let check = checks.get(k.check);
+    if (!check) {
+      check = timed(pool.run({ kind: "check", case: c, ...(opts.helper ? { helper: opts.helper } : {}) }));
+      checks.set(k.check, check);
+      stats.checks++;
+    }
+    let mass = masses.get(k.mass);
+    if (!mass) {
+      mass = timed(pool.run({ kind: "mass", case: c }));
+      masses.set(k.mass, mass);
+      stats.massSearches++;
+    }
+    const described: DepartureRow = { ...base, rail: c.conditions.rail, sand: c.conditions.sand, trailingMass_t: Math.round(c.train.trailingMassKg / 1000) };
+    try {
+      const [o, m] = (await Promise.all([check, mass])) as [CheckOutcome, MassOutcome];
+      return {
+        ...described,
+        verdict: o.verdict,
+        reasons: o.reasons,
+        margin: o.margin,
+        maxStartableMass_t: Math.floor(m.maxStartableMassKg / 1000),
+        peakCouplerForce_kN: o.peakCouplerForce_kN,
+        timeToTarget_s: o.timeToTarget_s,
+        assistance: o.assistance,
+        divide: o.divide,
+        ...(o.searchCapped ? { searchCapped: true } : {}),
+      };
+    } catch (e) {
+      return { ...described, error: `${d.where}: internal error: ${(e as Error).message}`, errorKind: "internal" };
+    } finally {
+      tick();
+    }
+  });
+  return { rows: await Promise.all(rows), stats };
+}

@@ -1,0 +1,78 @@
+/**
+ * The work of a batch, as jobs a worker thread (or the calling thread) runs: checking one departure (plan,
+ * verdict and the cheapest assistance) and finding the largest startable mass of one case. Jobs and results
+ * are plain data (they cross a thread boundary by structured clone); results are already in output units.
+ */
+import { searchAssistance } from "../../core/assistance.js";
+import { maxStartableMassKg, planStart } from "../../core/planner/index.js";
+import type { LocomotiveSpec, Reason, StartCase, Verdict } from "../../core/types.js";
+import { assistanceReport } from "../../profiles/assistanceReport.js";
+import { r, type AssistanceReport, type DivideReport } from "../../profiles/report.js";
+
+/** Planner runs a departure's assistance search may use for the options, and for dividing the train. */
+export const CHECK_ASSISTANCE_BUDGET = 12;
+export const CHECK_DIVIDE_BUDGET = 6;
+
+export type Job =
+  | { kind: "check"; case: StartCase; helper?: LocomotiveSpec }
+  | { kind: "mass"; case: StartCase };
+
+export interface CheckOutcome {
+  kind: "check";
+  verdict: Verdict;
+  reasons: Reason[];
+  margin: number;
+  peakCouplerForce_kN: number;
+  timeToTarget_s: number | null;
+  /** The cheapest option that starts, or null. */
+  assistance: AssistanceReport | null;
+  /** When no option works: the divided train. */
+  divide: DivideReport | null;
+  /** The search was cut short by its cap. */
+  searchCapped: boolean;
+  elapsedMs: number;
+}
+
+export interface MassOutcome {
+  kind: "mass";
+  maxStartableMassKg: number;
+  elapsedMs: number;
+}
+
+export type JobOutcome = CheckOutcome | MassOutcome;
+
+/** Run one job on this thread. */
+export function runJob(job: Job): JobOutcome {
+  const t0 = performance.now();
+  if (job.kind === "mass") return { kind: "mass", maxStartableMassKg: maxStartableMassKg(job.case), elapsedMs: performance.now() - t0 };
+  const c = job.case;
+  const p = planStart(c, { skipMassSearch: true });
+  let assistance: AssistanceReport | null = null;
+  let divide: DivideReport | null = null;
+  let searchCapped = false;
+  if (p.verdict !== "starts") {
+    const a = searchAssistance(c, {
+      baseVerdict: p.verdict,
+      budget: CHECK_ASSISTANCE_BUDGET,
+      divideBudget: CHECK_DIVIDE_BUDGET,
+      maxFullPlans: 1,
+      ...(job.helper ? { spec: job.helper } : {}),
+    });
+    const rep = assistanceReport(a, CHECK_ASSISTANCE_BUDGET + CHECK_DIVIDE_BUDGET);
+    assistance = rep.assistance[0] ?? null;
+    divide = rep.divide;
+    searchCapped = !a.complete;
+  }
+  return {
+    kind: "check",
+    verdict: p.verdict,
+    reasons: p.reasons,
+    margin: r(p.margin, 3),
+    peakCouplerForce_kN: r(p.peakCouplerForceN / 1000, 0),
+    timeToTarget_s: p.timeToTargetS === null ? null : r(p.timeToTargetS, 0),
+    assistance,
+    divide,
+    searchCapped,
+    elapsedMs: performance.now() - t0,
+  };
+}

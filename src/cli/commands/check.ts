@@ -1,0 +1,121 @@
+/** `taut check DEPARTURES.csv|json` — a day's departures checked at once, in parallel worker threads. */
+import { STANDARD_CAUTIONS } from "../../core/cautions.js";
+import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "../errors.js";
+import { library, readNotesFiles } from "../files.js";
+import type { Command, Output } from "../main.js";
+import { checkDepartures, type CheckProgress } from "../batch/checkDepartures.js";
+import { readDepartures } from "../batch/departures.js";
+import { CHECK_ASSISTANCE_BUDGET, CHECK_DIVIDE_BUDGET } from "../batch/jobs.js";
+import { defaultPoolSize, JobPool } from "../batch/pool.js";
+import { checkCsv, renderCheck, summarise } from "../render/check.js";
+import { helperSpec } from "./plan.js";
+
+export const checkCommand: Command = {
+  name: "check",
+  summary: "batch check of departures: verdict, margin, largest mass, cheapest assistance",
+  usage: "taut check DEPARTURES.csv|DEPARTURES.json [--notes FILE]... [--helper ID] [--jobs N] [--quiet] [--json|--csv]",
+  help: [
+    "Checks many departures at once: one row each with the verdict, its reasons, the margin (available ÷",
+    "needed), the largest trailing mass that still starts, and the cheapest assistance that makes it start",
+    "(one or two more units of the lead unit's profile, or --helper; when none works, dividing the train).",
+    "",
+    "Input:",
+    "  CSV   a header line naming the columns id,case,rail,sand (and optionally location); `case` is a",
+    "        start-case file relative to the CSV, `rail` and `sand` (yes/no) override its conditions,",
+    "        `location` (a location note id) its location. Empty cells keep the case's own values.",
+    "  JSON  a list of start cases ([ {...}, {...} ]), each with an optional \"id\".",
+    "A case's location may name a location note by id (built-in, or from --notes).",
+    "",
+    "A row that cannot be read is reported with its line (CSV, the header is line 1) or its index (JSON,",
+    "from 0); the other rows are still answered. Identical departures are worked out once.",
+    "",
+    "Options:",
+    "  --json        rows as JSON: { schema, departures: [...], summary, cautions }",
+    "  --csv         rows as CSV",
+    "  --notes FILE  location notes (a taut/location@1 note or a taut/notes-bundle@1 bundle); repeatable",
+    "  --helper ID   locomotive profile the assistance options add (default: each train's lead unit's)",
+    `  --jobs N      worker threads (default: the available cores, here ${defaultPoolSize()}; 1 runs on this thread)`,
+    "  --quiet       no progress lines on stderr",
+    "",
+    `Each departure's assistance search is capped at ${CHECK_ASSISTANCE_BUDGET} planner runs for the options and ${CHECK_DIVIDE_BUDGET} for dividing`,
+    "the train; `taut plan` on the case lists every option that starts.",
+    "",
+    "Exit codes: 0 when every row was answered; 2 when some rows were bad input (they are listed, the",
+    "others still answered) or the file itself cannot be read; 1 when the calculation failed on a row.",
+  ].join("\n"),
+  options: {
+    json: { type: "boolean" },
+    csv: { type: "boolean" },
+    notes: { type: "string", multiple: true },
+    helper: { type: "string" },
+    jobs: { type: "string" },
+    quiet: { type: "boolean" },
+  },
+  async run({ values, positionals }, io) {
+    const path = positionals[0];
+    if (!path) throw new InputError(`a departures file is needed\n  usage: ${checkCommand.usage}`);
+    if (positionals.length > 1) throw new InputError(`one departures file at a time (got ${positionals.length})`);
+    if (values.json && values.csv) throw new InputError("--json and --csv: choose one");
+    const jobs = jobsOption(values.jobs as string | undefined);
+    const lib = library(readNotesFiles((values.notes as string[] | undefined) ?? []));
+    const helper = helperSpec(lib, values.helper as string | undefined);
+    const deps = readDepartures(path, lib);
+    const t0 = performance.now();
+    const pool = new JobPool(jobs);
+    const progress = values.quiet ? undefined : progressReporter(io, "departures answered");
+    let result;
+    try {
+      result = await checkDepartures(deps, pool, { ...(helper ? { helper } : {}), ...(progress ? { onProgress: progress } : {}) });
+    } finally {
+      await pool.close();
+    }
+    const elapsedS = (performance.now() - t0) / 1000;
+    const { rows, stats } = result;
+    const summary = {
+      ...summarise(rows),
+      elapsed_s: Math.round(elapsedS * 10) / 10,
+      workers: jobs,
+      distinctChecks: stats.checks,
+      distinctMassSearches: stats.massSearches,
+      medianCheck_ms: Math.round(median(stats.checkMs)),
+      medianMassSearch_ms: Math.round(median(stats.massMs)),
+    };
+    if (values.json) io.out(JSON.stringify({ schema: "taut/departures-check@1", file: path, departures: rows, summary, cautions: STANDARD_CAUTIONS }, null, 2));
+    else if (values.csv) io.out(checkCsv(rows));
+    else io.out(renderCheck(rows, STANDARD_CAUTIONS));
+    if (!values.quiet) io.err(`taut check: ${rows.length} departures in ${summary.elapsed_s} s (${jobs} worker${jobs === 1 ? "" : "s"}; ${stats.checks} distinct checks, ${stats.massSearches} mass searches)`);
+    if (summary.internalErrors > 0) return EXIT_INTERNAL;
+    return summary.badRows > 0 ? EXIT_BAD_INPUT : EXIT_OK;
+  },
+};
+
+function median(xs: readonly number[]): number {
+  if (xs.length === 0) return 0;
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m]! : 0.5 * (s[m - 1]! + s[m]!);
+}
+
+/** --jobs N: a whole number from 1 to 64; default the available cores. */
+export function jobsOption(v: string | undefined): number {
+  if (v === undefined) return defaultPoolSize();
+  const n = Number(v);
+  if (!Number.isInteger(n) || n < 1 || n > 64) throw new InputError(`--jobs: must be a whole number from 1 to 64 (got "${v}")`);
+  return n;
+}
+
+/** Progress lines on stderr: at each tenth of the way, and at most every two seconds otherwise. */
+export function progressReporter(io: Output, what: string): (p: CheckProgress) => void {
+  const t0 = performance.now();
+  let lastTenth = 0;
+  let lastAt = t0;
+  return ({ done, total }) => {
+    const now = performance.now();
+    const tenth = Math.floor((10 * done) / total);
+    if (done < total && tenth === lastTenth && now - lastAt < 2000) return;
+    if (done === total && total === 0) return;
+    lastTenth = tenth;
+    lastAt = now;
+    io.err(`taut: ${done}/${total} ${what} (${Math.round((100 * done) / total)}%), ${((now - t0) / 1000).toFixed(1)} s`);
+  };
+}

@@ -1,0 +1,246 @@
+/** `taut table LOCATION.json --loco ID` — the load table of a location: largest startable mass per rail condition. */
+import { STANDARD_CAUTIONS } from "../../core/cautions.js";
+import { loadTableCells, type LoadTableRow } from "../../core/loadTable.js";
+import type { StartCase } from "../../core/types.js";
+import { referenceCaseFile, DEFAULT_REFERENCE_TEMPERATURE_C } from "../../notes/reference.js";
+import { loadTableRowReport } from "../../profiles/assistanceReport.js";
+import { builtinTrains } from "../../profiles/builtin.js";
+import type { Library } from "../../profiles/library.js";
+import { resolveStartCase } from "../../profiles/parse.js";
+import type { LocationNoteFile, StartCaseFile } from "../../profiles/schemas.js";
+import { InputError } from "../errors.js";
+import { library, readNotesFiles } from "../files.js";
+import type { Command } from "../main.js";
+import { JobPool } from "../batch/pool.js";
+import type { MassOutcome } from "../batch/jobs.js";
+import { csv, num, textTable } from "../table.js";
+import { wrap } from "../render/wrap.js";
+import { jobsOption, progressReporter } from "./check.js";
+import { existsSync } from "node:fs";
+
+/** Reference train when the note has none and the options say nothing: 40 loaded bogie hoppers. */
+export const TABLE_DEFAULTS = { wagons: 40, wagonType: "bogie-hopper-loaded", targetKmh: 20 } as const;
+/** Default working limit by coupling kind, kN (PHYSICS.md §4: knuckle 970 kN, screw coupling 850 kN). */
+const DEFAULT_LIMIT_KN = { knuckle: 970, screw: 850 } as const;
+
+export const tableCommand: Command = {
+  name: "table",
+  summary: "load table of a location: largest startable mass per rail condition, with and without sand",
+  usage: "taut table LOCATION.json [--note ID] --loco ID [--count N] [--wagons N] [--wagon-type ID] [--slack MM] [--limit KN] [--temperature C] [--target-kmh V] [--jobs N] [--json|--csv]",
+  help: [
+    "The largest trailing mass the locomotives start at a location, for every rail condition, without and",
+    "with sand. Every figure is a bisection over the start planner's verdict (below the static limit), so a",
+    "train just lighter than the figure starts and one just heavier does not. Twelve mass searches, run in",
+    "parallel worker threads: expect some seconds.",
+    "",
+    "LOCATION.json is a location note (taut/location@1), or a bundle (taut/notes-bundle@1) with --note ID;",
+    "a built-in note may be named by its id instead of a file.",
+    "",
+    "The train the table is for: the note's reference train when it has one (--loco and --count then replace",
+    "its locomotives); otherwise, or when any train option is given, a train of --wagons wagons of",
+    `--wagon-type (default ${TABLE_DEFAULTS.wagons} × ${TABLE_DEFAULTS.wagonType}) with roller bearings.`,
+    "",
+    "Options:",
+    "  --note ID          which note of a bundle",
+    "  --loco ID          locomotive profile at the head (needed unless the note has a reference train)",
+    "  --count N          how many of them (default 1, or the reference train's)",
+    `  --wagons N         wagons in the train (default ${TABLE_DEFAULTS.wagons})`,
+    `  --wagon-type ID    wagon type (default ${TABLE_DEFAULTS.wagonType})`,
+    "  --slack MM         free slack per coupling (default: the wagon type's)",
+    "  --limit KN         coupling working limit (default 970 kN knuckle, 850 kN screw couplings)",
+    `  --temperature C    air temperature (default ${DEFAULT_REFERENCE_TEMPERATURE_C} °C, or the reference train's)`,
+    `  --target-kmh V     speed the start must reach (default ${TABLE_DEFAULTS.targetKmh} km/h, at most the note's speed limit)`,
+    "  --jobs N           worker threads (default: the available cores; 1 runs on this thread)",
+    "  --quiet            no progress lines on stderr",
+    "  --json | --csv     machine-readable output",
+  ].join("\n"),
+  options: {
+    note: { type: "string" },
+    loco: { type: "string" },
+    count: { type: "string" },
+    wagons: { type: "string" },
+    "wagon-type": { type: "string" },
+    slack: { type: "string" },
+    limit: { type: "string" },
+    temperature: { type: "string" },
+    "target-kmh": { type: "string" },
+    jobs: { type: "string" },
+    quiet: { type: "boolean" },
+    json: { type: "boolean" },
+    csv: { type: "boolean" },
+  },
+  async run({ values, positionals }, io) {
+    const where = positionals[0];
+    if (!where) throw new InputError(`a location note file is needed\n  usage: ${tableCommand.usage}`);
+    if (positionals.length > 1) throw new InputError(`one location at a time (got ${positionals.length})`);
+    if (values.json && values.csv) throw new InputError("--json and --csv: choose one");
+    const lib = library();
+    const note = pickNote(where, values.note as string | undefined, lib);
+    const built = tableCase(note, values, lib);
+    const jobs = jobsOption(values.jobs as string | undefined);
+    const t0 = performance.now();
+    const pool = new JobPool(jobs);
+    const report = values.quiet ? () => undefined : progressReporter(io, "rows of the load table");
+    const cells = loadTableCells();
+    let done = 0;
+    let rows: LoadTableRow[];
+    try {
+      rows = await Promise.all(
+        cells.map(async ({ rail, sand }) => {
+          const c: StartCase = { ...built.c, conditions: { ...built.c.conditions, rail, sand } };
+          const o = (await pool.run({ kind: "mass", case: c })) as MassOutcome;
+          report({ done: ++done, total: cells.length });
+          return { rail, sand, maxTrailingMassKg: o.maxStartableMassKg };
+        }),
+      );
+    } finally {
+      await pool.close();
+    }
+    const elapsedS = Math.round((performance.now() - t0) / 100) / 10;
+    const out = rows.map(loadTableRowReport);
+    const table = {
+      schema: "taut/load-table@1",
+      location: { id: note.id, name: note.name },
+      locomotives: built.file.locomotives.map((l) => ({ profile: typeof l.profile === "string" ? l.profile : l.profile.id, count: l.count, position: l.position })),
+      train: {
+        source: built.source,
+        wagons: built.file.train.wagons,
+        wagonType: built.file.train.wagonType ?? null,
+        length_m: built.file.train.length_m,
+        couplerSlack_mm: built.file.train.couplerSlack_mm,
+        couplerLimit_kN: built.file.train.couplerLimit_kN,
+        bearing: built.file.train.bearing,
+        temperature_C: built.file.conditions.temperature_C,
+        target_kmh: "speed_kmh" in built.file.target ? built.file.target.speed_kmh : null,
+      },
+      ...(built.capacityT !== null ? { wagonCapacity_t: built.capacityT } : {}),
+      rows: out,
+      elapsed_s: elapsedS,
+      cautions: STANDARD_CAUTIONS,
+    };
+    if (values.json) io.out(JSON.stringify(table, null, 2));
+    else if (values.csv) io.out(csv(["rail", "sand", "maxTrailingMass_t"], out.map((r) => [r.rail, r.sand, r.maxTrailingMass_t])));
+    else io.out(renderTable(table));
+    if (!values.quiet) io.err(`taut table: ${cells.length} rows in ${elapsedS} s (${jobs} worker${jobs === 1 ? "" : "s"})`);
+    return 0;
+  },
+};
+
+/** The location note: from a note or bundle file (with --note for a bundle of several), or a built-in note's id. */
+function pickNote(where: string, id: string | undefined, lib: Library): LocationNoteFile {
+  if (!existsSync(where) && lib.locations.has(where)) return lib.locations.get(where)!;
+  const notes = readNotesFiles([where]);
+  if (id !== undefined) {
+    const n = notes.find((x) => x.id === id);
+    if (!n) throw new InputError(`--note: no note "${id}" in ${where} (it holds: ${notes.map((x) => x.id).join(", ")})`);
+    return n;
+  }
+  if (notes.length !== 1) throw new InputError(`${where} holds ${notes.length} notes: choose one with --note ID (${notes.map((x) => x.id).join(", ")})`);
+  return notes[0]!;
+}
+
+type Values = Record<string, unknown>;
+
+function numberOption(values: Values, name: string, check: (n: number) => boolean, rule: string): number | undefined {
+  const v = values[name];
+  if (v === undefined) return undefined;
+  const n = Number(v);
+  if (!Number.isFinite(n) || !check(n)) throw new InputError(`--${name}: must be ${rule} (got "${String(v)}")`);
+  return n;
+}
+
+/** The start case the table is worked out for (its mass is searched; its rail and sand are varied). */
+export function tableCase(note: LocationNoteFile, values: Values, lib: Library): { c: StartCase; file: StartCaseFile; source: "referenceTrain" | "options"; capacityT: number | null } {
+  const count = numberOption(values, "count", (n) => Number.isInteger(n) && n >= 1 && n <= 8, "a whole number from 1 to 8");
+  const wagons = numberOption(values, "wagons", (n) => Number.isInteger(n) && n >= 1 && n <= 400, "a whole number from 1 to 400");
+  const slack = numberOption(values, "slack", (n) => n >= 0 && n <= 200, "from 0 to 200 mm");
+  const limit = numberOption(values, "limit", (n) => n > 0, "greater than 0 kN");
+  const temperature = numberOption(values, "temperature", (n) => n >= -60 && n <= 60, "from -60 to 60 °C");
+  const targetKmh = numberOption(values, "target-kmh", (n) => n > 0 && n <= 200, "greater than 0 and at most 200 km/h");
+  const loco = values.loco as string | undefined;
+  const wagonTypeId = values["wagon-type"] as string | undefined;
+  if (loco !== undefined && !lib.locomotives.has(loco)) throw new InputError(`--loco: no locomotive profile "${loco}" (known: ${[...lib.locomotives.keys()].join(", ")})`);
+  const trainOptions = wagons !== undefined || wagonTypeId !== undefined || slack !== undefined || limit !== undefined;
+  const cap = (kmh: number) => Math.min(kmh, note.speedLimit_kmh ?? kmh);
+  let file: StartCaseFile;
+  let source: "referenceTrain" | "options";
+  if (note.referenceTrain && !trainOptions) {
+    const ref = { ...note.referenceTrain, ...(loco !== undefined ? { locomotive: loco } : {}), ...(count !== undefined ? { count } : {}), ...(temperature !== undefined ? { temperature_C: temperature } : {}) };
+    const r = referenceCaseFile(note, builtinTrains, ref);
+    if (!r.ok) throw new InputError(`${note.id}: the reference train cannot be used`, r.issues);
+    file = targetKmh !== undefined ? { ...r.value, target: { speed_kmh: cap(targetKmh) } } : r.value;
+    source = "referenceTrain";
+  } else {
+    if (loco === undefined) throw new InputError(`--loco ID is needed: the note "${note.id}" has no reference train (known profiles: ${[...lib.locomotives.keys()].join(", ")})`);
+    const typeId = wagonTypeId ?? TABLE_DEFAULTS.wagonType;
+    const w = lib.wagons.get(typeId);
+    if (!w) throw new InputError(`--wagon-type: no wagon type "${typeId}" (known: ${[...lib.wagons.keys()].join(", ")})`);
+    const n = wagons ?? TABLE_DEFAULTS.wagons;
+    file = {
+      schema: "taut/start-case@1",
+      locomotives: [{ profile: loco, count: count ?? 1, position: "head" }],
+      train: {
+        trailingMass_t: (n * w.maxGrossKg) / 1000,
+        wagons: n,
+        length_m: n * w.lengthM,
+        couplerSlack_mm: slack ?? w.defaultSlackM * 1000,
+        bearing: "roller",
+        couplerLimit_kN: limit ?? DEFAULT_LIMIT_KN[w.coupling],
+        wagonType: typeId,
+        slackState: "from-profile",
+      },
+      location: { segments: note.segments, frontAt_m: note.frontAt_m, clearAhead_m: note.clearAhead_m },
+      conditions: { rail: "dry", sand: false, temperature_C: temperature ?? DEFAULT_REFERENCE_TEMPERATURE_C },
+      target: { speed_kmh: cap(targetKmh ?? TABLE_DEFAULTS.targetKmh) },
+    };
+    source = "options";
+  }
+  const r = resolveStartCase(file, lib);
+  if (!r.ok) throw new InputError(`the train for the table does not fit "${note.id}"`, r.issues);
+  const wt = file.train.wagonType !== undefined ? lib.wagons.get(file.train.wagonType) : undefined;
+  return { c: r.value, file, source, capacityT: wt ? Math.round((file.train.wagons * wt.maxGrossKg) / 1000) : null };
+}
+
+interface TableReport {
+  location: { id: string; name: string };
+  locomotives: Array<{ profile: string; count: number; position: unknown }>;
+  train: { source: string; wagons: number; wagonType: string | null; length_m: number; couplerSlack_mm: number; couplerLimit_kN: number; bearing: string; temperature_C: number; target_kmh: number | null };
+  wagonCapacity_t?: number;
+  rows: Array<{ rail: string; sand: boolean; maxTrailingMass_t: number }>;
+  elapsed_s: number;
+  cautions: readonly string[];
+}
+
+function renderTable(t: TableReport): string {
+  const lines: string[] = [];
+  lines.push(`Load table — ${t.location.name}`);
+  const locos = t.locomotives.map((l) => `${l.count} × ${l.profile} ${typeof l.position === "string" ? `at the ${l.position}` : `after wagon ${(l.position as { afterWagon: number }).afterWagon}`}`).join(", ");
+  lines.push(`Locomotives: ${locos}`);
+  const tr = t.train;
+  lines.push(
+    `Train: ${tr.wagons} × ${tr.wagonType ?? "wagons"} (${num(tr.length_m)} m), slack ${num(tr.couplerSlack_mm)} mm, couplings ${num(tr.couplerLimit_kN)} kN, ${tr.bearing} bearings, ${num(tr.temperature_C)} °C; target ${num(tr.target_kmh)} km/h${tr.source === "referenceTrain" ? " (the note's reference train)" : ""}`,
+  );
+  lines.push("");
+  lines.push("Largest trailing mass that starts, t:");
+  const by = (rail: string, sand: boolean) => t.rows.find((r) => r.rail === rail && r.sand === sand)!.maxTrailingMass_t;
+  const rails = [...new Set(t.rows.map((r) => r.rail))];
+  lines.push(
+    textTable(
+      ["rail", "no sand", "sand"],
+      rails.map((rail) => [rail, num(by(rail, false)), num(by(rail, true))]),
+    )
+      .split("\n")
+      .map((l) => `  ${l}`)
+      .join("\n"),
+  );
+  const cap = t.wagonCapacity_t;
+  const above = cap === undefined ? [] : t.rows.filter((r) => r.maxTrailingMass_t > cap);
+  if (cap !== undefined && above.length > 0) {
+    lines.push(...wrap(`  Above what these wagons carry (${cap} t), so the wagons, not the locomotives, limit: ${above.map((r) => `${r.rail}${r.sand ? " with sand" : ""}`).join(", ")}.`, 100, "    "));
+  }
+  lines.push(`  (0 means not even a lightly loaded train of this make-up starts.)`);
+  lines.push("");
+  lines.push("Cautions:");
+  for (const c of t.cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
+  return lines.join("\n");
+}

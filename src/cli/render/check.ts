@@ -1,0 +1,123 @@
+/** Readable and CSV forms of a departures check. */
+import type { DepartureRow } from "../batch/checkDepartures.js";
+import { csv, num, textTable } from "../table.js";
+import { divideLine, optionLine, VERDICT_WORDS } from "./assistance.js";
+import { wrap } from "./wrap.js";
+
+/** The remedy of a row in a few words: the cheapest option, or dividing the train. */
+export function remedyText(r: DepartureRow): string {
+  if (r.verdict === undefined || r.verdict === "starts") return "";
+  if (r.assistance) return optionLine(r.assistance);
+  if (r.divide) return divideLine(r.divide);
+  return "none found";
+}
+
+function where(r: DepartureRow): string {
+  return r.line !== undefined ? `line ${r.line}` : r.index !== undefined ? `[${r.index}]` : "";
+}
+
+export interface CheckSummary {
+  departures: number;
+  starts: number;
+  marginal: number;
+  needsAssistance: number;
+  badRows: number;
+  internalErrors: number;
+}
+
+export function summarise(rows: readonly DepartureRow[]): CheckSummary {
+  const count = (f: (r: DepartureRow) => boolean) => rows.filter(f).length;
+  return {
+    departures: rows.length,
+    starts: count((r) => r.verdict === "starts"),
+    marginal: count((r) => r.verdict === "marginal"),
+    needsAssistance: count((r) => r.verdict === "needs-assistance"),
+    badRows: count((r) => r.errorKind === "input"),
+    internalErrors: count((r) => r.errorKind === "internal"),
+  };
+}
+
+export function renderCheck(rows: readonly DepartureRow[], cautions: readonly string[]): string {
+  const lines: string[] = [];
+  const good = rows.filter((r) => !r.error);
+  lines.push(
+    textTable(
+      ["id", "row", "rail", "sand", "mass t", "verdict", "why", "margin", "max t", "cheapest assistance"],
+      good.map((r) => [
+        r.id,
+        where(r),
+        r.rail ?? "",
+        r.sand ? "yes" : "no",
+        num(r.trailingMass_t),
+        VERDICT_WORDS[r.verdict!].toLowerCase(),
+        (r.reasons ?? []).join(", ") || "—",
+        num(r.margin, 2),
+        num(r.maxStartableMass_t),
+        remedyText(r) || "—",
+      ]),
+    ),
+  );
+  const bad = rows.filter((r) => r.error);
+  if (bad.length > 0) {
+    lines.push("");
+    lines.push(`Rows not answered (${bad.length}):`);
+    for (const r of bad) lines.push(...wrap(`  - ${r.error}`, 110, "    "));
+  }
+  const s = summarise(rows);
+  lines.push("");
+  lines.push(
+    `${s.departures} departures: ${s.starts} start, ${s.marginal} marginal, ${s.needsAssistance} need assistance${s.badRows ? `, ${s.badRows} bad rows` : ""}${s.internalErrors ? `, ${s.internalErrors} failed` : ""}.`,
+  );
+  if (rows.some((r) => r.searchCapped)) lines.push("Some assistance searches were cut short by their cap (marked in --json as searchCapped); `taut plan` on the case shows more.");
+  lines.push("");
+  lines.push("Cautions:");
+  for (const c of cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
+  return lines.join("\n");
+}
+
+export const CHECK_CSV_HEADER = [
+  "id",
+  "line",
+  "index",
+  "rail",
+  "sand",
+  "trailingMass_t",
+  "verdict",
+  "reasons",
+  "margin",
+  "maxStartableMass_t",
+  "peakCouplerForce_kN",
+  "timeToTarget_s",
+  "assistance",
+  "assistanceVerdict",
+  "assistancePeakCouplerForce_kN",
+  "divideFirstWagons",
+  "divideFirstMass_t",
+  "error",
+] as const;
+
+export function checkCsv(rows: readonly DepartureRow[]): string {
+  return csv(
+    CHECK_CSV_HEADER,
+    rows.map((r) => [
+      r.id,
+      r.line,
+      r.index,
+      r.rail,
+      r.sand,
+      r.trailingMass_t,
+      r.verdict,
+      r.reasons?.join(";"),
+      r.margin,
+      r.maxStartableMass_t,
+      r.peakCouplerForce_kN,
+      r.timeToTarget_s,
+      r.assistance ? optionLine(r.assistance) : "",
+      r.assistance?.verdict,
+      r.assistance?.peakCouplerForce_kN,
+      r.divide?.firstPart.wagons,
+      r.divide?.firstPart.trailingMass_t,
+      r.error,
+    ]),
+  );
+}

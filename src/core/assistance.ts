@@ -1,0 +1,254 @@
+/**
+ * The assistance check: when a train does not start (or only marginally), which added locomotives make it
+ * start — at the head, at the rear, or mid-train after a wagon, one or two units, working in step with the
+ * train's own (the same notch). Every option is screened by the static check, then judged by the start
+ * planner, which runs the longitudinal dynamics; the options returned carry a full, verified plan.
+ * When no option with up to two added units works, the train is divided: the largest first part that starts
+ * (common practice: "doubling", PRACTICE.md, Alaska Railroad manual p. 64-18 [P]).
+ */
+import { middleWagon, positionWords, proportionalSplitWagon, withAddedUnits, leadSpec, type AddedUnits } from "./assistPlacement.js";
+import { divideTrain, type DividedTrain } from "./divideTrain.js";
+import { planStart, type PlanResult } from "./planner/index.js";
+import { staticCheck } from "./staticCheck.js";
+import type { LocomotiveSpec, Reason, StartCase, Verdict } from "./types.js";
+
+/** One way of adding units, and what the planner says of it. */
+export interface AssistanceOption {
+  /** The units added (all of the same profile). */
+  added: AddedUnits[];
+  /** Number of units added. */
+  units: number;
+  /** The case with the units added, as it was planned. */
+  case: StartCase;
+  verdict: Verdict;
+  reasons: Reason[];
+  /** Smallest margin (available ÷ needed) of the planned start. */
+  margin: number;
+  /** Largest coupler tension anywhere in the train during the planned start, N. */
+  peakCouplerForceN: number;
+  /** Largest coupler compression anywhere in the train, N, and the coupling (0 = behind the first vehicle). */
+  peakCompressionN: number;
+  peakCompressionAt: number;
+  /** Largest compression in the front quarter of the train's couplings, N (shoving raises it). */
+  headCompressionN: number;
+  /** Seconds from taking power to the target; null when not reached. */
+  timeToTargetS: number | null;
+  /** Plain words on what to watch with this option (e.g. shoving from the rear). */
+  note: string;
+  /** The full plan of the option (absent for options judged only by a verdict run). */
+  plan?: PlanResult;
+}
+
+/** An option that does not make the train start, with the verdict that ruled it out. */
+export interface RejectedOption {
+  added: AddedUnits[];
+  units: number;
+  verdict: Verdict;
+  reasons: Reason[];
+  /** "static" when the static check already ruled it out, "planner" when the planned start did. */
+  by: "static" | "planner";
+}
+
+export interface AssistanceResult {
+  /** False when the case already starts as it stands (nothing searched). */
+  needed: boolean;
+  /** The profile the options add. */
+  spec: LocomotiveSpec;
+  /** Options that make the verdict `starts`, cheapest first (fewest units, then lowest peak coupler force). */
+  options: AssistanceOption[];
+  rejected: RejectedOption[];
+  /** The largest first part that starts with the train's own locomotives, when no option works. */
+  divide: DividedTrain | null;
+  /** Planner runs used (verdict runs, full plans and dividing). */
+  plannerRuns: number;
+  /** False when the budget ran out before every candidate was judged. */
+  complete: boolean;
+}
+
+export interface AssistanceOptions {
+  /** Profile to add; default the lead unit's. */
+  spec?: LocomotiveSpec;
+  /** Most units to add (1 or 2); default 2. */
+  maxUnits?: number;
+  /** Most options to confirm with a full, verified plan (the options returned); default 3. */
+  maxFullPlans?: number;
+  /** Most planner runs for the options (verdict runs and full plans); default 16. */
+  budget?: number;
+  /** Most planner runs for dividing the train when no option works; default 8. */
+  divideBudget?: number;
+  /** Also look at two units when one already works; default false (the cheapest level only). */
+  allLevels?: boolean;
+  /** The case's own verdict when the caller already has it (saves a planner run); `starts` means no search. */
+  baseVerdict?: Verdict;
+  /** Search for a divided train when no option works; default true. */
+  divide?: boolean;
+  shouldStop?: () => boolean;
+  onProgress?: (fraction: number) => void;
+}
+
+/** A candidate placement before it is judged. */
+interface Candidate {
+  added: AddedUnits[];
+  units: number;
+  case: StartCase;
+  staticPeakN: number;
+}
+
+/** The candidate placements of `units` added units (1 or 2), duplicates removed. */
+export function candidatePlacements(c: StartCase, spec: LocomotiveSpec, units: number): AddedUnits[][] {
+  const mid = (n: number, base: StartCase = c): AddedUnits => ({ count: n, position: { afterWagon: proportionalSplitWagon(base, spec, n) } });
+  const middle = (n: number): AddedUnits => ({ count: n, position: { afterWagon: middleWagon(c) } });
+  const out: AddedUnits[][] = [];
+  const wagons = c.train.wagons;
+  if (units === 1) {
+    out.push([{ count: 1, position: "head" }], [{ count: 1, position: "rear" }]);
+    if (wagons >= 2) out.push([mid(1)], [middle(1)]);
+  } else {
+    out.push([{ count: 2, position: "head" }], [{ count: 2, position: "rear" }]);
+    if (wagons >= 2) out.push([mid(2)], [middle(2)]);
+    out.push([{ count: 1, position: "head" }, { count: 1, position: "rear" }]);
+    if (wagons >= 2) {
+      const rear1 = withAddedUnits(c, spec, [{ count: 1, position: "rear" }]);
+      out.push([mid(1, rear1), { count: 1, position: "rear" }]);
+      const head1 = withAddedUnits(c, spec, [{ count: 1, position: "head" }]);
+      out.push([{ count: 1, position: "head" }, mid(1, head1)]);
+    }
+  }
+  const seen = new Set<string>();
+  return out.filter((adds) => {
+    const key = JSON.stringify(adds);
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+}
+
+/** Search for assistance. Throws the planner's "cancelled" error when `shouldStop` says so. */
+export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): AssistanceResult {
+  const spec = opts.spec ?? leadSpec(c);
+  const maxUnits = Math.max(1, Math.min(2, opts.maxUnits ?? 2));
+  const budget = opts.budget ?? 16;
+  const maxFull = opts.maxFullPlans ?? 3;
+  const stop = opts.shouldStop;
+  const planOpts = stop ? { shouldStop: stop } : {};
+  let runs = 0;
+  let complete = true;
+  const result: AssistanceResult = { needed: true, spec, options: [], rejected: [], divide: null, plannerRuns: 0, complete: true };
+
+  let base = opts.baseVerdict;
+  if (base === undefined) {
+    base = staticCheck(c).verdict;
+    if (base === "starts") {
+      base = planStart(c, { ...planOpts, skipMassSearch: true, skipVerification: true, verdictOnly: true }).verdict;
+      runs++;
+    }
+  }
+  if (base === "starts") return { ...result, needed: false, plannerRuns: runs };
+
+  for (let units = 1; units <= maxUnits; units++) {
+    if (result.options.length > 0 && !opts.allLevels) break;
+    const candidates = candidatePlacements(c, spec, units).map((added) => candidateOf(c, spec, added, units));
+    // Static screen: the planner cannot do better than the static check.
+    const screened: Candidate[] = [];
+    for (const k of candidates) {
+      const st = staticCheck(k.case);
+      if (st.verdict !== "starts") result.rejected.push({ added: k.added, units, verdict: st.verdict, reasons: st.reasons, by: "static" });
+      else screened.push({ ...k, staticPeakN: st.peakTensionN });
+    }
+    // Verdict runs, easiest on the couplers first, so a short budget keeps the likeliest options; one run is
+    // kept back for the full plan of an option that passes.
+    screened.sort((a, b) => a.staticPeakN - b.staticPeakN);
+    const passing: Array<{ k: Candidate; peakN: number }> = [];
+    for (const k of screened) {
+      if (runs >= budget - 1) {
+        complete = false;
+        break;
+      }
+      const p = planStart(k.case, { ...planOpts, skipMassSearch: true, skipVerification: true, verdictOnly: true });
+      runs++;
+      if (p.verdict === "starts") passing.push({ k, peakN: p.peakCouplerForceN });
+      else result.rejected.push({ added: k.added, units, verdict: p.verdict, reasons: p.reasons, by: "planner" });
+    }
+    opts.onProgress?.(units / (maxUnits + 1));
+    // Full, verified plans, lowest coupler force (in the verdict run) first, until `maxFull` are confirmed.
+    passing.sort((a, b) => a.peakN - b.peakN);
+    let confirmed = 0;
+    for (const { k } of passing) {
+      if (confirmed >= maxFull) break;
+      if (runs >= budget) {
+        complete = false;
+        break;
+      }
+      const p = planStart(k.case, { ...planOpts, skipMassSearch: true });
+      runs++;
+      if (p.verdict === "starts") {
+        result.options.push(optionOf(k, p));
+        confirmed++;
+      } else result.rejected.push({ added: k.added, units, verdict: p.verdict, reasons: p.reasons, by: "planner" });
+    }
+  }
+  result.options.sort((a, b) => a.units - b.units || a.peakCouplerForceN - b.peakCouplerForceN);
+
+  if (result.options.length === 0 && opts.divide !== false) {
+    result.divide = divideTrain(c, { budget: opts.divideBudget ?? 8, ...(stop ? { shouldStop: stop } : {}) });
+    runs += result.divide.plannerRuns;
+  }
+  opts.onProgress?.(1);
+  return { ...result, plannerRuns: runs, complete };
+}
+
+function candidateOf(c: StartCase, spec: LocomotiveSpec, added: AddedUnits[], units: number): Candidate {
+  return { added, units, case: withAddedUnits(c, spec, added), staticPeakN: 0 };
+}
+
+function optionOf(k: Candidate, p: PlanResult): AssistanceOption {
+  const comp = p.couplerCompressionPeaksN;
+  let at = 0;
+  for (let j = 1; j < comp.length; j++) if (comp[j]! > comp[at]!) at = j;
+  const front = Math.max(1, Math.ceil(comp.length / 4));
+  let head = 0;
+  for (let j = 0; j < front && j < comp.length; j++) head = Math.max(head, comp[j]!);
+  return {
+    added: k.added,
+    units: k.units,
+    case: k.case,
+    verdict: p.verdict,
+    reasons: p.reasons,
+    margin: p.margin,
+    peakCouplerForceN: p.peakCouplerForceN,
+    peakCompressionN: comp.length > 0 ? comp[at]! : 0,
+    peakCompressionAt: at,
+    headCompressionN: head,
+    timeToTargetS: p.timeToTargetS,
+    note: noteOf(k.added, comp.length, at, comp.length > 0 ? comp[at]! : 0),
+    plan: p,
+  };
+}
+
+/**
+ * What to watch: pushing units put the couplings ahead of them in compression; shoving from the rear risks
+ * lateral forces at the head of the train, especially with light wagons there [P: Alaska Railroad, Air Brake
+ * and Train Handling Manual, 1996, §64.8]. Mid-train and rear units work in step with the head.
+ */
+function noteOf(added: readonly AddedUnits[], couplings: number, at: number, peakN: number): string {
+  const pushing = added.some((a) => a.position !== "head");
+  if (!pushing) return "All power at the head: the head couplings carry the whole train's pull.";
+  const where = couplings > 0 ? (at < couplings / 3 ? "near the head" : at < (2 * couplings) / 3 ? "mid-train" : "near the rear") : "";
+  const kN = Math.round(peakN / 1000);
+  const place = (a: AddedUnits) => (typeof a.position === "string" ? `at the ${a.position}` : positionWords(a.position));
+  const units = added.reduce((s, a) => s + a.count, 0);
+  const who =
+    added.length > 1
+      ? `The units added (${added.map((a) => `${a.count} ${place(a)}`).join(", ")}) work`
+      : units === 1
+        ? `The unit added ${place(added[0]!)} works`
+        : `The ${units} units added ${place(added[0]!)} work`;
+  const rear = added.some((a) => a.position === "rear");
+  return [
+    `${who} in step with the head (same notch).`,
+    `Peak compression ${kN} kN ${where} (coupling ${at + 1} of ${couplings}).`,
+    rear ? "Shoving from the rear raises compression ahead of the pushing units: watch lateral forces on curves, especially with light wagons near the head." : "",
+  ]
+    .filter((s) => s.length > 0)
+    .join(" ");
+}

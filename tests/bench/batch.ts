@@ -1,0 +1,112 @@
+/**
+ * Batch benchmark (issue: assistance, load tables, batch departures): 500 departures of the demo trains
+ * through the real command line (`node src/cli/taut.mjs check`, worker pool of the available cores) — target
+ * ≤ 60 s on a 2-core machine — and a load table. Figures, not assertions.
+ *
+ *  1. 500 CSV rows drawn (seeded) from the three demo cases under every rail condition, with and without sand:
+ *     the CSV format varies only rail and sand, so at most 36 distinct departures; identical ones are worked
+ *     out once.
+ *  2. 100 JSON departures that are all different (the trailing mass varies too): the cost per departure when
+ *     nothing is shared, and what 500 such would take.
+ *  3. `taut table` for a demo location (12 mass searches in the pool), and the same table on one thread.
+ */
+import { spawnSync } from "node:child_process";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { RAIL_CONDITIONS } from "../../src/core/types.js";
+import { loadTable } from "../../src/core/loadTable.js";
+import { tableCase } from "../../src/cli/commands/table.js";
+import { builtinCaseJson, builtinLibrary, builtinLocations } from "../../src/profiles/builtin.js";
+import { heading, line } from "./util.js";
+
+const repo = fileURLToPath(new URL("../../", import.meta.url));
+
+/** A small seeded generator (Park–Miller), so every run checks the same departures. */
+function seeded(seed: number): () => number {
+  let s = seed;
+  return () => (s = (s * 48271) % 2147483647) / 2147483647;
+}
+
+interface Summary {
+  departures: number;
+  starts: number;
+  marginal: number;
+  needsAssistance: number;
+  badRows: number;
+  elapsed_s: number;
+  workers: number;
+  distinctChecks: number;
+  distinctMassSearches: number;
+  medianCheck_ms: number;
+  medianMassSearch_ms: number;
+}
+
+function runCheck(file: string): { wallS: number; summary: Summary } {
+  const t0 = performance.now();
+  const r = spawnSync(process.execPath, ["src/cli/taut.mjs", "check", file, "--json", "--quiet"], { cwd: repo, encoding: "utf8", maxBuffer: 1 << 28 });
+  const wallS = (performance.now() - t0) / 1000;
+  if (r.status !== 0) throw new Error(`taut check failed (${r.status}): ${r.stderr}`);
+  return { wallS, summary: (JSON.parse(r.stdout) as { summary: Summary }).summary };
+}
+
+export function run(): void {
+  const dir = mkdtempSync(join(tmpdir(), "taut-bench-"));
+  try {
+    const rnd = seeded(20261012);
+    const cases = builtinCaseJson.map((j) => `${repo}profiles/cases/${(j as { id: string }).id}.json`);
+    const rows = ["id,case,rail,sand"];
+    for (let k = 1; k <= 500; k++) {
+      const c = cases[Math.floor(rnd() * cases.length)]!;
+      const rail = RAIL_CONDITIONS[Math.floor(rnd() * RAIL_CONDITIONS.length)]!;
+      rows.push(`dep-${String(k).padStart(3, "0")},${c},${rail},${rnd() < 0.5 ? "yes" : "no"}`);
+    }
+    const csvPath = join(dir, "day-500.csv");
+    writeFileSync(csvPath, `${rows.join("\n")}\n`);
+
+    heading("Batch — taut check, 500 departures of the demo trains (CSV; real process, worker pool)");
+    const a = runCheck(csvPath);
+    const s = a.summary;
+    line("wall time, 500 departures", `${a.wallS.toFixed(1)} s`, `target ≤ 60 s; ${s.workers} workers`);
+    line("per departure (wall ÷ 500)", `${((1000 * a.wallS) / 500).toFixed(0)} ms`);
+    line("distinct checks / mass searches", `${s.distinctChecks} / ${s.distinctMassSearches}`, "identical departures are worked out once");
+    line("median per distinct check (plan + assistance)", `${s.medianCheck_ms} ms`);
+    line("median per mass search", `${s.medianMassSearch_ms} ms`);
+    line("verdicts", `${s.starts}/${s.marginal}/${s.needsAssistance}`, "starts / marginal / needs assistance");
+
+    // 100 departures, every one different: the mass varies in 1 % steps as well as rail and sand.
+    const lib = builtinCaseJson as Array<Record<string, unknown>>;
+    const distinct = Array.from({ length: 100 }, (_, k) => {
+      const base = lib[k % lib.length]!;
+      const train = base.train as { trailingMass_t: number };
+      return {
+        ...base,
+        id: `var-${k}`,
+        train: { ...train, trailingMass_t: Math.round(train.trailingMass_t * (0.8 + 0.01 * ((k * 7) % 41))) },
+        conditions: { ...(base.conditions as object), rail: RAIL_CONDITIONS[k % RAIL_CONDITIONS.length], sand: k % 4 < 2 },
+      };
+    });
+    const jsonPath = join(dir, "distinct-100.json");
+    writeFileSync(jsonPath, JSON.stringify(distinct));
+    heading("Batch — 100 departures, all different (JSON; nothing shared but mass searches of the same train and conditions)");
+    const b = runCheck(jsonPath);
+    line("wall time, 100 departures", `${b.wallS.toFixed(1)} s`, `${b.summary.distinctChecks} distinct checks, ${b.summary.distinctMassSearches} mass searches`);
+    line("per departure (wall ÷ 100)", `${((1000 * b.wallS) / 100).toFixed(0)} ms`, `500 such ≈ ${((5 * b.wallS)).toFixed(0)} s`);
+    line("median per distinct check", `${b.summary.medianCheck_ms} ms`);
+
+    heading("Load table — taut table ashvale-loop-up --loco illustrative-6axle-3000 (40 loaded hoppers; 12 mass searches)");
+    const t0 = performance.now();
+    const t = spawnSync(process.execPath, ["src/cli/taut.mjs", "table", "ashvale-loop-up", "--loco", "illustrative-6axle-3000", "--json", "--quiet"], { cwd: repo, encoding: "utf8" });
+    if (t.status !== 0) throw new Error(`taut table failed: ${t.stderr}`);
+    line("wall time, command line (worker pool)", `${((performance.now() - t0) / 1000).toFixed(1)} s`);
+    const note = builtinLocations.find((n) => n.id === "ashvale-loop-up")!;
+    const c = tableCase(note, { loco: "illustrative-6axle-3000" }, builtinLibrary()).c;
+    loadTable(c); // warm-up
+    const t1 = performance.now();
+    loadTable(c);
+    line("one thread, in process (warm)", `${((performance.now() - t1) / 1000).toFixed(1)} s`);
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
