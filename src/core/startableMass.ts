@@ -24,7 +24,12 @@ export interface MassSearchOptions {
   ceilingKg?: number;
   /** A mass known not to be exceeded (e.g. the static limit): tried first, and the search stays below it. */
   upperBoundKg?: number;
+  /** A cheap estimate of the answer: the bracket is built around it in steps of a few per cent. */
+  guessKg?: number;
 }
+
+/** Bracket step around a guess: ×/÷ this factor until the verdict changes. */
+const GUESS_STEP = 1.04;
 
 /**
  * Largest trailing mass (kg) for which `starts(case)` holds; 0 when even a near-empty train does not
@@ -41,13 +46,38 @@ export function largestStartableMassKg(c: StartCase, starts: (c: StartCase) => b
     // The bound itself usually holds (when the static limit is what binds): one evaluation then.
     if (ok(bound)) return bound;
   }
-  if (!ok(floorKg)) return 0;
-  let lo = floorKg;
-  let hi = bound ?? Math.max(c.train.trailingMassKg, 2 * floorKg);
-  while (bound === undefined && ok(hi)) {
-    lo = hi;
-    if (hi >= ceiling) return ceiling;
-    hi = Math.min(ceiling, hi * 2);
+  let lo: number;
+  let hi: number;
+  const guess = opts.guessKg;
+  if (guess !== undefined && guess > floorKg && (bound === undefined || guess < bound)) {
+    // Bracket around the estimate: a few evaluations when it is close.
+    const top = bound ?? ceiling;
+    if (ok(guess)) {
+      lo = guess;
+      hi = Math.min(top, guess * GUESS_STEP);
+      while (hi < top && ok(hi)) {
+        lo = hi;
+        hi = Math.min(top, hi * GUESS_STEP);
+      }
+      if (hi >= top && bound === undefined && ok(hi)) return hi;
+    } else {
+      hi = guess;
+      lo = Math.max(floorKg, guess / GUESS_STEP);
+      while (lo > floorKg && !ok(lo)) {
+        hi = lo;
+        lo = Math.max(floorKg, lo / GUESS_STEP);
+      }
+      if (lo <= floorKg && !ok(floorKg)) return 0;
+    }
+  } else {
+    if (!ok(floorKg)) return 0;
+    lo = floorKg;
+    hi = bound ?? Math.max(c.train.trailingMassKg, 2 * floorKg);
+    while (bound === undefined && ok(hi)) {
+      lo = hi;
+      if (hi >= ceiling) return ceiling;
+      hi = Math.min(ceiling, hi * 2);
+    }
   }
   const rel = opts.relativeTolerance ?? 0.005;
   while (hi - lo > Math.min(tol, Math.max(MIN_TOLERANCE_KG, rel * lo))) {

@@ -1,0 +1,74 @@
+/**
+ * The app shell: a top bar (name, screen, offline state), the screen, and a bar of large tabs generated
+ * from the screen registry — a rail on the left in landscape, along the bottom in portrait. While the
+ * device reports movement (and the user allowed the lock), a notice covers every control.
+ */
+import { createEffect, createMemo, For, Show, Suspense, type JSX } from "solid-js";
+import { Dynamic } from "solid-js/web";
+import { Icon } from "./components/Icon.js";
+import { OfflineStatus, UpdatePrompt } from "./components/OfflineStatus.js";
+import { AppContext, type AppContextValue } from "./context.js";
+import { show } from "./format.js";
+import type { ScreenEntry } from "./screens/registry.js";
+
+export function App(props: { state: AppContextValue; screens: readonly ScreenEntry[] }): JSX.Element {
+  const s = props.state;
+  const current = createMemo(() => props.screens.find((x) => x.id === s.nav.screen()) ?? props.screens[0]!);
+  const full = () => current().fullScreen === true;
+  return (
+    <AppContext.Provider value={s}>
+      <div
+        class="app"
+        classList={{ "full-screen": full() }}
+        // While moving, nothing behind the notice can be reached, by touch, keyboard or assistive technology.
+        ref={(el) => createEffect(() => el.toggleAttribute("inert", s.motion.moving()))}
+        aria-hidden={s.motion.moving() ? "true" : undefined}
+      >
+        <Show when={!full()}>
+          <header class="topbar">
+            <span class="brand" aria-label="Taut">
+              <svg width="32" height="32" viewBox="0 0 32 32" aria-hidden="true">
+                <rect width="32" height="32" rx="7" class="brand-bg" />
+                <path d="M6 11h20 M16 11v14" class="brand-mark" />
+                <circle cx="6" cy="11" r="2.6" class="brand-dot" />
+                <circle cx="26" cy="11" r="2.6" class="brand-dot" />
+              </svg>
+              <span>Taut</span>
+            </span>
+            <h1 class="screen-title">{current().title}</h1>
+            <OfflineStatus offline={s.offline} />
+          </header>
+        </Show>
+        <UpdatePrompt offline={s.offline} />
+        <main class="screen" id="screen" data-screen={current().id}>
+          <Suspense fallback={<p class="placeholder-text">Loading…</p>}>
+            <Dynamic component={current().component} />
+          </Suspense>
+        </main>
+        <Show when={!full()}>
+          <nav class="tabs" aria-label="Screens">
+            <For each={props.screens}>
+              {(x) => (
+                <a class="tab" href={`#/${x.id}`} aria-current={x.id === current().id ? "page" : undefined} onClick={(e) => (e.preventDefault(), s.nav.go(x.id))}>
+                  {typeof x.icon === "string" ? <Icon name={x.icon} size={28} /> : x.icon()}
+                  <span>{x.title}</span>
+                </a>
+              )}
+            </For>
+          </nav>
+        </Show>
+      </div>
+      <Show when={s.motion.moving()}>
+        <div class="moving-notice" role="alertdialog" aria-modal="true" aria-labelledby="moving-h" aria-describedby="moving-text">
+          <Icon name="moving" size={64} />
+          <h2 id="moving-h">The train is moving</h2>
+          <p id="moving-text">
+            Taut is for planning and briefing before departure, so its controls are hidden while the device reports movement
+            {s.motion.speedMps() !== null ? ` (${show("speed", s.motion.speedMps()!, s.settings.settings().units)})` : ""}. They come back once it has been still
+            for 10 seconds.
+          </p>
+        </div>
+      </Show>
+    </AppContext.Provider>
+  );
+}

@@ -1,0 +1,247 @@
+/**
+ * A chart from a `ChartSpec`, drawn by chart.js (only the line parts) in a chart worker on a canvas
+ * handed over to it (OffscreenCanvas), so the page never waits for a drawing. The chart is created in
+ * onMount once it is near the screen (or the page is idle), updated in an effect when its figures change,
+ * and destroyed on cleanup. While there is nothing to draw it shows a plain sentence; a browser that
+ * cannot hand a canvas to a worker gets the caption and legend with a note; the legend is ours (large,
+ * readable), not the library's.
+ */
+import type { ChartConfiguration, ChartDataset } from "chart.js";
+import { createEffect, createSignal, For, on, onCleanup, onMount, Show, type JSX } from "solid-js";
+import type { ChartReply, ChartRequest } from "../charts/chart.worker.js";
+import { colourOf, withAlpha, type ChartPalette } from "../charts/palette.js";
+import type { ChartSpec, LegendEntry } from "../charts/spec.js";
+
+type LineConfig = ChartConfiguration<"line", Array<{ x: number; y: number }>>;
+
+/** The chart.js configuration for a spec: plain data (it crosses to the chart worker), no animation, no pointer events. */
+export function toChartConfig(spec: ChartSpec, p: ChartPalette): LineConfig {
+  const datasets: Array<ChartDataset<"line", Array<{ x: number; y: number }>>> = spec.series.map((s) => {
+    const colour = colourOf(p, s.role, s.tone, s.tones);
+    const band = s.role === "band";
+    return {
+      label: s.label,
+      data: s.points,
+      borderColor: band && !s.strong ? withAlpha(colour, 0.55) : colour,
+      backgroundColor: band ? withAlpha(colour, s.strong ? 0.32 : 0.12) : s.role === "main" ? p.mainFill : colour,
+      borderWidth: s.strong ? 3 : band ? 1 : s.role === "notch" ? 2 : 3,
+      borderDash: s.dashed ? [8, 6] : [],
+      pointRadius: 0,
+      stepped: s.stepped ? "before" : false,
+      fill: s.fill === "previous" ? "-1" : s.fill === "origin" ? "origin" : false,
+      yAxisID: s.axis ?? "y",
+      tension: 0,
+      ...(s.endLabel ? { endLabel: s.endLabel } : {}),
+    };
+  });
+  const labelled = spec.series.some((s) => s.endLabel);
+  const axisStyle = { color: p.text, font: { size: 14 } };
+  const scales: NonNullable<LineConfig["options"]>["scales"] = {
+    x: { type: "linear", min: spec.x.min, max: spec.x.max, title: { display: true, text: spec.x.title, ...axisStyle }, ticks: { ...axisStyle }, grid: { color: p.grid } },
+    y: { type: "linear", min: spec.y.min, max: spec.y.max, title: { display: true, text: spec.y.title, ...axisStyle }, ticks: { ...axisStyle }, grid: { color: p.grid } },
+  };
+  if (spec.y2) {
+    scales.y2 = {
+      type: "linear",
+      position: "right",
+      min: spec.y2.min,
+      max: spec.y2.max,
+      title: { display: true, text: spec.y2.title, ...axisStyle },
+      ticks: { ...axisStyle, ...(spec.y2.stepSize ? { stepSize: spec.y2.stepSize } : {}) },
+      grid: { drawOnChartArea: false },
+    };
+  }
+  return {
+    type: "line",
+    data: { datasets },
+    options: {
+      animation: false,
+      responsive: true,
+      maintainAspectRatio: false,
+      parsing: false,
+      normalized: true,
+      events: [],
+      layout: { padding: { right: labelled ? 22 : 8 } },
+      plugins: { legend: { display: false }, tooltip: { enabled: false } },
+      scales,
+    },
+  };
+}
+
+/** How a chart is drawn: in the chart worker, or here. */
+interface Drawer {
+  update(config: LineConfig): void;
+  resize(width: number, height: number): void;
+  destroy(): void;
+}
+
+// ------------------------------------------------------------------ chart worker (OffscreenCanvas)
+
+let chartWorker: Worker | null = null;
+let nextId = 1;
+const onDrawn = new Map<number, () => void>();
+
+function offscreenSupported(canvas: HTMLCanvasElement): boolean {
+  return typeof Worker !== "undefined" && typeof canvas.transferControlToOffscreen === "function" && typeof OffscreenCanvas !== "undefined";
+}
+
+function theChartWorker(): Worker {
+  if (chartWorker) return chartWorker;
+  const w = new Worker(new URL("../charts/chart.worker.ts", import.meta.url), { type: "module", name: "taut-charts" });
+  w.onmessage = (ev: MessageEvent<ChartReply>) => {
+    if (ev.data.type === "drawn") onDrawn.get(ev.data.id)?.();
+  };
+  chartWorker = w;
+  return w;
+}
+
+function workerDrawer(canvas: HTMLCanvasElement, config: LineConfig, width: number, height: number, drawn: () => void): Drawer {
+  const id = nextId++;
+  const w = theChartWorker();
+  const post = (m: ChartRequest, transfer: Transferable[] = []) => w.postMessage(m, transfer);
+  onDrawn.set(id, drawn);
+  const offscreen = canvas.transferControlToOffscreen();
+  post({ type: "create", id, canvas: offscreen, config: config as ChartConfiguration, width, height, dpr: devicePixelRatio || 1 }, [offscreen]);
+  return {
+    update: (c) => post({ type: "update", id, config: c as ChartConfiguration }),
+    resize: (wd, ht) => post({ type: "resize", id, width: wd, height: ht }),
+    destroy: () => {
+      onDrawn.delete(id);
+      post({ type: "destroy", id });
+    },
+  };
+}
+
+// ------------------------------------------------------------------ component
+
+export interface ChartProps {
+  /** Heading shown above the chart. */
+  title: string;
+  /** The chart, or null to show `empty`. */
+  spec: ChartSpec | null;
+  palette: ChartPalette;
+  /** Sentence shown while there is nothing to draw. */
+  empty: string;
+  /** A sentence on how to read the chart (also the canvas's text alternative). */
+  caption: string;
+  height?: number;
+}
+
+export function Chart(props: ChartProps): JSX.Element {
+  return (
+    <figure class="chart" data-chart={props.title} data-empty={props.spec ? "no" : "yes"}>
+      <figcaption>
+        <span class="chart-title">{props.title}</span>
+        <span class="chart-caption">{props.caption}</span>
+      </figcaption>
+      <Show
+        when={props.spec}
+        fallback={
+          <p class="chart-empty" role="note">
+            {props.empty}
+          </p>
+        }
+      >
+        {(spec) => (
+          <>
+            <ChartCanvas spec={spec()} palette={props.palette} height={props.height ?? 280} label={`${props.title}. ${props.caption}`} />
+            <Legend entries={spec().legend} palette={props.palette} />
+          </>
+        )}
+      </Show>
+    </figure>
+  );
+}
+
+function ChartCanvas(props: { spec: ChartSpec; palette: ChartPalette; height: number; label: string }): JSX.Element {
+  let canvas!: HTMLCanvasElement;
+  let box!: HTMLDivElement;
+  let drawer: Drawer | null = null;
+  let drawnKey = "";
+  // Wanted once it comes near the screen, or when the page is idle.
+  const [wanted, setWanted] = createSignal(typeof IntersectionObserver === "undefined");
+  const [drawn, setDrawn] = createSignal(false);
+  const [unsupported, setUnsupported] = createSignal(false);
+  const keyOf = () => `${props.palette.text}|${JSON.stringify(props.spec)}`;
+
+  onMount(() => {
+    if (typeof IntersectionObserver !== "undefined") {
+      const io = new IntersectionObserver((entries) => entries.some((e) => e.isIntersecting) && setWanted(true), { rootMargin: "300px" });
+      io.observe(box);
+      onCleanup(() => io.disconnect());
+    }
+    if (typeof requestIdleCallback === "function") {
+      const idle = requestIdleCallback(() => setWanted(true), { timeout: 4000 });
+      onCleanup(() => cancelIdleCallback(idle));
+    }
+    createEffect(
+      on(wanted, (w) => {
+        if (!w || drawer) return;
+        drawnKey = keyOf();
+        const config = toChartConfig(props.spec, props.palette);
+        if (offscreenSupported(canvas)) drawer = workerDrawer(canvas, config, box.clientWidth, props.height, () => setDrawn(true));
+        else setUnsupported(true);
+      }),
+    );
+    if (typeof ResizeObserver !== "undefined") {
+      let lastWidth = box.clientWidth;
+      const ro = new ResizeObserver(() => {
+        const width = box.clientWidth;
+        if (width > 0 && width !== lastWidth) {
+          lastWidth = width;
+          drawer?.resize(width, props.height);
+        }
+      });
+      ro.observe(box);
+      onCleanup(() => ro.disconnect());
+    }
+  });
+
+  createEffect(
+    on(
+      () => [props.spec, props.palette] as const,
+      () => {
+        if (!drawer) return;
+        const key = keyOf();
+        if (key === drawnKey) return;
+        drawnKey = key;
+        drawer.update(toChartConfig(props.spec, props.palette));
+      },
+      { defer: true },
+    ),
+  );
+
+  onCleanup(() => {
+    drawer?.destroy();
+    drawer = null;
+  });
+
+  return (
+    <div class="chart-box" ref={box} style={{ height: `${props.height}px` }} data-drawn={drawn() ? "yes" : "no"}>
+      <canvas ref={canvas} role="img" aria-label={props.label} />
+      <Show when={unsupported()}>
+        <p class="chart-empty chart-unsupported">This browser cannot draw charts here; the figures above and the legend below still hold.</p>
+      </Show>
+    </div>
+  );
+}
+
+function Legend(props: { entries: readonly LegendEntry[]; palette: ChartPalette }): JSX.Element {
+  return (
+    <ul class="legend">
+      <For each={props.entries}>
+        {(e) => (
+          <li>
+            <span
+              class="swatch"
+              classList={{ dashed: e.dashed === true, band: e.role === "band" }}
+              style={{ "--swatch": colourOf(props.palette, e.role, e.tone, e.tones) }}
+              aria-hidden="true"
+            />
+            {e.label}
+          </li>
+        )}
+      </For>
+    </ul>
+  );
+}

@@ -1,0 +1,15 @@
+/** A large on/off button with its state in words (not a tiny checkbox). */
+import type { JSX } from "solid-js";
+import { Icon, type IconName } from "./Icon.js";
+
+export function Toggle(props: { label: string; on: boolean; onChange: (on: boolean) => void; icon?: IconName; onText?: string; offText?: string; name?: string }): JSX.Element {
+  return (
+    <div class="field" data-field={props.name}>
+      <button type="button" class="toggle" aria-pressed={props.on} onClick={() => props.onChange(!props.on)}>
+        {props.icon && <Icon name={props.icon} size={28} />}
+        <span class="toggle-label">{props.label}</span>
+        <span class="toggle-state">{props.on ? (props.onText ?? "On") : (props.offText ?? "Off")}</span>
+      </button>
+    </div>
+  );
+}

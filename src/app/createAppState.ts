@@ -1,0 +1,60 @@
+/** Build the app's state from its parts (the browser wiring in main.tsx; fakes in tests). */
+import { createMemo } from "solid-js";
+import type { PlannerClient } from "../worker/client.js";
+import type { AppContextValue } from "./context.js";
+import { createCaseDraft } from "./state/createCaseDraft.js";
+import { createLocations } from "./state/createLocations.js";
+import { createMotionLock } from "./state/createMotionLock.js";
+import { createNav } from "./state/createNav.js";
+import { createOffline, type RegisterSW } from "./state/createOffline.js";
+import { createPlanRun } from "./state/createPlanRun.js";
+import { createSettings } from "./state/createSettings.js";
+import { createTheme } from "./state/createTheme.js";
+
+export interface AppDeps {
+  planner: PlannerClient;
+  /** A second worker for the slower largest-startable-mass search after each plan. */
+  background?: PlannerClient;
+  registerSW: RegisterSW | null;
+  screenIds: readonly string[];
+  storage?: Storage | null;
+  debounceMs?: number;
+  onFirstPlan?: (workerMs: number) => void;
+  geolocation?: Geolocation;
+}
+
+export function createAppState(deps: AppDeps): AppContextValue {
+  const settings = createSettings(deps.storage === undefined ? undefined : deps.storage);
+  const locations = createLocations();
+  const draft = createCaseDraft({ library: locations.library, settings: settings.settings, ...(deps.storage !== undefined ? { storage: deps.storage } : {}) });
+  // The service worker registers once the first plan is on screen (or after a few seconds without one).
+  let firstShown!: () => void;
+  const firstPlanShown = new Promise<void>((resolve) => (firstShown = resolve));
+  const fallback = setTimeout(() => firstShown(), 5000);
+  const validCase = createMemo(() => {
+    const c = draft.checked();
+    return c.ok ? c.value : null;
+  });
+  const run = createPlanRun({
+    client: deps.planner,
+    ...(deps.background ? { background: deps.background } : {}),
+    startCase: validCase,
+    ...(deps.debounceMs !== undefined ? { debounceMs: deps.debounceMs } : {}),
+    onFirstResult: (ms) => {
+      clearTimeout(fallback);
+      firstShown();
+      deps.onFirstPlan?.(ms);
+    },
+  });
+  return {
+    settings,
+    draft,
+    run,
+    locations,
+    nav: createNav(deps.screenIds, deps.screenIds[0] ?? ""),
+    offline: createOffline(deps.registerSW, firstPlanShown),
+    theme: createTheme(() => settings.settings().theme),
+    motion: createMotionLock(() => settings.settings().motionLock, deps.geolocation ?? (typeof navigator !== "undefined" ? navigator.geolocation : undefined)),
+    planner: deps.planner,
+  };
+}

@@ -1,0 +1,78 @@
+/**
+ * The input fields of a start case: label, measure and file unit by field path, and how a validation
+ * issue is put into the user's units ("must be at most 200 mm" reads "must be at most 7.87 in").
+ */
+import type { FieldIssue } from "../profiles/issues.js";
+import { decimalsOf, formatNumber, localiseText, toDisplay, unitSymbol, type MeasureKey, type UnitSystem } from "./format.js";
+
+export interface FieldDef {
+  label: string;
+  measure?: MeasureKey;
+  /** Unit of the value in the file (a unit id of the core's table). */
+  fileUnit?: string;
+}
+
+const FIELDS: Record<string, FieldDef> = {
+  "locomotives": { label: "Locomotives" },
+  "locomotives[].profile": { label: "Locomotive profile" },
+  "locomotives[].count": { label: "Number of locomotives" },
+  "locomotives[].position": { label: "Position" },
+  "locomotives[].position.afterWagon": { label: "After wagon" },
+  "train.trailingMass_t": { label: "Trailing mass", measure: "mass", fileUnit: "t" },
+  "train.wagons": { label: "Wagons" },
+  "train.length_m": { label: "Train length", measure: "distance", fileUnit: "m" },
+  "train.couplerSlack_mm": { label: "Free slack per coupling", measure: "slack", fileUnit: "mm" },
+  "train.couplerLimit_kN": { label: "Coupler working limit", measure: "force", fileUnit: "kN" },
+  "train.bearing": { label: "Bearings" },
+  "train.coupling": { label: "Coupling" },
+  "train.wagonType": { label: "Wagon type" },
+  "train.slackState": { label: "Slack at the start" },
+  "location": { label: "Location" },
+  "location.frontAt_m": { label: "Location" },
+  "location.gradient_permille": { label: "Gradient", measure: "grade", fileUnit: "permille" },
+  "location.curveRadius_m": { label: "Curve radius", measure: "radius", fileUnit: "m" },
+  "location.clearAhead_m": { label: "Clear ahead", measure: "distance", fileUnit: "m" },
+  "conditions.rail": { label: "Rail condition" },
+  "conditions.sand": { label: "Sand" },
+  "conditions.temperature_C": { label: "Temperature", measure: "temperature", fileUnit: "C" },
+  "target.speed_kmh": { label: "Target speed", measure: "speed", fileUnit: "kmh" },
+  "target.distance_m": { label: "Target distance", measure: "distance", fileUnit: "m" },
+  "settings.couplerSafetyFactor": { label: "Coupler safety factor (Settings)" },
+  "settings.slipRiskThreshold": { label: "Slip-risk threshold (Settings)" },
+};
+
+/** The field an issue path belongs to (list indices do not matter). */
+export function fieldOf(path: string): FieldDef | undefined {
+  return FIELDS[path.replace(/\[\d+\]/g, "[]")];
+}
+
+const NUM = "(-?\\d+(?:\\.\\d+)?(?:e[-+]?\\d+)?)";
+// A bound may be followed by the file's own unit (" m"), which the display unit replaces.
+const BOUND = new RegExp(`\\b(at least|at most|greater than|less than) ${NUM}(?: (?:mm|m|kN|t|km/h|‰|°C)(?![\\w/]))?`, "g");
+const GOT = new RegExp(`\\(got ${NUM}\\)`, "g");
+
+/**
+ * The issue as the user should read it: bounds and the value given in the display units of the field,
+ * and "must be a number" for text that is not one.
+ */
+export function localiseIssue(issue: FieldIssue, system: UnitSystem): FieldIssue {
+  if (/\(got NaN\)|got null\)|must be a number \(got/.test(issue.message) || /is required \(a number\)/.test(issue.message)) {
+    return { ...issue, message: "must be a number" };
+  }
+  const f = fieldOf(issue.path);
+  // Rules without a unit of their own may still quote figures ("the 438 m train").
+  if (!f?.measure || !f.fileUnit) return { ...issue, message: localiseText(issue.message, system) };
+  const m = f.measure;
+  const unit = f.fileUnit;
+  // Rounded as the field shows it, without trailing zeros ("60 ‰", "7.87 in").
+  const shown = (x: string) => `${formatNumber(toDisplay(m, Number(x), unit, system), decimalsOf(m, system)).replace(/(\.\d*?)0+$/, "$1").replace(/\.$/, "")} ${unitSymbol(m, system)}`;
+  const message = issue.message.replace(BOUND, (_all, word: string, x: string) => `${word} ${shown(x)}`).replace(GOT, (_all, x: string) => `(got ${shown(x)})`);
+  return { ...issue, message };
+}
+
+/** "Label: message" for a list of issues away from their fields. */
+export function issueLine(issue: FieldIssue): string {
+  const f = fieldOf(issue.path);
+  const where = f ? f.label : issue.path || "The case";
+  return `${where} ${issue.message}`;
+}

@@ -1,0 +1,155 @@
+/**
+ * Cab steps: one step at a time, full screen, very large type; Back and Next at the bottom; "If wheels
+ * slip" one tap away on every step; the time since the step began.
+ */
+import { Show, type JSX } from "solid-js";
+import type { PlanResult } from "../../../core/planner/types.js";
+import type { Target } from "../../../core/types.js";
+import { Icon } from "../../components/Icon.js";
+import { VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
+import { clock, localiseText, percent, show, type UnitSystem } from "../../format.js";
+import type { WakeLockState } from "../../state/createWakeLock.js";
+import { advanceLead, advanceOthers, notchText, PHASE_LINE, PHASE_WORD } from "../../steps.js";
+import { SlipCard } from "./SlipCard.js";
+
+export interface CabStepsViewProps {
+  result: PlanResult | null;
+  /** The plan is for the inputs on screen. */
+  current: boolean;
+  index: number;
+  onIndex: (i: number) => void;
+  units: UnitSystem;
+  target?: Target | undefined;
+  slipThreshold: number;
+  /** Seconds since the step on screen began. */
+  stepSeconds: number;
+  wakeLock: WakeLockState;
+  slipOpen: boolean;
+  onSlip: (open: boolean) => void;
+  onClose: () => void;
+}
+
+const WAKE_TEXT: Record<WakeLockState, string> = {
+  on: "Screen stays on",
+  off: "Screen may sleep",
+  unsupported: "Screen may sleep (this browser cannot keep it on)",
+  refused: "Screen may sleep (the browser refused to keep it on)",
+};
+
+export function CabStepsView(props: CabStepsViewProps): JSX.Element {
+  const steps = () => props.result?.steps ?? [];
+  const step = () => steps()[props.index];
+  const count = () => steps().length;
+  return (
+    <div class="cab" data-step={props.index + 1}>
+      <header class="cab-top">
+        <button type="button" class="button big" onClick={() => props.onClose()}>
+          <Icon name="back" /> Start plan
+        </button>
+        <p class="cab-count" aria-live="polite">
+          <Show when={step()} fallback={props.result ? <span>No steps</span> : <span>No plan</span>}>
+            {(s) => (
+              <>
+                Step <strong>{props.index + 1}</strong> of {count()} · {PHASE_WORD[s().phase]}
+              </>
+            )}
+          </Show>
+        </p>
+        <Show when={props.result}>
+          <button type="button" class="button big slip-button" onClick={() => props.onSlip(true)}>
+            <Icon name="slip" size={30} /> If wheels slip
+          </button>
+        </Show>
+      </header>
+
+      <Show when={props.result && !props.current}>
+        <p class="cab-stale" role="status">
+          These steps are for the previous inputs; the new plan is on its way.
+        </p>
+      </Show>
+
+      <Show
+        when={step()}
+        fallback={
+          <div class="cab-empty">
+            <Show when={props.result} fallback={<p>There is no plan yet. Open Start plan and enter the case.</p>}>
+              {(r) => (
+                <>
+                  <p class="cab-verdict">
+                    <VerdictIcon verdict={r().verdict} size={56} /> {VERDICT_WORD[r().verdict]}
+                  </p>
+                  <p>This plan has no notch steps to show.</p>
+                </>
+              )}
+            </Show>
+          </div>
+        }
+      >
+        {(s) => (
+          <main class="cab-main">
+            <div class="cab-notch" aria-label={`Notch ${notchText(s().notch)}`}>
+              <span class="cab-notch-label">Notch</span>
+              <span class="cab-notch-value">{notchText(s().notch)}</span>
+              <span class="cab-phase-line">{PHASE_LINE[s().phase]}</span>
+            </div>
+            <div class="cab-info">
+              <p class="cab-advance">{advanceLead(s(), props.units, props.target)}</p>
+              <Show when={advanceOthers(s(), props.units).length > 0}>
+                <p class="cab-others">{advanceOthers(s(), props.units).join(" · ")}</p>
+              </Show>
+              <dl class="cab-figures">
+                <div>
+                  <dt>Expected speed</dt>
+                  <dd>{show("speed", s().speedMps, props.units)}</dd>
+                </div>
+                <div classList={{ alert: s().slipRisk > props.slipThreshold }}>
+                  <dt>Slip risk</dt>
+                  <dd>{percent(s().slipRisk)}</dd>
+                </div>
+                <div>
+                  <dt>If wheels slip</dt>
+                  <dd>notch {notchText(s().fallbackNotch)}</dd>
+                </div>
+              </dl>
+              <p class="cab-why">{localiseText(s().why, props.units)}</p>
+              <p class="cab-clock" aria-label={`Time in this step ${clock(props.stepSeconds)}`}>
+                <Icon name="clock" size={32} /> <span>{clock(props.stepSeconds)}</span>
+                <span class="cab-small"> in this step</span>
+              </p>
+            </div>
+          </main>
+        )}
+      </Show>
+
+      <footer class="cab-nav">
+        <button type="button" class="button huge" disabled={props.index <= 0 || count() === 0} onClick={() => props.onIndex(props.index - 1)}>
+          <Icon name="back" size={36} /> Back
+        </button>
+        <Show
+          when={props.index < count() - 1}
+          fallback={
+            <button type="button" class="button huge primary" onClick={() => props.onClose()}>
+              Done <Icon name="next" size={36} />
+            </button>
+          }
+        >
+          <button type="button" class="button huge primary" onClick={() => props.onIndex(props.index + 1)}>
+            Next <Icon name="next" size={36} />
+          </button>
+        </Show>
+      </footer>
+      <p class="cab-wake">{WAKE_TEXT[props.wakeLock]}</p>
+
+      <Show when={props.slipOpen && props.result}>
+        {(_) => (
+          <SlipCard
+            guidance={props.result!.slipGuidance}
+            units={props.units}
+            step={step() ? { number: props.index + 1, notch: step()!.notch, fallbackNotch: step()!.fallbackNotch } : undefined}
+            onClose={() => props.onSlip(false)}
+          />
+        )}
+      </Show>
+    </div>
+  );
+}

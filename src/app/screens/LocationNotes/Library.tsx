@@ -1,0 +1,199 @@
+/**
+ * The trainer's library: every saved note as a large row (name, line and direction, last revision,
+ * where it came from), damaged records with the reason and a way to remove them, the export reminder,
+ * and the library's actions: new note, import a file, export all, put back the demo notes, remove all.
+ */
+import { createSignal, For, Show, type JSX } from "solid-js";
+import { latestRevision } from "../../../profiles/notes.js";
+import type { RecordProblem, SavedNote } from "../../../notes/records.js";
+import type { ExportReminder, PersistResult } from "../../../notes/reminder.js";
+import type { Notice } from "./createNotesLibrary.js";
+
+export interface LibraryProps {
+  ready: boolean;
+  failure: string | null;
+  notes: readonly SavedNote[];
+  problems: readonly RecordProblem[];
+  reminder: ExportReminder | undefined;
+  persisted: PersistResult | undefined;
+  notice: Notice | null;
+  busy: boolean;
+  onDismissNotice: () => void;
+  onOpen: (id: string) => void;
+  onCard: (id: string) => void;
+  onNew: () => void;
+  onImport: (file: File) => void;
+  onExportAll: () => void;
+  onRestoreDemos: () => void;
+  onRemove: (id: string) => void;
+  onRemoveAll: () => void;
+}
+
+const ORIGIN_WORD = { demo: "demo note", mine: "yours", imported: "imported" } as const;
+
+export function NoticeBox(props: { notice: Notice; onDismiss: () => void }): JSX.Element {
+  return (
+    <div class="notes-notice" classList={{ problem: props.notice.kind === "problem" }} role={props.notice.kind === "problem" ? "alert" : "status"}>
+      <p>
+        <strong>{props.notice.kind === "problem" ? "Not done. " : ""}</strong>
+        {props.notice.text}
+      </p>
+      <Show when={props.notice.details && props.notice.details.length > 0}>
+        <ul>
+          <For each={props.notice.details!.slice(0, 12)}>{(d) => <li>{d}</li>}</For>
+        </ul>
+        <Show when={props.notice.details!.length > 12}>
+          <p>…and {props.notice.details!.length - 12} more.</p>
+        </Show>
+      </Show>
+      <button type="button" class="button small" onClick={() => props.onDismiss()}>
+        OK
+      </button>
+    </div>
+  );
+}
+
+export function Library(props: LibraryProps): JSX.Element {
+  let fileInput!: HTMLInputElement;
+  const [confirmAll, setConfirmAll] = createSignal(false);
+  const reminderText = () => {
+    const r = props.reminder;
+    if (!r?.due) return "";
+    return r.lastExport === undefined
+      ? "Your notes have never been exported. They live only in this browser until you export a copy: keep the file somewhere safe and share it with drivers."
+      : `Your notes were last exported ${r.daysSince} days ago. Export a fresh copy so recent changes are not lost with the device.`;
+  };
+
+  return (
+    <div class="notes-library">
+      <header class="notes-library-head">
+        <h2 class="visually-hidden">Library</h2>
+        <p class="notes-hint">What a driver must know to start at a place: the track under and ahead of the train, hazards, the usual rail, and the practice that works. Saved on this device.</p>
+      </header>
+
+      <Show when={props.failure}>
+        <p class="notes-issue-box" role="alert">
+          {props.failure}
+        </p>
+      </Show>
+      <Show when={props.notice}>{(n) => <NoticeBox notice={n()} onDismiss={props.onDismissNotice} />}</Show>
+      <Show when={reminderText()}>
+        <div class="notes-reminder" role="status">
+          <p>{reminderText()}</p>
+          <button type="button" class="button primary" disabled={props.busy} onClick={() => props.onExportAll()}>
+            Export all notes now
+          </button>
+        </div>
+      </Show>
+      <Show when={props.persisted === "not-granted"}>
+        <p class="notes-small">This browser has not promised to keep stored data when space runs low: export your notes regularly.</p>
+      </Show>
+
+      <div class="notes-row-actions">
+        <button type="button" class="button primary" onClick={() => props.onNew()}>
+          New note
+        </button>
+        <button type="button" class="button" disabled={props.busy} onClick={() => fileInput.click()}>
+          Import notes file
+        </button>
+        <input
+          ref={fileInput}
+          class="visually-hidden"
+          type="file"
+          accept=".json,application/json"
+          aria-label="Notes file to import"
+          tabIndex={-1}
+          onChange={(e) => {
+            const f = e.currentTarget.files?.[0];
+            e.currentTarget.value = "";
+            if (f) props.onImport(f);
+          }}
+        />
+        <button type="button" class="button" disabled={props.busy || props.notes.length === 0} onClick={() => props.onExportAll()}>
+          Export all notes
+        </button>
+      </div>
+
+      <Show when={props.ready} fallback={<p class="notes-hint">Opening the library…</p>}>
+        <Show when={props.notes.length > 0} fallback={<p class="notes-empty">No notes yet. Make one with "New note", or import a notes file.</p>}>
+          <ul class="notes-list" aria-label="Saved location notes">
+            <For each={props.notes}>
+              {(s) => {
+                const rev = () => latestRevision(s.note);
+                return (
+                  <li class="notes-item">
+                    <button type="button" class="notes-item-open" onClick={() => props.onOpen(s.note.id)}>
+                      <span class="notes-item-name">{s.note.name}</span>
+                      <span class="notes-item-detail">
+                        {[s.note.line, s.note.direction].filter(Boolean).join(" · ")}
+                        {s.note.line || s.note.direction ? " — " : ""}revised {rev().date} by {rev().initials} · {ORIGIN_WORD[s.origin]}
+                      </span>
+                      <Show when={s.note.illustrative}>
+                        <span class="notes-tag">Illustrative</span>
+                      </Show>
+                    </button>
+                    <button type="button" class="button" aria-label={`Card of ${s.note.name}`} onClick={() => props.onCard(s.note.id)}>
+                      Card
+                    </button>
+                  </li>
+                );
+              }}
+            </For>
+          </ul>
+        </Show>
+      </Show>
+
+      <Show when={props.problems.length > 0}>
+        <section class="notes-damaged" aria-labelledby="notes-damaged-title">
+          <h3 id="notes-damaged-title">Damaged records ({props.problems.length})</h3>
+          <p class="notes-hint">These records could not be read and are left out of the library and the pickers. The rest of the library is unaffected.</p>
+          <ul>
+            <For each={props.problems}>
+              {(p) => (
+                <li>
+                  <span>{p.message}</span>
+                  <button type="button" class="button small" onClick={() => props.onRemove(p.key)}>
+                    Remove record
+                  </button>
+                </li>
+              )}
+            </For>
+          </ul>
+        </section>
+      </Show>
+
+      <div class="notes-row-actions notes-quiet">
+        <button type="button" class="button" onClick={() => props.onRestoreDemos()}>
+          Put back the demo notes
+        </button>
+        <Show when={props.notes.length > 0}>
+          <Show
+            when={confirmAll()}
+            fallback={
+              <button type="button" class="button danger" onClick={() => setConfirmAll(true)}>
+                Remove all notes…
+              </button>
+            }
+          >
+            <div class="notes-confirm" role="group" aria-label="Confirm removing all notes">
+              <p>Remove all {props.notes.length} notes from this device? Export them first if you may want them again.</p>
+              <button
+                type="button"
+                class="button danger"
+                onClick={() => {
+                  setConfirmAll(false);
+                  props.onRemoveAll();
+                }}
+              >
+                Remove all
+              </button>
+              <button type="button" class="button" onClick={() => setConfirmAll(false)}>
+                Keep them
+              </button>
+            </div>
+          </Show>
+        </Show>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,108 @@
+/**
+ * The table of track segments: start, length and gradient with large −/+ steppers, the curve radius as
+ * a typed field (0 = straight), a remove button per row, and "Add segment" / "Join segments" below.
+ * The rules a row breaks are listed under the table and the offending cells are marked.
+ */
+import { For, Show, type JSX } from "solid-js";
+import { QuantityField } from "../../components/QuantityField.js";
+import type { UnitSystem } from "../../format.js";
+import type { SegmentFile } from "../../../profiles/schemas.js";
+import type { NoteIssue } from "./validate.js";
+
+export interface SegmentsTableProps {
+  segments: readonly SegmentFile[];
+  units: UnitSystem;
+  issues: readonly NoteIssue[];
+  onChange: (k: number, field: keyof SegmentFile, value: number) => void;
+  onAdd: () => void;
+  onRemove: (k: number) => void;
+  onJoin: () => void;
+}
+
+export function SegmentsTable(props: SegmentsTableProps): JSX.Element {
+  const bad = (k: number, field: keyof SegmentFile) => props.issues.some((i) => i.severity === "error" && i.path === `segments[${k}].${field}`);
+  const rowIssues = () => props.issues.filter((i) => i.path.startsWith("segments"));
+  const hasJoinIssue = () => rowIssues().some((i) => /\.from_m$/.test(i.path) && /Gap|overlaps/.test(i.message));
+  return (
+    <section class="panel notes-section" aria-labelledby="notes-seg-title">
+      <h3 id="notes-seg-title">Track under and ahead of the train</h3>
+      <p class="notes-hint">Distances grow in the direction of travel. Gradient rises in the direction of travel (negative falls). Radius 0 is straight track.</p>
+      <div class="notes-seg-wrap">
+        <table class="notes-seg">
+          <thead>
+            <tr>
+              <th scope="col">#</th>
+              <th scope="col">Starts at</th>
+              <th scope="col">Length</th>
+              <th scope="col">Gradient</th>
+              <th scope="col">Curve radius</th>
+              <th scope="col">
+                <span class="visually-hidden">Remove</span>
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            <For each={props.segments}>
+              {(s, k) => (
+                <tr>
+                  <th scope="row">{k() + 1}</th>
+                  <td classList={{ "notes-cell": true, invalid: bad(k(), "from_m") }}>
+                    <QuantityField label={`Segment ${k() + 1} starts at`} name={`segments[${k()}].from_m`} value={s.from_m} units={props.units} measure="distance" fileUnit="m" onValue={(v) => props.onChange(k(), "from_m", v)} />
+                  </td>
+                  <td classList={{ "notes-cell": true, invalid: bad(k(), "length_m") }}>
+                    <QuantityField
+                      label={`Segment ${k() + 1} length`}
+                      name={`segments[${k()}].length_m`}
+                      value={s.length_m}
+                      units={props.units}
+                      measure="distance"
+                      fileUnit="m"
+                      step={{ metric: 50, us: 100 }}
+                      min={0}
+                      onValue={(v) => props.onChange(k(), "length_m", v)}
+                    />
+                  </td>
+                  <td classList={{ "notes-cell": true, invalid: bad(k(), "gradient_permille") }}>
+                    <QuantityField
+                      label={`Segment ${k() + 1} gradient`}
+                      name={`segments[${k()}].gradient_permille`}
+                      value={s.gradient_permille}
+                      units={props.units}
+                      measure="grade"
+                      fileUnit="permille"
+                      step={{ metric: 0.5, us: 0.05 }}
+                      onValue={(v) => props.onChange(k(), "gradient_permille", v)}
+                    />
+                  </td>
+                  <td classList={{ "notes-cell": true, invalid: bad(k(), "curveRadius_m") }}>
+                    <QuantityField label={`Segment ${k() + 1} curve radius`} name={`segments[${k()}].curveRadius_m`} value={s.curveRadius_m} units={props.units} measure="radius" fileUnit="m" onValue={(v) => props.onChange(k(), "curveRadius_m", v)} />
+                  </td>
+                  <td>
+                    <button type="button" class="notes-icon-button" aria-label={`Remove segment ${k() + 1}`} disabled={props.segments.length <= 1} onClick={() => props.onRemove(k())}>
+                      ✕
+                    </button>
+                  </td>
+                </tr>
+              )}
+            </For>
+          </tbody>
+        </table>
+      </div>
+      <div class="notes-row-actions">
+        <button type="button" class="button" onClick={() => props.onAdd()}>
+          Add segment
+        </button>
+        <Show when={hasJoinIssue()}>
+          <button type="button" class="button" onClick={() => props.onJoin()}>
+            Join segments
+          </button>
+        </Show>
+      </div>
+      <Show when={rowIssues().length > 0}>
+        <ul class="notes-issues" aria-label="Problems with the segments">
+          <For each={rowIssues()}>{(i) => <li classList={{ warning: i.severity === "warning" }}>{i.message}</li>}</For>
+        </ul>
+      </Show>
+    </section>
+  );
+}

@@ -1,0 +1,160 @@
+/**
+ * The note being edited: the draft (a Solid store), what it implies (the reference train placed on the
+ * profile, its slack, the key figures, the load table) and its checks, recomputed as the trainer types.
+ */
+import { createEffect, createMemo, createSignal, on, onCleanup, type Accessor } from "solid-js";
+import { createStore, reconcile, unwrap, type SetStoreFunction } from "solid-js/store";
+import type { StartCase } from "../../../core/types.js";
+import { canonicalNote } from "../../../profiles/notes.js";
+import type { Library } from "../../../profiles/library.js";
+import type { LocationNoteFile, TrainPresetFile } from "../../../profiles/schemas.js";
+import { referenceCase, referenceSummary, type ReferenceSummary } from "../../../notes/reference.js";
+import type { UnitSystem } from "../../format.js";
+import { draftFromNote, idFromName, joinSegments, newDraft, nextSegment, noteFromDraft, type NoteDraft } from "./draft.js";
+import { noteFigures, type NoteFigures } from "./figures.js";
+import { computeNoteLoadTable, type LoadTableOutcome } from "./loadTableRunner.js";
+import { profileModel, type ProfileModel } from "./profileModel.js";
+import { checkDraft, type NoteIssue } from "./validate.js";
+
+export interface NoteEditor {
+  draft: NoteDraft;
+  set: SetStoreFunction<NoteDraft>;
+  /** The saved note this draft started from (undefined for a new note). */
+  saved: Accessor<LocationNoteFile | undefined>;
+  changed: Accessor<boolean>;
+  issues: Accessor<NoteIssue[]>;
+  errors: Accessor<NoteIssue[]>;
+  reference: Accessor<ReferenceSummary>;
+  /** The reference train on the draft's profile, when it can be placed. */
+  placed: Accessor<StartCase | undefined>;
+  model: Accessor<ProfileModel | undefined>;
+  figures: Accessor<NoteFigures>;
+  loadTable: Accessor<LoadTableOutcome | undefined>;
+  load(note: LocationNoteFile | undefined): void;
+  addSegment(): void;
+  removeSegment(k: number): void;
+  joinSegments(): void;
+  /** The note to save, with its id (made from the name for a new note). */
+  toNote(takenIds: ReadonlySet<string>): Record<string, unknown>;
+}
+
+export interface NoteEditorDeps {
+  units: Accessor<UnitSystem>;
+  presets: readonly TrainPresetFile[];
+  library: Accessor<Library>;
+  initials: Accessor<string>;
+  /** Wait before recomputing the load table after an edit, ms. */
+  loadTableDelayMs?: number;
+  /** Whether the note is on screen (editor or card): the load table is worked out only then. */
+  active?: Accessor<boolean>;
+  /** How the load table is worked out (default: the load-table worker). */
+  computeLoadTable?: typeof computeNoteLoadTable;
+}
+
+/** Fields whose errors stop the train being placed and the load table being worked out. */
+const GEOMETRY = /^(segments|frontAt_m|clearAhead_m|train|speedLimit_kmh)/;
+
+export function createNoteEditor(deps: NoteEditorDeps): NoteEditor {
+  const fallbackTrain = () => ({ train: deps.presets[0]?.id ?? "" });
+  const [saved, setSaved] = createSignal<LocationNoteFile | undefined>();
+  const [draft, setDraft] = createStore<NoteDraft>(newDraft(fallbackTrain(), deps.initials()));
+
+  const load = (note: LocationNoteFile | undefined) => {
+    setSaved(note);
+    setDraft(reconcile(note ? draftFromNote(note, fallbackTrain(), deps.initials()) : newDraft(fallbackTrain(), deps.initials())));
+  };
+
+  /** The draft as a note without this save's revision entry: compared with the saved note to tell a change. */
+  const asSavedShape = createMemo(() => {
+    const d = { ...unwrap(draft), revision: { date: "", initials: "", change: "" } };
+    // Track every field.
+    JSON.stringify(draft);
+    return noteFromDraft(d, draft.id || "new");
+  });
+  const changed = createMemo(() => {
+    const s = saved();
+    if (!s) return true;
+    // A note saved without a reference train is compared as if it named the default one.
+    return canonicalNote(asSavedShape() as LocationNoteFile) !== canonicalNote({ ...s, referenceTrain: s.referenceTrain ?? fallbackTrain() });
+  });
+
+  const reference = createMemo(() => referenceSummary(draft.referenceTrain, deps.presets, deps.library()));
+  const issues = createMemo(() => {
+    JSON.stringify(draft);
+    return checkDraft(unwrap(draft), { units: deps.units(), trainLengthM: reference().lengthM, changed: changed() });
+  });
+  const errors = createMemo(() => issues().filter((i) => i.severity === "error"));
+  const geometryOk = createMemo(() => !errors().some((i) => GEOMETRY.test(i.path)));
+
+  const geometry = createMemo(() => {
+    JSON.stringify([draft.segments, draft.frontAt_m, draft.clearAhead_m, draft.speedLimit_kmh, draft.referenceTrain]);
+    const d = unwrap(draft);
+    return {
+      segments: d.segments.map((s) => ({ ...s })),
+      frontAt_m: d.frontAt_m,
+      clearAhead_m: d.clearAhead_m,
+      ...(Number.isFinite(d.speedLimit_kmh) ? { speedLimit_kmh: d.speedLimit_kmh } : {}),
+      referenceTrain: { ...d.referenceTrain },
+    };
+  });
+
+  const placed = createMemo(() => {
+    if (!geometryOk()) return undefined;
+    const r = referenceCase(geometry(), deps.presets, deps.library());
+    return r.ok ? r.value : undefined;
+  });
+
+  const model = createMemo(() => {
+    JSON.stringify(draft.hazards);
+    return profileModel({ ...geometry(), hazards: unwrap(draft).hazards.map((h) => ({ kind: h.kind, ...(Number.isFinite(h.at_m) ? { at_m: h.at_m } : {}), note: h.note })) }, placed());
+  });
+
+  const figures = createMemo(() => noteFigures(geometry().segments, geometry().frontAt_m, reference().lengthM, geometry().clearAhead_m));
+
+  const [loadTable, setLoadTable] = createSignal<LoadTableOutcome | undefined>();
+  let controller: AbortController | undefined;
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  createEffect(
+    on([geometry, geometryOk, () => deps.active?.() ?? true], ([g, ok, active]) => {
+      controller?.abort();
+      if (timer !== undefined) clearTimeout(timer);
+      setLoadTable(undefined);
+      if (!ok || !active) return;
+      const c = new AbortController();
+      controller = c;
+      timer = setTimeout(() => {
+        (deps.computeLoadTable ?? computeNoteLoadTable)(g, g.referenceTrain, c.signal).then(
+          (r) => {
+            if (!c.signal.aborted) setLoadTable(r);
+          },
+          (e: unknown) => {
+            if ((e as Error).name !== "AbortError") setLoadTable({ ok: false, issues: [{ path: "", message: (e as Error).message }] });
+          },
+        );
+      }, deps.loadTableDelayMs ?? 600);
+    }),
+  );
+  onCleanup(() => {
+    controller?.abort();
+    if (timer !== undefined) clearTimeout(timer);
+  });
+
+  return {
+    draft,
+    set: setDraft,
+    saved,
+    changed,
+    issues,
+    errors,
+    reference,
+    placed,
+    model,
+    figures,
+    loadTable,
+    load,
+    addSegment: () => setDraft("segments", draft.segments.length, nextSegment(unwrap(draft).segments)),
+    removeSegment: (k) => setDraft("segments", (segs) => segs.filter((_, i) => i !== k)),
+    joinSegments: () => setDraft("segments", joinSegments(unwrap(draft).segments)),
+    toNote: (taken) => noteFromDraft(unwrap(draft), draft.id || idFromName(draft.name, taken)),
+  };
+}

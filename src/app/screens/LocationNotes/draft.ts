@@ -1,0 +1,174 @@
+/**
+ * The note being edited: a plain object close to the file shape (metres, ‰), with a revision entry for
+ * this save kept apart from the recorded history. Converting back to a `taut/location@1` note happens
+ * only on save; ids are made from the name once, when a new note is first saved.
+ */
+import type { LocationNoteFile, ReferenceTrainFile, SegmentFile } from "../../../profiles/schemas.js";
+
+export type HazardKind = LocationNoteFile["hazards"][number]["kind"];
+export type Season = LocationNoteFile["seasons"][number]["season"];
+export type RailWord = LocationNoteFile["seasons"][number]["rail"];
+export type Revision = LocationNoteFile["revisions"][number];
+
+export const HAZARD_KINDS: ReadonlyArray<{ kind: HazardKind; label: string }> = [
+  { kind: "points", label: "Points" },
+  { kind: "level-crossing", label: "Level crossing" },
+  { kind: "tunnel", label: "Tunnel" },
+  { kind: "signal", label: "Signal close ahead" },
+  { kind: "bridge", label: "Bridge" },
+  { kind: "platform", label: "Platform" },
+  { kind: "other", label: "Other" },
+];
+export const SEASONS: readonly Season[] = ["spring", "summer", "autumn", "winter"];
+
+export interface DraftHazard {
+  kind: HazardKind;
+  /** Chainage, m; NaN when not given. */
+  at_m: number;
+  note: string;
+}
+
+export interface DraftSeason {
+  season: Season;
+  rail: RailWord;
+  note: string;
+}
+
+export interface NoteDraft {
+  /** The saved note's id; "" for a note not yet saved. */
+  id: string;
+  name: string;
+  line: string;
+  direction: string;
+  standing: string;
+  illustrative: boolean;
+  segments: SegmentFile[];
+  frontAt_m: number;
+  clearAhead_m: number;
+  /** NaN when not given. */
+  speedLimit_kmh: number;
+  hazards: DraftHazard[];
+  seasons: DraftSeason[];
+  practice: string;
+  /** The recorded history (not edited). */
+  revisions: Revision[];
+  /** The entry this save adds. */
+  revision: Revision;
+  referenceTrain: ReferenceTrainFile;
+}
+
+/** Today as YYYY-MM-DD in the device's time zone. */
+export function today(now: Date = new Date()): string {
+  const p = (n: number) => String(n).padStart(2, "0");
+  return `${now.getFullYear()}-${p(now.getMonth() + 1)}-${p(now.getDate())}`;
+}
+
+/** A draft for a new note: one straight level segment, the train's front 100 m from its end. */
+export function newDraft(referenceTrain: ReferenceTrainFile, initials: string, now: Date = new Date()): NoteDraft {
+  return {
+    id: "",
+    name: "",
+    line: "",
+    direction: "",
+    standing: "",
+    illustrative: false,
+    segments: [{ from_m: 0, length_m: 1000, gradient_permille: 0, curveRadius_m: 0 }],
+    frontAt_m: 900,
+    clearAhead_m: 100,
+    speedLimit_kmh: Number.NaN,
+    hazards: [],
+    seasons: [],
+    practice: "",
+    revisions: [],
+    revision: { date: today(now), initials, change: "New note." },
+    referenceTrain,
+  };
+}
+
+/** A draft of a saved note; the revision entry for the next save starts empty. */
+export function draftFromNote(n: LocationNoteFile, fallbackTrain: ReferenceTrainFile, initials: string, now: Date = new Date()): NoteDraft {
+  return {
+    id: n.id,
+    name: n.name,
+    line: n.line ?? "",
+    direction: n.direction ?? "",
+    standing: n.standing ?? "",
+    illustrative: n.illustrative === true,
+    segments: n.segments.map((s) => ({ ...s })),
+    frontAt_m: n.frontAt_m,
+    clearAhead_m: n.clearAhead_m,
+    speedLimit_kmh: n.speedLimit_kmh ?? Number.NaN,
+    hazards: n.hazards.map((h) => ({ kind: h.kind, at_m: h.at_m ?? Number.NaN, note: h.note ?? "" })),
+    seasons: n.seasons.map((s) => ({ season: s.season, rail: s.rail, note: s.note ?? "" })),
+    practice: n.practice,
+    revisions: n.revisions.map((r) => ({ ...r })),
+    revision: { date: today(now), initials, change: "" },
+    referenceTrain: { ...(n.referenceTrain ?? fallbackTrain) },
+  };
+}
+
+/** A lower-case id from a name, unique among `taken`. */
+export function idFromName(name: string, taken: ReadonlySet<string>): string {
+  const base =
+    name
+      .normalize("NFKD")
+      .replace(/[\u0300-\u036f]/g, "")
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-+|-+$/g, "")
+      .slice(0, 60)
+      .replace(/-+$/, "") || "note";
+  let id = base;
+  for (let k = 2; taken.has(id); k++) id = `${base}-${k}`;
+  return id;
+}
+
+const optText = (s: string) => (s.trim() === "" ? undefined : s.trim());
+
+/**
+ * The note a save writes: the draft's fields, with this save's revision entry appended when it says
+ * what changed. `id` is used for a draft not yet saved.
+ */
+export function noteFromDraft(d: NoteDraft, id: string): Record<string, unknown> {
+  const revision = { date: d.revision.date.trim(), initials: d.revision.initials.trim(), change: d.revision.change.trim() };
+  const addRevision = revision.change !== "" || d.revisions.length === 0;
+  const note: Record<string, unknown> = {
+    schema: "taut/location@1",
+    id: d.id || id,
+    name: d.name.trim(),
+  };
+  const line = optText(d.line);
+  const direction = optText(d.direction);
+  if (line !== undefined) note.line = line;
+  if (direction !== undefined) note.direction = direction;
+  if (d.illustrative) note.illustrative = true;
+  const standing = optText(d.standing);
+  if (standing !== undefined) note.standing = standing;
+  note.referenceTrain = { ...d.referenceTrain };
+  note.segments = d.segments.map((s) => ({ from_m: s.from_m, length_m: s.length_m, gradient_permille: s.gradient_permille, curveRadius_m: s.curveRadius_m }));
+  note.frontAt_m = d.frontAt_m;
+  note.clearAhead_m = d.clearAhead_m;
+  if (Number.isFinite(d.speedLimit_kmh)) note.speedLimit_kmh = d.speedLimit_kmh;
+  note.hazards = d.hazards.map((h) => ({ kind: h.kind, ...(Number.isFinite(h.at_m) ? { at_m: h.at_m } : {}), ...(h.note.trim() ? { note: h.note.trim() } : {}) }));
+  note.seasons = d.seasons.map((s) => ({ season: s.season, rail: s.rail, ...(s.note.trim() ? { note: s.note.trim() } : {}) }));
+  note.practice = d.practice.trim();
+  note.revisions = addRevision ? [...d.revisions, revision] : [...d.revisions];
+  return note;
+}
+
+/** Segments laid end to end from the first one's start, lengths kept (the "join up" fix for gaps and overlaps). */
+export function joinSegments(segs: readonly SegmentFile[]): SegmentFile[] {
+  let at = segs[0]?.from_m ?? 0;
+  return segs.map((s) => {
+    const out = { ...s, from_m: at };
+    at += s.length_m;
+    return out;
+  });
+}
+
+/** A segment added after the last one, continuing its gradient and curve. */
+export function nextSegment(segs: readonly SegmentFile[]): SegmentFile {
+  const last = segs[segs.length - 1];
+  if (!last) return { from_m: 0, length_m: 500, gradient_permille: 0, curveRadius_m: 0 };
+  return { from_m: last.from_m + last.length_m, length_m: 500, gradient_permille: last.gradient_permille, curveRadius_m: last.curveRadius_m };
+}

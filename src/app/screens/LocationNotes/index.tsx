@@ -1,0 +1,155 @@
+/**
+ * Location notes (wiring): the device's notes store, the editor, the card and printing, import and
+ * export, connected to the app's settings (units), theme (chart palette) and the location pickers of the
+ * other screens. The view is `View.tsx`.
+ */
+import { createMemo, createSignal, type JSX } from "solid-js";
+import { builtinLibrary, builtinTrains } from "../../../profiles/builtin.js";
+import type { ConflictChoice, ImportConflict } from "../../../notes/merge.js";
+import { deviceNotesStore } from "../../../notes/index.js";
+import { PALETTES } from "../../charts/palette.js";
+import { useApp } from "../../context.js";
+import { notifyLocationsChanged } from "../../locations.js";
+import { read, safeLocalStorage, write } from "../../state/createSettings.js";
+import { createNoteEditor } from "./createNoteEditor.js";
+import { createNotesLibrary, downloadBundle } from "./createNotesLibrary.js";
+import { today } from "./draft.js";
+import { installNotesLocationSource } from "./source.js";
+import { View, type Mode } from "./View.js";
+
+/** Where the editor remembers the trainer's initials between revisions. */
+export const INITIALS_KEY = "taut.notes.initials";
+
+// The other screens' location pickers list the device's notes from the moment the app loads this screen.
+installNotesLocationSource();
+
+export function LocationNotesScreen(): JSX.Element {
+  const app = useApp();
+  const storage = safeLocalStorage();
+  const units = () => app.settings.settings().units;
+  const palette = () => PALETTES[app.theme()];
+  const profiles = builtinLibrary();
+  const [initials, setInitials] = createSignal(read(storage, INITIALS_KEY) ?? "");
+  const [mode, setMode] = createSignal<Mode>("library");
+  const [busy, setBusy] = createSignal(false);
+  const [conflicts, setConflicts] = createSignal<{ list: ImportConflict[]; answer: (c: Record<string, ConflictChoice> | null) => void } | null>(null);
+
+  const lib = createNotesLibrary({ openStore: deviceNotesStore, changed: notifyLocationsChanged });
+  const editor = createNoteEditor({ units, presets: builtinTrains, library: () => profiles, initials, active: () => mode() !== "library" });
+  const takenIds = createMemo(() => new Set(lib.notes().map((n) => n.note.id)));
+
+  const task = async (f: () => Promise<void>) => {
+    setBusy(true);
+    try {
+      await f();
+    } catch (e) {
+      lib.setNotice({ kind: "problem", text: `Something went wrong: ${(e as Error).message || String(e)}` });
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  const openNote = (id: string, then: Mode) => {
+    const s = lib.notes().find((n) => n.note.id === id);
+    if (!s) return;
+    lib.setNotice(null);
+    editor.load(s.note);
+    setMode(then);
+    // Start the opened note at its top: scroll the app's screen area, not the page.
+    const area = document.querySelector(".notes-screen")?.closest(".screen");
+    if (area) area.scrollTop = 0;
+  };
+
+  const ask = (list: ImportConflict[]) =>
+    new Promise<Record<string, ConflictChoice> | null>((resolve) =>
+      setConflicts({
+        list,
+        answer: (c) => {
+          setConflicts(null);
+          resolve(c);
+        },
+      }),
+    );
+
+  return (
+    <View
+      mode={mode()}
+      units={units()}
+      palette={palette()}
+      presets={builtinTrains}
+      profiles={profiles}
+      editor={editor}
+      busy={busy()}
+      printedOn={today()}
+      conflicts={conflicts()?.list ?? null}
+      onConflictsDone={(c) => conflicts()?.answer(c)}
+      library={{
+        ready: lib.ready(),
+        failure: lib.failure(),
+        notes: lib.notes(),
+        problems: lib.problems(),
+        reminder: lib.reminder(),
+        persisted: lib.persisted(),
+        notice: lib.notice(),
+        busy: busy(),
+        onDismissNotice: () => lib.setNotice(null),
+        onImport: (file) => void task(async () => lib.importText(await file.text(), file.name, ask)),
+        onExportAll: () =>
+          void task(async () => {
+            const b = await lib.exportBundle();
+            if (b) downloadBundle(b);
+          }),
+        onRestoreDemos: () => void task(() => lib.restoreDemos()),
+        onRemove: (id) => void task(() => lib.remove(id)),
+        onRemoveAll: () => void task(() => lib.removeAll()),
+      }}
+      onOpen={(id) => openNote(id, "edit")}
+      onCard={(id) => openNote(id, "card")}
+      onNew={() => {
+        lib.setNotice(null);
+        editor.load(undefined);
+        setMode("edit");
+      }}
+      onSave={() =>
+        void task(async () => {
+          const note = editor.toNote(takenIds());
+          const r = await lib.save(note);
+          if (!r.ok) {
+            lib.setNotice({ kind: "problem", text: "The note was not saved.", details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+            return;
+          }
+          const ini = editor.draft.revision.initials.trim();
+          if (ini) {
+            setInitials(ini);
+            write(storage, INITIALS_KEY, ini);
+          }
+          editor.load(r.saved.note);
+        })
+      }
+      onClose={() => {
+        setMode("library");
+        void lib.refresh();
+      }}
+      onDelete={() =>
+        void task(async () => {
+          const s = editor.saved();
+          if (!s) return;
+          await lib.remove(s.id);
+          setMode("library");
+        })
+      }
+      onExportNote={() =>
+        void task(async () => {
+          const s = editor.saved();
+          if (!s) return;
+          const b = await lib.exportBundle([s.id]);
+          if (b) downloadBundle(b, `taut-note-${s.id}.json`);
+        })
+      }
+      onEdit={() => setMode("edit")}
+      onPrint={() => window.print()}
+    />
+  );
+}
+
+export default LocationNotesScreen;

@@ -1,0 +1,48 @@
+/**
+ * Start plan: inputs and plan side by side in landscape; in portrait one at a time, switched by two large
+ * buttons of which the plan's carries the verdict, so it stays in view while editing.
+ */
+import { createSignal, Show, type JSX } from "solid-js";
+import type { Verdict } from "../../../core/types.js";
+import { VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
+import { InputsView, type InputsViewProps } from "./InputsView.js";
+import { ResultView, type ResultViewProps } from "./ResultView.js";
+
+export interface StartPlanViewProps {
+  inputs: InputsViewProps;
+  result: ResultViewProps;
+}
+
+export function StartPlanView(props: StartPlanViewProps): JSX.Element {
+  const [pane, setPane] = createSignal<"inputs" | "plan">("plan");
+  const verdict = (): Verdict | null => props.result.result?.verdict ?? null;
+  return (
+    <div class="start-plan" data-pane={pane()}>
+      <div class="pane-switch" role="tablist" aria-label="Start plan view">
+        <button type="button" role="tab" id="tab-inputs" aria-controls="pane-inputs" aria-selected={pane() === "inputs"} onClick={() => setPane("inputs")}>
+          Inputs
+          <Show when={props.inputs.store.issues().length > 0}>
+            <span class="badge">{props.inputs.store.issues().length} to fix</span>
+          </Show>
+        </button>
+        <button type="button" role="tab" id="tab-plan" aria-controls="pane-plan" aria-selected={pane() === "plan"} onClick={() => setPane("plan")}>
+          Plan
+          <Show when={verdict()}>
+            {(v) => (
+              <span class={`pane-verdict verdict-${v()}`}>
+                <VerdictIcon verdict={v()} size={24} />
+                {VERDICT_WORD[v()]}
+              </span>
+            )}
+          </Show>
+        </button>
+      </div>
+      <div class="pane pane-inputs" id="pane-inputs" role="region" aria-label="Inputs">
+        <InputsView {...props.inputs} />
+      </div>
+      <div class="pane pane-plan" id="pane-plan" role="region" aria-label="Plan">
+        <ResultView {...props.result} />
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,67 @@
+/** Start plan wiring: the case being edited, its plan run and the settings, into the view. */
+import type { JSX } from "solid-js";
+import { builtinTrains } from "../../../profiles/builtin.js";
+import { PALETTES } from "../../charts/palette.js";
+import { useApp } from "../../context.js";
+import { StartPlanView } from "./View.js";
+
+export default function StartPlan(): JSX.Element {
+  const app = useApp();
+  const units = () => app.settings.settings().units;
+  const checked = () => app.draft.checked();
+  return (
+    <StartPlanView
+      inputs={{
+        store: app.draft,
+        get units() {
+          return units();
+        },
+        get library() {
+          return app.locations.library();
+        },
+        get locations() {
+          return app.locations.choices();
+        },
+        get locationsError() {
+          return app.locations.error();
+        },
+        presets: builtinTrains,
+      }}
+      result={{
+        get status() {
+          return app.run.status();
+        },
+        get progress() {
+          return app.run.progress();
+        },
+        get result() {
+          return app.run.result();
+        },
+        get current() {
+          return app.run.current();
+        },
+        get massPending() {
+          return app.run.massPending();
+        },
+        get error() {
+          return app.run.error();
+        },
+        get startCase() {
+          const c = checked();
+          return c.ok ? c.value : null;
+        },
+        get units() {
+          return units();
+        },
+        get palette() {
+          return PALETTES[app.theme()];
+        },
+        get illustrative() {
+          return app.draft.draft.illustrative;
+        },
+        onOpenCab: () => app.nav.go("cab-steps"),
+        onRetry: () => app.run.retry(),
+      }}
+    />
+  );
+}

@@ -1,0 +1,159 @@
+/**
+ * The start case as the Start plan screen edits it: flat, always complete, in file units (t, kN, mm,
+ * km/h, m, ‰, °C). `draftToFile` turns it into the `taut/start-case@1` shape the worker and the command
+ * line read; `draftFromFile` fills it from a case file. Pure functions, no Solid.
+ */
+import type { RailCondition, SlackState } from "../../core/types.js";
+import type { StartCaseFile, TrainPresetFile } from "../../profiles/schemas.js";
+
+export type DraftPosition = "head" | "rear" | "after";
+
+export interface DraftLoco {
+  profile: string;
+  count: number;
+  position: DraftPosition;
+  /** Used when position is "after". */
+  afterWagon: number;
+}
+
+export interface CaseDraft {
+  id: string;
+  label: string;
+  illustrative: boolean;
+  locomotives: DraftLoco[];
+  train: {
+    trailingMass_t: number;
+    wagons: number;
+    length_m: number;
+    couplerSlack_mm: number;
+    bearing: "roller" | "plain";
+    couplerLimit_kN: number;
+    coupling: "knuckle" | "screw";
+    /** A wagon type id from the library, or "" for a plain bogie wagon. */
+    wagonType: string;
+    slackState: SlackState;
+  };
+  locationMode: "note" | "quick";
+  /** The chosen location note (saved or built-in). */
+  noteId: string;
+  quick: { gradient_permille: number; curveRadius_m: number; clearAhead_m: number };
+  conditions: { rail: RailCondition; sand: boolean; temperature_C: number };
+  targetKind: "speed" | "distance";
+  target: { speed_kmh: number; distance_m: number };
+}
+
+/** The settings a case carries (INTERFACE.md `settings`). */
+export interface CaseSettings {
+  couplerSafetyFactor: number;
+  slipRiskThreshold: number;
+}
+
+/** Working limits used when the coupling type changes (PHYSICS.md §4). */
+export const COUPLING_DEFAULTS = {
+  knuckle: { couplerLimit_kN: 970, couplerSlack_mm: 50 },
+  screw: { couplerLimit_kN: 850, couplerSlack_mm: 5 },
+} as const;
+
+const QUICK_DEFAULT = { gradient_permille: 0, curveRadius_m: 0, clearAhead_m: 500 };
+
+/** Fill a draft from a validated case file (inline locomotive profiles are kept by id). */
+export function draftFromFile(f: StartCaseFile, wagonCoupling: (wagonType: string) => "knuckle" | "screw" | undefined = () => undefined): CaseDraft {
+  const loc = f.location;
+  return {
+    id: f.id ?? "",
+    label: f.label ?? "",
+    illustrative: f.illustrative ?? false,
+    locomotives: f.locomotives.map(locoFromFile),
+    train: trainFromFile(f.train, wagonCoupling),
+    locationMode: typeof loc === "string" ? "note" : "quick",
+    noteId: typeof loc === "string" ? loc : "",
+    quick:
+      typeof loc === "string"
+        ? { ...QUICK_DEFAULT }
+        : "segments" in loc
+          ? { gradient_permille: loc.segments[0]!.gradient_permille, curveRadius_m: loc.segments[0]!.curveRadius_m, clearAhead_m: loc.clearAhead_m }
+          : { gradient_permille: loc.gradient_permille, curveRadius_m: loc.curveRadius_m, clearAhead_m: loc.clearAhead_m },
+    conditions: { rail: f.conditions.rail, sand: f.conditions.sand, temperature_C: f.conditions.temperature_C },
+    targetKind: "speed_kmh" in f.target ? "speed" : "distance",
+    target: {
+      speed_kmh: "speed_kmh" in f.target ? f.target.speed_kmh : 20,
+      distance_m: "distance_m" in f.target ? f.target.distance_m : 500,
+    },
+  };
+}
+
+function locoFromFile(l: StartCaseFile["locomotives"][number]): DraftLoco {
+  const p = l.position;
+  return {
+    profile: typeof l.profile === "string" ? l.profile : l.profile.id,
+    count: l.count,
+    position: typeof p === "string" ? p : "after",
+    afterWagon: typeof p === "string" ? 1 : p.afterWagon,
+  };
+}
+
+function trainFromFile(t: StartCaseFile["train"], wagonCoupling: (id: string) => "knuckle" | "screw" | undefined): CaseDraft["train"] {
+  return {
+    trailingMass_t: t.trailingMass_t,
+    wagons: t.wagons,
+    length_m: t.length_m,
+    couplerSlack_mm: t.couplerSlack_mm,
+    bearing: t.bearing,
+    couplerLimit_kN: t.couplerLimit_kN,
+    coupling: t.coupling ?? (t.wagonType ? wagonCoupling(t.wagonType) : undefined) ?? "knuckle",
+    wagonType: t.wagonType ?? "",
+    slackState: t.slackState,
+  };
+}
+
+/** Apply a train preset (locomotives and train make-up) to a draft, keeping location, conditions and target. */
+export function applyPreset(d: CaseDraft, p: TrainPresetFile, wagonCoupling: (id: string) => "knuckle" | "screw" | undefined = () => undefined): CaseDraft {
+  return { ...d, id: "", label: p.label, illustrative: p.illustrative ?? false, locomotives: p.locomotives.map(locoFromFile), train: trainFromFile(p.train, wagonCoupling) };
+}
+
+/** The `taut/start-case@1` object for a draft (the worker and the CLI read this shape). */
+export function draftToFile(d: CaseDraft, settings?: CaseSettings): Record<string, unknown> {
+  const out: Record<string, unknown> = { schema: "taut/start-case@1" };
+  if (d.id) out.id = d.id;
+  if (d.label) out.label = d.label;
+  if (d.illustrative) out.illustrative = true;
+  out.locomotives = d.locomotives.map((l) => ({
+    profile: l.profile,
+    count: l.count,
+    position: l.position === "after" ? { afterWagon: l.afterWagon } : l.position,
+  }));
+  const t = d.train;
+  out.train = {
+    trailingMass_t: t.trailingMass_t,
+    wagons: t.wagons,
+    length_m: t.length_m,
+    couplerSlack_mm: t.couplerSlack_mm,
+    bearing: t.bearing,
+    couplerLimit_kN: t.couplerLimit_kN,
+    coupling: t.coupling,
+    ...(t.wagonType ? { wagonType: t.wagonType } : {}),
+    slackState: t.slackState,
+  };
+  out.location = d.locationMode === "note" ? d.noteId : { ...d.quick };
+  out.conditions = { ...d.conditions };
+  out.target = d.targetKind === "speed" ? { speed_kmh: d.target.speed_kmh } : { distance_m: d.target.distance_m };
+  if (settings) out.settings = { couplerSafetyFactor: settings.couplerSafetyFactor, slipRiskThreshold: settings.slipRiskThreshold };
+  return out;
+}
+
+/** Whether a value read back from storage has the draft's shape (a stale or foreign value is ignored). */
+export function looksLikeDraft(x: unknown): x is CaseDraft {
+  if (!x || typeof x !== "object") return false;
+  const d = x as Partial<CaseDraft>;
+  return (
+    Array.isArray(d.locomotives) &&
+    d.locomotives.length > 0 &&
+    typeof d.train === "object" &&
+    d.train !== null &&
+    typeof d.quick === "object" &&
+    typeof d.conditions === "object" &&
+    typeof d.target === "object" &&
+    (d.locationMode === "note" || d.locationMode === "quick") &&
+    (d.targetKind === "speed" || d.targetKind === "distance")
+  );
+}

@@ -1,0 +1,139 @@
+/**
+ * The case being edited on the Start plan screen: a Solid store of the draft, kept in localStorage so
+ * it survives a reload (the built-in demo case on first open), its start-case JSON with the safety
+ * settings, and its validation with issues by field in the user's units.
+ */
+import { createEffect, createMemo, createSignal, onCleanup, type Accessor } from "solid-js";
+import { createStore, reconcile, unwrap, type SetStoreFunction } from "solid-js/store";
+import type { StartCase } from "../../core/types.js";
+import { builtinCases, DEMO_CASE_ID } from "../../profiles/builtin.js";
+import type { FieldIssue, ParseResult } from "../../profiles/issues.js";
+import type { Library } from "../../profiles/library.js";
+import type { StartCaseFile, TrainPresetFile } from "../../profiles/schemas.js";
+import { localiseIssue } from "../fields.js";
+import type { AppSettings } from "./createSettings.js";
+import { read, safeLocalStorage, write } from "./createSettings.js";
+import { applyPreset, draftFromFile, draftToFile, looksLikeDraft, type CaseDraft, type DraftLoco } from "./caseDraft.js";
+import { validateDraft } from "./validateDraft.js";
+
+export const DRAFT_KEY = "taut.case.v1";
+
+/** Read every field of a store so an effect re-runs on any change inside it. */
+function trackDeep(x: unknown): void {
+  if (Array.isArray(x)) for (const v of x) trackDeep(v);
+  else if (x && typeof x === "object") for (const k of Object.keys(x)) trackDeep((x as Record<string, unknown>)[k]);
+}
+
+export interface CaseDraftStore {
+  draft: CaseDraft;
+  /** Edit the draft (Solid store setter); marks it edited. */
+  set: SetStoreFunction<CaseDraft>;
+  /** Whether the user changed the draft since it was loaded from a case or preset. */
+  edited: Accessor<boolean>;
+  loadCase(f: StartCaseFile): void;
+  loadDemo(): void;
+  applyPreset(p: TrainPresetFile): void;
+  addLocomotive(): void;
+  removeLocomotive(k: number): void;
+  /** The `taut/start-case@1` object, with the safety settings. */
+  caseJson: Accessor<Record<string, unknown>>;
+  checked: Accessor<ParseResult<StartCase>>;
+  /** Every issue, in the user's units. */
+  issues: Accessor<FieldIssue[]>;
+  /** The first issue at one of these field paths (e.g. "train.trailingMass_t"). */
+  issueAt(...paths: string[]): FieldIssue | undefined;
+}
+
+export interface CaseDraftDeps {
+  library: Accessor<Library>;
+  settings: Accessor<AppSettings>;
+  storage?: Storage | null;
+}
+
+/** The demo case the app opens with. */
+export function demoCaseFile(): StartCaseFile {
+  return builtinCases.find((c) => c.id === DEMO_CASE_ID) ?? builtinCases[0]!;
+}
+
+export function createCaseDraft(deps: CaseDraftDeps): CaseDraftStore {
+  const storage = deps.storage === undefined ? safeLocalStorage() : deps.storage;
+  const couplingOf = (id: string) => deps.library().wagons.get(id)?.coupling;
+  const stored = (() => {
+    const raw = read(storage, DRAFT_KEY);
+    if (!raw) return undefined;
+    try {
+      const x: unknown = JSON.parse(raw);
+      return looksLikeDraft(x) ? x : undefined;
+    } catch {
+      return undefined;
+    }
+  })();
+  const [draft, setDraft] = createStore<CaseDraft>(stored ?? draftFromFile(demoCaseFile(), couplingOf));
+  const [edited, setEdited] = createSignal(false);
+
+  const set = ((...args: unknown[]) => {
+    (setDraft as (...a: unknown[]) => void)(...args);
+    setEdited(true);
+  }) as SetStoreFunction<CaseDraft>;
+
+  const replace = (d: CaseDraft) => {
+    setDraft(reconcile(d));
+    setEdited(false);
+  };
+
+  // Saved a moment after the last edit, not on every keystroke.
+  let saveTimer: ReturnType<typeof setTimeout> | null = null;
+  const save = () => {
+    saveTimer = null;
+    write(storage, DRAFT_KEY, JSON.stringify(draft));
+  };
+  createEffect(() => {
+    trackDeep(draft);
+    if (saveTimer !== null) clearTimeout(saveTimer);
+    saveTimer = setTimeout(save, 400);
+  });
+  onCleanup(() => {
+    if (saveTimer !== null) {
+      clearTimeout(saveTimer);
+      save();
+    }
+  });
+  if (typeof addEventListener === "function") {
+    const flush = () => saveTimer !== null && (clearTimeout(saveTimer), save());
+    addEventListener("pagehide", flush);
+    onCleanup(() => removeEventListener("pagehide", flush));
+  }
+
+  const caseJson = createMemo(() => {
+    const s = deps.settings();
+    return draftToFile(draft, { couplerSafetyFactor: s.couplerSafetyFactor, slipRiskThreshold: s.slipRiskThreshold });
+  });
+  const checked = createMemo(() => validateDraft(caseJson(), unwrap(draft), deps.library()));
+  const issues = createMemo(() => {
+    const c = checked();
+    const units = deps.settings().units;
+    return c.ok ? [] : c.issues.map((i) => localiseIssue(i, units));
+  });
+
+  return {
+    draft,
+    set,
+    edited,
+    loadCase: (f) => replace(draftFromFile(f, couplingOf)),
+    loadDemo: () => replace(draftFromFile(demoCaseFile(), couplingOf)),
+    applyPreset: (p) => replace(applyPreset(unwrap(draft), p, couplingOf)),
+    addLocomotive: () => {
+      const first = draft.locomotives[0];
+      const l: DraftLoco = { profile: first?.profile ?? [...deps.library().locomotives.keys()][0] ?? "", count: 1, position: "rear", afterWagon: Math.max(1, Math.floor(draft.train.wagons / 2)) };
+      set("locomotives", draft.locomotives.length, l);
+    },
+    removeLocomotive: (k) => {
+      if (draft.locomotives.length <= 1) return;
+      set("locomotives", (ls) => ls.filter((_, i) => i !== k));
+    },
+    caseJson,
+    checked,
+    issues,
+    issueAt: (...paths) => issues().find((i) => paths.includes(i.path)),
+  };
+}

@@ -1,0 +1,180 @@
+/**
+ * Running the planner for the case being edited. Whenever the valid case changes: wait a moment for the
+ * typing to settle, cancel what is in progress and ask the worker for the plan (without the
+ * largest-startable-mass search, so it is on screen quickly); then, on a second worker when there is
+ * one, the full plan with that search, which replaces the first when it arrives. The last good plan stays on screen, marked
+ * as out of date, until its successor arrives. The first request goes out at once, before the page has
+ * finished rendering.
+ */
+import { createEffect, createMemo, createSignal, on, onCleanup, type Accessor } from "solid-js";
+import type { PlanResult } from "../../core/planner/types.js";
+import type { StartCase } from "../../core/types.js";
+import type { PlannerClient } from "../../worker/client.js";
+import type { WorkerIssue } from "../../worker/protocol.js";
+
+export type RunStatus = "idle" | "waiting" | "running" | "done" | "invalid" | "failed";
+
+export interface PlanRun {
+  status: Accessor<RunStatus>;
+  /** 0..1 while running. */
+  progress: Accessor<number>;
+  /** The latest plan (possibly for earlier inputs: see `current`). */
+  result: Accessor<PlanResult | null>;
+  /** Whether `result` belongs to the inputs on screen. */
+  current: Accessor<boolean>;
+  /** The largest-startable-mass search for the plan on screen is still running. */
+  massPending: Accessor<boolean>;
+  /** Issues the worker found (the screen validates first, so these mean a bug). */
+  issues: Accessor<WorkerIssue[]>;
+  error: Accessor<string | null>;
+  /** Time the last plan took in the worker, ms. */
+  elapsedMs: Accessor<number | null>;
+  /** Ask again for the same inputs (after a failure). */
+  retry(): void;
+}
+
+export interface PlanRunDeps {
+  client: PlannerClient;
+  /** A second worker for the slower largest-startable-mass search that follows each plan; without it that figure is not computed. */
+  background?: PlannerClient;
+  /** The validated case to plan (core SI form), or null while the inputs break a rule. */
+  startCase: Accessor<StartCase | null>;
+  /** Wait after the last change before planning, ms. */
+  debounceMs?: number;
+  /** Called once, when the first plan is on screen, with the time the planner took in the worker (ms). */
+  onFirstResult?: (workerMs: number) => void;
+}
+
+export function createPlanRun(deps: PlanRunDeps): PlanRun {
+  const debounceMs = deps.debounceMs ?? 200;
+  const [status, setStatus] = createSignal<RunStatus>("idle");
+  const [progress, setProgress] = createSignal(0);
+  const [result, setResult] = createSignal<PlanResult | null>(null);
+  const [resultKey, setResultKey] = createSignal<string | null>(null);
+  const [massPending, setMassPending] = createSignal(false);
+  const [issues, setIssues] = createSignal<WorkerIssue[]>([]);
+  const [error, setError] = createSignal<string | null>(null);
+  const [elapsedMs, setElapsedMs] = createSignal<number | null>(null);
+  const [nonce, setNonce] = createSignal(0);
+  let controller: AbortController | null = null;
+  let timer: ReturnType<typeof setTimeout> | null = null;
+  let firstDone = false;
+  /** The key of the request in flight or answered (so the first effect run does not repeat the early start). */
+  let requestedKey: string | null = null;
+
+  // The case's identity: its full SI content (a changed note or setting replans even under the same ids).
+  const key = createMemo(() => {
+    const c = deps.startCase();
+    return c ? JSON.stringify(c) : null;
+  });
+
+  const cancel = () => {
+    if (timer !== null) clearTimeout(timer);
+    timer = null;
+    const stopped = controller !== null && massPending();
+    controller?.abort();
+    controller = null;
+    setMassPending(false);
+    // Stopping a running search ends its worker; start the next one in a task of its own, not in the
+    // task that renders the next plan.
+    if (stopped && deps.background) setTimeout(() => deps.background?.warm(), 0);
+  };
+
+  const fail = (e: unknown) => {
+    if ((e as { name?: string }).name === "AbortError") return;
+    setError(e instanceof Error ? e.message : String(e));
+    setStatus("failed");
+  };
+
+  const background = (startCase: StartCase, k: string, ctrl: AbortController) => {
+    if (!deps.background) {
+      if (controller === ctrl) controller = null;
+      return;
+    }
+    setMassPending(true);
+    deps.background
+      .plan(startCase, { signal: ctrl.signal })
+      .then((out) => {
+        if (ctrl.signal.aborted || resultKey() !== k) return;
+        setMassPending(false);
+        if (out.ok) setResult(out.result);
+      })
+      .catch(() => {
+        if (!ctrl.signal.aborted) setMassPending(false);
+      });
+  };
+
+  const start = (startCase: StartCase, k: string) => {
+    const ctrl = new AbortController();
+    controller = ctrl;
+    requestedKey = k;
+    setStatus("running");
+    setProgress(0);
+    deps.client
+      .plan(startCase, { signal: ctrl.signal, onProgress: (f) => !ctrl.signal.aborted && setProgress(f), skipMassSearch: true })
+      .then((out) => {
+        if (ctrl.signal.aborted) return;
+        if (out.ok) {
+          setResult(out.result);
+          setResultKey(k);
+          setIssues([]);
+          setError(null);
+          setElapsedMs(out.elapsedMs);
+          setStatus("done");
+          if (!firstDone) {
+            firstDone = true;
+            deps.onFirstResult?.(out.elapsedMs);
+          }
+          background(startCase, k, ctrl);
+        } else if (out.kind === "invalid") {
+          setIssues(out.issues);
+          setStatus("invalid");
+        } else {
+          setError(out.message);
+          setStatus("failed");
+        }
+      })
+      .catch(fail);
+  };
+
+  // The first plan is asked for at once (the worker loads while the page renders).
+  {
+    const k = key();
+    const c = deps.startCase();
+    if (k !== null && c !== null) start(c, k);
+  }
+
+  createEffect(
+    on([key, nonce], ([k], prev) => {
+      const retried = prev !== undefined && prev[1] !== nonce();
+      if (!retried && k !== null && k === requestedKey && (status() === "running" || status() === "done")) return;
+      cancel();
+      const c = deps.startCase();
+      if (k === null || c === null) {
+        requestedKey = null;
+        setStatus("invalid");
+        return;
+      }
+      setStatus("waiting");
+      const wait = result() === null ? 0 : debounceMs;
+      timer = setTimeout(() => {
+        timer = null;
+        start(c, k);
+      }, wait);
+    }),
+  );
+
+  onCleanup(cancel);
+
+  return {
+    status,
+    progress,
+    result,
+    current: () => resultKey() !== null && resultKey() === key(),
+    massPending,
+    issues,
+    error,
+    elapsedMs,
+    retry: () => setNonce((n) => n + 1),
+  };
+}

@@ -1,0 +1,33 @@
+/**
+ * Component-test setup (jsdom): unmount after every test, a fresh localStorage and location, and the
+ * browser pieces jsdom lacks (matchMedia; a canvas without a 2D context, which the Chart wrapper handles).
+ */
+import { cleanup } from "@solidjs/testing-library";
+import { afterEach, beforeEach } from "vitest";
+
+beforeEach(() => {
+  localStorage.clear();
+  history.replaceState(null, "", "/");
+  document.documentElement.removeAttribute("data-theme");
+});
+
+afterEach(() => {
+  cleanup();
+});
+
+if (typeof window.matchMedia !== "function") {
+  window.matchMedia = (query: string) =>
+    ({
+      matches: false,
+      media: query,
+      onchange: null,
+      addEventListener: () => undefined,
+      removeEventListener: () => undefined,
+      addListener: () => undefined,
+      removeListener: () => undefined,
+      dispatchEvent: () => false,
+    }) as MediaQueryList;
+}
+
+// jsdom has no canvas: answer "no context" quietly instead of printing "not implemented".
+HTMLCanvasElement.prototype.getContext = (() => null) as typeof HTMLCanvasElement.prototype.getContext;

@@ -1,0 +1,285 @@
+/**
+ * The built app in Debian's Chromium: first plan on load, Cab steps and If wheels slip, units and theme,
+ * accessibility (axe-core), screenshots at 1280×800 and 800×1280, offline reload through the service
+ * worker, and no console errors. Timing figures are printed, not asserted.
+ */
+import { mkdirSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
+import { createRequire } from "node:module";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+
+const require = createRequire(import.meta.url);
+const AXE = readFileSync(require.resolve("axe-core/axe.min.js"), "utf8");
+const SHOTS = fileURLToPath(new URL("../../test-results/screenshots/", import.meta.url));
+const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
+const LANDSCAPE = { width: 1280, height: 800 };
+const PORTRAIT = { width: 800, height: 1280 };
+
+let context: BrowserContext;
+let page: Page;
+let profile: string;
+const problems: string[] = [];
+const base = inject("baseURL");
+
+/** Records long main-thread tasks (≥ 50 ms) with their start times, from the first byte on. */
+const LONG_TASKS = `
+  window.__longTasks = [];
+  try {
+    new PerformanceObserver((list) => {
+      for (const e of list.getEntries()) window.__longTasks.push({ start: e.startTime, duration: e.duration });
+    }).observe({ type: "longtask", buffered: true });
+  } catch (e) {}
+`;
+
+async function shot(name: string): Promise<void> {
+  await page.screenshot({ path: join(SHOTS, `${name}.png`) });
+}
+
+async function openScreen(name: string): Promise<void> {
+  const tab = page.getByRole("link", { name, exact: true });
+  await tab.click();
+}
+
+async function waitForCurrentPlan(): Promise<void> {
+  await page.waitForSelector(".verdict:not(.stale)", { timeout: 30_000 });
+  await page.waitForFunction(() => !document.querySelector('.result[aria-busy="true"]'), undefined, { timeout: 30_000 });
+}
+
+/** Every visible control smaller than 48 × 48 CSS px (gloved hands), as "label: control (w×h)". */
+async function smallTargets(label: string): Promise<string[]> {
+  const small = await page.evaluate(() => {
+    const out: string[] = [];
+    for (const el of document.querySelectorAll<HTMLElement>("button, a[href], input, select, textarea, [role=radio], [role=tab]")) {
+      const r = el.getBoundingClientRect();
+      if (r.width === 0 || r.height === 0 || getComputedStyle(el).visibility === "hidden") continue;
+      if (r.width < 47.5 || r.height < 47.5) out.push(`${el.tagName.toLowerCase()} "${(el.getAttribute("aria-label") ?? el.textContent ?? "").trim().slice(0, 40)}" (${Math.round(r.width)}×${Math.round(r.height)})`);
+    }
+    return out;
+  });
+  return small.map((s) => `${label}: touch target under 48 px: ${s}`);
+}
+
+async function axeSeriousOrCritical(label: string): Promise<string[]> {
+  const has = await page.evaluate(() => typeof (window as unknown as { axe?: unknown }).axe !== "undefined");
+  if (!has) await page.addScriptTag({ content: AXE });
+  const found = await page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: Array<{ id: string; impact: string; help: string; nodes: Array<{ target: string[] }> }> }> } }).axe;
+    const r = await axe.run(document, { resultTypes: ["violations"] });
+    return r.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join("; ")}`);
+  });
+  return found.map((f) => `${label}: ${f}`);
+}
+
+beforeAll(async () => {
+  mkdirSync(SHOTS, { recursive: true });
+  profile = mkdtempSync(join(tmpdir(), "taut-chromium-"));
+  context = await chromium.launchPersistentContext(profile, {
+    executablePath: inject("chromiumPath"),
+    headless: true,
+    args: ARGS,
+    serviceWorkers: "allow",
+    viewport: LANDSCAPE,
+  });
+  await context.addInitScript({ content: LONG_TASKS });
+  page = context.pages()[0] ?? (await context.newPage());
+  page.on("console", (m) => {
+    if (m.type() === "error") problems.push(`console: ${m.text()}`);
+  });
+  page.on("pageerror", (e) => problems.push(`page error: ${e.message}`));
+});
+
+afterAll(async () => {
+  await context?.close();
+  if (profile) rmSync(profile, { recursive: true, force: true });
+});
+
+describe("Taut in Chromium", () => {
+  it("shows a plan for the demo case right after load", async () => {
+    await page.goto(base);
+    await waitForCurrentPlan();
+    const word = await page.locator(".verdict .verdict-word").textContent();
+    expect(["Starts", "Marginal", "Needs assistance"]).toContain(word);
+    expect(await page.locator(".verdict svg.verdict-icon").getAttribute("data-shape")).toMatch(/circle|triangle|square/);
+    const first = await page.evaluate(() => {
+      const m = performance.getEntriesByName("taut:first-plan")[0] as PerformanceMark | undefined;
+      return { at: m?.startTime ?? Number.NaN, workerMs: (m?.detail as { workerMs?: number } | undefined)?.workerMs ?? Number.NaN, requestAt: performance.getEntriesByName("taut:first-request")[0]?.startTime ?? Number.NaN };
+    });
+    const firstPlanMs = first.at;
+    console.log(`[measure] load to first plan on screen: ${first.at.toFixed(0)} ms (request sent at ${first.requestAt.toFixed(0)} ms; planner in the worker ${first.workerMs.toFixed(0)} ms; first visit, cold caches)`);
+    expect(firstPlanMs).toBeGreaterThan(0);
+    await page.getByText("Illustrative demo data", { exact: false }).waitFor();
+  });
+
+  it("keeps the main thread free while planning", async () => {
+    await page.evaluate(() => ((window as unknown as { __longTasks: unknown[] }).__longTasks.length = 0));
+    // Tapped from inside the page, so the test tool's own element lookup is not counted as the app's work.
+    const t0 = await page.evaluate(() => {
+      const now = performance.now();
+      (document.querySelector('[aria-label="Trailing mass: more"]') as HTMLButtonElement).click();
+      return now;
+    });
+    await page.waitForSelector(".verdict.stale", { timeout: 5_000 }).catch(() => undefined);
+    await waitForCurrentPlan();
+    const t1 = await page.evaluate(() => performance.now());
+    const tasks = await page.evaluate(() => (window as unknown as { __longTasks: Array<{ start: number; duration: number }> }).__longTasks);
+    const during = tasks.filter((t) => t.start >= t0 && t.start <= t1);
+    const longest = during.reduce((m, t) => Math.max(m, t.duration), 0);
+    console.log(`[measure] replan after an edit: ${(t1 - t0).toFixed(0)} ms; long tasks while planning: ${during.length}, longest ${longest.toFixed(0)} ms (none ≥ 50 ms reads 0)`);
+    await page.getByRole("button", { name: "Trailing mass: less" }).click();
+    await waitForCurrentPlan();
+  });
+
+  it("steps through Cab steps and opens If wheels slip from every step", async () => {
+    const cards = await page.locator(".step-card").count();
+    const notches = await page.locator(".step-card .notch-value").allTextContents();
+    const fallbacks = await page.locator(".step-card").evaluateAll((els) => els.map((el) => /notch (\d+)/.exec([...el.querySelectorAll(".figures div")].find((d) => d.textContent?.startsWith("If wheels slip"))?.textContent ?? "")?.[1] ?? ""));
+    await page.getByRole("button", { name: "Open Cab steps" }).click();
+    await page.waitForSelector(".cab");
+    expect(await page.locator(".tabs").count()).toBe(0);
+    if (cards === 0) {
+      // A plan without steps says so, and still offers the slip guidance.
+      await page.getByText("This plan has no notch steps to show.").waitFor();
+    }
+    for (let i = 0; i < cards; i++) {
+      await expect.poll(() => page.locator(".cab-count").textContent()).toMatch(new RegExp(`^Step ${i + 1} of ${cards}`));
+      expect(await page.locator(".cab-notch-value").textContent()).toBe(notches[i]);
+      await page.getByRole("button", { name: "If wheels slip" }).click();
+      const dialog = page.getByRole("dialog", { name: "If wheels slip" });
+      await dialog.waitFor();
+      expect(await dialog.locator(".fallback-notch").textContent()).toBe(fallbacks[i]);
+      if (i === 1) {
+        await page.setViewportSize(LANDSCAPE);
+        await shot("slip-card-landscape-day");
+        await page.setViewportSize(PORTRAIT);
+        await shot("slip-card-portrait-day");
+        problems.push(...(await axeSeriousOrCritical("If wheels slip")));
+        await page.setViewportSize(LANDSCAPE);
+      }
+      await dialog.getByRole("button", { name: "Close" }).click();
+      await dialog.waitFor({ state: "detached" });
+      if (i === Math.min(1, cards - 1)) {
+        await shot("cab-steps-landscape-day");
+        await page.setViewportSize(PORTRAIT);
+        await shot("cab-steps-portrait-day");
+        problems.push(...(await axeSeriousOrCritical("Cab steps")));
+        await page.setViewportSize(LANDSCAPE);
+      }
+      if (i < cards - 1) await page.getByRole("button", { name: "Next" }).click();
+    }
+    const clock = await page.locator(".cab-clock span").first().textContent();
+    expect(clock).toMatch(/^\d+:\d\d$/);
+    await page.getByRole("button", { name: cards > 0 ? "Done" : "Start plan" }).first().click();
+    await page.waitForSelector('[data-screen="start-plan"]');
+  });
+
+  it("takes screenshots of Start plan and Settings in both orientations and themes, with no serious accessibility violations", async () => {
+    for (const theme of ["Day", "Night"] as const) {
+      await openScreen("Settings");
+      await page.getByRole("radio", { name: theme, exact: true }).click();
+      const t = theme.toLowerCase();
+      await page.setViewportSize(LANDSCAPE);
+      await shot(`settings-landscape-${t}`);
+      problems.push(...(await axeSeriousOrCritical(`Settings (${t})`)));
+      problems.push(...(await smallTargets(`Settings, landscape (${t})`)));
+      await openScreen("Start plan");
+      await waitForCurrentPlan();
+      await shot(`start-plan-landscape-${t}`);
+      problems.push(...(await axeSeriousOrCritical(`Start plan (${t})`)));
+      problems.push(...(await smallTargets(`Start plan, landscape (${t})`)));
+      await page.locator(".pane-plan").evaluate((el) => el.scrollTo(0, el.scrollHeight));
+      await page.waitForFunction(() => [...document.querySelectorAll(".chart-box")].every((b) => (b as HTMLElement).dataset.drawn === "yes"), undefined, { timeout: 15_000 });
+      await page.waitForTimeout(300); // the worker's last frame reaches the screen
+      await shot(`start-plan-charts-landscape-${t}`);
+      const figures = page.locator("figure.chart");
+      for (let k = 0; k < (await figures.count()); k++) {
+        await figures.nth(k).scrollIntoViewIfNeeded();
+        await page.waitForTimeout(150);
+        await figures.nth(k).screenshot({ path: join(SHOTS, `chart-${k + 1}-${t}.png`) });
+      }
+      await page.locator(".pane-plan").evaluate((el) => el.scrollTo(0, 0));
+      await page.setViewportSize(PORTRAIT);
+      await shot(`start-plan-portrait-${t}`);
+      await page.getByRole("tab", { name: /Inputs/ }).click();
+      await shot(`start-plan-inputs-portrait-${t}`);
+      problems.push(...(await axeSeriousOrCritical(`Start plan inputs, portrait (${t})`)));
+      problems.push(...(await smallTargets(`Start plan inputs, portrait (${t})`)));
+      await page.locator(".pane-inputs").evaluate((el) => el.scrollTo(0, el.scrollHeight));
+      await shot(`start-plan-inputs-end-portrait-${t}`);
+      await page.getByRole("tab", { name: /Plan/ }).click();
+      await page.getByRole("button", { name: "Open Cab steps" }).click();
+      await shot(`cab-steps-portrait-${t}`);
+      problems.push(...(await smallTargets(`Cab steps, portrait (${t})`)));
+      await page.setViewportSize(LANDSCAPE);
+      await shot(`cab-steps-landscape-${t}`);
+      await page.getByRole("button", { name: "Start plan" }).first().click();
+    }
+    expect(await page.evaluate(() => document.documentElement.dataset.theme)).toBe("night");
+    const bg = await page.evaluate(() => getComputedStyle(document.body).backgroundColor);
+    const [r, g, b] = (bg.match(/\d+/g) ?? []).map(Number);
+    expect((r! + g! + b!) / 3).toBeLessThan(40);
+  });
+
+  it("switches every figure and input to US customary units and back", async () => {
+    await openScreen("Start plan");
+    await waitForCurrentPlan();
+    const massInput = page.getByLabel(/^Trailing mass/).and(page.locator("input"));
+    const tonnes = Number(await massInput.inputValue());
+    await openScreen("Settings");
+    await page.getByRole("radio", { name: /US customary/ }).click();
+    await openScreen("Start plan");
+    await waitForCurrentPlan();
+    expect(Number(await massInput.inputValue())).toBe(Math.round((tonnes * 1000) / 907.18474));
+    const plan = (await page.locator(".pane-plan").textContent()) ?? "";
+    expect(plan).toContain("klbf");
+    expect(plan).toContain("short tons");
+    expect(plan).not.toMatch(/\d kN\b/);
+    await shot("start-plan-landscape-night-us");
+    // Typed in US units: 2000 short tons is 1814.37 t in the case.
+    await massInput.fill("2000");
+    await waitForCurrentPlan();
+    await openScreen("Settings");
+    await page.getByRole("radio", { name: /Metric/ }).click();
+    await openScreen("Start plan");
+    expect(await massInput.inputValue()).toBe("1814");
+    await massInput.fill(String(tonnes));
+    await waitForCurrentPlan();
+  });
+
+  it("works offline after the first visit: reloads from the service worker and still plans", async () => {
+    await page.evaluate(async () => {
+      await navigator.serviceWorker.ready;
+    });
+    // The page is controlled from the next navigation on.
+    await page.reload();
+    await page.waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, { timeout: 20_000 });
+    await page.waitForSelector('.offline-status[data-ready="yes"]', { timeout: 20_000 });
+    await context.setOffline(true);
+    try {
+      await page.reload();
+      await waitForCurrentPlan();
+      await page.getByText(/Offline/).first().waitFor();
+      // A fresh plan, computed offline by a worker loaded from the cache.
+      await page.getByRole("button", { name: "Trailing mass: more" }).click();
+      await page.waitForSelector(".verdict.stale", { timeout: 5_000 }).catch(() => undefined);
+      await waitForCurrentPlan();
+      await shot("start-plan-offline-landscape");
+    } finally {
+      await context.setOffline(false);
+    }
+  });
+
+  it("loads again from the caches quickly (repeat visit)", async () => {
+    await page.reload();
+    await waitForCurrentPlan();
+    const at = await page.evaluate(() => performance.getEntriesByName("taut:first-plan")[0]?.startTime ?? Number.NaN);
+    console.log(`[measure] repeat visit, load to first plan on screen: ${at.toFixed(0)} ms`);
+    expect(at).toBeGreaterThan(0);
+  });
+
+  it("logged no console errors, and axe found no serious or critical violations", () => {
+    expect(problems).toEqual([]);
+  });
+});

@@ -1,0 +1,229 @@
+/**
+ * Location notes in the built app in Debian's Chromium: create a note and find it again after a reload;
+ * export the library, clear it, import the file and get the same notes back; print the card to PDF and
+ * find the note's name and its load table in the PDF's text (pdfjs-dist, legacy build for Node); one page
+ * on A4 and on Letter; axe-core finds no serious or critical violations; screenshots at 1280×800 and
+ * 800×1280 saved as test artefacts; no console errors.
+ */
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { readNotesText, type NotesBundleFile } from "../../src/profiles/notes.js";
+
+const require = createRequire(import.meta.url);
+const AXE = readFileSync(require.resolve("axe-core/axe.min.js"), "utf8");
+const SHOTS = fileURLToPath(new URL("../../test-results/screenshots/", import.meta.url));
+const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
+const LANDSCAPE = { width: 1280, height: 800 };
+const PORTRAIT = { width: 800, height: 1280 };
+const NAME = "Thornbury up loop, exit signal (e2e)";
+
+let context: BrowserContext;
+let page: Page;
+let work: string;
+const problems: string[] = [];
+const base = inject("baseURL");
+
+const shot = (name: string) => page.screenshot({ path: join(SHOTS, `${name}.png`) });
+const names = () => page.locator(".notes-item-name").allTextContents();
+
+/** Load the app afresh on the Location notes screen (its library view). */
+async function openNotes(): Promise<void> {
+  await page.goto("about:blank");
+  await page.goto(`${base}#/location-notes`);
+  await page.locator(".notes-item-name").first().waitFor({ timeout: 30_000 });
+}
+
+async function field(name: string): Promise<ReturnType<Page["locator"]>> {
+  return page.locator(`[data-field="${name}"] input, [data-field="${name}"] textarea`).first();
+}
+
+/** Export the whole library through the button and read the downloaded file. */
+async function exportAll(): Promise<{ text: string; bundle: NotesBundleFile }> {
+  const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Export all notes", exact: true }).click()]);
+  const path = join(work, `export-${Date.now()}.json`);
+  await download.saveAs(path);
+  const text = readFileSync(path, "utf8");
+  const read = readNotesText(text);
+  if (!read.ok) throw new Error(`exported file does not read back: ${read.message}`);
+  return { text, bundle: JSON.parse(text) as NotesBundleFile };
+}
+
+/** All text of a PDF, page by page (pdfjs-dist legacy build runs in Node). */
+async function pdfText(data: Uint8Array): Promise<string[]> {
+  // pdfjs-dist 6 expects Promise.withResolvers, which Node 20 lacks.
+  const P = Promise as unknown as { withResolvers?: () => unknown };
+  P.withResolvers ??= () => {
+    let resolve!: (v: unknown) => void;
+    let reject!: (e: unknown) => void;
+    const promise = new Promise((a, b) => {
+      resolve = a;
+      reject = b;
+    });
+    return { promise, resolve, reject };
+  };
+  const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
+  const task = pdfjs.getDocument({ data, useSystemFonts: false });
+  const doc = await task.promise;
+  const pages: string[] = [];
+  for (let k = 1; k <= doc.numPages; k++) {
+    const p = await doc.getPage(k);
+    const tc = await p.getTextContent();
+    pages.push(tc.items.map((i) => ("str" in i ? i.str : "")).join(" ").replace(/\s+/g, " "));
+  }
+  await task.destroy();
+  return pages;
+}
+
+async function axeSeriousOrCritical(label: string): Promise<string[]> {
+  const has = await page.evaluate(() => typeof (window as unknown as { axe?: unknown }).axe !== "undefined");
+  if (!has) await page.addScriptTag({ content: AXE });
+  const found = await page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: Array<{ id: string; impact: string; help: string; nodes: Array<{ target: string[] }> }> }> } }).axe;
+    const r = await axe.run(document, { resultTypes: ["violations"] });
+    return r.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join("; ")}`);
+  });
+  return found.map((f) => `${label}: ${f}`);
+}
+
+beforeAll(async () => {
+  mkdirSync(SHOTS, { recursive: true });
+  work = mkdtempSync(join(tmpdir(), "taut-notes-e2e-"));
+  context = await chromium.launchPersistentContext(join(work, "profile"), {
+    executablePath: inject("chromiumPath"),
+    headless: true,
+    args: ARGS,
+    viewport: LANDSCAPE,
+    acceptDownloads: true,
+  });
+  page = context.pages()[0] ?? (await context.newPage());
+  page.on("console", (m) => {
+    if (m.type() === "error") problems.push(`console: ${m.text()}`);
+  });
+  page.on("pageerror", (e) => problems.push(`page error: ${e.message}`));
+});
+
+afterAll(async () => {
+  await context?.close();
+  if (work) rmSync(work, { recursive: true, force: true });
+});
+
+describe("Location notes in the browser", () => {
+  it("shows the demo notes, and creates a note that is still there after a reload", async () => {
+    await openNotes();
+    expect(await names()).toEqual(expect.arrayContaining([expect.stringContaining("(illustrative)")]));
+    await shot("notes-library-landscape");
+    expect(await axeSeriousOrCritical("library")).toEqual([]);
+
+    await page.getByRole("button", { name: "New note" }).click();
+    await (await field("name")).fill(NAME);
+    await (await field("line")).fill("Test line");
+    await (await field("direction")).fill("Up");
+    // A rising first segment with the steppers (+0.5 ‰ a press), and a second segment added.
+    for (let k = 0; k < 12; k++) await page.getByRole("button", { name: "Segment 1 gradient: more" }).click();
+    await page.getByRole("button", { name: "Add segment" }).click();
+    await (await field("segments[1].curveRadius_m")).fill("450");
+    await (await field("frontAt_m")).fill("1100");
+    await (await field("clearAhead_m")).fill("300");
+    await (await field("revision.initials")).fill("EE");
+    await (await field("revision.change")).fill("First survey of the loop.");
+    expect(await page.locator(".notes-seg tbody tr").count()).toBe(2);
+    expect(await (await field("segments[0].gradient_permille")).inputValue()).toBe("6.0");
+    // The train stands on the profile, stretched on the rising grade.
+    await expect.poll(() => page.locator(".notes-chart .chart-caption").textContent()).toContain("Stretched from end to end");
+    await page.locator(".notes-editor .notes-loadtable").waitFor({ timeout: 120_000 });
+    await shot("notes-editor-landscape");
+    expect(await axeSeriousOrCritical("editor")).toEqual([]);
+    await page.getByRole("button", { name: "Save note" }).click();
+    await page.getByText(`Saved "${NAME}".`).waitFor();
+
+    await page.reload();
+    await openNotes();
+    expect(await names()).toContain(NAME);
+  }, 180_000);
+
+  it("exports, clears, imports, and gets the same notes back", async () => {
+    await openNotes();
+    const before = await exportAll();
+    expect(before.bundle.schema).toBe("taut/notes-bundle@1");
+    const mine = before.bundle.notes.find((n) => n.name === NAME);
+    expect(mine?.segments).toEqual([
+      { from_m: 0, length_m: 1000, gradient_permille: 6, curveRadius_m: 0 },
+      { from_m: 1000, length_m: 500, gradient_permille: 6, curveRadius_m: 450 },
+    ]);
+    expect(mine?.revisions).toEqual([{ date: expect.stringMatching(/^\d{4}-\d{2}-\d{2}$/), initials: "EE", change: "First survey of the loop." }]);
+
+    await page.getByRole("button", { name: "Remove all notes…" }).click();
+    await page.getByRole("button", { name: "Remove all", exact: true }).click();
+    await page.getByText("No notes yet.", { exact: false }).waitFor();
+    expect(await names()).toEqual([]);
+
+    const file = join(work, "to-import.json");
+    writeFileSync(file, before.text);
+    await page.getByLabel("Notes file to import").setInputFiles(file);
+    await page.getByText(`Imported to-import.json: ${before.bundle.notes.length} added.`).waitFor();
+    expect((await names()).sort()).toEqual(before.bundle.notes.map((n) => n.name).sort());
+
+    const after = await exportAll();
+    expect(after.bundle.notes).toEqual(before.bundle.notes);
+  }, 120_000);
+
+  it("prints the card to one PDF page with the note's name and load table", async () => {
+    await openNotes();
+    await page.getByRole("button", { name: `Card of ${NAME}` }).click();
+    const preview = page.locator(".notes-card-preview");
+    await preview.locator(".notes-loadtable").waitFor({ timeout: 120_000 });
+    await shot("notes-card-landscape");
+    // The button prints the page; the PDF below is what "Save as PDF" in that dialog makes.
+    await page.evaluate(() => {
+      (window as unknown as { __printed: number }).__printed = 0;
+      window.print = () => void ((window as unknown as { __printed: number }).__printed += 1);
+    });
+    await page.getByRole("button", { name: "Print / save as PDF" }).click();
+    expect(await page.evaluate(() => (window as unknown as { __printed: number }).__printed)).toBe(1);
+
+    const dryRow = preview.locator(".notes-loadtable tbody tr").first();
+    const [dryWithout, dryWith] = await dryRow.locator("td").allTextContents();
+    const a4 = await pdfText(new Uint8Array(await page.pdf({ format: "A4" })));
+    const letter = await pdfText(new Uint8Array(await page.pdf({ format: "Letter" })));
+    writeFileSync(join(SHOTS, "notes-card.pdf"), await page.pdf({ format: "A4" }));
+    expect(a4).toHaveLength(1);
+    expect(letter).toHaveLength(1);
+    const text = a4[0]!;
+    expect(text).toContain(NAME);
+    expect(text).toContain("Load table");
+    expect(text).toContain("Largest trailing mass that starts");
+    expect(text).toMatch(/Rail Without sand With sand Dry /);
+    expect(text).toContain(`Dry ${dryWithout} ${dryWith}`);
+    expect(text).toContain("Recommended practice");
+    expect(text).toContain("Advisory only.");
+    expect(text).toContain("First survey of the loop.");
+    // Only the card is printed: none of the app's controls.
+    expect(text).not.toContain("Print / save as PDF");
+    expect(text).not.toContain("Start plan");
+  }, 180_000);
+
+  it("reads well in portrait: library, editor and card (screenshots)", async () => {
+    await page.setViewportSize(PORTRAIT);
+    await openNotes();
+    await shot("notes-library-portrait");
+    await page.getByRole("button", { name: NAME, exact: false }).first().click();
+    await page.locator(".notes-editor .notes-loadtable").waitFor({ timeout: 120_000 });
+    // No sideways scrolling of the screen in portrait.
+    expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth + 1)).toBe(true);
+    await shot("notes-editor-portrait");
+    expect(await axeSeriousOrCritical("editor portrait")).toEqual([]);
+    await page.getByRole("button", { name: "Card / print" }).click();
+    await page.locator(".notes-card-preview .notes-loadtable").waitFor({ timeout: 120_000 });
+    await shot("notes-card-portrait");
+    await page.setViewportSize(LANDSCAPE);
+  }, 180_000);
+
+  it("logged no console errors", () => {
+    expect(problems).toEqual([]);
+  });
+});

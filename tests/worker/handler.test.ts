@@ -1,0 +1,151 @@
+import { describe, expect, it } from "vitest";
+import { planStart } from "../../src/core/planner/index.js";
+import type { PlanResult } from "../../src/core/planner/types.js";
+import type { StartCase } from "../../src/core/types.js";
+import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
+import { parseStartCase } from "../../src/profiles/parse.js";
+import { createPlannerHandler } from "../../src/worker/handler.js";
+import { planTransferables, startCaseIssues, type WorkerResponse } from "../../src/worker/protocol.js";
+
+function resolved(json: unknown): StartCase {
+  const r = parseStartCase(json, builtinLibrary());
+  if (!r.ok) throw new Error(`demo case invalid: ${JSON.stringify(r.issues)}`);
+  return r.value;
+}
+/** The demo case as the app sends it: validated and resolved (SI), then structured-cloned. */
+const demo = structuredClone(resolved(builtinCaseJson[0]));
+
+/** A handler whose posts are collected and whose ticks run when the test says. */
+function harness(deps: Parameters<typeof createPlannerHandler>[1] = {}) {
+  const posted: Array<{ msg: WorkerResponse; transfer: ArrayBuffer[] }> = [];
+  const ticks: Array<() => void> = [];
+  const handle = createPlannerHandler((msg, transfer) => posted.push({ msg, transfer }), { schedule: (f) => ticks.push(f), ...deps });
+  const flush = () => {
+    while (ticks.length > 0) ticks.shift()!();
+  };
+  return { posted, handle, flush };
+}
+
+describe("planner worker handler", () => {
+  it("plans the demo case: progress 0 first, then the same result the core gives", () => {
+    const h = harness();
+    h.handle({ type: "plan", id: 7, startCase: demo });
+    expect(h.posted).toHaveLength(0); // nothing runs before the next tick
+    h.flush();
+    expect(h.posted[0]!.msg).toEqual({ type: "progress", id: 7, fraction: 0 });
+    const last = h.posted.at(-1)!.msg;
+    expect(last.type).toBe("result");
+    if (last.type !== "result") return;
+    const direct = planStart(resolved(builtinCaseJson[0]));
+    expect(last.result.verdict).toBe(direct.verdict);
+    expect(last.result.margin).toBeCloseTo(direct.margin, 12);
+    expect(last.result.steps.length).toBe(direct.steps.length);
+    expect(last.elapsedMs).toBeGreaterThanOrEqual(0);
+  });
+
+  it("answers a malformed case with field issues, not an exception", () => {
+    const h = harness();
+    const bad = { ...demo, train: { ...demo.train, trailingMassKg: -5 }, locomotives: [] };
+    h.handle({ type: "plan", id: 1, startCase: bad });
+    h.flush();
+    const last = h.posted.at(-1)!.msg;
+    expect(last.type).toBe("error");
+    if (last.type !== "error") return;
+    expect(last.kind).toBe("invalid");
+    expect(last.issues.map((i) => i.path)).toEqual(["locomotives", "train.trailingMassKg"]);
+  });
+
+  it("passes the mass-search option through to the planner", () => {
+    const seen: boolean[] = [];
+    const h = harness({
+      plan: (c, opts) => {
+        seen.push(opts.skipMassSearch === true);
+        return planStart(c, { skipMassSearch: true });
+      },
+    });
+    h.handle({ type: "plan", id: 1, startCase: demo, options: { skipMassSearch: true } });
+    h.handle({ type: "plan", id: 2, startCase: demo });
+    h.flush();
+    expect(seen).toEqual([true, false]);
+  });
+
+  it("reports a planner failure as an internal error with its message", () => {
+    const h = harness({
+      plan: () => {
+        throw new RangeError("boom in the planner");
+      },
+    });
+    h.handle({ type: "plan", id: 3, startCase: demo });
+    h.flush();
+    expect(h.posted.at(-1)!.msg).toMatchObject({ type: "error", id: 3, kind: "internal", message: "boom in the planner" });
+  });
+
+  it("drops a queued request when its cancel arrives first, and runs the others in order", () => {
+    const h = harness();
+    h.handle({ type: "plan", id: 1, startCase: demo });
+    h.handle({ type: "plan", id: 2, startCase: demo });
+    h.handle({ type: "cancel", id: 1 });
+    h.flush();
+    const ids = h.posted.filter((p) => p.msg.type === "result").map((p) => p.msg.id);
+    expect(ids).toEqual([2]);
+  });
+
+  it("rejects a message it does not understand", () => {
+    const h = harness();
+    h.handle({ hello: "there" });
+    expect(h.posted[0]!.msg).toMatchObject({ type: "error", id: -1, kind: "internal" });
+  });
+
+  it("finds no structural issue in any built-in demo case, and names each broken part of a bad one", () => {
+    for (const j of builtinCaseJson) expect(startCaseIssues(structuredClone(resolved(j)))).toEqual([]);
+    expect(startCaseIssues(null)).toEqual([{ path: "", message: "must be a start case object" }]);
+    const broken = { ...demo, conditions: { ...demo.conditions, rail: "slush" }, target: { kind: "time" }, settings: {} } as unknown;
+    expect(startCaseIssues(broken).map((i) => i.path)).toEqual(["conditions.rail", "target", "settings"]);
+  });
+
+  it("throttles progress messages and forwards the planner's fractions", () => {
+    let t = 0;
+    const h = harness({
+      now: () => t,
+      progressIntervalMs: 50,
+      plan: (c, opts) => {
+        for (const f of [0.1, 0.2, 0.3, 0.6, 1]) {
+          t += 30;
+          opts.onProgress?.(f);
+        }
+        return planStart(c, { skipMassSearch: true });
+      },
+    });
+    h.handle({ type: "plan", id: 9, startCase: demo });
+    h.flush();
+    const fractions = h.posted.filter((p) => p.msg.type === "progress").map((p) => (p.msg as { fraction: number }).fraction);
+    // 0 at the start; then only those at least 50 ms after the previous post (t = 60 and 120); never 1.
+    expect(fractions).toEqual([0, 0.2, 0.6]);
+  });
+});
+
+describe("transfer list", () => {
+  const fake = (arrays: Float64Array[]): PlanResult => {
+    const [a, b, c, d, e, f] = arrays as [Float64Array, Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
+    return { couplerPeaksN: a, series: { timeS: b, speedMps: c, notch: d, locoTravelM: e, maxTensionN: f } } as unknown as PlanResult;
+  };
+
+  it("lists each buffer once and skips empty ones, so postMessage cannot fail on duplicates", () => {
+    const empty = new Float64Array(0);
+    const shared = new Float64Array(10);
+    const r = fake([new Float64Array(3), shared, shared.subarray(2), empty, empty, new Float64Array(4)]);
+    const list = planTransferables(r);
+    expect(list).toHaveLength(3);
+    expect(new Set(list).size).toBe(3);
+    // The structured clone accepts the list and moves the data (the sender's arrays are detached).
+    const moved = structuredClone(r, { transfer: list }) as PlanResult;
+    expect(moved.series.timeS.length).toBe(10);
+    expect(moved.series.speedMps.length).toBe(8);
+    expect(r.series.timeS.length).toBe(0);
+  });
+
+  it("would fail without deduplication (the failure the helper prevents)", () => {
+    const shared = new Float64Array(4);
+    expect(() => structuredClone({ a: shared, b: shared }, { transfer: [shared.buffer, shared.buffer] })).toThrow();
+  });
+});
