@@ -12,7 +12,7 @@ export * from "./store.js";
 export * from "./records.js";
 export * from "./merge.js";
 export * from "./reminder.js";
-export * from "./reference.js";
+export * from "../profiles/referenceTrain.js";
 export { NOTES_DB_VERSION, migrateV1Record, type NoteRecordV1 } from "./migrations.js";
 
 let shared: Promise<NotesStore> | undefined;

@@ -2,7 +2,7 @@
 import { STANDARD_CAUTIONS } from "../../core/cautions.js";
 import { loadTableCells, type LoadTableRow } from "../../core/loadTable.js";
 import type { StartCase } from "../../core/types.js";
-import { referenceCaseFile, DEFAULT_REFERENCE_TEMPERATURE_C } from "../../notes/reference.js";
+import { referenceCaseFile, DEFAULT_REFERENCE_TEMPERATURE_C } from "../../profiles/referenceTrain.js";
 import { loadTableRowReport } from "../../profiles/assistanceReport.js";
 import { builtinTrains } from "../../profiles/builtin.js";
 import type { Library } from "../../profiles/library.js";

@@ -8,7 +8,7 @@ import { createNoteEditor, type NoteEditor } from "../../../src/app/screens/Loca
 import { Editor } from "../../../src/app/screens/LocationNotes/Editor.js";
 import type { LoadTableOutcome } from "../../../src/app/screens/LocationNotes/loadTableJob.js";
 import { loadTable, staticCheck } from "../../../src/core/index.js";
-import { referenceCase, referenceSummary } from "../../../src/notes/reference.js";
+import { referenceCase, referenceSummary } from "../../../src/profiles/referenceTrain.js";
 import { builtinLibrary, builtinLocations, builtinTrains } from "../../../src/profiles/builtin.js";
 import type { LocationNoteFile } from "../../../src/profiles/schemas.js";
 

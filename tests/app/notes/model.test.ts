@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { noteFigures, stretchFigures } from "../../../src/app/screens/LocationNotes/figures.js";
 import { idFromName, joinSegments, nextSegment } from "../../../src/app/screens/LocationNotes/draft.js";
 import { alongGround, profileModel, slackSentence } from "../../../src/app/screens/LocationNotes/profileModel.js";
-import { referenceCase } from "../../../src/notes/reference.js";
+import { referenceCase } from "../../../src/profiles/referenceTrain.js";
 import { builtinLibrary, builtinLocations, builtinTrains } from "../../../src/profiles/builtin.js";
 
 const lib = builtinLibrary();

@@ -9,7 +9,7 @@ import type { LoadTableRow } from "../../../core/loadTable.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../../core/types.js";
 import { latestRevision } from "../../../profiles/notes.js";
 import type { LocationNoteFile } from "../../../profiles/schemas.js";
-import { DEFAULT_REFERENCE_TEMPERATURE_C, type ReferenceSummary } from "../../../notes/reference.js";
+import { DEFAULT_REFERENCE_TEMPERATURE_C, type ReferenceSummary } from "../../../profiles/referenceTrain.js";
 import { show, type UnitSystem } from "../../format.js";
 import { HAZARD_KINDS } from "./draft.js";
 import type { NoteFigures } from "./figures.js";

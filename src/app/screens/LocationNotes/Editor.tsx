@@ -6,7 +6,7 @@
  */
 import { For, Match, Show, Switch, type JSX } from "solid-js";
 import { RAIL_CONDITIONS } from "../../../core/types.js";
-import { DEFAULT_REFERENCE_TEMPERATURE_C } from "../../../notes/reference.js";
+import { DEFAULT_REFERENCE_TEMPERATURE_C } from "../../../profiles/referenceTrain.js";
 import type { Library } from "../../../profiles/library.js";
 import type { TrainPresetFile } from "../../../profiles/schemas.js";
 import type { ChartPalette } from "../../charts/palette.js";

@@ -8,7 +8,7 @@ import type { StartCase } from "../../../core/types.js";
 import { canonicalNote } from "../../../profiles/notes.js";
 import type { Library } from "../../../profiles/library.js";
 import type { LocationNoteFile, TrainPresetFile } from "../../../profiles/schemas.js";
-import { referenceCase, referenceSummary, type ReferenceSummary } from "../../../notes/reference.js";
+import { referenceCase, referenceSummary, type ReferenceSummary } from "../../../profiles/referenceTrain.js";
 import type { UnitSystem } from "../../format.js";
 import { draftFromNote, idFromName, joinSegments, newDraft, nextSegment, noteFromDraft, type NoteDraft } from "./draft.js";
 import { noteFigures, type NoteFigures } from "./figures.js";

@@ -7,7 +7,7 @@ import { loadTable, type LoadTableRow } from "../../../core/loadTable.js";
 import type { FieldIssue } from "../../../profiles/issues.js";
 import { builtinLibrary, builtinTrains } from "../../../profiles/builtin.js";
 import type { LocationNoteFile, ReferenceTrainFile } from "../../../profiles/schemas.js";
-import { referenceCase } from "../../../notes/reference.js";
+import { referenceCase } from "../../../profiles/referenceTrain.js";
 import type { Library } from "../../../profiles/library.js";
 
 export type NoteGeometry = Pick<LocationNoteFile, "segments" | "frontAt_m" | "clearAhead_m" | "speedLimit_kmh">;

@@ -1,10 +1,10 @@
 /** A note's reference train: the start case its drawing and load table are worked out for. */
 import { describe, expect, it } from "vitest";
 import { loadTable, plannerStarts, staticCheck, withTrailingMass, type StartCase } from "../../src/core/index.js";
-import { referenceCase, referenceCaseFile, referenceLocomotives, referenceSummary } from "../../src/notes/reference.js";
+import { referenceCase, referenceCaseFile, referenceLocomotives, referenceSummary } from "../../src/profiles/referenceTrain.js";
 import { builtinLibrary, builtinTrains } from "../../src/profiles/builtin.js";
 import type { ReferenceTrainFile } from "../../src/profiles/schemas.js";
-import { sampleNote } from "./helpers.js";
+import { sampleNote } from "../notes/helpers.js";
 
 const lib = builtinLibrary();
 /** A demo train hauled by one locomotive at the head, whichever the demo set names so. */

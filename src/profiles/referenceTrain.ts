@@ -4,10 +4,10 @@
  * on the note's own profile, resolved exactly as the command line resolves a case.
  */
 import type { StartCase } from "../core/types.js";
-import type { FieldIssue, ParseResult } from "../profiles/issues.js";
-import type { Library } from "../profiles/library.js";
-import { resolveStartCase } from "../profiles/parse.js";
-import type { LocationNoteFile, ReferenceTrainFile, StartCaseFile, TrainPresetFile } from "../profiles/schemas.js";
+import type { FieldIssue, ParseResult } from "./issues.js";
+import type { Library } from "./library.js";
+import { resolveStartCase } from "./parse.js";
+import type { LocationNoteFile, ReferenceTrainFile, StartCaseFile, TrainPresetFile } from "./schemas.js";
 
 /** Air temperature a load table assumes when the note does not say, °C. */
 export const DEFAULT_REFERENCE_TEMPERATURE_C = 10;
