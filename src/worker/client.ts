@@ -27,6 +27,8 @@ export interface PlanCallOptions {
   onProgress?: (fraction: number) => void;
   /** Skip the largest-startable-mass search (batch and assistance screens). */
   skipMassSearch?: boolean;
+  /** Skip the verifying re-run at pessimistic adhesion (a quick first answer; the full plan follows). */
+  skipVerification?: boolean;
 }
 
 export interface PlannerClient {
@@ -164,7 +166,11 @@ export function createPlannerClient(options: PlannerClientOptions): PlannerClien
       if (signal?.aborted) return Promise.reject(abortError());
       stopIdleTimer();
       const id = nextId++;
-      const req: PlanRequest = { type: "plan", id, startCase, ...(opts.skipMassSearch ? { options: { skipMassSearch: true } } : {}) };
+      const options: NonNullable<PlanRequest["options"]> = {
+        ...(opts.skipMassSearch ? { skipMassSearch: true } : {}),
+        ...(opts.skipVerification ? { skipVerification: true } : {}),
+      };
+      const req: PlanRequest = { type: "plan", id, startCase, ...(Object.keys(options).length > 0 ? { options } : {}) };
       return new Promise<PlanOutcome>((resolve, reject) => {
         const onAbort = () => abort(id);
         signal?.addEventListener("abort", onAbort, { once: true });

@@ -40,6 +40,7 @@ export function createPlannerHandler(post: Post, deps: HandlerDeps = {}): (msg: 
     try {
       const result = plan(req.startCase, {
         ...(req.options?.skipMassSearch ? { skipMassSearch: true } : {}),
+        ...(req.options?.skipVerification ? { skipVerification: true } : {}),
         onProgress: (fraction) => {
           const t = now();
           if (t - lastPost < interval || fraction >= 1) return;

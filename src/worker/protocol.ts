@@ -19,7 +19,7 @@ export interface PlanRequest {
   id: number;
   startCase: StartCase;
   /** Planner options that can cross a thread (no callbacks). */
-  options?: Pick<PlanOptions, "skipMassSearch">;
+  options?: Pick<PlanOptions, "skipMassSearch" | "skipVerification">;
 }
 
 /** Drop a request that has not started yet (a running plan is stopped by terminating the worker). */

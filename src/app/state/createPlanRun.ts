@@ -111,7 +111,7 @@ export function createPlanRun(deps: PlanRunDeps): PlanRun {
     setStatus("running");
     setProgress(0);
     deps.client
-      .plan(startCase, { signal: ctrl.signal, onProgress: (f) => !ctrl.signal.aborted && setProgress(f), skipMassSearch: true })
+      .plan(startCase, { signal: ctrl.signal, onProgress: (f) => !ctrl.signal.aborted && setProgress(f), skipMassSearch: true, skipVerification: true })
       .then((out) => {
         if (ctrl.signal.aborted) return;
         if (out.ok) {
