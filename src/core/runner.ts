@@ -73,7 +73,7 @@ export interface RunOptions {
 }
 
 export class Run {
-  readonly dt: number;
+  dt: number;
   readonly controlIntervalS: number;
   readonly seriesEvery: number;
   lead: number;
@@ -118,6 +118,14 @@ export class Run {
     const r = new Run(m, createState(m, opts.trackEnergy ? { trackEnergy: true } : {}), brakes, opts);
     r.record();
     return r;
+  }
+
+  /**
+   * Use a different fixed step from now on, s: rounded down so a whole number of steps fills each
+   * control interval.
+   */
+  setStep(dtS: number): void {
+    this.dt = this.controlIntervalS / Math.ceil(this.controlIntervalS / dtS - 1e-9);
   }
 
   /** Change when the locomotive brake comes off (it must not be in the past). */

@@ -242,6 +242,14 @@ export function modelFromConsist(consist: Consist, slack: Int8Array, track: Trac
  * keeps it near 1 % of peak against a high-order adaptive integrator (tests/core/dynamics.reference.test.ts).
  */
 export function stableTimeStep(m: TrainModel, margin = 0.5): number {
+  return Math.min(ACCURACY_STEP_S, stabilityTimeStep(m, margin));
+}
+
+/**
+ * The stability-limited step alone (margin × the leapfrog limit 2/ω), s: enough once the train is
+ * stretched and rolling, when no coupling goes in or out of its slack.
+ */
+export function stabilityTimeStep(m: TrainModel, margin = 0.5): number {
   let kMax = 0;
   let cMax = 0;
   for (let j = 0; j < m.halfSlackM.length; j++) {
@@ -254,12 +262,12 @@ export function stableTimeStep(m: TrainModel, margin = 0.5): number {
   }
   let mMin = Infinity;
   for (let i = 0; i < m.n; i++) mMin = Math.min(mMin, m.effMassKg[i]!);
-  if (kMax === 0) return ACCURACY_STEP_S;
+  if (kMax === 0) return 0.05;
   const omega = 2 * Math.sqrt(kMax / mMin);
   // Damping shrinks the stable step: ω·dt < 2(√(1+ζ²) − ζ), ζ = c_eff/(2 m ω) with c_eff ≤ 4c.
   const zeta = (4 * cMax) / (2 * mMin * omega);
   const limit = (2 * (Math.sqrt(1 + zeta * zeta) - zeta)) / omega;
-  return Math.min(ACCURACY_STEP_S, margin * limit);
+  return margin * limit;
 }
 
 /** Largest step the accuracy of slack engagement allows, s. */

@@ -5,6 +5,7 @@
  * Deterministic: the same case always gives the same plan.
  */
 import { Run, type Observation } from "../runner.js";
+import { stabilityTimeStep } from "../trainModel.js";
 import { Branch } from "./branch.js";
 import { rigidAccelerate } from "./rigid.js";
 import { holdingNotch, MIN_NOTCH_DWELL_S, notchAdhesion, notchEffortAllN, type PlannerContext } from "./context.js";
@@ -273,6 +274,9 @@ function targetReached(ctx: PlannerContext, obs: Observation): boolean {
 
 /** Carry on with the same policy until the target, a stall or the time limit. */
 function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: number, check: () => void) {
+  // Stretched and rolling, no coupling goes in or out of its slack any more: the stability-limited step
+  // is enough (the accuracy limit is for slack engagement).
+  b.run.setStep(Math.max(b.run.dt, stabilityTimeStep(ctx.model)));
   const capped = { hit: false };
   let reachedS: number | null = null;
   let travelM: number | null = null;
