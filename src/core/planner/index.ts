@@ -12,8 +12,9 @@ import { largestStartableMassKg } from "../startableMass.js";
 import { staticCheck } from "../staticCheck.js";
 import { gradeAt } from "../track.js";
 import type { StartCase } from "../types.js";
-import { plannerContext, type PlannerContext } from "./context.js";
-import { searchPlan, type SearchResult } from "./search.js";
+import { MIN_NOTCH_DWELL_S, plannerContext, type PlannerContext } from "./context.js";
+import { ACCELERATE_MAX_S, policyNotch, searchPlan, type SearchResult } from "./search.js";
+import { rigidAccelerate } from "./rigid.js";
 import { planSteps } from "./steps.js";
 import type { PlanOptions, PlanResult, PlanSeries, PlanStep } from "./types.js";
 import { planVerdict } from "./verdict.js";
@@ -117,10 +118,30 @@ export function plannerStarts(c: StartCase, shouldStop?: () => boolean): boolean
 export function maxStartableMassKg(c: StartCase, shouldStop?: () => boolean): number {
   const staticMax = largestStartableMassKg(c, (x) => staticCheck(x).verdict === "starts");
   if (staticMax <= 0) return 0;
+  // A cheap first estimate from the one-mass model brackets the answer, so the planner itself is asked
+  // only a handful of times around it.
+  const guess = largestStartableMassKg(c, rigidStarts, { upperBoundKg: staticMax, relativeTolerance: 0.01 });
   return largestStartableMassKg(c, (x) => plannerStarts(x, shouldStop), {
     upperBoundKg: staticMax,
     toleranceKg: Math.max(500, 0.002 * staticMax),
+    ...(guess > 0 && guess < staticMax ? { guessKg: guess } : {}),
   });
+}
+
+/**
+ * The one-mass estimate of "starts": the static check holds and the whole train, taken as one mass from
+ * rest, reaches the target under the planner's notch rule within the slip-risk threshold.
+ */
+function rigidStarts(c: StartCase): boolean {
+  const ctx = plannerContext(c);
+  if (ctx.st.verdict !== "starts") return false;
+  const out = rigidAccelerate(
+    ctx,
+    { timeS: 0, speedMps: 0, travelM: 0, notch: 1 },
+    (notch, v, inStepS, capped) => policyNotch(ctx, notch, v, inStepS, MIN_NOTCH_DWELL_S, true, 0, capped),
+    ACCELERATE_MAX_S,
+  );
+  return out.reachedS !== null;
 }
 
 /**
