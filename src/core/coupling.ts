@@ -18,7 +18,15 @@ export interface GearSide {
   forceAtTravelN: number;
   /** Share of the linear term in the loading curve, 0..1 (1 = linear). */
   linearShare: number;
+  /** Built-in spring preload, N: the side gives this force as soon as it is touched (over PRELOAD_RAMP_M). */
+  preloadN?: number;
 }
+
+/**
+ * A preload is taken up over this much deflection, m: a steep but finite rise, so the explicit integrator
+ * stays stable (30 kN over 2 mm is 15 MN/m, below the gear change-over stiffness).
+ */
+export const PRELOAD_RAMP_M = 0.002;
 
 export interface CouplingSpec {
   kind: CouplingKind;
@@ -58,14 +66,15 @@ export function knuckleCoupling(freeSlackM: number): CouplingSpec {
 /**
  * Screw coupling with side buffers: almost no free slack once tightened (common practice); draw gear in
  * tension (category 1.0 MN, EN 15566 [S]); two buffer pairs in series in compression, 105 mm stroke each
- * (EN 15551 [S]); buffers return about half the energy [M].
+ * (EN 15551 [S]), their springs pre-loaded so they push back at once when touched (30 kN [M]); buffers
+ * return about half the energy [M].
  */
 export function screwCoupling(freeSlackM: number): CouplingSpec {
   return {
     kind: "screw",
     freeSlackM,
     draft: { travelM: 0.1, forceAtTravelN: 1.0e6, linearShare: 0.6 },
-    buff: { travelM: 0.21, forceAtTravelN: 1.0e6, linearShare: 0.1 },
+    buff: { travelM: 0.21, forceAtTravelN: 1.0e6, linearShare: 0.1, preloadN: 30_000 },
     unloadingRatio: 0.5,
     transitionStiffnessNPerM: 8e7,
     endStopStiffnessNPerM: 2e8,
@@ -80,17 +89,22 @@ export function couplingOfKind(kind: CouplingKind, freeSlackM: number): Coupling
 
 /** Loading force of one gear side at deflection e ≥ 0 (end stop not included), N. */
 export function gearLoadingForceN(side: GearSide, deflectionM: number): number {
-  const xi = Math.min(Math.max(deflectionM, 0) / side.travelM, 1);
-  return side.forceAtTravelN * xi * (side.linearShare + (1 - side.linearShare) * xi);
+  const e = Math.max(deflectionM, 0);
+  const xi = Math.min(e / side.travelM, 1);
+  const preload = (side.preloadN ?? 0) * Math.min(e / PRELOAD_RAMP_M, 1);
+  return preload + side.forceAtTravelN * xi * (side.linearShare + (1 - side.linearShare) * xi);
 }
 
-/** Deflection of one gear side under a steady loading force, m (inverse of the loading curve). */
+/** Deflection of one gear side under a steady loading force, m: the inverse of the (monotonic) loading curve. */
 export function gearDeflectionM(side: GearSide, forceN: number): number {
   if (forceN <= 0) return 0;
-  if (forceN >= side.forceAtTravelN) return side.travelM;
-  const a = side.linearShare;
-  const f = forceN / side.forceAtTravelN;
-  // Solve (1 − a)ξ² + aξ − f = 0 for ξ ≥ 0.
-  const xi = a >= 1 ? f : (-a + Math.sqrt(a * a + 4 * (1 - a) * f)) / (2 * (1 - a));
-  return side.travelM * xi;
+  if (forceN >= gearLoadingForceN(side, side.travelM)) return side.travelM;
+  let lo = 0;
+  let hi = side.travelM;
+  for (let k = 0; k < 60; k++) {
+    const mid = 0.5 * (lo + hi);
+    if (gearLoadingForceN(side, mid) < forceN) lo = mid;
+    else hi = mid;
+  }
+  return 0.5 * (lo + hi);
 }

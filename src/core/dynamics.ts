@@ -7,6 +7,7 @@
  * `step` advances the state by dt; the caller owns the clock.
  */
 import { GRAVITY_MPS2 } from "./constants.js";
+import { PRELOAD_RAMP_M } from "./coupling.js";
 import type { TrainModel } from "./trainModel.js";
 
 export interface DynamicsState {
@@ -238,7 +239,7 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
         if (engaged[i] !== 1) engage(s, i, 1, w, t);
         const e = ext - hs;
         const travel = m.draftTravelM[i]!;
-        const gf = gearForce(gearF[i]!, gearDefl[i]!, e, travel, m.draftRatedN[i]!, m.draftLinear[i]!, unloadR[i]!, transK[i]!);
+        const gf = gearForce(gearF[i]!, gearDefl[i]!, e, travel, m.draftRatedN[i]!, m.draftLinear[i]!, m.draftPreloadN[i]!, unloadR[i]!, transK[i]!);
         gearF[i] = gf;
         gearDefl[i] = e;
         f = gf + damp[i]! * w;
@@ -254,7 +255,7 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
         if (engaged[i] !== -1) engage(s, i, -1, w, t);
         const e = -ext - hs;
         const travel = m.buffTravelM[i]!;
-        const gf = gearForce(gearF[i]!, gearDefl[i]!, e, travel, m.buffRatedN[i]!, m.buffLinear[i]!, unloadR[i]!, transK[i]!);
+        const gf = gearForce(gearF[i]!, gearDefl[i]!, e, travel, m.buffRatedN[i]!, m.buffLinear[i]!, m.buffPreloadN[i]!, unloadR[i]!, transK[i]!);
         gearF[i] = gf;
         gearDefl[i] = e;
         f = -gf + damp[i]! * w;
@@ -324,10 +325,11 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
  * Hysteretic gear force at deflection e (magnitude, m): the previous force moved along the steep
  * change-over line, then held between the unloading and loading curves (PHYSICS.md §4).
  */
-function gearForce(prevF: number, prevE: number, e: number, travel: number, rated: number, lin: number, unloadRatio: number, kTransition: number): number {
+function gearForce(prevF: number, prevE: number, e: number, travel: number, rated: number, lin: number, preload: number, unloadRatio: number, kTransition: number): number {
   let xi = e / travel;
   if (xi > 1) xi = 1;
-  const load = rated * xi * (lin + (1 - lin) * xi);
+  let load = rated * xi * (lin + (1 - lin) * xi);
+  if (preload > 0) load += e < PRELOAD_RAMP_M ? (preload * e) / PRELOAD_RAMP_M : preload;
   const g = prevF + kTransition * (e - prevE);
   if (g > load) return load;
   const unload = load * unloadRatio;

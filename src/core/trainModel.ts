@@ -5,7 +5,7 @@
 import { adhesionQuantile, standstillMedian } from "./adhesion.js";
 import { GRAVITY_MPS2 } from "./constants.js";
 import { buildConsist, type Consist } from "./consist.js";
-import type { CouplingSpec } from "./coupling.js";
+import { PRELOAD_RAMP_M, type CouplingSpec } from "./coupling.js";
 import { BREAKAWAY_FADE_SPEED_MPS, curveResistancePermille } from "./resistance.js";
 import { initialSlack } from "./slack.js";
 import type { LocomotiveSpec, SlackState, StartCase, TrackProfile } from "./types.js";
@@ -34,9 +34,11 @@ export interface TrainModel {
   draftTravelM: Float64Array;
   draftRatedN: Float64Array;
   draftLinear: Float64Array;
+  draftPreloadN: Float64Array;
   buffTravelM: Float64Array;
   buffRatedN: Float64Array;
   buffLinear: Float64Array;
+  buffPreloadN: Float64Array;
   unloadRatio: Float64Array;
   transitionK: Float64Array;
   endStopK: Float64Array;
@@ -151,9 +153,11 @@ export function modelFromConsist(consist: Consist, slack: Int8Array, track: Trac
     draftTravelM: f(nc),
     draftRatedN: f(nc),
     draftLinear: f(nc),
+    draftPreloadN: f(nc),
     buffTravelM: f(nc),
     buffRatedN: f(nc),
     buffLinear: f(nc),
+    buffPreloadN: f(nc),
     unloadRatio: f(nc),
     transitionK: f(nc),
     endStopK: f(nc),
@@ -203,9 +207,11 @@ export function modelFromConsist(consist: Consist, slack: Int8Array, track: Trac
     m.draftTravelM[j] = cp.draft.travelM;
     m.draftRatedN[j] = cp.draft.forceAtTravelN;
     m.draftLinear[j] = cp.draft.linearShare;
+    m.draftPreloadN[j] = cp.draft.preloadN ?? 0;
     m.buffTravelM[j] = cp.buff.travelM;
     m.buffRatedN[j] = cp.buff.forceAtTravelN;
     m.buffLinear[j] = cp.buff.linearShare;
+    m.buffPreloadN[j] = cp.buff.preloadN ?? 0;
     m.unloadRatio[j] = cp.unloadingRatio;
     m.transitionK[j] = cp.transitionStiffnessNPerM;
     m.endStopK[j] = cp.endStopStiffnessNPerM;
@@ -257,7 +263,8 @@ export function stabilityTimeStep(m: TrainModel, margin = 0.5): number {
       ((2 - m.draftLinear[j]!) * m.draftRatedN[j]!) / m.draftTravelM[j]!,
       ((2 - m.buffLinear[j]!) * m.buffRatedN[j]!) / m.buffTravelM[j]!,
     );
-    kMax = Math.max(kMax, gearK, m.transitionK[j]!, m.endStopK[j]!);
+    const preloadK = Math.max(m.draftPreloadN[j]!, m.buffPreloadN[j]!) / PRELOAD_RAMP_M;
+    kMax = Math.max(kMax, gearK, preloadK, m.transitionK[j]!, m.endStopK[j]!);
     cMax = Math.max(cMax, m.dampingC[j]!);
   }
   let mMin = Infinity;
