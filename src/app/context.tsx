@@ -5,6 +5,7 @@
  */
 import { createContext, useContext, type Accessor } from "solid-js";
 import type { PlannerClient } from "../worker/client.js";
+import type { PlannerPool } from "../worker/pool.js";
 import type { CaseDraftStore } from "./state/createCaseDraft.js";
 import type { LocationsStore } from "./state/createLocations.js";
 import type { MotionLock } from "./state/createMotionLock.js";
@@ -25,6 +26,8 @@ export interface AppContextValue {
   motion: MotionLock;
   /** The planner worker's client (for screens that plan other cases, e.g. Assistance check). */
   planner: PlannerClient;
+  /** A pool of planner workers for batch work: Departures, load tables, the Assistance check. */
+  pool: PlannerPool;
 }
 
 export const AppContext = createContext<AppContextValue>();

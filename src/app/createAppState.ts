@@ -1,6 +1,7 @@
-/** Build the app's state from its parts (the browser wiring in main.tsx; fakes in tests). */
+/** Build the app's state from its parts (the browser wiring in launch.tsx; fakes in tests). */
 import { createMemo } from "solid-js";
 import type { PlannerClient } from "../worker/client.js";
+import { createBrowserPlannerPool, type PlannerPool } from "../worker/pool.js";
 import type { AppContextValue } from "./context.js";
 import { createCaseDraft } from "./state/createCaseDraft.js";
 import { createLocations } from "./state/createLocations.js";
@@ -21,6 +22,26 @@ export interface AppDeps {
   debounceMs?: number;
   onFirstPlan?: (workerMs: number) => void;
   geolocation?: Geolocation;
+  /** Workers for batch work (default: the browser's pool, started on first use). */
+  pool?: PlannerPool;
+  /**
+   * List the device's saved location notes in the location pickers from the start (default: when the
+   * browser has IndexedDB). The notes store is loaded on demand, after the first render.
+   */
+  deviceNotes?: boolean;
+}
+
+/**
+ * Point the location pickers at the device's notes store: a chunk of its own (idb and the store), loaded on
+ * demand, so neither idb nor the store is part of the entry.
+ */
+function installDeviceNotesLater(): void {
+  setTimeout(() => {
+    import("./screens/LocationNotes/source.js").then(
+      (m) => m.installNotesLocationSource(),
+      () => undefined, // Offline before the chunk was cached: the built-in notes and quick entry still work.
+    );
+  }, 0);
 }
 
 export function createAppState(deps: AppDeps): AppContextValue {
@@ -46,6 +67,13 @@ export function createAppState(deps: AppDeps): AppContextValue {
       deps.onFirstPlan?.(ms);
     },
   });
+  if (deps.deviceNotes ?? typeof indexedDB !== "undefined") {
+    // A case that names a note saved on this device cannot be planned before the store is read: read it at
+    // once. Otherwise wait until the first plan is on screen, so the store does not compete with it.
+    const d = draft.draft;
+    if (d.locationMode === "note" && !locations.library().locations.has(d.noteId)) installDeviceNotesLater();
+    else void firstPlanShown.then(installDeviceNotesLater);
+  }
   return {
     settings,
     draft,
@@ -56,5 +84,6 @@ export function createAppState(deps: AppDeps): AppContextValue {
     theme: createTheme(() => settings.settings().theme),
     motion: createMotionLock(() => settings.settings().motionLock, deps.geolocation ?? (typeof navigator !== "undefined" ? navigator.geolocation : undefined)),
     planner: deps.planner,
+    pool: deps.pool ?? createBrowserPlannerPool(),
   };
 }

@@ -86,20 +86,40 @@ export function siUnit(m: MeasureKey): string {
   return m === "temperature" ? "C" : MEASURES[m].si;
 }
 
-const formatters = new Map<number, Intl.NumberFormat>();
+/** `|x|` rounded half away from zero to `d` decimals, from its shortest decimal form (as the browsers' number formatting does). */
+function fixed(x: number, d: number): string {
+  const s = Math.abs(x).toString();
+  // An exponent form (below 1e-6 or from 1e21): no ties at the app's few decimals.
+  if (s.includes("e")) return Math.abs(x).toFixed(d);
+  const dot = s.indexOf(".");
+  const whole = dot < 0 ? s : s.slice(0, dot);
+  const frac = dot < 0 ? "" : s.slice(dot + 1);
+  if (frac.length <= d) return d === 0 ? whole : `${whole}.${frac.padEnd(d, "0")}`;
+  const digits = (whole + frac.slice(0, d)).split("");
+  if (frac.charCodeAt(d) >= 53 /* "5" */) {
+    let k = digits.length - 1;
+    while (k >= 0 && digits[k] === "9") digits[k--] = "0";
+    if (k >= 0) digits[k] = String(Number(digits[k]) + 1);
+    else digits.unshift("1");
+  }
+  const cut = digits.length - d;
+  return d === 0 ? digits.join("") : `${digits.slice(0, cut).join("")}.${digits.slice(cut).join("")}`;
+}
 
-/** A number with grouping and a fixed count of decimals; "−" for negatives, "–" for not-a-number. */
+/**
+ * A number with grouping and a fixed count of decimals; "−" for negatives, "–" for not-a-number.
+ * The same text as `Intl.NumberFormat("en-GB", { minimumFractionDigits: d, maximumFractionDigits: d })`,
+ * without loading the browser's locale data, which costs tens of milliseconds on the main thread at the
+ * first call, in the middle of the load.
+ */
 export function formatNumber(x: number, decimals: number): string {
   if (!Number.isFinite(x)) return "–";
-  let f = formatters.get(decimals);
-  if (!f) {
-    f = new Intl.NumberFormat("en-GB", { minimumFractionDigits: decimals, maximumFractionDigits: decimals });
-    formatters.set(decimals, f);
-  }
-  const s = f.format(x);
-  // Avoid "-0" after rounding, and use a true minus sign.
-  if (/^-0(\.0+)?$/.test(s)) return s.slice(1);
-  return s.replace("-", "−");
+  const s = fixed(x, Math.max(0, Math.min(20, Math.trunc(decimals))));
+  const dot = s.indexOf(".");
+  const whole = dot < 0 ? s : s.slice(0, dot);
+  const body = (s.includes("e") ? whole : whole.replace(/\B(?=(\d{3})+$)/g, ",")) + (dot < 0 ? "" : s.slice(dot));
+  // No "−0" after rounding; a true minus sign.
+  return x < 0 && /[1-9]/.test(body) ? `\u2212${body}` : body;
 }
 
 /** Display value (number only) of an SI quantity. */

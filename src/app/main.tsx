@@ -1,24 +1,19 @@
-/** The browser entry: build the state with the real worker and service worker, and render the app. */
-import { render } from "solid-js/web";
-import { registerSW } from "virtual:pwa-register";
-import { createBrowserPlannerClient } from "../worker/client.js";
-import { App } from "./App.js";
-import { createAppState } from "./createAppState.js";
-import { SCREENS } from "./screens/registry.js";
+/**
+ * The browser entry, kept tiny: start the planner worker first, so its thread, script and JIT warm up
+ * while the page loads and renders, then load the app (`launch.tsx`, a chunk of its own that the page
+ * preloads, see vite.config.ts) and hand it the worker.
+ */
 import "./styles.css";
 
-const root = document.getElementById("root")!;
-root.textContent = "";
-render(() => {
-  const state = createAppState({
-    planner: createBrowserPlannerClient(),
-    background: createBrowserPlannerClient(30_000),
-    registerSW,
-    screenIds: SCREENS.map((s) => s.id),
-    // The time from load to the first plan on screen (and the planner's share), for the browser checks.
-    onFirstPlan: (workerMs) => requestAnimationFrame(() => performance.mark("taut:first-plan", { detail: { workerMs } })),
-  });
-  // The first plan request has gone to the worker by now.
-  performance.mark("taut:first-request");
-  return <App state={state} screens={SCREENS} />;
-}, root);
+const worker = new Worker(new URL("../worker/planner.worker.ts", import.meta.url), { type: "module", name: "taut-planner" });
+performance.mark("taut:worker-created");
+
+import("./launch.js").then(
+  (m) => m.launch(worker),
+  (e: unknown) => {
+    // The app's code could not be loaded (offline before it was ever saved, or a broken update).
+    const root = document.getElementById("root");
+    if (root) root.textContent = `Taut could not load (${e instanceof Error ? e.message : String(e)}). Reload the page when online.`;
+    throw e;
+  },
+);

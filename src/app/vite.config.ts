@@ -1,16 +1,66 @@
 /**
  * Vite configuration of the app: root is src/app, static assets from public/, the build in dist/. The
- * service worker (vite-plugin-pwa, Workbox) precaches the app — the built-in profiles are bundled into
- * it — and waits for the user before updating. Nothing is loaded from another origin.
+ * service worker (our own, sw/sw.ts; vite-plugin-pwa writes the manifest and the list of files into it)
+ * precaches the app — the built-in profiles are bundled into it — and waits for the user before
+ * updating. Nothing is loaded from another origin.
+ *
+ * Loading: the entry (main.tsx) only starts the planner worker and then imports the app (launch.tsx);
+ * `preloadApp` lists that chunk and its imports in the page as modulepreload links, so the browser fetches
+ * and compiles them while the entry runs rather than after.
  */
 import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
-import { defineConfig } from "vite";
+import { defineConfig, type HtmlTagDescriptor, type Plugin } from "vite";
 import { VitePWA } from "vite-plugin-pwa";
 import solid from "vite-plugin-solid";
 
 const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 const pkg = JSON.parse(readFileSync(here("../../package.json"), "utf8")) as { version: string };
+
+/** Modulepreload links for the chunk of `entry` (a module the HTML entry imports on demand) and the chunks it imports. */
+function preloadApp(entry: string): Plugin {
+  return {
+    name: "taut:preload-app",
+    apply: "build",
+    transformIndexHtml: {
+      order: "post",
+      handler(_html, ctx) {
+        const chunks = Object.values(ctx.bundle ?? {}).filter((c) => c.type === "chunk");
+        const app = chunks.find((c) => c.facadeModuleId === entry || c.moduleIds.includes(entry));
+        if (!app) return [];
+        const html = chunks.filter((c) => c.isEntry).map((c) => c.fileName);
+        const files = [app.fileName, ...app.imports].filter((f) => !html.includes(f));
+        return files.map((f): HtmlTagDescriptor => ({ tag: "link", attrs: { rel: "modulepreload", crossorigin: true, href: `./${f}` }, injectTo: "head" }));
+      },
+    },
+  };
+}
+
+/**
+ * Chunking: every module the app needs to show its first plan (what `app` imports, statically) in one
+ * chunk, instead of a shared chunk per module that a screen loaded on demand also uses; the entry's own
+ * modules stay in the entry. Fewer, larger chunks: fewer requests, and less gzip and glue overhead.
+ */
+function oneAppChunk(entry: string, app: string, name: string): (id: string, ctx: { getModuleInfo(id: string): { importedIds: readonly string[] } | null }) => string | null {
+  let inApp: Set<string> | null = null;
+  let inEntry: Set<string> | null = null;
+  const graph = (from: string, ctx: Parameters<ReturnType<typeof oneAppChunk>>[1]) => {
+    const seen = new Set<string>();
+    const todo = [from];
+    while (todo.length > 0) {
+      const id = todo.pop()!;
+      if (seen.has(id)) continue;
+      seen.add(id);
+      todo.push(...(ctx.getModuleInfo(id)?.importedIds ?? []));
+    }
+    return seen;
+  };
+  return (id, ctx) => {
+    inApp ??= graph(app, ctx);
+    inEntry ??= graph(entry, ctx);
+    return inApp.has(id) && !inEntry.has(id) ? name : null;
+  };
+}
 
 export default defineConfig({
   root: here("."),
@@ -22,10 +72,18 @@ export default defineConfig({
     emptyOutDir: true,
     target: "es2022",
     reportCompressedSize: false,
+    // Every browser the app supports preloads modules itself.
+    modulePreload: { polyfill: false },
+    rolldownOptions: {
+      output: { codeSplitting: { groups: [{ name: oneAppChunk(here("main.tsx"), here("launch.tsx"), "launch"), debugName: "launch", includeDependenciesRecursively: false }] } },
+    },
   },
-  worker: { format: "es" },
+  worker: {
+    format: "es",
+  },
   plugins: [
     solid(),
+    preloadApp(here("launch.tsx")),
     VitePWA({
       registerType: "prompt",
       injectRegister: false,
@@ -49,13 +107,13 @@ export default defineConfig({
           { src: "icon.svg", sizes: "any", type: "image/svg+xml" },
         ],
       },
-      workbox: {
-        globPatterns: ["**/*.{js,css,html,svg,png,webmanifest}"],
-        navigateFallback: "index.html",
-        cleanupOutdatedCaches: true,
-        clientsClaim: false,
-        skipWaiting: false,
-      },
+      // Our own small service worker (sw/sw.ts) with the list of files to keep written into it.
+      strategies: "injectManifest",
+      srcDir: "sw",
+      filename: "sw.ts",
+      injectManifest: { globPatterns: ["**/*.{js,css,html,svg,png,webmanifest}"], rollupFormat: "iife" },
+      // Its build (a second, small Vite build) speaks only when something is wrong.
+      integration: { configureCustomSWViteBuild: (c) => void (c.logLevel = "warn") },
       devOptions: { enabled: false },
     }),
   ],

@@ -2,12 +2,26 @@
  * The main thread's side of the planner worker: a typed promise API. The worker starts on the first
  * request and stops after an idle time; an AbortSignal drops a queued request with a cancel message
  * and stops a running one by terminating the worker (requests queued behind it go to a fresh worker).
- * Outcomes are data: a plan, or the issues of a malformed case, or a failure; only an abort rejects.
+ * Outcomes are data: a result, or the issues of a malformed case, or a failure; only an abort rejects.
  * The caller validates and resolves the case first (src/profiles), and sends the core's SI form.
  */
+import type { ConditionMargin } from "../core/conditionMargins.js";
+import type { LoadTableRow } from "../core/loadTable.js";
 import type { PlanResult } from "../core/planner/types.js";
 import type { StartCase } from "../core/types.js";
-import { isWorkerResponse, type PlanRequest, type WorkerIssue, type WorkerRequest } from "./protocol.js";
+import {
+  isWorkerResponse,
+  type AssistanceAnswer,
+  type AssistanceRequestOptions,
+  type CheckAnswer,
+  type CheckRequestOptions,
+  type LoadTableCell,
+  type RequestKind,
+  type RequestMap,
+  type WorkRequest,
+  type WorkerIssue,
+  type WorkerRequest,
+} from "./protocol.js";
 
 /** The part of a Worker the client uses (a fake in tests). */
 export interface WorkerLike {
@@ -17,22 +31,61 @@ export interface WorkerLike {
   onerror: ((ev: { message?: string; preventDefault?: () => void }) => void) | null;
 }
 
-export type PlanOutcome =
-  | { ok: true; result: PlanResult; elapsedMs: number }
+/** What a request comes back with: its result, or the issues of a malformed case, or a failure. */
+export type Outcome<T> =
+  | { ok: true; result: T; elapsedMs: number }
   | { ok: false; kind: "invalid" | "internal" | "crashed"; issues: WorkerIssue[]; message: string };
 
-export interface PlanCallOptions {
+export type PlanOutcome = Outcome<PlanResult>;
+export type AssistanceOutcome = Outcome<AssistanceAnswer>;
+export type ConditionMarginsOutcome = Outcome<ConditionMargin[]>;
+export type LoadTableOutcome = Outcome<LoadTableRow[]>;
+export type CheckOutcome = Outcome<CheckAnswer>;
+
+/** What every call takes: a signal to cancel it, and a progress callback. */
+export interface CallOptions {
   signal?: AbortSignal;
-  /** Called with 0..1 as the planner works; 0 when the worker starts on this request. */
+  /** Called with 0..1 as the work goes on; 0 when the worker starts on this request, 1 with the result. */
   onProgress?: (fraction: number) => void;
+}
+
+export interface PlanCallOptions extends CallOptions {
   /** Skip the largest-startable-mass search (batch and assistance screens). */
   skipMassSearch?: boolean;
   /** Skip the verifying re-run at pessimistic adhesion (a quick first answer; the full plan follows). */
   skipVerification?: boolean;
 }
 
-export interface PlannerClient {
+export interface AssistanceCallOptions extends CallOptions, AssistanceRequestOptions {}
+
+export interface ConditionMarginsCallOptions extends CallOptions {
+  /** Verdict runs only (faster, no verifying re-run). */
+  quick?: boolean;
+}
+
+export interface LoadTableCallOptions extends CallOptions {
+  /** Only these rows (default all twelve). */
+  cells?: LoadTableCell[];
+  /** Each row as soon as it is found. */
+  onRow?: (row: LoadTableRow) => void;
+}
+
+export interface CheckCallOptions extends CallOptions, CheckRequestOptions {}
+
+/** The typed calls of the planner worker (a client, or a pool of them). */
+export interface PlannerCalls {
   plan(startCase: StartCase, opts?: PlanCallOptions): Promise<PlanOutcome>;
+  /** The case's own verdict, the added units that make it start, and the divided train when none does. */
+  assistance(startCase: StartCase, opts?: AssistanceCallOptions): Promise<AssistanceOutcome>;
+  /** Verdict and margin for every rail condition, without and with sand (twelve plans). */
+  conditionMargins(startCase: StartCase, opts?: ConditionMarginsCallOptions): Promise<ConditionMarginsOutcome>;
+  /** The largest startable trailing mass per rail condition and sanding (the core's load table). */
+  loadTable(startCase: StartCase, opts?: LoadTableCallOptions): Promise<LoadTableOutcome>;
+  /** One departure as `taut check` answers it. */
+  check(startCase: StartCase, opts?: CheckCallOptions): Promise<CheckOutcome>;
+}
+
+export interface PlannerClient extends PlannerCalls {
   /** Start the worker now (its script loads while the page renders); it stops again when idle. */
   warm(): void;
   /** Whether a worker is alive now. */
@@ -52,19 +105,27 @@ export interface PlannerClientOptions {
 }
 
 interface Pending {
-  req: PlanRequest;
+  req: WorkRequest;
   started: boolean;
-  resolve: (o: PlanOutcome) => void;
+  resolve: (o: Outcome<unknown>) => void;
   reject: (e: unknown) => void;
   onProgress?: ((f: number) => void) | undefined;
+  onRow?: ((row: LoadTableRow) => void) | undefined;
   cleanup: () => void;
 }
 
 /** An AbortError as `fetch` throws it. */
 export function abortError(): Error {
-  const e = new Error("The plan was cancelled.");
+  const e = new Error("The request was cancelled.");
   e.name = "AbortError";
   return e;
+}
+
+/** Options of a request without its undefined or false fields (false is every option's default; neither goes on the wire). */
+function defined<T extends object>(o: T): Partial<T> {
+  const out: Partial<T> = {};
+  for (const [k, v] of Object.entries(o)) if (v !== undefined && v !== false) (out as Record<string, unknown>)[k] = v;
+  return out;
 }
 
 export function createPlannerClient(options: PlannerClientOptions): PlannerClient {
@@ -98,7 +159,7 @@ export function createPlannerClient(options: PlannerClientOptions): PlannerClien
     worker = null;
   }
 
-  function settle(id: number, outcome: PlanOutcome): void {
+  function settle(id: number, outcome: Outcome<unknown>): void {
     const p = pending.get(id);
     if (!p) return;
     pending.delete(id);
@@ -117,8 +178,14 @@ export function createPlannerClient(options: PlannerClientOptions): PlannerClien
       if (!p) return;
       if (m.type === "progress") {
         p.started = true;
+        if (m.row) p.onRow?.(m.row);
         p.onProgress?.(m.fraction);
       } else if (m.type === "result") {
+        // An answer of another kind than asked for is a bug on one side: report it, do not hand it on.
+        if (m.request !== p.req.type) {
+          settle(m.id, { ok: false, kind: "internal", issues: [], message: `The planner answered a ${p.req.type} request with a ${String(m.request)} result.` });
+          return;
+        }
         p.onProgress?.(1);
         settle(m.id, { ok: true, result: m.result, elapsedMs: m.elapsedMs });
       } else {
@@ -144,7 +211,7 @@ export function createPlannerClient(options: PlannerClientOptions): PlannerClien
     p.reject(abortError());
     if (!worker) return;
     if (p.started) {
-      // A running plan cannot hear a message until it finishes: stop the thread, resend the queue.
+      // A running request cannot hear a message until it finishes: stop the thread, resend the queue.
       stopWorker();
       const rest = [...pending.values()];
       if (rest.length > 0) {
@@ -160,24 +227,41 @@ export function createPlannerClient(options: PlannerClientOptions): PlannerClien
     armIdleTimer();
   }
 
-  return {
-    plan(startCase, opts = {}) {
-      const { signal } = opts;
-      if (signal?.aborted) return Promise.reject(abortError());
-      stopIdleTimer();
-      const id = nextId++;
-      const options: NonNullable<PlanRequest["options"]> = {
-        ...(opts.skipMassSearch ? { skipMassSearch: true } : {}),
-        ...(opts.skipVerification ? { skipVerification: true } : {}),
-      };
-      const req: PlanRequest = { type: "plan", id, startCase, ...(Object.keys(options).length > 0 ? { options } : {}) };
-      return new Promise<PlanOutcome>((resolve, reject) => {
-        const onAbort = () => abort(id);
-        signal?.addEventListener("abort", onAbort, { once: true });
-        pending.set(id, { req, started: false, resolve, reject, onProgress: opts.onProgress, cleanup: () => signal?.removeEventListener("abort", onAbort) });
-        ensureWorker().postMessage(req);
+  function request<K extends RequestKind>(
+    type: K,
+    startCase: StartCase,
+    requestOptions: RequestMap[K]["options"],
+    call: CallOptions & { onRow?: (row: LoadTableRow) => void },
+  ): Promise<Outcome<RequestMap[K]["result"]>> {
+    const { signal } = call;
+    if (signal?.aborted) return Promise.reject(abortError());
+    stopIdleTimer();
+    const id = nextId++;
+    const o = defined(requestOptions as object);
+    const req = { type, id, startCase, ...(Object.keys(o).length > 0 ? { options: o } : {}) } as WorkRequest;
+    return new Promise<Outcome<RequestMap[K]["result"]>>((resolve, reject) => {
+      const onAbort = () => abort(id);
+      signal?.addEventListener("abort", onAbort, { once: true });
+      pending.set(id, {
+        req,
+        started: false,
+        resolve: resolve as (o: Outcome<unknown>) => void,
+        reject,
+        onProgress: call.onProgress,
+        onRow: call.onRow,
+        cleanup: () => signal?.removeEventListener("abort", onAbort),
       });
-    },
+      ensureWorker().postMessage(req);
+    });
+  }
+
+  return {
+    plan: (c, opts = {}) => request("plan", c, { skipMassSearch: opts.skipMassSearch, skipVerification: opts.skipVerification } as RequestMap["plan"]["options"], opts),
+    assistance: (c, opts = {}) =>
+      request("assistance", c, { helper: opts.helper, maxUnits: opts.maxUnits, budget: opts.budget, divideBudget: opts.divideBudget, maxFullPlans: opts.maxFullPlans } as AssistanceRequestOptions, opts),
+    conditionMargins: (c, opts = {}) => request("conditionMargins", c, { quick: opts.quick } as RequestMap["conditionMargins"]["options"], opts),
+    loadTable: (c, opts = {}) => request("loadTable", c, { cells: opts.cells } as RequestMap["loadTable"]["options"], opts),
+    check: (c, opts = {}) => request("check", c, { helper: opts.helper } as CheckRequestOptions, opts),
     warm() {
       if (worker) return;
       ensureWorker();

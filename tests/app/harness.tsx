@@ -6,7 +6,11 @@ import { AppContext, type AppContextValue } from "../../src/app/context.js";
 import { createAppState } from "../../src/app/createAppState.js";
 import { SCREENS, type ScreenEntry } from "../../src/app/screens/registry.js";
 import { createPlannerClient, type WorkerLike } from "../../src/worker/client.js";
-import { createPlannerHandler } from "../../src/worker/handler.js";
+import { loadTableCells, loadTableRow } from "../../src/core/loadTable.js";
+import { staticCheck } from "../../src/core/staticCheck.js";
+import type { StartCase } from "../../src/core/types.js";
+import { createPlannerHandler, type HandlerDeps } from "../../src/worker/handler.js";
+import { createPlannerPool, type PlannerPool } from "../../src/worker/pool.js";
 import type { WorkerRequest } from "../../src/worker/protocol.js";
 
 /** A worker that runs the real handler in this thread, passing messages by structured clone on later ticks. */
@@ -14,12 +18,15 @@ export class InProcessWorker implements WorkerLike {
   onmessage: WorkerLike["onmessage"] = null;
   onerror: WorkerLike["onerror"] = null;
   terminated = false;
-  private handle = createPlannerHandler((msg, transfer) => {
-    const copy = structuredClone(msg, { transfer });
-    setTimeout(() => {
-      if (!this.terminated) this.onmessage?.({ data: copy });
-    }, 0);
-  });
+  private handle: (msg: unknown) => void;
+  constructor(deps: HandlerDeps = {}) {
+    this.handle = createPlannerHandler((msg, transfer) => {
+      const copy = structuredClone(msg, { transfer });
+      setTimeout(() => {
+        if (!this.terminated) this.onmessage?.({ data: copy });
+      }, 0);
+    }, deps);
+  }
   postMessage(m: WorkerRequest) {
     const copy = structuredClone(m);
     setTimeout(() => {
@@ -56,7 +63,30 @@ export interface Harness {
  * thread; `background: true` adds the second worker's largest-startable-mass search (slow: it blocks the
  * test thread while it runs).
  */
-export function renderWithApp(ui?: () => JSX.Element, opts: { storage?: Storage; screens?: readonly ScreenEntry[]; background?: boolean } = {}) {
+/** A pool of in-process planner workers (they share this thread: a pool here runs one request at a time in effect). */
+export function inProcessPool(size = 2, deps: HandlerDeps = {}): PlannerPool {
+  return createPlannerPool({ size, createClient: () => createPlannerClient({ createWorker: () => new InProcessWorker(deps) }) });
+}
+
+/**
+ * In-process workers whose load tables use the static check as the verdict: the real protocol and client,
+ * a table in milliseconds (the planner's own table blocks this thread for seconds; the browser tests run it).
+ */
+export function quickTablePool(): PlannerPool {
+  const starts = (c: StartCase) => staticCheck(c).verdict === "starts";
+  return inProcessPool(2, {
+    jobs: {
+      loadTable: (c, o, progress) =>
+        (o.cells ?? loadTableCells()).map(({ rail, sand }, k, all) => {
+          const row = loadTableRow(c, rail, sand, starts);
+          progress((k + 1) / all.length, { row });
+          return row;
+        }),
+    },
+  });
+}
+
+export function renderWithApp(ui?: () => JSX.Element, opts: { storage?: Storage; screens?: readonly ScreenEntry[]; background?: boolean; pool?: PlannerPool } = {}) {
   const storage = opts.storage ?? memoryStorage();
   let h!: Harness;
   const screens = opts.screens ?? SCREENS;
@@ -68,6 +98,7 @@ export function renderWithApp(ui?: () => JSX.Element, opts: { storage?: Storage;
       screenIds: screens.map((s) => s.id),
       storage,
       debounceMs: 0,
+      pool: opts.pool ?? inProcessPool(),
     });
     h = { state, storage };
     return ui ? <AppContext.Provider value={state}>{ui()}</AppContext.Provider> : <App state={state} screens={screens} />;

@@ -19,16 +19,16 @@ describe("screen registry and tabs", () => {
   });
 
   it("makes one large tab per registry entry; a new entry is one more tab", () => {
-    const extra: ScreenEntry = { id: "load-table", title: "Load table", icon: "table", component: () => <p>table screen</p> };
+    const extra: ScreenEntry = { id: "example-screen", title: "Example screen", icon: "table", component: () => <p>table screen</p> };
     const screens = [...SCREENS.slice(0, -1), extra, SCREENS.at(-1)!];
     renderWithApp(undefined, { screens });
     const tabs = screen.getAllByRole("link");
     expect(tabs.map((t) => t.textContent)).toEqual(screens.map((s) => s.title));
-    fireEvent.click(screen.getByRole("link", { name: "Load table" }));
+    fireEvent.click(screen.getByRole("link", { name: "Example screen" }));
     expect(screen.getByText("table screen")).toBeTruthy();
-    expect(location.hash).toBe("#/load-table");
-    expect(screen.getByRole("link", { name: "Load table" }).getAttribute("aria-current")).toBe("page");
-    expect(document.querySelector(".screen-title")?.textContent).toBe("Load table");
+    expect(location.hash).toBe("#/example-screen");
+    expect(screen.getByRole("link", { name: "Example screen" }).getAttribute("aria-current")).toBe("page");
+    expect(document.querySelector(".screen-title")?.textContent).toBe("Example screen");
   });
 
   it("shows Cab steps full screen, without the tabs, and comes back to Start plan", async () => {
@@ -36,7 +36,8 @@ describe("screen registry and tabs", () => {
     fireEvent.click(screen.getByRole("link", { name: "Cab steps" }));
     expect(document.querySelector(".tabs")).toBeNull();
     expect(document.querySelector(".app")?.classList.contains("full-screen")).toBe(true);
-    fireEvent.click(screen.getByRole("button", { name: /Start plan/ }));
+    // Every screen but Start plan is loaded on demand: its controls appear once its code has arrived.
+    fireEvent.click(await screen.findByRole("button", { name: /Start plan/ }));
     await waitFor(() => expect(document.querySelector('[data-screen="start-plan"]')).not.toBeNull());
   });
 
@@ -44,7 +45,7 @@ describe("screen registry and tabs", () => {
     const { harness } = renderWithApp();
     await waitFor(() => expect(document.querySelector("[data-verdict]")).not.toBeNull(), { timeout: 10_000 });
     fireEvent.click(screen.getByRole("link", { name: "Settings" }));
-    fireEvent.click(screen.getByRole("radio", { name: /US customary/ }));
+    fireEvent.click(await screen.findByRole("radio", { name: /US customary/ }));
     fireEvent.click(screen.getByRole("radio", { name: "Night" }));
     expect(document.documentElement.dataset.theme).toBe("night");
     expect(JSON.parse(harness.storage.getItem(SETTINGS_KEY)!)).toMatchObject({ units: "us", theme: "night" });

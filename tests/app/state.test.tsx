@@ -104,7 +104,7 @@ describe("case draft", () => {
 /** A client whose answers the test releases by hand. */
 function manualClient() {
   const calls: Array<{ c: StartCase; opts: PlanCallOptions; resolve: (o: PlanOutcome) => void }> = [];
-  const client: PlannerClient = {
+  const client: Pick<PlannerClient, "plan" | "alive" | "pending" | "warm" | "dispose"> = {
     plan: (c, opts = {}) =>
       new Promise((resolve, reject) => {
         opts.signal?.addEventListener("abort", () => reject(Object.assign(new Error("aborted"), { name: "AbortError" })));

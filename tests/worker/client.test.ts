@@ -63,7 +63,7 @@ describe("planner client (scripted worker)", () => {
     expect(req).not.toHaveProperty("options");
     workers[0]!.answer({ type: "progress", id: req.id, fraction: 0 });
     workers[0]!.answer({ type: "progress", id: req.id, fraction: 0.5 });
-    workers[0]!.answer({ type: "result", id: req.id, result: fakeResult, elapsedMs: 12 });
+    workers[0]!.answer({ type: "result", id: req.id, request: "plan", result: fakeResult, elapsedMs: 12 });
     await expect(p).resolves.toEqual({ ok: true, result: fakeResult, elapsedMs: 12 });
     expect(progress).toEqual([0, 0.5, 1]);
   });
@@ -79,7 +79,7 @@ describe("planner client (scripted worker)", () => {
   it("stops the worker after the idle time and starts a fresh one on the next request", async () => {
     const client = make(1000);
     const p = client.plan(token(0));
-    workers[0]!.answer({ type: "result", id: workers[0]!.sent[0]!.id, result: fakeResult, elapsedMs: 1 });
+    workers[0]!.answer({ type: "result", id: workers[0]!.sent[0]!.id, request: "plan", result: fakeResult, elapsedMs: 1 });
     await p;
     vi.advanceTimersByTime(999);
     expect(workers[0]!.terminated).toBe(false);
@@ -125,7 +125,7 @@ describe("planner client (scripted worker)", () => {
     await expect(second).rejects.toMatchObject({ name: "AbortError" });
     expect(w.sent.at(-1)).toEqual({ type: "cancel", id: w.sent[1]!.id });
     expect(w.terminated).toBe(false);
-    w.answer({ type: "result", id: w.sent[0]!.id, result: fakeResult, elapsedMs: 1 });
+    w.answer({ type: "result", id: w.sent[0]!.id, request: "plan", result: fakeResult, elapsedMs: 1 });
     await expect(first).resolves.toMatchObject({ ok: true });
   });
 
@@ -144,8 +144,8 @@ describe("planner client (scripted worker)", () => {
     expect(w1.sent).toEqual([w0.sent[1]]);
     expect(w1.sent[0]).toMatchObject({ startCase: { token: 2 }, options: { skipMassSearch: true } });
     // A late answer from the stopped worker is ignored.
-    w0.answer({ type: "result", id: w0.sent[1]!.id, result: { verdict: "marginal" } as unknown as PlanResult, elapsedMs: 1 });
-    w1.answer({ type: "result", id: w1.sent[0]!.id, result: fakeResult, elapsedMs: 2 });
+    w0.answer({ type: "result", id: w0.sent[1]!.id, request: "plan", result: { verdict: "marginal" } as unknown as PlanResult, elapsedMs: 1 });
+    w1.answer({ type: "result", id: w1.sent[0]!.id, request: "plan", result: fakeResult, elapsedMs: 2 });
     await expect(queued).resolves.toEqual({ ok: true, result: fakeResult, elapsedMs: 2 });
   });
 

@@ -35,7 +35,7 @@ describe("planner worker handler", () => {
     expect(h.posted[0]!.msg).toEqual({ type: "progress", id: 7, fraction: 0 });
     const last = h.posted.at(-1)!.msg;
     expect(last.type).toBe("result");
-    if (last.type !== "result") return;
+    if (last.type !== "result" || last.request !== "plan") throw new Error("not a plan result");
     const direct = planStart(resolved(builtinCaseJson[0]));
     expect(last.result.verdict).toBe(direct.verdict);
     expect(last.result.margin).toBeCloseTo(direct.margin, 12);

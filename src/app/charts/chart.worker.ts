@@ -22,9 +22,29 @@ interface Scope {
 const scope = self as unknown as Scope;
 const charts = new Map<number, { chart: Chart; dpr: number }>();
 
+interface LabelledScale {
+  tautLabels?: string[];
+  ticks?: object;
+  afterBuildTicks?: (axis: { ticks: Array<{ value: number }> }) => void;
+}
+
+/** Where a scale carries `tautLabels` (a category axis drawn on a linear scale): one tick at 0, 1, 2…, each with its word. */
+function withTickLabels(options: ChartConfiguration["options"]): void {
+  for (const scale of Object.values((options?.scales ?? {}) as Record<string, LabelledScale | undefined>)) {
+    const labels = scale?.tautLabels;
+    if (!scale || !labels) continue;
+    scale.afterBuildTicks = (axis) => {
+      axis.ticks = labels.map((_, value) => ({ value }));
+    };
+    scale.ticks = { ...scale.ticks, callback: (v: number | string) => labels[Math.round(Number(v))] ?? "" };
+  }
+}
+
 /** Options a chart in a worker needs: no DOM to watch, so a fixed size and the page's pixel ratio. */
 function forWorker(config: ChartConfiguration, dpr: number): ChartConfiguration {
-  return { ...config, options: { ...config.options, responsive: false, devicePixelRatio: dpr } } as ChartConfiguration;
+  const options = { ...config.options, responsive: false, devicePixelRatio: dpr };
+  withTickLabels(options);
+  return { ...config, options } as ChartConfiguration;
 }
 
 scope.onmessage = (ev) => {

@@ -35,6 +35,8 @@ export interface Axis {
   min?: number;
   max?: number;
   stepSize?: number;
+  /** Words written at the whole-number positions 0, 1, 2… instead of numbers (a category axis, e.g. rail conditions). */
+  labels?: readonly string[];
 }
 
 export interface LegendEntry {

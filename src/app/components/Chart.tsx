@@ -37,7 +37,16 @@ export function toChartConfig(spec: ChartSpec, p: ChartPalette): LineConfig {
   const labelled = spec.series.some((s) => s.endLabel);
   const axisStyle = { color: p.text, font: { size: 14 } };
   const scales: NonNullable<LineConfig["options"]>["scales"] = {
-    x: { type: "linear", min: spec.x.min, max: spec.x.max, title: { display: true, text: spec.x.title, ...axisStyle }, ticks: { ...axisStyle }, grid: { color: p.grid } },
+    x: {
+      type: "linear",
+      min: spec.x.min,
+      max: spec.x.max,
+      title: { display: true, text: spec.x.title, ...axisStyle },
+      ticks: { ...axisStyle, ...(spec.x.labels ? { autoSkip: false } : {}) },
+      grid: { color: p.grid },
+      // Plain data for the chart worker, which turns it into the tick callback (a function cannot cross).
+      ...(spec.x.labels ? { tautLabels: [...spec.x.labels] } : {}),
+    },
     y: { type: "linear", min: spec.y.min, max: spec.y.max, title: { display: true, text: spec.y.title, ...axisStyle }, ticks: { ...axisStyle }, grid: { color: p.grid } },
   };
   if (spec.y2) {

@@ -1,6 +1,6 @@
 /**
  * Offline readiness and updates, from the service worker registration (vite-plugin-pwa's
- * `virtual:pwa-register`, passed in so tests and non-PWA builds can do without). "Ready offline" once the
+ * `sw/register.ts`, passed in so tests and non-PWA builds can do without). "Ready offline" once the
  * app is precached; a new version waits until the user agrees to update.
  */
 import { createSignal, onCleanup, type Accessor } from "solid-js";

@@ -33,10 +33,13 @@ export interface PlanRun {
   retry(): void;
 }
 
+/** The part of a planner client a plan run uses. */
+export type PlanningClient = Pick<PlannerClient, "plan" | "warm">;
+
 export interface PlanRunDeps {
-  client: PlannerClient;
+  client: PlanningClient;
   /** A second worker for the slower largest-startable-mass search that follows each plan; without it that figure is not computed. */
-  background?: PlannerClient;
+  background?: PlanningClient;
   /** The validated case to plan (core SI form), or null while the inputs break a rule. */
   startCase: Accessor<StartCase | null>;
   /** Wait after the last change before planning, ms. */

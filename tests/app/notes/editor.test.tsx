@@ -6,7 +6,7 @@ import { PALETTES } from "../../../src/app/charts/palette.js";
 import type { UnitSystem } from "../../../src/app/format.js";
 import { createNoteEditor, type NoteEditor } from "../../../src/app/screens/LocationNotes/createNoteEditor.js";
 import { Editor } from "../../../src/app/screens/LocationNotes/Editor.js";
-import type { LoadTableOutcome } from "../../../src/app/screens/LocationNotes/loadTableJob.js";
+import type { LoadTableOutcome } from "../../../src/app/screens/LocationNotes/loadTableRunner.js";
 import { loadTable, staticCheck } from "../../../src/core/index.js";
 import { referenceCase, referenceSummary } from "../../../src/profiles/referenceTrain.js";
 import { builtinLibrary, builtinLocations, builtinTrains } from "../../../src/profiles/builtin.js";

@@ -11,20 +11,20 @@ import LocationNotesScreen from "../../../src/app/screens/LocationNotes/index.js
 import { DEFAULT_NOTES_DB, listNotesForPicker } from "../../../src/notes/index.js";
 import { builtinLocations } from "../../../src/profiles/builtin.js";
 import { makeNotesBundle } from "../../../src/profiles/notes.js";
-import { renderWithApp } from "../harness.js";
+import { quickTablePool, renderWithApp } from "../harness.js";
 
 const listed = () => [...document.querySelectorAll(".notes-item-name")].map((e) => e.textContent);
 const input = (name: string) => document.querySelector(`[data-field="${name}"] input, [data-field="${name}"] textarea`) as HTMLInputElement;
 
 describe("Location notes screen", () => {
   it("opens with the demo notes, labelled illustrative", async () => {
-    renderWithApp(() => <LocationNotesScreen />);
+    renderWithApp(() => <LocationNotesScreen />, { pool: quickTablePool() });
     await waitFor(() => expect(listed()).toHaveLength(builtinLocations.length), { timeout: 10_000 });
     expect(screen.getAllByText("Illustrative")).toHaveLength(builtinLocations.length);
   });
 
   it("saves a new note, lists it, and offers it to the location pickers", async () => {
-    renderWithApp(() => <LocationNotesScreen />);
+    renderWithApp(() => <LocationNotesScreen />, { pool: quickTablePool() });
     await waitFor(() => expect(listed().length).toBeGreaterThan(0), { timeout: 10_000 });
     fireEvent.click(screen.getByRole("button", { name: "New note" }));
     fireEvent.input(input("name"), { target: { value: "Wrenfield up loop (test)" } });
@@ -40,7 +40,7 @@ describe("Location notes screen", () => {
   }, 60_000);
 
   it("asks about a note whose revision differs, and 'Keep both' adds the file's copy", async () => {
-    renderWithApp(() => <LocationNotesScreen />);
+    renderWithApp(() => <LocationNotesScreen />, { pool: quickTablePool() });
     await waitFor(() => expect(listed().length).toBeGreaterThan(0), { timeout: 10_000 });
     const demo = builtinLocations[0]!;
     const theirs = { ...demo, clearAhead_m: demo.clearAhead_m - 100, revisions: [...demo.revisions, { date: "2027-01-15", initials: "ZX", change: "Signal moved back 100 m." }] };
@@ -58,7 +58,7 @@ describe("Location notes screen", () => {
   });
 
   it("refuses a truncated file with its message and changes nothing", async () => {
-    renderWithApp(() => <LocationNotesScreen />);
+    renderWithApp(() => <LocationNotesScreen />, { pool: quickTablePool() });
     await waitFor(() => expect(listed().length).toBeGreaterThan(0), { timeout: 10_000 });
     const before = listed();
     const text = JSON.stringify(makeNotesBundle(builtinLocations)).slice(0, 400);
@@ -71,7 +71,7 @@ describe("Location notes screen", () => {
     const db = await openDB(DEFAULT_NOTES_DB);
     await db.put("notes", { id: "scrambled", origin: "mine", savedAt: "2026-01-01T00:00:00Z", note: { schema: "taut/location@1", id: "scrambled" } });
     db.close();
-    renderWithApp(() => <LocationNotesScreen />);
+    renderWithApp(() => <LocationNotesScreen />, { pool: quickTablePool() });
     await waitFor(() => expect(screen.getByText("Damaged records (1)")).toBeTruthy());
     expect(screen.getByText(/The saved note "scrambled" is damaged and was skipped: name: is required/)).toBeTruthy();
     expect(listed().length).toBeGreaterThan(0);

@@ -13,7 +13,7 @@ import { DEFAULT_REFERENCE_TEMPERATURE_C, type ReferenceSummary } from "../../..
 import { show, type UnitSystem } from "../../format.js";
 import { HAZARD_KINDS } from "./draft.js";
 import type { NoteFigures } from "./figures.js";
-import type { LoadTableOutcome } from "./loadTableJob.js";
+import type { LoadTableOutcome } from "./loadTableRunner.js";
 import { slackSentence, type ProfileModel } from "./profileModel.js";
 import { ProfileSketch } from "./ProfileSketch.js";
 

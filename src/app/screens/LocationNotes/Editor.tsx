@@ -176,6 +176,9 @@ export function Editor(props: EditorProps): JSX.Element {
             <p class="notes-hint" aria-live="polite">
               Working out the load table: every figure is checked in the train dynamics model, so this takes several seconds. The rest of the screen stays usable.
             </p>
+            <div class="progress" role="progressbar" aria-label="Load table" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(e().loadTableProgress() * 100)}>
+              <span style={{ width: `${Math.max(4, e().loadTableProgress() * 100)}%` }} />
+            </div>
           </Match>
           <Match when={e().loadTable()}>{(t) => <LoadTableResult outcome={t()} units={u()} />}</Match>
         </Switch>

@@ -1,127 +1,45 @@
 /**
- * The live profile chart of the editor (chart.js, registering only the line parts, as the shared chart
- * does): the ground from the gradients, the standing train on it drawn solid where its couplings are
- * stretched and dashed where they are bunched, the distance clear ahead, and numbered hazard markers.
- * Colours come from the app's chart palette for the theme; the legend is ours, large and readable.
- * Created in onMount, updated in an effect, destroyed on cleanup.
+ * The live profile chart of the editor, drawn as inline SVG (no chart library on the page, and sharp at
+ * any size): the ground from the gradients, the standing train on it drawn solid where its couplings are
+ * stretched and dashed where they are bunched, the front, the distance clear ahead, and numbered hazard
+ * markers matching the legend. The layout (`profilePlot.ts`) follows the box's width; colours come from
+ * the app's chart palette for the theme; the legend is ours, large and readable.
  */
-import { Chart, LinearScale, LineController, LineElement, PointElement, type ChartConfiguration, type ChartDataset } from "chart.js";
-import { createEffect, For, on, onCleanup, onMount, Show, type JSX } from "solid-js";
-import type { ChartPalette } from "../../charts/palette.js";
-import { toDisplay, unitSymbol, type UnitSystem } from "../../format.js";
+import { createMemo, createSignal, For, onCleanup, onMount, Show, type JSX } from "solid-js";
+import { withAlpha, type ChartPalette } from "../../charts/palette.js";
+import type { UnitSystem } from "../../format.js";
 import { HAZARD_KINDS } from "./draft.js";
-import { alongGround, type ProfileModel } from "./profileModel.js";
-
-Chart.register(LineController, LineElement, PointElement, LinearScale);
-
-type Pt = { x: number; y: number };
-type Config = ChartConfiguration<"line", Pt[]>;
-
-/** The chart's datasets and axes in display units; NaN points break a line between runs. */
-export function profileConfig(m: ProfileModel, units: UnitSystem, p: ChartPalette): Config {
-  const d = (metres: number) => toDisplay("distance", metres, "m", units);
-  const hs = m.ground.map((g) => g.h);
-  const lift = Math.max(1, Math.max(...hs) - Math.min(...hs)) * 0.05;
-  const train = (state: "stretched" | "bunched"): Pt[] => {
-    const pts: Pt[] = [];
-    for (const r of m.train?.runs ?? []) {
-      if (r.state !== state) continue;
-      if (pts.length > 0) pts.push({ x: d(r.frontM), y: Number.NaN });
-      for (const g of alongGround(m.ground, r.rearM, r.frontM)) pts.push({ x: d(g.x), y: d(g.h + lift) });
-    }
-    return pts;
-  };
-  const line = (label: string, data: Pt[], colour: string, width: number, dash: number[] = []): ChartDataset<"line", Pt[]> => ({
-    label,
-    data,
-    borderColor: colour,
-    backgroundColor: colour,
-    borderWidth: width,
-    borderDash: dash,
-    pointRadius: 0,
-    spanGaps: false,
-    tension: 0,
-  });
-  const datasets: ChartDataset<"line", Pt[]>[] = [
-    line("Track", m.ground.map((g) => ({ x: d(g.x), y: d(g.h) })), p.need, 2),
-    line("Clear ahead", alongGround(m.ground, m.frontM, m.clearEndM).map((g) => ({ x: d(g.x), y: d(g.h + 2.2 * lift) })), p.text, 2, [3, 5]),
-    line("Train, couplings stretched", train("stretched"), p.main, 10),
-    line("Train, couplings bunched", train("bunched"), p.second, 10, [12, 7]),
-  ];
-  if (m.hazards.length > 0) {
-    datasets.push({
-      ...line("Hazards", m.hazards.map((h) => ({ x: d(h.x), y: d(h.h - lift) })), p.limit, 2),
-      showLine: false,
-      pointStyle: "triangle",
-      pointRadius: 9,
-      backgroundColor: p.limit,
-    });
-  }
-  const axis = { color: p.text, font: { size: 14 } };
-  const unit = unitSymbol("distance", units);
-  return {
-    type: "line",
-    data: { datasets },
-    options: {
-      animation: false,
-      responsive: true,
-      maintainAspectRatio: false,
-      parsing: false,
-      normalized: true,
-      events: [],
-      plugins: { legend: { display: false }, tooltip: { enabled: false } },
-      scales: {
-        x: { type: "linear", min: d(m.startM), max: d(m.endM), title: { display: true, text: `Distance along the line (${unit})`, ...axis }, ticks: { ...axis }, grid: { color: p.grid } },
-        y: { type: "linear", title: { display: true, text: `Height (${unit}), exaggerated`, ...axis }, ticks: { ...axis }, grid: { color: p.grid } },
-      },
-    },
-  };
-}
+import type { ProfileModel } from "./profileModel.js";
+import { profilePlot } from "./profilePlot.js";
 
 export interface ProfileChartProps {
   model: ProfileModel | undefined;
   units: UnitSystem;
   palette: ChartPalette;
-  /** One or two sentences on what the chart shows (also the canvas's text alternative). */
+  /** One or two sentences on what the chart shows (also the drawing's text alternative). */
   summary: string;
 }
 
+/** Drawing height, px, and the width used until the box has been measured (a test DOM has no layout). */
+const HEIGHT = 300;
+const DEFAULT_WIDTH = 900;
+const BUNCHED_DASH = "14 7";
+const CLEAR_DASH = "3 5";
+
 export function ProfileChart(props: ProfileChartProps): JSX.Element {
-  let canvas: HTMLCanvasElement | undefined;
-  let chart: Chart<"line", Pt[]> | null = null;
-
-  const draw = () => {
-    const m = props.model;
-    if (!canvas) return;
-    if (!m) {
-      chart?.destroy();
-      chart = null;
-      return;
-    }
-    const cfg = profileConfig(m, props.units, props.palette);
-    if (chart) {
-      chart.data = cfg.data;
-      chart.options = cfg.options!;
-      chart.update("none");
-      return;
-    }
-    // No 2D context (a test DOM, a locked-down browser): the summary and legend still say what it shows.
-    let ctx: CanvasRenderingContext2D | null = null;
-    try {
-      ctx = canvas.getContext("2d");
-    } catch {
-      ctx = null;
-    }
-    if (ctx) chart = new Chart<"line", Pt[]>(ctx, cfg);
-  };
-
-  onMount(draw);
-  createEffect(on(() => [props.model, props.units, props.palette] as const, draw, { defer: true }));
-  onCleanup(() => {
-    chart?.destroy();
-    chart = null;
+  let box!: HTMLDivElement;
+  const [width, setWidth] = createSignal(DEFAULT_WIDTH);
+  onMount(() => {
+    const measure = () => box.clientWidth > 0 && setWidth(box.clientWidth);
+    measure();
+    if (typeof ResizeObserver === "undefined") return;
+    const ro = new ResizeObserver(measure);
+    ro.observe(box);
+    onCleanup(() => ro.disconnect());
   });
 
+  const plot = createMemo(() => (props.model ? profilePlot(props.model, props.units, width(), HEIGHT) : undefined));
+  const p = () => props.palette;
   const hazardWord = (k: string) => HAZARD_KINDS.find((h) => h.kind === k)?.label ?? k;
 
   return (
@@ -129,25 +47,104 @@ export function ProfileChart(props: ProfileChartProps): JSX.Element {
       <figcaption>
         <span class="chart-caption">{props.summary}</span>
       </figcaption>
-      <div class="chart-box notes-chart-box">
-        <canvas ref={canvas} role="img" aria-label={`Profile. ${props.summary}`} />
+      <div class="chart-box notes-chart-box" classList={{ empty: !plot() }} ref={box}>
+        <Show when={plot()}>
+          {(g) => (
+            <svg class="notes-profile" width={g().width} height={g().height} viewBox={`0 0 ${g().width} ${g().height}`} role="img" aria-label={`Profile. ${props.summary}`}>
+              <g class="notes-profile-grid" stroke={p().grid} stroke-width="1">
+                <For each={g().yTicks}>{(t) => <line x1={g().left} x2={g().right} y1={t.at} y2={t.at} />}</For>
+                <For each={g().xTicks}>{(t) => <line x1={t.at} x2={t.at} y1={g().top} y2={g().bottom} />}</For>
+              </g>
+              <g fill={p().text} font-size="14">
+                <For each={g().yTicks}>
+                  {(t) => (
+                    <text x={g().left - 8} y={t.at + 5} text-anchor="end">
+                      {t.label}
+                    </text>
+                  )}
+                </For>
+                <For each={g().xTicks}>
+                  {(t) => (
+                    <text x={t.at} y={g().bottom + 20} text-anchor="middle">
+                      {t.label}
+                    </text>
+                  )}
+                </For>
+                <text x={g().left - 8} y={g().top - 14} text-anchor="start" font-size="13">
+                  {g().yTitle}
+                </text>
+                <text x={(g().left + g().right) / 2} y={g().height - 8} text-anchor="middle">
+                  {g().xTitle}
+                </text>
+              </g>
+              <path d={g().groundFill} fill={withAlpha(p().need, 0.08)} stroke="none" />
+              <path d={g().ground} fill="none" stroke={p().need} stroke-width="2.5" stroke-linejoin="round" />
+              <Show when={g().clear}>
+                {(c) => <path d={c().path} fill="none" stroke={p().text} stroke-width="2.5" stroke-dasharray={CLEAR_DASH} />}
+              </Show>
+              <For each={g().train}>
+                {(r) => (
+                  <path
+                    class={`notes-profile-train ${r.state}`}
+                    d={r.path}
+                    fill="none"
+                    stroke={r.state === "stretched" ? p().main : p().second}
+                    stroke-width="10"
+                    stroke-dasharray={r.state === "bunched" ? BUNCHED_DASH : undefined}
+                    stroke-linecap="butt"
+                    stroke-linejoin="round"
+                  />
+                )}
+              </For>
+              <Show when={g().front}>
+                {(f) => (
+                  <g>
+                    <line x1={f().x} x2={f().x} y1={f().y1} y2={f().y2} stroke={p().need} stroke-width="2" />
+                    <text x={f().label.x} y={f().label.y} text-anchor={f().label.anchor} fill={p().text} font-size="15" font-weight="bold">
+                      {f().label.text}
+                    </text>
+                  </g>
+                )}
+              </Show>
+              <Show when={g().clear}>
+                {(c) => (
+                  <text x={c().label.x} y={c().label.y} text-anchor={c().label.anchor} fill={p().text} font-size="15">
+                    {c().label.text}
+                  </text>
+                )}
+              </Show>
+              <For each={g().hazards}>
+                {(h) => (
+                  <g class="notes-profile-hazard">
+                    <path d={`M${h.x.toFixed(1)},${(h.y + 4).toFixed(1)} l-12,23 h24 z`} fill={p().limit} stroke={p().limit} stroke-width="1.5" stroke-linejoin="round" />
+                    <text x={h.x} y={h.y + 23} text-anchor="middle" font-size="13" font-weight="bold" style={{ fill: "var(--surface)" }}>
+                      {h.n}
+                    </text>
+                  </g>
+                )}
+              </For>
+            </svg>
+          )}
+        </Show>
       </div>
       <ul class="legend notes-legend">
         <li>
-          <span class="notes-swatch" style={{ "--swatch": props.palette.main }} aria-hidden="true" />
+          <Swatch colour={p().main} width={10} />
           Train, couplings stretched
         </li>
         <li>
-          <span class="notes-swatch dashed" style={{ "--swatch": props.palette.second }} aria-hidden="true" />
+          <Swatch colour={p().second} width={10} dash={BUNCHED_DASH} />
           Train, couplings bunched
         </li>
         <li>
-          <span class="notes-swatch thin dotted" style={{ "--swatch": props.palette.text }} aria-hidden="true" />
+          <Swatch colour={p().text} width={2.5} dash={CLEAR_DASH} />
           Clear ahead
         </li>
         <Show when={(props.model?.hazards.length ?? 0) > 0}>
           <li>
-            <span class="notes-triangle" style={{ "--swatch": props.palette.limit }} aria-hidden="true" />
+            <svg class="notes-swatch" width="24" height="22" viewBox="0 0 24 22" aria-hidden="true">
+              <path d="M12,1 l-11,20 h22 z" fill={p().limit} />
+            </svg>
             Hazards:{" "}
             <For each={props.model?.hazards ?? []}>
               {(h, k) => (
@@ -161,5 +158,15 @@ export function ProfileChart(props: ProfileChartProps): JSX.Element {
         </Show>
       </ul>
     </figure>
+  );
+}
+
+/** A short stretch of line drawn exactly as on the chart (width, dashes), for the legend. */
+function Swatch(props: { colour: string; width: number; dash?: string }): JSX.Element {
+  // 35 px: two dashes and the gap between them (14 7 14), or four dots (3 5 …).
+  return (
+    <svg class="notes-swatch" width="35" height="14" viewBox="0 0 35 14" aria-hidden="true">
+      <line x1="0" x2="35" y1="7" y2="7" stroke={props.colour} stroke-width={props.width} stroke-dasharray={props.dash} />
+    </svg>
   );
 }

@@ -12,7 +12,7 @@ import { referenceCase, referenceSummary, type ReferenceSummary } from "../../..
 import type { UnitSystem } from "../../format.js";
 import { draftFromNote, idFromName, joinSegments, newDraft, nextSegment, noteFromDraft, type NoteDraft } from "./draft.js";
 import { noteFigures, type NoteFigures } from "./figures.js";
-import { computeNoteLoadTable, type LoadTableOutcome } from "./loadTableRunner.js";
+import type { ComputeLoadTable, LoadTableOutcome } from "./loadTableRunner.js";
 import { profileModel, type ProfileModel } from "./profileModel.js";
 import { checkDraft, type NoteIssue } from "./validate.js";
 
@@ -30,6 +30,8 @@ export interface NoteEditor {
   model: Accessor<ProfileModel | undefined>;
   figures: Accessor<NoteFigures>;
   loadTable: Accessor<LoadTableOutcome | undefined>;
+  /** 0..1 while the load table is being worked out. */
+  loadTableProgress: Accessor<number>;
   load(note: LocationNoteFile | undefined): void;
   addSegment(): void;
   removeSegment(k: number): void;
@@ -47,8 +49,8 @@ export interface NoteEditorDeps {
   loadTableDelayMs?: number;
   /** Whether the note is on screen (editor or card): the load table is worked out only then. */
   active?: Accessor<boolean>;
-  /** How the load table is worked out (default: the load-table worker). */
-  computeLoadTable?: typeof computeNoteLoadTable;
+  /** How the load table is worked out (the app: the planner workers' `loadTable`, see loadTableRunner.ts). */
+  computeLoadTable: ComputeLoadTable;
 }
 
 /** Fields whose errors stop the train being placed and the load table being worked out. */
@@ -112,6 +114,7 @@ export function createNoteEditor(deps: NoteEditorDeps): NoteEditor {
   const figures = createMemo(() => noteFigures(geometry().segments, geometry().frontAt_m, reference().lengthM, geometry().clearAhead_m));
 
   const [loadTable, setLoadTable] = createSignal<LoadTableOutcome | undefined>();
+  const [loadTableProgress, setLoadTableProgress] = createSignal(0);
   let controller: AbortController | undefined;
   let timer: ReturnType<typeof setTimeout> | undefined;
   createEffect(
@@ -119,11 +122,12 @@ export function createNoteEditor(deps: NoteEditorDeps): NoteEditor {
       controller?.abort();
       if (timer !== undefined) clearTimeout(timer);
       setLoadTable(undefined);
+      setLoadTableProgress(0);
       if (!ok || !active) return;
       const c = new AbortController();
       controller = c;
       timer = setTimeout(() => {
-        (deps.computeLoadTable ?? computeNoteLoadTable)(g, g.referenceTrain, c.signal).then(
+        deps.computeLoadTable(g, g.referenceTrain, c.signal, (f) => !c.signal.aborted && setLoadTableProgress(f)).then(
           (r) => {
             if (!c.signal.aborted) setLoadTable(r);
           },
@@ -151,6 +155,7 @@ export function createNoteEditor(deps: NoteEditorDeps): NoteEditor {
     model,
     figures,
     loadTable,
+    loadTableProgress,
     load,
     addSegment: () => setDraft("segments", draft.segments.length, nextSegment(unwrap(draft).segments)),
     removeSegment: (k) => setDraft("segments", (segs) => segs.filter((_, i) => i !== k)),

@@ -14,6 +14,7 @@ import { read, safeLocalStorage, write } from "../../state/createSettings.js";
 import { createNoteEditor } from "./createNoteEditor.js";
 import { createNotesLibrary, downloadBundle } from "./createNotesLibrary.js";
 import { today } from "./draft.js";
+import { noteLoadTableOn } from "./loadTableRunner.js";
 import { installNotesLocationSource } from "./source.js";
 import { View, type Mode } from "./View.js";
 
@@ -35,7 +36,14 @@ export function LocationNotesScreen(): JSX.Element {
   const [conflicts, setConflicts] = createSignal<{ list: ImportConflict[]; answer: (c: Record<string, ConflictChoice> | null) => void } | null>(null);
 
   const lib = createNotesLibrary({ openStore: deviceNotesStore, changed: notifyLocationsChanged });
-  const editor = createNoteEditor({ units, presets: builtinTrains, library: () => profiles, initials, active: () => mode() !== "library" });
+  const editor = createNoteEditor({
+    units,
+    presets: builtinTrains,
+    library: () => profiles,
+    initials,
+    active: () => mode() !== "library",
+    computeLoadTable: noteLoadTableOn(app.pool),
+  });
   const takenIds = createMemo(() => new Set(lib.notes().map((n) => n.note.id)));
 
   const task = async (f: () => Promise<void>) => {

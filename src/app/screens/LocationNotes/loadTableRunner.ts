@@ -1,85 +1,53 @@
 /**
- * The note's load table, behind one asynchronous function. Each row is a mass search over the
- * dynamics-verified planner (seconds in all), so it runs in a Web Worker of its own; a newer request or
- * an abort stops a running one by terminating the worker. Where no Worker exists (tests), the same job
- * runs on the calling thread. When the app's planner worker gains a load-table request, only this file
- * changes.
+ * The note's load table, behind one asynchronous function: the reference train is placed on the note's
+ * profile here (src/profiles, already on the page for the editor), and the rows are worked out by the
+ * planner worker's `loadTable` request — the core's load table, each row a mass search over the
+ * dynamics-verified planner (seconds in all). Tables are cached per geometry and train; an abort (each
+ * edit) stops a running one, and progress comes as the rows are found.
  */
-import type { ReferenceTrainFile } from "../../../profiles/schemas.js";
-import type { LoadTableOutcome, LoadTableRequest, LoadTableResponse, NoteGeometry } from "./loadTableJob.js";
+import type { LoadTableRow } from "../../../core/loadTable.js";
+import { builtinLibrary, builtinTrains } from "../../../profiles/builtin.js";
+import type { FieldIssue } from "../../../profiles/issues.js";
+import type { Library } from "../../../profiles/library.js";
+import { referenceCase } from "../../../profiles/referenceTrain.js";
+import type { LocationNoteFile, ReferenceTrainFile } from "../../../profiles/schemas.js";
+import type { PlannerCalls } from "../../../worker/client.js";
 
-export type { LoadTableOutcome, NoteGeometry } from "./loadTableJob.js";
+export type NoteGeometry = Pick<LocationNoteFile, "segments" | "frontAt_m" | "clearAhead_m" | "speedLimit_kmh">;
 
-interface Running {
-  id: number;
-  resolve: (o: LoadTableOutcome) => void;
-  reject: (e: unknown) => void;
-}
+export type LoadTableOutcome = { ok: true; rows: LoadTableRow[]; elapsedMs: number } | { ok: false; issues: FieldIssue[] };
 
-let worker: Worker | null = null;
-let running: Running | null = null;
-let nextId = 1;
+/** How the editor asks for a table: the note's geometry and reference train; an abort signal; progress 0..1. */
+export type ComputeLoadTable = (note: NoteGeometry, ref: ReferenceTrainFile, signal?: AbortSignal, onProgress?: (fraction: number) => void) => Promise<LoadTableOutcome>;
+
 const cache = new Map<string, LoadTableOutcome>();
+let lib: Library | undefined;
 
-function abortError(): Error {
-  const e = new Error("The load table was cancelled.");
-  e.name = "AbortError";
-  return e;
-}
-
-function stop(): void {
-  worker?.terminate();
-  worker = null;
-  running?.reject(abortError());
-  running = null;
-}
-
-function startWorker(): Worker {
-  const w = new Worker(new URL("./loadTable.worker.ts", import.meta.url), { type: "module", name: "taut-load-table" });
-  w.onmessage = (ev: MessageEvent<LoadTableResponse>) => {
-    const r = running;
-    if (!r || ev.data.id !== r.id) return;
-    running = null;
-    if ("outcome" in ev.data) r.resolve(ev.data.outcome);
-    else r.reject(new Error(ev.data.error));
-  };
-  w.onerror = (ev) => {
-    ev.preventDefault();
-    const r = running;
-    running = null;
-    worker?.terminate();
-    worker = null;
-    r?.reject(new Error(ev.message || "The load-table worker stopped unexpectedly."));
-  };
-  return w;
+/** The key a table is cached under: everything that changes it. */
+export function loadTableKey(note: NoteGeometry, ref: ReferenceTrainFile): string {
+  return JSON.stringify([note.segments, note.frontAt_m, note.clearAhead_m, note.speedLimit_kmh ?? null, ref]);
 }
 
 /** Largest startable trailing mass per rail condition, without and with sand, for a note and its reference train. */
-export async function computeNoteLoadTable(note: NoteGeometry, ref: ReferenceTrainFile, signal?: AbortSignal): Promise<LoadTableOutcome> {
-  const key = JSON.stringify([note.segments, note.frontAt_m, note.clearAhead_m, note.speedLimit_kmh ?? null, ref]);
+export async function computeNoteLoadTable(
+  note: NoteGeometry,
+  ref: ReferenceTrainFile,
+  workers: Pick<PlannerCalls, "loadTable">,
+  opts: { signal?: AbortSignal; onProgress?: (fraction: number) => void } = {},
+): Promise<LoadTableOutcome> {
+  const key = loadTableKey(note, ref);
   const hit = cache.get(key);
   if (hit) return hit;
-  if (signal?.aborted) throw abortError();
-  let outcome: LoadTableOutcome;
-  if (typeof Worker === "undefined") {
-    // Let the caller paint first; then do the work here.
-    await new Promise<void>((resolve) => setTimeout(resolve, 0));
-    if (signal?.aborted) throw abortError();
-    const { runLoadTableJob } = await import("./loadTableJob.js");
-    outcome = runLoadTableJob(note, ref);
-  } else {
-    // Only the newest table matters: a job still running is stopped.
-    if (running) stop();
-    worker ??= startWorker();
-    const w = worker;
-    const id = nextId++;
-    outcome = await new Promise<LoadTableOutcome>((resolve, reject) => {
-      running = { id, resolve, reject };
-      signal?.addEventListener("abort", () => running?.id === id && stop(), { once: true });
-      const req: LoadTableRequest = { id, note, ref };
-      w.postMessage(req);
-    });
-  }
+  lib ??= builtinLibrary();
+  const c = referenceCase({ ...note, referenceTrain: ref }, builtinTrains, lib, ref);
+  if (!c.ok) return { ok: false, issues: c.issues };
+  const out = await workers.loadTable(c.value, { ...(opts.signal ? { signal: opts.signal } : {}), ...(opts.onProgress ? { onProgress: opts.onProgress } : {}) });
+  const outcome: LoadTableOutcome = out.ok ? { ok: true, rows: out.result, elapsedMs: out.elapsedMs } : { ok: false, issues: out.issues.length > 0 ? out.issues : [{ path: "", message: out.message }] };
   if (outcome.ok) cache.set(key, outcome);
   return outcome;
+}
+
+/** The editor's table function over the given workers (the app's planner pool). */
+export function noteLoadTableOn(workers: Pick<PlannerCalls, "loadTable">): ComputeLoadTable {
+  return (note, ref, signal, onProgress) => computeNoteLoadTable(note, ref, workers, { ...(signal ? { signal } : {}), ...(onProgress ? { onProgress } : {}) });
 }

@@ -1,0 +1,61 @@
+/**
+ * Start the app with the planner worker the entry has already started (the planner client's first
+ * worker; later ones, after an idle stop or a cancel, it starts itself), in three steps:
+ * 1. build the state, which sends the first plan request at once;
+ * 2. render the app once the worker has taken the request (its first message), or after a short wait.
+ *    A message posted to a worker whose script is still loading is held by the page and handed over in
+ *    a turn of the main thread after that script has run; rendering first would hold the request back
+ *    until the render is done. This way the planner and the render run side by side;
+ * 3. once the first plan is on screen and the page is idle, fetch the screens loaded on demand.
+ */
+import { createRoot } from "solid-js";
+import { render } from "solid-js/web";
+import { createBrowserPlannerClient, createPlannerClient, type WorkerLike } from "../worker/client.js";
+import { App } from "./App.js";
+import { createAppState } from "./createAppState.js";
+import { preloadScreens, SCREENS } from "./screens/registry.js";
+import { registerSW } from "./sw/register.js";
+
+/** The longest the first render waits for the worker to take the first request, ms. */
+const RENDER_WAIT_MS = 600;
+
+const delay = (ms: number) => new Promise<void>((resolve) => setTimeout(resolve, ms));
+
+function whenIdle(f: () => void): void {
+  if (typeof requestIdleCallback === "function") requestIdleCallback(f, { timeout: 3000 });
+  else setTimeout(f, 500);
+}
+
+export async function launch(firstWorker: Worker): Promise<void> {
+  const answered = new Promise<void>((resolve) => firstWorker.addEventListener("message", () => resolve(), { once: true }));
+  let first: Worker | null = firstWorker;
+  const planner = createPlannerClient({
+    createWorker: () => {
+      const w = first ?? new Worker(new URL("../worker/planner.worker.ts", import.meta.url), { type: "module", name: "taut-planner" });
+      first = null;
+      return w as unknown as WorkerLike;
+    },
+  });
+  const state = createRoot(() =>
+    createAppState({
+      planner,
+      background: createBrowserPlannerClient(30_000),
+      registerSW,
+      screenIds: SCREENS.map((s) => s.id),
+      // The time from load to the first plan on screen (and the planner's share), for the browser checks.
+      onFirstPlan: (workerMs) =>
+        requestAnimationFrame(() => {
+          performance.mark("taut:first-plan", { detail: { workerMs } });
+          whenIdle(() => void preloadScreens(SCREENS));
+        }),
+    }),
+  );
+  if (state.run.status() === "running") {
+    // The first plan request has gone to the worker.
+    performance.mark("taut:first-request");
+    await Promise.race([answered, delay(RENDER_WAIT_MS)]);
+  }
+  const root = document.getElementById("root")!;
+  root.textContent = "";
+  render(() => <App state={state} screens={SCREENS} />, root);
+}

@@ -1,0 +1,86 @@
+/** Assistance check (wiring): the case being edited in Start plan, checked on the planner workers; the view is View.tsx. */
+import { createMemo, type JSX } from "solid-js";
+import { unwrap } from "solid-js/store";
+import type { StartCase } from "../../../core/types.js";
+import type { AssistanceOptionData } from "../../../worker/protocol.js";
+import { PALETTES } from "../../charts/palette.js";
+import { useApp } from "../../context.js";
+import { show, type UnitSystem } from "../../format.js";
+import type { CaseDraft } from "../../state/caseDraft.js";
+import "../shared/dispatch.css";
+import { placeWords, RAIL_WORD } from "../shared/words.js";
+import { createAssistanceCheck } from "./createAssistanceCheck.js";
+import { AssistanceView, type CaseInfo } from "./View.js";
+
+/** The case in a few lines: locomotives, train, place, rail. */
+export function caseInfo(c: StartCase, d: CaseDraft, placeName: string | undefined, units: UnitSystem, edited = false): CaseInfo {
+  const locos = c.locomotives.map((g) => `${g.count} × ${g.spec.label} ${placeWords(g.position)}`).join("; ");
+  const q = d.quick;
+  const place =
+    d.locationMode === "note"
+      ? (placeName ?? d.noteId)
+      : `quick entry — gradient ${show("grade", q.gradient_permille / 1000, units)}${q.curveRadius_m > 0 ? `, curve ${show("radius", q.curveRadius_m, units)}` : ", straight"}, clear ahead ${show("distance", q.clearAhead_m, units)}`;
+  return {
+    // A case changed since it was loaded no longer matches its name's words (a "dry afternoon" on wet rail).
+    title: d.label ? `${d.label}${edited ? " — edited" : ""}` : "the case in Start plan",
+    lines: [
+      `Locomotives: ${locos}`,
+      `Train: ${show("mass", c.train.trailingMassKg, units)} in ${c.train.wagons} wagons, ${show("distance", c.train.lengthM, units)}`,
+      `Place: ${place}`,
+      `Rail: ${RAIL_WORD[c.conditions.rail]}, ${c.conditions.sand ? "with sand" : "without sand"}, ${show("temperature", c.conditions.temperatureC, units)}`,
+    ],
+    rail: c.conditions.rail,
+    sand: c.conditions.sand,
+  };
+}
+
+export default function AssistanceCheck(): JSX.Element {
+  const app = useApp();
+  const units = () => app.settings.settings().units;
+  const startCase = createMemo(() => {
+    const c = app.draft.checked();
+    return c.ok ? c.value : null;
+  });
+  const check = createAssistanceCheck({ workers: app.pool, startCase });
+  const info = createMemo(() => {
+    const c = startCase();
+    if (!c) return null;
+    const d = app.draft.draft;
+    const name = app.locations.choices().find((x) => x.id === d.noteId)?.name ?? app.locations.library().locations.get(d.noteId)?.name;
+    return caseInfo(c, unwrap(d), name, units(), app.draft.edited());
+  });
+  const tryOption = (o: AssistanceOptionData) => {
+    const a = check.answer();
+    if (!a) return;
+    for (const u of o.added) {
+      const p = u.position;
+      app.draft.set("locomotives", app.draft.draft.locomotives.length, {
+        profile: a.helper.id,
+        count: u.count,
+        position: typeof p === "string" ? p : "after",
+        afterWagon: typeof p === "string" ? Math.max(1, Math.floor(app.draft.draft.train.wagons / 2)) : p.afterWagon,
+      });
+    }
+    app.nav.go("start-plan");
+  };
+  return (
+    <AssistanceView
+      info={info()}
+      status={check.status()}
+      progress={check.progress()}
+      margins={check.margins()}
+      answer={check.answer()}
+      error={check.error()}
+      units={units()}
+      palette={PALETTES[app.theme()]}
+      canTry={(() => {
+        const a = check.answer();
+        return a !== null && app.locations.library().locomotives.has(a.helper.id);
+      })()}
+      onCancel={check.cancel}
+      onRetry={check.retry}
+      onEdit={() => app.nav.go("start-plan")}
+      onTry={tryOption}
+    />
+  );
+}

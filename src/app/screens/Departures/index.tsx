@@ -1,0 +1,107 @@
+/**
+ * Departures (wiring): read the picked files (saved location notes count as locations), check every row
+ * on the planner worker pool, sort by risk, export CSV. The view is View.tsx.
+ */
+import { createSignal, type JSX, type Signal } from "solid-js";
+import { builtinLibrary } from "../../../profiles/builtin.js";
+import type { Library } from "../../../profiles/library.js";
+import { useApp } from "../../context.js";
+import "../shared/dispatch.css";
+import { departuresRunFor } from "./createDeparturesRun.js";
+import { pickedFiles, readPickedDepartures, type PickedFile } from "./readFiles.js";
+import { byRisk, departuresCsv, summarise } from "./rows.js";
+import { DeparturesView, type LoadedFile } from "./View.js";
+
+/** The file and problem shown, kept with the run (per set of workers) while the app is open. */
+const screens = new WeakMap<object, { loaded: Signal<{ file: LoadedFile; picked: PickedFile[] } | null>; problem: Signal<string | null> }>();
+function screenState(workers: object) {
+  let s = screens.get(workers);
+  if (!s) {
+    s = { loaded: createSignal<{ file: LoadedFile; picked: PickedFile[] } | null>(null), problem: createSignal<string | null>(null) };
+    screens.set(workers, s);
+  }
+  return s;
+}
+
+/** A library in which a case may name any note saved on this device (the built-in one when the store cannot be read). */
+async function libraryForFiles(fallback: Library): Promise<Library> {
+  try {
+    const { libraryWithSavedNotes } = await import("../../../notes/index.js");
+    return await libraryWithSavedNotes(builtinLibrary());
+  } catch {
+    return fallback;
+  }
+}
+
+/** Save text as a file through the browser's download. */
+export function download(text: string, name: string, type: string): void {
+  const url = URL.createObjectURL(new Blob([text], { type }));
+  const a = document.createElement("a");
+  a.href = url;
+  a.download = name;
+  document.body.append(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+}
+
+export default function Departures(): JSX.Element {
+  const app = useApp();
+  const run = departuresRunFor(app.pool);
+  const {
+    loaded: [loaded, setLoaded],
+    problem: [problem, setProblem],
+  } = screenState(app.pool);
+  const [reading, setReading] = createSignal(false);
+  const rows = run.rows;
+
+  const load = async (picked: PickedFile[]) => {
+    setReading(true);
+    try {
+      const lib = await libraryForFiles(app.locations.library());
+      const r = readPickedDepartures(picked, lib);
+      if (!r.ok) {
+        setProblem(r.message);
+        return;
+      }
+      setProblem(null);
+      setLoaded({ file: { name: r.file, kind: r.kind, missing: r.missing, unused: r.unused }, picked });
+      run.start(r.departures);
+    } catch (e) {
+      setProblem(`The files could not be read: ${(e as Error).message || String(e)}`);
+    } finally {
+      setReading(false);
+    }
+  };
+
+  return (
+    <DeparturesView
+      file={loaded()?.file ?? null}
+      problem={problem()}
+      reading={reading()}
+      state={run.state()}
+      rows={byRisk(rows().filter((x) => x.error === undefined))}
+      bad={rows().filter((x) => x.error !== undefined)}
+      summary={summarise(rows())}
+      progress={run.progress()}
+      units={app.settings.settings().units}
+      onPick={(files) => void pickedFiles(files).then(load)}
+      onAddCases={(files) =>
+        void pickedFiles(files).then((more) => {
+          const before = loaded()?.picked ?? [];
+          const names = new Set(more.map((f) => f.name));
+          return load([...before.filter((f) => !names.has(f.name)), ...more]);
+        })
+      }
+      onDemo={() =>
+        void import("../../../../profiles/departures/demo-day.json").then((m) => load([{ name: "demo-day.json", text: JSON.stringify((m as { default: unknown }).default) }]))
+      }
+      onCancel={() => run.cancel()}
+      onRestart={() => {
+        const l = loaded();
+        if (l) void load(l.picked);
+      }}
+      onExport={() => download(departuresCsv(rows()), `${(loaded()?.file.name ?? "departures").replace(/\.(csv|json)$/i, "")}-check.csv`, "text/csv")}
+    />
+  );
+}

@@ -1,0 +1,120 @@
+/**
+ * The rows of a departures check: one per departure, answered by a `check` request or carrying the
+ * error of its line; sorted by risk for the screen (needs assistance first, then marginal, each by margin,
+ * then the rest); and the CSV export with `taut check --csv`'s columns and units (t, kN, s), in file order.
+ */
+import type { Verdict } from "../../../core/types.js";
+import { r } from "../../../profiles/report.js";
+import type { CheckAnswer } from "../../../worker/protocol.js";
+import { optionLineText } from "../shared/words.js";
+
+export interface DepartureRow {
+  id: string;
+  /** "line 4" or "[3]". */
+  where: string;
+  line?: number;
+  index?: number;
+  /** Position in the file (0-based), for file order. */
+  order: number;
+  rail?: string;
+  sand?: boolean;
+  trailingMassKg?: number;
+  /** The answer, once it is in. */
+  answer?: CheckAnswer;
+  /** Why the row has no answer: bad input, or the calculation failed. */
+  error?: string;
+  errorKind?: "input" | "internal";
+}
+
+const RANK: Record<Verdict, number> = { "needs-assistance": 0, marginal: 1, starts: 2 };
+
+/** Risk order: needs assistance, marginal, starts (each by margin, smallest first), then rows still waiting; bad rows last. */
+export function byRisk(rows: readonly DepartureRow[]): DepartureRow[] {
+  const rank = (x: DepartureRow) => (x.answer ? RANK[x.answer.verdict] : x.error ? 4 : 3);
+  return [...rows].sort((a, b) => rank(a) - rank(b) || (a.answer && b.answer ? a.answer.margin - b.answer.margin : 0) || a.order - b.order);
+}
+
+export interface DeparturesSummary {
+  total: number;
+  /** Rows that could be read (and so are checked). */
+  checkable: number;
+  /** Checked rows finished (answered, or failed in the calculation). */
+  answered: number;
+  needsAssistance: number;
+  marginal: number;
+  starts: number;
+  bad: number;
+}
+
+export function summarise(rows: readonly DepartureRow[]): DeparturesSummary {
+  const n = (f: (x: DepartureRow) => boolean) => rows.filter(f).length;
+  return {
+    total: rows.length,
+    checkable: n((x) => x.errorKind !== "input"),
+    answered: n((x) => x.answer !== undefined || x.errorKind === "internal"),
+    needsAssistance: n((x) => x.answer?.verdict === "needs-assistance"),
+    marginal: n((x) => x.answer?.verdict === "marginal"),
+    starts: n((x) => x.answer?.verdict === "starts"),
+    bad: n((x) => x.error !== undefined),
+  };
+}
+
+/** The columns of `taut check --csv` (INTERFACE.md: add freely, never rename). */
+export const CSV_HEADER = [
+  "id",
+  "line",
+  "index",
+  "rail",
+  "sand",
+  "trailingMass_t",
+  "verdict",
+  "reasons",
+  "margin",
+  "maxStartableMass_t",
+  "peakCouplerForce_kN",
+  "timeToTarget_s",
+  "assistance",
+  "assistanceVerdict",
+  "assistancePeakCouplerForce_kN",
+  "divideFirstWagons",
+  "divideFirstMass_t",
+  "error",
+] as const;
+
+/** A CSV field, quoted when needed (RFC 4180). */
+export function csvField(v: unknown): string {
+  const s = v === null || v === undefined ? "" : String(v);
+  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+
+/** The rows as CSV, in file order, rounded as the command line rounds them. */
+export function departuresCsv(rows: readonly DepartureRow[]): string {
+  const lines = [...rows]
+    .sort((a, b) => a.order - b.order)
+    .map((x) => {
+      const a = x.answer;
+      const opt = a?.assistance ?? null;
+      const div = a?.divide ?? null;
+      return [
+        x.id,
+        x.line,
+        x.index,
+        x.rail,
+        x.sand,
+        x.trailingMassKg === undefined ? undefined : Math.round(x.trailingMassKg / 1000),
+        a?.verdict,
+        a?.reasons.join(";"),
+        a ? r(a.margin, 3) : undefined,
+        a ? Math.floor(a.maxStartableMassKg / 1000) : undefined,
+        a ? r(a.peakCouplerForceN / 1000, 0) : undefined,
+        a ? (a.timeToTargetS === null ? null : r(a.timeToTargetS, 0)) : undefined,
+        opt && a ? optionLineText(opt, a.helper.id) : a ? "" : undefined,
+        opt?.verdict,
+        opt ? r(opt.peakCouplerForceN / 1000, 1) : undefined,
+        div?.wagons,
+        div ? Math.floor(div.trailingMassKg / 1000) : undefined,
+        x.error,
+      ];
+    });
+  return [CSV_HEADER, ...lines].map((l) => l.map(csvField).join(",")).join("\n") + "\n";
+}

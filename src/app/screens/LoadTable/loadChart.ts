@@ -1,0 +1,27 @@
+/** The load table as bars per rail condition (without and with sand) in the user's mass unit, with the train's own mass as a line. */
+import type { LoadTableRow } from "../../../core/loadTable.js";
+import { RAIL_CONDITIONS } from "../../../core/types.js";
+import type { ChartSpec } from "../../charts/spec.js";
+import { toDisplay, unitSymbol, type UnitSystem } from "../../format.js";
+import { barChart } from "../shared/bars.js";
+import { RAIL_WORD } from "../shared/words.js";
+
+export function loadChart(rows: readonly LoadTableRow[], trainMassKg: number | null, units: UnitSystem): ChartSpec | null {
+  if (rows.length === 0) return null;
+  const shown = (kg: number) => toDisplay("mass", kg, "kg", units);
+  const value = (rail: string, sand: boolean) => {
+    const r = rows.find((x) => x.rail === rail && x.sand === sand);
+    return r ? shown(r.maxTrailingMassKg) : Number.NaN;
+  };
+  const unit = unitSymbol("mass", units);
+  return barChart({
+    categories: RAIL_CONDITIONS.map((r) => RAIL_WORD[r]),
+    groups: [
+      { id: "no-sand", label: "Without sand", role: "second", values: RAIL_CONDITIONS.map((r) => value(r, false)) },
+      { id: "sand", label: "With sand", role: "main", values: RAIL_CONDITIONS.map((r) => value(r, true)) },
+    ],
+    lines: trainMassKg !== null ? [{ id: "train", label: `This train (${Math.round(shown(trainMassKg)).toLocaleString("en-GB")} ${unit})`, y: shown(trainMassKg), role: "need", dashed: true }] : [],
+    xTitle: "Rail condition",
+    yTitle: `Largest trailing mass (${unit})`,
+  });
+}

@@ -1,0 +1,59 @@
+/** A small RFC 4180 reader (no I/O, used by the command line and the app): quoted fields (with "" for a quote, and line breaks inside quotes), each record with its line number. */
+
+export interface CsvRecord {
+  /** Line of the file the record starts on, 1-based. */
+  line: number;
+  fields: string[];
+}
+
+/** Split CSV text into records; blank lines are skipped. Throws a RangeError naming the line of an unclosed quote. */
+export function parseCsv(text: string): CsvRecord[] {
+  const out: CsvRecord[] = [];
+  let fields: string[] = [];
+  let field = "";
+  let quoted = false;
+  let line = 1;
+  let start = 1;
+  let i = 0;
+  const s = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+  const endRecord = () => {
+    fields.push(field);
+    if (!(fields.length === 1 && fields[0]!.trim() === "")) out.push({ line: start, fields });
+    fields = [];
+    field = "";
+  };
+  while (i < s.length) {
+    const ch = s[i]!;
+    if (quoted) {
+      if (ch === '"') {
+        if (s[i + 1] === '"') {
+          field += '"';
+          i += 2;
+          continue;
+        }
+        quoted = false;
+      } else {
+        if (ch === "\n") line++;
+        field += ch;
+      }
+      i++;
+      continue;
+    }
+    if (ch === '"' && field.trim() === "") {
+      quoted = true;
+      field = "";
+    } else if (ch === ",") {
+      fields.push(field);
+      field = "";
+    } else if (ch === "\n" || ch === "\r") {
+      endRecord();
+      if (ch === "\r" && s[i + 1] === "\n") i++;
+      line++;
+      start = line;
+    } else field += ch;
+    i++;
+  }
+  if (quoted) throw new RangeError(`line ${start}: a quoted field is not closed`);
+  if (field !== "" || fields.length > 0) endRecord();
+  return out;
+}
