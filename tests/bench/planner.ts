@@ -9,6 +9,14 @@ import type { StartCase } from "../../src/core/types.js";
 import { longTrainCase } from "./dynamics.js";
 import { heading, line, median, timeRuns } from "./util.js";
 
+/** The INTERFACE.md example size: 40 wagons on the demo's Ashvale Loop, one 3000 kW unit, 1800 t, dry. */
+function fortyWagonCase(): StartCase {
+  const demo = builtinCaseJson[0] as Record<string, unknown>;
+  const r = parseStartCase({ ...demo, id: "forty", train: { ...(demo.train as object), trailingMass_t: 1800, wagons: 40, length_m: 560 } }, builtinLibrary());
+  if (!r.ok) throw new Error("forty-wagon case invalid");
+  return r.value;
+}
+
 function demoCases(): Array<[string, StartCase]> {
   const lib = builtinLibrary();
   return builtinCaseJson.map((j) => {
@@ -21,7 +29,11 @@ function demoCases(): Array<[string, StartCase]> {
 
 export function benchPlanner(): void {
   heading("Planner — one full plan (search + verifying re-run), median of 5 after warm-up");
-  const cases: Array<[string, StartCase]> = [...demoCases(), ["long train (150 wagons, 7000 t, 2 units, 2 ‰)", longTrainCase()]];
+  const cases: Array<[string, StartCase]> = [
+    ...demoCases(),
+    ["40 wagons, 1800 t at Ashvale Loop (1 unit)", fortyWagonCase()],
+    ["long train (150 wagons, 7000 t, 2 units, 2 ‰)", longTrainCase()],
+  ];
   for (const [name, c] of cases) {
     const { times, last } = timeRuns(() => planStart(c, { skipMassSearch: true }), 5, 1);
     line(name, `${median(times).toFixed(0)} ms`, `${last.verdict}; ${last.steps.length} steps; targets: ≤ 300 ms at 40 wagons, ≤ 1.5 s at 150`);
