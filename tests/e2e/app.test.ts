@@ -3,25 +3,18 @@
  * accessibility (axe-core), screenshots at 1280×800 and 800×1280, offline reload through the service
  * worker, and no console errors. Timing figures are printed, not asserted.
  */
-import { mkdirSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
-import { createRequire } from "node:module";
+import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { fileURLToPath } from "node:url";
-import { chromium, type BrowserContext, type Page } from "playwright-core";
+import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { axeSeriousOrCritical, LANDSCAPE, launch, PORTRAIT, SHOTS, smallTargets } from "./browser.js";
 
-const require = createRequire(import.meta.url);
-const AXE = readFileSync(require.resolve("axe-core/axe.min.js"), "utf8");
-const SHOTS = fileURLToPath(new URL("../../test-results/screenshots/", import.meta.url));
-const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
-const LANDSCAPE = { width: 1280, height: 800 };
-const PORTRAIT = { width: 800, height: 1280 };
 
 let context: BrowserContext;
 let page: Page;
 let profile: string;
-const problems: string[] = [];
+let problems: string[] = [];
 const base = inject("baseURL");
 
 /** Records long main-thread tasks (≥ 50 ms) with their start times, from the first byte on. */
@@ -48,47 +41,10 @@ async function waitForCurrentPlan(): Promise<void> {
   await page.waitForFunction(() => !document.querySelector('.result[aria-busy="true"]'), undefined, { timeout: 30_000 });
 }
 
-/** Every visible control smaller than 48 × 48 CSS px (gloved hands), as "label: control (w×h)". */
-async function smallTargets(label: string): Promise<string[]> {
-  const small = await page.evaluate(() => {
-    const out: string[] = [];
-    for (const el of document.querySelectorAll<HTMLElement>("button, a[href], input, select, textarea, [role=radio], [role=tab]")) {
-      const r = el.getBoundingClientRect();
-      if (r.width === 0 || r.height === 0 || getComputedStyle(el).visibility === "hidden") continue;
-      if (r.width < 47.5 || r.height < 47.5) out.push(`${el.tagName.toLowerCase()} "${(el.getAttribute("aria-label") ?? el.textContent ?? "").trim().slice(0, 40)}" (${Math.round(r.width)}×${Math.round(r.height)})`);
-    }
-    return out;
-  });
-  return small.map((s) => `${label}: touch target under 48 px: ${s}`);
-}
-
-async function axeSeriousOrCritical(label: string): Promise<string[]> {
-  const has = await page.evaluate(() => typeof (window as unknown as { axe?: unknown }).axe !== "undefined");
-  if (!has) await page.addScriptTag({ content: AXE });
-  const found = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: Array<{ id: string; impact: string; help: string; nodes: Array<{ target: string[] }> }> }> } }).axe;
-    const r = await axe.run(document, { resultTypes: ["violations"] });
-    return r.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join("; ")}`);
-  });
-  return found.map((f) => `${label}: ${f}`);
-}
-
 beforeAll(async () => {
-  mkdirSync(SHOTS, { recursive: true });
   profile = mkdtempSync(join(tmpdir(), "taut-chromium-"));
-  context = await chromium.launchPersistentContext(profile, {
-    executablePath: inject("chromiumPath"),
-    headless: true,
-    args: ARGS,
-    serviceWorkers: "allow",
-    viewport: LANDSCAPE,
-  });
+  ({ context, page, problems } = await launch(inject("chromiumPath"), profile, { serviceWorkers: "allow" }));
   await context.addInitScript({ content: LONG_TASKS });
-  page = context.pages()[0] ?? (await context.newPage());
-  page.on("console", (m) => {
-    if (m.type() === "error") problems.push(`console: ${m.text()}`);
-  });
-  page.on("pageerror", (e) => problems.push(`page error: ${e.message}`));
 });
 
 afterAll(async () => {
@@ -158,7 +114,7 @@ describe("Taut in Chromium", () => {
         await shot("slip-card-landscape-day");
         await page.setViewportSize(PORTRAIT);
         await shot("slip-card-portrait-day");
-        problems.push(...(await axeSeriousOrCritical("If wheels slip")));
+        problems.push(...(await axeSeriousOrCritical(page, "If wheels slip")));
         await page.setViewportSize(LANDSCAPE);
       }
       await dialog.getByRole("button", { name: "Close" }).click();
@@ -167,7 +123,7 @@ describe("Taut in Chromium", () => {
         await shot("cab-steps-landscape-day");
         await page.setViewportSize(PORTRAIT);
         await shot("cab-steps-portrait-day");
-        problems.push(...(await axeSeriousOrCritical("Cab steps")));
+        problems.push(...(await axeSeriousOrCritical(page, "Cab steps")));
         await page.setViewportSize(LANDSCAPE);
       }
       if (i < cards - 1) await page.getByRole("button", { name: "Next" }).click();
@@ -185,13 +141,13 @@ describe("Taut in Chromium", () => {
       const t = theme.toLowerCase();
       await page.setViewportSize(LANDSCAPE);
       await shot(`settings-landscape-${t}`);
-      problems.push(...(await axeSeriousOrCritical(`Settings (${t})`)));
-      problems.push(...(await smallTargets(`Settings, landscape (${t})`)));
+      problems.push(...(await axeSeriousOrCritical(page, `Settings (${t})`)));
+      problems.push(...(await smallTargets(page, `Settings, landscape (${t})`)));
       await openScreen("Start plan");
       await waitForCurrentPlan();
       await shot(`start-plan-landscape-${t}`);
-      problems.push(...(await axeSeriousOrCritical(`Start plan (${t})`)));
-      problems.push(...(await smallTargets(`Start plan, landscape (${t})`)));
+      problems.push(...(await axeSeriousOrCritical(page, `Start plan (${t})`)));
+      problems.push(...(await smallTargets(page, `Start plan, landscape (${t})`)));
       await page.locator(".pane-plan").evaluate((el) => el.scrollTo(0, el.scrollHeight));
       await page.waitForFunction(() => [...document.querySelectorAll(".chart-box")].every((b) => (b as HTMLElement).dataset.drawn === "yes"), undefined, { timeout: 15_000 });
       await page.waitForTimeout(300); // the worker's last frame reaches the screen
@@ -207,14 +163,14 @@ describe("Taut in Chromium", () => {
       await shot(`start-plan-portrait-${t}`);
       await page.getByRole("tab", { name: /Inputs/ }).click();
       await shot(`start-plan-inputs-portrait-${t}`);
-      problems.push(...(await axeSeriousOrCritical(`Start plan inputs, portrait (${t})`)));
-      problems.push(...(await smallTargets(`Start plan inputs, portrait (${t})`)));
+      problems.push(...(await axeSeriousOrCritical(page, `Start plan inputs, portrait (${t})`)));
+      problems.push(...(await smallTargets(page, `Start plan inputs, portrait (${t})`)));
       await page.locator(".pane-inputs").evaluate((el) => el.scrollTo(0, el.scrollHeight));
       await shot(`start-plan-inputs-end-portrait-${t}`);
       await page.getByRole("tab", { name: /Plan/ }).click();
       await page.getByRole("button", { name: "Open Cab steps" }).click();
       await shot(`cab-steps-portrait-${t}`);
-      problems.push(...(await smallTargets(`Cab steps, portrait (${t})`)));
+      problems.push(...(await smallTargets(page, `Cab steps, portrait (${t})`)));
       await page.setViewportSize(LANDSCAPE);
       await shot(`cab-steps-landscape-${t}`);
       await page.getByRole("button", { name: "Start plan" }).first().click();

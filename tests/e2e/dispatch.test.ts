@@ -5,65 +5,33 @@
  * at 1280×800 and 800×1280 in the day and night themes, axe-core with no serious or critical violations, touch
  * targets of at least 48 px, and no console errors.
  */
-import { mkdirSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
-import { createRequire } from "node:module";
+import { mkdtempSync, readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { chromium, type BrowserContext, type Page } from "playwright-core";
+import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { axeSeriousOrCritical, LANDSCAPE, launch, PORTRAIT, SHOTS, smallTargets } from "./browser.js";
 
-const require = createRequire(import.meta.url);
-const AXE = readFileSync(require.resolve("axe-core/axe.min.js"), "utf8");
-const SHOTS = fileURLToPath(new URL("../../test-results/screenshots/", import.meta.url));
 const DEMO_DAY = fileURLToPath(new URL("../../profiles/departures/demo-day.json", import.meta.url));
-const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
-const LANDSCAPE = { width: 1280, height: 800 };
-const PORTRAIT = { width: 800, height: 1280 };
 
 let context: BrowserContext;
 let page: Page;
 let work: string;
-const problems: string[] = [];
+let problems: string[] = [];
 const base = inject("baseURL");
 
 const shot = (name: string) => page.screenshot({ path: join(SHOTS, `${name}.png`) });
 const openScreen = (name: string) => page.getByRole("link", { name, exact: true }).click();
 const toTop = () => page.locator(".screen").evaluate((el) => el.scrollTo(0, 0));
 
-async function axeSeriousOrCritical(label: string): Promise<string[]> {
-  const has = await page.evaluate(() => typeof (window as unknown as { axe?: unknown }).axe !== "undefined");
-  if (!has) await page.addScriptTag({ content: AXE });
-  const found = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: Array<{ id: string; impact: string; help: string; nodes: Array<{ target: string[] }> }> }> } }).axe;
-    const r = await axe.run(document, { resultTypes: ["violations"] });
-    return r.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join("; ")}`);
-  });
-  return found.map((f) => `${label}: ${f}`);
-}
-
-/** Visible controls smaller than 48 × 48 CSS px (file inputs hidden behind their buttons are not targets). */
-async function smallTargets(label: string): Promise<string[]> {
-  const small = await page.evaluate(() => {
-    const out: string[] = [];
-    for (const el of document.querySelectorAll<HTMLElement>("button, a[href], input, select, textarea, [role=radio], [role=tab]")) {
-      if (el.classList.contains("visually-hidden")) continue;
-      const r = el.getBoundingClientRect();
-      if (r.width === 0 || r.height === 0 || getComputedStyle(el).visibility === "hidden") continue;
-      if (r.width < 47.5 || r.height < 47.5) out.push(`${el.tagName.toLowerCase()} "${(el.getAttribute("aria-label") ?? el.textContent ?? "").trim().slice(0, 40)}" (${Math.round(r.width)}×${Math.round(r.height)})`);
-    }
-    return out;
-  });
-  return small.map((s) => `${label}: touch target under 48 px: ${s}`);
-}
-
 /** Screenshots of the screen at the top in both orientations (and one further down), with the checks. */
 async function inBothOrientations(name: string, theme: string, further = 0): Promise<void> {
   await page.setViewportSize(LANDSCAPE);
   await toTop();
   await shot(`${name}-landscape-${theme}`);
-  problems.push(...(await axeSeriousOrCritical(`${name}, landscape (${theme})`)));
-  problems.push(...(await smallTargets(`${name}, landscape (${theme})`)));
+  problems.push(...(await axeSeriousOrCritical(page, `${name}, landscape (${theme})`)));
+  problems.push(...(await smallTargets(page, `${name}, landscape (${theme})`)));
   if (further > 0) {
     await page.locator(".screen").evaluate((el, y) => el.scrollTo(0, y), further);
     await shot(`${name}-landscape-${theme}-2`);
@@ -71,7 +39,7 @@ async function inBothOrientations(name: string, theme: string, further = 0): Pro
   await page.setViewportSize(PORTRAIT);
   await toTop();
   await shot(`${name}-portrait-${theme}`);
-  problems.push(...(await smallTargets(`${name}, portrait (${theme})`)));
+  problems.push(...(await smallTargets(page, `${name}, portrait (${theme})`)));
   expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth + 1)).toBe(true);
   if (further > 0) {
     await page.locator(".screen").evaluate((el, y) => el.scrollTo(0, y), further * 1.5);
@@ -87,14 +55,8 @@ async function waitForCharts(): Promise<void> {
 }
 
 beforeAll(async () => {
-  mkdirSync(SHOTS, { recursive: true });
   work = mkdtempSync(join(tmpdir(), "taut-dispatch-e2e-"));
-  context = await chromium.launchPersistentContext(join(work, "profile"), { executablePath: inject("chromiumPath"), headless: true, args: ARGS, viewport: LANDSCAPE, acceptDownloads: true });
-  page = context.pages()[0] ?? (await context.newPage());
-  page.on("console", (m) => {
-    if (m.type() === "error") problems.push(`console: ${m.text()}`);
-  });
-  page.on("pageerror", (e) => problems.push(`page error: ${e.message}`));
+  ({ context, page, problems } = await launch(inject("chromiumPath"), join(work, "profile"), { acceptDownloads: true }));
 });
 
 afterAll(async () => {

@@ -5,27 +5,20 @@
  * on A4 and on Letter; axe-core finds no serious or critical violations; screenshots at 1280×800 and
  * 800×1280 saved as test artefacts; no console errors.
  */
-import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { createRequire } from "node:module";
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { fileURLToPath } from "node:url";
-import { chromium, type BrowserContext, type Page } from "playwright-core";
+import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { axeSeriousOrCritical, LANDSCAPE, launch, PORTRAIT, SHOTS } from "./browser.js";
 import { readNotesText, type NotesBundleFile } from "../../src/profiles/notes.js";
 
-const require = createRequire(import.meta.url);
-const AXE = readFileSync(require.resolve("axe-core/axe.min.js"), "utf8");
-const SHOTS = fileURLToPath(new URL("../../test-results/screenshots/", import.meta.url));
-const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
-const LANDSCAPE = { width: 1280, height: 800 };
-const PORTRAIT = { width: 800, height: 1280 };
 const NAME = "Thornbury up loop, exit signal (e2e)";
 
 let context: BrowserContext;
 let page: Page;
 let work: string;
-const problems: string[] = [];
+let problems: string[] = [];
 const base = inject("baseURL");
 
 const shot = (name: string) => page.screenshot({ path: join(SHOTS, `${name}.png`) });
@@ -79,32 +72,9 @@ async function pdfText(data: Uint8Array): Promise<string[]> {
   return pages;
 }
 
-async function axeSeriousOrCritical(label: string): Promise<string[]> {
-  const has = await page.evaluate(() => typeof (window as unknown as { axe?: unknown }).axe !== "undefined");
-  if (!has) await page.addScriptTag({ content: AXE });
-  const found = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: Array<{ id: string; impact: string; help: string; nodes: Array<{ target: string[] }> }> }> } }).axe;
-    const r = await axe.run(document, { resultTypes: ["violations"] });
-    return r.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join("; ")}`);
-  });
-  return found.map((f) => `${label}: ${f}`);
-}
-
 beforeAll(async () => {
-  mkdirSync(SHOTS, { recursive: true });
   work = mkdtempSync(join(tmpdir(), "taut-notes-e2e-"));
-  context = await chromium.launchPersistentContext(join(work, "profile"), {
-    executablePath: inject("chromiumPath"),
-    headless: true,
-    args: ARGS,
-    viewport: LANDSCAPE,
-    acceptDownloads: true,
-  });
-  page = context.pages()[0] ?? (await context.newPage());
-  page.on("console", (m) => {
-    if (m.type() === "error") problems.push(`console: ${m.text()}`);
-  });
-  page.on("pageerror", (e) => problems.push(`page error: ${e.message}`));
+  ({ context, page, problems } = await launch(inject("chromiumPath"), join(work, "profile"), { acceptDownloads: true }));
 });
 
 afterAll(async () => {
@@ -117,7 +87,7 @@ describe("Location notes in the browser", () => {
     await openNotes();
     expect(await names()).toEqual(expect.arrayContaining([expect.stringContaining("(illustrative)")]));
     await shot("notes-library-landscape");
-    expect(await axeSeriousOrCritical("library")).toEqual([]);
+    expect(await axeSeriousOrCritical(page, "library")).toEqual([]);
 
     await page.getByRole("button", { name: "New note" }).click();
     await (await field("name")).fill(NAME);
@@ -137,7 +107,7 @@ describe("Location notes in the browser", () => {
     await expect.poll(() => page.locator(".notes-chart .chart-caption").textContent()).toContain("Stretched from end to end");
     await page.locator(".notes-editor .notes-loadtable").waitFor({ timeout: 120_000 });
     await shot("notes-editor-landscape");
-    expect(await axeSeriousOrCritical("editor")).toEqual([]);
+    expect(await axeSeriousOrCritical(page, "editor")).toEqual([]);
     await page.getByRole("button", { name: "Save note" }).click();
     await page.getByText(`Saved "${NAME}".`).waitFor();
 
@@ -216,7 +186,7 @@ describe("Location notes in the browser", () => {
     // No sideways scrolling of the screen in portrait.
     expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth + 1)).toBe(true);
     await shot("notes-editor-portrait");
-    expect(await axeSeriousOrCritical("editor portrait")).toEqual([]);
+    expect(await axeSeriousOrCritical(page, "editor portrait")).toEqual([]);
     await page.getByRole("button", { name: "Card / print" }).click();
     await page.locator(".notes-card-preview .notes-loadtable").waitFor({ timeout: 120_000 });
     await shot("notes-card-portrait");
