@@ -18,12 +18,4 @@ export function pct(x: number, decimals = 0): string {
   return `${(x * 100).toFixed(decimals)}%`;
 }
 
-/** Quote a CSV field when needed (RFC 4180). */
-export function csvField(v: unknown): string {
-  const s = v === null || v === undefined ? "" : String(v);
-  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-}
-
-export function csv(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<unknown>>): string {
-  return [header, ...rows].map((r) => r.map(csvField).join(",")).join("\n") + "\n";
-}
+export { toCsv as csv } from "../profiles/csv.js";

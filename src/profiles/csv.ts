@@ -1,4 +1,4 @@
-/** A small RFC 4180 reader (no I/O, used by the command line and the app): quoted fields (with "" for a quote, and line breaks inside quotes), each record with its line number. */
+/** A small RFC 4180 reader and writer (no I/O, used by the command line and the app): quoted fields (with "" for a quote, and line breaks inside quotes), each record with its line number. */
 
 export interface CsvRecord {
   /** Line of the file the record starts on, 1-based. */
@@ -57,3 +57,36 @@ export function parseCsv(text: string): CsvRecord[] {
   if (field !== "" || fields.length > 0) endRecord();
   return out;
 }
+
+/** A CSV field, quoted when needed (RFC 4180). */
+export function csvField(v: unknown): string {
+  const s = v === null || v === undefined ? "" : String(v);
+  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+
+/** A header and rows as CSV text, one record a line, ending with a line break. */
+export function toCsv(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<unknown>>): string {
+  return [header, ...rows].map((r) => r.map(csvField).join(",")).join("\n") + "\n";
+}
+
+/** The columns of `taut check --csv` and of the app's Departures export (INTERFACE.md: add freely, never rename). */
+export const CHECK_CSV_HEADER = [
+  "id",
+  "line",
+  "index",
+  "rail",
+  "sand",
+  "trailingMass_t",
+  "verdict",
+  "reasons",
+  "margin",
+  "maxStartableMass_t",
+  "peakCouplerForce_kN",
+  "timeToTarget_s",
+  "assistance",
+  "assistanceVerdict",
+  "assistancePeakCouplerForce_kN",
+  "divideFirstWagons",
+  "divideFirstMass_t",
+  "error",
+] as const;

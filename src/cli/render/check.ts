@@ -1,5 +1,6 @@
 /** Readable and CSV forms of a departures check. */
 import type { DepartureRow } from "../batch/checkDepartures.js";
+import { CHECK_CSV_HEADER } from "../../profiles/csv.js";
 import { csv, num, textTable } from "../table.js";
 import { divideLine, optionLine, VERDICT_WORDS } from "./assistance.js";
 import { wrap } from "./wrap.js";
@@ -75,26 +76,6 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
   return lines.join("\n");
 }
 
-export const CHECK_CSV_HEADER = [
-  "id",
-  "line",
-  "index",
-  "rail",
-  "sand",
-  "trailingMass_t",
-  "verdict",
-  "reasons",
-  "margin",
-  "maxStartableMass_t",
-  "peakCouplerForce_kN",
-  "timeToTarget_s",
-  "assistance",
-  "assistanceVerdict",
-  "assistancePeakCouplerForce_kN",
-  "divideFirstWagons",
-  "divideFirstMass_t",
-  "error",
-] as const;
 
 export function checkCsv(rows: readonly DepartureRow[]): string {
   return csv(

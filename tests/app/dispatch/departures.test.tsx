@@ -7,7 +7,7 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import Departures from "../../../src/app/screens/Departures/index.js";
-import { CSV_HEADER } from "../../../src/app/screens/Departures/rows.js";
+import { CHECK_CSV_HEADER } from "../../../src/profiles/csv.js";
 import type { StartCase } from "../../../src/core/types.js";
 import type { CheckAnswer } from "../../../src/worker/protocol.js";
 import { renderWithApp } from "../harness.js";
@@ -115,7 +115,7 @@ describe("Departures", () => {
     fireEvent.click(exportButton);
     await waitFor(() => expect(saved).toHaveLength(1));
     const lines = saved[0]!.trimEnd().split("\n");
-    expect(lines[0]).toBe(CSV_HEADER.join(","));
+    expect(lines[0]).toBe(CHECK_CSV_HEADER.join(","));
     expect(lines.slice(1).map((l) => l.split(",")[0])).toEqual(["d-dry", "d-wet", "d-broken", "d-leaves", "d-damp", "d-frost"]);
     expect(lines[2]).toBe('d-wet,,1,wet,false,1400,needs-assistance,adhesion,0.98,460,400,80,"2 × illustrative-6axle-3000 (1 after wagon 9, 1 at the rear)",starts,301.2,,,');
     expect(lines[4]).toBe("d-leaves,,3,leaves,false,1400,needs-assistance,adhesion,0.44,0,400,80,,,,8,293,");

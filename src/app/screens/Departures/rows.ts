@@ -4,6 +4,7 @@
  * then the rest); and the CSV export with `taut check --csv`'s columns and units (t, kN, s), in file order.
  */
 import type { Verdict } from "../../../core/types.js";
+import { CHECK_CSV_HEADER, toCsv } from "../../../profiles/csv.js";
 import { r } from "../../../profiles/report.js";
 import type { CheckAnswer } from "../../../worker/protocol.js";
 import { optionLineText } from "../shared/words.js";
@@ -59,34 +60,6 @@ export function summarise(rows: readonly DepartureRow[]): DeparturesSummary {
   };
 }
 
-/** The columns of `taut check --csv` (INTERFACE.md: add freely, never rename). */
-export const CSV_HEADER = [
-  "id",
-  "line",
-  "index",
-  "rail",
-  "sand",
-  "trailingMass_t",
-  "verdict",
-  "reasons",
-  "margin",
-  "maxStartableMass_t",
-  "peakCouplerForce_kN",
-  "timeToTarget_s",
-  "assistance",
-  "assistanceVerdict",
-  "assistancePeakCouplerForce_kN",
-  "divideFirstWagons",
-  "divideFirstMass_t",
-  "error",
-] as const;
-
-/** A CSV field, quoted when needed (RFC 4180). */
-export function csvField(v: unknown): string {
-  const s = v === null || v === undefined ? "" : String(v);
-  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-}
-
 /** The rows as CSV, in file order, rounded as the command line rounds them. */
 export function departuresCsv(rows: readonly DepartureRow[]): string {
   const lines = [...rows]
@@ -116,5 +89,5 @@ export function departuresCsv(rows: readonly DepartureRow[]): string {
         x.error,
       ];
     });
-  return [CSV_HEADER, ...lines].map((l) => l.map(csvField).join(",")).join("\n") + "\n";
+  return toCsv(CHECK_CSV_HEADER, lines);
 }
