@@ -6,7 +6,7 @@
  */
 import { For, Show, type JSX } from "solid-js";
 import type { ConditionMargin } from "../../../core/conditionMargins.js";
-import { RAIL_CONDITIONS, type RailCondition, type Reason } from "../../../core/types.js";
+import type { RailCondition, Reason } from "../../../core/types.js";
 import type { AssistanceAnswer, AssistanceOptionData } from "../../../worker/protocol.js";
 import type { ChartPalette } from "../../charts/palette.js";
 import { Chart } from "../../components/Chart.js";
@@ -14,9 +14,10 @@ import { Icon } from "../../components/Icon.js";
 import { REASON_LINE, VerdictBanner, VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
 import { duration, localiseText, margin, show, type UnitSystem } from "../../format.js";
 import { Cautions } from "../shared/Cautions.js";
-import { divideLine, optionHeadline, placeWords, RAIL_WORD, REASON_SHORT } from "../shared/words.js";
+import { divideLine, optionHeadline, placeWords, REASON_SHORT } from "../shared/words.js";
 import type { CheckStatus } from "./createAssistanceCheck.js";
 import { marginChart, MARGIN_AXIS_TOP } from "./marginChart.js";
+import { RailSandTable } from "../shared/RailSandTable.js";
 
 export interface CaseInfo {
   /** The case's name, or a made-up one. */
@@ -287,27 +288,7 @@ function MarginsPanel(props: { rows: ConditionMargin[] | null; info: CaseInfo | 
               empty="No margins to show."
               height={260}
             />
-            <table class="dispatch-table margins-table">
-              <caption>Verdict and smallest margin; what limits first in brackets. The outlined cell is this train's forecast.</caption>
-              <thead>
-                <tr>
-                  <th scope="col">Rail</th>
-                  <th scope="col">Without sand</th>
-                  <th scope="col">With sand</th>
-                </tr>
-              </thead>
-              <tbody>
-                <For each={RAIL_CONDITIONS}>
-                  {(rail) => (
-                    <tr>
-                      <th scope="row">{RAIL_WORD[rail]}</th>
-                      {cell(rail, false)}
-                      {cell(rail, true)}
-                    </tr>
-                  )}
-                </For>
-              </tbody>
-            </table>
+            <RailSandTable class="dispatch-table margins-table" caption="Verdict and smallest margin; what limits first in brackets. The outlined cell is this train's forecast." cell={cell} />
           </>
         )}
       </Show>

@@ -5,7 +5,7 @@
  */
 import { For, Show, type JSX } from "solid-js";
 import type { LoadTableRow } from "../../../core/loadTable.js";
-import { RAIL_CONDITIONS, type RailCondition } from "../../../core/types.js";
+import type { RailCondition } from "../../../core/types.js";
 import type { ChartPalette } from "../../charts/palette.js";
 import { Chart } from "../../components/Chart.js";
 import { Icon } from "../../components/Icon.js";
@@ -14,9 +14,9 @@ import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { duration, show, type UnitSystem } from "../../format.js";
 import type { LocationChoice } from "../../locations.js";
 import { Cautions } from "../shared/Cautions.js";
-import { RAIL_WORD } from "../shared/words.js";
 import type { TableStatus } from "./createLoadTableRun.js";
 import { loadChart } from "./loadChart.js";
+import { RailSandTable } from "../shared/RailSandTable.js";
 
 export interface Option {
   value: string;
@@ -157,30 +157,16 @@ export function LoadTableView(props: LoadTableViewProps): JSX.Element {
               <p>Cancelled: {props.rows.length} of 12 figures found.</p>
             </Show>
             <Show when={!props.problem}>
-              <table class="dispatch-table load-table-grid">
-                <caption>
-                  Each figure is the Start plan's own verdict at its limit: a train just lighter starts, one just heavier does not.
-                  {props.trainMassKg !== null ? ` This train (${show("mass", props.trainMassKg, props.units)}) starts where it is marked.` : ""}
-                </caption>
-                <thead>
-                  <tr>
-                    <th scope="col">Rail</th>
-                    <th scope="col">Without sand</th>
-                    <th scope="col">With sand</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  <For each={RAIL_CONDITIONS}>
-                    {(rail) => (
-                      <tr>
-                        <th scope="row">{RAIL_WORD[rail]}</th>
-                        {cell(rail, false)}
-                        {cell(rail, true)}
-                      </tr>
-                    )}
-                  </For>
-                </tbody>
-              </table>
+              <RailSandTable
+                class="dispatch-table load-table-grid"
+                caption={
+                  <>
+                    Each figure is the Start plan's own verdict at its limit: a train just lighter starts, one just heavier does not.
+                    {props.trainMassKg !== null ? ` This train (${show("mass", props.trainMassKg, props.units)}) starts where it is marked.` : ""}
+                  </>
+                }
+                cell={cell}
+              />
               <Show when={props.rows.some((r) => r.maxTrailingMassKg <= 0)}>
                 <p class="muted">"none": not even a light train of these wagons is expected to start in that condition with these locomotives.</p>
               </Show>

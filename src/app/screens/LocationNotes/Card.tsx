@@ -6,7 +6,7 @@
 import { For, Show, type JSX } from "solid-js";
 import { STANDARD_CAUTIONS } from "../../../core/cautions.js";
 import type { LoadTableRow } from "../../../core/loadTable.js";
-import { RAIL_CONDITIONS, type RailCondition } from "../../../core/types.js";
+import type { RailCondition } from "../../../core/types.js";
 import { latestRevision } from "../../../profiles/notes.js";
 import type { LocationNoteFile } from "../../../profiles/schemas.js";
 import { DEFAULT_REFERENCE_TEMPERATURE_C, type ReferenceSummary } from "../../../profiles/referenceTrain.js";
@@ -16,8 +16,9 @@ import type { NoteFigures } from "./figures.js";
 import type { LoadTableOutcome } from "./loadTableRunner.js";
 import { slackSentence, type ProfileModel } from "./profileModel.js";
 import { ProfileSketch } from "./ProfileSketch.js";
+import { RailSandTable } from "../shared/RailSandTable.js";
+import { RAIL_WORD } from "../shared/words.js";
 
-export const RAIL_WORD: Record<RailCondition, string> = { dry: "Dry", damp: "Damp", wet: "Wet", frost: "Frost", leaves: "Leaves", greasy: "Greasy" };
 const SEASON_WORD = { spring: "Spring", summer: "Summer", autumn: "Autumn", winter: "Winter" } as const;
 
 export interface CardProps {
@@ -42,29 +43,7 @@ export function massCell(row: LoadTableRow | undefined, units: UnitSystem): stri
 
 export function LoadTableGrid(props: { rows: readonly LoadTableRow[]; units: UnitSystem; caption: string }): JSX.Element {
   const find = (rail: RailCondition, sand: boolean) => props.rows.find((r) => r.rail === rail && r.sand === sand);
-  return (
-    <table class="notes-loadtable">
-      <caption>{props.caption}</caption>
-      <thead>
-        <tr>
-          <th scope="col">Rail</th>
-          <th scope="col">Without sand</th>
-          <th scope="col">With sand</th>
-        </tr>
-      </thead>
-      <tbody>
-        <For each={RAIL_CONDITIONS}>
-          {(rail) => (
-            <tr>
-              <th scope="row">{RAIL_WORD[rail]}</th>
-              <td>{massCell(find(rail, false), props.units)}</td>
-              <td>{massCell(find(rail, true), props.units)}</td>
-            </tr>
-          )}
-        </For>
-      </tbody>
-    </table>
-  );
+  return <RailSandTable class="notes-loadtable" caption={props.caption} cell={(rail, sand) => <td>{massCell(find(rail, sand), props.units)}</td>} />;
 }
 
 /** A worked-out load table, or why it could not be worked out. */

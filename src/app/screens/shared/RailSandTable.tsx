@@ -1,0 +1,35 @@
+/** The rail condition × sand grid the load table, the margins per condition and the note's card all use. */
+import { For, type JSX } from "solid-js";
+import { RAIL_CONDITIONS, type RailCondition } from "../../../core/types.js";
+import { RAIL_WORD } from "./words.js";
+
+export function RailSandTable(props: {
+  class: string;
+  caption: JSX.Element;
+  /** The `<td>` for one rail condition, without or with sand. */
+  cell: (rail: RailCondition, sand: boolean) => JSX.Element;
+}): JSX.Element {
+  return (
+    <table class={props.class}>
+      <caption>{props.caption}</caption>
+      <thead>
+        <tr>
+          <th scope="col">Rail</th>
+          <th scope="col">Without sand</th>
+          <th scope="col">With sand</th>
+        </tr>
+      </thead>
+      <tbody>
+        <For each={RAIL_CONDITIONS}>
+          {(rail) => (
+            <tr>
+              <th scope="row">{RAIL_WORD[rail]}</th>
+              {props.cell(rail, false)}
+              {props.cell(rail, true)}
+            </tr>
+          )}
+        </For>
+      </tbody>
+    </table>
+  );
+}
