@@ -7,11 +7,10 @@ import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { modelFromCase } from "../../src/core/trainModel.js";
 import { sequenceControls, simulate } from "../../src/core/simulate.js";
-import { engineHistory, maxDeviationOverPeak, odexHistory, peakForceError } from "../core/helpers/compare.js";
+import { engineHistory, maxDeviationOverPeak, odexHistory, peakForceError, rollingChain } from "../core/helpers/compare.js";
 import type { RefChain } from "../core/helpers/referenceChain.js";
 import { heading, line, median, memoryMB, timeRuns } from "./util.js";
 
-const G = 9.80665;
 
 export function longTrainCase() {
   const r = parseStartCase(
@@ -29,31 +28,10 @@ export function longTrainCase() {
   return r.value;
 }
 
-/** The same 151-vehicle chain, as plain equations both integrators can take (rolling, slack bunched). */
+/** A 151-vehicle chain, as plain equations both integrators can take (rolling, slack bunched). */
 function referenceChain(n = 151): RefChain {
   const masses = [138_000, ...Array.from({ length: n - 1 }, (_, i) => 45_000 + (i % 5) * 5_000)];
-  return {
-    masses,
-    effMasses: masses.map((m, i) => m * (i === 0 ? 1.15 : 1.03)),
-    davisA: masses.map((m) => 0.0011 * m * G),
-    davisB: masses.map((m) => 0.00002 * m),
-    davisC: masses.map(() => 6),
-    breakawayExcess: masses.map((m) => 0.0013 * m * G),
-    fadeSpeed: 2 / 3.6,
-    sinTheta: 0,
-    halfSlack: 0.025,
-    ext0: Array.from({ length: n - 1 }, () => -0.025),
-    travel: 0.148,
-    rated: 2.52e6,
-    linear: 0.3,
-    endStopK: 2e8,
-    damping: 5e4,
-    loco: 0,
-    effortN: 460_000,
-    powerW: 2.46e6,
-    riseS: 1.5,
-    fallS: 0.5,
-  };
+  return rollingChain(masses, { halfSlackM: 0.025, effortN: 460_000, powerW: 2.46e6 });
 }
 
 export function benchDynamics(opts: { compare: boolean }): void {
