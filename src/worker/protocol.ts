@@ -14,8 +14,8 @@
  * - `check`: one departure as `taut check` answers it: verdict, reasons, margin, largest startable mass and
  *   the cheapest assistance (or the divided train).
  */
-import type { AddedUnits } from "../core/assistPlacement.js";
-import type { RejectedOption } from "../core/assistance.js";
+import type { AssistanceOption, RejectedOption } from "../core/assistance.js";
+import type { DividedTrain } from "../core/divideTrain.js";
 import type { ConditionMargin } from "../core/conditionMargins.js";
 import type { LoadTableRow } from "../core/loadTable.js";
 import type { PlanOptions, PlanResult } from "../core/planner/types.js";
@@ -43,40 +43,18 @@ export interface PlanSummary {
 }
 
 /** An assistance option as the core returns it, without its case and full plan (they stay in the worker). */
-export interface AssistanceOptionData {
-  added: AddedUnits[];
-  units: number;
-  verdict: Verdict;
-  reasons: Reason[];
-  margin: number;
-  /** Largest coupler tension (pull), N. */
-  peakCouplerForceN: number;
-  /** Largest coupler compression (push), N, and the coupling it is at (0 = behind the first vehicle). */
-  peakCompressionN: number;
-  peakCompressionAt: number;
+export type AssistanceOptionData = Omit<AssistanceOption, "case" | "plan"> & {
   /** Couplings in the train with the option's units. */
   couplings: number;
-  /** Largest compression in the front quarter of the couplings, N. */
-  headCompressionN: number;
-  timeToTargetS: number | null;
-  /** What to watch with this option (shoving from the rear, where the compression peaks). */
-  note: string;
-}
+};
 
-/** The divided train: the largest first part the train's own locomotives start. */
-export interface DivideData {
-  /** Wagons in the first part (≥ 1: a result with no part that starts is sent as null). */
-  wagons: number;
-  trailingMassKg: number;
-  lengthM: number;
-  remainingWagons: number;
-  remainingMassKg: number;
-  trips: number;
+/** The divided train: the largest first part the train's own locomotives start (without its case and plan). */
+export type DivideData = Omit<DividedTrain, "plan" | "case" | "plannerRuns"> & {
   /** The first part's verified verdict; null when only a verdict run judged it. */
   verdict: Verdict | null;
   peakCouplerForceN: number | null;
   timeToTargetS: number | null;
-}
+};
 
 /** The profile the assistance options add. */
 export interface HelperData {
