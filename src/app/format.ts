@@ -2,7 +2,7 @@
  * SI (and file units) to display and back, metric or US customary, through the core's one table of
  * unit factors (`convert`). Every figure the app shows and every number it reads passes through here.
  */
-import { convert, convertTemperature, type Quantity } from "../core/units.js";
+import { convert, convertTemperature, type Quantity } from "../core/physics/units.js";
 
 export type UnitSystem = "metric" | "us";
 

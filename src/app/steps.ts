@@ -1,6 +1,6 @@
 /** Words for plan steps, shared by the step cards and Cab steps. */
 import type { Phase, PlanStep } from "../core/planner/types.js";
-import type { Target } from "../core/types.js";
+import type { Target } from "../core/train/types.js";
 import { formatNumber, show, type UnitSystem } from "./format.js";
 
 export const PHASE_WORD: Record<Phase, string> = { prepare: "Prepare", stretch: "Stretch", build: "Build", accelerate: "Accelerate" };

@@ -3,7 +3,7 @@ import { readFileSync } from "node:fs";
 import { builtinLibrary } from "../profiles/builtin.js";
 import { fileKind, parseJsonText, parseLocationNote, parseStartCase } from "../profiles/parse.js";
 import { withLocations, type Library } from "../profiles/library.js";
-import type { StartCase } from "../core/types.js";
+import type { StartCase } from "../core/train/types.js";
 import { InputError } from "./errors.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { readNotesText } from "../profiles/notes.js";

@@ -1,29 +1,10 @@
-/** The one public surface of the calculation core: pure TypeScript, SI inside, no I/O. */
-export * from "./constants.js";
-export * from "./units.js";
-export * from "./types.js";
-export * from "./normal.js";
-export * from "./resistance.js";
-export * from "./adhesion.js";
-export * from "./traction.js";
-export * from "./track.js";
-export * from "./coupling.js";
-export * from "./consist.js";
-export * from "./slack.js";
-export * from "./standing.js";
-export * from "./staticCheck.js";
-export * from "./startableMass.js";
-export * from "./rating.js";
-export * from "./cautions.js";
+/**
+ * The one public surface of the calculation core: pure TypeScript, SI inside, no I/O. Its folders, lowest
+ * first — each imports only from itself and the folders before it (tests/architecture checks this):
+ * physics ← train ← dynamics ← planner ← dispatch.
+ */
+export * from "./physics/index.js";
+export * from "./train/index.js";
+export * from "./dynamics/index.js";
 export * from "./planner/index.js";
-export * from "./loadTable.js";
-export * from "./slip.js";
-export * from "./runner.js";
-export * from "./trainModel.js";
-export * from "./dynamics.js";
-export * from "./simulate.js";
-export * from "./assistPlacement.js";
-export * from "./assistance.js";
-export * from "./divideTrain.js";
-export * from "./conditionMargins.js";
-export * from "./sensitivity.js";
+export * from "./dispatch/index.js";

@@ -2,11 +2,11 @@
  * The assistance search, margins per rail condition and load tables in the output shape: units in field
  * names, rounded for people and scripts (INTERFACE.md: add fields freely, never rename).
  */
-import type { AssistanceOption, AssistanceResult, RejectedOption } from "../core/assistance.js";
-import type { AddedUnits } from "../core/assistPlacement.js";
-import type { ConditionMargin } from "../core/conditionMargins.js";
-import type { DividedTrain } from "../core/divideTrain.js";
-import type { LoadTableRow } from "../core/loadTable.js";
+import type { AssistanceOption, AssistanceResult, RejectedOption } from "../core/dispatch/assistance.js";
+import type { AddedUnits } from "../core/dispatch/assistPlacement.js";
+import type { ConditionMargin } from "../core/dispatch/conditionMargins.js";
+import type { DividedTrain } from "../core/dispatch/divideTrain.js";
+import type { LoadTableRow } from "../core/dispatch/loadTable.js";
 import { r, type AssistanceReport, type AssistanceSearchReport, type ConditionMarginReport, type DivideReport } from "./report.js";
 
 const kN = (n: number): number => r(n / 1000, 1);

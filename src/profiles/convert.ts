@@ -2,9 +2,10 @@
  * From validated files (units in field names) to the core's SI types. The only place file values
  * are converted; the core trusts what it receives.
  */
-import { DEFAULT_LOCO_FRONTAL_AREA_M2, DEFAULT_WAGON_FRONTAL_AREA_M2 } from "../core/consist.js";
-import { kmhToMps, kNToN, tonnesToKg } from "../core/units.js";
-import type { AdhesionTable, LocomotiveSpec, Location, TrackProfile, WagonSpec } from "../core/types.js";
+import { DEFAULT_LOCO_FRONTAL_AREA_M2, DEFAULT_WAGON_FRONTAL_AREA_M2 } from "../core/train/consist.js";
+import { kmhToMps, kNToN, tonnesToKg } from "../core/physics/units.js";
+import type { AdhesionTable, LocomotiveSpec, TrackProfile, WagonSpec } from "../core/physics/types.js";
+import type { Location } from "../core/train/types.js";
 import type { LocationNoteFile, LocomotiveFile, RailConditionsFile, SegmentFile, WagonFile } from "./schemas.js";
 
 /** Adhesion utilisation of bogie DC locomotives when pulling [M], PHYSICS.md §2. */

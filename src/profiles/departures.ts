@@ -6,7 +6,8 @@
  * or index (JSON); the others are read as usual. A file that cannot be read at all gets a message.
  * The caller reads the case files a CSV names (from disk, or from files the user picked).
  */
-import { RAIL_CONDITIONS, type RailCondition, type StartCase } from "../core/types.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../core/physics/types.js";
+import type { StartCase } from "../core/train/types.js";
 import { parseCsv } from "./csv.js";
 import { formatIssues, type FieldIssue } from "./issues.js";
 import type { Library } from "./library.js";

@@ -3,7 +3,7 @@
  * cases refer to by id. The CLI fills it from the profiles folder, the app from the built-in set and the
  * device's notes store.
  */
-import type { AdhesionTable, LocomotiveSpec } from "../core/types.js";
+import type { AdhesionTable, LocomotiveSpec } from "../core/physics/types.js";
 import type { WagonType } from "./convert.js";
 import type { LocationNoteFile, LocomotiveFile } from "./schemas.js";
 

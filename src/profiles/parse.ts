@@ -2,10 +2,11 @@
  * The boundary: unknown JSON in, typed SI values or field issues out. Every file kind has one
  * `parseX` function; start cases are also resolved against a library of named profiles.
  */
-import { buildConsist } from "../core/consist.js";
-import { DEFAULT_SETTINGS, type LocoGroup, type LocoPosition, type StartCase, type WagonSpec } from "../core/types.js";
-import { kmhToMps, kNToN, tonnesToKg } from "../core/units.js";
-import { uniformTrack } from "../core/track.js";
+import { buildConsist } from "../core/train/consist.js";
+import { DEFAULT_SETTINGS, type LocoGroup, type LocoPosition, type StartCase } from "../core/train/types.js";
+import type { WagonSpec } from "../core/physics/types.js";
+import { kmhToMps, kNToN, tonnesToKg } from "../core/physics/units.js";
+import { uniformTrack } from "../core/physics/track.js";
 import { genericWagon, locationFromNote, locomotiveFromFile } from "./convert.js";
 import { fail, fromZodIssues, ok, type FieldIssue, type ParseResult, type RawIssue } from "./issues.js";
 import type { Library } from "./library.js";

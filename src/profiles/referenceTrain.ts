@@ -3,7 +3,7 @@
  * train preset, optionally another locomotive profile or count at the head). Built into a start case
  * on the note's own profile, resolved exactly as the command line resolves a case.
  */
-import type { StartCase } from "../core/types.js";
+import type { StartCase } from "../core/train/types.js";
 import type { FieldIssue, ParseResult } from "./issues.js";
 import type { Library } from "./library.js";
 import { resolveStartCase } from "./parse.js";

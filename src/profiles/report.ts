@@ -2,10 +2,11 @@
  * Output shapes (INTERFACE.md "Output of taut plan"): the core's SI results expressed with units in
  * field names, rounded for people and scripts. Add fields freely; never rename.
  */
-import { caseCautions, STANDARD_CAUTIONS } from "../core/cautions.js";
+import { caseCautions, STANDARD_CAUTIONS } from "../core/planner/cautions.js";
 import type { PlanResult, PlanStep } from "../core/planner/types.js";
-import type { StaticCheck } from "../core/staticCheck.js";
-import type { Reason, StartCase, Verdict } from "../core/types.js";
+import type { StaticCheck } from "../core/planner/staticCheck.js";
+import type { Reason, Verdict } from "../core/planner/outcome.js";
+import type { StartCase } from "../core/train/types.js";
 
 export type Phase = "prepare" | "stretch" | "build" | "accelerate";
 

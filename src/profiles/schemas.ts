@@ -3,7 +3,7 @@
  * are converted to SI in `convert.ts`. Shapes are a stable contract (INTERFACE.md): add, never rename.
  */
 import * as z from "zod/mini";
-import { RAIL_CONDITIONS } from "../core/types.js";
+import { RAIL_CONDITIONS } from "../core/physics/types.js";
 
 const finite = () => z.number();
 const positive = () => z.number().check(z.gt(0));

@@ -5,10 +5,10 @@
  * Outcomes are data: a result, or the issues of a malformed case, or a failure; only an abort rejects.
  * The caller validates and resolves the case first (src/profiles), and sends the core's SI form.
  */
-import type { ConditionMargin } from "../core/conditionMargins.js";
-import type { LoadTableRow } from "../core/loadTable.js";
+import type { ConditionMargin } from "../core/dispatch/conditionMargins.js";
+import type { LoadTableRow } from "../core/dispatch/loadTable.js";
 import type { PlanResult } from "../core/planner/types.js";
-import type { StartCase } from "../core/types.js";
+import type { StartCase } from "../core/train/types.js";
 import {
   isWorkerResponse,
   type AssistanceAnswer,

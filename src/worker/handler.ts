@@ -5,7 +5,7 @@
  */
 import { planStart } from "../core/planner/index.js";
 import type { PlanOptions, PlanResult } from "../core/planner/types.js";
-import type { StartCase } from "../core/types.js";
+import type { StartCase } from "../core/train/types.js";
 import { runAssistance, runCheck, runConditionMargins, runLoadTable } from "./jobs.js";
 import {
   isWorkerRequest,

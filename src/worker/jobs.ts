@@ -4,13 +4,14 @@
  * `taut check` checks it (the same planner calls with the same caps, so the app and the command line give
  * the same answers). Results are plain SI data; progress goes to a callback. Free of Worker globals.
  */
-import { searchAssistance, type AssistanceOption, type AssistanceResult } from "../core/assistance.js";
-import { conditionMargins, type ConditionMargin } from "../core/conditionMargins.js";
-import type { DividedTrain } from "../core/divideTrain.js";
-import { loadTableCells, loadTableRow, type LoadTableRow } from "../core/loadTable.js";
+import { searchAssistance, type AssistanceOption, type AssistanceResult } from "../core/dispatch/assistance.js";
+import { conditionMargins, type ConditionMargin } from "../core/dispatch/conditionMargins.js";
+import type { DividedTrain } from "../core/dispatch/divideTrain.js";
+import { loadTableCells, loadTableRow, type LoadTableRow } from "../core/dispatch/loadTable.js";
 import { maxStartableMassKg, planStart } from "../core/planner/index.js";
 import type { PlanResult } from "../core/planner/types.js";
-import type { LocomotiveSpec, StartCase } from "../core/types.js";
+import type { LocomotiveSpec } from "../core/physics/types.js";
+import type { StartCase } from "../core/train/types.js";
 import type {
   AssistanceAnswer,
   AssistanceOptionData,

@@ -14,12 +14,14 @@
  * - `check`: one departure as `taut check` answers it: verdict, reasons, margin, largest startable mass and
  *   the cheapest assistance (or the divided train).
  */
-import type { AssistanceOption, RejectedOption } from "../core/assistance.js";
-import type { DividedTrain } from "../core/divideTrain.js";
-import type { ConditionMargin } from "../core/conditionMargins.js";
-import type { LoadTableRow } from "../core/loadTable.js";
+import type { AssistanceOption, RejectedOption } from "../core/dispatch/assistance.js";
+import type { DividedTrain } from "../core/dispatch/divideTrain.js";
+import type { ConditionMargin } from "../core/dispatch/conditionMargins.js";
+import type { LoadTableRow } from "../core/dispatch/loadTable.js";
 import type { PlanOptions, PlanResult } from "../core/planner/types.js";
-import { RAIL_CONDITIONS, type LocomotiveSpec, type RailCondition, type Reason, type StartCase, type Verdict } from "../core/types.js";
+import { RAIL_CONDITIONS, type LocomotiveSpec, type RailCondition } from "../core/physics/types.js";
+import type { Reason, Verdict } from "../core/planner/outcome.js";
+import type { StartCase } from "../core/train/types.js";
 
 /** A field problem, as the app shows it (same shape as src/profiles' FieldIssue). */
 export interface WorkerIssue {

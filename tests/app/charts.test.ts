@@ -4,8 +4,8 @@ import { couplerChart } from "../../src/app/charts/couplerAlong.js";
 import { effortChart, speedRangeMps, totalAdhesionN, totalNotchEffortN } from "../../src/app/charts/effortSpeed.js";
 import { speedNotchChart } from "../../src/app/charts/speedNotch.js";
 import { niceCeil } from "../../src/app/charts/spec.js";
-import { GRAVITY_MPS2 } from "../../src/core/constants.js";
-import { normalQuantile } from "../../src/core/normal.js";
+import { GRAVITY_MPS2 } from "../../src/core/physics/constants.js";
+import { normalQuantile } from "../../src/core/physics/normal.js";
 import { demoCase, fixturePlan } from "./fixtures.js";
 
 describe("tractive effort against speed", () => {

@@ -5,7 +5,7 @@
  */
 import { planStart } from "../../src/core/planner/index.js";
 import type { PlanResult, PlanStep } from "../../src/core/planner/types.js";
-import type { StartCase } from "../../src/core/types.js";
+import type { StartCase } from "../../src/core/train/types.js";
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 

@@ -2,7 +2,7 @@
 import { fireEvent, screen, waitFor } from "@solidjs/testing-library";
 import { describe, expect, it } from "vitest";
 import Settings from "../../src/app/screens/Settings/index.js";
-import { STANDARD_CAUTIONS } from "../../src/core/cautions.js";
+import { STANDARD_CAUTIONS } from "../../src/core/planner/cautions.js";
 import { renderWithApp } from "./harness.js";
 
 const field = (label: RegExp) => screen.getByLabelText(label, { selector: "input" }) as HTMLInputElement;

@@ -2,7 +2,7 @@
 import { render, screen } from "@solidjs/testing-library";
 import { describe, expect, it } from "vitest";
 import { VerdictBanner } from "../../src/app/components/VerdictBanner.js";
-import type { Verdict } from "../../src/core/types.js";
+import type { Verdict } from "../../src/core/planner/outcome.js";
 
 const cases: Array<[Verdict, string, string, string]> = [
   ["starts", "Starts", "circle", "circle"],

@@ -5,8 +5,8 @@
  */
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
-import { modelFromCase } from "../../src/core/trainModel.js";
-import { sequenceControls, simulate } from "../../src/core/simulate.js";
+import { modelFromCase } from "../../src/core/train/trainModel.js";
+import { sequenceControls, simulate } from "../../src/core/dynamics/simulate.js";
 import { engineHistory, maxDeviationOverPeak, odexHistory, peakForceError, rollingChain } from "../core/helpers/compare.js";
 import type { RefChain } from "../core/helpers/referenceChain.js";
 import { heading, line, median, memoryMB, timeRuns } from "./util.js";

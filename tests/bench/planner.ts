@@ -5,7 +5,7 @@
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { maxStartableMassKg, planStart } from "../../src/core/planner/index.js";
-import type { StartCase } from "../../src/core/types.js";
+import type { StartCase } from "../../src/core/train/types.js";
 import { longTrainCase } from "./dynamics.js";
 import { heading, line, median, timeRuns } from "./util.js";
 

@@ -8,7 +8,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { afterAll, describe, expect, it } from "vitest";
-import { loadTable } from "../../src/core/loadTable.js";
+import { loadTable } from "../../src/core/dispatch/loadTable.js";
 import { tableCase } from "../../src/cli/commands/table.js";
 import { builtinLibrary, builtinLocations } from "../../src/profiles/builtin.js";
 import { makeNotesBundle } from "../../src/profiles/notes.js";

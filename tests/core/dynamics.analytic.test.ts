@@ -2,9 +2,9 @@
  * Dynamics engine against analytic solutions and conservation laws.
  */
 import { describe, expect, it } from "vitest";
-import { createState, evaluate, step } from "../../src/core/dynamics.js";
-import { stableTimeStep } from "../../src/core/trainModel.js";
-import { GRAVITY_MPS2 } from "../../src/core/constants.js";
+import { createState, evaluate, step } from "../../src/core/dynamics/dynamics.js";
+import { stableTimeStep } from "../../src/core/train/trainModel.js";
+import { GRAVITY_MPS2 } from "../../src/core/physics/constants.js";
 import { chainModel } from "./helpers/chainModel.js";
 
 describe("two masses joined by one linear spring, no slack", () => {

@@ -5,9 +5,9 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
-import { modelFromCase } from "../../src/core/trainModel.js";
-import { sequenceControls, simulate } from "../../src/core/simulate.js";
-import type { StartCase } from "../../src/core/types.js";
+import { modelFromCase } from "../../src/core/train/trainModel.js";
+import { sequenceControls, simulate } from "../../src/core/dynamics/simulate.js";
+import type { StartCase } from "../../src/core/train/types.js";
 
 const lib = builtinLibrary();
 

@@ -4,8 +4,8 @@
  * grows with mass and grade by m·g·sin(atan i) (PHYSICS.md §1).
  */
 import { describe, expect, it } from "vitest";
-import { sensitivity } from "../../src/core/sensitivity.js";
-import { staticCheck } from "../../src/core/staticCheck.js";
+import { sensitivity } from "../../src/core/planner/sensitivity.js";
+import { staticCheck } from "../../src/core/planner/staticCheck.js";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 

@@ -4,10 +4,11 @@
  * pre-loaded buffers (EN 15551 [S] for the stroke; the preload value is from memory [M]).
  */
 import { describe, expect, it } from "vitest";
-import { buildConsist } from "../../src/core/consist.js";
-import { gearDeflectionM, gearLoadingForceN, PRELOAD_RAMP_M, screwCoupling, knuckleCoupling } from "../../src/core/coupling.js";
-import { initialSlack } from "../../src/core/slack.js";
-import type { StartCase, TrackProfile } from "../../src/core/types.js";
+import { buildConsist } from "../../src/core/train/consist.js";
+import { gearDeflectionM, gearLoadingForceN, PRELOAD_RAMP_M, screwCoupling, knuckleCoupling } from "../../src/core/physics/coupling.js";
+import { initialSlack } from "../../src/core/train/slack.js";
+import type { StartCase } from "../../src/core/train/types.js";
+import type { TrackProfile } from "../../src/core/physics/types.js";
 import { uniformCase } from "../tools/cases.js";
 
 function withTrack(track: TrackProfile, frontAtM: number): StartCase {

@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import type { StartCase } from "../../src/core/types.js";
+import type { StartCase } from "../../src/core/train/types.js";
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { createPlannerClient, type WorkerLike } from "../../src/worker/client.js";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { planStart } from "../../src/core/planner/index.js";
 import type { PlanResult } from "../../src/core/planner/types.js";
-import type { StartCase } from "../../src/core/types.js";
+import type { StartCase } from "../../src/core/train/types.js";
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { createPlannerHandler } from "../../src/worker/handler.js";

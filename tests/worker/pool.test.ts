@@ -5,7 +5,7 @@
  */
 import { readFileSync } from "node:fs";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import type { StartCase } from "../../src/core/types.js";
+import type { StartCase } from "../../src/core/train/types.js";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { abortError, createPlannerClient, type Outcome, type PlannerClient, type WorkerLike } from "../../src/worker/client.js";

@@ -4,9 +4,10 @@
  * stays under the setting) up to the median (slip risk 50 %). Computed from the core's traction and
  * adhesion functions for the case on screen; needs no plan.
  */
-import { adhesionLimitN, adhesionQuantile, medianAdhesion } from "../../core/adhesion.js";
-import { notchEffortN } from "../../core/traction.js";
-import { RAIL_CONDITIONS, type RailCondition, type StartCase } from "../../core/types.js";
+import { adhesionLimitN, adhesionQuantile, medianAdhesion } from "../../core/physics/adhesion.js";
+import { notchEffortN } from "../../core/physics/traction.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
+import type { StartCase } from "../../core/train/types.js";
 import { percent, toDisplay, unitSymbol, type UnitSystem } from "../format.js";
 import { niceCeil, type ChartSpec, type LegendEntry, type LineSeries, type Point } from "./spec.js";
 

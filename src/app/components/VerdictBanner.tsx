@@ -4,7 +4,7 @@
  * a square with a plus (add a locomotive).
  */
 import { For, Show, type JSX } from "solid-js";
-import type { Reason, Verdict } from "../../core/types.js";
+import type { Reason, Verdict } from "../../core/planner/outcome.js";
 
 export const VERDICT_WORD: Record<Verdict, string> = {
   starts: "Starts",

@@ -3,7 +3,8 @@
  * km/h, m, ‰, °C). `draftToFile` turns it into the `taut/start-case@1` shape the worker and the command
  * line read; `draftFromFile` fills it from a case file. Pure functions, no Solid.
  */
-import type { RailCondition, SlackState } from "../../core/types.js";
+import type { RailCondition } from "../../core/physics/types.js";
+import type { SlackState } from "../../core/train/types.js";
 import type { StartCaseFile, TrainPresetFile } from "../../profiles/schemas.js";
 
 export type DraftPosition = "head" | "rear" | "after";

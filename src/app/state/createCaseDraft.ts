@@ -5,7 +5,7 @@
  */
 import { createEffect, createMemo, createSignal, onCleanup, type Accessor } from "solid-js";
 import { createStore, reconcile, unwrap, type SetStoreFunction } from "solid-js/store";
-import type { StartCase } from "../../core/types.js";
+import type { StartCase } from "../../core/train/types.js";
 import { builtinCases, DEMO_CASE_ID } from "../../profiles/builtin.js";
 import type { FieldIssue, ParseResult } from "../../profiles/issues.js";
 import type { Library } from "../../profiles/library.js";

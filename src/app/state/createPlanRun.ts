@@ -8,7 +8,7 @@
  */
 import { createEffect, createMemo, createSignal, on, onCleanup, type Accessor } from "solid-js";
 import type { PlanResult } from "../../core/planner/types.js";
-import type { StartCase } from "../../core/types.js";
+import type { StartCase } from "../../core/train/types.js";
 import type { PlannerClient } from "../../worker/client.js";
 import type { WorkerIssue } from "../../worker/protocol.js";
 

@@ -4,7 +4,7 @@
  * back to the defaults field by field.
  */
 import { createSignal, type Accessor } from "solid-js";
-import { DEFAULT_SETTINGS } from "../../core/types.js";
+import { DEFAULT_SETTINGS } from "../../core/train/types.js";
 import type { UnitSystem } from "../format.js";
 
 export type ThemeChoice = "day" | "night" | "system";

@@ -4,7 +4,7 @@
  * location by note or by quick entry, a position by name or after a wagon) the issues are taken from the
  * alternative the user chose, so they land at the field being edited.
  */
-import type { StartCase } from "../../core/types.js";
+import type { StartCase } from "../../core/train/types.js";
 import { fail, fromZodIssues, type FieldIssue, type ParseResult, type RawIssue } from "../../profiles/issues.js";
 import type { Library } from "../../profiles/library.js";
 import { resolveStartCase } from "../../profiles/parse.js";

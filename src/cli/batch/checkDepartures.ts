@@ -4,7 +4,8 @@
  * departures with the same case share one check, and those that differ only in trailing mass share one
  * mass search (the largest startable mass does not depend on the mass the train has today).
  */
-import type { LocomotiveSpec, StartCase } from "../../core/types.js";
+import type { LocomotiveSpec } from "../../core/physics/types.js";
+import type { StartCase } from "../../core/train/types.js";
 import type { AssistanceReport, DivideReport } from "../../profiles/report.js";
 import type { Departure } from "./departures.js";
 import type { CheckOutcome, JobOutcome, MassOutcome } from "./jobs.js";

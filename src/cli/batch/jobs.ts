@@ -3,9 +3,11 @@
  * verdict and the cheapest assistance) and finding the largest startable mass of one case. Jobs and results
  * are plain data (they cross a thread boundary by structured clone); results are already in output units.
  */
-import { searchAssistance } from "../../core/assistance.js";
+import { searchAssistance } from "../../core/dispatch/assistance.js";
 import { maxStartableMassKg, planStart } from "../../core/planner/index.js";
-import type { LocomotiveSpec, Reason, StartCase, Verdict } from "../../core/types.js";
+import type { LocomotiveSpec } from "../../core/physics/types.js";
+import type { Reason, Verdict } from "../../core/planner/outcome.js";
+import type { StartCase } from "../../core/train/types.js";
 import { assistanceReport } from "../../profiles/assistanceReport.js";
 import { r, type AssistanceReport, type DivideReport } from "../../profiles/report.js";
 

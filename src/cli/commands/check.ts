@@ -1,5 +1,5 @@
 /** `taut check DEPARTURES.csv|json` — a day's departures checked at once, in parallel worker threads. */
-import { STANDARD_CAUTIONS } from "../../core/cautions.js";
+import { STANDARD_CAUTIONS } from "../../core/planner/cautions.js";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "../errors.js";
 import { library, readNotesFiles } from "../files.js";
 import type { Command, Output } from "../main.js";

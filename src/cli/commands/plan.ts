@@ -1,12 +1,13 @@
 /** `taut plan CASE.json [--json]` — the start plan for one case, with assistance options when it does not start. */
-import { searchAssistance } from "../../core/assistance.js";
-import { conditionMargins } from "../../core/conditionMargins.js";
+import { searchAssistance } from "../../core/dispatch/assistance.js";
+import { conditionMargins } from "../../core/dispatch/conditionMargins.js";
 import { planStart } from "../../core/planner/index.js";
 import { builtinCaseJson, DEMO_CASE_ID } from "../../profiles/builtin.js";
 import { parseStartCase } from "../../profiles/parse.js";
 import { planReport as reportOf, type PlanReport } from "../../profiles/report.js";
 import { assistanceReport, conditionMarginReport } from "../../profiles/assistanceReport.js";
-import type { LocomotiveSpec, StartCase } from "../../core/types.js";
+import type { LocomotiveSpec } from "../../core/physics/types.js";
+import type { StartCase } from "../../core/train/types.js";
 import type { Library } from "../../profiles/library.js";
 import { InputError } from "../errors.js";
 import { library, readNotesFiles, readStartCase } from "../files.js";

@@ -1,7 +1,7 @@
 /** `taut simulate CASE.json --sequence "1@0,2@20,4@35,8@50"` — run a given notch sequence through the dynamics model. */
-import { simulate, sequenceControls, type SimResult } from "../../core/simulate.js";
-import { modelFromCase } from "../../core/trainModel.js";
-import type { StartCase } from "../../core/types.js";
+import { simulate, sequenceControls, type SimResult } from "../../core/dynamics/simulate.js";
+import { modelFromCase } from "../../core/train/trainModel.js";
+import type { StartCase } from "../../core/train/types.js";
 import { InputError } from "../errors.js";
 import { library, readStartCase } from "../files.js";
 import type { Command } from "../main.js";

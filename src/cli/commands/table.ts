@@ -1,7 +1,7 @@
 /** `taut table LOCATION.json --loco ID` — the load table of a location: largest startable mass per rail condition. */
-import { STANDARD_CAUTIONS } from "../../core/cautions.js";
-import { loadTableCells, type LoadTableRow } from "../../core/loadTable.js";
-import type { StartCase } from "../../core/types.js";
+import { STANDARD_CAUTIONS } from "../../core/planner/cautions.js";
+import { loadTableCells, type LoadTableRow } from "../../core/dispatch/loadTable.js";
+import type { StartCase } from "../../core/train/types.js";
 import { referenceCaseFile, DEFAULT_REFERENCE_TEMPERATURE_C } from "../../profiles/referenceTrain.js";
 import { loadTableRowReport } from "../../profiles/assistanceReport.js";
 import { builtinTrains } from "../../profiles/builtin.js";

@@ -2,7 +2,7 @@
  * A branch of the plan search: a dynamics run plus the log of the steps taken so far. Branches are
  * cloned to try alternatives (stretch notches, build pacing) from a shared starting point.
  */
-import type { Observation, Run } from "../runner.js";
+import type { Observation, Run } from "../dynamics/runner.js";
 import { notchAdhesion, type PlannerContext } from "./context.js";
 import type { Phase, Trigger } from "./types.js";
 

@@ -2,13 +2,13 @@
  * What the planner knows about a case before it simulates anything: the static check, the forces on the
  * standing train, whether it would roll back, the limits it must respect and the notch it can hold with.
  */
-import { adhesionSpeedFactor, slipRisk, standstillMedian } from "../adhesion.js";
-import { buildConsist, type Consist } from "../consist.js";
-import { standingForces, type StandingForces } from "../standing.js";
-import { staticCheckOf, type StaticCheck } from "../staticCheck.js";
-import { modelFromCase, trainBrakeReleaseS, type TrainModel } from "../trainModel.js";
-import { notchTargetN } from "../runner.js";
-import type { StartCase } from "../types.js";
+import { adhesionSpeedFactor, slipRisk, standstillMedian } from "../physics/adhesion.js";
+import { buildConsist, type Consist } from "../train/consist.js";
+import { standingForces, type StandingForces } from "../train/standing.js";
+import { staticCheckOf, type StaticCheck } from "./staticCheck.js";
+import { modelFromCase, trainBrakeReleaseS, type TrainModel } from "../train/trainModel.js";
+import { notchTargetN } from "../dynamics/runner.js";
+import type { StartCase } from "../train/types.js";
 
 export interface PlannerContext {
   c: StartCase;

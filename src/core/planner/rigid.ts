@@ -3,9 +3,9 @@
  * the verdict is needed (the largest-startable-mass search). Every vehicle keeps its own place on the
  * profile; couplings are taken as taut, so the only dynamics left is Newton's law for the whole train.
  */
-import { GRAVITY_MPS2 } from "../constants.js";
-import { adhesionSpeedFactor } from "../adhesion.js";
-import { notchTargetN } from "../runner.js";
+import { GRAVITY_MPS2 } from "../physics/constants.js";
+import { adhesionSpeedFactor } from "../physics/adhesion.js";
+import { notchTargetN } from "../dynamics/runner.js";
 import type { PlannerContext } from "./context.js";
 
 export interface RigidStart {

@@ -4,8 +4,8 @@
  * quickest build pace that keeps couplers within their allowance) and checked by the full dynamics.
  * Deterministic: the same case always gives the same plan.
  */
-import { Run, type Observation } from "../runner.js";
-import { stabilityTimeStep } from "../trainModel.js";
+import { Run, type Observation } from "../dynamics/runner.js";
+import { stabilityTimeStep } from "../train/trainModel.js";
 import { Branch } from "./branch.js";
 import { rigidAccelerate } from "./rigid.js";
 import { holdingNotch, MIN_NOTCH_DWELL_S, notchAdhesion, notchEffortAllN, type PlannerContext } from "./context.js";

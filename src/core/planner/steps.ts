@@ -2,9 +2,9 @@
  * From the search's step records to the plan a driver reads: what to watch for before advancing, the
  * expected figures, the fallback notch if the wheels slip, and one plain line of physics saying why.
  */
-import { adhesionSpeedFactor, slipRiskAfterSlip } from "../adhesion.js";
-import { notchTargetN } from "../runner.js";
-import { mpsToKmh } from "../units.js";
+import { adhesionSpeedFactor, slipRiskAfterSlip } from "../physics/adhesion.js";
+import { notchTargetN } from "../dynamics/runner.js";
+import { mpsToKmh } from "../physics/units.js";
 import type { StepRecord } from "./branch.js";
 import type { PlannerContext } from "./context.js";
 import type { SearchResult } from "./search.js";

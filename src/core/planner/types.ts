@@ -2,9 +2,9 @@
  * What the start planner returns, in SI. The CLI turns it into the INTERFACE.md JSON; the app formats
  * it for display in the chosen units.
  */
-import type { SensitivityRow } from "../sensitivity.js";
-import type { StaticCheck } from "../staticCheck.js";
-import type { Reason, Verdict } from "../types.js";
+import type { SensitivityRow } from "./sensitivity.js";
+import type { StaticCheck } from "./staticCheck.js";
+import type { Reason, Verdict } from "./outcome.js";
 
 export type Phase = "prepare" | "stretch" | "build" | "accelerate";
 

@@ -2,7 +2,7 @@
  * The verdict: starts, marginal or needs assistance, with the reasons — the static limits (adhesion,
  * power, coupler, distance) combined with what the simulated plan showed.
  */
-import type { Reason, Verdict } from "../types.js";
+import type { Reason, Verdict } from "./outcome.js";
 import type { PlannerContext } from "./context.js";
 import type { SearchResult } from "./search.js";
 

@@ -8,7 +8,7 @@ import { join } from "node:path";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import Departures from "../../../src/app/screens/Departures/index.js";
 import { CHECK_CSV_HEADER } from "../../../src/profiles/csv.js";
-import type { StartCase } from "../../../src/core/types.js";
+import type { StartCase } from "../../../src/core/train/types.js";
 import type { CheckAnswer } from "../../../src/worker/protocol.js";
 import { renderWithApp } from "../harness.js";
 import { fakePool, ok } from "./fakes.js";

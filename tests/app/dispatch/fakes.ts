@@ -2,9 +2,10 @@
  * Fixed worker answers for the dispatcher's screens: a pool whose calls the test scripts (answered at once
  * from a function, or held until the test releases them), recording every request and its signal.
  */
-import type { ConditionMargin } from "../../../src/core/conditionMargins.js";
-import type { LoadTableRow } from "../../../src/core/loadTable.js";
-import { RAIL_CONDITIONS, type StartCase } from "../../../src/core/types.js";
+import type { ConditionMargin } from "../../../src/core/dispatch/conditionMargins.js";
+import type { LoadTableRow } from "../../../src/core/dispatch/loadTable.js";
+import { RAIL_CONDITIONS } from "../../../src/core/physics/types.js";
+import type { StartCase } from "../../../src/core/train/types.js";
 import type { Outcome } from "../../../src/worker/client.js";
 import type { PlannerPool } from "../../../src/worker/pool.js";
 import type { AssistanceAnswer, CheckAnswer, LoadTableCell } from "../../../src/worker/protocol.js";

@@ -2,7 +2,7 @@
  * Hand-built dynamics models for tests: a chain of vehicles with chosen masses, couplings and forces,
  * independent of the case builder, so analytic solutions can be matched exactly.
  */
-import type { TrainModel } from "../../../src/core/trainModel.js";
+import type { TrainModel } from "../../../src/core/train/trainModel.js";
 
 export interface ChainSpec {
   masses: number[];

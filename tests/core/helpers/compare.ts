@@ -4,8 +4,8 @@
  * time grid — shared by the reference test and the benchmark.
  */
 import * as odexModule from "odex";
-import { createState, evaluate, step } from "../../../src/core/dynamics.js";
-import { stableTimeStep } from "../../../src/core/trainModel.js";
+import { createState, evaluate, step } from "../../../src/core/dynamics/dynamics.js";
+import { stableTimeStep } from "../../../src/core/train/trainModel.js";
 import { chainModel } from "./chainModel.js";
 import { refCouplerForce, refDerivative, type RefChain } from "./referenceChain.js";
 

@@ -5,8 +5,9 @@
  * condition as a chart and a table. Props in, JSX out.
  */
 import { For, Show, type JSX } from "solid-js";
-import type { ConditionMargin } from "../../../core/conditionMargins.js";
-import type { RailCondition, Reason } from "../../../core/types.js";
+import type { ConditionMargin } from "../../../core/dispatch/conditionMargins.js";
+import type { RailCondition } from "../../../core/physics/types.js";
+import type { Reason } from "../../../core/planner/outcome.js";
 import type { AssistanceAnswer, AssistanceOptionData } from "../../../worker/protocol.js";
 import type { ChartPalette } from "../../charts/palette.js";
 import { Chart } from "../../components/Chart.js";

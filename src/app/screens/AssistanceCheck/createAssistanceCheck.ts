@@ -5,8 +5,8 @@
  * them at once; each part shows as soon as it arrives. Cancel stops both; Check again starts them anew.
  */
 import { createEffect, createMemo, createSignal, on, onCleanup, type Accessor } from "solid-js";
-import type { ConditionMargin } from "../../../core/conditionMargins.js";
-import type { StartCase } from "../../../core/types.js";
+import type { ConditionMargin } from "../../../core/dispatch/conditionMargins.js";
+import type { StartCase } from "../../../core/train/types.js";
 import type { Outcome, PlannerCalls } from "../../../worker/client.js";
 import type { AssistanceAnswer } from "../../../worker/protocol.js";
 

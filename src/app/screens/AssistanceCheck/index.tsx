@@ -1,7 +1,7 @@
 /** Assistance check (wiring): the case being edited in Start plan, checked on the planner workers; the view is View.tsx. */
 import { createMemo, type JSX } from "solid-js";
 import { unwrap } from "solid-js/store";
-import type { StartCase } from "../../../core/types.js";
+import type { StartCase } from "../../../core/train/types.js";
 import type { AssistanceOptionData } from "../../../worker/protocol.js";
 import { PALETTES } from "../../charts/palette.js";
 import { useApp } from "../../context.js";

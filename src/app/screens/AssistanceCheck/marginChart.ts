@@ -3,8 +3,8 @@
  * and with sand, against × 1 (as much needed as available). The axis stops at × 3: beyond that the bar is
  * cut and the table beside gives the figure.
  */
-import type { ConditionMargin } from "../../../core/conditionMargins.js";
-import { RAIL_CONDITIONS } from "../../../core/types.js";
+import type { ConditionMargin } from "../../../core/dispatch/conditionMargins.js";
+import { RAIL_CONDITIONS } from "../../../core/physics/types.js";
 import type { ChartSpec } from "../../charts/spec.js";
 import { barChart } from "../shared/bars.js";
 import { RAIL_WORD } from "../shared/words.js";

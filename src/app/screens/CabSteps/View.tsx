@@ -4,7 +4,7 @@
  */
 import { Show, type JSX } from "solid-js";
 import type { PlanResult } from "../../../core/planner/types.js";
-import type { Target } from "../../../core/types.js";
+import type { Target } from "../../../core/train/types.js";
 import { Icon } from "../../components/Icon.js";
 import { VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
 import { clock, localiseText, percent, show, type UnitSystem } from "../../format.js";

@@ -3,7 +3,7 @@
  * error of its line; sorted by risk for the screen (needs assistance first, then marginal, each by margin,
  * then the rest); and the CSV export with `taut check --csv`'s columns and units (t, kN, s), in file order.
  */
-import type { Verdict } from "../../../core/types.js";
+import type { Verdict } from "../../../core/planner/outcome.js";
 import { CHECK_CSV_HEADER, toCsv } from "../../../profiles/csv.js";
 import { r } from "../../../profiles/report.js";
 import type { CheckAnswer } from "../../../worker/protocol.js";

@@ -4,8 +4,8 @@
  * as bars. Props in, JSX out.
  */
 import { For, Show, type JSX } from "solid-js";
-import type { LoadTableRow } from "../../../core/loadTable.js";
-import type { RailCondition } from "../../../core/types.js";
+import type { LoadTableRow } from "../../../core/dispatch/loadTable.js";
+import type { RailCondition } from "../../../core/physics/types.js";
 import type { ChartPalette } from "../../charts/palette.js";
 import { Chart } from "../../components/Chart.js";
 import { Icon } from "../../components/Icon.js";

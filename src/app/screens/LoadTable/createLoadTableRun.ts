@@ -4,8 +4,8 @@
  * they come. A changed case stops the running table; finished tables are kept per case.
  */
 import { createEffect, createMemo, createSignal, on, onCleanup, type Accessor } from "solid-js";
-import { loadTableCells, type LoadTableRow } from "../../../core/loadTable.js";
-import type { StartCase } from "../../../core/types.js";
+import { loadTableCells, type LoadTableRow } from "../../../core/dispatch/loadTable.js";
+import type { StartCase } from "../../../core/train/types.js";
 import type { PlannerCalls } from "../../../worker/client.js";
 import type { LoadTableCell } from "../../../worker/protocol.js";
 

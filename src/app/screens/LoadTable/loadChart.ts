@@ -1,6 +1,6 @@
 /** The load table as bars per rail condition (without and with sand) in the user's mass unit, with the train's own mass as a line. */
-import type { LoadTableRow } from "../../../core/loadTable.js";
-import { RAIL_CONDITIONS } from "../../../core/types.js";
+import type { LoadTableRow } from "../../../core/dispatch/loadTable.js";
+import { RAIL_CONDITIONS } from "../../../core/physics/types.js";
 import type { ChartSpec } from "../../charts/spec.js";
 import { toDisplay, unitSymbol, type UnitSystem } from "../../format.js";
 import { barChart } from "../shared/bars.js";

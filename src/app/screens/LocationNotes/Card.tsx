@@ -4,9 +4,9 @@
  * record. The same component is the on-screen preview and the printed page.
  */
 import { For, Show, type JSX } from "solid-js";
-import { STANDARD_CAUTIONS } from "../../../core/cautions.js";
-import type { LoadTableRow } from "../../../core/loadTable.js";
-import type { RailCondition } from "../../../core/types.js";
+import { STANDARD_CAUTIONS } from "../../../core/planner/cautions.js";
+import type { LoadTableRow } from "../../../core/dispatch/loadTable.js";
+import type { RailCondition } from "../../../core/physics/types.js";
 import { latestRevision } from "../../../profiles/notes.js";
 import type { LocationNoteFile } from "../../../profiles/schemas.js";
 import { DEFAULT_REFERENCE_TEMPERATURE_C, type ReferenceSummary } from "../../../profiles/referenceTrain.js";

@@ -5,7 +5,7 @@
  * list above the Save button.
  */
 import { For, Match, Show, Switch, type JSX } from "solid-js";
-import { RAIL_CONDITIONS } from "../../../core/types.js";
+import { RAIL_CONDITIONS } from "../../../core/physics/types.js";
 import { DEFAULT_REFERENCE_TEMPERATURE_C } from "../../../profiles/referenceTrain.js";
 import type { Library } from "../../../profiles/library.js";
 import type { TrainPresetFile } from "../../../profiles/schemas.js";

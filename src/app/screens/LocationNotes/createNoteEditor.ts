@@ -4,7 +4,7 @@
  */
 import { createEffect, createMemo, createSignal, on, onCleanup, type Accessor } from "solid-js";
 import { createStore, reconcile, unwrap, type SetStoreFunction } from "solid-js/store";
-import type { StartCase } from "../../../core/types.js";
+import type { StartCase } from "../../../core/train/types.js";
 import { canonicalNote } from "../../../profiles/notes.js";
 import type { Library } from "../../../profiles/library.js";
 import type { LocationNoteFile, TrainPresetFile } from "../../../profiles/schemas.js";

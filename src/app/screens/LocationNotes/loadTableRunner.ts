@@ -5,7 +5,7 @@
  * dynamics-verified planner (seconds in all). Tables are cached per geometry and train; an abort (each
  * edit) stops a running one, and progress comes as the rows are found.
  */
-import type { LoadTableRow } from "../../../core/loadTable.js";
+import type { LoadTableRow } from "../../../core/dispatch/loadTable.js";
 import { builtinLibrary, builtinTrains } from "../../../profiles/builtin.js";
 import type { FieldIssue } from "../../../profiles/issues.js";
 import type { Library } from "../../../profiles/library.js";

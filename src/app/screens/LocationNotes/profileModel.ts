@@ -3,10 +3,11 @@
  * integrated from the gradients, `elevationAt`), the standing train on it, the slack state each
  * coupling is in (`initialSlack`), the clear distance ahead and the hazards. Pure; SI metres.
  */
-import { buildConsist } from "../../../core/consist.js";
-import { initialSlack } from "../../../core/slack.js";
-import { elevationAt } from "../../../core/track.js";
-import type { StartCase, TrackProfile } from "../../../core/types.js";
+import { buildConsist } from "../../../core/train/consist.js";
+import { initialSlack } from "../../../core/train/slack.js";
+import { elevationAt } from "../../../core/physics/track.js";
+import type { StartCase } from "../../../core/train/types.js";
+import type { TrackProfile } from "../../../core/physics/types.js";
 import type { SegmentFile } from "../../../profiles/schemas.js";
 import type { HazardKind } from "./draft.js";
 

@@ -1,6 +1,6 @@
 /** Settings: units, theme, safety settings with their defaults explained, the moving lock, offline, About. */
 import { createEffect, createSignal, For, Show, type JSX } from "solid-js";
-import { STANDARD_CAUTIONS } from "../../../core/cautions.js";
+import { STANDARD_CAUTIONS } from "../../../core/planner/cautions.js";
 import { Icon } from "../../components/Icon.js";
 import { QuantityField } from "../../components/QuantityField.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";

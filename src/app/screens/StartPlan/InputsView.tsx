@@ -1,7 +1,7 @@
 /** Start plan inputs: presets, locomotives, train, location, rail condition and sand, target. */
 import { For, Index, Show, type JSX } from "solid-js";
-import { RAIL_CONDITIONS, type RailCondition } from "../../../core/types.js";
-import { gradeAt } from "../../../core/track.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../../../core/physics/types.js";
+import { gradeAt } from "../../../core/physics/track.js";
 import type { Library } from "../../../profiles/library.js";
 import { trackFromSegments } from "../../../profiles/convert.js";
 import type { LocationNoteFile, TrainPresetFile } from "../../../profiles/schemas.js";

@@ -1,7 +1,8 @@
 /** Start plan result: verdict, reasons, margins, key figures, numbered steps, charts and cautions. */
 import { createMemo, For, Index, Show, type JSX } from "solid-js";
 import type { PlanResult } from "../../../core/planner/types.js";
-import type { Reason, StartCase } from "../../../core/types.js";
+import type { Reason } from "../../../core/planner/outcome.js";
+import type { StartCase } from "../../../core/train/types.js";
 import { couplerChart } from "../../charts/couplerAlong.js";
 import { effortChart } from "../../charts/effortSpeed.js";
 import type { ChartPalette } from "../../charts/palette.js";

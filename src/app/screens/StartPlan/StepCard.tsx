@@ -1,7 +1,7 @@
 /** One numbered step of the plan: the notch large, when to advance, and the figures behind it. */
 import { Show, type JSX } from "solid-js";
 import type { PlanStep } from "../../../core/planner/types.js";
-import type { Target } from "../../../core/types.js";
+import type { Target } from "../../../core/train/types.js";
 import { localiseText, percent, show, type UnitSystem } from "../../format.js";
 import { advanceLead, advanceOthers, notchText, PHASE_WORD } from "../../steps.js";
 

@@ -3,7 +3,7 @@
  * buttons of which the plan's carries the verdict, so it stays in view while editing.
  */
 import { createSignal, Show, type JSX } from "solid-js";
-import type { Verdict } from "../../../core/types.js";
+import type { Verdict } from "../../../core/planner/outcome.js";
 import { VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
 import { InputsView, type InputsViewProps } from "./InputsView.js";
 import { ResultView, type ResultViewProps } from "./ResultView.js";

@@ -1,6 +1,6 @@
 /** The standing cautions (advisory only, and the rest), shown on every dispatcher's screen. */
 import { For, type JSX } from "solid-js";
-import { STANDARD_CAUTIONS } from "../../../core/cautions.js";
+import { STANDARD_CAUTIONS } from "../../../core/planner/cautions.js";
 
 export function Cautions(props: { extra?: readonly string[] }): JSX.Element {
   return (

@@ -1,6 +1,6 @@
 /** The rail condition × sand grid the load table, the margins per condition and the note's card all use. */
 import { For, type JSX } from "solid-js";
-import { RAIL_CONDITIONS, type RailCondition } from "../../../core/types.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../../../core/physics/types.js";
 import { RAIL_WORD } from "./words.js";
 
 export function RailSandTable(props: {

@@ -2,7 +2,9 @@
  * Words for the dispatcher's screens (Assistance check, Departures, Load table): rail conditions, where
  * added units go, an assistance option and a divided train in a line. Pure; figures in the user's units.
  */
-import type { LocoPosition, RailCondition, Reason } from "../../../core/types.js";
+import type { LocoPosition } from "../../../core/train/types.js";
+import type { RailCondition } from "../../../core/physics/types.js";
+import type { Reason } from "../../../core/planner/outcome.js";
 import type { AssistanceOptionData, DivideData } from "../../../worker/protocol.js";
 import { show, type UnitSystem } from "../../format.js";
 

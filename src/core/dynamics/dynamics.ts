@@ -6,9 +6,9 @@
  * stays put until the net force on it exceeds what holds it (breakaway, curve, brakes).
  * `step` advances the state by dt; the caller owns the clock.
  */
-import { GRAVITY_MPS2 } from "./constants.js";
-import { PRELOAD_RAMP_M } from "./coupling.js";
-import type { TrainModel } from "./trainModel.js";
+import { GRAVITY_MPS2 } from "../physics/constants.js";
+import { PRELOAD_RAMP_M } from "../physics/coupling.js";
+import type { TrainModel } from "../train/trainModel.js";
 
 export interface DynamicsState {
   t: number;

@@ -2,7 +2,7 @@
  * The "If wheels slip" card: what the locomotive's protection typically does, what the driver does,
  * and what to do if the train stalls — in our own words, from PRACTICE.md "Wheel slip" and "Starting".
  */
-import type { SlipGuidance } from "./planner/types.js";
+import type { SlipGuidance } from "./types.js";
 
 export interface SlipContext {
   sand: boolean;

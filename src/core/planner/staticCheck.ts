@@ -3,13 +3,14 @@
  * give (current limit and adhesion at the accepted slip risk), the quasi-static coupler loads, the
  * slack to take up against the distance clear ahead; margins, verdict and reasons.
  */
-import { adhesionLimitN, adhesionQuantile, demandedAdhesion, slipRisk, standstillMedian } from "./adhesion.js";
-import { buildConsist, type Consist } from "./consist.js";
-import { gearDeflectionM } from "./coupling.js";
-import { initialSlack } from "./slack.js";
-import { resistanceAtStart, standingForces, type ResistanceAtStart, type StandingForces } from "./standing.js";
-import { notchEffortN } from "./traction.js";
-import type { Reason, StartCase, Verdict } from "./types.js";
+import { adhesionLimitN, adhesionQuantile, demandedAdhesion, slipRisk, standstillMedian } from "../physics/adhesion.js";
+import { buildConsist, type Consist } from "../train/consist.js";
+import { gearDeflectionM } from "../physics/coupling.js";
+import { initialSlack } from "../train/slack.js";
+import { resistanceAtStart, standingForces, type ResistanceAtStart, type StandingForces } from "../train/standing.js";
+import { notchEffortN } from "../physics/traction.js";
+import type { Reason, Verdict } from "./outcome.js";
+import type { StartCase } from "../train/types.js";
 
 /** Power reserve below which a start counts as marginal: resistance scatters by this much [M]. */
 export const POWER_RESERVE = 1.1;

@@ -4,9 +4,9 @@
  * come back for the rest (common practice; PRACTICE.md, Alaska Railroad manual p. 64-18 [P]).
  * Found by bisection on the wagon count with the planner's verdict, below the static check's limit.
  */
-import { planStart, plannerStarts, type PlanResult } from "./planner/index.js";
-import { staticCheck } from "./staticCheck.js";
-import type { LocoGroup, StartCase } from "./types.js";
+import { planStart, plannerStarts, type PlanResult } from "../planner/index.js";
+import { staticCheck } from "../planner/staticCheck.js";
+import type { LocoGroup, StartCase } from "../train/types.js";
 
 export interface DividedTrain {
   /** Wagons in the first part (from the head); 0 when not even one wagon starts. */

@@ -2,8 +2,10 @@
  * Margins per rail condition: for one case, the planner's verdict, the margin (available ÷ needed) and the
  * limiting reason for every rail condition, without and with sand — everything else unchanged.
  */
-import { planStart } from "./planner/index.js";
-import { RAIL_CONDITIONS, type RailCondition, type Reason, type StartCase, type Verdict } from "./types.js";
+import { planStart } from "../planner/index.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../physics/types.js";
+import type { Reason, Verdict } from "../planner/outcome.js";
+import type { StartCase } from "../train/types.js";
 
 export interface ConditionMargin {
   rail: RailCondition;

@@ -3,11 +3,12 @@
  * the mid-train point that splits the train's resistance in proportion to the units' effort (so that each
  * group of powered units pulls about its own share of the train and the couplings between carry least).
  */
-import { adhesionLimitN, adhesionQuantile, standstillMedian } from "./adhesion.js";
-import { buildConsist } from "./consist.js";
-import { standingForces } from "./standing.js";
-import { notchEffortN } from "./traction.js";
-import type { LocoGroup, LocomotiveSpec, LocoPosition, StartCase } from "./types.js";
+import { adhesionLimitN, adhesionQuantile, standstillMedian } from "../physics/adhesion.js";
+import { buildConsist } from "../train/consist.js";
+import { standingForces } from "../train/standing.js";
+import { notchEffortN } from "../physics/traction.js";
+import type { LocoGroup, LocoPosition, StartCase } from "../train/types.js";
+import type { LocomotiveSpec } from "../physics/types.js";
 
 /** Units of one profile added at one place. */
 export interface AddedUnits {

@@ -4,9 +4,10 @@
  * (below the static check's limit, with the planner's verdict runs), so a mass just below a table value
  * starts and one just above does not. Rows are independent: one can be computed on its own (in a worker).
  */
-import { maxStartableMassKg } from "./planner/index.js";
-import { largestStartableMassKg } from "./startableMass.js";
-import { RAIL_CONDITIONS, type RailCondition, type StartCase } from "./types.js";
+import { maxStartableMassKg } from "../planner/index.js";
+import { largestStartableMassKg } from "../planner/startableMass.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../physics/types.js";
+import type { StartCase } from "../train/types.js";
 
 export interface LoadTableRow {
   rail: RailCondition;

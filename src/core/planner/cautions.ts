@@ -2,8 +2,8 @@
  * Cautions shown with every result (PRACTICE.md "Cautions the tool must show"), plus the ones a
  * particular case calls for. Plain words, our own.
  */
-import { gradeAt } from "./track.js";
-import type { StartCase } from "./types.js";
+import { gradeAt } from "../physics/track.js";
+import type { StartCase } from "../train/types.js";
 
 /** Shown with every plan, card and table. */
 export const STANDARD_CAUTIONS: readonly string[] = [

@@ -2,10 +2,11 @@
  * The consist: locomotives and wagons placed vehicle by vehicle, head to tail, on the track profile,
  * each with its own mass, resistance coefficients and coupling to the next.
  */
-import { couplingOfKind, type CouplingSpec } from "./coupling.js";
-import { DAVIS_DEFAULTS, breakawayResistancePermille, davisCoefficients, type DavisCoefficients } from "./resistance.js";
-import { GRAVITY_MPS2, M_PER_FT } from "./constants.js";
-import type { LocoGroup, LocomotiveSpec, StartCase, TrainSpec } from "./types.js";
+import { couplingOfKind, type CouplingSpec } from "../physics/coupling.js";
+import { DAVIS_DEFAULTS, breakawayResistancePermille, davisCoefficients, type DavisCoefficients } from "../physics/resistance.js";
+import { GRAVITY_MPS2, M_PER_FT } from "../physics/constants.js";
+import type { LocoGroup, StartCase, TrainSpec } from "./types.js";
+import type { LocomotiveSpec } from "../physics/types.js";
 
 export interface Vehicle {
   kind: "locomotive" | "wagon";

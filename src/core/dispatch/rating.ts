@@ -3,7 +3,7 @@
  * tractive effort (gross trailing load), the ruling grade a train can climb, and the starting limit
  * mass. They use the same resistance functions as the rest of the core.
  */
-import { GRAVITY_MPS2, KG_PER_SHORT_TON, NEWTONS_PER_LBF } from "./constants.js";
+import { GRAVITY_MPS2, KG_PER_SHORT_TON, NEWTONS_PER_LBF } from "../physics/constants.js";
 
 /** Locomotive's own resistance in the rating rule: 20 lb per short ton [P: US Army TR 0603 §2.18], N/kg. */
 const RATING_LOCO_RESISTANCE_N_PER_KG = (20 * NEWTONS_PER_LBF) / KG_PER_SHORT_TON;

@@ -5,7 +5,7 @@
  */
 import { kineticEnergyJ, type DynamicsState } from "./dynamics.js";
 import { Run, type Observation, type SeriesBuffer, type SlipEpisode } from "./runner.js";
-import type { TrainModel } from "./trainModel.js";
+import type { TrainModel } from "../train/trainModel.js";
 
 export type { Observation, SlipEpisode } from "./runner.js";
 

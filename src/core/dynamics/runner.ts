@@ -3,9 +3,9 @@
  * schedule and the running records (when each vehicle first moved, slips, a decimated series).
  * `simulate` drives one run to the end; the planner clones runs to try alternatives from a shared start.
  */
-import { adhesionSpeedFactor, slipRisk } from "./adhesion.js";
+import { adhesionSpeedFactor, slipRisk } from "../physics/adhesion.js";
 import { applyBrakes, createState, evaluate, step, type DynamicsState } from "./dynamics.js";
-import { stableTimeStep, type TrainModel } from "./trainModel.js";
+import { stableTimeStep, type TrainModel } from "../train/trainModel.js";
 
 /** What a controller (a driver, or the planner's policy) can observe. */
 export interface Observation {

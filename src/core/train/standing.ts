@@ -3,9 +3,9 @@
  * breakaway and running resistance at rest. Summed, they give the train's resistance at starting.
  */
 import type { Consist } from "./consist.js";
-import { curveForceN, gradeForceN } from "./resistance.js";
-import { curveRadiusAt, gradeAt } from "./track.js";
-import type { TrackProfile } from "./types.js";
+import { curveForceN, gradeForceN } from "../physics/resistance.js";
+import { curveRadiusAt, gradeAt } from "../physics/track.js";
+import type { TrackProfile } from "../physics/types.js";
 
 export interface StandingForces {
   gradeN: Float64Array;

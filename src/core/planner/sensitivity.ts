@@ -4,7 +4,8 @@
  * the smallest of adhesion, power and coupler) is compared with the case's own.
  */
 import { staticCheck } from "./staticCheck.js";
-import type { AdhesionTable, StartCase } from "./types.js";
+import type { AdhesionTable } from "../physics/types.js";
+import type { StartCase } from "../train/types.js";
 
 export type SensitivityInput = "mass" | "adhesion" | "grade" | "slack";
 

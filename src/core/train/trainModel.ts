@@ -2,13 +2,14 @@
  * The train as the dynamics loop sees it: one mass per vehicle and one connection per coupling, all
  * parameters flattened into Float64Arrays so the inner loop reads memory in order and allocates nothing.
  */
-import { adhesionQuantile, standstillMedian } from "./adhesion.js";
-import { GRAVITY_MPS2 } from "./constants.js";
+import { adhesionQuantile, standstillMedian } from "../physics/adhesion.js";
+import { GRAVITY_MPS2 } from "../physics/constants.js";
 import { buildConsist, type Consist } from "./consist.js";
-import { PRELOAD_RAMP_M, type CouplingSpec } from "./coupling.js";
-import { BREAKAWAY_FADE_SPEED_MPS, curveResistancePermille } from "./resistance.js";
+import { PRELOAD_RAMP_M, type CouplingSpec } from "../physics/coupling.js";
+import { BREAKAWAY_FADE_SPEED_MPS, curveResistancePermille } from "../physics/resistance.js";
 import { initialSlack } from "./slack.js";
-import type { LocomotiveSpec, SlackState, StartCase, TrackProfile } from "./types.js";
+import type { LocomotiveSpec, TrackProfile } from "../physics/types.js";
+import type { SlackState, StartCase } from "./types.js";
 
 export interface TrainModel {
   /** Vehicles, head to tail. */

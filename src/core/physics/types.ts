@@ -1,6 +1,6 @@
 /**
- * The core's typed, SI-valued view of a start case. Files use units in their field names
- * (mass_t, force_kN); `src/profiles` converts them into these shapes once, at the boundary.
+ * The physics' typed, SI-valued view of one vehicle and what it stands on: rail conditions and their
+ * adhesion, the locomotive and wagon specs, the track profile. `src/profiles` converts files into these.
  */
 
 export const RAIL_CONDITIONS = ["dry", "damp", "wet", "frost", "leaves", "greasy"] as const;
@@ -8,9 +8,6 @@ export type RailCondition = (typeof RAIL_CONDITIONS)[number];
 
 export type Bearing = "roller" | "plain";
 export type CouplingKind = "knuckle" | "screw";
-export type SlackState = "bunched" | "stretched" | "from-profile";
-export type Verdict = "starts" | "marginal" | "needs-assistance";
-export type Reason = "adhesion" | "power" | "coupler" | "distance";
 
 /** Adhesion of one rail condition: median at standstill without and with sand, and spread σ of ln μ. */
 export interface AdhesionCondition {
@@ -65,29 +62,6 @@ export interface WagonSpec {
   startingResistancePermille?: number;
 }
 
-export type LocoPosition = "head" | "rear" | { afterWagon: number };
-
-export interface LocoGroup {
-  spec: LocomotiveSpec;
-  count: number;
-  position: LocoPosition;
-}
-
-export interface TrainSpec {
-  trailingMassKg: number;
-  wagons: number;
-  /** Length of the trailing load (wagons only), m. */
-  lengthM: number;
-  /** Free slack per coupling, m. */
-  couplerSlackM: number;
-  bearing: Bearing;
-  /** Working limit of the weakest coupling, N. */
-  couplerLimitN: number;
-  coupling: CouplingKind;
-  wagon: WagonSpec;
-  slackState: SlackState;
-}
-
 /** A piece of track with constant gradient and curvature; chainage grows in the direction of travel. */
 export interface TrackSegment {
   startM: number;
@@ -102,46 +76,8 @@ export interface TrackProfile {
   segments: readonly TrackSegment[];
 }
 
-export interface Location {
-  track: TrackProfile;
-  /** Chainage of the front of the standing train, m. */
-  frontAtM: number;
-  /** Distance clear ahead of the front, m. */
-  clearAheadM: number;
-}
-
 export interface Conditions {
   rail: RailCondition;
   sand: boolean;
   temperatureC: number;
-}
-
-export type Target = { kind: "speed"; speedMps: number } | { kind: "distance"; distanceM: number };
-
-/** Settings that shape verdicts and plans; defaults in `DEFAULT_SETTINGS`. */
-export interface Settings {
-  /** Peak coupler force must stay ≤ working limit ÷ this factor. */
-  couplerSafetyFactor: number;
-  /** Highest acceptable slip risk of any step (probability 0..1). */
-  slipRiskThreshold: number;
-  /** Locomotive speed to keep while the slack comes out, m/s (common practice: about 1 mph). */
-  stretchSpeedMps: number;
-}
-
-export const DEFAULT_SETTINGS: Settings = {
-  // [M] a working limit ÷ 1.2 leaves room for the scatter the model does not capture (uneven slack, gear wear).
-  couplerSafetyFactor: 1.2,
-  slipRiskThreshold: 0.1,
-  // Common practice: about 1 mph until the whole train moves (NAVFAC P-301).
-  stretchSpeedMps: 0.44704,
-};
-
-export interface StartCase {
-  locomotives: readonly LocoGroup[];
-  train: TrainSpec;
-  location: Location;
-  conditions: Conditions;
-  target: Target;
-  adhesion: AdhesionTable;
-  settings: Settings;
 }

@@ -8,9 +8,11 @@
  */
 import { middleWagon, positionWords, proportionalSplitWagon, withAddedUnits, leadSpec, type AddedUnits } from "./assistPlacement.js";
 import { divideTrain, type DividedTrain } from "./divideTrain.js";
-import { planStart, type PlanResult } from "./planner/index.js";
-import { staticCheck } from "./staticCheck.js";
-import type { LocomotiveSpec, Reason, StartCase, Verdict } from "./types.js";
+import { planStart, type PlanResult } from "../planner/index.js";
+import { staticCheck } from "../planner/staticCheck.js";
+import type { LocomotiveSpec } from "../physics/types.js";
+import type { Reason, Verdict } from "../planner/outcome.js";
+import type { StartCase } from "../train/types.js";
 
 /** One way of adding units, and what the planner says of it. */
 export interface AssistanceOption {

@@ -2,7 +2,7 @@
  * The largest trailing mass that still starts, everything else unchanged (same wagons, same length),
  * found by bisection over a verdict function. The verdict must be monotonic in mass.
  */
-import type { StartCase } from "./types.js";
+import type { StartCase } from "../train/types.js";
 
 /** The bracket never needs to be narrower than this, kg. */
 const MIN_TOLERANCE_KG = 50;

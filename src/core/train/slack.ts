@@ -5,8 +5,9 @@
  * stretched over a crest and on a rising grade (PHYSICS.md §5; PRACTICE.md "Sag", "Crest").
  */
 import type { Consist } from "./consist.js";
-import { gradeAt } from "./track.js";
-import type { SlackState, TrackProfile } from "./types.js";
+import { gradeAt } from "../physics/track.js";
+import type { SlackState } from "./types.js";
+import type { TrackProfile } from "../physics/types.js";
 
 /** +1 stretched, −1 bunched, one entry per coupling (head to tail). */
 export type SlackSigns = Int8Array;

@@ -1,0 +1,68 @@
+/**
+ * The core's typed, SI-valued view of a start case. Files use units in their field names
+ * (mass_t, force_kN); `src/profiles` converts them into these shapes once, at the boundary.
+ */
+
+import type { AdhesionTable, Bearing, Conditions, CouplingKind, LocomotiveSpec, TrackProfile, WagonSpec } from "../physics/types.js";
+
+export type SlackState = "bunched" | "stretched" | "from-profile";
+export type LocoPosition = "head" | "rear" | { afterWagon: number };
+
+export interface LocoGroup {
+  spec: LocomotiveSpec;
+  count: number;
+  position: LocoPosition;
+}
+
+export interface TrainSpec {
+  trailingMassKg: number;
+  wagons: number;
+  /** Length of the trailing load (wagons only), m. */
+  lengthM: number;
+  /** Free slack per coupling, m. */
+  couplerSlackM: number;
+  bearing: Bearing;
+  /** Working limit of the weakest coupling, N. */
+  couplerLimitN: number;
+  coupling: CouplingKind;
+  wagon: WagonSpec;
+  slackState: SlackState;
+}
+
+export interface Location {
+  track: TrackProfile;
+  /** Chainage of the front of the standing train, m. */
+  frontAtM: number;
+  /** Distance clear ahead of the front, m. */
+  clearAheadM: number;
+}
+
+export type Target = { kind: "speed"; speedMps: number } | { kind: "distance"; distanceM: number };
+
+/** Settings that shape verdicts and plans; defaults in `DEFAULT_SETTINGS`. */
+export interface Settings {
+  /** Peak coupler force must stay ≤ working limit ÷ this factor. */
+  couplerSafetyFactor: number;
+  /** Highest acceptable slip risk of any step (probability 0..1). */
+  slipRiskThreshold: number;
+  /** Locomotive speed to keep while the slack comes out, m/s (common practice: about 1 mph). */
+  stretchSpeedMps: number;
+}
+
+export const DEFAULT_SETTINGS: Settings = {
+  // [M] a working limit ÷ 1.2 leaves room for the scatter the model does not capture (uneven slack, gear wear).
+  couplerSafetyFactor: 1.2,
+  slipRiskThreshold: 0.1,
+  // Common practice: about 1 mph until the whole train moves (NAVFAC P-301).
+  stretchSpeedMps: 0.44704,
+};
+
+export interface StartCase {
+  locomotives: readonly LocoGroup[];
+  train: TrainSpec;
+  location: Location;
+  conditions: Conditions;
+  target: Target;
+  adhesion: AdhesionTable;
+  settings: Settings;
+}
