@@ -2,27 +2,13 @@
  * The `taut` command line: the same core as the app, for scripts. Exit codes: 0 success,
  * 2 bad input (with the field and the rule broken), 1 internal error.
  */
-import { parseArgs, type ParseArgsConfig } from "node:util";
+import { parseArgs } from "node:util";
+import type { Command, Output } from "./command.js";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "./errors.js";
 import { planCommand } from "./commands/plan.js";
 import { simulateCommand } from "./commands/simulate.js";
 import { checkCommand } from "./commands/check.js";
 import { tableCommand } from "./commands/table.js";
-
-export interface Command {
-  name: string;
-  summary: string;
-  usage: string;
-  help: string;
-  options: NonNullable<ParseArgsConfig["options"]>;
-  run(args: { values: Record<string, unknown>; positionals: string[] }, out: Output): number | Promise<number>;
-}
-
-/** Where commands write: stdout for results, stderr for progress and errors. */
-export interface Output {
-  out(text: string): void;
-  err(text: string): void;
-}
 
 const COMMANDS: Command[] = [planCommand, checkCommand, tableCommand, simulateCommand];
 

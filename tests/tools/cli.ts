@@ -1,5 +1,6 @@
 /** Run the command line in-process with its output captured (fast: no process, no loader). */
-import { main, type Output } from "../../src/cli/main.js";
+import type { Output } from "../../src/cli/command.js";
+import { main } from "../../src/cli/main.js";
 
 export interface Run {
   code: number;

@@ -2,13 +2,13 @@
 import { STANDARD_CAUTIONS } from "../../core/planner/cautions.js";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "../errors.js";
 import { library, readNotesFiles } from "../files.js";
-import type { Command, Output } from "../main.js";
-import { checkDepartures, type CheckProgress } from "../batch/checkDepartures.js";
+import type { Command } from "../command.js";
+import { checkDepartures } from "../batch/checkDepartures.js";
 import { readDepartures } from "../batch/departures.js";
 import { CHECK_ASSISTANCE_BUDGET, CHECK_DIVIDE_BUDGET } from "../batch/jobs.js";
 import { defaultPoolSize, JobPool } from "../batch/pool.js";
 import { checkCsv, renderCheck, summarise } from "../render/check.js";
-import { helperSpec } from "./plan.js";
+import { helperSpec, jobsOption, progressReporter } from "../options.js";
 
 export const checkCommand: Command = {
   name: "check",
@@ -94,28 +94,4 @@ function median(xs: readonly number[]): number {
   const s = [...xs].sort((a, b) => a - b);
   const m = s.length >> 1;
   return s.length % 2 ? s[m]! : 0.5 * (s[m - 1]! + s[m]!);
-}
-
-/** --jobs N: a whole number from 1 to 64; default the available cores. */
-export function jobsOption(v: string | undefined): number {
-  if (v === undefined) return defaultPoolSize();
-  const n = Number(v);
-  if (!Number.isInteger(n) || n < 1 || n > 64) throw new InputError(`--jobs: must be a whole number from 1 to 64 (got "${v}")`);
-  return n;
-}
-
-/** Progress lines on stderr: at each tenth of the way, and at most every two seconds otherwise. */
-export function progressReporter(io: Output, what: string): (p: CheckProgress) => void {
-  const t0 = performance.now();
-  let lastTenth = 0;
-  let lastAt = t0;
-  return ({ done, total }) => {
-    const now = performance.now();
-    const tenth = Math.floor((10 * done) / total);
-    if (done < total && tenth === lastTenth && now - lastAt < 2000) return;
-    if (done === total && total === 0) return;
-    lastTenth = tenth;
-    lastAt = now;
-    io.err(`taut: ${done}/${total} ${what} (${Math.round((100 * done) / total)}%), ${((now - t0) / 1000).toFixed(1)} s`);
-  };
 }

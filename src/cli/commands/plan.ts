@@ -8,10 +8,10 @@ import { planReport as reportOf, type PlanReport } from "../../profiles/report.j
 import { assistanceReport, conditionMarginReport } from "../../profiles/assistanceReport.js";
 import type { LocomotiveSpec } from "../../core/physics/types.js";
 import type { StartCase } from "../../core/train/types.js";
-import type { Library } from "../../profiles/library.js";
 import { InputError } from "../errors.js";
 import { library, readNotesFiles, readStartCase } from "../files.js";
-import type { Command } from "../main.js";
+import type { Command } from "../command.js";
+import { helperSpec } from "../options.js";
 import { renderPlan } from "../render/plan.js";
 
 /** Planner runs the assistance search may use inside `taut plan` for the options, and for dividing the train. */
@@ -81,14 +81,6 @@ export const planCommand: Command = {
     return 0;
   },
 };
-
-/** The locomotive profile named by --helper, or undefined for the lead unit's. */
-export function helperSpec(lib: Library, id: string | undefined): LocomotiveSpec | undefined {
-  if (id === undefined) return undefined;
-  const found = lib.locomotives.get(id);
-  if (!found) throw new InputError(`--helper: no locomotive profile "${id}" (known: ${[...lib.locomotives.keys()].join(", ")})`);
-  return found.spec;
-}
 
 export function caseMeta(raw: Record<string, unknown>): PlanReport["case"] {
   const meta: PlanReport["case"] = {};

@@ -4,7 +4,7 @@ import { modelFromCase } from "../../core/train/trainModel.js";
 import type { StartCase } from "../../core/train/types.js";
 import { InputError } from "../errors.js";
 import { library, readStartCase } from "../files.js";
-import type { Command } from "../main.js";
+import type { Command } from "../command.js";
 import { num, textTable } from "../table.js";
 
 /** Longest run when the target is not reached, s. */

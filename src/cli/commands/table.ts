@@ -10,12 +10,12 @@ import { resolveStartCase } from "../../profiles/parse.js";
 import type { LocationNoteFile, StartCaseFile } from "../../profiles/schemas.js";
 import { InputError } from "../errors.js";
 import { library, readNotesFiles } from "../files.js";
-import type { Command } from "../main.js";
+import type { Command } from "../command.js";
 import { JobPool } from "../batch/pool.js";
 import type { MassOutcome } from "../batch/jobs.js";
 import { csv, num, textTable } from "../table.js";
 import { wrap } from "../render/wrap.js";
-import { jobsOption, progressReporter } from "./check.js";
+import { jobsOption, progressReporter } from "../options.js";
 import { existsSync } from "node:fs";
 
 /** Reference train when the note has none and the options say nothing: 40 loaded bogie hoppers. */

@@ -1,0 +1,39 @@
+/** Option helpers shared by several commands: --jobs, --helper and the progress lines on stderr. */
+import type { LocomotiveSpec } from "../core/physics/types.js";
+import type { Library } from "../profiles/library.js";
+import type { CheckProgress } from "./batch/checkDepartures.js";
+import { defaultPoolSize } from "./batch/pool.js";
+import type { Output } from "./command.js";
+import { InputError } from "./errors.js";
+
+/** The locomotive profile named by --helper, or undefined for the lead unit's. */
+export function helperSpec(lib: Library, id: string | undefined): LocomotiveSpec | undefined {
+  if (id === undefined) return undefined;
+  const found = lib.locomotives.get(id);
+  if (!found) throw new InputError(`--helper: no locomotive profile "${id}" (known: ${[...lib.locomotives.keys()].join(", ")})`);
+  return found.spec;
+}
+
+/** --jobs N: a whole number from 1 to 64; default the available cores. */
+export function jobsOption(v: string | undefined): number {
+  if (v === undefined) return defaultPoolSize();
+  const n = Number(v);
+  if (!Number.isInteger(n) || n < 1 || n > 64) throw new InputError(`--jobs: must be a whole number from 1 to 64 (got "${v}")`);
+  return n;
+}
+
+/** Progress lines on stderr: at each tenth of the way, and at most every two seconds otherwise. */
+export function progressReporter(io: Output, what: string): (p: CheckProgress) => void {
+  const t0 = performance.now();
+  let lastTenth = 0;
+  let lastAt = t0;
+  return ({ done, total }) => {
+    const now = performance.now();
+    const tenth = Math.floor((10 * done) / total);
+    if (done < total && tenth === lastTenth && now - lastAt < 2000) return;
+    if (done === total && total === 0) return;
+    lastTenth = tenth;
+    lastAt = now;
+    io.err(`taut: ${done}/${total} ${what} (${Math.round((100 * done) / total)}%), ${((now - t0) / 1000).toFixed(1)} s`);
+  };
+}
