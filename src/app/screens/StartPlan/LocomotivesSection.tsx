@@ -1,0 +1,91 @@
+/** Start plan inputs, locomotives: groups of one profile, how many, and where in the train. */
+import { For, Index, Show, type JSX } from "solid-js";
+import type { Library } from "../../../profiles/library.js";
+import { Icon } from "../../components/Icon.js";
+import { QuantityField } from "../../components/QuantityField.js";
+import { SegmentedButtons } from "../../components/SegmentedButtons.js";
+import type { DraftPosition } from "../../state/caseDraft.js";
+import { issueFinder, type InputSectionProps } from "./inputSection.js";
+
+export interface LocomotivesSectionProps extends InputSectionProps {
+  library: Library;
+}
+
+/** Locomotive groups: profile, count and position; up to eight groups. */
+export function LocomotivesSection(props: LocomotivesSectionProps): JSX.Element {
+  const s = props.store;
+  const d = s.draft;
+  const issue = issueFinder(s);
+  return (
+    <section class="panel">
+      <h2>Locomotives</h2>
+      <Index each={d.locomotives}>
+        {(loco, k) => (
+          <div class="loco-group">
+            <div class="field" data-field={`locomotives[${k}].profile`}>
+              <label class="field-label" for={`loco-${k}`}>
+                Locomotive profile
+              </label>
+              <select id={`loco-${k}`} class="select" value={loco().profile} onChange={(e) => s.set("locomotives", k, "profile", e.currentTarget.value)}>
+                <For each={[...props.library.locomotives.values()]}>{(l) => <option value={l.spec.id}>{l.spec.label}</option>}</For>
+              </select>
+              <Show when={issue(`locomotives[${k}].profile`)}>
+                <p class="field-issue" role="alert">
+                  Locomotive profile {issue(`locomotives[${k}].profile`)}
+                </p>
+              </Show>
+            </div>
+            <div class="row">
+              <QuantityField
+                name={`locomotives[${k}].count`}
+                label="How many"
+                value={loco().count}
+                onValue={(v) => s.set("locomotives", k, "count", v)}
+                units={props.units}
+                integer
+                step={1}
+                min={1}
+                max={8}
+                issue={issue(`locomotives[${k}].count`)}
+              />
+              <SegmentedButtons<DraftPosition>
+                name={`locomotives[${k}].position`}
+                label="Position"
+                value={loco().position}
+                onChange={(v) => s.set("locomotives", k, "position", v)}
+                options={[
+                  { value: "head", label: "Head" },
+                  { value: "after", label: "Mid-train" },
+                  { value: "rear", label: "Rear" },
+                ]}
+              />
+            </div>
+            <Show when={loco().position === "after"}>
+              <QuantityField
+                name={`locomotives[${k}].position.afterWagon`}
+                label="After wagon"
+                value={loco().afterWagon}
+                onValue={(v) => s.set("locomotives", k, "afterWagon", v)}
+                units={props.units}
+                integer
+                step={1}
+                min={1}
+                issue={issue(`locomotives[${k}].position.afterWagon`, `locomotives[${k}].position`)}
+              />
+            </Show>
+            <Show when={d.locomotives.length > 1}>
+              <button type="button" class="button subtle" onClick={() => s.removeLocomotive(k)}>
+                <Icon name="remove" /> Remove this group
+              </button>
+            </Show>
+          </div>
+        )}
+      </Index>
+      <Show when={d.locomotives.length < 8}>
+        <button type="button" class="button" onClick={() => s.addLocomotive()}>
+          <Icon name="add" /> Add locomotives (head, mid-train or rear)
+        </button>
+      </Show>
+    </section>
+  );
+}

@@ -1,0 +1,58 @@
+/** Start plan inputs, target: plan until a speed, or until a distance is cleared. */
+import { Show, type JSX } from "solid-js";
+import { QuantityField } from "../../components/QuantityField.js";
+import { SegmentedButtons } from "../../components/SegmentedButtons.js";
+import { issueFinder, type InputSectionProps } from "./inputSection.js";
+
+/** The end of the plan: a speed or a distance cleared. */
+export function TargetSection(props: InputSectionProps): JSX.Element {
+  const s = props.store;
+  const d = s.draft;
+  const issue = issueFinder(s);
+  return (
+    <section class="panel">
+      <h2>Target</h2>
+      <SegmentedButtons
+        name="targetKind"
+        label="Plan until"
+        value={d.targetKind}
+        onChange={(v) => s.set("targetKind", v)}
+        options={[
+          { value: "speed", label: "A speed" },
+          { value: "distance", label: "A distance cleared" },
+        ]}
+      />
+      <Show
+        when={d.targetKind === "speed"}
+        fallback={
+          <QuantityField
+            name="target.distance_m"
+            label="Target distance"
+            measure="distance"
+            fileUnit="m"
+            value={d.target.distance_m}
+            onValue={(v) => s.set("target", "distance_m", v)}
+            units={props.units}
+            step={{ metric: 50, us: 100 }}
+            min={0}
+            issue={issue("target.distance_m")}
+          />
+        }
+      >
+        <QuantityField
+          name="target.speed_kmh"
+          label="Target speed"
+          measure="speed"
+          fileUnit="kmh"
+          value={d.target.speed_kmh}
+          onValue={(v) => s.set("target", "speed_kmh", v)}
+          units={props.units}
+          step={{ metric: 5, us: 5 }}
+          min={0}
+          decimals={0}
+          issue={issue("target.speed_kmh")}
+        />
+      </Show>
+    </section>
+  );
+}
