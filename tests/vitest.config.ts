@@ -1,6 +1,6 @@
 /**
  * Test runner configuration: one project per runtime. `npm test` runs them all.
- * - unit: core, reference checks, profiles, CLI, notes store, worker protocol (Node)
+ * - unit: architecture (import rules), core, reference checks, profiles, CLI, notes store, worker protocol (Node)
  * - app: Solid components (jsdom)
  * - e2e: the built app in Debian's Chromium (playwright-core); its global setup builds and serves the app
  */
@@ -19,7 +19,7 @@ export default defineConfig({
           name: "unit",
           root,
           environment: "node",
-          include: ["tests/{core,reference,profiles,cli,notes,worker}/**/*.test.ts"],
+          include: ["tests/{architecture,core,reference,profiles,cli,notes,worker}/**/*.test.ts"],
           testTimeout: 60_000,
         },
       },
