@@ -7,6 +7,7 @@ import { createCaseDraft } from "./state/createCaseDraft.js";
 import { createLocations } from "./state/createLocations.js";
 import { createMotionLock } from "./state/createMotionLock.js";
 import { createNav } from "./state/createNav.js";
+import type { Probe } from "./state/createConnection.js";
 import { createOffline, type RegisterSW } from "./state/createOffline.js";
 import { createPlanRun } from "./state/createPlanRun.js";
 import { createSettings } from "./state/createSettings.js";
@@ -17,6 +18,8 @@ export interface AppDeps {
   /** A second worker for the slower largest-startable-mass search after each plan. */
   background?: PlannerClient;
   registerSW: RegisterSW | null;
+  /** Whether the server can be reached (default: a HEAD request for the app's address; see createConnection). */
+  connectionProbe?: Probe | null;
   screenIds: readonly string[];
   storage?: Storage | null;
   debounceMs?: number;
@@ -80,7 +83,7 @@ export function createAppState(deps: AppDeps): AppContextValue {
     run,
     locations,
     nav: createNav(deps.screenIds, deps.screenIds[0] ?? ""),
-    offline: createOffline(deps.registerSW, firstPlanShown),
+    offline: createOffline(deps.registerSW, firstPlanShown, deps.connectionProbe !== undefined ? { probe: deps.connectionProbe } : {}),
     theme: createTheme(() => settings.settings().theme),
     motion: createMotionLock(() => settings.settings().motionLock, deps.geolocation ?? (typeof navigator !== "undefined" ? navigator.geolocation : undefined)),
     planner: deps.planner,

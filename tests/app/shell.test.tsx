@@ -117,7 +117,7 @@ describe("offline and updates", () => {
     Object.defineProperty(navigator, "serviceWorker", { value: { controller: null }, configurable: true });
     try {
       render(() => {
-        const state = createAppState({ planner: createPlannerClient({ createWorker: () => new InProcessWorker() }), registerSW: register, screenIds: SCREENS.map((s) => s.id), storage: memoryStorage() });
+        const state = createAppState({ planner: createPlannerClient({ createWorker: () => new InProcessWorker() }), registerSW: register, connectionProbe: async () => undefined, screenIds: SCREENS.map((s) => s.id), storage: memoryStorage() });
         return <App state={state} screens={SCREENS} />;
       });
       // Registration waits for the first plan on screen.

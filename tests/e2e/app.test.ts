@@ -214,20 +214,53 @@ describe("Taut in Chromium", () => {
     // The page is controlled from the next navigation on.
     await page.reload();
     await page.waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, { timeout: 20_000 });
-    await page.waitForSelector('.offline-status[data-ready="yes"]', { timeout: 20_000 });
-    await context.setOffline(true);
+    const status = page.locator(".offline-status");
+    await status.getByText("Ready offline", { exact: true }).waitFor({ timeout: 20_000 });
+    // The network goes away: every request that reaches it fails as with a lost connection. Requests the
+    // service worker answers from its copy never reach it. (Not the browser's "offline" emulation: whether it
+    // also sets navigator.onLine differs between versions, and the app must not rest on that flag anyway.)
+    const failed: string[] = [];
+    const problemsBefore = problems.length;
+    await context.route("**/*", (route) => {
+      failed.push(`${route.request().method()} ${route.request().url()}`);
+      return route.abort("internetdisconnected");
+    });
+    const mass = page.getByLabel(/^Trailing mass/).and(page.locator("input"));
     try {
       await page.reload();
       await waitForCurrentPlan();
-      await page.getByText(/Offline/).first().waitFor();
-      // A fresh plan, computed offline by a worker loaded from the cache.
+      // The app saw for itself that its server did not answer, and says so.
+      await page.waitForSelector('.offline-status[title^="No answer from the server at"]', { timeout: 30_000 });
+      expect(await status.textContent()).toBe("Offline — working from the saved copy");
+      expect(failed.some((f) => f.startsWith("HEAD "))).toBe(true);
+      // A fresh plan, computed offline by a worker loaded from the cache, for a changed input.
+      const before = Number(await mass.inputValue());
+      const planBefore = await page.locator(".pane-plan").textContent();
       await page.getByRole("button", { name: "Trailing mass: more" }).click();
-      await page.waitForSelector(".verdict.stale", { timeout: 5_000 }).catch(() => undefined);
-      await waitForCurrentPlan();
+      expect(Number(await mass.inputValue())).toBeGreaterThan(before);
+      await page.waitForFunction(
+        (old) => {
+          const done = document.querySelector(".verdict:not(.stale)") && !document.querySelector('.result[aria-busy="true"]');
+          return done && document.querySelector(".pane-plan")?.textContent !== old;
+        },
+        planBefore,
+        { timeout: 30_000 },
+      );
       await shot("start-plan-offline-landscape");
+      // Nothing the app is made of had to come from the network (only the app's checks, and the browser's own
+      // check for a new service worker, may have tried).
+      expect(failed.filter((f) => !f.startsWith("HEAD ") && !/\/sw\.js$/.test(f))).toEqual([]);
     } finally {
-      await context.setOffline(false);
+      await context.unroute("**/*");
+      // The browser logs each failed request as an error; the app's checks of a network that is gone are expected to fail.
+      const lost = "console: Failed to load resource: net::ERR_INTERNET_DISCONNECTED";
+      problems.splice(problemsBefore, problems.length - problemsBefore, ...problems.slice(problemsBefore).filter((p) => p !== lost));
     }
+    // The network is back: the check at load gets an answer.
+    await page.reload();
+    await waitForCurrentPlan();
+    await page.waitForSelector('.offline-status[title^="The server answered at"]', { timeout: 30_000 });
+    expect(await status.textContent()).toBe("Ready offline");
   });
 
   it("loads again from the caches quickly (repeat visit)", async () => {

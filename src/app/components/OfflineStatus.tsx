@@ -1,7 +1,20 @@
 /** "Ready offline", "Offline", or "Saving for offline use…", in the top bar. */
 import { Show, type JSX } from "solid-js";
+import type { Observation } from "../state/createConnection.js";
 import type { OfflineState } from "../state/createOffline.js";
 import { Icon } from "./Icon.js";
+
+/** Hours and minutes, written out (no Intl: its locale data would load for this alone). */
+function clock(at: number): string {
+  const d = new Date(at);
+  return `${String(d.getHours()).padStart(2, "0")}:${String(d.getMinutes()).padStart(2, "0")}`;
+}
+
+/** What the status rests on, in words: the device's own report, or the app's last request to its server. */
+export function observationText(o: Observation): string {
+  if (o.source === "browser") return o.online ? "The device reports a network connection" : "The device reports no network connection";
+  return o.online ? `The server answered at ${clock(o.at)}` : `No answer from the server at ${clock(o.at)}`;
+}
 
 export function OfflineStatus(props: { offline: OfflineState }): JSX.Element {
   const o = props.offline;
@@ -11,7 +24,14 @@ export function OfflineStatus(props: { offline: OfflineState }): JSX.Element {
     return o.ready() ? "Ready offline" : "Saving for offline use…";
   };
   return (
-    <p class="offline-status" classList={{ ready: o.ready(), away: !o.online() }} role="status" data-ready={o.ready() ? "yes" : "no"}>
+    <p
+      class="offline-status"
+      classList={{ ready: o.ready(), away: !o.online() }}
+      role="status"
+      data-ready={o.ready() ? "yes" : "no"}
+      data-online={o.online() ? "yes" : "no"}
+      title={o.supported ? observationText(o.observation()) : undefined}
+    >
       <Icon name={o.online() ? "ready" : "offline"} size={20} />
       <span>{text()}</span>
       <Show when={o.problem()}>

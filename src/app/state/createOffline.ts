@@ -1,9 +1,11 @@
 /**
- * Offline readiness and updates, from the service worker registration (vite-plugin-pwa's
- * `sw/register.ts`, passed in so tests and non-PWA builds can do without). "Ready offline" once the
- * app is precached; a new version waits until the user agrees to update.
+ * Offline readiness and updates, from the service worker registration (`sw/register.ts`, passed in so
+ * tests and non-PWA builds can do without). "Ready offline" once the app is precached; a new version
+ * waits until the user agrees to update. Whether the server can be reached is observed
+ * (`createConnection`): the browser's events, the app's own small checks and the update checks.
  */
-import { createSignal, onCleanup, type Accessor } from "solid-js";
+import { createSignal, type Accessor } from "solid-js";
+import { createConnection, headProbe, type Observation, type Probe } from "./createConnection.js";
 
 export interface RegisterOptions {
   immediate?: boolean;
@@ -17,7 +19,10 @@ export type RegisterSW = (options: RegisterOptions) => (reloadPage?: boolean) =>
 export interface OfflineState {
   /** The service worker holds a full copy of the app. */
   ready: Accessor<boolean>;
+  /** The server could be reached, as last observed. */
   online: Accessor<boolean>;
+  /** What `online` rests on, and when it was seen. */
+  observation: Accessor<Observation>;
   /** A new version is installed and waiting. */
   updateWaiting: Accessor<boolean>;
   /** A message when registration failed. */
@@ -25,31 +30,31 @@ export interface OfflineState {
   supported: boolean;
   update(): Promise<void>;
   later(): void;
-  /** Ask the server whether a newer version exists. */
+  /** Ask the server whether a newer version exists (a failure to reach it counts as offline). */
   check(): Promise<void>;
+}
+
+export interface OfflineOptions {
+  /** The reachability check (default: a HEAD request for the app's own address; null: none). */
+  probe?: Probe | null;
+  /** Between reachability checks while the page is visible. */
+  everyMs?: number;
 }
 
 /**
  * `after`: register only once this settles (the app registers after the first plan is on screen, so the
  * service worker's precaching does not compete with it for the two cores of a tablet).
  */
-export function createOffline(register: RegisterSW | null, after: Promise<unknown> = Promise.resolve()): OfflineState {
+export function createOffline(register: RegisterSW | null, after: Promise<unknown> = Promise.resolve(), options: OfflineOptions = {}): OfflineState {
   const supported = register !== null && typeof navigator !== "undefined" && "serviceWorker" in navigator;
   const [ready, setReady] = createSignal(supported && navigator.serviceWorker.controller !== null);
-  const [online, setOnline] = createSignal(typeof navigator === "undefined" ? true : navigator.onLine);
+  // Only an app that can work offline has a use for knowing: the checks run when it has a service worker.
+  const probe = !supported ? null : options.probe !== undefined ? options.probe : typeof fetch === "function" ? headProbe(new URL("./", document.baseURI).href) : null;
+  const connection = createConnection({ probe, after, ...(options.everyMs !== undefined ? { everyMs: options.everyMs } : {}) });
   const [updateWaiting, setUpdateWaiting] = createSignal(false);
   const [problem, setProblem] = createSignal<string | null>(null);
   let registration: ServiceWorkerRegistration | undefined;
   let updateSW: (reload?: boolean) => Promise<void> = async () => undefined;
-
-  const on = () => setOnline(true);
-  const off = () => setOnline(false);
-  addEventListener("online", on);
-  addEventListener("offline", off);
-  onCleanup(() => {
-    removeEventListener("online", on);
-    removeEventListener("offline", off);
-  });
 
   if (supported && register) {
     void after.then(() => {
@@ -68,14 +73,22 @@ export function createOffline(register: RegisterSW | null, after: Promise<unknow
 
   return {
     ready,
-    online,
+    online: connection.online,
+    observation: connection.observation,
     updateWaiting,
     problem,
     supported,
     update: () => updateSW(true),
     later: () => setUpdateWaiting(false),
     check: async () => {
-      await registration?.update();
+      if (!registration) return;
+      try {
+        await registration.update();
+        connection.observe(true);
+      } catch {
+        // The service worker's script could not be fetched: as far as the app can tell, it is offline.
+        connection.observe(false);
+      }
     },
   };
 }

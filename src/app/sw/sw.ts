@@ -59,6 +59,7 @@ sw.addEventListener("message", (e) => {
 
 sw.addEventListener("fetch", (e) => {
   const req = e.request;
+  // Anything but a GET goes to the network: the app's reachability check (a HEAD, createConnection.ts) relies on it.
   if (req.method !== "GET" || !req.url.startsWith(sw.registration.scope)) return;
   // Every page of the app is index.html (the screens are hash routes); files by their address, without a query.
   const key = req.mode === "navigate" ? INDEX : req.url.split(/[?#]/)[0]!;
