@@ -7,6 +7,7 @@ import { createEffect, createMemo, For, Show, Suspense, type JSX } from "solid-j
 import { Dynamic } from "solid-js/web";
 import { Icon } from "./components/Icon.js";
 import { OfflineStatus, UpdatePrompt } from "./components/OfflineStatus.js";
+import { PrintStamp } from "./components/PrintStamp.js";
 import { AppContext, type AppContextValue } from "./context.js";
 import { show } from "./format.js";
 import type { ScreenEntry } from "./screens/registry.js";
@@ -41,6 +42,7 @@ export function App(props: { state: AppContextValue; screens: readonly ScreenEnt
         </Show>
         <UpdatePrompt offline={s.offline} />
         <main class="screen" id="screen" data-screen={current().id}>
+          <PrintStamp screen={current().title} />
           <Suspense fallback={<p class="placeholder-text">Loading…</p>}>
             <Dynamic component={current().component} />
           </Suspense>

@@ -37,7 +37,7 @@ describe("screen registry and tabs", () => {
     expect(document.querySelector(".tabs")).toBeNull();
     expect(document.querySelector(".app")?.classList.contains("full-screen")).toBe(true);
     // Every screen but Start plan is loaded on demand: its controls appear once its code has arrived.
-    fireEvent.click(await screen.findByRole("button", { name: /Start plan/ }));
+    fireEvent.click(await screen.findByRole("button", { name: /Start plan/ }, { timeout: 10_000 }));
     await waitFor(() => expect(document.querySelector('[data-screen="start-plan"]')).not.toBeNull());
   });
 

@@ -1,7 +1,9 @@
 /**
  * Location notes in the built app in Debian's Chromium: create a note and find it again after a reload;
  * export the library, clear it, import the file and get the same notes back; print the card to PDF and
- * find the note's name and its load table in the PDF's text (pdfjs-dist, legacy build for Node); one page
+ * find the note's name and its load table in the PDF's text (pdfjs-dist, legacy build for Node), or, when
+ * printed before the load table is worked out, the "incomplete" line; the card's fingerprint changes with
+ * its profile; one page
  * on A4 and on Letter; axe-core finds no serious or critical violations; screenshots at 1280×800 and
  * 800×1280 saved as test artefacts; no console errors.
  */
@@ -142,19 +144,62 @@ describe("Location notes in the browser", () => {
     expect(after.bundle.notes).toEqual(before.bundle.notes);
   }, 120_000);
 
-  it("prints the card to one PDF page with the note's name and load table", async () => {
-    await openNotes();
-    await page.getByRole("button", { name: `Card of ${NAME}` }).click();
-    const preview = page.locator(".notes-card-preview");
-    await preview.locator(".notes-loadtable").waitFor({ timeout: 120_000 });
-    await shot("notes-card-landscape");
-    // The button prints the page; the PDF below is what "Save as PDF" in that dialog makes.
-    await page.evaluate(() => {
-      (window as unknown as { __printed: number }).__printed = 0;
-      window.print = () => void ((window as unknown as { __printed: number }).__printed += 1);
+  it("holds Print until the load table is worked out; a print forced early says it is incomplete", async () => {
+    // Hold the planner's load-table requests in the page until the test lets them go, so the card is
+    // certainly incomplete when it is printed early (no race with the workers).
+    await page.addInitScript(() => {
+      const w = window as unknown as { __holdTables: (on: boolean) => void };
+      const post = Worker.prototype.postMessage;
+      const held: Array<[Worker, unknown, unknown[]]> = [];
+      let hold = false;
+      Worker.prototype.postMessage = function (this: Worker, msg: unknown, ...rest: unknown[]) {
+        if (hold && (msg as { type?: unknown } | null)?.type === "loadTable") return void held.push([this, msg, rest]);
+        return (post as (...a: unknown[]) => void).call(this, msg, ...rest);
+      } as Worker["postMessage"];
+      w.__holdTables = (on) => {
+        hold = on;
+        if (!on) for (const [wk, m, r] of held.splice(0)) (post as (...a: unknown[]) => void).call(wk, m, ...r);
+      };
     });
-    await page.getByRole("button", { name: "Print / save as PDF" }).click();
-    expect(await page.evaluate(() => (window as unknown as { __printed: number }).__printed)).toBe(1);
+    await openNotes();
+    await page.evaluate(() => (window as unknown as { __holdTables: (on: boolean) => void }).__holdTables(true));
+    await page.getByRole("button", { name: `Card of ${NAME}` }).click();
+    const print = page.getByRole("button", { name: "Print / save as PDF" });
+    expect(await print.isDisabled()).toBe(true);
+    expect(await page.locator("#notes-print-wait").textContent()).toContain("Printing waits for the load table");
+
+    const early = (await pdfText(new Uint8Array(await page.pdf({ format: "A4" }))))[0]!;
+    expect(early).toContain(NAME);
+    expect(early).toContain("Incomplete — wait for the load table.");
+    expect(early).not.toContain("Largest trailing mass that starts");
+    // The browser's own print command, early: the page says the copy is marked incomplete.
+    await page.evaluate(() => window.dispatchEvent(new Event("beforeprint")));
+    await expect.poll(() => page.locator("#notes-print-wait").textContent()).toContain("The copy just printed is marked incomplete");
+    await page.evaluate(() => (window as unknown as { __holdTables: (on: boolean) => void }).__holdTables(false));
+    await page.locator(".notes-card-preview .notes-loadtable").waitFor({ timeout: 120_000 });
+    expect(await print.isDisabled()).toBe(false);
+  }, 180_000);
+
+  it("prints the card to one PDF page with the note's name, load table and what it was computed from", async () => {
+    await openNotes();
+    // What the printed card is computed from includes the program version, from package.json.
+    const version = (JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version: string }).version;
+    // Print is clicked the instant the card opens: the click waits while the button is disabled, so
+    // the print starts only once the load table is on the card.
+    await page.evaluate(() => {
+      const w = window as unknown as { __printed: Array<{ table: boolean; incomplete: boolean }> };
+      w.__printed = [];
+      window.print = () =>
+        void w.__printed.push({
+          table: document.querySelector(".notes-print-root .notes-loadtable") !== null,
+          incomplete: (document.querySelector(".notes-print-root")?.textContent ?? "").includes("Incomplete"),
+        });
+    });
+    await page.getByRole("button", { name: `Card of ${NAME}` }).click();
+    await page.getByRole("button", { name: "Print / save as PDF" }).click({ timeout: 120_000 });
+    expect(await page.evaluate(() => (window as unknown as { __printed: unknown[] }).__printed)).toEqual([{ table: true, incomplete: false }]);
+    const preview = page.locator(".notes-card-preview");
+    await shot("notes-card-landscape");
 
     const dryRow = preview.locator(".notes-loadtable tbody tr").first();
     const [dryWithout, dryWith] = await dryRow.locator("td").allTextContents();
@@ -169,13 +214,38 @@ describe("Location notes in the browser", () => {
     expect(text).toContain("Largest trailing mass that starts");
     expect(text).toMatch(/Rail Without sand With sand Dry /);
     expect(text).toContain(`Dry ${dryWithout} ${dryWith}`);
+    expect(text).not.toContain("Incomplete");
     expect(text).toContain("Recommended practice");
     expect(text).toContain("Advisory only.");
     expect(text).toContain("First survey of the loop.");
+    // What it was computed from: revision, time printed, program version, reference train, rail defaults.
+    expect(text).toMatch(/revision 1 of \d{4}-\d{2}-\d{2}/);
+    expect(text).toMatch(/printed \d{4}-\d{2}-\d{2} \d{2}:\d{2}/);
+    expect(text).toContain(`Taut ${version}`);
+    expect(text).toContain("Computed from:");
+    expect(text).toContain("rail-condition defaults");
+    // (The PDF's text may split the "fi" ligature: "fi ngerprint".)
+    const fp = /fi ?ngerprint ([0-9a-f]{4}-[0-9a-f]{4})/.exec(text)?.[1];
+    expect(fp).toBeDefined();
     // Only the card is printed: none of the app's controls.
     expect(text).not.toContain("Print / save as PDF");
     expect(text).not.toContain("Start plan");
-  }, 180_000);
+
+    // A changed profile prints a different fingerprint, with the next revision.
+    await page.getByRole("button", { name: "Edit note" }).click();
+    await page.getByRole("button", { name: "Segment 1 gradient: more" }).click();
+    await (await field("revision.initials")).fill("EE");
+    await (await field("revision.change")).fill("Gradient of the first segment resurveyed.");
+    await page.getByRole("button", { name: "Save note" }).click();
+    await page.getByText(`Saved "${NAME}".`).waitFor();
+    await page.getByRole("button", { name: "Card / print" }).click();
+    await page.getByRole("button", { name: "Print / save as PDF" }).click({ timeout: 120_000 });
+    const again = (await pdfText(new Uint8Array(await page.pdf({ format: "A4" }))))[0]!;
+    expect(again).toMatch(/revision 2 of \d{4}-\d{2}-\d{2}/);
+    const fp2 = /fi ?ngerprint ([0-9a-f]{4}-[0-9a-f]{4})/.exec(again)?.[1];
+    expect(fp2).toBeDefined();
+    expect(fp2).not.toBe(fp);
+  }, 240_000);
 
   it("reads well in portrait: library, editor and card (screenshots)", async () => {
     await page.setViewportSize(PORTRAIT);

@@ -7,6 +7,7 @@ import { PALETTES } from "../../charts/palette.js";
 import { useApp } from "../../context.js";
 import { show, type UnitSystem } from "../../format.js";
 import type { CaseDraft } from "../../state/caseDraft.js";
+import { declarePrintStatus } from "../../state/printStatus.js";
 import "../shared/dispatch.css";
 import { placeWords, RAIL_WORD } from "../shared/words.js";
 import { createAssistanceCheck } from "./createAssistanceCheck.js";
@@ -42,6 +43,7 @@ export default function AssistanceCheck(): JSX.Element {
     return c.ok ? c.value : null;
   });
   const check = createAssistanceCheck({ workers: app.pool, startCase });
+  declarePrintStatus(() => ({ complete: check.status() !== "running", waitingFor: "the assistance check", inputs: startCase() }));
   const info = createMemo(() => {
     const c = startCase();
     if (!c) return null;

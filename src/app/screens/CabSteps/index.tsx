@@ -1,6 +1,7 @@
 /** Cab steps wiring: the plan, the step in hand, its clock, the wake lock and the slip card. */
 import { createEffect, createMemo, createSignal, on, onCleanup, type JSX } from "solid-js";
 import { useApp } from "../../context.js";
+import { declarePrintStatus } from "../../state/printStatus.js";
 import { createWakeLock } from "../../state/createWakeLock.js";
 import { CabStepsView } from "./View.js";
 
@@ -34,6 +35,11 @@ export default function CabSteps(): JSX.Element {
   document.addEventListener("keydown", onKey);
   onCleanup(() => document.removeEventListener("keydown", onKey));
   const checked = () => app.draft.checked();
+  declarePrintStatus(() => {
+    const s = app.run.status();
+    const c = checked();
+    return { complete: !(s === "running" || s === "waiting" || (s === "done" && !app.run.current())), waitingFor: "the plan", inputs: c.ok ? c.value : null };
+  });
   return (
     <CabStepsView
       result={app.run.result()}

@@ -6,6 +6,7 @@ import { createSignal, type JSX, type Signal } from "solid-js";
 import { builtinLibrary } from "../../../profiles/builtin.js";
 import type { Library } from "../../../profiles/library.js";
 import { useApp } from "../../context.js";
+import { declarePrintStatus } from "../../state/printStatus.js";
 import "../shared/dispatch.css";
 import { departuresRunFor } from "./createDeparturesRun.js";
 import { pickedFiles, readPickedDepartures, type PickedFile } from "./readFiles.js";
@@ -54,6 +55,7 @@ export default function Departures(): JSX.Element {
   } = screenState(app.pool);
   const [reading, setReading] = createSignal(false);
   const rows = run.rows;
+  declarePrintStatus(() => ({ complete: run.state() !== "running", waitingFor: "every departure to be checked", inputs: loaded()?.picked ?? null }));
 
   const load = async (picked: PickedFile[]) => {
     setReading(true);

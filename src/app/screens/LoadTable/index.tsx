@@ -10,6 +10,7 @@ import type { LocationNoteFile, ReferenceTrainFile } from "../../../profiles/sch
 import { PALETTES } from "../../charts/palette.js";
 import { useApp } from "../../context.js";
 import { builtinLocationSource, type LocationChoice } from "../../locations.js";
+import { declarePrintStatus } from "../../state/printStatus.js";
 import "../shared/dispatch.css";
 import { createLoadTableRun } from "./createLoadTableRun.js";
 import { LoadTableView } from "./View.js";
@@ -72,6 +73,7 @@ export default function LoadTable(): JSX.Element {
     return p && p.ok ? p.value : null;
   });
   const run = createLoadTableRun({ workers: app.pool, parallel: app.pool.size, startCase });
+  declarePrintStatus(() => ({ complete: run.status() !== "running", waitingFor: "the load table", inputs: startCase() }));
   const summary = createMemo(() => {
     const r = ref();
     return r ? referenceSummary(r, builtinTrains, lib()) : null;

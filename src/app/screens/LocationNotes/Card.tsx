@@ -2,6 +2,12 @@
  * The printable card of one note: fits one A4 or Letter page. Profile sketch with the train, key
  * figures, load table, recommended practice, hazards, usual rail conditions, cautions and the revision
  * record. The same component is the on-screen preview and the printed page.
+ *
+ * A card is complete or says it is not: while the load table is still being worked out, a line at its top
+ * says so ("Incomplete — wait for the load table"), on screen and on paper. Its foot says what the figures
+ * were computed from (the note's revision, the program version, the reference train, the rail-condition
+ * defaults and a fingerprint of all of them) and when it was printed, so an old printout can be told from
+ * a current one.
  */
 import { For, Show, type JSX } from "solid-js";
 import { STANDARD_CAUTIONS } from "../../../core/planner/cautions.js";
@@ -9,6 +15,7 @@ import type { LoadTableRow } from "../../../core/dispatch/loadTable.js";
 import type { RailCondition } from "../../../core/physics/types.js";
 import { latestRevision } from "../../../profiles/notes.js";
 import type { LocationNoteFile } from "../../../profiles/schemas.js";
+import type { CardProvenance } from "../../../profiles/provenance.js";
 import { DEFAULT_REFERENCE_TEMPERATURE_C, type ReferenceSummary } from "../../../profiles/referenceTrain.js";
 import { show, type UnitSystem } from "../../format.js";
 import { HAZARD_KINDS } from "./draft.js";
@@ -31,7 +38,17 @@ export interface CardProps {
   loadTable: LoadTableOutcome | undefined;
   /** Why the train cannot be drawn, if it cannot. */
   placementIssue?: string | undefined;
-  printedOn: string;
+  /** When the card is (being) printed, "YYYY-MM-DD HH:MM" in the device's time zone. */
+  printedAt: string;
+  provenance: CardProvenance;
+}
+
+/** The line an unfinished card carries at its top, on screen and on paper. */
+export const INCOMPLETE_LINE = "Incomplete — wait for the load table.";
+
+/** Whether every figure of the card is worked out (a table that cannot be worked out says why, so counts). */
+export function cardComplete(loadTable: LoadTableOutcome | undefined): boolean {
+  return loadTable !== undefined;
 }
 
 /** A mass cell of the load table: "none" when even a light train would not start. */
@@ -100,6 +117,13 @@ export function Card(props: CardProps): JSX.Element {
           </Show>
         </div>
       </header>
+
+      <Show when={!cardComplete(props.loadTable)}>
+        <p class="card-incomplete" role="status">
+          <strong>{INCOMPLETE_LINE}</strong> The load table was still being worked out: this copy lacks the card's main figures. Do not use
+          it; print again once the load table is shown.
+        </p>
+      </Show>
 
       <Show when={n().standing}>
         <p class="card-standing">
@@ -220,7 +244,14 @@ export function Card(props: CardProps): JSX.Element {
         </Show>
       </section>
       <footer class="card-foot">
-        Taut location card · {n().id} · printed {props.printedOn} · advisory only
+        <p>
+          Taut location card · {n().id} · revision {props.provenance.revision} of {props.provenance.revisionDate} · printed {props.printedAt} · Taut{" "}
+          {props.provenance.version} · fingerprint {props.provenance.fingerprint} · advisory only
+        </p>
+        <p class="card-computed">
+          Computed from: {props.reference.locomotives || "the reference locomotives"} with "{props.reference.trainLabel}",{" "}
+          {show("temperature", n().referenceTrain?.temperature_C ?? DEFAULT_REFERENCE_TEMPERATURE_C, u())}; rail-condition defaults, {props.provenance.rail}.
+        </p>
       </footer>
     </article>
   );

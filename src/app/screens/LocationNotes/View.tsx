@@ -10,9 +10,11 @@ import type { LocationNoteFile, TrainPresetFile } from "../../../profiles/schema
 import type { ConflictChoice, ImportConflict } from "../../../notes/merge.js";
 import type { ChartPalette } from "../../charts/palette.js";
 import type { UnitSystem } from "../../format.js";
-import { Card } from "./Card.js";
+import type { CardProvenance } from "../../../profiles/provenance.js";
+import { Card, cardComplete } from "./Card.js";
 import { ConflictDialog } from "./ConflictDialog.js";
 import type { NoteEditor } from "./createNoteEditor.js";
+import type { LoadTableOutcome } from "./loadTableRunner.js";
 import { Editor } from "./Editor.js";
 import { Library, NoticeBox, type LibraryProps } from "./Library.js";
 import "./notes.css";
@@ -39,7 +41,12 @@ export interface ViewProps {
   onExportNote: () => void;
   onEdit: () => void;
   onPrint: () => void;
-  printedOn: string;
+  /** When the card is printed, "YYYY-MM-DD HH:MM" (refreshed just before each print). */
+  printedAt: string;
+  /** A print was started (the browser's own command) before the card was complete. */
+  printedEarly?: boolean;
+  /** What the card's figures are computed from, for a note. */
+  provenance: (note: LocationNoteFile) => CardProvenance;
 }
 
 /** Height a card may take on paper: A4 leaves 273 mm inside 12 mm margins, Letter 255 mm; keep a little in hand. */
@@ -71,9 +78,20 @@ function fitToPage(root: HTMLDivElement): void {
   } else queueMicrotask(fit);
 }
 
+/**
+ * The load table a card shows: the editor's, or — when the reference train cannot be placed on the note's
+ * profile, so no table will come — why not (a card that says why is complete; one that waits is not).
+ */
+export function cardLoadTable(editor: Pick<NoteEditor, "loadTable" | "placed" | "errors">): LoadTableOutcome | undefined {
+  if (editor.placed()) return editor.loadTable();
+  const why = editor.errors()[0]?.message ?? "the reference train cannot be placed on the profile.";
+  return { ok: false, issues: [{ path: "", message: why }] };
+}
+
 export function View(props: ViewProps): JSX.Element {
   const [confirmDelete, setConfirmDelete] = createSignal(false);
   const saved = () => props.editor.saved();
+  const table = () => cardLoadTable(props.editor);
   const cardOf = (note: LocationNoteFile) => (
     <Card
       note={note}
@@ -81,9 +99,10 @@ export function View(props: ViewProps): JSX.Element {
       model={props.editor.model()}
       figures={props.editor.figures()}
       reference={props.editor.reference()}
-      loadTable={props.editor.loadTable()}
+      loadTable={table()}
       placementIssue={props.editor.model()?.train ? undefined : props.editor.issues().find((i) => i.path === "train")?.message}
-      printedOn={props.printedOn}
+      printedAt={props.printedAt}
+      provenance={props.provenance(note)}
     />
   );
 
@@ -113,7 +132,13 @@ export function View(props: ViewProps): JSX.Element {
           {(note) => (
             <div class="notes-card-view">
               <div class="notes-row-actions">
-                <button type="button" class="button primary" onClick={() => props.onPrint()}>
+                <button
+                  type="button"
+                  class="button primary"
+                  disabled={!cardComplete(table())}
+                  aria-describedby={cardComplete(table()) ? undefined : "notes-print-wait"}
+                  onClick={() => props.onPrint()}
+                >
                   Print / save as PDF
                 </button>
                 <button type="button" class="button" onClick={() => props.onEdit()}>
@@ -123,7 +148,17 @@ export function View(props: ViewProps): JSX.Element {
                   Back to the library
                 </button>
               </div>
-              <p class="notes-hint">One page, A4 or Letter. In the print dialog choose "Save as PDF" to make a file to share.</p>
+              <Show
+                when={cardComplete(table())}
+                fallback={
+                  <p class="notes-hint notes-print-wait" id="notes-print-wait" role="status">
+                    Printing waits for the load table: it is being worked out ({Math.round(100 * props.editor.loadTableProgress())} %).
+                    <Show when={props.printedEarly}> The copy just printed is marked incomplete; print again once the load table is shown.</Show>
+                  </p>
+                }
+              >
+                <p class="notes-hint">One page, A4 or Letter. In the print dialog choose "Save as PDF" to make a file to share.</p>
+              </Show>
               <div class="notes-card-preview">{cardOf(note())}</div>
               <Portal ref={fitToPage}>{cardOf(note())}</Portal>
             </div>

@@ -3,20 +3,23 @@
  * export, connected to the app's settings (units), theme (chart palette) and the location pickers of the
  * other screens. The view is `View.tsx`.
  */
-import { createMemo, createSignal, type JSX } from "solid-js";
+import { createMemo, createSignal, onCleanup, type JSX } from "solid-js";
 import { builtinLibrary, builtinTrains } from "../../../profiles/builtin.js";
 import type { ConflictChoice, ImportConflict } from "../../../notes/merge.js";
 import { deviceNotesStore } from "../../../notes/index.js";
+import { cardProvenance, noteFigureInputs } from "../../../profiles/provenance.js";
 import { PALETTES } from "../../charts/palette.js";
 import { useApp } from "../../context.js";
 import { notifyLocationsChanged } from "../../locations.js";
 import { read, safeLocalStorage, write } from "../../state/createSettings.js";
+import { declarePrintStatus, printStamp } from "../../state/printStatus.js";
+import { APP_VERSION } from "../../version.js";
+import { cardComplete } from "./Card.js";
 import { createNoteEditor } from "./createNoteEditor.js";
 import { createNotesLibrary, downloadBundle } from "./createNotesLibrary.js";
-import { today } from "./draft.js";
 import { noteLoadTableOn } from "./loadTableRunner.js";
 import { installNotesLocationSource } from "./source.js";
-import { View, type Mode } from "./View.js";
+import { cardLoadTable, View, type Mode } from "./View.js";
 
 /** Where the editor remembers the trainer's initials between revisions. */
 export const INITIALS_KEY = "taut.notes.initials";
@@ -45,6 +48,24 @@ export function LocationNotesScreen(): JSX.Element {
     computeLoadTable: noteLoadTableOn(app.pool),
   });
   const takenIds = createMemo(() => new Set(lib.notes().map((n) => n.note.id)));
+
+  // Printing: the card's "printed" time is taken just before each print, however it was started; a print
+  // started (by the browser's own command) before the load table is worked out is remembered, so the
+  // screen can say that the copy is marked incomplete.
+  const [printedAt, setPrintedAt] = createSignal(printStamp());
+  const [printedEarly, setPrintedEarly] = createSignal(false);
+  const beforePrint = () => {
+    setPrintedAt(printStamp());
+    if (mode() === "card") setPrintedEarly(!cardComplete(cardLoadTable(editor)));
+  };
+  window.addEventListener("beforeprint", beforePrint);
+  onCleanup(() => window.removeEventListener("beforeprint", beforePrint));
+  // The editor printed as it is (the card prints its own stamp): incomplete while its load table is coming.
+  declarePrintStatus(() => ({
+    complete: mode() === "library" || cardComplete(cardLoadTable(editor)),
+    waitingFor: "the load table",
+    inputs: mode() === "library" ? null : noteFigureInputs(editor.draft, builtinTrains, profiles, APP_VERSION, editor.draft.referenceTrain),
+  }));
 
   const task = async (f: () => Promise<void>) => {
     setBusy(true);
@@ -88,7 +109,9 @@ export function LocationNotesScreen(): JSX.Element {
       profiles={profiles}
       editor={editor}
       busy={busy()}
-      printedOn={today()}
+      printedAt={printedAt()}
+      printedEarly={printedEarly() && !cardComplete(cardLoadTable(editor))}
+      provenance={(note) => cardProvenance(note, builtinTrains, profiles, APP_VERSION)}
       conflicts={conflicts()?.list ?? null}
       onConflictsDone={(c) => conflicts()?.answer(c)}
       library={{

@@ -3,12 +3,22 @@ import type { JSX } from "solid-js";
 import { builtinTrains } from "../../../profiles/builtin.js";
 import { PALETTES } from "../../charts/palette.js";
 import { useApp } from "../../context.js";
+import { declarePrintStatus } from "../../state/printStatus.js";
 import { StartPlanView } from "./View.js";
 
 export default function StartPlan(): JSX.Element {
   const app = useApp();
   const units = () => app.settings.settings().units;
   const checked = () => app.draft.checked();
+  declarePrintStatus(() => {
+    const s = app.run.status();
+    const c = checked();
+    return {
+      complete: !(s === "running" || s === "waiting" || (s === "done" && (!app.run.current() || app.run.massPending()))),
+      waitingFor: "the plan",
+      inputs: c.ok ? c.value : null,
+    };
+  });
   return (
     <StartPlanView
       inputs={{

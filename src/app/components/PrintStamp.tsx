@@ -1,0 +1,31 @@
+/**
+ * The line a printed screen carries (print only; hidden on screen): the program version, the screen, when
+ * it was printed and a fingerprint of the inputs its figures come from; and, when the screen was printed
+ * before its figures were worked out, a clear "incomplete" line instead of a silent gap. The time is taken
+ * just before each print (`beforeprint`). A location card prints its own, fuller stamp.
+ */
+import { createSignal, onCleanup, Show, type JSX } from "solid-js";
+import { fingerprint } from "../../profiles/provenance.js";
+import { printStamp, printStatus } from "../state/printStatus.js";
+import { APP_VERSION } from "../version.js";
+
+export function PrintStamp(props: { screen: string }): JSX.Element {
+  const [at, setAt] = createSignal(printStamp());
+  const before = () => setAt(printStamp());
+  window.addEventListener("beforeprint", before);
+  onCleanup(() => window.removeEventListener("beforeprint", before));
+  const status = printStatus;
+  return (
+    <div class="print-stamp" aria-hidden="true">
+      <Show when={status() && !status()!.complete}>
+        <p class="print-incomplete">
+          <strong>Incomplete — wait for {status()!.waitingFor}.</strong> Printed while figures were still being worked out: do not use this copy.
+        </p>
+      </Show>
+      <p>
+        Taut {APP_VERSION} · {props.screen} · printed {at()}
+        <Show when={status()}>{(s) => ` · inputs fingerprint ${fingerprint([APP_VERSION, s().inputs])}`}</Show> · advisory only
+      </p>
+    </div>
+  );
+}
