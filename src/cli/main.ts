@@ -9,8 +9,9 @@ import { planCommand } from "./commands/plan.js";
 import { simulateCommand } from "./commands/simulate.js";
 import { checkCommand } from "./commands/check.js";
 import { tableCommand } from "./commands/table.js";
+import { notesCommand } from "./commands/notes.js";
 
-const COMMANDS: Command[] = [planCommand, checkCommand, tableCommand, simulateCommand];
+const COMMANDS: Command[] = [planCommand, checkCommand, tableCommand, simulateCommand, notesCommand];
 
 /** Register a command (each issue's command adds itself here). */
 export function commands(): readonly Command[] {

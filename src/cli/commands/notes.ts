@@ -1,0 +1,167 @@
+/**
+ * `taut notes from-railml FILE --at POS --direction up|down [--behind M] [--ahead M] [--json]` — a location
+ * note (taut/location@1) from a railML 2.x infrastructure file: the stretch of line around the standing
+ * train's front, its gradients and curves laid end to end (src/profiles/railml). The file is read as a
+ * stream, so a large export is never held whole in memory.
+ */
+import { createReadStream, statSync, writeFileSync } from "node:fs";
+import { basename } from "node:path";
+import { builtinTrains } from "../../profiles/builtin.js";
+import { createRailmlReader, noteIdFrom, RailmlError, railmlNote, railmlStretch, stretchWords, type FrontPlace, type RailmlModel } from "../../profiles/railml/index.js";
+import type { Command } from "../command.js";
+import { InputError } from "../errors.js";
+import { num, textTable } from "../table.js";
+
+export const RAILML_DEFAULTS = { behindM: 1500, aheadM: 1000 } as const;
+
+const USAGE = "taut notes from-railml FILE --at POS --direction up|down [--behind M] [--ahead M] [--track ID] [--name TEXT] [--id ID] [--initials XX] [--no-hazards] [--out FILE] [--json]";
+
+export const notesCommand: Command = {
+  name: "notes",
+  summary: "location notes from other files: from-railml (a stretch of a railML 2.x line)",
+  usage: USAGE,
+  help: [
+    "from-railml: a location note from a railML 2.2–2.5 infrastructure file. The tracks' gradientChanges and",
+    "radiusChanges are followed through their trackBegin / trackEnd connections for --behind metres behind",
+    "the front of the standing train and --ahead metres ahead of it, and laid end to end: chainage 0 at the",
+    "rear end of the stretch, gradients rising positive in the direction of travel, radius 0 for straight.",
+    "Signals facing the train, points, level crossings, tunnels, bridges and platform edges in the stretch",
+    "become the note's hazards; the lowest vMax ahead of the front its speed limit.",
+    "",
+    "Options:",
+    "  --at POS           where the front stands: a line position in metres (railML absPos), a pos on the",
+    "                     track given with --track, or the name, id or code of an operational point",
+    "  --direction D      up: towards increasing pos of the front's track (railML dir=\"up\"); down: the other way",
+    `  --behind M         metres of line behind the front (default ${RAILML_DEFAULTS.behindM}; at least the train's length)`,
+    `  --ahead M          metres of line ahead of the front (default ${RAILML_DEFAULTS.aheadM}); the note's clear distance`,
+    "  --track ID         the track the front stands on (needed where a line position is on several tracks)",
+    "  --name TEXT        the note's name (default: the operational point or track and position)",
+    "  --id ID            the note's id (default: made from the name)",
+    "  --initials XX      initials for the note's first revision entry (default: railML)",
+    "  --no-hazards       leave out the hazards",
+    "  --out FILE         write the note to FILE",
+    "  --json             print the note (taut/location@1) on standard output",
+    "",
+    "railML 3 files are recognised and refused. XML entity declarations are refused, never expanded.",
+  ].join("\n"),
+  options: {
+    at: { type: "string" },
+    direction: { type: "string" },
+    behind: { type: "string" },
+    ahead: { type: "string" },
+    track: { type: "string" },
+    name: { type: "string" },
+    id: { type: "string" },
+    initials: { type: "string" },
+    "no-hazards": { type: "boolean" },
+    out: { type: "string" },
+    json: { type: "boolean" },
+  },
+  async run({ values, positionals }, io) {
+    const [sub, file, ...extra] = positionals;
+    if (sub !== "from-railml") throw new InputError(`${sub === undefined ? "a subcommand is needed" : `unknown subcommand "${sub}"`}: taut notes from-railml …\n  usage: ${USAGE}`);
+    if (!file) throw new InputError(`a railML file is needed\n  usage: ${USAGE}`);
+    if (extra.length > 0) throw new InputError(`one railML file at a time (got ${extra.length + 1})`);
+    const direction = values.direction;
+    if (direction !== "up" && direction !== "down") throw new InputError(`--direction: up or down is needed${direction === undefined ? "" : ` (got "${String(direction)}")`}`);
+    const at = values.at as string | undefined;
+    if (at === undefined || at.trim() === "") throw new InputError("--at: where the front of the train stands is needed (a line position in metres, or an operational point)");
+    const track = values.track as string | undefined;
+    const front = frontPlace(at, track);
+    const behindM = metres(values.behind as string | undefined, "--behind", RAILML_DEFAULTS.behindM, false);
+    const aheadM = metres(values.ahead as string | undefined, "--ahead", RAILML_DEFAULTS.aheadM, true);
+
+    const model = await readRailmlFile(file);
+    const r = railmlStretch(model, { front, direction, behindM, aheadM });
+    if (!r.ok) throw new InputError(`${file}: ${r.message}`);
+    const s = r.value;
+    const name = (values.name as string | undefined) ?? defaultName(front, s.tracks[0]?.id);
+    const n = railmlNote(s, {
+      id: (values.id as string | undefined) ?? noteIdFrom(name),
+      name,
+      direction: `${direction} (railML dir="${direction}" on the front's track)`,
+      date: today(),
+      initials: (values.initials as string | undefined) ?? "railML",
+      source: basename(file),
+      hazards: values["no-hazards"] !== true,
+      ...(builtinTrains[0] ? { referenceTrain: { train: builtinTrains[0].id } } : {}),
+    });
+    if (!n.ok) throw new InputError(`${file}: the stretch does not make a valid location note`, n.issues);
+    const text = `${JSON.stringify(n.value, null, 2)}\n`;
+    if (values.out) {
+      try {
+        writeFileSync(values.out as string, text);
+      } catch (e) {
+        throw new InputError(`--out: ${values.out as string} cannot be written (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`);
+      }
+    }
+    for (const w of [...model.warnings, ...s.notes]) io.err(`taut notes: ${w}`);
+    if (values.json) {
+      io.out(text);
+      return 0;
+    }
+    io.out(
+      [
+        `${n.value.name}`,
+        `From ${basename(file)} (railML ${model.version || "2"}): ${stretchWords(s)}`,
+        "",
+        textTable(
+          ["from m", "length m", "gradient ‰", "radius m"],
+          s.segments.map((g) => [num(g.from_m, 1), num(g.length_m, 1), num(g.gradient_permille, 2), g.curveRadius_m === 0 ? "straight" : num(g.curveRadius_m, 0)]),
+        ),
+        "",
+        `Front at ${num(s.frontAt_m, 1)} m; ${num(s.aheadM, 1)} m ahead${s.speedLimit_kmh !== undefined ? `; speed limit ${s.speedLimit_kmh} km/h` : ""}.`,
+        ...(n.value.hazards.length > 0 ? ["Hazards:", ...n.value.hazards.map((h) => `  ${num(h.at_m ?? Number.NaN, 1)} m  ${h.note ?? h.kind}`)] : []),
+        "",
+        values.out ? `Written to ${values.out as string}.` : "Add --json to print the note, or --out FILE to write it.",
+      ].join("\n"),
+    );
+    return 0;
+  },
+};
+
+/** A number is a line position (or a pos, with --track); anything else names an operational point. */
+export function frontPlace(at: string, track: string | undefined): FrontPlace {
+  const x = Number(at.trim());
+  if (at.trim() !== "" && Number.isFinite(x)) return track ? { kind: "pos", track, pos: x } : { kind: "absPos", absPos: x };
+  return track ? { kind: "ocp", ocp: at, track } : { kind: "ocp", ocp: at };
+}
+
+function metres(v: string | undefined, option: string, fallback: number, zeroOk: boolean): number {
+  if (v === undefined) return fallback;
+  const x = Number(v);
+  if (!Number.isFinite(x) || x < 0 || (!zeroOk && x === 0) || x > 100_000) throw new InputError(`${option}: metres from ${zeroOk ? 0 : "more than 0"} to 100000 are needed (got "${v}")`);
+  return x;
+}
+
+function defaultName(front: FrontPlace, track: string | undefined): string {
+  if (front.kind === "ocp") return front.ocp.trim().slice(0, 120);
+  if (front.kind === "pos") return `Track ${front.track} at ${front.pos} m (railML)`.slice(0, 120);
+  return `Line position ${front.absPos} m${track ? ` on track ${track}` : ""} (railML)`.slice(0, 120);
+}
+
+function today(now = new Date()): string {
+  const p = (n: number) => String(n).padStart(2, "0");
+  return `${now.getFullYear()}-${p(now.getMonth() + 1)}-${p(now.getDate())}`;
+}
+
+/** Read a railML file as a stream of text into the reader. */
+export async function readRailmlFile(path: string): Promise<RailmlModel> {
+  try {
+    if (!statSync(path).isFile()) throw new InputError(`${path}: not a file`);
+  } catch (e) {
+    if (e instanceof InputError) throw e;
+    const code = (e as NodeJS.ErrnoException).code;
+    throw new InputError(code === "ENOENT" ? `${path}: no such file` : `${path}: cannot be read (${code ?? (e as Error).message})`);
+  }
+  const reader = createRailmlReader();
+  try {
+    for await (const chunk of createReadStream(path, { encoding: "utf8", highWaterMark: 1 << 20 })) reader.write(chunk as string);
+    return reader.close();
+  } catch (e) {
+    if (e instanceof RailmlError) throw new InputError(`${path}: ${e.message}`);
+    const code = (e as NodeJS.ErrnoException).code;
+    if (code) throw new InputError(`${path}: cannot be read (${code})`);
+    throw e;
+  }
+}
