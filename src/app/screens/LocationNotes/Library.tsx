@@ -23,6 +23,8 @@ export interface LibraryProps {
   onCard: (id: string) => void;
   onNew: () => void;
   onImport: (file: File) => void;
+  /** Open the import from railML (absent: no button). */
+  onRailml?: () => void;
   onExportAll: () => void;
   onRestoreDemos: () => void;
   onRemove: (id: string) => void;
@@ -109,6 +111,11 @@ export function Library(props: LibraryProps): JSX.Element {
             if (f) props.onImport(f);
           }}
         />
+        <Show when={props.onRailml}>
+          <button type="button" class="button" disabled={props.busy} onClick={() => props.onRailml?.()}>
+            Import from railML
+          </button>
+        </Show>
         <button type="button" class="button" disabled={props.busy || props.notes.length === 0} onClick={() => props.onExportAll()}>
           Export all notes
         </button>

@@ -17,9 +17,12 @@ import type { NoteEditor } from "./createNoteEditor.js";
 import type { LoadTableOutcome } from "./loadTableRunner.js";
 import { Editor } from "./Editor.js";
 import { Library, NoticeBox, type LibraryProps } from "./Library.js";
+import type { Stretch } from "../../../profiles/railml/index.js";
+import type { RailmlImport } from "./railml/createRailmlImport.js";
+import { RailmlImportView } from "./railml/RailmlImport.js";
 import "./notes.css";
 
-export type Mode = "library" | "edit" | "card";
+export type Mode = "library" | "edit" | "card" | "railml";
 
 export interface ViewProps {
   mode: Mode;
@@ -47,6 +50,8 @@ export interface ViewProps {
   printedEarly?: boolean;
   /** What the card's figures are computed from, for a note. */
   provenance: (note: LocationNoteFile) => CardProvenance;
+  /** The railML import (mode "railml"). */
+  railml?: { imp: RailmlImport; onOpen: () => void; onSave: (s: Stretch) => void; onEdit: (s: Stretch) => void };
 }
 
 /** Height a card may take on paper: A4 leaves 273 mm inside 12 mm margins, Letter 255 mm; keep a little in hand. */
@@ -110,7 +115,24 @@ export function View(props: ViewProps): JSX.Element {
     <div class="notes-screen">
       <Switch>
         <Match when={props.mode === "library"}>
-          <Library {...props.library} onOpen={props.onOpen} onCard={props.onCard} onNew={props.onNew} />
+          <Library {...props.library} onOpen={props.onOpen} onCard={props.onCard} onNew={props.onNew} {...(props.railml ? { onRailml: props.railml.onOpen } : {})} />
+        </Match>
+        <Match when={props.mode === "railml" && props.railml}>
+          {(r) => (
+            <>
+              <Show when={props.library.notice}>{(n) => <NoticeBox notice={n()} onDismiss={props.library.onDismissNotice} />}</Show>
+              <RailmlImportView
+                imp={r().imp}
+                units={props.units}
+                presets={props.presets}
+                library={props.profiles}
+                busy={props.busy}
+                onSave={r().onSave}
+                onEdit={r().onEdit}
+                onClose={props.onClose}
+              />
+            </>
+          )}
         </Match>
         <Match when={props.mode === "edit"}>
           <Show when={props.library.notice}>{(n) => <NoticeBox notice={n()} onDismiss={props.library.onDismissNotice} />}</Show>

@@ -20,6 +20,11 @@ import { createNotesLibrary, downloadBundle } from "./createNotesLibrary.js";
 import { noteLoadTableOn } from "./loadTableRunner.js";
 import { installNotesLocationSource } from "./source.js";
 import { cardLoadTable, View, type Mode } from "./View.js";
+import { railmlNote } from "../../../profiles/railml/note.js";
+import type { Stretch } from "../../../profiles/railml/stretch.js";
+import { createRailmlImporter } from "./railml/client.js";
+import { createRailmlImport } from "./railml/createRailmlImport.js";
+import { idFromName, today } from "./draft.js";
 
 /** Where the editor remembers the trainer's initials between revisions. */
 export const INITIALS_KEY = "taut.notes.initials";
@@ -48,6 +53,53 @@ export function LocationNotesScreen(): JSX.Element {
     computeLoadTable: noteLoadTableOn(app.pool),
   });
   const takenIds = createMemo(() => new Set(lib.notes().map((n) => n.note.id)));
+
+  // Import from railML: the file is read and the stretch made in a worker; saving goes through the
+  // notes store like any note (the schema checks it), or the editor opens with it first.
+  const railml = createRailmlImport({ importer: () => createRailmlImporter() });
+  const railmlDirection = () => `${railml.choice.direction} (railML dir="${railml.choice.direction}" on the front's track)`;
+  const saveRailml = (s: Stretch) =>
+    void task(async () => {
+      const name = railml.choice.name.trim();
+      const n = railmlNote(s, {
+        id: idFromName(name, takenIds()),
+        name,
+        direction: railmlDirection(),
+        date: today(),
+        initials: initials().trim().slice(0, 8) || "railML",
+        source: railml.fileName(),
+        hazards: true,
+        ...(builtinTrains[0] ? { referenceTrain: { train: builtinTrains[0].id } } : {}),
+      });
+      if (!n.ok) {
+        lib.setNotice({ kind: "problem", text: "The stretch does not make a valid note; nothing was saved.", details: n.issues.map((i) => `${i.path}: ${i.message}`) });
+        return;
+      }
+      const r = await lib.save(n.value);
+      if (!r.ok) {
+        lib.setNotice({ kind: "problem", text: "The note was not saved.", details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+        return;
+      }
+      lib.setNotice({ kind: "done", text: `Saved "${name}" from railML.` });
+      editor.load(r.saved.note);
+      setMode("edit");
+    });
+  const editRailml = (s: Stretch) => {
+    lib.setNotice(null);
+    editor.load(undefined);
+    editor.set({
+      name: railml.choice.name.trim(),
+      direction: railmlDirection(),
+      standing: `Front at ${s.frontWords} (from railML).`.slice(0, 400),
+      segments: s.segments.map((g) => ({ ...g })),
+      frontAt_m: s.frontAt_m,
+      clearAhead_m: s.aheadM,
+      speedLimit_kmh: s.speedLimit_kmh ?? Number.NaN,
+      hazards: s.hazards.map((h) => ({ kind: h.kind, at_m: h.at_m, note: h.note.slice(0, 400) })),
+    });
+    editor.set("revision", "change", `Imported from railML (${railml.fileName()}).`.slice(0, 400));
+    setMode("edit");
+  };
 
   // Printing: the card's "printed" time is taken just before each print, however it was started; a print
   // started (by the browser's own command) before the load table is worked out is remembered, so the
@@ -134,6 +186,7 @@ export function LocationNotesScreen(): JSX.Element {
         onRemove: (id) => void task(() => lib.remove(id)),
         onRemoveAll: () => void task(() => lib.removeAll()),
       }}
+      railml={{ imp: railml, onOpen: () => (lib.setNotice(null), setMode("railml")), onSave: saveRailml, onEdit: editRailml }}
       onOpen={(id) => openNote(id, "edit")}
       onCard={(id) => openNote(id, "card")}
       onNew={() => {
