@@ -11,7 +11,7 @@ import { referenceCase } from "../../../../profiles/referenceTrain.js";
 import type { TrainPresetFile } from "../../../../profiles/schemas.js";
 import { QuantityField } from "../../../components/QuantityField.js";
 import { SegmentedButtons } from "../../../components/SegmentedButtons.js";
-import { show, type UnitSystem } from "../../../format.js";
+import { formatNumber, show, type UnitSystem } from "../../../format.js";
 import { SelectField, TextField } from "../fields.js";
 import { profileModel } from "../profileModel.js";
 import { ProfileSketch } from "../ProfileSketch.js";
@@ -105,7 +105,8 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
           {(sum) => (
             <>
               <p class="notes-small">
-                {imp().fileName()}: railML {sum().version || "2"}, {sum().tracks} track(s), {sum().gradientChanges} gradient and {sum().radiusChanges} radius changes
+                {imp().fileName()}: railML {sum().version || "2"}, {formatNumber(sum().tracks, 0)} track(s), {formatNumber(sum().gradientChanges, 0)} gradient and{" "}
+                {formatNumber(sum().radiusChanges, 0)} radius changes
                 {sum().absPosRange ? `; line positions ${dist(sum().absPosRange!.min)} to ${dist(sum().absPosRange!.max)}` : ""}.
               </p>
               <Show when={sum().warnings.length > 0}>
