@@ -5,7 +5,7 @@
  * just before each print (`beforeprint`). A location card prints its own, fuller stamp.
  */
 import { createSignal, onCleanup, Show, type JSX } from "solid-js";
-import { fingerprint } from "../../profiles/provenance.js";
+import { fingerprint } from "../../profiles/fingerprint.js";
 import { printStamp, printStatus } from "../state/printStatus.js";
 import { APP_VERSION } from "../version.js";
 

@@ -3,7 +3,9 @@
  * bytes, decoded as UTF-8 across the slices) into the streaming reader, keep the line it describes, and
  * answer stretches of it. Runs in the worker; the tests run it in the page's thread.
  */
-import { createRailmlReader, RailmlError, railmlStretch, summarise, type RailmlModel } from "../../../../profiles/railml/index.js";
+import { summarise, type RailmlModel } from "../../../../profiles/railml/model.js";
+import { createRailmlReader, RailmlError } from "../../../../profiles/railml/reader.js";
+import { railmlStretch } from "../../../../profiles/railml/stretch.js";
 import type { RailmlReply, RailmlRequest } from "./protocol.js";
 
 /** Bytes read at a time. */
