@@ -71,6 +71,20 @@ describe("Import from railML", () => {
     expect(saved?.note.clearAhead_m).toBe(600);
   }, 60_000);
 
+  it("opens the stretch in the editor before saving, with its segments, front, hazards and a revision entry", async () => {
+    await openImport();
+    pick("line.xml", LINE);
+    await screen.findByRole("table", { name: "Segments, from the rear end of the stretch" }, { timeout: 10_000 });
+    fireEvent.click(await screen.findByRole("button", { name: "Open in the editor first" }));
+    const field = (name: string) => document.querySelector(`[data-field="${name}"] input, [data-field="${name}"] textarea`) as HTMLInputElement;
+    await waitFor(() => expect(field("name").value).toBe("Ferrow Sidings exit (invented)"));
+    // The default stretch: 1500 m behind the front (pos 300 of the second track back to pos 300 of the first), 1000 m ahead.
+    expect(document.querySelectorAll(".notes-seg tbody tr")).toHaveLength(4);
+    expect(field("frontAt_m").value).toBe("1500");
+    expect(field("clearAhead_m").value).toBe("1000");
+    expect(field("revision.change").value).toBe("Imported from railML (line.xml).");
+  }, 30_000);
+
   it("refuses a file with entity declarations, says why, and saves nothing", async () => {
     await openImport();
     const before = (await (await openNotesStore()).list()).notes.length;
