@@ -82,7 +82,7 @@ describe("Departures", () => {
     const pool = fakePool({ check: (c) => ok(answerFor(c)) });
     renderWithApp(() => <Departures />, { pool });
     fireEvent.change(picker(), { target: { files: [dayFile()] } });
-    await waitFor(() => expect(screen.getByRole("button", { name: /Export CSV/ }).hasAttribute("disabled")).toBe(false));
+    await waitFor(() => expect(screen.getByRole("button", { name: /Export CSV/ }).hasAttribute("disabled")).toBe(false), { timeout: 10_000 });
     expect(ids()).toEqual(["d-leaves", "d-wet", "d-frost", "d-damp", "d-dry"]);
     const bad = document.querySelector(".bad-rows")!;
     expect(bad.textContent).toContain("Rows not answered (1)");
