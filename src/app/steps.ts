@@ -52,3 +52,16 @@ export function advanceOthers(s: PlanStep, units: UnitSystem): string[] {
 export function notchText(n: number): string {
   return n <= 0 ? "0" : String(n);
 }
+
+/**
+ * What a step says to do when a slip keeps returning (the driver first holds the notch while the
+ * protection acts): the fallback notch, or shut off when there is no lower notch to drop to.
+ */
+export function stillSlipping(s: Pick<PlanStep, "notch" | "fallbackNotch">): string {
+  if (s.notch <= 0) return "—";
+  if (s.fallbackNotch <= 0 || s.fallbackNotch >= s.notch) return "shut off, start again";
+  return `drop to notch ${s.fallbackNotch}`;
+}
+
+/** The label beside `stillSlipping`. */
+export const STILL_SLIPPING_LABEL = "Slip keeps returning";

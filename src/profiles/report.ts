@@ -100,8 +100,8 @@ export interface PlanReport {
   /** Verdict and margins for every rail condition, without and with sand (`taut plan --conditions`). */
   byCondition?: ConditionMarginReport[];
   cautions: string[];
-  /** What to do if the wheels slip or the train stalls. */
-  ifWheelsSlip?: { protection: string[]; driver: string[]; stall: string[] };
+  /** What to do if the wheels slip (`driver`, in order), why (`protection`: what the locomotive does) and if the train stalls. */
+  ifWheelsSlip?: { driver: string[]; protection: string[]; stall: string[] };
   /** The stretch as the dynamics run showed it. */
   stretch?: { lastVehicleMoves_s: number | null; locoTravelToStretch_m: number | null; maxRunOut_kmh: number };
   /** Which input moves the margin most, largest first. */

@@ -43,8 +43,8 @@ export const FIXTURE_STEPS: PlanStep[] = [
 ];
 
 export const FIXTURE_GUIDANCE = {
-  protection: ["Sands the rails.", "Cuts excitation in proportion to the slip."],
   driver: ["Hold the notch and sand.", "Drop one notch if it keeps slipping."],
+  protection: ["Sands the rails.", "Cuts excitation in proportion to the slip."],
   stall: ["Secure the train.", "Start again from the prepare step."],
 };
 

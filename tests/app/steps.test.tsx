@@ -39,7 +39,7 @@ describe("step cards", () => {
     expect(third.querySelector(".step-advance strong")?.textContent).toBe("Advance at 5.0 km/h");
     expect(third.querySelector(".step-advance")?.textContent).toBe("Advance at 5.0 km/h (about 6 s in this step)");
     expect(third.textContent).toContain("4.0 %"); // slip risk
-    expect(third.textContent).toContain("notch 2"); // fallback
+    expect(third.textContent).toContain("Slip keeps returningdrop to notch 2"); // fallback, after holding
     expect(cards[1]!.querySelector(".step-advance strong")?.textContent).toBe("Advance after 8.0 m of locomotive travel");
     const t = demoCase().target;
     const target = t.kind === "speed" ? show("speed", t.speedMps, "metric") : `${show("distance", t.distanceM, "metric")} travelled`;
@@ -126,12 +126,24 @@ describe("Cab steps", () => {
     expect(closed).toHaveBeenCalledOnce();
   });
 
-  it("opens If wheels slip in one tap from every step, with that step's fallback notch", () => {
+  it("opens If wheels slip in one tap from every step: hold first, the fallback only if the slip keeps returning", () => {
     cab(fixturePlan());
     for (let i = 0; i < FIXTURE_STEPS.length; i++) {
+      const st = FIXTURE_STEPS[i]!;
       fireEvent.click(screen.getByRole("button", { name: /If wheels slip/ }));
       const dialog = screen.getByRole("dialog", { name: /If wheels slip/ });
-      expect(dialog.querySelector(".fallback-notch")?.textContent).toBe(String(FIXTURE_STEPS[i]!.fallbackNotch));
+      const hold = dialog.querySelector(".slip-hold")!.textContent!;
+      const then = dialog.querySelector(".slip-then")!.textContent!;
+      if (st.notch === 0) expect(hold).toMatch(/No power in this step/);
+      else expect(hold).toMatch(new RegExp(`Hold notch ${st.notch} while the protection acts`));
+      // The headline never says to drop to a notch and to hold it at once.
+      if (st.notch > 0 && st.fallbackNotch < st.notch) {
+        expect(then).toMatch(/^2\s*Still slipping: drop to notch/);
+        expect(dialog.querySelector(".fallback-notch")?.textContent).toBe(String(st.fallbackNotch));
+      } else expect(dialog.querySelector(".fallback-notch")).toBeNull();
+      // What you do comes before what the locomotive does.
+      const titles = [...dialog.querySelectorAll(".slip-list h3")].map((h) => h.textContent);
+      expect(titles).toEqual(["What you do, in order", "Why you hold: what the locomotive does", "If the train stalls"]);
       expect(dialog.textContent).toContain("Hold the notch and sand.");
       expect(dialog.textContent).toContain("Secure the train.");
       expect(dialog.textContent).toContain("Sands the rails.");

@@ -94,7 +94,7 @@ describe("Taut in Chromium", () => {
   it("steps through Cab steps and opens If wheels slip from every step", async () => {
     const cards = await page.locator(".step-card").count();
     const notches = await page.locator(".step-card .notch-value").allTextContents();
-    const fallbacks = await page.locator(".step-card").evaluateAll((els) => els.map((el) => /notch (\d+)/.exec([...el.querySelectorAll(".figures div")].find((d) => d.textContent?.startsWith("If wheels slip"))?.textContent ?? "")?.[1] ?? ""));
+    const fallbacks = await page.locator(".step-card").evaluateAll((els) => els.map((el) => /drop to notch (\d+)/.exec([...el.querySelectorAll(".figures div")].find((d) => d.textContent?.startsWith("Slip keeps returning"))?.textContent ?? "")?.[1] ?? ""));
     await page.getByRole("button", { name: "Open Cab steps" }).click();
     await page.waitForSelector(".cab");
     expect(await page.locator(".tabs").count()).toBe(0);
@@ -108,7 +108,9 @@ describe("Taut in Chromium", () => {
       await page.getByRole("button", { name: "If wheels slip" }).click();
       const dialog = page.getByRole("dialog", { name: "If wheels slip" });
       await dialog.waitFor();
-      expect(await dialog.locator(".fallback-notch").textContent()).toBe(fallbacks[i]);
+      // Hold first; the fallback notch only when there is a lower one to drop to.
+      expect(await dialog.locator(".slip-hold").textContent()).toMatch(new RegExp(`Hold notch ${notches[i]}|No power`));
+      expect(fallbacks[i] === "" ? await dialog.locator(".fallback-notch").count() : await dialog.locator(".fallback-notch").textContent()).toBe(fallbacks[i] === "" ? 0 : fallbacks[i]);
       if (i === 1) {
         await page.setViewportSize(LANDSCAPE);
         await shot("slip-card-landscape-day");

@@ -27,7 +27,7 @@ export function renderPlan(p: PlanReport): string {
     lines.push("");
     lines.push(
       textTable(
-        ["#", "phase", "notch", "advance when", "km/h", "TE kN", "adhesion", "slip risk", "coupler kN", "if slip"],
+        ["#", "phase", "notch", "advance when", "km/h", "TE kN", "adhesion", "slip risk", "coupler kN", "still slipping"],
         p.steps.map((s, i) => [
           String(i + 1),
           s.phase,
@@ -52,10 +52,11 @@ export function renderPlan(p: PlanReport): string {
   if (p.ifWheelsSlip && p.steps.length > 0) {
     lines.push("");
     lines.push("If wheels slip:");
-    lines.push("  The protection:");
+    lines.push(...wrap("  In every step, hold its notch while the protection acts; only if the slip keeps returning, drop to the notch in the table's \"still slipping\" column.", 100, "  "));
+    lines.push("  What you do, in order:");
+    p.ifWheelsSlip.driver.forEach((t, i) => lines.push(...wrap(`  ${i + 1}. ${t}`, 100, "     ")));
+    lines.push("  Why you hold — what the locomotive does:");
     for (const t of p.ifWheelsSlip.protection) lines.push(...wrap(`  - ${t}`, 100, "    "));
-    lines.push("  You:");
-    for (const t of p.ifWheelsSlip.driver) lines.push(...wrap(`  - ${t}`, 100, "    "));
     lines.push("  If the train stalls:");
     for (const t of p.ifWheelsSlip.stall) lines.push(...wrap(`  - ${t}`, 100, "    "));
   }

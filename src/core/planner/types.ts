@@ -34,10 +34,13 @@ export interface PlanStep {
   why: string;
 }
 
-/** The "If wheels slip" card: what the protection does, what the driver does, what to do on a stall. */
+/**
+ * The "If wheels slip" card: what the driver does, in order (read first); what the protection does (the
+ * reason for holding the notch); what to do on a stall.
+ */
 export interface SlipGuidance {
-  protection: string[];
   driver: string[];
+  protection: string[];
   stall: string[];
 }
 

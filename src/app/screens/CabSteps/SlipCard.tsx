@@ -1,8 +1,11 @@
 /**
- * "If wheels slip": the fallback notch of the step in hand, then what the locomotive's protection does,
- * what the driver does, and what to do if the train stalls — from the plan's slip guidance.
+ * "If wheels slip": for the step in hand, one headline in the order things are done — hold the notch while
+ * the protection acts, and only if the slip keeps returning, drop to the fallback notch; then what the
+ * driver does, in order; what the locomotive's protection does, as the reason for holding; and what to do
+ * if the train stalls — from the plan's slip guidance.
  */
 import { For, onCleanup, onMount, Show, type JSX } from "solid-js";
+import { slipHeadline } from "../../../core/planner/slip.js";
 import type { SlipGuidance } from "../../../core/planner/types.js";
 import { Icon } from "../../components/Icon.js";
 import { localiseText, type UnitSystem } from "../../format.js";
@@ -13,6 +16,8 @@ export interface SlipCardProps {
   units: UnitSystem;
   /** The step in hand (number from 1) and its notches, when there is one. */
   step?: { number: number; notch: number; fallbackNotch: number } | undefined;
+  /** Whether the locomotives have sanders (the headline then says to sand). */
+  sanders?: boolean;
   onClose: () => void;
 }
 
@@ -39,15 +44,30 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
         </button>
       </div>
       <Show when={props.step}>
-        {(s) => (
-          <p class="slip-fallback">
-            Step {s().number}, notch {notchText(s().notch)}: <span class="fallback-label">drop to notch</span> <strong class="fallback-notch">{notchText(s().fallbackNotch)}</strong>
-          </p>
-        )}
+        {(s) => {
+          const h = () => slipHeadline(s().notch, s().fallbackNotch, props.sanders ?? true);
+          const drops = () => s().notch > 0 && s().fallbackNotch > 0 && s().fallbackNotch < s().notch;
+          return (
+            <div class="slip-now">
+              <p class="slip-step">
+                Step {s().number} · notch {notchText(s().notch)}
+              </p>
+              <p class="slip-hold">
+                <span class="slip-order" aria-hidden="true">1</span> {h().hold}
+              </p>
+              <p class="slip-then">
+                <span class="slip-order" aria-hidden="true">2</span>
+                <Show when={drops()} fallback={<span>{h().then}</span>}>
+                  <span class="fallback-label">Still slipping: drop to notch</span> <strong class="fallback-notch">{notchText(s().fallbackNotch)}</strong>
+                </Show>
+              </p>
+            </div>
+          );
+        }}
       </Show>
       <div class="slip-lists">
-        <SlipList title="What the locomotive does" items={g().protection} units={props.units} />
-        <SlipList title="What you do" items={g().driver} units={props.units} />
+        <SlipList title="What you do, in order" items={g().driver} units={props.units} lead />
+        <SlipList title="Why you hold: what the locomotive does" items={g().protection} units={props.units} bullets />
         <SlipList title="If the train stalls" items={g().stall} units={props.units} />
       </div>
       <Show when={empty()}>
@@ -62,14 +82,15 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
   );
 }
 
-function SlipList(props: { title: string; items: readonly string[]; units: UnitSystem }): JSX.Element {
+function SlipList(props: { title: string; items: readonly string[]; units: UnitSystem; lead?: boolean; bullets?: boolean }): JSX.Element {
+  const items = () => <For each={props.items}>{(t) => <li>{localiseText(t, props.units)}</li>}</For>;
   return (
     <Show when={props.items.length > 0}>
-      <section class="slip-list">
+      <section class="slip-list" classList={{ lead: props.lead === true, reason: props.bullets === true }}>
         <h3>{props.title}</h3>
-        <ol>
-          <For each={props.items}>{(t) => <li>{localiseText(t, props.units)}</li>}</For>
-        </ol>
+        <Show when={props.bullets} fallback={<ol>{items()}</ol>}>
+          <ul>{items()}</ul>
+        </Show>
       </section>
     </Show>
   );

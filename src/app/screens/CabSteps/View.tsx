@@ -9,7 +9,7 @@ import { Icon } from "../../components/Icon.js";
 import { VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
 import { clock, localiseText, percent, show, type UnitSystem } from "../../format.js";
 import type { WakeLockState } from "../../state/createWakeLock.js";
-import { advanceLead, advanceOthers, notchText, PHASE_LINE, PHASE_WORD } from "../../steps.js";
+import { advanceLead, advanceOthers, notchText, PHASE_LINE, PHASE_WORD, STILL_SLIPPING_LABEL, stillSlipping } from "../../steps.js";
 import { SlipCard } from "./SlipCard.js";
 
 export interface CabStepsViewProps {
@@ -25,6 +25,8 @@ export interface CabStepsViewProps {
   stepSeconds: number;
   wakeLock: WakeLockState;
   slipOpen: boolean;
+  /** Whether the locomotives have sanders (default yes). */
+  sanders?: boolean;
   onSlip: (open: boolean) => void;
   onClose: () => void;
 }
@@ -107,8 +109,8 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
                   <dd>{percent(s().slipRisk)}</dd>
                 </div>
                 <div>
-                  <dt>If wheels slip</dt>
-                  <dd>notch {notchText(s().fallbackNotch)}</dd>
+                  <dt>{STILL_SLIPPING_LABEL}</dt>
+                  <dd>{stillSlipping(s())}</dd>
                 </div>
               </dl>
               <p class="cab-why">{localiseText(s().why, props.units)}</p>
@@ -146,6 +148,7 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
             guidance={props.result!.slipGuidance}
             units={props.units}
             step={step() ? { number: props.index + 1, notch: step()!.notch, fallbackNotch: step()!.fallbackNotch } : undefined}
+            sanders={props.sanders ?? true}
             onClose={() => props.onSlip(false)}
           />
         )}

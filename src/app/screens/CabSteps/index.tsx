@@ -55,6 +55,10 @@ export default function CabSteps(): JSX.Element {
       stepSeconds={seconds()}
       wakeLock={wake()}
       slipOpen={slipOpen()}
+      sanders={(() => {
+        const c = checked();
+        return c.ok ? c.value.locomotives.some((g) => g.spec.sanders) : true;
+      })()}
       onSlip={setSlipOpen}
       onClose={() => app.nav.go("start-plan")}
     />

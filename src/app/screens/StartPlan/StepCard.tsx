@@ -3,7 +3,7 @@ import { Show, type JSX } from "solid-js";
 import type { PlanStep } from "../../../core/planner/types.js";
 import type { Target } from "../../../core/train/types.js";
 import { localiseText, percent, show, type UnitSystem } from "../../format.js";
-import { advanceLead, advanceOthers, notchText, PHASE_WORD } from "../../steps.js";
+import { advanceLead, advanceOthers, notchText, PHASE_WORD, STILL_SLIPPING_LABEL, stillSlipping } from "../../steps.js";
 
 export interface StepCardProps {
   step: PlanStep;
@@ -47,8 +47,8 @@ export function StepCard(props: StepCardProps): JSX.Element {
             </dd>
           </div>
           <div>
-            <dt>If wheels slip</dt>
-            <dd>notch {notchText(s().fallbackNotch)}</dd>
+            <dt>{STILL_SLIPPING_LABEL}</dt>
+            <dd>{stillSlipping(s())}</dd>
           </div>
           <div>
             <dt>Tractive effort</dt>
