@@ -13,8 +13,10 @@ export interface Command {
   run(args: { values: Record<string, unknown>; positionals: string[] }, out: Output): number | Promise<number>;
 }
 
-/** Where commands write: stdout for results, stderr for progress and errors. */
+/** Where commands write: stdout for results, stderr for progress and errors; and standard input, for `-`. */
 export interface Output {
   out(text: string): void;
   err(text: string): void;
+  /** All of standard input as text (a file named `-`); absent where there is none. */
+  stdin?(): string;
 }

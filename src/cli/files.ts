@@ -7,6 +7,7 @@ import type { StartCase } from "../core/train/types.js";
 import { InputError } from "./errors.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { readNotesText } from "../profiles/notes.js";
+import { applyOverrides, type CaseOverrides } from "./caseOverrides.js";
 
 /** Read a file as text; a missing or unreadable file is bad input. */
 export function readText(path: string): string {
@@ -30,14 +31,32 @@ export function library(extraNotes: LocationNoteFile[] = []): Library {
   return withLocations(builtinLibrary(), extraNotes);
 }
 
-/** Read a start case and resolve it into the core's form; `location` (a note id) replaces the case's location. */
-export function readStartCase(path: string, lib: Library, overrides: { location?: string } = {}): { c: StartCase; raw: Record<string, unknown> } {
-  const raw = readJson(path);
+/** Read and parse JSON text from a named source (a file, or standard input). */
+export function parseJsonFrom(name: string, text: string): unknown {
+  const r = parseJsonText(text);
+  if (!r.ok) throw new InputError(`${name}: not a valid file`, r.issues);
+  return r.value;
+}
+
+/**
+ * Read a start case and resolve it into the core's form; `location` (a note id) replaces the case's
+ * location and `case` holds the command line's overrides (rail, sand, mass, grade). `text` gives the
+ * case's text when it does not come from `path` (standard input, named "-").
+ */
+export function readStartCase(
+  path: string,
+  lib: Library,
+  overrides: { location?: string; case?: CaseOverrides } = {},
+  text?: string,
+): { c: StartCase; raw: Record<string, unknown> } {
+  const name = path === "-" ? "standard input" : path;
+  let raw = text !== undefined ? parseJsonFrom(name, text) : readJson(path);
   const kind = fileKind(raw);
-  if (kind !== undefined && kind !== "taut/start-case@1") throw new InputError(`${path}: this is a ${kind} file; a start case (taut/start-case@1) is needed here`);
-  if (overrides.location !== undefined && raw && typeof raw === "object" && !Array.isArray(raw)) (raw as Record<string, unknown>).location = overrides.location;
+  if (kind !== undefined && kind !== "taut/start-case@1") throw new InputError(`${name}: this is a ${kind} file; a start case (taut/start-case@1) is needed here`);
+  if (overrides.location !== undefined && raw && typeof raw === "object" && !Array.isArray(raw)) raw = { ...(raw as Record<string, unknown>), location: overrides.location };
+  if (overrides.case) raw = applyOverrides(raw, overrides.case, (id) => lib.locations.get(id));
   const r = parseStartCase(raw, lib);
-  if (!r.ok) throw new InputError(`${path}: the start case is not valid`, r.issues);
+  if (!r.ok) throw new InputError(`${name}: the start case is not valid`, r.issues);
   return { c: r.value, raw: raw as Record<string, unknown> };
 }
 

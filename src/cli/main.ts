@@ -2,6 +2,7 @@
  * The `taut` command line: the same core as the app, for scripts. Exit codes: 0 success,
  * 2 bad input (with the field and the rule broken), 1 internal error.
  */
+import { readFileSync } from "node:fs";
 import { parseArgs } from "node:util";
 import type { Command, Output } from "./command.js";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "./errors.js";
@@ -33,7 +34,7 @@ function topHelp(): string {
     "Commands:",
     ...COMMANDS.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`),
     "",
-    "Run `taut <command> --help` for a command's options.",
+    "Run `taut <command> --help` for a command's options; `taut --version` prints the version.",
     "Exit codes: 0 success, 2 bad input, 1 internal error.",
   ].join("\n");
 }
@@ -41,7 +42,14 @@ function topHelp(): string {
 const stdio: Output = {
   out: (t) => process.stdout.write(t.endsWith("\n") ? t : `${t}\n`),
   err: (t) => process.stderr.write(t.endsWith("\n") ? t : `${t}\n`),
+  stdin: () => readFileSync(0, "utf8"),
 };
+
+/** The version in the package's own package.json (the one place it is written). */
+export function packageVersion(): string {
+  const pkg = JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version?: unknown };
+  return typeof pkg.version === "string" ? pkg.version : "unknown";
+}
 
 /** Run the command line; returns the exit code. */
 export async function main(argv: string[], io: Output = stdio): Promise<number> {
@@ -50,8 +58,8 @@ export async function main(argv: string[], io: Output = stdio): Promise<number> 
     io.out(topHelp());
     return name === undefined ? EXIT_BAD_INPUT : EXIT_OK;
   }
-  if (name === "--version") {
-    io.out("taut 0.1.0");
+  if (name === "--version" || name === "-V") {
+    io.out(`taut ${packageVersion()}`);
     return EXIT_OK;
   }
   const cmd = COMMANDS.find((c) => c.name === name);

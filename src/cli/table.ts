@@ -2,7 +2,7 @@
 
 export function textTable(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<string>>): string {
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
-  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+%?$|^—$/.test(r[i] ?? "")));
+  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+%?$|^—$|^none$/.test(r[i] ?? "")));
   const line = (cells: readonly string[]) =>
     cells.map((c, i) => (isNum[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join("  ").trimEnd();
   return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");

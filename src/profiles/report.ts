@@ -73,7 +73,8 @@ export interface AssistanceSearchReport {
 
 export interface PlanReport {
   schema: "taut/plan@1";
-  case: { id?: string; label?: string; illustrative?: boolean };
+  /** The case planned; `overrides` are the command line's changes to it (rail, sand, mass, grade). */
+  case: { id?: string; label?: string; illustrative?: boolean; overrides?: { rail?: string; sand?: boolean; trailingMass_t?: number; gradient_permille?: number } };
   verdict: Verdict;
   reasons: Reason[];
   /** Smallest of the margins (available ÷ needed). */

@@ -10,7 +10,8 @@ import { fileURLToPath } from "node:url";
 import { afterAll, describe, expect, it } from "vitest";
 import { loadTable } from "../../src/core/dispatch/loadTable.js";
 import { tableCase } from "../../src/cli/commands/table.js";
-import { builtinLibrary, builtinLocations } from "../../src/profiles/builtin.js";
+import { builtinLibrary, builtinLocations, builtinTrains } from "../../src/profiles/builtin.js";
+import { referenceCase, referenceOf } from "../../src/profiles/referenceTrain.js";
 import { makeNotesBundle } from "../../src/profiles/notes.js";
 import type { LocationNoteFile } from "../../src/profiles/schemas.js";
 import { taut } from "../tools/cli.js";
@@ -47,21 +48,51 @@ describe("taut table", () => {
     expect(r.stderr).toMatch(/12\/12 rows of the load table \(100%\)/);
   }, 120_000);
 
-  it("readable and CSV forms; a built-in note may be named by id; --count and --limit shape the train", async () => {
-    const a = await taut("table", "cinderfield-yard", "--loco", "illustrative-4axle-1100", "--count", "2", "--wagons", "10", "--limit", "500", "--quiet");
+  it("readable and CSV forms; a built-in note may be named by id; --count and --limit shape the train; \"none\" where the app says none", async () => {
+    const opts = ["--loco", "illustrative-4axle-1100", "--count", "2", "--wagons", "10", "--limit", "500", "--quiet"];
+    const a = await taut("table", "cinderfield-yard", ...opts);
     expect(a.code).toBe(0);
     expect(a.stdout).toMatch(/^Load table — Cinderfield Yard/);
     expect(a.stdout).toMatch(/Locomotives: 2 × illustrative-4axle-1100 at the head/);
     expect(a.stdout).toMatch(/couplings 500 kN/);
     expect(a.stdout).toMatch(/^\s+rail\s+no sand\s+sand$/m);
-    expect(a.stdout).toMatch(/^\s+leaves\s+\d+\s+\d+$/m);
+    expect(a.stdout).toMatch(/^\s+leaves\s+(\d+|none)\s+(\d+|none)$/m);
     expect(a.stderr).toBe("");
-    const b = await taut("table", "cinderfield-yard", "--loco", "illustrative-4axle-1100", "--wagons", "10", "--csv", "--quiet");
+    const b = await taut("table", "cinderfield-yard", ...opts, "--csv");
     const lines = b.stdout.trim().split("\n");
     expect(lines[0]).toBe("rail,sand,maxTrailingMass_t");
     expect(lines.length).toBe(13);
     expect(lines[1]).toMatch(/^dry,false,\d+$/);
+    // The readable table says "none" exactly where the CSV has 0 (the app's load table and card say "none" too).
+    const csvCell = (rail: string, sand: boolean) => Number(lines.find((l) => l.startsWith(`${rail},${sand},`))!.split(",")[2]);
+    for (const rail of ["dry", "damp", "wet", "frost", "leaves", "greasy"]) {
+      const row = new RegExp(`^\\s+${rail}\\s+(\\S+)\\s+(\\S+)$`, "m").exec(a.stdout)!;
+      [row[1], row[2]].forEach((cell, k) => {
+        const t = csvCell(rail, k === 1);
+        expect(cell, `${rail} ${k === 1 ? "sand" : "no sand"}`).toBe(t > 0 ? String(t) : "none");
+      });
+    }
+    expect(a.stdout).not.toMatch(/\b0 means\b/);
   }, 120_000);
+
+  it("one reference train per note: without train options, the train the app's card uses (the note's, or the first preset)", () => {
+    const lib = builtinLibrary();
+    for (const note of builtinLocations) {
+      const cli = tableCase(note, {}, lib);
+      // What the app's Location notes card works its load table out for (loadTableRunner → referenceCase).
+      const app = referenceCase(note, builtinTrains, lib);
+      expect(app.ok).toBe(true);
+      if (!app.ok) continue;
+      expect(cli.c, note.id).toEqual(app.value);
+      expect(cli.referenceTrain).toBe(referenceOf(note, builtinTrains).train);
+      expect(cli.source).toBe(note.referenceTrain ? "referenceTrain" : "defaultReferenceTrain");
+    }
+    // --loco and --count replace the reference train's locomotives, as the card's own choice does.
+    const note = builtinLocations[0]!;
+    const swapped = tableCase(note, { loco: "illustrative-6axle-1800", count: "2" }, lib);
+    const app = referenceCase(note, builtinTrains, lib, { ...referenceOf(note, builtinTrains), locomotive: "illustrative-6axle-1800", count: 2 });
+    expect(app.ok && swapped.c).toEqual(app.ok && app.value);
+  });
 
   it("a note's reference train is used when it has one; --loco then replaces its locomotives", async () => {
     const base = builtinLocations.find((n) => n.id === "cinderfield-yard")!;
@@ -74,11 +105,11 @@ describe("taut table", () => {
     expect(t.locomotives).toEqual([{ profile: "illustrative-4axle-1100", count: 1, position: "head" }]);
   }, 120_000);
 
-  it("bad input: no --loco without a reference train, an unknown profile, a bundle without --note", async () => {
+  it("bad input: train options without --loco, an unknown profile, a bundle without --note", async () => {
     const ashvaleNote = builtinLocations.find((n) => n.id === "ashvale-loop-up")!;
-    const a = await taut("table", `${repo}profiles/locations/ashvale-loop-up.json`);
+    const a = await taut("table", `${repo}profiles/locations/ashvale-loop-up.json`, "--wagons", "20");
     expect(a.code).toBe(2);
-    expect(a.stderr).toMatch(/--loco ID is needed: the note "ashvale-loop-up" has no reference train/);
+    expect(a.stderr).toMatch(/--loco ID is needed with the train options/);
     const b = await taut("table", `${repo}profiles/locations/ashvale-loop-up.json`, "--loco", "no-such-unit");
     expect(b.code).toBe(2);
     expect(b.stderr).toMatch(/--loco: no locomotive profile "no-such-unit"/);

@@ -9,9 +9,14 @@ export interface Run {
 }
 
 export async function taut(...argv: string[]): Promise<Run> {
+  return tautWithInput(undefined, ...argv);
+}
+
+/** The same, with `stdin` as standard input (a command reading "-" gets it); undefined: no standard input. */
+export async function tautWithInput(stdin: string | undefined, ...argv: string[]): Promise<Run> {
   const out: string[] = [];
   const err: string[] = [];
-  const io: Output = { out: (t) => out.push(t), err: (t) => err.push(t) };
+  const io: Output = { out: (t) => out.push(t), err: (t) => err.push(t), ...(stdin !== undefined ? { stdin: () => stdin } : {}) };
   const code = await main(argv, io);
   return { code, stdout: out.join("\n"), stderr: err.join("\n") };
 }

@@ -1,4 +1,8 @@
-/** `taut plan CASE.json [--json]` — the start plan for one case, with assistance options when it does not start. */
+/**
+ * `taut plan CASE.json|- [--json]` — the start plan for one case, with assistance options when it does not
+ * start; `-` reads the case from standard input, and --rail, --sand/--no-sand, --mass and --grade override
+ * what changes between departures.
+ */
 import { searchAssistance } from "../../core/dispatch/assistance.js";
 import { conditionMargins } from "../../core/dispatch/conditionMargins.js";
 import { planStart } from "../../core/planner/index.js";
@@ -12,6 +16,7 @@ import { InputError } from "../errors.js";
 import { library, readNotesFiles, readStartCase } from "../files.js";
 import type { Command } from "../command.js";
 import { helperSpec } from "../options.js";
+import { applyOverrides, hasOverrides, OVERRIDE_HELP, OVERRIDE_OPTIONS, overridesFrom } from "../caseOverrides.js";
 import { renderPlan } from "../render/plan.js";
 
 /** Planner runs the assistance search may use inside `taut plan` for the options, and for dividing the train. */
@@ -23,7 +28,8 @@ export const PLAN_ASSISTANCE_FULL_PLANS = 2;
 export const planCommand: Command = {
   name: "plan",
   summary: "start plan for one train: verdict, resistance, adhesion, steps, assistance",
-  usage: "taut plan CASE.json [--notes FILE]... [--location NOTE-ID] [--helper ID] [--no-assistance] [--conditions] [--json] | taut plan --demo [--json]",
+  usage:
+    "taut plan CASE.json|- [--rail R] [--sand|--no-sand] [--mass T] [--grade PERMILLE] [--notes FILE]... [--location NOTE-ID] [--helper ID] [--no-assistance] [--conditions] [--json] | taut plan --demo [...]",
   help: [
     "Computes whether the locomotives can start the train at the location, and how.",
     "When the verdict is not \"starts\", it also searches for assistance: one or two more units of the",
@@ -33,8 +39,13 @@ export const planCommand: Command = {
     `search is capped here at ${PLAN_ASSISTANCE_BUDGET} planner runs for the options (${PLAN_ASSISTANCE_FULL_PLANS} of them fully verified) and ${PLAN_DIVIDE_BUDGET}`,
     "for dividing; the output says when the cap cut the search short.",
     "",
+    "CASE.json is a start-case file (taut/start-case@1); \"-\" reads it from standard input.",
+    "",
+    ...OVERRIDE_HELP,
+    "",
     "Options:",
-    "  --json              print the plan as JSON (INTERFACE.md shape) instead of a table",
+    "  --json              print the plan as JSON instead of a table: the same figures, each field named",
+    "                      with its unit (trailingMass_t, peakCouplerForce_kN, ...), for scripts",
     "  --demo              use the built-in illustrative demo case instead of a file",
     "  --notes FILE        location notes (a taut/location@1 note or a taut/notes-bundle@1 bundle)",
     "                      the case's \"location\" may name by id; may be given more than once",
@@ -52,8 +63,10 @@ export const planCommand: Command = {
     helper: { type: "string" },
     "no-assistance": { type: "boolean" },
     conditions: { type: "boolean" },
+    ...OVERRIDE_OPTIONS,
   },
   run({ values, positionals }, io) {
+    const overrides = overridesFrom(values);
     const lib = library(readNotesFiles((values.notes as string[] | undefined) ?? []));
     const location = values.location as string | undefined;
     const helper = helperSpec(lib, values.helper as string | undefined);
@@ -61,20 +74,27 @@ export const planCommand: Command = {
     let meta: PlanReport["case"];
     if (values.demo) {
       const demo = builtinCaseJson.find((j) => (j as { id?: string }).id === DEMO_CASE_ID) as Record<string, unknown>;
-      const raw = location !== undefined ? { ...demo, location } : demo;
+      const raw = applyOverrides(location !== undefined ? { ...demo, location } : demo, overrides, (id) => lib.locations.get(id)) as Record<string, unknown>;
       const r = parseStartCase(raw, lib);
       if (!r.ok && location !== undefined) throw new InputError(`the demo case cannot start at location "${location}"`, r.issues);
+      if (!r.ok && hasOverrides(overrides)) throw new InputError("the demo case with these overrides is not valid", r.issues);
       if (!r.ok) throw new Error("built-in demo case does not resolve");
       c = r.value;
       meta = caseMeta(raw);
     } else {
       const path = positionals[0];
-      if (!path) throw new InputError("a start-case file is needed (or --demo)\n  usage: taut plan CASE.json [--json]");
+      if (!path) throw new InputError("a start-case file is needed (or - for standard input, or --demo)\n  usage: taut plan CASE.json|- [--json]");
       if (positionals.length > 1) throw new InputError(`one start-case file at a time (got ${positionals.length})`);
-      const read = readStartCase(path, lib, location !== undefined ? { location } : {});
+      let text: string | undefined;
+      if (path === "-") {
+        if (!io.stdin) throw new InputError("-: there is no standard input to read the case from");
+        text = io.stdin();
+      }
+      const read = readStartCase(path, lib, { ...(location !== undefined ? { location } : {}), case: overrides }, text);
       c = read.c;
       meta = caseMeta(read.raw);
     }
+    if (hasOverrides(overrides)) meta.overrides = { ...overrides };
     const report = planReport(c, meta, { assistance: !values["no-assistance"], ...(helper ? { helper } : {}) });
     if (values.conditions) report.byCondition = conditionMargins(c).map(conditionMarginReport);
     io.out(values.json ? JSON.stringify(report, null, 2) : renderPlan(report));

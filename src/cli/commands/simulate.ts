@@ -6,6 +6,7 @@ import { InputError } from "../errors.js";
 import { library, readStartCase } from "../files.js";
 import type { Command } from "../command.js";
 import { num, textTable } from "../table.js";
+import { wrap } from "../render/wrap.js";
 
 /** Longest run when the target is not reached, s. */
 const MAX_DURATION_S = 180;
@@ -53,6 +54,10 @@ export interface SimulateReport {
   slipEvents: Array<{ unit: number; start_s: number; end_s: number; cuts: number; speed_kmh: number }>;
   final: { time_s: number; speed_kmh: number; distance_m: number };
   targetReached: boolean;
+  /** Seconds the wheels slipped in all (every unit's episodes added). */
+  slipTime_s: number;
+  /** What the reader must not miss (wheel slip above all), one line each. */
+  warnings: string[];
   series?: { time_s: number[]; speed_kmh: number[]; notch: number[]; distance_m: number[]; maxTension_kN: number[] };
 }
 
@@ -101,7 +106,10 @@ export function simulateCase(c: StartCase, seq: SequenceEntry[], opts: { duratio
     slipEvents: res.slipEpisodes.map((e) => ({ unit: e.unit, start_s: r1(e.startS), end_s: r1(e.endS), cuts: e.cuts, speed_kmh: r1(e.speedMps * 3.6) })),
     final: { time_s: r1(res.final.timeS), speed_kmh: r1(res.final.leadSpeedMps * 3.6), distance_m: r1(res.final.leadTravelM) },
     targetReached: hit,
+    slipTime_s: r1(res.slipEpisodes.reduce((t, e) => t + (e.endS - e.startS), 0)),
+    warnings: [],
   };
+  report.warnings = simulationWarnings(report);
   if (opts.series) {
     const s = res.series;
     report.series = {
@@ -115,15 +123,34 @@ export function simulateCase(c: StartCase, seq: SequenceEntry[], opts: { duratio
   return report;
 }
 
+/**
+ * Wheel slip is the first thing to say about a run: a sequence that reaches its target only while the
+ * protection cuts power again and again is not one to drive (spinning burns the rail; PRACTICE.md).
+ */
+export function simulationWarnings(r: Pick<SimulateReport, "slipEvents" | "slipTime_s" | "targetReached" | "lastVehicleMoves_s">): string[] {
+  const out: string[] = [];
+  if (r.slipEvents.length > 0) {
+    const cuts = r.slipEvents.reduce((n, e) => n + e.cuts, 0);
+    const first = Math.min(...r.slipEvents.map((e) => e.start_s));
+    out.push(
+      `The wheels slipped for ${num(r.slipTime_s, 1)} s in all (${r.slipEvents.length} episode${r.slipEvents.length === 1 ? "" : "s"} from ${num(first, 1)} s, ${cuts} power cut${cuts === 1 ? "" : "s"}): this sequence asks more than the rails give${r.targetReached ? "; the target was reached only while the protection cut power" : ""}. Use lower notches or later steps.`,
+    );
+  }
+  if (r.lastVehicleMoves_s === null) out.push("The train did not start: the last vehicle never moved.");
+  return out;
+}
+
 export function renderSimulation(r: SimulateReport): string {
   const lines = [
+    ...r.warnings.flatMap((w) => wrap(`WARNING: ${w}`, 100, "         ")),
+    ...(r.warnings.length > 0 ? [""] : []),
     `Sequence: ${r.sequence.map((e) => `notch ${e.notch} at ${e.atS} s`).join(", ")}; locomotive brake off at ${r.locoBrakeRelease_s} s`,
     `Adhesion assumed: ${r.adhesionQuantile === 0.5 ? "median" : `the ${Math.round(r.adhesionQuantile * 100)} % quantile`}`,
     `Last vehicle moves: ${r.lastVehicleMoves_s === null ? "never (the train did not start)" : `${num(r.lastVehicleMoves_s, 1)} s, after ${num(r.locoTravelToStretch_m, 2)} m of locomotive travel`}`,
     `Peak coupler force: ${num(r.peakCouplerForce_kN)} kN at coupling ${r.peakAt.coupling + 1} (${num(r.peakAt.time_s, 1)} s); peak compression ${num(r.peakCompression_kN)} kN`,
     `Fastest take-up: run-out ${num(r.maxRunOut_kmh, 2)} km/h, run-in ${num(r.maxRunIn_kmh, 2)} km/h`,
-    `Wheel slip: ${r.slipEvents.length === 0 ? "none" : r.slipEvents.map((e) => `unit ${e.unit + 1} ${num(e.start_s, 1)}–${num(e.end_s, 1)} s (${e.cuts} cuts)`).join("; ")}`,
-    `End: ${num(r.final.time_s, 1)} s, ${num(r.final.speed_kmh, 1)} km/h, ${num(r.final.distance_m, 1)} m${r.targetReached ? " (target reached)" : ""}`,
+    `Wheel slip: ${r.slipEvents.length === 0 ? "none" : `${num(r.slipTime_s, 1)} s in all — ${r.slipEvents.map((e) => `unit ${e.unit + 1} ${num(e.start_s, 1)}–${num(e.end_s, 1)} s (${e.cuts} cuts)`).join("; ")}`}`,
+    `End: ${num(r.final.time_s, 1)} s, ${num(r.final.speed_kmh, 1)} km/h, ${num(r.final.distance_m, 1)} m${r.targetReached ? (r.slipEvents.length > 0 ? " (target reached, with the wheels slipping: see the warning above)" : " (target reached)") : " (target not reached)"}`,
     "",
     "Peak force along the train (every tenth coupling):",
     textTable(
@@ -142,7 +169,8 @@ export const simulateCommand: Command = {
   usage: 'taut simulate CASE.json --sequence "1@0,2@20,4@35,8@50" [--duration S] [--release-at S] [--adhesion-quantile Q] [--json] [--series]',
   help: [
     "Runs the notches you give (notch@seconds) and reports when the last vehicle moves, coupler forces",
-    "along the train, take-up speeds, wheel slips and the final speed and distance.",
+    "along the train, take-up speeds, wheel slips and the final speed and distance. A run in which the",
+    "wheels slip opens with a WARNING (and `warnings` in the JSON): try lower notches or later steps.",
     "The train brake is taken as released; the locomotive brake holds until --release-at (default: 3 s after",
     "the first notch).",
     "",

@@ -2,7 +2,7 @@
 import { STANDARD_CAUTIONS } from "../../core/planner/cautions.js";
 import { loadTableCells, type LoadTableRow } from "../../core/dispatch/loadTable.js";
 import type { StartCase } from "../../core/train/types.js";
-import { referenceCaseFile, DEFAULT_REFERENCE_TEMPERATURE_C } from "../../profiles/referenceTrain.js";
+import { referenceCaseFile, referenceOf, DEFAULT_REFERENCE_TEMPERATURE_C } from "../../profiles/referenceTrain.js";
 import { loadTableRowReport } from "../../profiles/assistanceReport.js";
 import { builtinTrains } from "../../profiles/builtin.js";
 import type { Library } from "../../profiles/library.js";
@@ -18,7 +18,7 @@ import { wrap } from "../render/wrap.js";
 import { jobsOption, progressReporter } from "../options.js";
 import { existsSync } from "node:fs";
 
-/** Reference train when the note has none and the options say nothing: 40 loaded bogie hoppers. */
+/** The train made from the train options (--wagons, --wagon-type, --slack, --limit) where they leave something out. */
 export const TABLE_DEFAULTS = { wagons: 40, wagonType: "bogie-hopper-loaded", targetKmh: 20 } as const;
 /** Default working limit by coupling kind, kN (PHYSICS.md §4: knuckle 970 kN, screw coupling 850 kN). */
 const DEFAULT_LIMIT_KN = { knuckle: 970, screw: 850 } as const;
@@ -36,14 +36,15 @@ export const tableCommand: Command = {
     "LOCATION.json is a location note (taut/location@1), or a bundle (taut/notes-bundle@1) with --note ID;",
     "a built-in note may be named by its id instead of a file.",
     "",
-    "The train the table is for: the note's reference train when it has one (--loco and --count then replace",
-    "its locomotives); otherwise, or when any train option is given, a train of --wagons wagons of",
-    `--wagon-type (default ${TABLE_DEFAULTS.wagons} × ${TABLE_DEFAULTS.wagonType}) with roller bearings.`,
+    "The train the table is for: the note's reference train — the one the app's Location notes card uses —",
+    `or, for a note that names none, the first train preset (${builtinTrains[0]?.id ?? "none"}); --loco and --count replace its`,
+    "locomotives. Any train option (--wagons, --wagon-type, --slack, --limit) makes it a train of --wagons",
+    `wagons of --wagon-type instead (default ${TABLE_DEFAULTS.wagons} × ${TABLE_DEFAULTS.wagonType}) with roller bearings.`,
     "",
     "Options:",
     "  --note ID          which note of a bundle",
-    "  --loco ID          locomotive profile at the head (needed unless the note has a reference train)",
-    "  --count N          how many of them (default 1, or the reference train's)",
+    "  --loco ID          locomotive profile at the head (default: the reference train's; needed with train options)",
+    "  --count N          how many of them (default: the reference train's, or 1)",
     `  --wagons N         wagons in the train (default ${TABLE_DEFAULTS.wagons})`,
     `  --wagon-type ID    wagon type (default ${TABLE_DEFAULTS.wagonType})`,
     "  --slack MM         free slack per coupling (default: the wagon type's)",
@@ -104,6 +105,7 @@ export const tableCommand: Command = {
       locomotives: built.file.locomotives.map((l) => ({ profile: typeof l.profile === "string" ? l.profile : l.profile.id, count: l.count, position: l.position })),
       train: {
         source: built.source,
+        ...(built.referenceTrain !== null ? { referenceTrain: built.referenceTrain } : {}),
         wagons: built.file.train.wagons,
         wagonType: built.file.train.wagonType ?? null,
         length_m: built.file.train.length_m,
@@ -150,7 +152,12 @@ function numberOption(values: Values, name: string, check: (n: number) => boolea
 }
 
 /** The start case the table is worked out for (its mass is searched; its rail and sand are varied). */
-export function tableCase(note: LocationNoteFile, values: Values, lib: Library): { c: StartCase; file: StartCaseFile; source: "referenceTrain" | "options"; capacityT: number | null } {
+export function tableCase(
+  note: LocationNoteFile,
+  values: Values,
+  lib: Library,
+): { c: StartCase; file: StartCaseFile; source: "referenceTrain" | "defaultReferenceTrain" | "options"; referenceTrain: string | null; capacityT: number | null } {
+  let referenceTrain: string | null = null;
   const count = numberOption(values, "count", (n) => Number.isInteger(n) && n >= 1 && n <= 8, "a whole number from 1 to 8");
   const wagons = numberOption(values, "wagons", (n) => Number.isInteger(n) && n >= 1 && n <= 400, "a whole number from 1 to 400");
   const slack = numberOption(values, "slack", (n) => n >= 0 && n <= 200, "from 0 to 200 mm");
@@ -163,15 +170,17 @@ export function tableCase(note: LocationNoteFile, values: Values, lib: Library):
   const trainOptions = wagons !== undefined || wagonTypeId !== undefined || slack !== undefined || limit !== undefined;
   const cap = (kmh: number) => Math.min(kmh, note.speedLimit_kmh ?? kmh);
   let file: StartCaseFile;
-  let source: "referenceTrain" | "options";
-  if (note.referenceTrain && !trainOptions) {
-    const ref = { ...note.referenceTrain, ...(loco !== undefined ? { locomotive: loco } : {}), ...(count !== undefined ? { count } : {}), ...(temperature !== undefined ? { temperature_C: temperature } : {}) };
+  let source: "referenceTrain" | "defaultReferenceTrain" | "options";
+  if (!trainOptions) {
+    // One reference train per note, the same as the app's card (src/profiles/referenceTrain.ts).
+    const ref = { ...referenceOf(note, builtinTrains), ...(loco !== undefined ? { locomotive: loco } : {}), ...(count !== undefined ? { count } : {}), ...(temperature !== undefined ? { temperature_C: temperature } : {}) };
     const r = referenceCaseFile(note, builtinTrains, ref);
     if (!r.ok) throw new InputError(`${note.id}: the reference train cannot be used`, r.issues);
     file = targetKmh !== undefined ? { ...r.value, target: { speed_kmh: cap(targetKmh) } } : r.value;
-    source = "referenceTrain";
+    source = note.referenceTrain ? "referenceTrain" : "defaultReferenceTrain";
+    referenceTrain = ref.train;
   } else {
-    if (loco === undefined) throw new InputError(`--loco ID is needed: the note "${note.id}" has no reference train (known profiles: ${[...lib.locomotives.keys()].join(", ")})`);
+    if (loco === undefined) throw new InputError(`--loco ID is needed with the train options --wagons, --wagon-type, --slack and --limit (known profiles: ${[...lib.locomotives.keys()].join(", ")})`);
     const typeId = wagonTypeId ?? TABLE_DEFAULTS.wagonType;
     const w = lib.wagons.get(typeId);
     if (!w) throw new InputError(`--wagon-type: no wagon type "${typeId}" (known: ${[...lib.wagons.keys()].join(", ")})`);
@@ -198,13 +207,13 @@ export function tableCase(note: LocationNoteFile, values: Values, lib: Library):
   const r = resolveStartCase(file, lib);
   if (!r.ok) throw new InputError(`the train for the table does not fit "${note.id}"`, r.issues);
   const wt = file.train.wagonType !== undefined ? lib.wagons.get(file.train.wagonType) : undefined;
-  return { c: r.value, file, source, capacityT: wt ? Math.round((file.train.wagons * wt.maxGrossKg) / 1000) : null };
+  return { c: r.value, file, source, referenceTrain, capacityT: wt ? Math.round((file.train.wagons * wt.maxGrossKg) / 1000) : null };
 }
 
 interface TableReport {
   location: { id: string; name: string };
   locomotives: Array<{ profile: string; count: number; position: unknown }>;
-  train: { source: string; wagons: number; wagonType: string | null; length_m: number; couplerSlack_mm: number; couplerLimit_kN: number; bearing: string; temperature_C: number; target_kmh: number | null };
+  train: { source: string; referenceTrain?: string; wagons: number; wagonType: string | null; length_m: number; couplerSlack_mm: number; couplerLimit_kN: number; bearing: string; temperature_C: number; target_kmh: number | null };
   wagonCapacity_t?: number;
   rows: Array<{ rail: string; sand: boolean; maxTrailingMass_t: number }>;
   elapsed_s: number;
@@ -218,7 +227,7 @@ function renderTable(t: TableReport): string {
   lines.push(`Locomotives: ${locos}`);
   const tr = t.train;
   lines.push(
-    `Train: ${tr.wagons} × ${tr.wagonType ?? "wagons"} (${num(tr.length_m)} m), slack ${num(tr.couplerSlack_mm)} mm, couplings ${num(tr.couplerLimit_kN)} kN, ${tr.bearing} bearings, ${num(tr.temperature_C)} °C; target ${num(tr.target_kmh)} km/h${tr.source === "referenceTrain" ? " (the note's reference train)" : ""}`,
+    `Train: ${tr.wagons} × ${tr.wagonType ?? "wagons"} (${num(tr.length_m)} m), slack ${num(tr.couplerSlack_mm)} mm, couplings ${num(tr.couplerLimit_kN)} kN, ${tr.bearing} bearings, ${num(tr.temperature_C)} °C; target ${num(tr.target_kmh)} km/h${tr.source === "referenceTrain" ? ` (the note's reference train, ${tr.referenceTrain})` : tr.source === "defaultReferenceTrain" ? ` (the note names no reference train: the first train preset, ${tr.referenceTrain}, as on the app's card)` : ""}`,
   );
   lines.push("");
   lines.push("Largest trailing mass that starts, t:");
@@ -227,7 +236,7 @@ function renderTable(t: TableReport): string {
   lines.push(
     textTable(
       ["rail", "no sand", "sand"],
-      rails.map((rail) => [rail, num(by(rail, false)), num(by(rail, true))]),
+      rails.map((rail) => [rail, massCell(by(rail, false)), massCell(by(rail, true))]),
     )
       .split("\n")
       .map((l) => `  ${l}`)
@@ -238,9 +247,14 @@ function renderTable(t: TableReport): string {
   if (cap !== undefined && above.length > 0) {
     lines.push(...wrap(`  Above what these wagons carry (${cap} t), so the wagons, not the locomotives, limit: ${above.map((r) => `${r.rail}${r.sand ? " with sand" : ""}`).join(", ")}.`, 100, "    "));
   }
-  lines.push(`  (0 means not even a lightly loaded train of this make-up starts.)`);
+  if (t.rows.some((r) => r.maxTrailingMass_t <= 0)) lines.push(`  "none": not even a light train of these wagons is expected to start in that condition with these locomotives.`);
   lines.push("");
   lines.push("Cautions:");
   for (const c of t.cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
   return lines.join("\n");
+}
+
+/** A mass cell as the app shows it: "none" when not even a light train starts (the JSON and CSV keep 0). */
+function massCell(t: number): string {
+  return t > 0 ? num(t) : "none";
 }

@@ -1,0 +1,132 @@
+/**
+ * What changes between departures, given on the command line instead of in a copy of the case file:
+ * `--rail R`, `--sand` / `--no-sand`, `--mass T` (trailing mass, tonnes) and `--grade PERMILLE` (the
+ * gradient of a uniform location). They are written into the case's JSON before it is validated, so a value
+ * out of range gets the same message, with the field's path, as it would in the file.
+ */
+import { RAIL_CONDITIONS } from "../core/physics/types.js";
+import { InputError } from "./errors.js";
+
+export interface CaseOverrides {
+  rail?: string;
+  sand?: boolean;
+  trailingMass_t?: number;
+  gradient_permille?: number;
+}
+
+/** The option declarations (node:util parseArgs) for the overrides. */
+export const OVERRIDE_OPTIONS = {
+  rail: { type: "string" },
+  sand: { type: "boolean" },
+  "no-sand": { type: "boolean" },
+  mass: { type: "string" },
+  grade: { type: "string" },
+} as const;
+
+/** Help lines for the overrides. */
+export const OVERRIDE_HELP = [
+  "Overrides (what changes between departures; the case file is left as it is):",
+  `  --rail R            rail condition: ${RAIL_CONDITIONS.join(", ")}`,
+  "  --sand, --no-sand   sand on or off",
+  "  --mass T            trailing mass, tonnes",
+  "  --grade PERMILLE    gradient under the whole train, per mille (positive rises ahead); a case that",
+  "                      stands on a track profile or a location note becomes a uniform grade with the",
+  "                      profile's sharpest curve under the train and its distance clear ahead",
+];
+
+function numberOption(name: string, v: unknown, what: string): number | undefined {
+  if (v === undefined) return undefined;
+  const text = String(v).trim();
+  const n = text === "" ? Number.NaN : Number(text);
+  if (!Number.isFinite(n)) throw new InputError(`--${name}: ${what} is needed (got "${String(v)}")`);
+  return n;
+}
+
+/** Read the overrides from parsed options; bad input for a value that cannot be one. */
+export function overridesFrom(values: Record<string, unknown>): CaseOverrides {
+  const o: CaseOverrides = {};
+  if (values.rail !== undefined) {
+    const rail = String(values.rail);
+    if (!(RAIL_CONDITIONS as readonly string[]).includes(rail)) throw new InputError(`--rail: must be one of ${RAIL_CONDITIONS.join(", ")} (got "${rail}")`);
+    o.rail = rail;
+  }
+  if (values.sand && values["no-sand"]) throw new InputError("--sand and --no-sand: give one of them");
+  if (values.sand) o.sand = true;
+  if (values["no-sand"]) o.sand = false;
+  const mass = numberOption("mass", values.mass, "a trailing mass in tonnes");
+  if (mass !== undefined) o.trailingMass_t = mass;
+  const grade = numberOption("grade", values.grade, "a gradient in per mille");
+  if (grade !== undefined) o.gradient_permille = grade;
+  return o;
+}
+
+export function hasOverrides(o: CaseOverrides): boolean {
+  return Object.keys(o).length > 0;
+}
+
+const isObject = (x: unknown): x is Record<string, unknown> => x !== null && typeof x === "object" && !Array.isArray(x);
+
+/** A track profile as a case or a note gives it. */
+export interface ProfileLocation {
+  segments: ReadonlyArray<{ from_m: number; length_m: number; gradient_permille: number; curveRadius_m: number }>;
+  frontAt_m: number;
+  clearAhead_m: number;
+}
+
+/**
+ * A uniform location in place of a profile: the given gradient, the sharpest curve of the segments under
+ * the standing train (from its front back over its length; the curve resistance is then at least what the
+ * profile gives), and the profile's distance clear ahead.
+ */
+export function uniformFromProfile(p: ProfileLocation, trainLengthM: number, gradient_permille: number): { gradient_permille: number; curveRadius_m: number; clearAhead_m: number } {
+  const rear = p.frontAt_m - Math.max(0, trainLengthM);
+  let sharpest = 0;
+  for (const s of p.segments) {
+    const under = s.from_m < p.frontAt_m && s.from_m + s.length_m > rear;
+    if (under && s.curveRadius_m > 0 && (sharpest === 0 || s.curveRadius_m < sharpest)) sharpest = s.curveRadius_m;
+  }
+  return { gradient_permille, curveRadius_m: sharpest, clearAhead_m: p.clearAhead_m };
+}
+
+/**
+ * A copy of the case's JSON with the overrides written in (the input is not changed). A field the case
+ * lacks is added, so validation names what else is missing. `note` finds a location note by id (for
+ * --grade on a case that names one).
+ */
+export function applyOverrides(raw: unknown, o: CaseOverrides, note: (id: string) => ProfileLocation | undefined = () => undefined): unknown {
+  if (!hasOverrides(o) || !isObject(raw)) return raw;
+  const out: Record<string, unknown> = { ...raw };
+  if (o.rail !== undefined || o.sand !== undefined) {
+    const conditions = isObject(raw.conditions) ? { ...raw.conditions } : {};
+    if (o.rail !== undefined) conditions.rail = o.rail;
+    if (o.sand !== undefined) conditions.sand = o.sand;
+    out.conditions = conditions;
+  }
+  if (o.trailingMass_t !== undefined) {
+    out.train = { ...(isObject(raw.train) ? raw.train : {}), trailingMass_t: o.trailingMass_t };
+  }
+  if (o.gradient_permille !== undefined) {
+    const loc = raw.location;
+    const lengthM = isObject(out.train) && typeof out.train.length_m === "number" ? out.train.length_m : 0;
+    if (typeof loc === "string") {
+      const n = note(loc);
+      if (!n) throw new InputError(`--grade: no location note "${loc}" to take the curve and the distance clear ahead from`);
+      out.location = uniformFromProfile(n, lengthM, o.gradient_permille);
+    } else if (isObject(loc) && Array.isArray(loc.segments)) {
+      out.location = uniformFromProfile(loc as unknown as ProfileLocation, lengthM, o.gradient_permille);
+    } else {
+      out.location = { ...(isObject(loc) ? loc : {}), gradient_permille: o.gradient_permille };
+    }
+  }
+  return out;
+}
+
+/** The overrides in words, for the readable output: "rail wet, no sand, 1,500 t, grade 8 ‰". */
+export function describeOverrides(o: CaseOverrides): string {
+  const parts: string[] = [];
+  if (o.rail !== undefined) parts.push(`rail ${o.rail}`);
+  if (o.sand !== undefined) parts.push(o.sand ? "sand" : "no sand");
+  if (o.trailingMass_t !== undefined) parts.push(`trailing mass ${o.trailingMass_t} t`);
+  if (o.gradient_permille !== undefined) parts.push(`grade ${o.gradient_permille} ‰ under the whole train`);
+  return parts.join(", ");
+}
