@@ -3,6 +3,7 @@
  * unit factors (`convert`). Every figure the app shows and every number it reads passes through here.
  */
 import { convert, convertTemperature, type Quantity } from "../core/physics/units.js";
+import { fixedDigits, roundHalfAway } from "../profiles/numbers.js";
 
 export type UnitSystem = "metric" | "us";
 
@@ -86,26 +87,6 @@ export function siUnit(m: MeasureKey): string {
   return m === "temperature" ? "C" : MEASURES[m].si;
 }
 
-/** `|x|` rounded half away from zero to `d` decimals, from its shortest decimal form (as the browsers' number formatting does). */
-function fixed(x: number, d: number): string {
-  const s = Math.abs(x).toString();
-  // An exponent form (below 1e-6 or from 1e21): no ties at the app's few decimals.
-  if (s.includes("e")) return Math.abs(x).toFixed(d);
-  const dot = s.indexOf(".");
-  const whole = dot < 0 ? s : s.slice(0, dot);
-  const frac = dot < 0 ? "" : s.slice(dot + 1);
-  if (frac.length <= d) return d === 0 ? whole : `${whole}.${frac.padEnd(d, "0")}`;
-  const digits = (whole + frac.slice(0, d)).split("");
-  if (frac.charCodeAt(d) >= 53 /* "5" */) {
-    let k = digits.length - 1;
-    while (k >= 0 && digits[k] === "9") digits[k--] = "0";
-    if (k >= 0) digits[k] = String(Number(digits[k]) + 1);
-    else digits.unshift("1");
-  }
-  const cut = digits.length - d;
-  return d === 0 ? digits.join("") : `${digits.slice(0, cut).join("")}.${digits.slice(cut).join("")}`;
-}
-
 /**
  * A number with grouping and a fixed count of decimals; "−" for negatives, "–" for not-a-number.
  * The same text as `Intl.NumberFormat("en-GB", { minimumFractionDigits: d, maximumFractionDigits: d })`,
@@ -114,7 +95,7 @@ function fixed(x: number, d: number): string {
  */
 export function formatNumber(x: number, decimals: number): string {
   if (!Number.isFinite(x)) return "–";
-  const s = fixed(x, Math.max(0, Math.min(20, Math.trunc(decimals))));
+  const s = fixedDigits(x, Math.max(0, Math.min(20, Math.trunc(decimals))));
   const dot = s.indexOf(".");
   const whole = dot < 0 ? s : s.slice(0, dot);
   const body = (s.includes("e") ? whole : whole.replace(/\B(?=(\d{3})+$)/g, ",")) + (dot < 0 ? "" : s.slice(dot));
@@ -133,6 +114,17 @@ export function show(m: MeasureKey, si: number, system: UnitSystem, decimals?: n
   return `${v} ${unitSymbol(m, system)}`;
 }
 
+/**
+ * A largest-that-still-works figure (the largest trailing mass that starts): rounded down in the display
+ * unit, never up, as the command line's whole tonnes are (`maxStartableMass_t`).
+ */
+export function showAtMost(m: MeasureKey, si: number, system: UnitSystem, decimals = decimalsOf(m, system)): string {
+  if (!Number.isFinite(si)) return valueOf(m, si, system, decimals);
+  const f = 10 ** decimals;
+  const shown = Math.floor(toDisplay(m, si, siUnit(m), system) * f + 1e-9) / f;
+  return `${formatNumber(shown, decimals)} ${unitSymbol(m, system)}`;
+}
+
 /** A fraction 0..1 as a percentage, e.g. 0.061 → "6.1 %". Values under 0.1 % read "< 0.1 %". */
 export function percent(fraction: number, decimals = 1): string {
   if (!Number.isFinite(fraction)) return "–";
@@ -141,11 +133,11 @@ export function percent(fraction: number, decimals = 1): string {
   return `${formatNumber(p, decimals)} %`;
 }
 
-/** A margin (available ÷ needed) as "× 1.05". */
+/** A margin (available ÷ needed) as "× 1.05": from the three decimals the command line's JSON gives, as `taut` prints it. */
 export function margin(x: number): string {
   if (!Number.isFinite(x)) return "–";
   if (x >= 99) return "× 99+";
-  return `× ${formatNumber(x, 2)}`;
+  return `× ${formatNumber(roundHalfAway(x, 3), 2)}`;
 }
 
 /** Seconds as "45 s" or "2 min 05 s". */

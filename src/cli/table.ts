@@ -1,4 +1,5 @@
 /** Plain-text tables for the terminal: columns padded, numbers right-aligned. */
+import { fixedText } from "../profiles/numbers.js";
 
 export function textTable(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<string>>): string {
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
@@ -8,14 +9,14 @@ export function textTable(header: readonly string[], rows: ReadonlyArray<Readonl
   return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");
 }
 
-/** Format with fixed decimals, or a dash when absent. */
+/** Format with fixed decimals (rounded as the app rounds: src/profiles/numbers.ts), or a dash when absent. */
 export function num(x: number | null | undefined, decimals = 0): string {
   if (x === null || x === undefined || !Number.isFinite(x)) return "—";
-  return x.toFixed(decimals);
+  return fixedText(x, decimals);
 }
 
 export function pct(x: number, decimals = 0): string {
-  return `${(x * 100).toFixed(decimals)}%`;
+  return `${fixedText(x * 100, decimals)}%`;
 }
 
 export { toCsv as csv } from "../profiles/csv.js";

@@ -22,6 +22,8 @@ export interface Departure {
   index?: number;
   /** The resolved case, when the row is good. */
   case?: StartCase;
+  /** The row's start case as a file (taut/start-case@1, the row's overrides written in), when the row is good: to open it elsewhere. */
+  file?: unknown;
   /** What is wrong with the row, when it is not. */
   error?: string;
 }
@@ -46,7 +48,7 @@ export function departuresFromJson(text: string, lib: Library): DeparturesRead {
       const base = { id: rawId ?? `[${index}]`, where: `[${index}]`, index };
       const r = parseStartCase(item, lib);
       if (!r.ok) return { ...base, error: `[${index}]${rawId ? ` (${rawId})` : ""}: ${oneLine(r.issues)}` };
-      return { ...base, case: r.value };
+      return { ...base, case: r.value, file: item };
     }),
   };
 }
@@ -109,7 +111,7 @@ export function departuresFromCsv(text: string, readCase: (casePath: string) => 
       if (location !== "") data.location = location;
       const r = parseStartCase(data, lib);
       if (!r.ok) return fail(`${casePath}: ${oneLine(r.issues)}`);
-      return { ...base, case: r.value };
+      return { ...base, case: r.value, file: data };
     }),
   };
 }

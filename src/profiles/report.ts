@@ -7,6 +7,7 @@ import type { PlanResult, PlanStep } from "../core/planner/types.js";
 import type { StaticCheck } from "../core/planner/staticCheck.js";
 import type { Reason, Verdict } from "../core/planner/outcome.js";
 import type { StartCase } from "../core/train/types.js";
+import { roundHalfAway } from "./numbers.js";
 
 export type Phase = "prepare" | "stretch" | "build" | "accelerate";
 
@@ -121,11 +122,8 @@ export interface ConditionMarginReport {
   limitedBy: Reason;
 }
 
-/** Round to a number of decimals (for output only). */
-export const r = (x: number, decimals = 1): number => {
-  const f = 10 ** decimals;
-  return Math.round(x * f) / f;
-};
+/** Round to a number of decimals (for output only), half away from zero as every figure is (numbers.ts). */
+export const r = (x: number, decimals = 1): number => roundHalfAway(x, decimals);
 const kN = (n: number, d = 1): number => r(n / 1000, d);
 
 /** The plan report from the static check alone (no steps). */

@@ -171,6 +171,12 @@ describe("the file as a whole", () => {
     expect(d.stderr).toMatch(/--jobs: must be a whole number from 1 to 64/);
   });
 
+  it("--sort takes file or risk", async () => {
+    const r = await taut("check", file("z.csv", "id,case\n"), "--sort", "margin");
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/--sort: must be file or risk \(got "margin"\)/);
+  });
+
   it("--help documents the formats and the exit codes", async () => {
     const r = await taut("check", "--help");
     expect(r.code).toBe(0);
@@ -212,14 +218,22 @@ describe("CSV reading", () => {
 describe("the sample departures of the demo scenario (profiles/departures)", () => {
   it("the CSV and the JSON version give the same answers, every row answered", async () => {
     const a = await taut("check", `${repo}profiles/departures/demo-day.csv`, "--json", "--quiet");
-    const b = await taut("check", `${repo}profiles/departures/demo-day.json`, "--json", "--quiet");
+    const b = await taut("check", `${repo}profiles/departures/demo-day.json`, "--json", "--quiet", "--sort", "risk");
     expect(a.code).toBe(0);
     expect(b.code).toBe(0);
     const rowsA = (JSON.parse(a.stdout) as CheckJson).departures;
     const rowsB = (JSON.parse(b.stdout) as CheckJson).departures;
     expect(rowsA.length).toBe(12);
     const strip = (r: Row) => ({ ...r, line: undefined, index: undefined });
-    expect(rowsB.map(strip)).toEqual(rowsA.map(strip));
+    const byId = (x: { id: string }, y: { id: string }) => (x.id < y.id ? -1 : 1);
+    expect(rowsB.map(strip).sort(byId)).toEqual(rowsA.map(strip).sort(byId));
+    // --sort risk: needs assistance, then marginal, then starts, each by margin (smallest first).
+    const rank = { "needs-assistance": 0, marginal: 1, starts: 2 } as Record<string, number>;
+    for (let k = 1; k < rowsB.length; k++) {
+      const [p, q] = [rowsB[k - 1]!, rowsB[k]!];
+      expect(rank[p.verdict!]! < rank[q.verdict!]! || (p.verdict === q.verdict && p.margin! <= q.margin!), `${p.id} before ${q.id}`).toBe(true);
+    }
+    expect((JSON.parse(b.stdout) as { order: string }).order).toBe("risk");
     // Something for the dispatcher in every row that does not start.
     for (const r of rowsA) if (r.verdict !== "starts") expect(r.assistance ?? r.divide).toBeTruthy();
   }, 120_000);

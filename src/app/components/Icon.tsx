@@ -32,6 +32,7 @@ const PATHS = {
   cab: "M4 4h16v16H4z M8 9h8 M12 9v8",
   clock: "M12 4a8 8 0 1 0 .01 0z M12 8v4.5l3 2",
   info: "M12 3a9 9 0 1 0 .01 0z M12 11v6 M12 7.5v.01",
+  open: "M3 19V5h6l2 2h10v12z M12 16v-6 M9 12.5l3-3 3 3",
 } as const;
 
 export type IconName = keyof typeof PATHS;

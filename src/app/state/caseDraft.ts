@@ -34,13 +34,22 @@ export interface CaseDraft {
     wagonType: string;
     slackState: SlackState;
   };
-  locationMode: "note" | "quick";
+  /** A saved note, a quick uniform entry, or the track profile a case file carried (kept as it was). */
+  locationMode: "note" | "quick" | "profile";
   /** The chosen location note (saved or built-in). */
   noteId: string;
+  /** The track profile of an opened case file, when it had one (INTERFACE.md: segments, frontAt_m, clearAhead_m). */
+  profile?: DraftProfile | null;
   quick: { gradient_permille: number; curveRadius_m: number; clearAhead_m: number };
   conditions: { rail: RailCondition; sand: boolean; temperature_C: number };
   targetKind: "speed" | "distance";
   target: { speed_kmh: number; distance_m: number };
+}
+
+export interface DraftProfile {
+  segments: Array<{ from_m: number; length_m: number; gradient_permille: number; curveRadius_m: number }>;
+  frontAt_m: number;
+  clearAhead_m: number;
 }
 
 /** The settings a case carries (INTERFACE.md `settings`). */
@@ -66,13 +75,14 @@ export function draftFromFile(f: StartCaseFile, wagonCoupling: (wagonType: strin
     illustrative: f.illustrative ?? false,
     locomotives: f.locomotives.map(locoFromFile),
     train: trainFromFile(f.train, wagonCoupling),
-    locationMode: typeof loc === "string" ? "note" : "quick",
+    locationMode: typeof loc === "string" ? "note" : "segments" in loc ? "profile" : "quick",
     noteId: typeof loc === "string" ? loc : "",
+    profile: typeof loc !== "string" && "segments" in loc ? { segments: loc.segments.map((x) => ({ ...x })), frontAt_m: loc.frontAt_m, clearAhead_m: loc.clearAhead_m } : null,
     quick:
       typeof loc === "string"
         ? { ...QUICK_DEFAULT }
         : "segments" in loc
-          ? { gradient_permille: loc.segments[0]!.gradient_permille, curveRadius_m: loc.segments[0]!.curveRadius_m, clearAhead_m: loc.clearAhead_m }
+          ? quickFromProfile(loc)
           : { gradient_permille: loc.gradient_permille, curveRadius_m: loc.curveRadius_m, clearAhead_m: loc.clearAhead_m },
     conditions: { rail: f.conditions.rail, sand: f.conditions.sand, temperature_C: f.conditions.temperature_C },
     targetKind: "speed_kmh" in f.target ? "speed" : "distance",
@@ -81,6 +91,12 @@ export function draftFromFile(f: StartCaseFile, wagonCoupling: (wagonType: strin
       distance_m: "distance_m" in f.target ? f.target.distance_m : 500,
     },
   };
+}
+
+/** A quick entry near a profile: the segment at the train's front, and the distance clear ahead. */
+function quickFromProfile(p: DraftProfile): CaseDraft["quick"] {
+  const front = p.segments.find((x) => x.from_m < p.frontAt_m && x.from_m + x.length_m >= p.frontAt_m) ?? p.segments[0]!;
+  return { gradient_permille: front.gradient_permille, curveRadius_m: front.curveRadius_m, clearAhead_m: p.clearAhead_m };
 }
 
 function locoFromFile(l: StartCaseFile["locomotives"][number]): DraftLoco {
@@ -135,7 +151,12 @@ export function draftToFile(d: CaseDraft, settings?: CaseSettings): Record<strin
     ...(t.wagonType ? { wagonType: t.wagonType } : {}),
     slackState: t.slackState,
   };
-  out.location = d.locationMode === "note" ? d.noteId : { ...d.quick };
+  out.location =
+    d.locationMode === "note"
+      ? d.noteId
+      : d.locationMode === "profile" && d.profile
+        ? { segments: d.profile.segments.map((x) => ({ ...x })), frontAt_m: d.profile.frontAt_m, clearAhead_m: d.profile.clearAhead_m }
+        : { ...d.quick };
   out.conditions = { ...d.conditions };
   out.target = d.targetKind === "speed" ? { speed_kmh: d.target.speed_kmh } : { distance_m: d.target.distance_m };
   if (settings) out.settings = { couplerSafetyFactor: settings.couplerSafetyFactor, slipRiskThreshold: settings.slipRiskThreshold };
@@ -154,7 +175,7 @@ export function looksLikeDraft(x: unknown): x is CaseDraft {
     typeof d.quick === "object" &&
     typeof d.conditions === "object" &&
     typeof d.target === "object" &&
-    (d.locationMode === "note" || d.locationMode === "quick") &&
+    (d.locationMode === "note" || d.locationMode === "quick" || (d.locationMode === "profile" && typeof d.profile === "object" && d.profile !== null)) &&
     (d.targetKind === "speed" || d.targetKind === "distance")
   );
 }

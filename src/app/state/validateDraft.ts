@@ -21,7 +21,7 @@ export function validateDraft(json: unknown, draft: CaseDraft, lib: Library): Pa
 function chosenBranch(path: ReadonlyArray<PropertyKey>, d: CaseDraft): number | undefined {
   const p = path.map(String).join(".");
   if (p === "target") return d.targetKind === "speed" ? 0 : 1;
-  if (p === "location") return d.locationMode === "note" ? 0 : 2;
+  if (p === "location") return d.locationMode === "note" ? 0 : d.locationMode === "profile" ? 1 : 2;
   const m = /^locomotives\.(\d+)\.position$/.exec(p);
   if (m) return d.locomotives[Number(m[1])]?.position === "after" ? 1 : 0;
   return undefined;

@@ -9,11 +9,12 @@ import { CHECK_ASSISTANCE_BUDGET, CHECK_DIVIDE_BUDGET } from "../batch/jobs.js";
 import { defaultPoolSize, JobPool } from "../batch/pool.js";
 import { checkCsv, renderCheck, summarise } from "../render/check.js";
 import { helperSpec, jobsOption, progressReporter } from "../options.js";
+import { sortByRisk } from "../../profiles/riskOrder.js";
 
 export const checkCommand: Command = {
   name: "check",
   summary: "batch check of departures: verdict, margin, largest mass, cheapest assistance",
-  usage: "taut check DEPARTURES.csv|DEPARTURES.json [--notes FILE]... [--helper ID] [--jobs N] [--quiet] [--json|--csv]",
+  usage: "taut check DEPARTURES.csv|DEPARTURES.json [--sort file|risk] [--notes FILE]... [--helper ID] [--jobs N] [--quiet] [--json|--csv]",
   help: [
     "Checks many departures at once: one row each with the verdict, its reasons, the margin (available ÷",
     "needed), the largest trailing mass that still starts, and the cheapest assistance that makes it start",
@@ -30,6 +31,9 @@ export const checkCommand: Command = {
     "from 0); the other rows are still answered. Identical departures are worked out once.",
     "",
     "Options:",
+    "  --sort risk   most at risk first, as the app's Departures screen: needs assistance, then marginal,",
+    "                then starts, each by margin (smallest first), rows not answered last; ties in file",
+    "                order. --sort file (the default) keeps the file's order.",
     "  --json        rows as JSON: { schema, departures: [...], summary, cautions }",
     "  --csv         rows as CSV",
     "  --notes FILE  location notes (a taut/location@1 note or a taut/notes-bundle@1 bundle); repeatable",
@@ -50,12 +54,15 @@ export const checkCommand: Command = {
     helper: { type: "string" },
     jobs: { type: "string" },
     quiet: { type: "boolean" },
+    sort: { type: "string" },
   },
   async run({ values, positionals }, io) {
     const path = positionals[0];
     if (!path) throw new InputError(`a departures file is needed\n  usage: ${checkCommand.usage}`);
     if (positionals.length > 1) throw new InputError(`one departures file at a time (got ${positionals.length})`);
     if (values.json && values.csv) throw new InputError("--json and --csv: choose one");
+    const sort = (values.sort as string | undefined) ?? "file";
+    if (sort !== "file" && sort !== "risk") throw new InputError(`--sort: must be file or risk (got "${sort}")`);
     const jobs = jobsOption(values.jobs as string | undefined);
     const lib = library(readNotesFiles((values.notes as string[] | undefined) ?? []));
     const helper = helperSpec(lib, values.helper as string | undefined);
@@ -70,7 +77,8 @@ export const checkCommand: Command = {
       await pool.close();
     }
     const elapsedS = (performance.now() - t0) / 1000;
-    const { rows, stats } = result;
+    const { stats } = result;
+    const rows = sort === "risk" ? sortByRisk(result.rows, (x, order) => ({ verdict: x.verdict, margin: x.margin, order, failed: x.error !== undefined })) : result.rows;
     const summary = {
       ...summarise(rows),
       elapsed_s: Math.round(elapsedS * 10) / 10,
@@ -80,7 +88,7 @@ export const checkCommand: Command = {
       medianCheck_ms: Math.round(median(stats.checkMs)),
       medianMassSearch_ms: Math.round(median(stats.massMs)),
     };
-    if (values.json) io.out(JSON.stringify({ schema: "taut/departures-check@1", file: path, departures: rows, summary, cautions: STANDARD_CAUTIONS }, null, 2));
+    if (values.json) io.out(JSON.stringify({ schema: "taut/departures-check@1", file: path, order: sort, departures: rows, summary, cautions: STANDARD_CAUTIONS }, null, 2));
     else if (values.csv) io.out(checkCsv(rows));
     else io.out(renderCheck(rows, STANDARD_CAUTIONS));
     if (!values.quiet) io.err(`taut check: ${rows.length} departures in ${summary.elapsed_s} s (${jobs} worker${jobs === 1 ? "" : "s"}; ${stats.checks} distinct checks, ${stats.massSearches} mass searches)`);

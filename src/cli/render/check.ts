@@ -53,7 +53,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
         VERDICT_WORDS[r.verdict!].toLowerCase(),
         (r.reasons ?? []).join(", ") || "—",
         num(r.margin, 2),
-        num(r.maxStartableMass_t),
+        r.maxStartableMass_t !== undefined && r.maxStartableMass_t <= 0 ? "none" : num(r.maxStartableMass_t),
         remedyText(r) || "—",
       ]),
     ),

@@ -62,6 +62,8 @@ function dayFile(): File {
   return new File([JSON.stringify(list)], "day.json", { type: "application/json" });
 }
 
+/** Wait until every row is answered (the export is enabled); generous, as the machine may be busy. */
+const answered = () => waitFor(() => expect(screen.getByRole("button", { name: /Export CSV/ }).hasAttribute("disabled")).toBe(false), { timeout: 15_000 });
 const picker = () => screen.getByLabelText("Departures file, and the case files a CSV names") as HTMLInputElement;
 const ids = () => [...document.querySelectorAll(".departures-table tbody tr")].map((r) => r.getAttribute("data-row"));
 
@@ -82,7 +84,7 @@ describe("Departures", () => {
     const pool = fakePool({ check: (c) => ok(answerFor(c)) });
     renderWithApp(() => <Departures />, { pool });
     fireEvent.change(picker(), { target: { files: [dayFile()] } });
-    await waitFor(() => expect(screen.getByRole("button", { name: /Export CSV/ }).hasAttribute("disabled")).toBe(false), { timeout: 10_000 });
+    await answered();
     expect(ids()).toEqual(["d-leaves", "d-wet", "d-frost", "d-damp", "d-dry"]);
     const bad = document.querySelector(".bad-rows")!;
     expect(bad.textContent).toContain("Rows not answered (1)");
@@ -99,12 +101,50 @@ describe("Departures", () => {
     expect(wet.querySelector(".verdict-cell svg")!.getAttribute("data-shape")).toBe("square");
     expect(wet.textContent).toContain("adhesion");
     expect(wet.textContent).toContain("× 0.98");
-    expect(wet.textContent).toContain("461 t");
+    // 460.7 t: the largest mass that starts is rounded down, as `taut check` gives whole tonnes (460).
+    expect(wet.textContent).toContain("460 t");
     expect(wet.textContent).toContain("Add 2 more units: 1 after wagon 9, 1 at the rear");
     const leaves = document.querySelector('tr[data-row="d-leaves"]')!;
     expect(leaves.textContent).toContain("none");
     expect(leaves.textContent).toContain("Divide the train: take the first 8 wagons (293 t)");
     expect(document.querySelector('tr[data-row="d-dry"]')!.textContent).toContain("Starts");
+  });
+
+  it("shows one verdict at a time, keeps the file's order on request, and counts each verdict", async () => {
+    renderWithApp(() => <Departures />, { pool: fakePool({ check: (c) => ok(answerFor(c)) }) });
+    fireEvent.change(picker(), { target: { files: [dayFile()] } });
+    await answered();
+    const filter = screen.getByRole("radiogroup", { name: "Show" });
+    expect([...filter.querySelectorAll("[role=radio]")].map((b) => b.textContent)).toEqual(["All (5)", "Needs assistance (2)", "Marginal (2)", "Starts (1)"]);
+    fireEvent.click(screen.getByRole("radio", { name: "Marginal (2)" }));
+    expect(ids()).toEqual(["d-frost", "d-damp"]);
+    fireEvent.click(screen.getByRole("radio", { name: "Starts (1)" }));
+    expect(ids()).toEqual(["d-dry"]);
+    fireEvent.click(screen.getByRole("radio", { name: "All (5)" }));
+    fireEvent.click(screen.getByRole("radio", { name: "File order" }));
+    expect(ids()).toEqual(["d-dry", "d-wet", "d-leaves", "d-damp", "d-frost"]);
+    expect(document.querySelector(".departures-table caption")!.textContent).toMatch(/^In the file's order/);
+    fireEvent.click(screen.getByRole("radio", { name: "Most at risk first" }));
+    expect(ids()).toEqual(["d-leaves", "d-wet", "d-frost", "d-damp", "d-dry"]);
+  });
+
+  it("opens a row's train in Start plan or Assistance check, as the case being edited", async () => {
+    const { harness } = renderWithApp(() => <Departures />, { pool: fakePool({ check: (c) => ok(answerFor(c)) }) });
+    fireEvent.change(picker(), { target: { files: [dayFile()] } });
+    await answered();
+    fireEvent.click(screen.getByRole("button", { name: "Open d-wet in Start plan" }));
+    expect(harness.state.nav.screen()).toBe("start-plan");
+    const d = harness.state.draft.draft;
+    expect(d.conditions.rail).toBe("wet");
+    expect(d.id).toBe("d-wet");
+    expect(d.label).toMatch(/^d-wet: /);
+    // The draft plans exactly the departure the row answered.
+    const c = harness.state.draft.checked();
+    expect(c.ok && c.value.train.trailingMassKg).toBe(1_400_000);
+    fireEvent.click(screen.getByRole("button", { name: "Open d-frost in Assistance check" }));
+    expect(harness.state.nav.screen()).toBe("assistance-check");
+    expect(harness.state.draft.draft.conditions.rail).toBe("frost");
+    expect(harness.state.draft.draft.train.trailingMass_t).toBe(5200);
   });
 
   it("exports the command line's CSV: its columns and units, rows in file order, the bad row with its error", async () => {
@@ -183,7 +223,7 @@ describe("Departures", () => {
     await waitFor(() => expect(document.querySelectorAll('tr[data-verdict="marginal"]')).toHaveLength(2));
     expect(pool.calls).toHaveLength(1);
     const text = document.querySelector(".departures-table")!.textContent!;
-    expect(text).toContain("782 short tons"); // 709.2 t
+    expect(text).toContain("781 short tons"); // 709.2 t = 781.8 short tons, rounded down
     expect(text).toContain("1,543 short tons"); // the train's 1,400 t
     expect(text).not.toMatch(/\d t\b/);
   });

@@ -20,7 +20,9 @@ export function caseInfo(c: StartCase, d: CaseDraft, placeName: string | undefin
   const place =
     d.locationMode === "note"
       ? (placeName ?? d.noteId)
-      : `quick entry — gradient ${show("grade", q.gradient_permille / 1000, units)}${q.curveRadius_m > 0 ? `, curve ${show("radius", q.curveRadius_m, units)}` : ", straight"}, clear ahead ${show("distance", q.clearAhead_m, units)}`;
+      : d.locationMode === "profile" && d.profile
+        ? `the case file's track profile (${d.profile.segments.length} segments, clear ahead ${show("distance", d.profile.clearAhead_m, units)})`
+        : `quick entry — gradient ${show("grade", q.gradient_permille / 1000, units)}${q.curveRadius_m > 0 ? `, curve ${show("radius", q.curveRadius_m, units)}` : ", straight"}, clear ahead ${show("distance", q.clearAhead_m, units)}`;
   return {
     // A case changed since it was loaded no longer matches its name's words (a "dry afternoon" on wet rail).
     title: d.label ? `${d.label}${edited ? " — edited" : ""}` : "the case in Start plan",

@@ -1,11 +1,15 @@
 /**
  * Departures (view): load a day's departures, follow the check, read the rows by risk (needs assistance
- * first, then marginal, each by margin), see the bad rows with their lines, export CSV. Props in, JSX out.
+ * first, then marginal, each by margin) or in the file's order, show only one verdict, open a row's train in
+ * Start plan or Assistance check, see the bad rows with their lines, export CSV. In portrait each row is a
+ * compact card (a day of twelve trains is under two screens). Props in, JSX out.
  */
 import { For, Show, type JSX } from "solid-js";
+import type { Verdict } from "../../../core/planner/outcome.js";
 import { Icon } from "../../components/Icon.js";
+import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
-import { margin, show, type UnitSystem } from "../../format.js";
+import { margin, show, showAtMost, type UnitSystem } from "../../format.js";
 import { Cautions } from "../shared/Cautions.js";
 import { divideLine, optionHeadline, RAIL_WORD, REASON_SHORT } from "../shared/words.js";
 import type { RunState } from "./createDeparturesRun.js";
@@ -19,6 +23,11 @@ export interface LoadedFile {
   /** Picked files the CSV does not name. */
   unused: string[];
 }
+
+/** Which rows are shown: all, or one verdict. */
+export type DeparturesFilter = "all" | Verdict;
+/** Most at risk first, or the file's order. */
+export type DeparturesSort = "risk" | "file";
 
 export interface DeparturesViewProps {
   file: LoadedFile | null;
@@ -38,6 +47,12 @@ export interface DeparturesViewProps {
   onCancel: () => void;
   onRestart: () => void;
   onExport: () => void;
+  filter?: DeparturesFilter;
+  onFilter?: (f: DeparturesFilter) => void;
+  sort?: DeparturesSort;
+  onSort?: (s: DeparturesSort) => void;
+  /** Open a row's train in Start plan ("plan") or in Assistance check ("assistance"). */
+  onOpen?: (row: DepartureRow, where: "plan" | "assistance") => void;
 }
 
 export function DeparturesView(props: DeparturesViewProps): JSX.Element {
@@ -193,9 +208,44 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
         </section>
       </Show>
 
+      <Show when={props.summary.checkable > 0 && (props.rows.length > 0 || (props.filter ?? "all") !== "all")}>
+        <div class="departures-controls">
+          <SegmentedButtons
+            name="departures-filter"
+            label="Show"
+            value={props.filter ?? "all"}
+            onChange={(f) => props.onFilter?.(f)}
+            options={[
+              { value: "all", label: `All (${props.summary.checkable})` },
+              { value: "needs-assistance", label: `Needs assistance (${props.summary.needsAssistance})` },
+              { value: "marginal", label: `Marginal (${props.summary.marginal})` },
+              { value: "starts", label: `Starts (${props.summary.starts})` },
+            ]}
+          />
+          <SegmentedButtons
+            name="departures-sort"
+            label="Order"
+            value={props.sort ?? "risk"}
+            onChange={(v) => props.onSort?.(v)}
+            options={[
+              { value: "risk", label: "Most at risk first" },
+              { value: "file", label: "File order" },
+            ]}
+          />
+        </div>
+        <Show when={props.rows.length === 0}>
+          <p class="placeholder-text">No departure has that verdict.</p>
+        </Show>
+      </Show>
+
       <Show when={props.rows.length > 0}>
         <table class="dispatch-table departures-table">
-          <caption>Most at risk first: needs assistance, then marginal, each by margin (smallest first), then those that start.</caption>
+          <caption>
+            {(props.sort ?? "risk") === "risk"
+              ? "Most at risk first: needs assistance, then marginal, each by margin (smallest first), then those that start."
+              : "In the file's order."}{" "}
+            Open a train to see its full plan or its assistance options.
+          </caption>
           <thead>
             <tr>
               <th scope="col">Departure</th>
@@ -208,10 +258,11 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
                 Largest mass that starts
               </th>
               <th scope="col">Cheapest assistance</th>
+              <th scope="col">Open</th>
             </tr>
           </thead>
           <tbody>
-            <For each={props.rows}>{(x) => <Row row={x} units={props.units} />}</For>
+            <For each={props.rows}>{(x) => <Row row={x} units={props.units} {...(props.onOpen ? { onOpen: props.onOpen } : {})} />}</For>
           </tbody>
         </table>
       </Show>
@@ -221,7 +272,7 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
   );
 }
 
-function Row(props: { row: DepartureRow; units: UnitSystem }): JSX.Element {
+function Row(props: { row: DepartureRow; units: UnitSystem; onOpen?: (row: DepartureRow, where: "plan" | "assistance") => void }): JSX.Element {
   const x = () => props.row;
   const a = () => x().answer;
   const sub = () =>
@@ -244,11 +295,11 @@ function Row(props: { row: DepartureRow; units: UnitSystem }): JSX.Element {
   };
   return (
     <tr classList={{ pending: !a() }} data-row={x().id} data-verdict={a()?.verdict ?? "pending"}>
-      <td data-label="Departure">
+      <td data-label="Departure" class="dep">
         <span class="row-id">{x().id}</span>
         <span class="row-sub">{sub()}</span>
       </td>
-      <td data-label="Verdict">
+      <td data-label="Verdict" class="verdict-td">
         <Show when={a()} fallback={<span>waiting…</span>}>
           {(r) => (
             <span class={`verdict-cell verdict-${r().verdict}`}>
@@ -258,14 +309,28 @@ function Row(props: { row: DepartureRow; units: UnitSystem }): JSX.Element {
           )}
         </Show>
       </td>
-      <td data-label="Why">{a() ? (a()!.reasons.length > 0 ? a()!.reasons.map((r) => REASON_SHORT[r]).join(", ") : "—") : ""}</td>
-      <td data-label="Margin" class="num">
+      <td data-label="Why" class="why">{a() ? (a()!.reasons.length > 0 ? a()!.reasons.map((r) => REASON_SHORT[r]).join(", ") : "—") : ""}</td>
+      <td data-label="Margin" data-short="margin" class="num">
         {a() ? margin(a()!.margin) : ""}
       </td>
-      <td data-label="Largest mass that starts" class="num">
-        {a() ? (a()!.maxStartableMassKg > 0 ? show("mass", a()!.maxStartableMassKg, props.units) : "none") : ""}
+      <td data-label="Largest mass that starts" data-short="largest" class="num">
+        {a() ? (a()!.maxStartableMassKg >= 1000 ? showAtMost("mass", a()!.maxStartableMassKg, props.units) : "none") : ""}
       </td>
-      <td data-label="Cheapest assistance">{remedy()}</td>
+      <td data-label="Cheapest assistance" class="remedy">
+        {remedy()}
+      </td>
+      <td data-label="Open" class="open">
+        <Show when={x().file !== undefined && props.onOpen}>
+          <div class="open-buttons">
+            <button type="button" class="button" aria-label={`Open ${x().id} in Start plan`} onClick={() => props.onOpen?.(x(), "plan")}>
+              <Icon name="plan" size={20} /> Plan
+            </button>
+            <button type="button" class="button" aria-label={`Open ${x().id} in Assistance check`} onClick={() => props.onOpen?.(x(), "assistance")}>
+              <Icon name="assist" size={20} /> Assistance
+            </button>
+          </div>
+        </Show>
+      </td>
     </tr>
   );
 }

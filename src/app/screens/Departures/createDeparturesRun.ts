@@ -26,6 +26,7 @@ function rowOf(d: Departure, order: number): DepartureRow {
   if (d.line !== undefined) row.line = d.line;
   if (d.index !== undefined) row.index = d.index;
   if (d.case) {
+    if (d.file !== undefined) row.file = d.file;
     row.rail = d.case.conditions.rail;
     row.sand = d.case.conditions.sand;
     row.trailingMassKg = d.case.train.trailingMassKg;

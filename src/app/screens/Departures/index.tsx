@@ -1,24 +1,40 @@
 /**
  * Departures (wiring): read the picked files (saved location notes count as locations), check every row
- * on the planner worker pool, sort by risk, export CSV. The view is View.tsx.
+ * on the planner worker pool, sort by risk or keep the file's order, show one verdict, open a row's train
+ * in Start plan or Assistance check (it becomes the case being edited), export CSV. The view is View.tsx.
  */
 import { createSignal, type JSX, type Signal } from "solid-js";
 import { builtinLibrary } from "../../../profiles/builtin.js";
 import type { Library } from "../../../profiles/library.js";
 import { useApp } from "../../context.js";
 import { declarePrintStatus } from "../../state/printStatus.js";
+import { download } from "../../download.js";
 import "../shared/dispatch.css";
 import { departuresRunFor } from "./createDeparturesRun.js";
 import { pickedFiles, readPickedDepartures, type PickedFile } from "./readFiles.js";
-import { byRisk, departuresCsv, summarise } from "./rows.js";
-import { DeparturesView, type LoadedFile } from "./View.js";
+import { parseStartCaseFile } from "../../../profiles/parse.js";
+import { byRisk, departuresCsv, summarise, type DepartureRow } from "./rows.js";
+import { DeparturesView, type DeparturesFilter, type DeparturesSort, type LoadedFile } from "./View.js";
 
 /** The file and problem shown, kept with the run (per set of workers) while the app is open. */
-const screens = new WeakMap<object, { loaded: Signal<{ file: LoadedFile; picked: PickedFile[] } | null>; problem: Signal<string | null> }>();
+const screens = new WeakMap<
+  object,
+  {
+    loaded: Signal<{ file: LoadedFile; picked: PickedFile[] } | null>;
+    problem: Signal<string | null>;
+    filter: Signal<DeparturesFilter>;
+    sort: Signal<DeparturesSort>;
+  }
+>();
 function screenState(workers: object) {
   let s = screens.get(workers);
   if (!s) {
-    s = { loaded: createSignal<{ file: LoadedFile; picked: PickedFile[] } | null>(null), problem: createSignal<string | null>(null) };
+    s = {
+      loaded: createSignal<{ file: LoadedFile; picked: PickedFile[] } | null>(null),
+      problem: createSignal<string | null>(null),
+      filter: createSignal<DeparturesFilter>("all"),
+      sort: createSignal<DeparturesSort>("risk"),
+    };
     screens.set(workers, s);
   }
   return s;
@@ -34,24 +50,14 @@ async function libraryForFiles(fallback: Library): Promise<Library> {
   }
 }
 
-/** Save text as a file through the browser's download. */
-export function download(text: string, name: string, type: string): void {
-  const url = URL.createObjectURL(new Blob([text], { type }));
-  const a = document.createElement("a");
-  a.href = url;
-  a.download = name;
-  document.body.append(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 10_000);
-}
-
 export default function Departures(): JSX.Element {
   const app = useApp();
   const run = departuresRunFor(app.pool);
   const {
     loaded: [loaded, setLoaded],
     problem: [problem, setProblem],
+    filter: [filter, setFilter],
+    sort: [sort, setSort],
   } = screenState(app.pool);
   const [reading, setReading] = createSignal(false);
   const rows = run.rows;
@@ -82,7 +88,21 @@ export default function Departures(): JSX.Element {
       problem={problem()}
       reading={reading()}
       state={run.state()}
-      rows={byRisk(rows().filter((x) => x.error === undefined))}
+      rows={shown(rows(), filter(), sort())}
+      filter={filter()}
+      onFilter={setFilter}
+      sort={sort()}
+      onSort={setSort}
+      onOpen={(row, where) => {
+        const f = parseStartCaseFile(row.file);
+        if (!f.ok) {
+          setProblem(`${row.id} cannot be opened: ${f.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
+          return;
+        }
+        // The departure becomes the case being edited: Start plan plans it, Assistance check checks it.
+        app.draft.loadCase({ ...f.value, id: f.value.id ?? row.id, label: f.value.label ? `${row.id}: ${f.value.label}` : `Departure ${row.id}` });
+        app.nav.go(where === "plan" ? "start-plan" : "assistance-check");
+      }}
       bad={rows().filter((x) => x.error !== undefined)}
       summary={summarise(rows())}
       progress={run.progress()}
@@ -106,4 +126,10 @@ export default function Departures(): JSX.Element {
       onExport={() => download(departuresCsv(rows()), `${(loaded()?.file.name ?? "departures").replace(/\.(csv|json)$/i, "")}-check.csv`, "text/csv")}
     />
   );
+}
+
+/** The answered and waiting rows to show: one verdict or all, most at risk first or in the file's order. */
+export function shown(rows: readonly DepartureRow[], filter: DeparturesFilter, sort: DeparturesSort): DepartureRow[] {
+  const good = rows.filter((x) => x.error === undefined && (filter === "all" || x.answer?.verdict === filter));
+  return sort === "risk" ? byRisk(good) : [...good].sort((a, b) => a.order - b.order);
 }

@@ -3,7 +3,7 @@
  * error of its line; sorted by risk for the screen (needs assistance first, then marginal, each by margin,
  * then the rest); and the CSV export with `taut check --csv`'s columns and units (t, kN, s), in file order.
  */
-import type { Verdict } from "../../../core/planner/outcome.js";
+import { sortByRisk } from "../../../profiles/riskOrder.js";
 import { CHECK_CSV_HEADER, toCsv } from "../../../profiles/csv.js";
 import { r } from "../../../profiles/report.js";
 import type { CheckAnswer } from "../../../worker/protocol.js";
@@ -22,17 +22,19 @@ export interface DepartureRow {
   trailingMassKg?: number;
   /** The answer, once it is in. */
   answer?: CheckAnswer;
+  /** The row's start case as a file (to open it in Start plan and Assistance check). */
+  file?: unknown;
   /** Why the row has no answer: bad input, or the calculation failed. */
   error?: string;
   errorKind?: "input" | "internal";
 }
 
-const RANK: Record<Verdict, number> = { "needs-assistance": 0, marginal: 1, starts: 2 };
-
-/** Risk order: needs assistance, marginal, starts (each by margin, smallest first), then rows still waiting; bad rows last. */
+/**
+ * Risk order: needs assistance, marginal, starts (each by margin, smallest first), then rows still waiting;
+ * bad rows last — the order `taut check --sort risk` gives (src/profiles/riskOrder.ts).
+ */
 export function byRisk(rows: readonly DepartureRow[]): DepartureRow[] {
-  const rank = (x: DepartureRow) => (x.answer ? RANK[x.answer.verdict] : x.error ? 4 : 3);
-  return [...rows].sort((a, b) => rank(a) - rank(b) || (a.answer && b.answer ? a.answer.margin - b.answer.margin : 0) || a.order - b.order);
+  return sortByRisk(rows, (x) => ({ verdict: x.answer?.verdict, margin: x.answer?.margin, order: x.order, failed: x.error !== undefined }));
 }
 
 export interface DeparturesSummary {

@@ -1,4 +1,7 @@
-/** Start plan inputs, location: a saved location note, or a quick entry of gradient, curve and distance clear ahead. */
+/**
+ * Start plan inputs, location: a saved location note, a quick entry of gradient, curve and distance clear
+ * ahead, or — when an opened case file carried one — its track profile, kept as it was.
+ */
 import { For, Show, type JSX } from "solid-js";
 import { gradeAt } from "../../../core/physics/track.js";
 import { trackFromSegments } from "../../../profiles/convert.js";
@@ -32,8 +35,22 @@ export function LocationSection(props: LocationSectionProps): JSX.Element {
         options={[
           { value: "note", label: "Saved note", icon: "notes" },
           { value: "quick", label: "Quick entry", icon: "plan" },
+          ...(d.profile ? [{ value: "profile" as const, label: "Case file's profile", icon: "table" as const }] : []),
         ]}
       />
+      <Show when={d.locationMode === "profile" && d.profile}>
+        {(p) => (
+          <div class="field" data-field="location">
+            <p class="profile-from-file">{profileFacts(p(), props.units)}</p>
+            <p class="muted">The track profile of the opened case file, used as it is. Choose a saved note or quick entry to plan somewhere else.</p>
+            <Show when={issue("location", "location.frontAt_m")}>
+              <p class="field-issue" role="alert">
+                Location {issue("location", "location.frontAt_m")}
+              </p>
+            </Show>
+          </div>
+        )}
+      </Show>
       <Show when={d.locationMode === "note"}>
         <div class="field" data-field="location">
           <div class="note-list" role="radiogroup" aria-label="Location note">
@@ -97,6 +114,12 @@ export function LocationSection(props: LocationSectionProps): JSX.Element {
       </Show>
     </section>
   );
+}
+
+/** One line about a case file's profile: segments, gradient at the front, clear ahead. */
+export function profileFacts(p: { segments: LocationNoteFile["segments"]; frontAt_m: number; clearAhead_m: number }, units: UnitSystem): string {
+  const g = gradeAt(trackFromSegments(p.segments), p.frontAt_m - 1);
+  return `${p.segments.length} segment${p.segments.length === 1 ? "" : "s"} · ${show("grade", g / 1000, units)} at the front · ${show("distance", p.clearAhead_m, units)} clear ahead`;
 }
 
 /** One line about a note: gradient at the front, clear ahead, hazards. */

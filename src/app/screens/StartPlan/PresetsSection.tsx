@@ -1,31 +1,76 @@
-/** Start plan inputs, quick fill: the demo case and the train presets, one tap each. */
-import { For, Show, type JSX } from "solid-js";
-import type { TrainPresetFile } from "../../../profiles/schemas.js";
+/**
+ * Start plan inputs, quick fill and files: the three demo cases (each the whole case, as in profiles/cases),
+ * the train presets (the train only), and a case opened from or saved to a JSON file in the command line's
+ * schema (`taut plan FILE` plans the same case).
+ */
+import { createSignal, For, Show, type JSX } from "solid-js";
+import type { FieldIssue } from "../../../profiles/issues.js";
+import type { Library } from "../../../profiles/library.js";
+import type { StartCaseFile, TrainPresetFile } from "../../../profiles/schemas.js";
+import { ErrorList } from "../../components/ErrorList.js";
+import { Icon } from "../../components/Icon.js";
+import { download } from "../../download.js";
+import type { CaseSettings } from "../../state/caseDraft.js";
 import type { CaseDraftStore } from "../../state/createCaseDraft.js";
+import { caseFileName, caseFileText, readCaseFile } from "./caseFile.js";
 
 export interface PresetsSectionProps {
   store: CaseDraftStore;
   presets: readonly TrainPresetFile[];
+  /** The demo cases (profiles/cases), each filled whole. */
+  cases?: readonly StartCaseFile[];
+  library?: Library;
+  /** The app's safety settings, to say when an opened file's differ. */
+  settings?: CaseSettings;
 }
 
-/** Quick fill: the demo case and the presets; the case's label once one is loaded. */
+type Opened = { kind: "ok"; name: string; notes: string[] } | { kind: "bad"; message: string; issues: FieldIssue[] } | null;
+
+/** Quick fill: the demo cases and the presets; open and save a case file; the case's label once one is loaded. */
 export function PresetsSection(props: PresetsSectionProps): JSX.Element {
   const s = props.store;
   const d = s.draft;
+  const [opened, setOpened] = createSignal<Opened>(null);
+  let picker!: HTMLInputElement;
+  const open = async (file: File) => {
+    const text = await file.text();
+    const settings = props.settings ?? { couplerSafetyFactor: 1.2, slipRiskThreshold: 0.1 };
+    const r = props.library ? readCaseFile(file.name, text, props.library, settings) : { ok: false as const, message: "no library", issues: [] };
+    if (!r.ok) {
+      setOpened({ kind: "bad", message: r.message, issues: r.issues });
+      return;
+    }
+    s.loadCase(r.file);
+    setOpened({ kind: "ok", name: file.name, notes: r.notes });
+  };
+  const save = () => {
+    const json = s.caseJson();
+    download(caseFileText(json), caseFileName(json), "application/json");
+  };
   return (
     <section class="panel">
       <h2>Quick fill</h2>
-      <p class="muted">One tap fills the locomotives and the train. Demo trains are illustrative.</p>
-      <div class="preset-row">
-        <button type="button" class="button preset" onClick={() => s.loadDemo()}>
-          <span class="preset-name">
-            Demo case<span class="visually-hidden">:</span>
-          </span>{" "}
-          <span class="preset-detail">train, place, rail and target</span>
-        </button>
+      <Show when={(props.cases ?? []).length > 0}>
+        <p class="muted">A demo case fills everything: train, place, rail and target (illustrative).</p>
+        <div class="preset-row" data-quick="cases">
+          <For each={props.cases}>
+            {(c) => (
+              <button type="button" class="button preset" data-case={c.id} onClick={() => (s.loadCase(c), setOpened(null))}>
+                <span class="preset-name">
+                  {caseName(c.label ?? c.id ?? "")}
+                  <span class="visually-hidden">,</span>
+                </span>{" "}
+                <span class="preset-detail">{caseDetail(c.label ?? "")}</span>
+              </button>
+            )}
+          </For>
+        </div>
+      </Show>
+      <p class="muted">A train fills the locomotives and the train only, keeping place, rail and target.</p>
+      <div class="preset-row" data-quick="trains">
         <For each={props.presets}>
           {(p) => (
-            <button type="button" class="button preset" onClick={() => s.applyPreset(p)}>
+            <button type="button" class="button preset" data-train={p.id} onClick={() => (s.applyPreset(p), setOpened(null))}>
               <span class="preset-name">
                 {presetName(p.label)}
                 <span class="visually-hidden">,</span>
@@ -35,6 +80,43 @@ export function PresetsSection(props: PresetsSectionProps): JSX.Element {
           )}
         </For>
       </div>
+      <div class="file-actions case-files">
+        <button type="button" class="button" onClick={() => picker.click()}>
+          <Icon name="open" /> Open case file…
+        </button>
+        <input
+          ref={picker}
+          class="visually-hidden"
+          type="file"
+          accept=".json,application/json"
+          aria-label="Start-case file to open"
+          tabIndex={-1}
+          onChange={(e) => {
+            const f = e.currentTarget.files?.[0];
+            e.currentTarget.value = "";
+            if (f) void open(f);
+          }}
+        />
+        <button type="button" class="button" onClick={save}>
+          <Icon name="ready" /> Save case file
+        </button>
+      </div>
+      <p class="muted small-print">The file is a start case (taut/start-case@1), the one `taut plan FILE` reads.</p>
+      <Show when={opened()} keyed>
+        {(v) =>
+          v.kind === "bad" ? (
+            <div class="problem" role="alert">
+              <p>{v.message}. Nothing was changed.</p>
+              <ErrorList issues={v.issues} title="What the file breaks" />
+            </div>
+          ) : (
+            <div class="opened-case" role="status">
+              <p>Opened {v.name}.</p>
+              <For each={v.notes}>{(n) => <p class="alert-text">{n}</p>}</For>
+            </div>
+          )
+        }
+      </Show>
       <Show when={d.label}>
         <p class="case-label">
           <strong>{d.label}</strong>
@@ -48,3 +130,9 @@ export function PresetsSection(props: PresetsSectionProps): JSX.Element {
 /** "Ore block, 5200 t, …" → "Ore block" and the rest. */
 const presetName = (label: string) => label.split(",")[0]!.trim();
 const presetDetail = (label: string) => label.split(",").slice(1).join(",").trim();
+
+/** "Aggregate block leaving Ashvale Loop on a dry afternoon (illustrative)" → "Aggregate block" and "leaving Ashvale Loop on a dry afternoon". */
+const CASE_SPLIT = / (?=leaving |restarting |starting |departing )/;
+const plain = (label: string) => label.replace(/\s*\(illustrative\)\s*$/, "").trim();
+export const caseName = (label: string) => plain(label).split(CASE_SPLIT)[0]!.trim();
+export const caseDetail = (label: string) => plain(label).split(CASE_SPLIT).slice(1).join(" ").trim();

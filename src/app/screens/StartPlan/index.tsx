@@ -1,6 +1,6 @@
 /** Start plan wiring: the case being edited, its plan run and the settings, into the view. */
 import type { JSX } from "solid-js";
-import { builtinTrains } from "../../../profiles/builtin.js";
+import { builtinCases, builtinTrains } from "../../../profiles/builtin.js";
 import { PALETTES } from "../../charts/palette.js";
 import { useApp } from "../../context.js";
 import { declarePrintStatus } from "../../state/printStatus.js";
@@ -36,6 +36,11 @@ export default function StartPlan(): JSX.Element {
           return app.locations.error();
         },
         presets: builtinTrains,
+        cases: builtinCases,
+        get settings() {
+          const s = app.settings.settings();
+          return { couplerSafetyFactor: s.couplerSafetyFactor, slipRiskThreshold: s.slipRiskThreshold };
+        },
       }}
       result={{
         get status() {
