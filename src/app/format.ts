@@ -115,6 +115,20 @@ export function show(m: MeasureKey, si: number, system: UnitSystem, decimals?: n
 }
 
 /**
+ * Figures the command line prints too, rounded as it rounds them: forces from the tenth of a kN its JSON
+ * gives, fractions (adhesion used, slip risk) from its four decimals — so the app and `taut plan` never
+ * differ by one in the last digit.
+ */
+export function showForce(si: number, system: UnitSystem, decimals?: number): string {
+  return show("force", Number.isFinite(si) ? roundHalfAway(si / 1000, 1) * 1000 : si, system, decimals);
+}
+
+/** A fraction as the command line rounds it (four decimals first), as a percentage. */
+export function percentOf(fraction: number, decimals = 1): string {
+  return percent(Number.isFinite(fraction) ? roundHalfAway(fraction, 4) : fraction, decimals);
+}
+
+/**
  * A largest-that-still-works figure (the largest trailing mass that starts): rounded down in the display
  * unit, never up, as the command line's whole tonnes are (`maxStartableMass_t`).
  */

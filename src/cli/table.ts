@@ -3,7 +3,7 @@ import { fixedText } from "../profiles/numbers.js";
 
 export function textTable(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<string>>): string {
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
-  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+]?[\d.,]+%?$|^—$|^none$/.test(r[i] ?? "")));
+  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+<]?[\d.,]+%?( @[\d.]+)?$|^—$|^none$/.test(r[i] ?? "")));
   const line = (cells: readonly string[]) =>
     cells.map((c, i) => (isNum[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join("  ").trimEnd();
   return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");
@@ -15,8 +15,11 @@ export function num(x: number | null | undefined, decimals = 0): string {
   return fixedText(x, decimals);
 }
 
+/** A fraction as a percentage; a small one that would read 0 reads "<0.1%" (as the app shows it). */
 export function pct(x: number, decimals = 0): string {
-  return `${fixedText(x * 100, decimals)}%`;
+  const p = x * 100;
+  if (p > 0 && p < 0.5 * 10 ** -decimals) return `<${fixedText(10 ** -decimals, decimals)}%`;
+  return `${fixedText(p, decimals)}%`;
 }
 
 export { toCsv as csv } from "../profiles/csv.js";

@@ -18,6 +18,9 @@ export interface StepReport {
   speed_kmh: number;
   tractiveEffort_kN: number;
   adhesionUse: number;
+  /** Where adhesionUse (the step's highest) was reached: locomotive speed and tractive effort there. */
+  adhesionUseAt_kmh?: number;
+  adhesionUseEffort_kN?: number;
   slipRisk: number;
   peakCouplerForce_kN: number;
   fallbackNotch: number;
@@ -171,8 +174,10 @@ export function stepReport(s: PlanStep): StepReport {
     advanceWhen: { after_s: r(s.advanceWhen.afterS, 0), moved_m: r(s.advanceWhen.movedM, 1), speed_kmh: kmh(s.advanceWhen.speedMps), primary: s.advanceWhen.primary },
     speed_kmh: kmh(s.speedMps),
     tractiveEffort_kN: kN(s.tractiveEffortN, 0),
-    adhesionUse: r(s.adhesionUse, 3),
-    slipRisk: r(s.slipRisk, 3),
+    adhesionUse: r(s.adhesionUse, 4),
+    adhesionUseAt_kmh: kmh(s.adhesionUseAt.speedMps),
+    adhesionUseEffort_kN: kN(s.adhesionUseAt.tractiveEffortN, 0),
+    slipRisk: r(s.slipRisk, 4),
     peakCouplerForce_kN: kN(s.peakCouplerForceN, 0),
     fallbackNotch: s.fallbackNotch,
     why: s.why,

@@ -25,6 +25,7 @@ export function step(p: Partial<PlanStep> & Pick<PlanStep, "notch">): PlanStep {
     speedMps: 0,
     tractiveEffortN: 0,
     adhesionUse: 0,
+    adhesionUseAt: { speedMps: p.speedMps ?? 0, tractiveEffortN: p.tractiveEffortN ?? 0 },
     slipRisk: 0,
     peakCouplerForceN: 0,
     fallbackNotch: Math.max(0, p.notch - 1),

@@ -45,7 +45,7 @@ describe("screen registry and tabs", () => {
     const { harness } = renderWithApp();
     await waitFor(() => expect(document.querySelector("[data-verdict]")).not.toBeNull(), { timeout: 10_000 });
     fireEvent.click(screen.getByRole("link", { name: "Settings" }));
-    fireEvent.click(await screen.findByRole("radio", { name: /US customary/ }));
+    fireEvent.click(await screen.findByRole("radio", { name: /US customary/ }, { timeout: 10_000 }));
     fireEvent.click(screen.getByRole("radio", { name: "Night" }));
     expect(document.documentElement.dataset.theme).toBe("night");
     expect(JSON.parse(harness.storage.getItem(SETTINGS_KEY)!)).toMatchObject({ units: "us", theme: "night" });

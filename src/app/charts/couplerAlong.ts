@@ -3,7 +3,7 @@
  * divided by the safety factor. Null while the plan has no per-coupling peaks.
  */
 import type { PlanResult } from "../../core/planner/types.js";
-import { toDisplay, unitSymbol, type UnitSystem } from "../format.js";
+import { show, toDisplay, unitSymbol, type UnitSystem } from "../format.js";
 import { maxOf, niceCeil, type ChartSpec, type Point } from "./spec.js";
 
 export function couplerChart(r: PlanResult, limitN: number, safetyFactor: number, units: UnitSystem): ChartSpec | null {
@@ -21,15 +21,15 @@ export function couplerChart(r: PlanResult, limitN: number, safetyFactor: number
   return {
     series: [
       { id: "peak", label: `Peak tension (${unit})`, points: pts, role: "main", fill: "origin" },
-      { id: "working", label: `Limit ÷ ${safetyFactor} (${unit})`, points: flat(f(limitN / safetyFactor)), role: "working", dashed: true },
+      { id: "working", label: `Allowed: limit ÷ ${safetyFactor} (${unit})`, points: flat(f(limitN / safetyFactor)), role: "working", dashed: true },
       { id: "limit", label: `Working limit (${unit})`, points: flat(f(limitN)), role: "limit" },
     ],
     x: { title: "Coupling, from the head (1) to the tail", min: 1, max: last },
     y: { title: `Force (${unit})`, min: 0, max: top },
     legend: [
       { label: "Peak tension in each coupling", role: "main" },
-      { label: `Working limit ÷ safety factor ${safetyFactor}`, role: "working", dashed: true },
-      { label: "Coupler working limit", role: "limit" },
+      { label: `Allowed: ${show("force", limitN / safetyFactor, units)} (limit ÷ safety factor ${safetyFactor}), what the plan keeps to`, role: "working", dashed: true },
+      { label: `Coupler working limit: ${show("force", limitN, units)}`, role: "limit" },
     ],
   };
 }

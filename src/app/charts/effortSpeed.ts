@@ -9,7 +9,19 @@ import { notchEffortN } from "../../core/physics/traction.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
 import type { StartCase } from "../../core/train/types.js";
 import { percent, toDisplay, unitSymbol, type UnitSystem } from "../format.js";
+import { RAIL_MARKER } from "./palette.js";
 import { niceCeil, type ChartSpec, type LegendEntry, type LineSeries, type Point } from "./spec.js";
+
+/** A plan step on the chart: where its adhesion use was highest (speed, and the effort its notch asks there). */
+export interface StepMark {
+  /** Step number, from 1. */
+  number: number;
+  speedMps: number;
+  effortN: number;
+}
+
+/** Samples of a band's median line that carry its marker. */
+const MARK_EVERY = 6;
 
 /** Sample points along the speed axis. */
 const SAMPLES = 31;
@@ -38,7 +50,7 @@ export function totalAdhesionN(c: StartCase, rail: RailCondition, speedMps: numb
 
 export const RAIL_WORD: Record<RailCondition, string> = { dry: "dry", damp: "damp", wet: "wet", frost: "frost", leaves: "leaves", greasy: "greasy" };
 
-export function effortChart(c: StartCase, units: UnitSystem, requiredN?: number): ChartSpec {
+export function effortChart(c: StartCase, units: UnitSystem, requiredN?: number, steps: readonly StepMark[] = []): ChartSpec {
   const vMax = speedRangeMps(c);
   const speeds = Array.from({ length: SAMPLES }, (_, i) => (vMax * i) / (SAMPLES - 1));
   const x = (v: number) => toDisplay("speed", v, "mps", units);
@@ -51,8 +63,21 @@ export function effortChart(c: StartCase, units: UnitSystem, requiredN?: number)
     const strong = rail === c.conditions.rail;
     const low: Point[] = speeds.map((v) => ({ x: x(v), y: f(totalAdhesionN(c, rail, v, p)) }));
     const high: Point[] = speeds.map((v) => ({ x: x(v), y: f(totalAdhesionN(c, rail, v, 0.5)) }));
-    series.push({ id: `band-${rail}-low`, label: `${RAIL_WORD[rail]}: slip risk ${percent(p, 0)}`, points: low, role: "band", tone: k, tones: conditions.length, strong });
-    series.push({ id: `band-${rail}-high`, label: `${RAIL_WORD[rail]}: slip risk 50 %`, points: high, role: "band", tone: k, tones: conditions.length, fill: "previous", strong });
+    const marks = high.map((_, i) => i).filter((i) => (i + k) % MARK_EVERY === 0);
+    series.push({ id: `band-${rail}-low`, label: `${RAIL_WORD[rail]}: slip risk ${percent(p, 0)}`, points: low, role: "band", tone: k, tones: conditions.length, strong, rail });
+    series.push({
+      id: `band-${rail}-high`,
+      label: `${RAIL_WORD[rail]}: slip risk 50 %`,
+      points: high,
+      role: "band",
+      tone: k,
+      tones: conditions.length,
+      fill: "previous",
+      strong,
+      rail,
+      marker: RAIL_MARKER[rail],
+      markAt: marks,
+    });
   });
   for (let n = 1; n <= notches; n++) {
     series.push({
@@ -64,6 +89,10 @@ export function effortChart(c: StartCase, units: UnitSystem, requiredN?: number)
       tones: notches,
       endLabel: String(n),
     });
+  }
+  for (const st of steps) {
+    if (!(st.effortN > 0) || st.speedMps > vMax) continue;
+    series.push({ id: `step-${st.number}`, label: `Step ${st.number}`, points: [{ x: x(st.speedMps), y: f(st.effortN) }], role: "step", marker: "circle", noLine: true, endLabel: `S${st.number}` });
   }
   const fullAtRest = totalNotchEffortN(c, notches, 0);
   if (requiredN !== undefined && Number.isFinite(requiredN) && requiredN > 0) {
@@ -78,8 +107,13 @@ export function effortChart(c: StartCase, units: UnitSystem, requiredN?: number)
       role: "band" as const,
       tone: k,
       tones: conditions.length,
+      rail,
+      marker: RAIL_MARKER[rail],
     })),
   ];
+  if (steps.some((st) => st.effortN > 0 && st.speedMps <= vMax)) {
+    legend.push({ label: "S1, S2…: each plan step where it uses the most adhesion (its card's figure)", role: "step", marker: "circle" });
+  }
   if (requiredN !== undefined && requiredN > 0) legend.push({ label: "Tractive effort needed to start", role: "need", dashed: true });
   return {
     series,

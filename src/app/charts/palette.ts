@@ -1,4 +1,14 @@
-/** Chart colours per theme: the night palette is dark with dim, warm accents (low glare). */
+/**
+ * Chart colours. A series keeps its colour in both themes — with sand is the same blue by day and by night,
+ * each rail condition has one colour of its own whatever the order or the sand — so what a driver learns by
+ * day still holds at night. The series colours are mid-tones that keep 3:1 against the day surface and the
+ * night surface alike (WCAG 2.1, 1.4.11 non-text contrast), and stay apart for protan, deutan and tritan
+ * vision (tests/app/palette.test.ts simulates them). Colour is never the only cue: rail conditions carry a
+ * marker shape each, and the bars without sand a dashed outline. Only the axes, the grid, the "needed" line
+ * (text colours) and the notch ramp (light to dark by day, dark to light at night, numbered at the right)
+ * follow the theme.
+ */
+import type { RailCondition } from "../../core/physics/types.js";
 import type { Theme } from "../state/createTheme.js";
 import type { SeriesRole } from "./spec.js";
 
@@ -14,41 +24,71 @@ export interface ChartPalette {
   /** Notch lines from the lowest to the highest notch. */
   notchFrom: [number, number, number];
   notchTo: [number, number, number];
-  /** Adhesion bands from the best to the worst rail condition. */
-  bands: readonly string[];
+  /** One colour per rail condition. */
+  rail: Readonly<Record<RailCondition, string>>;
 }
+
+/** Colours that are the same in both themes. */
+export const SERIES = {
+  /** The main series (speed; with sand). */
+  main: "#3f6fd6",
+  /** The second series (notch; without sand). */
+  second: "#c96f0c",
+  limit: "#c65a50",
+  working: "#b28a4a",
+} as const;
+
+/** One colour per rail condition, in both themes. */
+export const RAIL_COLOUR: Readonly<Record<RailCondition, string>> = {
+  dry: "#8a9c1b",
+  damp: "#1ca3aa",
+  wet: "#804efa",
+  frost: "#73646b",
+  leaves: "#a98378",
+  greasy: "#3f7132",
+};
+
+/** A marker shape per rail condition (chart.js point styles), on the chart and in its legend. */
+export const RAIL_MARKER: Readonly<Record<RailCondition, "circle" | "rect" | "triangle" | "rectRot" | "crossRot" | "star">> = {
+  dry: "circle",
+  damp: "rect",
+  wet: "triangle",
+  frost: "rectRot",
+  leaves: "crossRot",
+  greasy: "star",
+};
 
 export const PALETTES: Record<Theme, ChartPalette> = {
   day: {
     text: "#1f262d",
     grid: "rgba(31,38,45,0.14)",
-    main: "#1c5d99",
-    mainFill: "rgba(28,93,153,0.18)",
-    second: "#a14d00",
-    limit: "#b3261e",
-    working: "#7a4a00",
+    main: SERIES.main,
+    mainFill: "rgba(63,111,214,0.18)",
+    second: SERIES.second,
+    limit: SERIES.limit,
+    working: SERIES.working,
     need: "#111111",
     notchFrom: [150, 170, 190],
     notchTo: [20, 40, 70],
-    bands: ["#2e7d4f", "#3f7fbf", "#6a5acd", "#8a6d00", "#b35c1e", "#b3261e"],
+    rail: RAIL_COLOUR,
   },
   night: {
     text: "#b9c0c7",
     grid: "rgba(185,192,199,0.14)",
-    main: "#c7873a",
-    mainFill: "rgba(199,135,58,0.18)",
-    second: "#8fa7b8",
-    limit: "#c65a50",
-    working: "#b28a4a",
+    main: SERIES.main,
+    mainFill: "rgba(63,111,214,0.18)",
+    second: SERIES.second,
+    limit: SERIES.limit,
+    working: SERIES.working,
     need: "#d8dde2",
     notchFrom: [70, 80, 90],
     notchTo: [190, 196, 202],
-    bands: ["#4f8f6a", "#5a7fa6", "#7c71b0", "#a08a3c", "#a8693c", "#a9544c"],
+    rail: RAIL_COLOUR,
   },
 };
 
-/** Colour of a series by role and tone. */
-export function colourOf(p: ChartPalette, role: SeriesRole, tone = 0, tones = 1): string {
+/** Colour of a series by role and tone (a band's by its rail condition). */
+export function colourOf(p: ChartPalette, role: SeriesRole, tone = 0, tones = 1, rail?: RailCondition): string {
   switch (role) {
     case "main":
       return p.main;
@@ -59,6 +99,7 @@ export function colourOf(p: ChartPalette, role: SeriesRole, tone = 0, tones = 1)
     case "working":
       return p.working;
     case "need":
+    case "step":
       return p.need;
     case "notch": {
       const t = tones <= 1 ? 1 : tone / (tones - 1);
@@ -66,7 +107,7 @@ export function colourOf(p: ChartPalette, role: SeriesRole, tone = 0, tones = 1)
       return `rgb(${c[0]},${c[1]},${c[2]})`;
     }
     case "band":
-      return p.bands[Math.min(p.bands.length - 1, Math.round((tone / Math.max(1, tones - 1)) * (p.bands.length - 1)))]!;
+      return rail ? p.rail[rail] : p.text;
   }
 }
 

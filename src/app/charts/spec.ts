@@ -8,7 +8,12 @@ export interface Point {
   y: number;
 }
 
-export type SeriesRole = "main" | "second" | "limit" | "working" | "notch" | "band" | "need";
+import type { RailCondition } from "../../core/physics/types.js";
+
+export type SeriesRole = "main" | "second" | "limit" | "working" | "notch" | "band" | "need" | "step";
+
+/** A marker shape (chart.js point styles). */
+export type MarkerShape = "circle" | "rect" | "triangle" | "rectRot" | "crossRot" | "star";
 
 export interface LineSeries {
   id: string;
@@ -28,6 +33,16 @@ export interface LineSeries {
   strong?: boolean;
   /** A short label written at the line's right-hand end (a notch number). */
   endLabel?: string;
+  /** The rail condition a band stands for (its colour). */
+  rail?: RailCondition;
+  /** Markers of this shape at the points of `markAt` (every point when absent), so the series reads without colour. */
+  marker?: MarkerShape;
+  /** Indices of the points that carry a marker. */
+  markAt?: readonly number[];
+  /** Markers only, no line (the plan's steps on the effort chart). */
+  noLine?: boolean;
+  /** The outline of bars (filled to the axis; lighter when dashed). */
+  bars?: boolean;
 }
 
 export interface Axis {
@@ -45,6 +60,10 @@ export interface LegendEntry {
   tone?: number;
   tones?: number;
   dashed?: boolean;
+  rail?: RailCondition;
+  marker?: MarkerShape;
+  /** A filled box (bars), outlined dashed when `dashed`. */
+  box?: boolean;
 }
 
 export interface ChartSpec {

@@ -17,16 +17,25 @@ type LineConfig = ChartConfiguration<"line", Array<{ x: number; y: number }>>;
 /** The chart.js configuration for a spec: plain data (it crosses to the chart worker), no animation, no pointer events. */
 export function toChartConfig(spec: ChartSpec, p: ChartPalette): LineConfig {
   const datasets: Array<ChartDataset<"line", Array<{ x: number; y: number }>>> = spec.series.map((s) => {
-    const colour = colourOf(p, s.role, s.tone, s.tones);
+    const colour = colourOf(p, s.role, s.tone, s.tones, s.rail);
     const band = s.role === "band";
+    // Filled to the axis: bars. Dashed bars (without sand) are filled more lightly than solid ones.
+    const bars = s.bars === true;
+    const marks = s.marker ? new Set(s.markAt ?? s.points.map((_, i) => i)) : null;
     return {
       label: s.label,
       data: s.points,
       borderColor: band && !s.strong ? withAlpha(colour, 0.55) : colour,
-      backgroundColor: band ? withAlpha(colour, s.strong ? 0.32 : 0.12) : s.role === "main" ? p.mainFill : colour,
+      backgroundColor: band ? withAlpha(colour, s.strong ? 0.32 : 0.12) : bars ? withAlpha(colour, s.dashed ? 0.22 : 0.55) : s.role === "main" ? p.mainFill : colour,
       borderWidth: s.strong ? 3 : band ? 1 : s.role === "notch" ? 2 : 3,
       borderDash: s.dashed ? [8, 6] : [],
-      pointRadius: 0,
+      // Markers (a shape per rail condition, the plan's steps) where the series asks for them.
+      pointRadius: marks ? s.points.map((_, i) => (marks.has(i) ? (s.role === "step" ? 6 : 5) : 0)) : 0,
+      pointStyle: s.marker ?? "circle",
+      pointBorderColor: colour,
+      pointBackgroundColor: s.role === "step" ? colour : withAlpha(colour, 0.85),
+      pointBorderWidth: 2,
+      showLine: !s.noLine,
       stepped: s.stepped ? "before" : false,
       fill: s.fill === "previous" ? "-1" : s.fill === "origin" ? "origin" : false,
       yAxisID: s.axis ?? "y",
@@ -241,16 +250,53 @@ function Legend(props: { entries: readonly LegendEntry[]; palette: ChartPalette 
       <For each={props.entries}>
         {(e) => (
           <li>
-            <span
-              class="swatch"
-              classList={{ dashed: e.dashed === true, band: e.role === "band" }}
-              style={{ "--swatch": colourOf(props.palette, e.role, e.tone, e.tones) }}
-              aria-hidden="true"
-            />
+            <Show
+              when={e.marker}
+              fallback={
+                <span
+                  class="swatch"
+                  classList={{ dashed: e.dashed === true, band: e.role === "band", box: e.box === true }}
+                  style={{ "--swatch": colourOf(props.palette, e.role, e.tone, e.tones, e.rail) }}
+                  aria-hidden="true"
+                />
+              }
+            >
+              {(m) => <MarkerSwatch shape={m()} colour={colourOf(props.palette, e.role, e.tone, e.tones, e.rail)} band={e.role === "band"} />}
+            </Show>
             {e.label}
           </li>
         )}
       </For>
     </ul>
+  );
+}
+
+/** A legend swatch with the series' marker shape drawn over its colour (a band's fill behind it). */
+function MarkerSwatch(props: { shape: string; colour: string; band: boolean }): JSX.Element {
+  const shape = (): JSX.Element => {
+    switch (props.shape) {
+      case "rect":
+        return <rect x="7" y="4" width="10" height="10" />;
+      case "triangle":
+        return <path d="M12 3 18 14H6z" />;
+      case "rectRot":
+        return <path d="M12 2 18 9 12 16 6 9z" />;
+      case "crossRot":
+        return <path d="M7 4l10 10M17 4 7 14" />;
+      case "star":
+        return <path d="M12 3v12M6 9h12M8 5l8 8M16 5l-8 8" />;
+      default:
+        return <circle cx="12" cy="9" r="5" />;
+    }
+  };
+  return (
+    <svg class="swatch-marker" width="28" height="18" viewBox="0 0 24 18" aria-hidden="true" data-marker={props.shape}>
+      <Show when={props.band}>
+        <rect x="0" y="4" width="24" height="10" rx="2" fill={props.colour} fill-opacity="0.3" />
+      </Show>
+      <g fill={props.colour} fill-opacity="0.85" stroke={props.colour} stroke-width="2">
+        {shape()}
+      </g>
+    </svg>
   );
 }

@@ -37,13 +37,14 @@ export function renderPlan(p: PlanReport): string {
           advance(s.advanceWhen),
           num(s.speed_kmh, 1),
           num(s.tractiveEffort_kN),
-          pct(s.adhesionUse),
+          s.adhesionUseAt_kmh !== undefined ? `${pct(s.adhesionUse)} @${num(s.adhesionUseAt_kmh, 1)}` : pct(s.adhesionUse),
           pct(s.slipRisk, 1),
           num(s.peakCouplerForce_kN),
           s.notch === 0 ? "—" : `notch ${s.fallbackNotch}`,
         ]),
       ),
     );
+    lines.push(...wrap("km/h and TE kN: at the end of each step. adhesion: the step's highest share of the median adhesion, reached at the speed after @ (km/h). coupler kN: the step's peak, against the allowance (limit ÷ safety factor).", 100, ""));
     lines.push("");
     lines.push("Why:");
     p.steps.forEach((s, i) => lines.push(...wrap(`${i + 1}. ${s.why}`, 100, "   ")));

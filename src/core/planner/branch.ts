@@ -16,6 +16,9 @@ export interface StepRecord {
   endSpeedMps: number;
   maxRisk: number;
   maxUse: number;
+  /** Locomotive speed and Σ effort the notch asked for when `maxUse` was reached (the basis of the figure). */
+  maxUseSpeedMps: number;
+  maxUseEffortN: number;
   peakTensionN: number;
   peakCompressionN: number;
   /** Σ effort the notch asks for at the step's end, N. */
@@ -55,6 +58,8 @@ export class Branch {
       endSpeedMps: s.v[this.run.lead]!,
       maxRisk: 0,
       maxUse: 0,
+      maxUseSpeedMps: 0,
+      maxUseEffortN: 0,
       peakTensionN: 0,
       peakCompressionN: 0,
       effortN: 0,
@@ -67,7 +72,11 @@ export class Branch {
     const st = this.current;
     const a = notchAdhesion(ctx, st.notch, Math.max(0, obs.leadSpeedMps));
     if (a.risk > st.maxRisk) st.maxRisk = a.risk;
-    if (a.use > st.maxUse) st.maxUse = a.use;
+    if (a.use > st.maxUse) {
+      st.maxUse = a.use;
+      st.maxUseSpeedMps = Math.max(0, obs.leadSpeedMps);
+      st.maxUseEffortN = obs.effortTargetN;
+    }
     if (obs.maxTensionN > st.peakTensionN) st.peakTensionN = obs.maxTensionN;
     if (obs.maxCompressionN > st.peakCompressionN) st.peakCompressionN = obs.maxCompressionN;
     st.endS = obs.timeS;

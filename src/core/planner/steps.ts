@@ -32,7 +32,8 @@ export function fallbackNotch(ctx: PlannerContext, notch: number, speedMps: numb
 }
 
 const kN = (n: number): string => `${Math.round(n / 1000)} kN`;
-const pct = (x: number): string => `${Math.round(x * 100)} %`;
+/** A fraction as whole percent; one above zero that would read 0 reads "< 1 %" (it is not nil). */
+const pct = (x: number): string => (x > 0 && x < 0.005 ? "< 1 %" : `${Math.round(x * 100)} %`);
 const km = (mps: number): string => `${mpsToKmh(mps).toFixed(1)} km/h`;
 
 /** Turn the chosen branch into plan steps. */
@@ -54,6 +55,7 @@ export function planSteps(ctx: PlannerContext, r: SearchResult): PlanStep[] {
       speedMps: speed,
       tractiveEffortN: rec.effortN,
       adhesionUse: rec.maxUse,
+      adhesionUseAt: { speedMps: rec.maxUseSpeedMps, tractiveEffortN: rec.maxUseEffortN },
       slipRisk: rec.maxRisk,
       peakCouplerForceN: rec.peakTensionN,
       fallbackNotch: rec.notch === 0 ? 0 : fallbackNotch(ctx, rec.notch, speed),
@@ -84,7 +86,8 @@ function whyLine(ctx: PlannerContext, r: SearchResult, rec: StepRecord, k: numbe
       return `Notch ${rec.notch} gives ${kN(rec.effortN)} against ${kN(resistanceN)} to start the whole train at once: wagons break away one by one at walking pace and ${travel}; peak coupler ${kN(rec.peakTensionN)} of ${kN(allowance)} allowed.${tooFast}`;
     }
     case "build":
-      return `Effort ${kN(rec.effortN)} uses ${pct(rec.maxUse)} of the median adhesion (slip risk ${pct(rec.maxRisk)}); advance only once the current has settled${k === 2 ? ` — at least ${Math.round(r.buildDwellS ?? 3)} s per notch` : ""}; peak coupler ${kN(rec.peakTensionN)} of ${kN(allowance)}.`;
+      // The adhesion figure with its basis: the notch's effort at the speed where it uses the most adhesion.
+      return `At ${km(rec.maxUseSpeedMps)} notch ${rec.notch} asks ${kN(rec.maxUseEffortN)}, ${pct(rec.maxUse)} of the median adhesion there (slip risk ${pct(rec.maxRisk)}); advance only once the current has settled${k === 2 ? ` — at least ${Math.round(r.buildDwellS ?? 3)} s per notch` : ""}; peak coupler ${kN(rec.peakTensionN)} of ${kN(allowance)} allowed.`;
     case "accelerate": {
       const reason = r.adhesionCapped && rec.notch < ctx.maxNotch ? ` A higher notch would raise the slip risk above ${pct(ctx.riskCap)}.` : "";
       const to = c.target.kind === "speed" ? `to ${km(c.target.speedMps)}` : `until the train has cleared ${Math.round(c.target.distanceM)} m`;

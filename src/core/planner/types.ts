@@ -22,8 +22,14 @@ export interface PlanStep {
   speedMps: number;
   /** Tractive effort demanded during the step (all powered units), N. */
   tractiveEffortN: number;
-  /** Demanded ÷ median available adhesion (worst unit), 0..1. */
+  /** Demanded ÷ median available adhesion (worst unit), 0..1: the highest during the step. */
   adhesionUse: number;
+  /**
+   * Where `adhesionUse` was reached: the locomotive speed and Σ effort the notch asked for there. Effort falls
+   * with speed on the power curve and adhesion falls too, so the highest use need not be at the step's end,
+   * where `tractiveEffortN` and `speedMps` are taken.
+   */
+  adhesionUseAt: { speedMps: number; tractiveEffortN: number };
   /** Probability that the rails give less than the demand, 0..1. */
   slipRisk: number;
   /** Largest coupler force (tension) during the step, N. */

@@ -17,7 +17,7 @@ export function marginChart(rows: readonly ConditionMargin[]): ChartSpec | null 
   return barChart({
     categories: RAIL_CONDITIONS.map((r) => RAIL_WORD[r]),
     groups: [
-      { id: "no-sand", label: "Without sand", role: "second", values: RAIL_CONDITIONS.map((r) => value(r, false)) },
+      { id: "no-sand", label: "Without sand", role: "second", dashed: true, values: RAIL_CONDITIONS.map((r) => value(r, false)) },
       { id: "sand", label: "With sand", role: "main", values: RAIL_CONDITIONS.map((r) => value(r, true)) },
     ],
     lines: [{ id: "one", label: "× 1: as much needed as available", y: 1, role: "limit", dashed: true }],

@@ -16,6 +16,8 @@ export interface CabStepsViewProps {
   result: PlanResult | null;
   /** The plan is for the inputs on screen. */
   current: boolean;
+  /** The inputs on Start plan break a rule: there is no plan, and the last one's steps are not shown. */
+  invalid?: boolean;
   index: number;
   onIndex: (i: number) => void;
   units: UnitSystem;
@@ -39,7 +41,8 @@ const WAKE_TEXT: Record<WakeLockState, string> = {
 };
 
 export function CabStepsView(props: CabStepsViewProps): JSX.Element {
-  const steps = () => props.result?.steps ?? [];
+  const result = () => (props.invalid ? null : props.result);
+  const steps = () => result()?.steps ?? [];
   const step = () => steps()[props.index];
   const count = () => steps().length;
   return (
@@ -49,7 +52,7 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
           <Icon name="back" /> Start plan
         </button>
         <p class="cab-count" aria-live="polite">
-          <Show when={step()} fallback={props.result ? <span>No steps</span> : <span>No plan</span>}>
+          <Show when={step()} fallback={result() ? <span>No steps</span> : <span>No plan</span>}>
             {(s) => (
               <>
                 Step <strong>{props.index + 1}</strong> of {count()} · {PHASE_WORD[s().phase]}
@@ -57,14 +60,14 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
             )}
           </Show>
         </p>
-        <Show when={props.result}>
+        <Show when={result()}>
           <button type="button" class="button big slip-button" onClick={() => props.onSlip(true)}>
             <Icon name="slip" size={30} /> If wheels slip
           </button>
         </Show>
       </header>
 
-      <Show when={props.result && !props.current}>
+      <Show when={result() && !props.current}>
         <p class="cab-stale" role="status">
           These steps are for the previous inputs; the new plan is on its way.
         </p>
@@ -74,7 +77,18 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
         when={step()}
         fallback={
           <div class="cab-empty">
-            <Show when={props.result} fallback={<p>There is no plan yet. Open Start plan and enter the case.</p>}>
+            <Show
+              when={result()}
+              fallback={
+                props.invalid ? (
+                  <p class="cab-no-plan" role="alert">
+                    No plan: the inputs on Start plan break a rule. Fix them there; the previous plan's steps are withdrawn.
+                  </p>
+                ) : (
+                  <p>There is no plan yet. Open Start plan and enter the case.</p>
+                )
+              }
+            >
               {(r) => (
                 <>
                   <p class="cab-verdict">
@@ -142,10 +156,10 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
       </footer>
       <p class="cab-wake">{WAKE_TEXT[props.wakeLock]}</p>
 
-      <Show when={props.slipOpen && props.result}>
+      <Show when={props.slipOpen && result()}>
         {(_) => (
           <SlipCard
-            guidance={props.result!.slipGuidance}
+            guidance={result()!.slipGuidance}
             units={props.units}
             step={step() ? { number: props.index + 1, notch: step()!.notch, fallbackNotch: step()!.fallbackNotch } : undefined}
             sanders={props.sanders ?? true}

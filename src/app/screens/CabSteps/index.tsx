@@ -44,6 +44,7 @@ export default function CabSteps(): JSX.Element {
     <CabStepsView
       result={app.run.result()}
       current={app.run.current()}
+      invalid={app.run.status() === "invalid"}
       index={index()}
       onIndex={go}
       units={app.settings.settings().units}

@@ -17,7 +17,7 @@ export function loadChart(rows: readonly LoadTableRow[], trainMassKg: number | n
   return barChart({
     categories: RAIL_CONDITIONS.map((r) => RAIL_WORD[r]),
     groups: [
-      { id: "no-sand", label: "Without sand", role: "second", values: RAIL_CONDITIONS.map((r) => value(r, false)) },
+      { id: "no-sand", label: "Without sand", role: "second", dashed: true, values: RAIL_CONDITIONS.map((r) => value(r, false)) },
       { id: "sand", label: "With sand", role: "main", values: RAIL_CONDITIONS.map((r) => value(r, true)) },
     ],
     lines: trainMassKg !== null ? [{ id: "train", label: `This train (${Math.round(shown(trainMassKg)).toLocaleString("en-GB")} ${unit})`, y: shown(trainMassKg), role: "need", dashed: true }] : [],

@@ -1,5 +1,10 @@
-/** Start plan result: verdict, reasons, margins, key figures, numbered steps, charts and cautions. */
-import { createMemo, For, Index, Show, type JSX } from "solid-js";
+/**
+ * Start plan result: verdict, reasons, margins, key figures, numbered steps, charts and cautions. While the
+ * inputs break a rule there is no plan: that is said where the verdict stands, and the last plan (and its
+ * Cab steps) is withdrawn. A compact line of the verdict — word, margin, binding limit — stays in view at
+ * the top of the pane once the full verdict has scrolled away.
+ */
+import { createEffect, createMemo, createSignal, For, Index, onCleanup, Show, type JSX } from "solid-js";
 import type { PlanResult } from "../../../core/planner/types.js";
 import type { Reason } from "../../../core/planner/outcome.js";
 import type { StartCase } from "../../../core/train/types.js";
@@ -10,8 +15,10 @@ import type { ChartSpec } from "../../charts/spec.js";
 import { speedNotchChart } from "../../charts/speedNotch.js";
 import { Chart } from "../../components/Chart.js";
 import { Icon } from "../../components/Icon.js";
-import { REASON_LINE, VerdictBanner } from "../../components/VerdictBanner.js";
-import { duration, localiseText, margin, percent, show, type UnitSystem } from "../../format.js";
+import { REASON_LINE, VerdictBanner, VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
+import { issueLine } from "../../fields.js";
+import type { FieldIssue } from "../../../profiles/issues.js";
+import { duration, localiseText, margin, percent, percentOf, show, showAtMost, showForce, type UnitSystem } from "../../format.js";
 import type { RunStatus } from "../../state/createPlanRun.js";
 import { StepCard } from "./StepCard.js";
 
@@ -29,36 +36,90 @@ export interface ResultViewProps {
   units: UnitSystem;
   palette: ChartPalette;
   illustrative: boolean;
+  /** What the inputs break (when `status` is "invalid"), in the user's units. */
+  issues?: readonly FieldIssue[];
+  /** Show the inputs (portrait: switch to the Inputs pane). */
+  onShowInputs?: () => void;
   onOpenCab: () => void;
   onRetry: () => void;
 }
 
 const MARGIN_WORD: Record<Reason, string> = { adhesion: "Adhesion", power: "Power", coupler: "Coupler", distance: "Distance" };
 
+/**
+ * The limit that binds, in words: the one the plan names when it carries one (`binding`), else the
+ * smallest of its margins.
+ */
+export function bindingLimit(res: PlanResult): string {
+  const named = (res as { binding?: unknown }).binding;
+  if (typeof named === "string" && named !== "") return named.replace(/-/g, " ");
+  const m = res.margins;
+  const keys: Reason[] = ["adhesion", "power", "coupler", "distance"];
+  return MARGIN_WORD[keys.reduce((a, b) => ((m[b] ?? Infinity) < (m[a] ?? Infinity) ? b : a))].toLowerCase();
+}
+
+/** The verdict in one line, kept in view at the top of the plan's pane. */
+export function VerdictSummary(props: { result: PlanResult; stale: boolean; shown: boolean }): JSX.Element {
+  const v = () => props.result.verdict;
+  return (
+    <div
+      class={`verdict-summary verdict-${v()}`}
+      classList={{ stale: props.stale, shown: props.shown }}
+      data-verdict={v()}
+      aria-hidden={props.shown ? undefined : "true"}
+      role="status"
+      aria-label={`Verdict: ${VERDICT_WORD[v()]}`}
+    >
+      <VerdictIcon verdict={v()} size={30} />
+      <span class="summary-word">{VERDICT_WORD[v()]}</span>
+      <span class="summary-margin">margin {margin(props.result.margin)}</span>
+      <span class="summary-limit">{bindingLimit(props.result)}</span>
+      <Show when={props.stale}>
+        <span class="summary-stale">previous inputs — updating…</span>
+      </Show>
+    </div>
+  );
+}
+
 export function ResultView(props: ResultViewProps): JSX.Element {
   const r = () => props.result;
+  // No plan while the inputs break a rule: the last one is withdrawn, not shown as if it still held.
+  const invalid = () => props.status === "invalid";
+  const shownResult = () => (invalid() ? null : r());
   // The effort chart depends on the locomotives, the rail and the settings, not on the train's mass:
   // recomputed only when what it shows changes (a mass edit then costs no chart work).
   let effortKey = "";
   const effortSpec = createMemo<ChartSpec | null>((prev) => {
     const c = props.startCase;
     if (!c) return null;
-    const requiredN = r()?.static.requiredN;
-    const key = JSON.stringify([c.locomotives, c.adhesion, c.conditions, c.settings.slipRiskThreshold, c.target, props.units, requiredN]);
+    const res = shownResult();
+    const requiredN = res?.static.requiredN;
+    // Each step where it uses the most adhesion: the point its card's "adhesion used" is read at.
+    const steps = (res?.steps ?? []).map((st, i) => ({ number: i + 1, speedMps: st.adhesionUseAt.speedMps, effortN: st.adhesionUseAt.tractiveEffortN })).filter((m) => m.effortN > 0);
+    const key = JSON.stringify([c.locomotives, c.adhesion, c.conditions, c.settings.slipRiskThreshold, c.target, props.units, requiredN, steps]);
     if (key === effortKey && prev) return prev;
     effortKey = key;
-    return effortChart(c, props.units, requiredN);
+    return effortChart(c, props.units, requiredN, steps);
   }, null);
   const limitN = () => props.startCase?.train.couplerLimitN ?? null;
   const factor = () => props.startCase?.settings.couplerSafetyFactor ?? 1.2;
   const threshold = () => props.startCase?.settings.slipRiskThreshold ?? 0.1;
-  const smallest = (res: PlanResult): Reason => {
-    const m = res.margins;
-    const keys: Reason[] = ["adhesion", "power", "coupler"];
-    return keys.reduce((a, b) => (m[b] < m[a] ? b : a));
-  };
+  // The full verdict's place on screen: the compact line shows once it has scrolled out of view.
+  const [banner, setBanner] = createSignal<HTMLElement>();
+  const [bannerInView, setBannerInView] = createSignal(true);
+  createEffect(() => {
+    const el = banner();
+    if (!el || typeof IntersectionObserver === "undefined") return;
+    const io = new IntersectionObserver((entries) => setBannerInView(entries.some((e) => e.isIntersecting)), { root: el.closest(".pane"), threshold: 0.05 });
+    io.observe(el);
+    onCleanup(() => {
+      io.disconnect();
+      setBannerInView(true);
+    });
+  });
   return (
     <div class="result" aria-live="polite" aria-busy={props.status === "running" || props.status === "waiting"}>
+      <Show when={shownResult()}>{(res) => <VerdictSummary result={res()} stale={!props.current} shown={!bannerInView()} />}</Show>
       <Show when={props.illustrative}>
         <p class="illustrative-note">
           <Icon name="info" size={20} /> Illustrative demo data: invented places, trains and locomotive profiles (not real classes).
@@ -80,20 +141,38 @@ export function ResultView(props: ResultViewProps): JSX.Element {
         </div>
       </Show>
 
-      <Show
-        when={r()}
-        fallback={
-          <p class="placeholder-text">{props.status === "invalid" ? "Fix the inputs marked in red to get a plan." : "Planning…"}</p>
-        }
-      >
+      <Show when={invalid()}>
+        <section class="no-plan" role="alert" aria-label="No plan: the inputs break a rule" data-no-plan>
+          <p class="no-plan-word">
+            <svg class="no-plan-icon" width="44" height="44" viewBox="0 0 48 48" aria-hidden="true">
+              <circle cx="24" cy="24" r="21" />
+              <path d="M14 34 34 14" />
+            </svg>
+            No plan: fix the inputs
+          </p>
+          <p>
+            {(props.issues ?? []).length === 1 ? "One input breaks a rule" : `${(props.issues ?? []).length || "Some"} inputs break a rule`}, so there is no plan for this
+            case. The previous plan and its Cab steps are withdrawn.
+          </p>
+          <Show when={(props.issues ?? []).length > 0}>
+            <ul>
+              <For each={(props.issues ?? []).slice(0, 4)}>{(i) => <li>{issueLine(i)}</li>}</For>
+            </ul>
+          </Show>
+          <Show when={props.onShowInputs}>
+            <button type="button" class="button primary show-inputs" onClick={() => props.onShowInputs?.()}>
+              <Icon name="back" /> Go to the inputs
+            </button>
+          </Show>
+        </section>
+      </Show>
+
+      <Show when={shownResult()} fallback={<Show when={!invalid()}>{<p class="placeholder-text">Planning…</p>}</Show>}>
         {(res) => (
           <>
-            <VerdictBanner
-              verdict={res().verdict}
-              reasons={res().reasons}
-              stale={!props.current}
-              detail={`Smallest margin ${margin(res().margin)} (${MARGIN_WORD[smallest(res())].toLowerCase()})`}
-            />
+            <div ref={setBanner}>
+              <VerdictBanner verdict={res().verdict} reasons={res().reasons} stale={!props.current} detail={`Margin ${margin(res().margin)}, limited by ${bindingLimit(res())}`} />
+            </div>
             <Show when={res().reasons.length > 0}>
               <ul class="reasons">
                 <For each={res().reasons}>{(reason) => <li>{REASON_LINE[reason]}</li>}</For>
@@ -156,26 +235,38 @@ export function ResultView(props: ResultViewProps): JSX.Element {
               <dl class="figures wide">
                 <div>
                   <dt>Tractive effort needed to start</dt>
-                  <dd>{show("force", res().static.requiredN, props.units)}</dd>
+                  <dd>
+                    {showForce(res().static.requiredN, props.units)}
+                    <span class="basis">at standstill, the whole train's resistance</span>
+                  </dd>
                 </div>
                 <div>
                   <dt>Rails give at {percent(threshold(), 0)} slip risk</dt>
-                  <dd>{show("force", res().static.adhesionLimitN, props.units)}</dd>
+                  <dd>
+                    {showForce(res().static.adhesionLimitN, props.units)}
+                    <span class="basis">at standstill</span>
+                  </dd>
                 </div>
                 <div>
                   <dt>Slip risk at the start</dt>
-                  <dd>{percent(res().static.slipRiskAtStart)}</dd>
+                  <dd>{percentOf(res().static.slipRiskAtStart)}</dd>
                 </div>
                 <div>
                   <dt>Peak coupler force</dt>
                   <dd>
-                    {show("force", res().peakCouplerForceN, props.units)}
-                    <Show when={limitN()}>{(l) => <span class="muted"> of {show("force", l(), props.units)}</span>}</Show>
+                    {showForce(res().peakCouplerForceN, props.units)}
+                    <Show when={limitN()}>
+                      {(l) => (
+                        <span class="basis" data-coupler-basis>
+                          of {show("force", l() / factor(), props.units)} allowed (limit {show("force", l(), props.units)} ÷ {factor()})
+                        </span>
+                      )}
+                    </Show>
                   </dd>
                 </div>
                 <div>
                   <dt>Largest trailing mass that starts</dt>
-                  <dd>{Number.isFinite(res().maxStartableMassKg) ? show("mass", res().maxStartableMassKg, props.units) : props.massPending ? "working it out…" : "–"}</dd>
+                  <dd>{Number.isFinite(res().maxStartableMassKg) ? showAtMost("mass", res().maxStartableMassKg, props.units) : props.massPending ? "working it out…" : "–"}</dd>
                 </div>
                 <div>
                   <dt>Time to the target</dt>
@@ -200,7 +291,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
             />
             <Chart
               title="Tractive effort and adhesion"
-              caption={`Each notch's tractive effort against speed; each band runs from the adhesion with ${percent(threshold(), 0)} slip risk up to the median (50 %).`}
+              caption={`Each notch's tractive effort against speed; each band runs from the adhesion with ${percent(threshold(), 0)} slip risk up to the median (50 %). A step's "adhesion used" is its effort ÷ the median, read at its mark S1, S2….`}
               spec={effortSpec()}
               palette={props.palette}
               height={340}
@@ -210,7 +301,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
         )}
       </Show>
 
-      <Show when={r()}>
+      <Show when={shownResult()}>
         {(res) => (
           <section class="panel cautions" aria-labelledby="cautions-h">
             <h2 id="cautions-h">Cautions</h2>

@@ -2,7 +2,7 @@
 import { Show, type JSX } from "solid-js";
 import type { PlanStep } from "../../../core/planner/types.js";
 import type { Target } from "../../../core/train/types.js";
-import { localiseText, percent, show, type UnitSystem } from "../../format.js";
+import { localiseText, percentOf, show, type UnitSystem } from "../../format.js";
 import { advanceLead, advanceOthers, notchText, PHASE_WORD, STILL_SLIPPING_LABEL, stillSlipping } from "../../steps.js";
 
 export interface StepCardProps {
@@ -12,6 +12,7 @@ export interface StepCardProps {
   units: UnitSystem;
   target?: Target | undefined;
   slipThreshold: number;
+  /** The coupler allowance: the working limit ÷ the safety factor, N. */
   couplerWorkingN: number;
 }
 
@@ -42,8 +43,8 @@ export function StepCard(props: StepCardProps): JSX.Element {
           <div classList={{ alert: risky() }}>
             <dt>Slip risk</dt>
             <dd>
-              {percent(s().slipRisk)}
-              <Show when={risky()}> — above your {percent(props.slipThreshold, 0)}</Show>
+              {percentOf(s().slipRisk)}
+              <Show when={risky()}> — above your {percentOf(props.slipThreshold, 0)}</Show>
             </dd>
           </div>
           <div>
@@ -52,15 +53,28 @@ export function StepCard(props: StepCardProps): JSX.Element {
           </div>
           <div>
             <dt>Tractive effort</dt>
-            <dd>{show("force", s().tractiveEffortN, props.units)}</dd>
+            <dd>
+              {show("force", s().tractiveEffortN, props.units)}
+              <span class="basis">at {show("speed", s().speedMps, props.units)}, the step's end</span>
+            </dd>
           </div>
           <div classList={{ alert: heavy() }}>
             <dt>Peak coupler force</dt>
-            <dd>{show("force", s().peakCouplerForceN, props.units)}</dd>
+            <dd>
+              {show("force", s().peakCouplerForceN, props.units)}
+              <Show when={Number.isFinite(props.couplerWorkingN)}>
+                <span class="basis">of {show("force", props.couplerWorkingN, props.units)} allowed</span>
+              </Show>
+            </dd>
           </div>
           <div>
             <dt>Adhesion used</dt>
-            <dd>{percent(s().adhesionUse, 0)}</dd>
+            <dd>
+              {percentOf(s().adhesionUse, 0)}
+              <span class="basis">
+                highest, at {show("speed", s().adhesionUseAt.speedMps, props.units)} ({show("force", s().adhesionUseAt.tractiveEffortN, props.units)})
+              </span>
+            </dd>
           </div>
         </dl>
         <p class="step-why">{localiseText(s().why, props.units)}</p>

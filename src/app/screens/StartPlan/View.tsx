@@ -1,6 +1,7 @@
 /**
  * Start plan: inputs and plan side by side in landscape; in portrait one at a time, switched by two large
- * buttons of which the plan's carries the verdict, so it stays in view while editing.
+ * buttons of which the plan's carries the verdict, so it stays in view while editing — marked when it is
+ * for the previous inputs (updating) and replaced by "fix inputs" while the inputs break a rule.
  */
 import { createSignal, Show, type JSX } from "solid-js";
 import type { Verdict } from "../../../core/planner/outcome.js";
@@ -15,7 +16,19 @@ export interface StartPlanViewProps {
 
 export function StartPlanView(props: StartPlanViewProps): JSX.Element {
   const [pane, setPane] = createSignal<"inputs" | "plan">("plan");
-  const verdict = (): Verdict | null => props.result.result?.verdict ?? null;
+  const invalid = () => props.result.status === "invalid";
+  const verdict = (): Verdict | null => (invalid() ? null : (props.result.result?.verdict ?? null));
+  const stale = () => verdict() !== null && !props.result.current;
+  let inputsPane!: HTMLDivElement;
+  /** To the inputs, at the first one that breaks a rule. */
+  const showInputs = () => {
+    setPane("inputs");
+    queueMicrotask(() => {
+      const bad = inputsPane.querySelector<HTMLElement>('[aria-invalid="true"]');
+      bad?.scrollIntoView({ block: "center" });
+      bad?.focus();
+    });
+  };
   return (
     <div class="start-plan" data-pane={pane()}>
       <div class="pane-switch" role="tablist" aria-label="Start plan view">
@@ -25,23 +38,37 @@ export function StartPlanView(props: StartPlanViewProps): JSX.Element {
             <span class="badge">{props.inputs.store.issues().length} to fix</span>
           </Show>
         </button>
-        <button type="button" role="tab" id="tab-plan" aria-controls="pane-plan" aria-selected={pane() === "plan"} onClick={() => setPane("plan")}>
+        <button
+          type="button"
+          role="tab"
+          id="tab-plan"
+          aria-controls="pane-plan"
+          aria-selected={pane() === "plan"}
+          onClick={() => setPane("plan")}
+          classList={{ stale: stale(), "no-plan-tab": invalid() }}
+        >
           Plan
           <Show when={verdict()}>
             {(v) => (
               <span class={`pane-verdict verdict-${v()}`}>
                 <VerdictIcon verdict={v()} size={24} />
                 {VERDICT_WORD[v()]}
+                <Show when={stale()}>
+                  <span class="pane-stale">updating…</span>
+                </Show>
               </span>
             )}
           </Show>
+          <Show when={invalid()}>
+            <span class="pane-verdict pane-no-plan">no plan: fix inputs</span>
+          </Show>
         </button>
       </div>
-      <div class="pane pane-inputs" id="pane-inputs" role="region" aria-label="Inputs">
+      <div class="pane pane-inputs" id="pane-inputs" role="region" aria-label="Inputs" ref={inputsPane}>
         <InputsView {...props.inputs} />
       </div>
       <div class="pane pane-plan" id="pane-plan" role="region" aria-label="Plan">
-        <ResultView {...props.result} />
+        <ResultView {...props.result} onShowInputs={showInputs} />
       </div>
     </div>
   );

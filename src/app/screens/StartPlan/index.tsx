@@ -74,6 +74,9 @@ export default function StartPlan(): JSX.Element {
         get illustrative() {
           return app.draft.draft.illustrative;
         },
+        get issues() {
+          return app.draft.issues();
+        },
         onOpenCab: () => app.nav.go("cab-steps"),
         onRetry: () => app.run.retry(),
       }}

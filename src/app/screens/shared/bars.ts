@@ -12,6 +12,8 @@ export interface BarGroup {
   role: SeriesRole;
   /** One value per category (NaN: no bar). */
   values: readonly number[];
+  /** Outline the bars dashed (and fill them lightly), so the group reads without colour. */
+  dashed?: boolean;
 }
 
 export interface RefLine {
@@ -53,13 +55,13 @@ export function barChart(input: BarChartInput): ChartSpec {
       const y = v !== undefined && Number.isFinite(v) ? Math.max(0, Math.min(top, v)) : 0;
       pts.push({ x: x0, y: 0 }, { x: x0, y }, { x: x1, y }, { x: x1, y: 0 });
     }
-    return { id: grp.id, label: grp.label, points: pts, role: grp.role, fill: "origin" };
+    return { id: grp.id, label: grp.label, points: pts, role: grp.role, fill: "origin", bars: true, ...(grp.dashed ? { dashed: true } : {}) };
   });
   for (const l of input.lines ?? []) {
     series.push({ id: l.id, label: l.label, role: l.role, points: [{ x: -0.5, y: Math.min(top, l.y) }, { x: n - 0.5, y: Math.min(top, l.y) }], ...(l.dashed ? { dashed: true } : {}) });
   }
   const legend: LegendEntry[] = [
-    ...input.groups.map((grp) => ({ label: grp.label, role: grp.role })),
+    ...input.groups.map((grp) => ({ label: grp.label, role: grp.role, box: true, ...(grp.dashed ? { dashed: true } : {}) })),
     ...(input.lines ?? []).map((l) => ({ label: l.label, role: l.role, ...(l.dashed ? { dashed: true } : {}) })),
   ];
   return {
