@@ -3,10 +3,11 @@ import { render } from "@solidjs/testing-library";
 import { describe, expect, it } from "vitest";
 import { PALETTES } from "../../../src/app/charts/palette.js";
 import { ProfileChart } from "../../../src/app/screens/LocationNotes/ProfileChart.js";
-import { profileModel, type ProfileModel } from "../../../src/app/screens/LocationNotes/profileModel.js";
+import { profileModel, VERTICAL_EXAGGERATION, type ProfileModel } from "../../../src/app/screens/LocationNotes/profileModel.js";
 import { profilePlot, roundStep } from "../../../src/app/screens/LocationNotes/profilePlot.js";
 import { referenceCase } from "../../../src/profiles/referenceTrain.js";
-import { builtinLibrary, builtinTrains } from "../../../src/profiles/builtin.js";
+import { builtinLibrary, builtinLocations, builtinTrains } from "../../../src/profiles/builtin.js";
+import { ProfileSketch } from "../../../src/app/screens/LocationNotes/ProfileSketch.js";
 
 const lib = builtinLibrary();
 /** Down 5 ‰ for 1 km, then up 10 ‰: a sag, so a train standing across it has stretched and bunched parts. */
@@ -60,15 +61,27 @@ describe("profile layout", () => {
     expect(g.hazards).toEqual([{ x: expect.closeTo(g.left + (1400 / 2000) * (g.right - g.left), 1), y: expect.any(Number), n: 1 }]);
   });
 
-  it("shows both slack states across a sag, and says how much the heights are stretched", () => {
+  it("shows both slack states across a sag, and draws heights ×20 whatever the box, saying so", () => {
     const m = model(1300);
-    const g = profilePlot(m, "metric", 900, 300);
-    expect(new Set(g.train.map((r) => r.state))).toEqual(new Set(m.train!.runs.map((r) => r.state)));
-    // 2000 m across ~830 px, about 10 m up across ~200 px: heights drawn some tens of times steeper.
-    const perAlong = (g.right - g.left) / 2000;
-    expect(g.exaggeration).toBeGreaterThan(5);
-    expect(g.xTitle).toBe(`Distance along the line (m) · heights ×${g.exaggeration}`);
-    expect(perAlong).toBeGreaterThan(0);
+    for (const [w, h] of [[900, 300], [520, 300], [760, 300]] as const) {
+      const g = profilePlot(m, "metric", w, h);
+      expect(new Set(g.train.map((r) => r.state))).toEqual(new Set(m.train!.runs.map((r) => r.state)));
+      expect(g.exaggeration).toBe(VERTICAL_EXAGGERATION);
+      expect(g.xTitle).toBe("Distance along the line (m) · heights ×20");
+      // Measured on the drawing: pixels per metre up ÷ pixels per metre along, from two ticks of each axis.
+      const num = (t: string) => Number(t.replace(/,/g, "").replace("\u2212", "-"));
+      const along = (g.xTicks[1]!.at - g.xTicks[0]!.at) / (num(g.xTicks[1]!.label) - num(g.xTicks[0]!.label));
+      const up = (g.yTicks[0]!.at - g.yTicks[1]!.at) / (num(g.yTicks[1]!.label) - num(g.yTicks[0]!.label));
+      expect(up / along).toBeCloseTo(20, 6);
+    }
+  });
+
+  it("draws a relief too tall for the box at a smaller exaggeration, and says so", () => {
+    // 2 km of 40 ‰ (80 m of climb) in a 520 px wide, 300 px tall box: ×20 would need over 400 px.
+    const steep = profileModel({ segments: [{ from_m: 0, length_m: 2000, gradient_permille: 40, curveRadius_m: 0 }], frontAt_m: 1500, clearAhead_m: 200, hazards: [] }, undefined)!;
+    const g = profilePlot(steep, "metric", 520, 300);
+    expect(g.exaggeration).toBeLessThan(VERTICAL_EXAGGERATION);
+    expect(g.xTitle).toBe(`Distance along the line (m) · heights ×${g.exaggeration} (×20 would not fit)`);
   });
 
   it("labels the axes in feet for US units, with the same drawing", () => {
@@ -119,5 +132,20 @@ describe("profile chart (SVG)", () => {
     render(() => <ProfileChart model={undefined} units="metric" palette={PALETTES.day} summary="Enter the segments to see the profile." />);
     expect(document.querySelector("svg.notes-profile")).toBeNull();
     expect(document.querySelector(".notes-chart .chart-caption")?.textContent).toBe("Enter the segments to see the profile.");
+  });
+});
+
+describe("one exaggeration in every profile drawing", () => {
+  it("the card's sketch and the editor's chart of every demo note draw heights ×20, and say so", () => {
+    for (const note of builtinLocations) {
+      const c = referenceCase(note, builtinTrains, lib);
+      const m = profileModel(note, c.ok ? c.value : undefined)!;
+      const { unmount } = render(() => <ProfileSketch model={m} units="metric" />);
+      const svg = document.querySelector(".notes-sketch")!;
+      expect(svg.getAttribute("data-exaggeration"), note.id).toBe("20");
+      expect(svg.textContent, note.id).toContain("heights ×20");
+      unmount();
+      for (const width of [520, 760, 1100]) expect(profilePlot(m, "metric", width, 300).exaggeration, `${note.id} at ${width} px`).toBe(20);
+    }
   });
 });

@@ -50,7 +50,7 @@ export function ProfileChart(props: ProfileChartProps): JSX.Element {
       <div class="chart-box notes-chart-box" classList={{ empty: !plot() }} ref={box}>
         <Show when={plot()}>
           {(g) => (
-            <svg class="notes-profile" width={g().width} height={g().height} viewBox={`0 0 ${g().width} ${g().height}`} role="img" aria-label={`Profile. ${props.summary}`}>
+            <svg class="notes-profile" data-exaggeration={g().exaggeration} width={g().width} height={g().height} viewBox={`0 0 ${g().width} ${g().height}`} role="img" aria-label={`Profile. ${props.summary}`}>
               <g class="notes-profile-grid" stroke={p().grid} stroke-width="1">
                 <For each={g().yTicks}>{(t) => <line x1={g().left} x2={g().right} y1={t.at} y2={t.at} />}</For>
                 <For each={g().xTicks}>{(t) => <line x1={t.at} x2={t.at} y1={g().top} y2={g().bottom} />}</For>

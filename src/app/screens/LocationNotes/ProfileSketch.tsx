@@ -5,10 +5,10 @@
  */
 import { For, Show, type JSX } from "solid-js";
 import { formatNumber, toDisplay, unitSymbol, type UnitSystem } from "../../format.js";
-import { alongGround, type ProfileModel } from "./profileModel.js";
+import { alongGround, exaggerationFor, exaggerationWords, type ProfileModel } from "./profileModel.js";
 
 const W = 1000;
-const H = 250;
+const H = 300;
 const PAD = { left: 30, right: 36, top: 64, bottom: 46 };
 /** Labels stay below the legend line. */
 const LABEL_TOP = 50;
@@ -18,9 +18,17 @@ export function ProfileSketch(props: { model: ProfileModel; units: UnitSystem })
   const d = (metres: number) => toDisplay("distance", metres, "m", props.units);
   const hs = () => m().ground.map((p) => p.h);
   const hMin = () => Math.min(...hs());
-  const hMax = () => Math.max(...hs(), hMin() + 2);
-  const sx = (x: number) => PAD.left + ((x - m().startM) / Math.max(1, m().endM - m().startM)) * (W - PAD.left - PAD.right);
-  const sy = (h: number) => H - PAD.bottom - ((h - hMin()) / (hMax() - hMin())) * (H - PAD.top - PAD.bottom);
+  const hMax = () => Math.max(...hs());
+  /** Pixels per metre along the line; heights at the one exaggeration of every profile drawing. */
+  const perAlong = () => (W - PAD.left - PAD.right) / Math.max(1, m().endM - m().startM);
+  /** Room under the ground for the hazard markers, px. */
+  const ROOM = 30;
+  const exaggeration = () => exaggerationFor(hMax() - hMin(), perAlong(), H - PAD.top - PAD.bottom - ROOM);
+  const perUp = () => perAlong() * exaggeration();
+  /** The ground's lowest point sits this far above the axis: centred in the room above the markers. */
+  const base = () => ROOM + (H - PAD.top - PAD.bottom - ROOM - (hMax() - hMin()) * perUp()) / 2;
+  const sx = (x: number) => PAD.left + (x - m().startM) * perAlong();
+  const sy = (h: number) => H - PAD.bottom - base() - (h - hMin()) * perUp();
   const path = (pts: ReadonlyArray<{ x: number; h: number }>, lift = 0) => pts.map((p, k) => `${k === 0 ? "M" : "L"}${sx(p.x).toFixed(1)},${(sy(p.h) - lift).toFixed(1)}`).join(" ");
   const ground = () => path(m().ground);
   const groundFill = () => `${ground()} L${sx(m().endM).toFixed(1)},${H - PAD.bottom} L${sx(m().startM).toFixed(1)},${H - PAD.bottom} Z`;
@@ -28,12 +36,6 @@ export function ProfileSketch(props: { model: ProfileModel; units: UnitSystem })
   const label = (metres: number) => `${formatNumber(d(metres), 0)} ${unit()}`;
   const hAt = (x: number) => alongGround(m().ground, x, x)[0]!.h;
   const labelY = (y: number) => Math.max(LABEL_TOP, y);
-  /** How much the heights are stretched against the distances. */
-  const exaggeration = () => {
-    const xScale = (W - PAD.left - PAD.right) / Math.max(1, m().endM - m().startM);
-    const yScale = (H - PAD.top - PAD.bottom) / (hMax() - hMin());
-    return Math.max(1, Math.round(yScale / xScale));
-  };
   const ticks = () => {
     const span = m().endM - m().startM;
     const raw = span / 6;
@@ -45,7 +47,7 @@ export function ProfileSketch(props: { model: ProfileModel; units: UnitSystem })
   };
 
   return (
-    <svg class="notes-sketch" viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Profile sketch: the track, the standing train and what lies ahead" preserveAspectRatio="xMidYMid meet">
+    <svg class="notes-sketch" data-exaggeration={exaggeration()} viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Profile sketch: the track, the standing train and what lies ahead" preserveAspectRatio="xMidYMid meet">
       <path d={groundFill()} fill="#e9ecef" stroke="none" />
       <path d={ground()} fill="none" stroke="#222" stroke-width="2.5" />
       <line x1={PAD.left} y1={H - PAD.bottom} x2={W - PAD.right} y2={H - PAD.bottom} stroke="#555" stroke-width="1" />
@@ -60,7 +62,7 @@ export function ProfileSketch(props: { model: ProfileModel; units: UnitSystem })
         )}
       </For>
       <text x={W - PAD.right} y={H - 4} font-size="16" text-anchor="end" fill="#444">
-        {`distance along the line, ${unit()} · heights ×${exaggeration()}`}
+        {`distance along the line, ${unit()} · ${exaggerationWords(exaggeration())}`}
       </text>
       <Show when={m().train}>
         {(t) => (

@@ -38,6 +38,29 @@ export interface ProfileModel {
   hazards: Array<ProfilePoint & { kind: HazardKind; label: string }>;
 }
 
+/**
+ * Heights are drawn this many times steeper than distances in every profile drawing — the editor's chart
+ * and the printed card's sketch, whatever the note or the size of the box — so two notes compare at a
+ * glance and a driver learns one look for a 10 ‰ bank. Each drawing says it ("heights ×20").
+ */
+export const VERTICAL_EXAGGERATION = 20;
+/** Smaller exaggerations, tried in turn when the relief of a long or steep profile would not fit the box. */
+const FALLBACK_EXAGGERATIONS = [10, 5, 2, 1] as const;
+
+/**
+ * The exaggeration a drawing uses: VERTICAL_EXAGGERATION, unless the ground's relief (m) drawn that steep
+ * would not fit `heightPx` at `pxPerM` along the line; then the largest fallback that fits.
+ */
+export function exaggerationFor(reliefM: number, pxPerM: number, heightPx: number): number {
+  for (const e of [VERTICAL_EXAGGERATION, ...FALLBACK_EXAGGERATIONS]) if (reliefM * pxPerM * e <= heightPx) return e;
+  return 1;
+}
+
+/** The drawing's words for its exaggeration. */
+export function exaggerationWords(e: number): string {
+  return e === VERTICAL_EXAGGERATION ? `heights ×${e}` : `heights ×${e} (×${VERTICAL_EXAGGERATION} would not fit)`;
+}
+
 /** The segments that can be drawn (finite, positive length), as a track profile. */
 export function drawableTrack(segs: readonly SegmentFile[]): TrackProfile | undefined {
   const ok = segs.filter((s) => [s.from_m, s.length_m, s.gradient_permille, s.curveRadius_m].every(Number.isFinite) && s.length_m > 0);

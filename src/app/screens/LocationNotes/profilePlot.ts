@@ -5,7 +5,7 @@
  * exaggeration. Pure, so the drawing can be checked without a browser; `ProfileChart.tsx` draws it as SVG.
  */
 import { formatNumber, toDisplay, unitSymbol, type UnitSystem } from "../../format.js";
-import { alongGround, type ProfileModel, type ProfilePoint, type SlackWord } from "./profileModel.js";
+import { alongGround, exaggerationFor, exaggerationWords, type ProfileModel, type ProfilePoint, type SlackWord } from "./profileModel.js";
 
 export interface PlotTick {
   /** Pixel position along its axis. */
@@ -80,18 +80,25 @@ export function profilePlot(m: ProfileModel, units: UnitSystem, width: number, h
   const top = PAD.top;
   const bottom = Math.max(top + 40, height - PAD.bottom);
 
-  // Heights: the ground's range in display units, widened to round ticks; at least 2 m tall.
+  // Along the line first: the width sets the scale, and the heights follow at the one exaggeration.
+  const xLo0 = d(m.startM);
+  const xHi0 = d(m.endM);
+  const perAlong = (right - left) / Math.max(1e-9, xHi0 - xLo0);
   const hs = m.ground.map((g) => d(g.h));
   const hLo0 = Math.min(...hs);
-  const hHi0 = Math.max(...hs, hLo0 + d(2));
-  const yStep = roundStep(hHi0 - hLo0, Math.max(2, Math.floor((bottom - top) / 55)));
-  const tickLo = Math.floor(hLo0 / yStep + 1e-9) * yStep;
-  const hHi = Math.ceil(hHi0 / yStep - 1e-9) * yStep;
-  // Room under the lowest ground for the hazard markers (drawn below the line), without a tick of its own.
-  const room = (HAZARD_ROOM / Math.max(1, bottom - top - HAZARD_ROOM)) * (hHi - hLo0);
-  const hLo = Math.min(tickLo, hLo0 - room);
-  const xLo = d(m.startM);
-  const xHi = d(m.endM);
+  const hHi0 = Math.max(...hs);
+  const exaggeration = exaggerationFor(hHi0 - hLo0, perAlong, bottom - top - HAZARD_ROOM);
+  const perUp = perAlong * exaggeration;
+  // The height range the box shows at that scale: the ground centred in the room above the hazard markers.
+  const span = (bottom - top) / perUp;
+  const roomBelow = HAZARD_ROOM / perUp;
+  const spare = span - roomBelow - (hHi0 - hLo0);
+  const hLo = hLo0 - roomBelow - spare / 2;
+  const hHi = hLo + span;
+  const yStep = roundStep(hHi - hLo, Math.max(2, Math.floor((bottom - top) / 55)));
+  const tickLo = Math.ceil(hLo / yStep - 1e-9) * yStep;
+  const xLo = xLo0;
+  const xHi = xHi0;
   const sx = (metres: number) => left + ((d(metres) - xLo) / Math.max(1e-9, xHi - xLo)) * (right - left);
   const sy = (metres: number) => bottom - ((d(metres) - hLo) / Math.max(1e-9, hHi - hLo)) * (bottom - top);
   const path = (pts: readonly ProfilePoint[], lift = 0) => pts.map((p, k) => `${k === 0 ? "M" : "L"}${sx(p.x).toFixed(1)},${(sy(p.h) - lift).toFixed(1)}`).join(" ");
@@ -105,10 +112,6 @@ export function profilePlot(m: ProfileModel, units: UnitSystem, width: number, h
   const ground = path(m.ground);
   const groundFill = `${ground} L${sx(m.endM).toFixed(1)},${bottom} L${sx(m.startM).toFixed(1)},${bottom} Z`;
 
-  // Pixels per display unit along and up: how much steeper the drawing is than the ground.
-  const perAlong = (right - left) / Math.max(1e-9, xHi - xLo);
-  const perUp = (bottom - top) / Math.max(1e-9, hHi - hLo);
-  const exaggeration = Math.max(1, Math.round(perUp / perAlong));
 
   const plot: ProfilePlot = {
     width,
@@ -127,7 +130,7 @@ export function profilePlot(m: ProfileModel, units: UnitSystem, width: number, h
       .filter((h) => h.inside)
       .map(({ x, y, n }) => ({ x, y, n })),
     exaggeration,
-    xTitle: `Distance along the line (${unit}) · heights ×${exaggeration}`,
+    xTitle: `Distance along the line (${unit}) · ${exaggerationWords(exaggeration)}`,
     yTitle: `Height (${unit})`,
   };
 
