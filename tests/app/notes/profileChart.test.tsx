@@ -139,7 +139,8 @@ describe("one exaggeration in every profile drawing", () => {
   it("the card's sketch and the editor's chart of every demo note draw heights ×20, and say so", () => {
     for (const note of builtinLocations) {
       const c = referenceCase(note, builtinTrains, lib);
-      const m = profileModel(note, c.ok ? c.value : undefined)!;
+      const hazards = note.hazards.map((h) => ({ kind: h.kind, ...(h.at_m !== undefined ? { at_m: h.at_m } : {}) }));
+      const m = profileModel({ ...note, hazards }, c.ok ? c.value : undefined)!;
       const { unmount } = render(() => <ProfileSketch model={m} units="metric" />);
       const svg = document.querySelector(".notes-sketch")!;
       expect(svg.getAttribute("data-exaggeration"), note.id).toBe("20");
