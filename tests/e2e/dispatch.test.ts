@@ -117,7 +117,38 @@ describe("dispatcher's screens in the browser", () => {
     expect(lines).toHaveLength(13);
     expect(lines[1]).toMatch(/^agg-0610,,0,damp,true,1400,/);
     await inBothOrientations("departures", "day", 500);
-  }, 300_000);
+
+    // Portrait: the day of twelve is compact cards, under two screens of the screen area.
+    await page.setViewportSize(PORTRAIT);
+    const heights = await page.evaluate(() => ({ table: document.querySelector(".departures-table")!.getBoundingClientRect().height, screen: document.querySelector(".screen")!.clientHeight }));
+    console.log(`[measure] Departures in portrait: 12 trains take ${Math.round(heights.table)} px, ${(heights.table / heights.screen).toFixed(2)} screens`);
+    expect(heights.table).toBeLessThan(2 * heights.screen);
+    await page.setViewportSize(LANDSCAPE);
+
+    // One verdict at a time, and the file's order on request.
+    const showOnly = page.getByRole("radiogroup", { name: "Show" });
+    await showOnly.getByRole("radio", { name: /^Needs assistance/ }).click();
+    const shown = await page.locator(".departures-table tbody tr").evaluateAll((rows) => rows.map((r) => r.getAttribute("data-verdict")));
+    expect(shown.length).toBeGreaterThan(0);
+    expect(new Set(shown)).toEqual(new Set(["needs-assistance"]));
+    await showOnly.getByRole("radio", { name: /^All/ }).click();
+    await page.getByRole("radio", { name: "File order" }).click();
+    expect(await page.locator(".departures-table tbody tr").first().getAttribute("data-row")).toBe("agg-0610");
+    await page.getByRole("radio", { name: "Most at risk first" }).click();
+
+    // A row opens its train: the full plan in Start plan, then its assistance in Assistance check.
+    const row = (await page.locator('.departures-table tbody tr[data-verdict="needs-assistance"]').first().getAttribute("data-row"))!;
+    await page.getByRole("button", { name: `Open ${row} in Start plan` }).click();
+    await page.waitForSelector('[data-screen="start-plan"] .verdict:not(.stale)', { timeout: 60_000 });
+    expect(await page.locator(".case-label strong").textContent()).toMatch(new RegExp(`^${row}: `));
+    expect(await page.locator(".verdict").getAttribute("data-verdict")).toBe("needs-assistance");
+    await shot("departure-opened-plan-landscape-day");
+    await openScreen("Departures");
+    await page.getByRole("button", { name: `Open ${row} in Assistance check` }).click();
+    await page.waitForSelector(".option-card, .nothing-works", { timeout: 120_000 });
+    expect(await page.locator(".assistance-check").textContent()).toContain(`${row}: `);
+    await shot("departure-opened-assistance-landscape-day");
+  }, 420_000);
 
   it("Load table: twelve figures for the demo note, as a table and as bars", async () => {
     await openScreen("Load table");
