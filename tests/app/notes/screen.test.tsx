@@ -30,9 +30,9 @@ describe("Location notes screen", () => {
     fireEvent.input(input("name"), { target: { value: "Wrenfield up loop (test)" } });
     fireEvent.input(input("revision.initials"), { target: { value: "QA" } });
     const save = screen.getByRole("button", { name: "Save note" }) as HTMLButtonElement;
-    await waitFor(() => expect(save.disabled).toBe(false));
+    await waitFor(() => expect(save.disabled).toBe(false), { timeout: 10_000 });
     fireEvent.click(save);
-    await waitFor(() => expect(screen.getByText('Saved "Wrenfield up loop (test)".')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('Saved "Wrenfield up loop (test)".')).toBeTruthy(), { timeout: 10_000 });
     fireEvent.click(screen.getByRole("button", { name: "Back to the library" }));
     await waitFor(() => expect(listed()).toContain("Wrenfield up loop (test)"));
     const picker = await listNotesForPicker();

@@ -53,12 +53,15 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
                 Step {s().number} · notch {notchText(s().notch)}
               </p>
               <p class="slip-hold">
-                <span class="slip-order" aria-hidden="true">1</span> {h().hold}
+                <span class="slip-order" aria-hidden="true">1</span>
+                <span>{h().hold}</span>
               </p>
               <p class="slip-then">
                 <span class="slip-order" aria-hidden="true">2</span>
                 <Show when={drops()} fallback={<span>{h().then}</span>}>
-                  <span class="fallback-label">Still slipping: drop to notch</span> <strong class="fallback-notch">{notchText(s().fallbackNotch)}</strong>
+                  <span>
+                    <span class="fallback-label">Still slipping: drop to notch</span> <strong class="fallback-notch">{notchText(s().fallbackNotch)}</strong>
+                  </span>
                 </Show>
               </p>
             </div>

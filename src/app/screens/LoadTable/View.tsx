@@ -11,7 +11,7 @@ import { Chart } from "../../components/Chart.js";
 import { Icon } from "../../components/Icon.js";
 import { VerdictIcon } from "../../components/VerdictBanner.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
-import { duration, show, type UnitSystem } from "../../format.js";
+import { duration, show, showAtMost, type UnitSystem } from "../../format.js";
 import type { LocationChoice } from "../../locations.js";
 import { Cautions } from "../shared/Cautions.js";
 import type { TableStatus } from "./createLoadTableRun.js";
@@ -57,8 +57,8 @@ export function LoadTableView(props: LoadTableViewProps): JSX.Element {
     const r = props.rows.find((x) => x.rail === rail && x.sand === sand);
     const below = () => r !== undefined && props.trainMassKg !== null && props.trainMassKg > r.maxTrailingMassKg;
     return (
-      <td data-cell={`${rail}-${sand ? "sand" : "no-sand"}`} classList={{ none: r !== undefined && r.maxTrailingMassKg <= 0, waiting: r === undefined }}>
-        {r === undefined ? (props.status === "running" ? "working…" : "–") : r.maxTrailingMassKg > 0 ? show("mass", r.maxTrailingMassKg, props.units) : "none"}
+      <td data-cell={`${rail}-${sand ? "sand" : "no-sand"}`} classList={{ none: r !== undefined && r.maxTrailingMassKg < 1000, waiting: r === undefined }}>
+        {r === undefined ? (props.status === "running" ? "working…" : "–") : r.maxTrailingMassKg >= 1000 ? showAtMost("mass", r.maxTrailingMassKg, props.units) : "none"}
         <Show when={r !== undefined && props.trainMassKg !== null && !below()}>
           <span class="this-train">
             <VerdictIcon verdict="starts" size={18} /> this train starts

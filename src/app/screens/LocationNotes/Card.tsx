@@ -17,7 +17,7 @@ import { latestRevision } from "../../../profiles/notes.js";
 import type { LocationNoteFile } from "../../../profiles/schemas.js";
 import type { CardProvenance } from "../../../profiles/provenance.js";
 import { DEFAULT_REFERENCE_TEMPERATURE_C, type ReferenceSummary } from "../../../profiles/referenceTrain.js";
-import { show, type UnitSystem } from "../../format.js";
+import { show, showAtMost, type UnitSystem } from "../../format.js";
 import { HAZARD_KINDS } from "./draft.js";
 import type { NoteFigures } from "./figures.js";
 import type { LoadTableOutcome } from "./loadTableRunner.js";
@@ -51,11 +51,11 @@ export function cardComplete(loadTable: LoadTableOutcome | undefined): boolean {
   return loadTable !== undefined;
 }
 
-/** A mass cell of the load table: "none" when even a light train would not start. */
+/** A mass cell of the load table: "none" when even a light train would not start; rounded down, as `taut table` gives it. */
 export function massCell(row: LoadTableRow | undefined, units: UnitSystem): string {
   if (!row) return "–";
-  if (row.maxTrailingMassKg <= 0) return "none";
-  return show("mass", row.maxTrailingMassKg, units);
+  if (row.maxTrailingMassKg < 1000) return "none";
+  return showAtMost("mass", row.maxTrailingMassKg, units);
 }
 
 export function LoadTableGrid(props: { rows: readonly LoadTableRow[]; units: UnitSystem; caption: string }): JSX.Element {
