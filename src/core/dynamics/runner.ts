@@ -5,7 +5,7 @@
  */
 import { adhesionSpeedFactor, slipRisk } from "../physics/adhesion.js";
 import { applyBrakes, createState, evaluate, step, type DynamicsState } from "./dynamics.js";
-import { stableTimeStep, type TrainModel } from "../train/trainModel.js";
+import { CONTROL_INTERVAL_S, integratorSteps, stepDividing, type TrainModel } from "../train/trainModel.js";
 
 /** What a controller (a driver, or the planner's policy) can observe. */
 export interface Observation {
@@ -64,8 +64,14 @@ export const MOVING_MPS = 0.01;
 const SLIP_EPISODE_GAP_S = 3;
 /** Time the locomotive brake takes to ease off, s (matches `applyBrakes`). */
 const LOCO_BRAKE_EASE_S = 3;
+/**
+ * After the last vehicle moves, the run-out's last impacts at the rear die down within a few seconds; the
+ * run keeps its take-up step this long before it changes to the rolling step, s.
+ */
+export const RUN_OUT_SETTLE_S = 5;
 
 export interface RunOptions {
+  /** A fixed step for the whole run (rounded down to a whole fraction of the control interval), s. */
   dt?: number;
   controlIntervalS?: number;
   seriesIntervalS?: number;
@@ -73,8 +79,12 @@ export interface RunOptions {
 }
 
 export class Run {
+  /** The present integrator step: a whole fraction of the control interval, s. */
   dt: number;
+  /** Integrator steps per control interval. */
+  stepsPerInterval: number;
   readonly controlIntervalS: number;
+  /** Control intervals between samples of the series. */
   readonly seriesEvery: number;
   lead: number;
   brakes: BrakeSchedule;
@@ -87,9 +97,16 @@ export class Run {
   private lastSlipCount: Int32Array;
   private openEpisode: Array<SlipEpisode | null>;
   series: SeriesBuffer;
-  private stepsSinceSeries = 0;
+  /** Vehicles that have not moved yet (the first `waitingCount` entries). */
+  private waiting: Int32Array;
+  private waitingCount: number;
   private seriesMaxT = 0;
   private seriesMaxC = 0;
+  /** The clock: the run's start time and the control intervals completed since. */
+  private readonly t0: number;
+  private intervals = 0;
+  /** Step to change to once the run-out has passed (0: none pending). */
+  private rollingStepS: number;
   /** Steps actually integrated (quiescent intervals are skipped in one evaluation). */
   steps = 0;
 
@@ -99,13 +116,20 @@ export class Run {
     brakes: BrakeSchedule,
     opts: RunOptions = {},
   ) {
-    this.dt = opts.dt ?? stableTimeStep(m);
-    this.controlIntervalS = opts.controlIntervalS ?? 0.1;
-    this.seriesEvery = Math.max(1, Math.round((opts.seriesIntervalS ?? 0.5) / this.dt));
+    this.controlIntervalS = opts.controlIntervalS ?? CONTROL_INTERVAL_S;
+    const choice = integratorSteps(m, this.controlIntervalS);
+    const first = opts.dt === undefined ? choice.takeUpS : stepDividing(this.controlIntervalS, opts.dt);
+    this.stepsPerInterval = Math.round(this.controlIntervalS / first);
+    this.dt = this.controlIntervalS / this.stepsPerInterval;
+    this.rollingStepS = opts.dt === undefined && choice.rollingS > this.dt ? choice.rollingS : 0;
+    this.seriesEvery = Math.max(1, Math.round((opts.seriesIntervalS ?? 0.5) / this.controlIntervalS));
+    this.t0 = s.t;
     this.lead = m.nl > 0 ? m.locoVehicle[0]! : 0;
     this.brakes = brakes;
     this.brakesDoneS = brakesEnd(m, brakes);
     this.started = new Uint8Array(m.n);
+    this.waiting = Int32Array.from({ length: m.n }, (_, i) => i);
+    this.waitingCount = m.n;
     this.lastSlipCount = new Int32Array(m.nl);
     this.openEpisode = Array.from({ length: m.nl }, () => null);
     this.series = emptySeries(256);
@@ -125,7 +149,9 @@ export class Run {
    * control interval.
    */
   setStep(dtS: number): void {
-    this.dt = this.controlIntervalS / Math.ceil(this.controlIntervalS / dtS - 1e-9);
+    this.stepsPerInterval = Math.ceil(this.controlIntervalS / dtS - 1e-9);
+    this.dt = this.controlIntervalS / this.stepsPerInterval;
+    if (this.rollingStepS <= this.dt) this.rollingStepS = 0;
   }
 
   /** Change when the locomotive brake comes off (it must not be in the past). */
@@ -147,22 +173,31 @@ export class Run {
   advanceInterval(): void {
     const m = this.m;
     const s = this.s;
-    const steps = Math.max(1, Math.round(this.controlIntervalS / this.dt));
+    const steps = this.stepsPerInterval;
     if (this.quiescent()) {
       // Everything stands and is held: only brakes and the effort lag change. One evaluation over the
       // interval finds the moment (to within the interval) when something breaks away.
-      const span = steps * this.dt;
+      const span = this.controlIntervalS;
       s.t += span;
       if (s.t <= this.brakesDoneS + span) applyBrakes(m, s, this.brakes.trainBrakeReleaseS, this.brakes.locoBrakeReleaseS);
       evaluate(m, s, span);
-      this.afterStep(steps);
-      return;
+      this.afterStep();
+    } else {
+      for (let k = 0; k < steps; k++) {
+        if (s.t <= this.brakesDoneS) applyBrakes(m, s, this.brakes.trainBrakeReleaseS, this.brakes.locoBrakeReleaseS);
+        step(m, s, this.dt);
+        this.afterStep();
+      }
+      this.steps += steps;
     }
-    for (let k = 0; k < steps; k++) {
-      if (s.t <= this.brakesDoneS) applyBrakes(m, s, this.brakes.trainBrakeReleaseS, this.brakes.locoBrakeReleaseS);
-      step(m, s, this.dt);
-      this.steps++;
-      this.afterStep(1);
+    // The clock counts whole intervals, so rounding in the steps never accumulates: after k intervals the
+    // time is exactly t0 + k × interval.
+    this.intervals++;
+    s.t = this.t0 + intervalsToS(this.intervals, this.controlIntervalS);
+    if (this.intervals % this.seriesEvery === 0) this.record();
+    if (this.rollingStepS > 0 && this.lastVehicleMovesS !== null && s.t >= this.lastVehicleMovesS + RUN_OUT_SETTLE_S) {
+      this.setStep(this.rollingStepS);
+      this.rollingStepS = 0;
     }
   }
 
@@ -174,26 +209,25 @@ export class Run {
     return true;
   }
 
-  private afterStep(count: number): void {
+  private afterStep(): void {
     const s = this.s;
     if (s.intervalMaxTensionN > this.seriesMaxT) this.seriesMaxT = s.intervalMaxTensionN;
     if (s.intervalMaxCompressionN > this.seriesMaxC) this.seriesMaxC = s.intervalMaxCompressionN;
-    if (this.startedCount < this.m.n) {
-      for (let i = 0; i < this.m.n; i++) {
-        if (this.started[i] === 0 && s.v[i]! > MOVING_MPS) {
+    if (this.waitingCount > 0) {
+      // Only the vehicles still standing are looked at; a vehicle that moves leaves the list.
+      const w = this.waiting;
+      for (let q = this.waitingCount - 1; q >= 0; q--) {
+        const i = w[q]!;
+        if (s.v[i]! > MOVING_MPS) {
           this.started[i] = 1;
           this.startedCount++;
+          w[q] = w[--this.waitingCount]!;
         }
       }
-      if (this.startedCount === this.m.n) {
+      if (this.waitingCount === 0) {
         this.lastVehicleMovesS = s.t;
         this.locoTravelToStretchM = s.x[this.lead]!;
       }
-    }
-    this.stepsSinceSeries += count;
-    if (this.stepsSinceSeries >= this.seriesEvery) {
-      this.stepsSinceSeries = 0;
-      this.record();
     }
   }
 
@@ -201,6 +235,7 @@ export class Run {
   record(): void {
     const s = this.s;
     let b = this.series;
+    if (b.n > 0 && b.timeS[b.n - 1] === s.t) return;
     if (b.n === b.timeS.length) b = this.series = growSeries(b);
     const k = b.n++;
     b.timeS[k] = s.t;
@@ -281,6 +316,7 @@ export class Run {
     Object.assign(r, this);
     r.s = cloneState(this.s);
     r.started = this.started.slice();
+    r.waiting = this.waiting.slice();
     r.episodes = this.episodes.map((e) => ({ ...e }));
     r.lastSlipCount = this.lastSlipCount.slice();
     r.openEpisode = this.openEpisode.map((e) => (e ? (r.episodes[this.episodes.indexOf(e)] ?? null) : null));
@@ -304,6 +340,12 @@ export class Run {
       effortN: t(b.effortN),
     };
   }
+}
+
+/** Time after k control intervals, s: k ÷ (intervals per second) when that is a whole number, so 0.1 s intervals give decimal times. */
+function intervalsToS(k: number, intervalS: number): number {
+  const perS = 1 / intervalS;
+  return Number.isInteger(perS) ? k / perS : k * intervalS;
 }
 
 /** Effort unit k asks for in `notch` at a speed, N (before adhesion). */

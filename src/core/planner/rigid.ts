@@ -36,8 +36,20 @@ export function rigidAccelerate(
 ): RigidOutcome {
   const m = ctx.model;
   const n = m.n;
+  // The speed terms of every vehicle's resistance add up once; the grade and curve terms change only when a
+  // vehicle passes onto another segment, which happens at known travels (the train moves as one).
   let effMass = 0;
-  for (let i = 0; i < n; i++) effMass += m.effMassKg[i]!;
+  let davisA = 0;
+  let davisB = 0;
+  let davisC = 0;
+  let excess = 0;
+  for (let i = 0; i < n; i++) {
+    effMass += m.effMassKg[i]!;
+    davisA += m.davisA[i]!;
+    davisB += m.davisB[i]!;
+    davisC += m.davisC[i]!;
+    excess += m.breakawayExcessN[i]!;
+  }
   let t = start.timeS;
   let v = Math.max(0, start.speedMps);
   let x = start.travelM;
@@ -48,22 +60,35 @@ export function rigidAccelerate(
   const capped = { hit: false };
   const target = ctx.c.target;
   const seg = new Int32Array(n);
-  while (t - start.timeS < maxS) {
-    // Tractive effort: the notch's demand, held to what median adhesion gives.
-    let f = 0;
-    const factor = adhesionSpeedFactor(v);
-    for (let k = 0; k < m.nl; k++) f += Math.min(notchTargetN(m, k, notch, v), m.adhesiveWeightN[k]! * ctx.mu0Median[k]! * factor);
-    let r = 0;
+  const profile = { gradeCurveN: 0, nextChangeM: -Infinity };
+  const placeOnProfile = () => {
+    // Each vehicle's segment at travel x, the grade and curve force of the whole train, and the travel at
+    // which the next vehicle reaches the end of its segment (travel only grows: v ≥ 0).
+    let sum = 0;
+    let next = Infinity;
     for (let i = 0; i < n; i++) {
       const ch = m.chainage0M[i]! + x;
       let k = seg[i]!;
       while (ch >= m.segEndM[k]!) k++;
       while (ch < m.segStartM[k]!) k--;
       seg[i] = k;
-      r += m.davisA[i]! + (m.davisB[i]! + m.davisC[i]! * v) * v + m.massKg[i]! * (GRAVITY_MPS2 * m.segSin[k]! + m.segCurveNPerKg[k]!);
-      // Breakaway resistance still fading out at a crawl, as in the full model.
-      if (v < m.fadeSpeedMps) r += m.breakawayExcessN[i]! * (1 - v / m.fadeSpeedMps);
+      sum += m.massKg[i]! * (GRAVITY_MPS2 * m.segSin[k]! + m.segCurveNPerKg[k]!);
+      const end = m.segEndM[k]! - m.chainage0M[i]!;
+      if (end < next) next = end;
     }
+    profile.gradeCurveN = sum;
+    profile.nextChangeM = next;
+  };
+  placeOnProfile();
+  while (t - start.timeS < maxS) {
+    // Tractive effort: the notch's demand, held to what median adhesion gives.
+    let f = 0;
+    const factor = adhesionSpeedFactor(v);
+    for (let k = 0; k < m.nl; k++) f += Math.min(notchTargetN(m, k, notch, v), m.adhesiveWeightN[k]! * ctx.mu0Median[k]! * factor);
+    if (x >= profile.nextChangeM) placeOnProfile();
+    let r = davisA + (davisB + davisC * v) * v + profile.gradeCurveN;
+    // Breakaway resistance still fading out at a crawl, as in the full model.
+    if (v < m.fadeSpeedMps) r += excess * (1 - v / m.fadeSpeedMps);
     const a = (f - r) / effMass;
     v = Math.max(0, v + a * DT_S);
     x += v * DT_S;
