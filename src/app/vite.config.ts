@@ -75,6 +75,9 @@ export default defineConfig({
     // Every browser the app supports preloads modules itself.
     modulePreload: { polyfill: false },
     rolldownOptions: {
+      // The build's timing block (plugins that took over a second) is a note for whoever tunes the build,
+      // not a warning for whoever starts the app.
+      checks: { bundlerTimings: false },
       output: { codeSplitting: { groups: [{ name: oneAppChunk(here("main.tsx"), here("launch.tsx"), "launch"), debugName: "launch", includeDependenciesRecursively: false }] } },
     },
   },

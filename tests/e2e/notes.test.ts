@@ -50,7 +50,7 @@ async function exportAll(): Promise<{ text: string; bundle: NotesBundleFile }> {
 
 /** All text of a PDF, page by page (pdfjs-dist legacy build runs in Node). */
 async function pdfText(data: Uint8Array): Promise<string[]> {
-  // pdfjs-dist 6 expects Promise.withResolvers, which Node 20 lacks.
+  // pdfjs-dist expects Promise.withResolvers, which Node 20 lacks.
   const P = Promise as unknown as { withResolvers?: () => unknown };
   P.withResolvers ??= () => {
     let resolve!: (v: unknown) => void;
