@@ -5,6 +5,7 @@ import { library, readNotesFiles } from "../files.js";
 import type { Command } from "../command.js";
 import { checkDepartures } from "../batch/checkDepartures.js";
 import { readDepartures } from "../batch/departures.js";
+import { parseShard, shardOf } from "../batch/shard.js";
 import { CHECK_ASSISTANCE_BUDGET, CHECK_DIVIDE_BUDGET } from "../batch/jobs.js";
 import { defaultPoolSize, JobPool } from "../batch/pool.js";
 import { checkCsv, renderCheck, summarise } from "../render/check.js";
@@ -14,7 +15,7 @@ import { sortByRisk } from "../../profiles/riskOrder.js";
 export const checkCommand: Command = {
   name: "check",
   summary: "batch check of departures: verdict, margin, largest mass, cheapest assistance",
-  usage: "taut check DEPARTURES.csv|DEPARTURES.json [--sort file|risk] [--notes FILE]... [--helper ID] [--jobs N] [--quiet] [--json|--csv]",
+  usage: "taut check DEPARTURES.csv|DEPARTURES.json [--sort file|risk] [--notes FILE]... [--helper ID] [--jobs N] [--shard K/N] [--quiet] [--json|--csv]",
   help: [
     "Checks many departures at once: one row each with the verdict, its reasons, the margin (available ÷",
     "needed), the largest trailing mass that still starts, and the cheapest assistance that makes it start",
@@ -39,6 +40,9 @@ export const checkCommand: Command = {
     "  --notes FILE  location notes (a taut/location@1 note or a taut/notes-bundle@1 bundle); repeatable",
     "  --helper ID   locomotive profile the assistance options add (default: each train's lead unit's)",
     `  --jobs N      worker threads (default: the available cores, here ${defaultPoolSize()}; 1 runs on this thread)`,
+    "  --shard K/N   answer only every N-th departure of the file, from the K-th (K = 1…N): N jobs of a",
+    "                batch scheduler's job array split a day among machines; join their CSV outputs after",
+    "                (README: Splitting a day among machines)",
     "  --quiet       no progress lines on stderr",
     "",
     `Each departure's assistance search is capped at ${CHECK_ASSISTANCE_BUDGET} planner runs for the options and ${CHECK_DIVIDE_BUDGET} for dividing`,
@@ -53,6 +57,7 @@ export const checkCommand: Command = {
     notes: { type: "string", multiple: true },
     helper: { type: "string" },
     jobs: { type: "string" },
+    shard: { type: "string" },
     quiet: { type: "boolean" },
     sort: { type: "string" },
   },
@@ -64,9 +69,11 @@ export const checkCommand: Command = {
     const sort = (values.sort as string | undefined) ?? "file";
     if (sort !== "file" && sort !== "risk") throw new InputError(`--sort: must be file or risk (got "${sort}")`);
     const jobs = jobsOption(values.jobs as string | undefined);
+    const shard = values.shard === undefined ? null : parseShard(values.shard as string);
     const lib = library(readNotesFiles((values.notes as string[] | undefined) ?? []));
     const helper = helperSpec(lib, values.helper as string | undefined);
-    const deps = readDepartures(path, lib);
+    const all = readDepartures(path, lib);
+    const deps = shard ? shardOf(all, shard) : all;
     const t0 = performance.now();
     const pool = new JobPool(jobs);
     const progress = values.quiet ? undefined : progressReporter(io, "departures answered");
@@ -81,6 +88,7 @@ export const checkCommand: Command = {
     const rows = sort === "risk" ? sortByRisk(result.rows, (x, order) => ({ verdict: x.verdict, margin: x.margin, order, failed: x.error !== undefined })) : result.rows;
     const summary = {
       ...summarise(rows),
+      ...(shard ? { shard: `${shard.k}/${shard.n}`, departuresInFile: all.length } : {}),
       elapsed_s: Math.round(elapsedS * 10) / 10,
       workers: jobs,
       distinctChecks: stats.checks,
@@ -91,7 +99,7 @@ export const checkCommand: Command = {
     if (values.json) io.out(JSON.stringify({ schema: "taut/departures-check@1", file: path, order: sort, departures: rows, summary, cautions: STANDARD_CAUTIONS }, null, 2));
     else if (values.csv) io.out(checkCsv(rows));
     else io.out(renderCheck(rows, STANDARD_CAUTIONS));
-    if (!values.quiet) io.err(`taut check: ${rows.length} departures in ${summary.elapsed_s} s (${jobs} worker${jobs === 1 ? "" : "s"}; ${stats.checks} distinct checks, ${stats.massSearches} mass searches)`);
+    if (!values.quiet) io.err(`taut check: ${shard ? `shard ${shard.k}/${shard.n}, ` : ""}${rows.length} departures${shard ? ` of ${all.length}` : ""} in ${summary.elapsed_s} s (${jobs} worker${jobs === 1 ? "" : "s"}; ${stats.checks} distinct checks, ${stats.massSearches} mass searches)`);
     if (summary.internalErrors > 0) return EXIT_INTERNAL;
     return summary.badRows > 0 ? EXIT_BAD_INPUT : EXIT_OK;
   },
