@@ -5,6 +5,7 @@
 import { describe, expect, it } from "vitest";
 import { CONTROL_INTERVAL_S, integratorSteps, RUN_OUT_STEP_S, stepDividing } from "../../src/core/train/trainModel.js";
 import { engineHistory, engineModel, maxDeviationOverPeak, odexHistory, peakForceError, tenVehicleCase } from "./helpers/compare.js";
+import { refDerivative } from "./helpers/referenceChain.js";
 
 describe("engine against odex on the same equations, 10-vehicle train", () => {
   it("coupler force histories agree within 2 % of peak at the run-out step", () => {
@@ -30,5 +31,16 @@ describe("engine against odex on the same equations, 10-vehicle train", () => {
     const ours = engineHistory(c, T, every, dt);
     const ref = odexHistory(c, T, every, 1e-10);
     expect(peakForceError(ours, ref)).toBeLessThan(0.005);
+  });
+
+  it("the reference equations' derivative reuses one array: the comparison does not time our allocations", () => {
+    const c = tenVehicleCase();
+    const f = refDerivative(c);
+    const n = c.masses.length;
+    const y = [...new Array<number>(n).fill(0), ...new Array<number>(n).fill(1), 0];
+    const first = f(0, y);
+    const copy = [...first];
+    expect(f(0.5, y)).toBe(first);
+    expect(first).toEqual(copy);
   });
 });

@@ -156,3 +156,73 @@ export function peakForceError(a: number[][], b: number[][]): number {
   }
   return top > 0 ? worst / top : 0;
 }
+
+/** Peaks of each coupling over a run: tension and compression, N (both positive). */
+export interface CouplingPeaks {
+  tensionN: Float64Array;
+  compressionN: Float64Array;
+}
+
+/** Each coupling's peaks over T seconds from the engine at step dt: what it records at every step. */
+export function enginePeaks(c: RefChain, T: number, dt: number): CouplingPeaks {
+  const m = engineModel(c);
+  const s = createState(m);
+  s.v.fill(1);
+  s.notch[0] = 8;
+  evaluate(m, s, 0);
+  const steps = Math.round(T / dt);
+  for (let k = 0; k < steps; k++) step(m, s, dt);
+  return { tensionN: s.peakTensionN.slice(), compressionN: s.peakCompressionN.slice() };
+}
+
+/**
+ * Each coupling's peaks from odex at a tolerance: seen every `every` seconds in its dense output, or, with
+ * `every` left out, at the end of each of its own steps (no dense output: the cheapest way to read it). The
+ * derivative and the output callback allocate nothing of ours per call.
+ */
+export function odexPeaks(c: RefChain, T: number, tol: number, every?: number): CouplingPeaks & { steps: number; evaluations: number } {
+  const n = c.masses.length;
+  const solver = new Solver(2 * n + 1);
+  solver.absoluteTolerance = tol;
+  solver.relativeTolerance = tol;
+  solver.denseOutput = every !== undefined;
+  solver.maxSteps = 1e7;
+  const y0 = [...new Array<number>(n).fill(0), ...new Array<number>(n).fill(1), 0];
+  const tensionN = new Float64Array(n - 1);
+  const compressionN = new Float64Array(n - 1);
+  const look = (y: number[]) => {
+    for (let j = 0; j < n - 1; j++) {
+      const f = refCouplerForce(c, c.ext0[j]! + y[j]! - y[j + 1]!, y[n + j]! - y[n + j + 1]!);
+      if (f > tensionN[j]!) tensionN[j] = f;
+      if (-f > compressionN[j]!) compressionN[j] = -f;
+    }
+  };
+  // Our own grid output (odex's `grid` helper makes a new array at every point): one buffer, filled from the
+  // dense output at each grid time the step just taken covers.
+  const buf = new Array<number>(2 * n + 1).fill(0);
+  let next = 0;
+  const sample = (nr: number, _xOld: number, x: number, y: number[], interpolate?: (i: number, x: number) => number) => {
+    if (every === undefined || nr === 1 || !interpolate) {
+      look(y);
+      next = x + (every ?? 0);
+      return;
+    }
+    for (; next <= x; next += every) {
+      for (let i = 0; i < buf.length; i++) buf[i] = interpolate(i, next);
+      look(buf);
+    }
+  };
+  const out = solver.solve(refDerivative(c), 0, y0, T, sample);
+  return { tensionN, compressionN, steps: out.nStep, evaluations: out.nEval };
+}
+
+/** Largest difference of any coupling's peak (tension or compression) from the reference's, over the reference's largest peak. */
+export function couplingPeakError(a: CouplingPeaks, ref: CouplingPeaks): number {
+  let top = 0;
+  let worst = 0;
+  for (let j = 0; j < ref.tensionN.length; j++) {
+    top = Math.max(top, ref.tensionN[j]!, ref.compressionN[j]!);
+    worst = Math.max(worst, Math.abs(a.tensionN[j]! - ref.tensionN[j]!), Math.abs(a.compressionN[j]! - ref.compressionN[j]!));
+  }
+  return top > 0 ? worst / top : 0;
+}

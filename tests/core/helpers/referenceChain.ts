@@ -29,23 +29,30 @@ export interface RefChain {
 
 const G = 9.80665;
 
+/** Loading force of the gear at deflection e ≥ 0, with the end stop beyond full travel, N. */
+function gearLoad(c: RefChain, e: number): number {
+  const xi = Math.min(e / c.travel, 1);
+  return c.rated * xi * (c.linear + (1 - c.linear) * xi) + (e > c.travel ? c.endStopK * (e - c.travel) : 0);
+}
+
 /** Coupler force for extension `ext` and closing speed `w` (tension positive). */
 export function refCouplerForce(c: RefChain, ext: number, w: number): number {
-  const load = (e: number) => {
-    const xi = Math.min(e / c.travel, 1);
-    return c.rated * xi * (c.linear + (1 - c.linear) * xi) + (e > c.travel ? c.endStopK * (e - c.travel) : 0);
-  };
-  if (ext > c.halfSlack) return Math.max(0, load(ext - c.halfSlack) + c.damping * w);
-  if (ext < -c.halfSlack) return Math.min(0, -load(-ext - c.halfSlack) + c.damping * w);
+  if (ext > c.halfSlack) return Math.max(0, gearLoad(c, ext - c.halfSlack) + c.damping * w);
+  if (ext < -c.halfSlack) return Math.min(0, -gearLoad(c, -ext - c.halfSlack) + c.damping * w);
   return 0;
 }
 
-/** y = [x_0..x_{n-1}, v_0..v_{n-1}, effort]; every vehicle assumed moving forward (v > 0). */
+/**
+ * y = [x_0..x_{n-1}, v_0..v_{n-1}, effort]; every vehicle assumed moving forward (v > 0). The function
+ * allocates nothing per call: it writes into one derivative array and one array of coupling forces made
+ * here, and returns the same derivative array each time (a solver copies what it needs before the next call;
+ * odex copies it into its own storage at once).
+ */
 export function refDerivative(c: RefChain): (t: number, y: number[]) => number[] {
   const n = c.masses.length;
+  const d = new Array<number>(2 * n + 1).fill(0);
+  const F = new Array<number>(Math.max(0, n - 1)).fill(0);
   return (_t, y) => {
-    const d = new Array<number>(2 * n + 1).fill(0);
-    const F = new Array<number>(n - 1);
     for (let j = 0; j < n - 1; j++) F[j] = refCouplerForce(c, c.ext0[j]! + y[j]! - y[j + 1]!, y[n + j]! - y[n + j + 1]!);
     const effort = y[2 * n]!;
     for (let i = 0; i < n; i++) {
