@@ -1,5 +1,6 @@
 /** Build the app's state from its parts (the browser wiring in launch.tsx; fakes in tests). */
 import { createMemo } from "solid-js";
+import type { PlanResult } from "../core/planner/types.js";
 import type { PlannerClient } from "../worker/client.js";
 import { createBrowserPlannerPool, type PlannerPool } from "../worker/pool.js";
 import type { AppContextValue } from "./context.js";
@@ -23,7 +24,10 @@ export interface AppDeps {
   screenIds: readonly string[];
   storage?: Storage | null;
   debounceMs?: number;
-  onFirstPlan?: (workerMs: number) => void;
+  /** Called when the first plan is on screen (the build-time one, then the first live one): the planner's time in the worker, and which it is. */
+  onFirstPlan?: (workerMs: number, fromBuild: boolean) => void;
+  /** A plan worked out at build time for the first request (see createPlanRun's `initial`). */
+  firstPlan?: { key: string; result: PlanResult };
   geolocation?: Geolocation;
   /** Workers for batch work (default: the browser's pool, started on first use). */
   pool?: PlannerPool;
@@ -64,10 +68,15 @@ export function createAppState(deps: AppDeps): AppContextValue {
     ...(deps.background ? { background: deps.background } : {}),
     startCase: validCase,
     ...(deps.debounceMs !== undefined ? { debounceMs: deps.debounceMs } : {}),
-    onFirstResult: (ms) => {
-      clearTimeout(fallback);
-      firstShown();
-      deps.onFirstPlan?.(ms);
+    ...(deps.firstPlan ? { initial: deps.firstPlan } : {}),
+    onFirstResult: (ms, fromBuild) => {
+      // What waits for the first plan (the service worker, the reachability check, the device's notes)
+      // waits for the live one: it would compete with the worker still starting.
+      if (!fromBuild) {
+        clearTimeout(fallback);
+        firstShown();
+      }
+      deps.onFirstPlan?.(ms, fromBuild);
     },
   });
   if (deps.deviceNotes ?? typeof indexedDB !== "undefined") {

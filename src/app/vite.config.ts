@@ -13,6 +13,7 @@ import { fileURLToPath } from "node:url";
 import { defineConfig, type HtmlTagDescriptor, type Plugin } from "vite";
 import { VitePWA } from "vite-plugin-pwa";
 import solid from "vite-plugin-solid";
+import { firstPlanPlugin } from "./firstPlan.js";
 
 const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 const pkg = JSON.parse(readFileSync(here("../../package.json"), "utf8")) as { version: string };
@@ -83,9 +84,15 @@ export default defineConfig({
   },
   worker: {
     format: "es",
+    // chart.js sets up each scale class with a static field that reads another object's property; read as
+    // possibly effectful, the scales the app never registers (category, logarithmic, radial, time) would
+    // stay in the chart worker. Our code and chart.js read no property with a getter that does work.
+    rolldownOptions: { treeshake: { propertyReadSideEffects: false } },
   },
   plugins: [
     solid(),
+    // The demo's first plan, worked out now and shown at once on a first visit (firstPlan.ts).
+    firstPlanPlugin(),
     preloadApp(here("launch.tsx")),
     VitePWA({
       registerType: "prompt",

@@ -98,6 +98,13 @@ interface Drawer {
 let chartWorker: Worker | null = null;
 let nextId = 1;
 const onDrawn = new Map<number, () => void>();
+/** Charts start drawing (and the chart worker starts) once this settles: the page holds them until its verdict is painted. */
+let chartsAllowed: Promise<void> = Promise.resolve();
+
+/** Hold every chart until `until` settles (launch.tsx: until the first verdict is on screen). */
+export function holdChartsUntil(until: Promise<void>): void {
+  chartsAllowed = until;
+}
 
 function offscreenSupported(canvas: HTMLCanvasElement): boolean {
   return typeof Worker !== "undefined" && typeof canvas.transferControlToOffscreen === "function" && typeof OffscreenCanvas !== "undefined";
@@ -192,13 +199,18 @@ function ChartCanvas(props: { spec: ChartSpec; palette: ChartPalette; height: nu
       const idle = requestIdleCallback(() => setWanted(true), { timeout: 4000 });
       onCleanup(() => cancelIdleCallback(idle));
     }
+    let alive = true;
+    onCleanup(() => (alive = false));
     createEffect(
       on(wanted, (w) => {
-        if (!w || drawer) return;
-        drawnKey = keyOf();
-        const config = toChartConfig(props.spec, props.palette);
-        if (offscreenSupported(canvas)) drawer = workerDrawer(canvas, config, box.clientWidth, props.height, () => setDrawn(true));
-        else setUnsupported(true);
+        if (!w) return;
+        void chartsAllowed.then(() => {
+          if (!alive || drawer) return;
+          drawnKey = keyOf();
+          const config = toChartConfig(props.spec, props.palette);
+          if (offscreenSupported(canvas)) drawer = workerDrawer(canvas, config, box.clientWidth, props.height, () => setDrawn(true));
+          else setUnsupported(true);
+        });
       }),
     );
     if (typeof ResizeObserver !== "undefined") {

@@ -44,8 +44,17 @@ export interface PlanRunDeps {
   startCase: Accessor<StartCase | null>;
   /** Wait after the last change before planning, ms. */
   debounceMs?: number;
-  /** Called once, when the first plan is on screen, with the time the planner took in the worker (ms). */
-  onFirstResult?: (workerMs: number) => void;
+  /**
+   * Called when the first plan is on screen, with the time the planner took in the worker (ms): once for
+   * the first plan from the worker, and before that, when there is one, once for the plan worked out at
+   * build time (0 ms, `fromBuild`).
+   */
+  onFirstResult?: (workerMs: number, fromBuild: boolean) => void;
+  /**
+   * A plan worked out in advance (at build time) for the case with this key: when the first case has this
+   * key it is shown at once, and the live plan of the same request replaces it quietly when it arrives.
+   */
+  initial?: { key: string; result: PlanResult };
 }
 
 export function createPlanRun(deps: PlanRunDeps): PlanRun {
@@ -107,14 +116,17 @@ export function createPlanRun(deps: PlanRunDeps): PlanRun {
       });
   };
 
-  const start = (startCase: StartCase, k: string) => {
+  /** Ask for the plan of `startCase`; `quiet` when a plan for the same key is already on screen (no progress shown). */
+  const start = (startCase: StartCase, k: string, quiet = false) => {
     const ctrl = new AbortController();
     controller = ctrl;
     requestedKey = k;
-    setStatus("running");
-    setProgress(0);
+    if (!quiet) {
+      setStatus("running");
+      setProgress(0);
+    }
     deps.client
-      .plan(startCase, { signal: ctrl.signal, onProgress: (f) => !ctrl.signal.aborted && setProgress(f), skipMassSearch: true, skipVerification: true })
+      .plan(startCase, { signal: ctrl.signal, onProgress: (f) => !quiet && !ctrl.signal.aborted && setProgress(f), skipMassSearch: true, skipVerification: true })
       .then((out) => {
         if (ctrl.signal.aborted) return;
         if (out.ok) {
@@ -126,7 +138,7 @@ export function createPlanRun(deps: PlanRunDeps): PlanRun {
           setStatus("done");
           if (!firstDone) {
             firstDone = true;
-            deps.onFirstResult?.(out.elapsedMs);
+            deps.onFirstResult?.(out.elapsedMs, false);
           }
           background(startCase, k, ctrl);
         } else if (out.kind === "invalid") {
@@ -140,11 +152,21 @@ export function createPlanRun(deps: PlanRunDeps): PlanRun {
       .catch(fail);
   };
 
-  // The first plan is asked for at once (the worker loads while the page renders).
+  // The first plan is asked for at once (the worker loads while the page renders). When it was worked out
+  // in advance, that plan is on screen from the first render and the live one replaces it quietly.
   {
     const k = key();
     const c = deps.startCase();
-    if (k !== null && c !== null) start(c, k);
+    if (k !== null && c !== null) {
+      const initial = deps.initial?.key === k ? deps.initial : undefined;
+      if (initial) {
+        setResult(initial.result);
+        setResultKey(k);
+        setStatus("done");
+        deps.onFirstResult?.(0, true);
+      }
+      start(c, k, initial !== undefined);
+    }
   }
 
   createEffect(
