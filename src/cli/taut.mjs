@@ -10,10 +10,11 @@ import { createRequire } from "node:module";
 const require = createRequire(import.meta.url);
 const root = new URL("../../", import.meta.url);
 
-/** The build exists and every file it was made from is as it was then. */
+/** The build exists whole and every file it was made from is as it was then. */
 function buildIsCurrent() {
   const { readFileSync, statSync } = require("node:fs");
   try {
+    for (const out of ["build/cli/main.cjs", "build/cli/worker.mjs"]) statSync(new URL(out, root));
     const { files } = JSON.parse(readFileSync(new URL("build/cli/inputs.json", root), "utf8"));
     for (const path in files) if (statSync(new URL(path, root)).mtimeMs !== files[path]) return false;
     return true;

@@ -32,3 +32,26 @@ export function line(label: string, value: string, note = ""): void {
 export function heading(text: string): void {
   console.log(`\n${text}`);
 }
+
+/** One target of issue 14 with the figure measured in this run. */
+export interface TargetFigure {
+  target: string;
+  figure: string;
+  /** Measured ÷ goal (≤ 1 meets a "≤" goal), or goal ÷ measured for a "≥" goal; null when not a ratio. */
+  ratio: number | null;
+  note?: string;
+}
+
+const targets: TargetFigure[] = [];
+
+/** Record a target's figure for the summary at the end of the run (and print it where it was measured). */
+export function target(t: TargetFigure): void {
+  targets.push(t);
+  line(`target: ${t.target}`, t.figure, `${t.ratio === null ? "" : `${t.ratio.toFixed(2)} of the goal`}${t.note ? `${t.ratio === null ? "" : "; "}${t.note}` : ""}`);
+}
+
+/** Every target recorded so far, as a closing table. */
+export function printTargets(): void {
+  heading("Targets (issue 14) — figures of this run; a ratio ≤ 1 meets the goal");
+  for (const t of targets) console.log(`  ${t.target.padEnd(64)} ${t.figure.padStart(12)}  ${t.ratio === null ? "      " : `${t.ratio.toFixed(2).padStart(5)}×`}  ${t.note ?? ""}`);
+}
