@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 // The `taut` command. It runs the plain JavaScript build of the command line (build/cli/main.cjs, made at
-// install by the `prepare` script, scripts/build-cli.mjs), so it starts without compiling TypeScript. When a
+// install by the `prepare` script, src/cli/build.mjs), so it starts without compiling TypeScript. When a
 // source file has changed since that build, the build is made again first (esbuild, a fraction of a second);
 // should that fail, the sources run through the TypeScript loader (tsx), as in development.
 // Node's built-ins are taken with require(): importing them as ES modules builds a facade of each (node:fs
@@ -26,7 +26,7 @@ function buildIsCurrent() {
 async function loadMain() {
   if (!buildIsCurrent()) {
     try {
-      const { buildCli } = await import("../../scripts/build-cli.mjs");
+      const { buildCli } = await import("./build.mjs");
       await buildCli();
     } catch (e) {
       if (process.env.TAUT_DEBUG) process.stderr.write(`taut: could not build the command line (${e instanceof Error ? e.message : String(e)}); running the sources\n`);

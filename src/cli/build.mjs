@@ -4,13 +4,13 @@
  * bundles src/cli/main.ts and the batch worker (src/cli/batch/workerMain.ts) with everything they import into
  * build/cli/main.cjs and build/cli/worker.mjs. It runs at install (`prepare`) and again from the `taut` launcher
  * whenever a source file has changed since (build/cli/inputs.json records each input file and its time).
- *   node scripts/build-cli.mjs
+ *   node src/cli/build.mjs
  */
 import { mkdirSync, renameSync, statSync, writeFileSync } from "node:fs";
 import { dirname, join, relative, sep } from "node:path";
 import { fileURLToPath } from "node:url";
 
-const root = fileURLToPath(new URL("../", import.meta.url));
+const root = fileURLToPath(new URL("../../", import.meta.url));
 export const CLI_BUILD_DIR = join(root, "build", "cli");
 /** Besides the modules the bundle is made of: the lock file, which changes when a dependency does. */
 const EXTRA_INPUTS = ["package-lock.json"];

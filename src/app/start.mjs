@@ -9,7 +9,7 @@ import { existsSync, mkdirSync, readdirSync, readFileSync, statSync, writeFileSy
 import { dirname, join, relative, sep } from "node:path";
 import { fileURLToPath } from "node:url";
 
-const root = fileURLToPath(new URL("../", import.meta.url));
+const root = fileURLToPath(new URL("../../", import.meta.url));
 const configFile = join(root, "src/app/vite.config.ts");
 const outDir = join(root, "dist");
 /** Written after a build (outside dist/, which the build empties and the server serves): every file the app was built from and its time. */
