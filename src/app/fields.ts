@@ -50,6 +50,9 @@ const NUM = "(-?\\d+(?:\\.\\d+)?(?:e[-+]?\\d+)?)";
 // A bound may be followed by the file's own unit (" m"), which the display unit replaces.
 const BOUND = new RegExp(`\\b(at least|at most|greater than|less than) ${NUM}(?: (?:mm|m|kN|t|km/h|‰|°C)(?![\\w/]))?`, "g");
 const GOT = new RegExp(`\\(got ${NUM}\\)`, "g");
+// A range with the file's unit after it ("from 5 to 60000 t"), and a figure per wagon ("(got 0.5 t per wagon").
+const RANGE = new RegExp(`\\bfrom ${NUM} to ${NUM}(?: (?:mm|m|kN|t|km/h|‰|°C)(?![\\w/]))?`, "g");
+const PER_WAGON = new RegExp(`\\(got ${NUM} (?:t|m) per wagon`, "g");
 
 /**
  * The issue as the user should read it: bounds and the value given in the display units of the field,
@@ -66,7 +69,12 @@ export function localiseIssue(issue: FieldIssue, system: UnitSystem): FieldIssue
   const unit = f.fileUnit;
   // Rounded as the field shows it, without trailing zeros ("60 ‰", "7.87 in").
   const shown = (x: string) => `${formatNumber(toDisplay(m, Number(x), unit, system), decimalsOf(m, system)).replace(/(\.\d*?)0+$/, "$1").replace(/\.$/, "")} ${unitSymbol(m, system)}`;
-  const message = issue.message.replace(BOUND, (_all, word: string, x: string) => `${word} ${shown(x)}`).replace(GOT, (_all, x: string) => `(got ${shown(x)})`);
+  const bare = (x: string) => shown(x).slice(0, -(unitSymbol(m, system).length + 1));
+  const message = issue.message
+    .replace(RANGE, (_all, a: string, b: string) => `from ${bare(a)} to ${shown(b)}`)
+    .replace(PER_WAGON, (_all, x: string) => `(got ${shown(x)} per wagon`)
+    .replace(BOUND, (_all, word: string, x: string) => `${word} ${shown(x)}`)
+    .replace(GOT, (_all, x: string) => `(got ${shown(x)})`);
   return { ...issue, message };
 }
 

@@ -1,28 +1,105 @@
-/** Reading the user's files: JSON with clear errors, resolved against the profile library. */
-import { readFileSync } from "node:fs";
+/**
+ * Reading the user's files: JSON with clear errors, resolved against the profile library. Only regular
+ * files are read (a named pipe would wait for ever, a device never ends), and no error shows what a file
+ * holds: a path given by mistake may name a file that is nobody's business.
+ */
+import { closeSync, constants, fstatSync, openSync, readFileSync, readSync } from "node:fs";
+import { isatty } from "node:tty";
 import { builtinLibrary } from "../profiles/builtin.js";
-import { fileKind, parseJsonText, parseLocationNote, parseStartCase } from "../profiles/parse.js";
+import { fileKind, kindText, parseJsonText, parseLocationNote, parseStartCase } from "../profiles/parse.js";
 import { withLocations, type Library } from "../profiles/library.js";
+import { printable } from "../profiles/text.js";
+import { planWorkProblem } from "../core/planner/workCap.js";
 import type { StartCase } from "../core/train/types.js";
 import { InputError } from "./errors.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { readNotesText } from "../profiles/notes.js";
 import { applyOverrides, type CaseOverrides } from "./caseOverrides.js";
 
-/** Read a file as text; a missing or unreadable file is bad input. */
-export function readText(path: string): string {
+/** The largest file read, bytes: a bundle of every note of a large network is some tens of megabytes. */
+export const MAX_INPUT_BYTES = 256 * 1024 * 1024;
+
+/** What a file that is not a regular file is, in words. */
+function kindOfFile(st: ReturnType<typeof fstatSync>): string {
+  if (st.isDirectory()) return "a folder";
+  if (st.isFIFO()) return "a named pipe";
+  if (st.isCharacterDevice() || st.isBlockDevice()) return "a device";
+  if (st.isSocket()) return "a socket";
+  return "not a regular file";
+}
+
+/**
+ * A regular file's text, or why it cannot be read (in words that never quote the file). The file is opened
+ * without blocking and checked on the open handle, so a named pipe is refused, not waited on.
+ */
+export function readRegularFile(path: string): { ok: true; text: string } | { ok: false; why: string } {
+  let fd: number;
   try {
-    return readFileSync(path, "utf8");
+    fd = openSync(path, constants.O_RDONLY | (constants.O_NONBLOCK ?? 0));
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    throw new InputError(code === "ENOENT" ? `${path}: no such file` : `${path}: cannot be read (${code ?? (e as Error).message})`);
+    if (code === "ENOENT" || code === "ENOTDIR") return { ok: false, why: "no such file" };
+    if (code === "EACCES" || code === "EPERM") return { ok: false, why: "cannot be read (no permission)" };
+    return { ok: false, why: `cannot be read (${code ?? "error"})` };
   }
+  try {
+    const st = fstatSync(fd);
+    if (!st.isFile()) return { ok: false, why: `is ${kindOfFile(st)}, not a file: give a JSON or CSV file` };
+    if (st.size > MAX_INPUT_BYTES) return { ok: false, why: `is ${Math.round(st.size / 1048576)} MB, more than the ${MAX_INPUT_BYTES / 1048576} MB a file may have` };
+    const bytes = readFileSync(fd);
+    if (bytes.length > MAX_INPUT_BYTES) return { ok: false, why: `holds more than the ${MAX_INPUT_BYTES / 1048576} MB a file may have` };
+    return { ok: true, text: bytes.toString("utf8") };
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    return { ok: false, why: code === "EISDIR" ? "is a folder, not a file" : `cannot be read (${code ?? "error"})` };
+  } finally {
+    closeSync(fd);
+  }
+}
+
+/** A path as messages show it: anything unsafe in it escaped. */
+export function pathText(path: string): string {
+  return printable(path);
+}
+
+/**
+ * All of standard input as text, within the size a file may have. A device that never ends (standard
+ * input redirected from /dev/zero) is refused at once; a terminal is read until the end of input.
+ */
+export function readStandardInput(): string {
+  const st = fstatSync(0);
+  if ((st.isCharacterDevice() || st.isBlockDevice()) && !isatty(0)) throw new InputError("standard input: is a device, not a file");
+  const chunks: Buffer[] = [];
+  let total = 0;
+  const buf = Buffer.alloc(1 << 16);
+  for (;;) {
+    let n: number;
+    try {
+      n = readSync(0, buf, 0, buf.length, null);
+    } catch (e) {
+      if ((e as NodeJS.ErrnoException).code === "EAGAIN") continue;
+      if ((e as NodeJS.ErrnoException).code === "EOF") break;
+      throw new InputError(`standard input: cannot be read (${(e as NodeJS.ErrnoException).code ?? "error"})`);
+    }
+    if (n === 0) break;
+    total += n;
+    if (total > MAX_INPUT_BYTES) throw new InputError(`standard input: holds more than the ${MAX_INPUT_BYTES / 1048576} MB a file may have`);
+    chunks.push(Buffer.from(buf.subarray(0, n)));
+  }
+  return Buffer.concat(chunks).toString("utf8");
+}
+
+/** Read a file as text; a missing, unreadable or irregular file is bad input. */
+export function readText(path: string): string {
+  const r = readRegularFile(path);
+  if (!r.ok) throw new InputError(`${pathText(path)}: ${r.why}`);
+  return r.text;
 }
 
 /** Read and parse a JSON file. */
 export function readJson(path: string): unknown {
   const r = parseJsonText(readText(path));
-  if (!r.ok) throw new InputError(`${path}: not a valid file`, r.issues);
+  if (!r.ok) throw new InputError(`${pathText(path)}: not a valid file`, r.issues);
   return r.value;
 }
 
@@ -49,14 +126,15 @@ export function readStartCase(
   overrides: { location?: string; case?: CaseOverrides } = {},
   text?: string,
 ): { c: StartCase; raw: Record<string, unknown> } {
-  const name = path === "-" ? "standard input" : path;
+  const name = path === "-" ? "standard input" : pathText(path);
   let raw = text !== undefined ? parseJsonFrom(name, text) : readJson(path);
   const kind = fileKind(raw);
-  if (kind !== undefined && kind !== "taut/start-case@1") throw new InputError(`${name}: this is a ${kind} file; a start case (taut/start-case@1) is needed here`);
+  if (kind !== undefined && kind !== "taut/start-case@1") throw new InputError(`${name}: this is a ${kindText(kind)} file; a start case (taut/start-case@1) is needed here`);
   if (overrides.location !== undefined && raw && typeof raw === "object" && !Array.isArray(raw)) raw = { ...(raw as Record<string, unknown>), location: overrides.location };
   if (overrides.case) raw = applyOverrides(raw, overrides.case, (id) => lib.locations.get(id));
   const r = parseStartCase(raw, lib);
   if (!r.ok) throw new InputError(`${name}: the start case is not valid`, r.issues);
+  checkWork(r.value, `${name}: the start case is not valid`);
   return { c: r.value, raw: raw as Record<string, unknown> };
 }
 
@@ -64,7 +142,7 @@ export function readStartCase(
 export function readLocationNote(path: string): LocationNoteFile {
   const raw = readJson(path);
   const r = parseLocationNote(raw);
-  if (!r.ok) throw new InputError(`${path}: the location note is not valid`, r.issues);
+  if (!r.ok) throw new InputError(`${pathText(path)}: the location note is not valid`, r.issues);
   return r.value;
 }
 
@@ -77,13 +155,19 @@ export function readNotesFiles(paths: readonly string[]): LocationNoteFile[] {
   const from = new Map<string, string>();
   for (const path of paths) {
     const r = readNotesText(readText(path));
-    if (!r.ok) throw new InputError(`${path}: ${r.message.replace(/ Nothing was changed\.$/, "")}`, r.issues);
+    if (!r.ok) throw new InputError(`${pathText(path)}: ${r.message.replace(/ Nothing was changed\.$/, "")}`, r.issues);
     for (const n of r.notes) {
       const earlier = from.get(n.id);
-      if (earlier !== undefined) throw new InputError(`${path}: the location note "${n.id}" is also in ${earlier}; give each note once`);
+      if (earlier !== undefined) throw new InputError(`${pathText(path)}: the location note "${n.id}" is also in ${pathText(earlier)}; give each note once`);
       from.set(n.id, path);
       notes.push(n);
     }
   }
   return notes;
+}
+
+/** Refuse a case whose plan would take more work than a plan may (src/core/planner/workCap.ts). */
+export function checkWork(c: StartCase, headline: string): void {
+  const problem = planWorkProblem(c);
+  if (problem) throw new InputError(headline, [{ path: "train", message: problem }]);
 }

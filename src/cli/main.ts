@@ -6,6 +6,8 @@ import { readFileSync } from "node:fs";
 import { parseArgs } from "node:util";
 import type { Command, Output } from "./command.js";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "./errors.js";
+import { printable, quoted, terminalSafe } from "../profiles/text.js";
+import { readStandardInput } from "./files.js";
 import { planCommand } from "./commands/plan.js";
 import { simulateCommand } from "./commands/simulate.js";
 import { checkCommand } from "./commands/check.js";
@@ -42,7 +44,7 @@ function topHelp(): string {
 const stdio: Output = {
   out: (t) => process.stdout.write(t.endsWith("\n") ? t : `${t}\n`),
   err: (t) => process.stderr.write(t.endsWith("\n") ? t : `${t}\n`),
-  stdin: () => readFileSync(0, "utf8"),
+  stdin: () => readStandardInput(),
 };
 
 /** The version in the package's own package.json (the one place it is written). */
@@ -51,8 +53,17 @@ export function packageVersion(): string {
   return typeof pkg.version === "string" ? pkg.version : "unknown";
 }
 
+/**
+ * Everything the command line writes goes through `terminalSafe`: whatever a file or an argument put in a
+ * label, an id or a message, no control character or bidirectional override reaches the terminal raw.
+ */
+function safeOutput(io: Output): Output {
+  return { ...io, out: (t) => io.out(terminalSafe(t)), err: (t) => io.err(terminalSafe(t)) };
+}
+
 /** Run the command line; returns the exit code. */
-export async function main(argv: string[], io: Output = stdio): Promise<number> {
+export async function main(argv: string[], rawIo: Output = stdio): Promise<number> {
+  const io = safeOutput(rawIo);
   const [name, ...rest] = argv;
   if (name === undefined || name === "--help" || name === "-h" || name === "help") {
     io.out(topHelp());
@@ -64,7 +75,7 @@ export async function main(argv: string[], io: Output = stdio): Promise<number> 
   }
   const cmd = COMMANDS.find((c) => c.name === name);
   if (!cmd) {
-    io.err(`taut: unknown command "${name}". Commands: ${COMMANDS.map((c) => c.name).join(", ")}. See taut --help.`);
+    io.err(`taut: unknown command ${quoted(name)}. Commands: ${COMMANDS.map((c) => c.name).join(", ")}. See taut --help.`);
     return EXIT_BAD_INPUT;
   }
   try {
@@ -72,7 +83,7 @@ export async function main(argv: string[], io: Output = stdio): Promise<number> 
     try {
       parsed = parseArgs({ args: rest, options: { ...cmd.options, help: { type: "boolean", short: "h" } }, allowPositionals: true, strict: true });
     } catch (e) {
-      throw new InputError(`${(e as Error).message.replace(/\. To specify a positional.*$/s, "")}\n  usage: ${cmd.usage}`);
+      throw new InputError(`${printable((e as Error).message.replace(/\. To specify a positional.*$/s, ""))}\n  usage: ${cmd.usage}`);
     }
     if (parsed.values.help) {
       io.out(`Usage: ${cmd.usage}\n\n${cmd.help}`);
@@ -84,7 +95,7 @@ export async function main(argv: string[], io: Output = stdio): Promise<number> 
       io.err(`taut ${cmd.name}: ${e.describe()}`);
       return EXIT_BAD_INPUT;
     }
-    io.err(`taut ${cmd.name}: internal error: ${(e as Error).message}\nPlease report this with the input file.`);
+    io.err(`taut ${cmd.name}: internal error: ${printable((e as Error).message)}\nPlease report this with the input file.`);
     if (process.env.TAUT_DEBUG) io.err(String((e as Error).stack));
     return EXIT_INTERNAL;
   }

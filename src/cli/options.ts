@@ -5,12 +5,13 @@ import type { CheckProgress } from "./batch/checkDepartures.js";
 import { defaultPoolSize } from "./batch/pool.js";
 import type { Output } from "./command.js";
 import { InputError } from "./errors.js";
+import { quoted } from "../profiles/text.js";
 
 /** The locomotive profile named by --helper, or undefined for the lead unit's. */
 export function helperSpec(lib: Library, id: string | undefined): LocomotiveSpec | undefined {
   if (id === undefined) return undefined;
   const found = lib.locomotives.get(id);
-  if (!found) throw new InputError(`--helper: no locomotive profile "${id}" (known: ${[...lib.locomotives.keys()].join(", ")})`);
+  if (!found) throw new InputError(`--helper: no locomotive profile ${quoted(id)} (known: ${[...lib.locomotives.keys()].join(", ")})`);
   return found.spec;
 }
 
@@ -18,7 +19,7 @@ export function helperSpec(lib: Library, id: string | undefined): LocomotiveSpec
 export function jobsOption(v: string | undefined): number {
   if (v === undefined) return defaultPoolSize();
   const n = Number(v);
-  if (!Number.isInteger(n) || n < 1 || n > 64) throw new InputError(`--jobs: must be a whole number from 1 to 64 (got "${v}")`);
+  if (!Number.isInteger(n) || n < 1 || n > 64) throw new InputError(`--jobs: must be a whole number from 1 to 64 (got ${quoted(v)})`);
   return n;
 }
 

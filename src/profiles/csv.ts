@@ -58,9 +58,22 @@ export function parseCsv(text: string): CsvRecord[] {
   return out;
 }
 
-/** A CSV field, quoted when needed (RFC 4180). */
+/**
+ * Text a spreadsheet would read as a formula: it starts with =, +, -, @, a tab or a carriage return
+ * (OWASP, "CSV Injection", the characters its guidance lists).
+ */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+/**
+ * A CSV field, quoted when needed (RFC 4180). Text that a spreadsheet would take for a formula is
+ * neutralised as the OWASP guidance advises: an apostrophe before it, inside a quoted field, so the cell
+ * shows the text and runs nothing. Numbers are written as numbers (a negative number is not text).
+ */
 export function csvField(v: unknown): string {
-  const s = v === null || v === undefined ? "" : String(v);
+  if (v === null || v === undefined) return "";
+  if (typeof v === "number" || typeof v === "boolean") return String(v);
+  const s = String(v);
+  if (FORMULA_START.test(s)) return `"'${s.replace(/"/g, '""')}"`;
   return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
 

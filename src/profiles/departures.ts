@@ -11,7 +11,8 @@ import type { StartCase } from "../core/train/types.js";
 import { parseCsv } from "./csv.js";
 import { formatIssues, type FieldIssue } from "./issues.js";
 import type { Library } from "./library.js";
-import { fileKind, parseJsonText, parseStartCase } from "./parse.js";
+import { fileKind, kindText, parseJsonText, parseStartCase } from "./parse.js";
+import { printable, quoted } from "./text.js";
 
 export interface Departure {
   /** The row's id (from the file, or made from its place when it has none). */
@@ -47,7 +48,7 @@ export function departuresFromJson(text: string, lib: Library): DeparturesRead {
       const rawId = item && typeof item === "object" && typeof (item as { id?: unknown }).id === "string" ? (item as { id: string }).id : undefined;
       const base = { id: rawId ?? `[${index}]`, where: `[${index}]`, index };
       const r = parseStartCase(item, lib);
-      if (!r.ok) return { ...base, error: `[${index}]${rawId ? ` (${rawId})` : ""}: ${oneLine(r.issues)}` };
+      if (!r.ok) return { ...base, error: `[${index}]${rawId ? ` (${printable(rawId)})` : ""}: ${oneLine(r.issues)}` };
       return { ...base, case: r.value, file: item };
     }),
   };
@@ -63,7 +64,7 @@ export function caseFileJson(text: string): unknown {
   const parsed = parseJsonText(text);
   if (!parsed.ok) return new Error(oneLine(parsed.issues));
   const kind = fileKind(parsed.value);
-  if (kind !== undefined && kind !== "taut/start-case@1") return new Error(`this is a ${kind} file; a start case (taut/start-case@1) is needed`);
+  if (kind !== undefined && kind !== "taut/start-case@1") return new Error(`this is a ${kindText(kind)} file; a start case (taut/start-case@1) is needed`);
   return parsed.value;
 }
 
@@ -81,7 +82,7 @@ export function departuresFromCsv(text: string, readCase: (casePath: string) => 
   const header = records.shift();
   if (!header) return { ok: false, message: 'the file is empty (a header line "id,case,rail,sand" is needed)' };
   const col = new Map(header.fields.map((h, k) => [h.trim().toLowerCase(), k]));
-  if (!col.has("case")) return { ok: false, message: `line ${header.line}: the header must name the columns id,case,rail,sand (no "case" column in "${header.fields.join(",")}")` };
+  if (!col.has("case")) return { ok: false, message: `line ${header.line}: the header must name the columns id,case,rail,sand (no "case" column in ${quoted(header.fields.join(","))})` };
   const files = new Map<string, unknown>();
   const cell = (fields: string[], name: string): string => {
     const k = col.get(name);
@@ -96,13 +97,14 @@ export function departuresFromCsv(text: string, readCase: (casePath: string) => 
       const casePath = cell(fields, "case");
       if (casePath === "") return fail("case: a start-case file is needed");
       const rail = cell(fields, "rail").toLowerCase();
-      if (rail !== "" && !(RAIL_CONDITIONS as readonly string[]).includes(rail)) return fail(`rail: must be one of ${RAIL_CONDITIONS.join(", ")} (got "${rail}")`);
+      if (rail !== "" && !(RAIL_CONDITIONS as readonly string[]).includes(rail)) return fail(`rail: must be one of ${RAIL_CONDITIONS.join(", ")} (got ${quoted(rail)})`);
       const sandWord = cell(fields, "sand").toLowerCase();
-      if (sandWord !== "" && SAND_WORDS[sandWord] === undefined) return fail(`sand: must be yes or no (true/false, 1/0) (got "${sandWord}")`);
+      if (sandWord !== "" && SAND_WORDS[sandWord] === undefined) return fail(`sand: must be yes or no (true/false, 1/0) (got ${quoted(sandWord)})`);
       const location = cell(fields, "location");
       if (!files.has(casePath)) files.set(casePath, readCase(casePath));
       const raw = files.get(casePath);
-      if (raw instanceof Error) return fail(`${casePath}: ${raw.message}`);
+      const shownPath = printable(casePath);
+      if (raw instanceof Error) return fail(`${shownPath}: ${raw.message}`);
       const data = (raw && typeof raw === "object" && !Array.isArray(raw) ? (JSON.parse(JSON.stringify(raw)) as unknown) : {}) as Record<string, unknown>;
       const conditions = (data.conditions && typeof data.conditions === "object" ? data.conditions : {}) as Record<string, unknown>;
       if (rail !== "") conditions.rail = rail as RailCondition;
@@ -110,7 +112,18 @@ export function departuresFromCsv(text: string, readCase: (casePath: string) => 
       data.conditions = conditions;
       if (location !== "") data.location = location;
       const r = parseStartCase(data, lib);
-      if (!r.ok) return fail(`${casePath}: ${oneLine(r.issues)}`);
+      if (!r.ok) {
+        // A value the row's own cells put in is the CSV line's fault, not the case file's.
+        const fromCell = r.issues.filter((i) => (location !== "" && i.path.startsWith("location")) || (rail !== "" && i.path === "conditions.rail") || (sandWord !== "" && i.path === "conditions.sand"));
+        if (fromCell.length > 0) {
+          const said = (i: FieldIssue) =>
+            i.path.startsWith("location")
+              ? `location ${quoted(location)}: ${i.path === "location" ? "" : `${i.path.slice("location.".length)} `}${i.message}`
+              : `${i.path.slice("conditions.".length)}: ${i.message}`;
+          return fail(printable(fromCell.map(said).join("; ")));
+        }
+        return fail(`${shownPath}: ${oneLine(r.issues)}`);
+      }
       return { ...base, case: r.value, file: data };
     }),
   };

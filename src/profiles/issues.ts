@@ -2,6 +2,7 @@
  * Validation results as data: every problem names the field (a dotted path) and the rule broken,
  * in words a driver or a script author can act on. Used by the CLI (exit 2) and the app (shown at the field).
  */
+import { printable, quoted } from "./text.js";
 
 export interface FieldIssue {
   /** Dotted path of the field, e.g. "train.trailingMass_t" or "locomotives[0].profile"; "" for the whole file. */
@@ -29,9 +30,17 @@ export function prefixIssues(prefix: string, issues: FieldIssue[]): FieldIssue[]
   return issues.map((i) => ({ ...i, path: i.path === "" ? prefix : i.path.startsWith("[") ? `${prefix}${i.path}` : `${prefix}.${i.path}` }));
 }
 
-/** One line per issue: `path: message`. */
-export function formatIssues(issues: readonly FieldIssue[]): string {
-  return issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join("\n");
+/** At most this many issues are listed; the rest are counted ("…and 30 more"). */
+export const MAX_LISTED_ISSUES = 12;
+
+/**
+ * One line per issue, `path: message`, at most `max` of them and then how many more. Each line is made
+ * safe to print: a path or message that carries text from the file cannot break the line or move a cursor.
+ */
+export function formatIssues(issues: readonly FieldIssue[], max = MAX_LISTED_ISSUES): string {
+  const lines = issues.slice(0, max).map((i) => printable(i.path ? `${i.path}: ${i.message}` : i.message));
+  if (issues.length > max) lines.push(`…and ${issues.length - max} more`);
+  return lines.join("\n");
 }
 
 /** The subset of a zod issue this module reads (zod and zod/mini share it). */
@@ -83,7 +92,7 @@ function bestBranch(branches: ReadonlyArray<ReadonlyArray<RawIssue>>): ReadonlyA
 
 function shown(v: unknown): string {
   if (v === undefined) return "nothing";
-  if (typeof v === "string") return JSON.stringify(v.length > 40 ? `${v.slice(0, 40)}…` : v);
+  if (typeof v === "string") return quoted(v, 40);
   if (typeof v === "number" || typeof v === "boolean" || v === null) return String(v);
   if (Array.isArray(v)) return "a list";
   return "an object";
@@ -96,10 +105,12 @@ function describe(i: RawIssue): string {
       if ("input" in i && i.input === undefined) return `is required (${article(i.expected)})`;
       return `must be ${article(i.expected)}${got}`;
     case "too_small":
+      if (custom(i)) return `${i.message}${got}`;
       if (i.origin === "array") return `must have at least ${String(i.minimum)} item${i.minimum === 1 ? "" : "s"}`;
       if (i.origin === "string") return i.minimum === 1 ? "must not be empty" : `must be at least ${String(i.minimum)} characters`;
       return `must be ${i.inclusive ? "at least" : "greater than"} ${String(i.minimum)}${got}`;
     case "too_big":
+      if (custom(i)) return `${i.message}${got}`;
       if (i.origin === "array") return `must have at most ${String(i.maximum)} items`;
       if (i.origin === "string") return `must be at most ${String(i.maximum)} characters`;
       return `must be ${i.inclusive ? "at most" : "less than"} ${String(i.maximum)}${got}`;
@@ -109,12 +120,21 @@ function describe(i: RawIssue): string {
     case "not_multiple_of":
       return `must be a whole multiple of ${String(i.divisor)}${got}`;
     case "invalid_format":
-      return `must match the ${i.format ?? "expected"} format${got}`;
+      if (custom(i)) return `${i.message}${got}`;
+      if (i.format === "regex") return `is not in the expected form${got}`;
+      return `must be ${article(i.format)}${got}`;
     case "unrecognized_keys":
       return `has unknown field${(i.keys ?? []).length === 1 ? "" : "s"} ${(i.keys ?? []).join(", ")}`;
     default:
+      // Our own rules ("must be from 5 to 150 t") say what is wrong; the value given is added when they do not quote it.
+      if (custom(i)) return i.message.includes("(got ") || !(typeof i.input === "number" || typeof i.input === "string") ? i.message : `${i.message}${got}`;
       return i.message && i.message !== "Invalid input" ? i.message : `is not valid${got}`;
   }
+}
+
+/** A message written for the rule in schemas.ts (they all start "must"), not zod's default. */
+function custom(i: RawIssue): boolean {
+  return typeof i.message === "string" && i.message.startsWith("must");
 }
 
 function article(expected: string | undefined): string {
@@ -129,6 +149,8 @@ function article(expected: string | undefined): string {
       return "true or false";
     case "array":
       return "a list";
+    case "datetime":
+      return "a date and time";
     case "object":
       return "an object";
     default:

@@ -5,7 +5,8 @@
  */
 import * as z from "zod/mini";
 import { fromZodIssues, type FieldIssue, type RawIssue } from "./issues.js";
-import { fileKind, parseLocationNote, parseJsonText } from "./parse.js";
+import { fileKind, kindText, parseLocationNote, parseJsonText } from "./parse.js";
+import { quoted } from "./text.js";
 import { locationNoteSchema, type LocationNoteFile } from "./schemas.js";
 
 export const NOTES_BUNDLE_SCHEMA = "taut/notes-bundle@1";
@@ -43,7 +44,7 @@ export function parseNotesBundle(data: unknown): { ok: true; value: NotesBundleF
  * another kind, and a bundle with any bad note are all refused with a headline and field issues.
  */
 export function readNotesText(text: string): NotesFileResult {
-  if (text.trim() === "") return { ok: false, message: "The file is empty.", issues: [] };
+  if (text.replace(/^\ufeff/, "").trim() === "") return { ok: false, message: "The file is empty.", issues: [] };
   const json = parseJsonText(text);
   if (!json.ok) {
     return {
@@ -65,7 +66,7 @@ export function readNotesData(data: unknown): NotesFileResult {
   }
   if (kind === LOCATION_NOTE_SCHEMA) {
     const r = parseLocationNote(data);
-    if (!r.ok) return { ok: false, message: `The location note "${nameOf(data) ?? "without a name"}" is not valid. Nothing was changed.`, issues: r.issues };
+    if (!r.ok) return { ok: false, message: `The location note ${nameText(data)} is not valid. Nothing was changed.`, issues: r.issues };
     return { ok: true, kind: "note", notes: [r.value] };
   }
   if (kind === undefined) {
@@ -77,8 +78,8 @@ export function readNotesData(data: unknown): NotesFileResult {
   }
   return {
     ok: false,
-    message: `This is a ${kind} file, not location notes (${NOTES_BUNDLE_SCHEMA} or ${LOCATION_NOTE_SCHEMA}). Nothing was changed.`,
-    issues: [{ path: "schema", message: `must be "${NOTES_BUNDLE_SCHEMA}" or "${LOCATION_NOTE_SCHEMA}" (got "${kind}")` }],
+    message: `This is a ${kindText(kind)} file, not location notes (${NOTES_BUNDLE_SCHEMA} or ${LOCATION_NOTE_SCHEMA}). Nothing was changed.`,
+    issues: [{ path: "schema", message: `must be "${NOTES_BUNDLE_SCHEMA}" or "${LOCATION_NOTE_SCHEMA}" (got ${kindText(kind)})` }],
   };
 }
 
@@ -96,9 +97,15 @@ function bundleHeadline(issues: readonly FieldIssue[], data: unknown): string {
     .sort((a, b) => a - b)
     .map((k) => {
       const name = Array.isArray(notes) ? nameOf(notes[k]) : undefined;
-      return `note ${k + 1}${name ? ` ("${name}")` : ""}`;
+      return `note ${k + 1}${name ? ` (${quoted(name)})` : ""}`;
     });
   return `The bundle holds ${count} note${count === 1 ? "" : "s"}; ${named.join(", ")} ${bad.size === 1 ? "is" : "are"} not valid, so none was imported.`;
+}
+
+/** A note's name for a message, quoted safely. */
+function nameText(x: unknown): string {
+  const name = nameOf(x);
+  return name === undefined ? "without a name" : quoted(name);
 }
 
 function nameOf(x: unknown): string | undefined {

@@ -8,6 +8,8 @@ import type { WagonSpec } from "../core/physics/types.js";
 import { kmhToMps, kNToN, tonnesToKg } from "../core/physics/units.js";
 import { uniformTrack } from "../core/physics/track.js";
 import { genericWagon, locationFromNote, locomotiveFromFile } from "./convert.js";
+import { jsonSyntaxProblem } from "./jsonSyntax.js";
+import { quoted } from "./text.js";
 import { fail, fromZodIssues, ok, type FieldIssue, type ParseResult, type RawIssue } from "./issues.js";
 import type { Library } from "./library.js";
 import {
@@ -32,13 +34,25 @@ export function validate<T>(schema: SafeParser<T>, data: unknown): ParseResult<T
   return fail(fromZodIssues(r.error.issues as ReadonlyArray<RawIssue>));
 }
 
-/** Parse JSON text, reporting a syntax error as an issue rather than throwing. */
+/**
+ * Parse JSON text, reporting a syntax error as an issue rather than throwing. A byte-order mark before the
+ * JSON is skipped (editors on some systems write one). The message says where and what, never the text
+ * itself: the file may not be the one the user meant.
+ */
 export function parseJsonText(text: string): ParseResult<unknown> {
+  const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   try {
-    return ok(JSON.parse(text) as unknown);
-  } catch (e) {
-    return fail([{ path: "", message: `is not valid JSON: ${(e as Error).message}` }]);
+    return ok(JSON.parse(body) as unknown);
+  } catch {
+    if (body.trim() === "") return fail([{ path: "", message: "is not valid JSON: the file is empty" }]);
+    const p = jsonSyntaxProblem(body);
+    return fail([{ path: "", message: p ? `is not valid JSON: ${p.what} (line ${p.line}, column ${p.column})` : "is not valid JSON" }]);
   }
+}
+
+/** A file kind for a message: quoted, with anything unsafe in it escaped. */
+export function kindText(kind: string): string {
+  return quoted(kind, 60);
 }
 
 /** Which kind of Taut file this is, from its `schema` field. */

@@ -1,16 +1,46 @@
 /**
  * File schemas (zod/mini, so the browser bundle stays small). Field names carry their units; values
  * are converted to SI in `convert.ts`. Shapes are a stable contract (INTERFACE.md): add, never rename.
+ *
+ * Every number has a physical range, said with its unit in the message: a value outside what any train,
+ * locomotive or track has is a typing slip, and left through it makes the dynamics run for ever (a wagon
+ * of a gram shrinks the integrator's step a millionfold) or overflow. The ranges are wide on purpose:
+ * they hold every train the trade runs and refuse only what cannot be one (each range's reasoning is
+ * beside it; "common practice" where no single source gives it).
  */
 import * as z from "zod/mini";
 import { RAIL_CONDITIONS } from "../core/physics/types.js";
 
-const finite = () => z.number();
-const positive = () => z.number().check(z.gt(0));
-const nonNegative = () => z.number().check(z.gte(0));
 const fraction = () => z.number().check(z.gt(0), z.lte(1));
-const id = () => z.string().check(z.minLength(1), z.maxLength(80), z.regex(/^[a-z0-9][a-z0-9._-]*$/, { message: "must be lower-case letters, digits, '.', '_' or '-'" }));
+
+/** A number from `min` to `max` (both allowed); the message gives the range and its unit. */
+export const within = (min: number, max: number, unit = "") =>
+  z.number().check(z.refine((x) => x >= min && x <= max, { message: `must be from ${min} to ${max}${unit ? ` ${unit}` : ""}` }));
+
+/** What an id may hold, in words (the same rule for every kind of file). */
+export const ID_RULE = "must be lower-case letters, digits, hyphens, dots or underscores, starting with a letter or digit";
+const id = () => z.string().check(z.minLength(1), z.maxLength(80), z.regex(/^[a-z0-9][a-z0-9._-]*$/, { message: ID_RULE }));
 const text = (max = 200) => z.string().check(z.minLength(1), z.maxLength(max));
+
+/** Chainages and distances along the line: within 1000 km of the profile's origin (common practice: a line's kilometre posts). */
+const chainage = () => within(-1_000_000, 1_000_000, "m");
+/** Clear track ahead worth counting for a start: up to 100 km. */
+const clearAhead = () => within(0, 100_000, "m");
+
+/**
+ * One wagon's gross mass, t: an empty two-axle wagon is near 8 t, the heaviest four-axle ore wagons carry
+ * 40 t per axle (common practice). 5–150 t takes in both with room to spare.
+ */
+export const WAGON_MASS_T = { min: 5, max: 150 } as const;
+/** One wagon's length over couplers, m: a short two-axle wagon is near 7 m, long car carriers some 35 m (common practice). */
+export const WAGON_LENGTH_M = { min: 5, max: 40 } as const;
+/** The most wagons a start case may have (the longest trains run to some 300). */
+export const MAX_WAGONS = 400;
+/** The most segments a track profile may have: one every 50 m over 100 km. */
+export const MAX_SEGMENTS = 2000;
+
+/** Three significant figures, for a figure quoted back in a message. */
+const roundTo3 = (x: number): number => Number(x.toPrecision(3));
 
 export const railConditionSchema = z.enum(RAIL_CONDITIONS);
 
@@ -34,23 +64,25 @@ export const locomotiveFileSchema = z
     schema: z.literal("taut/locomotive@1"),
     id: id(),
     label: text(),
-    mass_t: positive(),
-    adhesiveMass_t: positive(),
-    length_m: positive(),
+    // One unit: a light shunter of some 10 t to the heaviest eight-axle units (common practice).
+    mass_t: within(10, 300, "t"),
+    adhesiveMass_t: within(10, 300, "t"),
+    length_m: within(5, 50, "m"),
     axles: z.optional(z.int().check(z.gte(2), z.lte(16))),
-    railPower_kW: positive(),
+    railPower_kW: within(50, 20_000, "kW"),
     notches: z.int().check(z.gte(1), z.lte(32)),
     notchPower: notchFractions(),
     notchStartingEffort: notchFractions(),
-    startingTractiveEffort_kN: positive(),
-    continuousTractiveEffort_kN: positive(),
-    continuousSpeed_kmh: positive(),
-    maxSpeed_kmh: positive(),
+    // Up to 40 t per axle at μ 0.5 on sixteen axles is some 3000 kN (common practice: no unit comes near).
+    startingTractiveEffort_kN: within(10, 3000, "kN"),
+    continuousTractiveEffort_kN: within(5, 3000, "kN"),
+    continuousSpeed_kmh: within(1, 200, "km/h"),
+    maxSpeed_kmh: within(10, 400, "km/h"),
     sanders: z.boolean(),
     adhesionUtilisation: z.optional(fraction()),
     rotatingMassFraction: z.optional(z.number().check(z.gte(0), z.lte(1))),
-    frontalArea_m2: z.optional(positive()),
-    startingResistance_permille: z.optional(nonNegative()),
+    frontalArea_m2: z.optional(within(1, 30, "m²")),
+    startingResistance_permille: z.optional(within(0, 30, "‰")),
   })
   .check(
     z.refine((l) => l.adhesiveMass_t <= l.mass_t, { message: "must not exceed mass_t", path: ["adhesiveMass_t"] }),
@@ -69,17 +101,19 @@ export const wagonFileSchema = z.object({
   id: id(),
   label: text(),
   axles: z.int().check(z.gte(2), z.lte(12)),
-  length_m: positive(),
-  tare_t: positive(),
-  maxGross_t: positive(),
-  frontalArea_m2: positive(),
+  length_m: within(WAGON_LENGTH_M.min, WAGON_LENGTH_M.max, "m"),
+  tare_t: within(2, WAGON_MASS_T.max, "t"),
+  maxGross_t: within(WAGON_MASS_T.min, WAGON_MASS_T.max, "t"),
+  frontalArea_m2: within(1, 30, "m²"),
   coupling: z.enum(["knuckle", "screw"]),
-  defaultSlack_mm: nonNegative(),
+  defaultSlack_mm: within(0, 200, "mm"),
   rotatingMassFraction: z.optional(z.number().check(z.gte(0), z.lte(1))),
-  davisB: z.optional(nonNegative()),
-  davisK: z.optional(nonNegative()),
-  startingResistance_permille: z.optional(nonNegative()),
-});
+  // Davis b (lb per short ton per mph) and K (lb per ft² per mph²): the published values are near 0.045 and
+  // 0.0005–0.0024 (W. J. Davis Jr., General Electric Review 29, 1926 [M]); ten times that is the bound.
+  davisB: z.optional(within(0, 0.5)),
+  davisK: z.optional(within(0, 0.025)),
+  startingResistance_permille: z.optional(within(0, 30, "‰")),
+}).check(z.refine((w) => w.tare_t <= w.maxGross_t, { message: "must not exceed maxGross_t", path: ["tare_t"] }));
 export type WagonFile = z.infer<typeof wagonFileSchema>;
 
 // ---------------------------------------------------------------- rail conditions
@@ -109,8 +143,8 @@ export type RailConditionsFile = z.infer<typeof railConditionsFileSchema>;
 
 // ---------------------------------------------------------------- track profile and location note
 export const segmentSchema = z.object({
-  from_m: finite(),
-  length_m: positive(),
+  from_m: chainage(),
+  length_m: within(1, 100_000, "m"),
   gradient_permille: gradient(),
   curveRadius_m: curveRadius(),
 });
@@ -120,6 +154,7 @@ export type SegmentFile = z.infer<typeof segmentSchema>;
 const contiguousSegments = () =>
   z.array(segmentSchema).check(
     z.minLength(1),
+    z.maxLength(MAX_SEGMENTS),
     z.superRefine((segs, ctx) => {
       for (let k = 1; k < segs.length; k++) {
         const prev = segs[k - 1]!;
@@ -142,18 +177,18 @@ const round = (x: number): number => Math.round(x * 100) / 100;
 export const uniformLocationSchema = z.object({
   gradient_permille: gradient(),
   curveRadius_m: curveRadius(),
-  clearAhead_m: nonNegative(),
+  clearAhead_m: clearAhead(),
 });
 
 export const profileLocationSchema = z.object({
   segments: contiguousSegments(),
-  frontAt_m: finite(),
-  clearAhead_m: nonNegative(),
+  frontAt_m: chainage(),
+  clearAhead_m: clearAhead(),
 });
 
 export const hazardSchema = z.object({
   kind: z.enum(["points", "level-crossing", "tunnel", "signal", "bridge", "platform", "other"]),
-  at_m: z.optional(finite()),
+  at_m: z.optional(chainage()),
   note: z.optional(z.string().check(z.maxLength(400))),
 });
 
@@ -192,13 +227,13 @@ export const locationNoteSchema = z.object({
   standing: z.optional(z.string().check(z.maxLength(400))),
   referenceTrain: z.optional(referenceTrainSchema),
   segments: contiguousSegments(),
-  frontAt_m: finite(),
-  clearAhead_m: nonNegative(),
-  speedLimit_kmh: z.optional(positive()),
-  hazards: z._default(z.array(hazardSchema), []),
-  seasons: z._default(z.array(seasonSchema), []),
+  frontAt_m: chainage(),
+  clearAhead_m: clearAhead(),
+  speedLimit_kmh: z.optional(within(5, 400, "km/h")),
+  hazards: z._default(z.array(hazardSchema).check(z.maxLength(500)), []),
+  seasons: z._default(z.array(seasonSchema).check(z.maxLength(40)), []),
   practice: z._default(z.string().check(z.maxLength(4000)), ""),
-  revisions: z.array(revisionSchema).check(z.minLength(1)),
+  revisions: z.array(revisionSchema).check(z.minLength(1), z.maxLength(5000)),
 });
 export type LocationNoteFile = z.infer<typeof locationNoteSchema>;
 
@@ -215,16 +250,36 @@ export const locoEntrySchema = z.object({
 });
 
 export const trainSchema = z.object({
-  trailingMass_t: positive(),
-  wagons: z.int().check(z.gte(1), z.lte(400)),
-  length_m: positive(),
-  couplerSlack_mm: z.number().check(z.gte(0), z.lte(200)),
+  trailingMass_t: within(WAGON_MASS_T.min, MAX_WAGONS * WAGON_MASS_T.max, "t"),
+  wagons: z.int().check(z.gte(1), z.lte(MAX_WAGONS)),
+  length_m: within(WAGON_LENGTH_M.min, MAX_WAGONS * WAGON_LENGTH_M.max, "m"),
+  couplerSlack_mm: within(0, 200, "mm"),
   bearing: z.enum(["roller", "plain"]),
-  couplerLimit_kN: positive(),
+  // Working limits run from some 300 kN (old screw couplings) to some 2000 kN (heavy-haul knuckles);
+  // the bound leaves room either side (common practice).
+  couplerLimit_kN: within(100, 5000, "kN"),
   coupling: z.optional(z.enum(["knuckle", "screw"])),
   wagonType: z.optional(id()),
   slackState: z._default(z.enum(["bunched", "stretched", "from-profile"]), "from-profile"),
-});
+}).check(
+  // Per wagon: the whole train's mass and length are checked against what one wagon can be.
+  z.superRefine((t, ctx) => {
+    const perWagon = (what: "trailingMass_t" | "length_m", r: { min: number; max: number }, unit: string) => {
+      // Only when the whole-train figure is itself in range (otherwise that is the one message).
+      if (!(t[what] >= r.min && t[what] <= MAX_WAGONS * r.max)) return;
+      const x = t[what] / t.wagons;
+      if (x >= r.min && x <= r.max) return;
+      ctx.issues.push({
+        code: "custom",
+        input: t[what],
+        path: [what],
+        message: `must give from ${r.min} to ${r.max} ${unit} per wagon (got ${roundTo3(x)} ${unit} per wagon over ${t.wagons} wagon${t.wagons === 1 ? "" : "s"})`,
+      });
+    };
+    perWagon("trailingMass_t", WAGON_MASS_T, "t");
+    perWagon("length_m", WAGON_LENGTH_M, "m");
+  }),
+);
 export type TrainFile = z.infer<typeof trainSchema>;
 
 export const conditionsSchema = z.object({

@@ -4,6 +4,7 @@
  * structural check, then the work its kind asks for (src/worker/jobs.ts, the planner for `plan`).
  */
 import { planStart } from "../core/planner/index.js";
+import { planWorkProblem } from "../core/planner/workCap.js";
 import type { PlanOptions, PlanResult } from "../core/planner/types.js";
 import type { StartCase } from "../core/train/types.js";
 import { runAssistance, runCheck, runConditionMargins, runLoadTable } from "./jobs.js";
@@ -63,6 +64,10 @@ export function createPlannerHandler(post: Post, deps: HandlerDeps = {}): (msg: 
   function run<K extends RequestKind>(req: RequestOf<K>): void {
     post({ type: "progress", id: req.id, fraction: 0 }, []);
     const issues = [...startCaseIssues(req.startCase), ...requestOptionIssues(req as WorkRequest)];
+    // A well-formed case may still ask for more work than a plan may take (a wagon of a few kilograms):
+    // refused with the reason, as the command line refuses it, rather than run for hours.
+    const work = issues.length === 0 ? planWorkProblem(req.startCase) : undefined;
+    if (work) issues.push({ path: "train", message: work });
     if (issues.length > 0) {
       post({ type: "error", id: req.id, kind: "invalid", issues, message: "The start case is malformed." }, []);
       return;

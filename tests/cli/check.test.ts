@@ -3,7 +3,7 @@
  * worker threads. A broken row is named by its line (CSV) or index (JSON) and the others are still answered;
  * every answered row agrees with what the planner says of the same case on this thread.
  */
-import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { copyFileSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
@@ -57,15 +57,18 @@ describe("a CSV with broken rows", () => {
     "day.csv",
     [
       "id,case,rail,sand",
-      `g-dry,${cases}/demo-goods-cinderfield.json,dry,no`,
+      "g-dry,cases/goods.json,dry,no",
       "g-missing,no-such-case.json,dry,no",
-      `g-icy,${cases}/demo-goods-cinderfield.json,icy,no`,
-      `g-sand,${cases}/demo-goods-cinderfield.json,wet,maybe`,
-      `g-wet,${cases}/demo-goods-cinderfield.json,wet,yes`,
+      "g-icy,cases/goods.json,icy,no",
+      "g-sand,cases/goods.json,wet,maybe",
+      "g-wet,cases/goods.json,wet,yes",
       "g-bad,bad-case.json,,",
-      `g-dry-again,${cases}/demo-goods-cinderfield.json,dry,no`,
+      "g-dry-again,./cases/goods.json,dry,no",
     ].join("\n"),
   );
+  // Case files are read from the CSV's folder and below (tests/cli/hostile.test.ts checks the refusal).
+  mkdirSync(join(dir, "cases"), { recursive: true });
+  copyFileSync(`${cases}/demo-goods-cinderfield.json`, join(dir, "cases", "goods.json"));
   file("bad-case.json", JSON.stringify({ ...goods, train: { ...(goods.train as object), trailingMass_t: -5 } }));
 
   it("answers the good rows, names each broken line, exits 2", async () => {
@@ -78,7 +81,7 @@ describe("a CSV with broken rows", () => {
     expect(byId.get("g-missing")!.error).toMatch(/^line 3: no-such-case\.json: no such file/);
     expect(byId.get("g-icy")!.error).toMatch(/^line 4: rail: must be one of dry, damp, wet, frost, leaves, greasy \(got "icy"\)/);
     expect(byId.get("g-sand")!.error).toMatch(/^line 5: sand: must be yes or no/);
-    expect(byId.get("g-bad")!.error).toMatch(/^line 7: bad-case\.json: train\.trailingMass_t: must be greater than 0 \(got -5\)/);
+    expect(byId.get("g-bad")!.error).toMatch(/^line 7: bad-case\.json: train\.trailingMass_t: must be from 5 to 60000 t \(got -5\)$/);
     for (const id of ["g-dry", "g-wet", "g-dry-again"]) {
       const d = byId.get(id)!;
       expect(d.error).toBeUndefined();
@@ -217,7 +220,8 @@ describe("CSV reading", () => {
 
 describe("the sample departures of the demo scenario (profiles/departures)", () => {
   it("the CSV and the JSON version give the same answers, every row answered", async () => {
-    const a = await taut("check", `${repo}profiles/departures/demo-day.csv`, "--json", "--quiet");
+    // The sample CSV names the demo cases in profiles/cases, outside its own folder: --allow-outside.
+    const a = await taut("check", `${repo}profiles/departures/demo-day.csv`, "--allow-outside", "--json", "--quiet");
     const b = await taut("check", `${repo}profiles/departures/demo-day.json`, "--json", "--quiet", "--sort", "risk");
     expect(a.code).toBe(0);
     expect(b.code).toBe(0);

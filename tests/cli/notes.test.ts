@@ -97,7 +97,7 @@ describe("taut plan --notes", () => {
   it("a file of another kind given as notes is refused", async () => {
     const r = await run("plan", caseAt("quarrelton-bank-foot"), "--notes", file("case-as-notes.json", demoCase));
     expect(r.code).toBe(2);
-    expect(r.err).toContain("This is a taut/start-case@1 file, not location notes");
+    expect(r.err).toContain('This is a "taut/start-case@1" file, not location notes');
   });
 
   it("the same note id in two files is refused", async () => {

@@ -91,7 +91,7 @@ describe("bad input: exit 2, the field path and the rule, no stack trace", () =>
     expect(r.code).toBe(2);
     expect(r.stdout).toBe("");
     expect(r.stderr).toMatch(/negative-mass\.json: the start case is not valid/);
-    expect(r.stderr).toMatch(/train\.trailingMass_t: must be greater than 0 \(got -100\)/);
+    expect(r.stderr).toMatch(/train\.trailingMass_t: must be from 5 to 60000 t \(got -100\)/);
     expect(r.stderr).not.toMatch(STACK_LINE);
   });
   it("a reference to an unknown profile and a train that does not fit", async () => {
@@ -112,7 +112,7 @@ describe("bad input: exit 2, the field path and the rule, no stack trace", () =>
   it("a file of another kind", async () => {
     const r = await taut("plan", `${repo}profiles/locomotives/illustrative-6axle-1800.json`);
     expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(/taut\/locomotive@1 file; a start case \(taut\/start-case@1\) is needed/);
+    expect(r.stderr).toMatch(/"taut\/locomotive@1" file; a start case \(taut\/start-case@1\) is needed/);
   });
   it("a missing file", async () => {
     const r = await taut("plan", "no/such/case.json");

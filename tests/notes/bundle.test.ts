@@ -37,12 +37,12 @@ describe("reading a notes file", () => {
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(r.message).toBe('The bundle holds 2 notes; note 2 ("Second (test)") is not valid, so none was imported.');
-    expect(r.issues).toEqual([{ path: "notes[1].segments[0].curveRadius_m", message: "must be 0 (straight) or at least 80 m" }]);
+    expect(r.issues).toEqual([{ path: "notes[1].segments[0].curveRadius_m", message: "must be 0 (straight) or at least 80 m (got 40)" }]);
   });
 
   it("names the schema of a foreign file and of a file with none", () => {
     const foreign = readNotesText(JSON.stringify({ schema: "taut/start-case@1" }));
-    expect(foreign.ok === false && foreign.message).toBe("This is a taut/start-case@1 file, not location notes (taut/notes-bundle@1 or taut/location@1). Nothing was changed.");
+    expect(foreign.ok === false && foreign.message).toBe("This is a \"taut/start-case@1\" file, not location notes (taut/notes-bundle@1 or taut/location@1). Nothing was changed.");
     const none = readNotesText(JSON.stringify([1, 2, 3]));
     expect(none.ok === false && none.message).toContain('it has no "schema" field');
     const empty = readNotesText("   ");
@@ -87,7 +87,7 @@ describe("export and import", () => {
 
   for (const [what, text, expected] of [
     ["a truncated file", () => JSON.stringify(makeNotesBundle([sampleNote({ id: "new-one" })])).slice(0, 180), "The file is not complete JSON: it may have been cut short while copying or downloading. Nothing was changed."],
-    ["a file of another kind", () => JSON.stringify({ schema: "taut/locomotive@1", id: "x" }), "This is a taut/locomotive@1 file, not location notes (taut/notes-bundle@1 or taut/location@1). Nothing was changed."],
+    ["a file of another kind", () => JSON.stringify({ schema: "taut/locomotive@1", id: "x" }), "This is a \"taut/locomotive@1\" file, not location notes (taut/notes-bundle@1 or taut/location@1). Nothing was changed."],
     [
       "a bundle with one bad note",
       () => JSON.stringify(makeNotesBundle([sampleNote({ id: "new-one" }), sampleNote({ id: "new-two", name: "Bad one (test)", clearAhead_m: -5 })])),

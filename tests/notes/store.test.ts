@@ -110,7 +110,7 @@ describe("notes store: damaged records", () => {
     expect(problems).toHaveLength(2);
     const half = problems.find((p) => p.key === "half-written")!;
     expect(half.message).toContain('The saved note "half-written" is damaged and was skipped');
-    expect(half.message).toContain("segments[0].length_m: must be greater than 0 (got -3)");
+    expect(half.message).toContain("segments[0].length_m: must be from 1 to 100000 m (got -3)");
     expect(problems.find((p) => p.key === "not-a-note")!.message).toContain("origin");
     const got = await store.get("half-written");
     expect(got.status).toBe("damaged");

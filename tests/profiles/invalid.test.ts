@@ -13,7 +13,7 @@ const dir = fileURLToPath(new URL("../fixtures/in/invalid/", import.meta.url));
 
 /** File → the one issue it must produce: its dotted field path and a pattern its message must match. */
 const EXPECTED: Record<string, { path: string; message: RegExp }> = {
-  "negative-mass.json": { path: "train.trailingMass_t", message: /^must be greater than 0 \(got -100\)$/ },
+  "negative-mass.json": { path: "train.trailingMass_t", message: /^must be from 5 to 60000 t \(got -100\)$/ },
   "unknown-rail-condition.json": { path: "conditions.rail", message: /^must be one of "dry", "damp", "wet", "frost", "leaves", "greasy" \(got "icy"\)$/ },
   "curve-radius-50.json": { path: "location.curveRadius_m", message: /^must be 0 \(straight\) or at least 80 m/ },
   "gradient-75.json": { path: "location.gradient_permille", message: /^must be at most 60 \(got 75\)$/ },

@@ -3,34 +3,69 @@
  * read from disk here; the rows are read by src/profiles/departures.ts (the same reader the app uses).
  * A row that cannot be read becomes a departure with an error naming its line (CSV) or index (JSON); the
  * others are read as usual. A file that cannot be read at all is bad input.
+ *
+ * The case files a CSV names are read from the CSV's folder and the folders below it, unless the caller
+ * allows more: a departures file from someone else must not be able to read any file on this machine
+ * ("../../etc/passwd"). Symbolic links are followed before the check, so a link cannot lead out either.
  */
-import { readFileSync } from "node:fs";
-import { dirname, extname, resolve } from "node:path";
+import { realpathSync } from "node:fs";
+import { dirname, extname, isAbsolute, relative, resolve, sep } from "node:path";
 import type { Library } from "../../profiles/library.js";
 import { caseFileJson, departuresFromCsv, departuresFromJson, type Departure, type DeparturesRead } from "../../profiles/departures.js";
+import { planWorkProblem } from "../../core/planner/workCap.js";
 import { InputError } from "../errors.js";
-import { readText } from "../files.js";
+import { pathText, readRegularFile, readText } from "../files.js";
 
 export type { Departure } from "../../profiles/departures.js";
 
-/** Read departures from a CSV or JSON file (by extension; otherwise by the first character). */
-export function readDepartures(path: string, lib: Library): Departure[] {
-  const text = readText(path);
-  const ext = extname(path).toLowerCase();
-  const json = ext === ".json" || (ext !== ".csv" && /^\s*[[{]/.test(text));
-  const dir = dirname(path);
-  const read: DeparturesRead = json ? departuresFromJson(text, lib) : departuresFromCsv(text, (casePath) => readCaseFile(resolve(dir, casePath)), lib);
-  if (!read.ok) throw new InputError(`${path}: ${read.message}`, read.issues);
-  return read.departures;
+export interface ReadDeparturesOptions {
+  /** Read case files outside the CSV's folder too (`taut check --allow-outside`). */
+  allowOutside?: boolean;
 }
 
-/** A start-case file's JSON, or the error that stops it. */
-function readCaseFile(path: string): unknown {
-  let text: string;
+/** Read departures from a CSV or JSON file (by extension; otherwise by the first character). */
+export function readDepartures(path: string, lib: Library, opts: ReadDeparturesOptions = {}): Departure[] {
+  const text = readText(path);
+  const ext = extname(path).toLowerCase();
+  const json = ext === ".json" || (ext !== ".csv" && /^\ufeff?\s*[[{]/.test(text));
+  const dir = dirname(path);
+  const read: DeparturesRead = json
+    ? departuresFromJson(text, lib)
+    : departuresFromCsv(text, (casePath) => readCaseFile(resolve(dir, casePath), opts.allowOutside ? undefined : dir), lib);
+  if (!read.ok) throw new InputError(`${pathText(path)}: ${read.message}`, read.issues);
+  return read.departures.map(withinWorkCap);
+}
+
+/** A departure whose plan would take more work than a plan may becomes a row with that error. */
+function withinWorkCap(d: Departure): Departure {
+  if (!d.case) return d;
+  const problem = planWorkProblem(d.case);
+  if (!problem) return d;
+  const { case: _dropped, ...rest } = d;
+  return { ...rest, error: `${d.where}: train: ${problem}` };
+}
+
+/** Whether `path` is `folder` itself or below it. */
+export function isInside(folder: string, path: string): boolean {
+  const rel = relative(folder, path);
+  return rel === "" || (rel !== ".." && !rel.startsWith(`..${sep}`) && !isAbsolute(rel));
+}
+
+/** The real path (symbolic links followed), or the path as given when it does not exist. */
+function real(path: string): string {
   try {
-    text = readFileSync(path, "utf8");
-  } catch (e) {
-    return new Error((e as NodeJS.ErrnoException).code === "ENOENT" ? "no such file" : `cannot be read (${(e as Error).message})`);
+    return realpathSync(path);
+  } catch {
+    return resolve(path);
   }
-  return caseFileJson(text);
+}
+
+/** A start-case file's JSON, or the error that stops it; with `folder`, only files inside it are read. */
+function readCaseFile(path: string, folder: string | undefined): unknown {
+  if (folder !== undefined && !isInside(real(folder), real(path))) {
+    return new Error(`is outside the folder of the departures file (${pathText(resolve(folder))}); case files are read from that folder and the folders below it (--allow-outside reads others)`);
+  }
+  const r = readRegularFile(path);
+  if (!r.ok) return new Error(r.why);
+  return caseFileJson(r.text);
 }

@@ -15,7 +15,7 @@ import { sortByRisk } from "../../profiles/riskOrder.js";
 export const checkCommand: Command = {
   name: "check",
   summary: "batch check of departures: verdict, margin, largest mass, cheapest assistance",
-  usage: "taut check DEPARTURES.csv|DEPARTURES.json [--sort file|risk] [--notes FILE]... [--helper ID] [--jobs N] [--shard K/N] [--quiet] [--json|--csv]",
+  usage: "taut check DEPARTURES.csv|DEPARTURES.json [--sort file|risk] [--notes FILE]... [--helper ID] [--jobs N] [--shard K/N] [--allow-outside] [--quiet] [--json|--csv]",
   help: [
     "Checks many departures at once: one row each with the verdict, its reasons, the margin (available ÷",
     "needed), the largest trailing mass that still starts, and the cheapest assistance that makes it start",
@@ -23,8 +23,9 @@ export const checkCommand: Command = {
     "",
     "Input:",
     "  CSV   a header line naming the columns id,case,rail,sand (and optionally location); `case` is a",
-    "        start-case file relative to the CSV, `rail` and `sand` (yes/no) override its conditions,",
-    "        `location` (a location note id) its location. Empty cells keep the case's own values.",
+    "        start-case file relative to the CSV (in its folder or below), `rail` and `sand` (yes/no)",
+    "        override its conditions, `location` (a location note id) its location. Empty cells keep",
+    "        the case's own values.",
     "  JSON  a list of start cases ([ {...}, {...} ]), each with an optional \"id\".",
     "A case's location may name a location note by id (built-in, or from --notes).",
     "",
@@ -44,6 +45,8 @@ export const checkCommand: Command = {
     "                batch scheduler's job array split a day among machines; join their CSV outputs after",
     "                (README: Splitting a day among machines)",
     "  --quiet       no progress lines on stderr",
+    "  --allow-outside  also read case files outside the CSV's folder (by default only that folder",
+    "                and the folders below it)",
     "",
     `Each departure's assistance search is capped at ${CHECK_ASSISTANCE_BUDGET} planner runs for the options and ${CHECK_DIVIDE_BUDGET} for dividing`,
     "the train; `taut plan` on the case lists every option that starts.",
@@ -60,6 +63,7 @@ export const checkCommand: Command = {
     shard: { type: "string" },
     quiet: { type: "boolean" },
     sort: { type: "string" },
+    "allow-outside": { type: "boolean" },
   },
   async run({ values, positionals }, io) {
     const path = positionals[0];
@@ -72,7 +76,7 @@ export const checkCommand: Command = {
     const shard = values.shard === undefined ? null : parseShard(values.shard as string);
     const lib = library(readNotesFiles((values.notes as string[] | undefined) ?? []));
     const helper = helperSpec(lib, values.helper as string | undefined);
-    const all = readDepartures(path, lib);
+    const all = readDepartures(path, lib, { allowOutside: values["allow-outside"] === true });
     const deps = shard ? shardOf(all, shard) : all;
     const t0 = performance.now();
     const pool = new JobPool(jobs);

@@ -13,6 +13,7 @@ import { assistanceReport, conditionMarginReport } from "../../profiles/assistan
 import type { LocomotiveSpec } from "../../core/physics/types.js";
 import type { StartCase } from "../../core/train/types.js";
 import { InputError } from "../errors.js";
+import { quoted } from "../../profiles/text.js";
 import { library, readNotesFiles, readStartCase } from "../files.js";
 import type { Command } from "../command.js";
 import { helperSpec } from "../options.js";
@@ -76,7 +77,7 @@ export const planCommand: Command = {
       const demo = builtinCaseJson.find((j) => (j as { id?: string }).id === DEMO_CASE_ID) as Record<string, unknown>;
       const raw = applyOverrides(location !== undefined ? { ...demo, location } : demo, overrides, (id) => lib.locations.get(id)) as Record<string, unknown>;
       const r = parseStartCase(raw, lib);
-      if (!r.ok && location !== undefined) throw new InputError(`the demo case cannot start at location "${location}"`, r.issues);
+      if (!r.ok && location !== undefined) throw new InputError(`the demo case cannot start at location ${quoted(location)}`, r.issues);
       if (!r.ok && hasOverrides(overrides)) throw new InputError("the demo case with these overrides is not valid", r.issues);
       if (!r.ok) throw new Error("built-in demo case does not resolve");
       c = r.value;

@@ -3,6 +3,7 @@ import { simulate, sequenceControls, type SimResult } from "../../core/dynamics/
 import { modelFromCase } from "../../core/train/trainModel.js";
 import type { StartCase } from "../../core/train/types.js";
 import { InputError } from "../errors.js";
+import { quoted } from "../../profiles/text.js";
 import { library, readStartCase } from "../files.js";
 import type { Command } from "../command.js";
 import { num, textTable } from "../table.js";
@@ -25,7 +26,7 @@ export function parseSequence(text: string, maxNotch: number): SequenceEntry[] {
   if (entries.length === 0) throw new InputError('--sequence: give at least one notch@seconds, e.g. "1@0,2@20,4@35"');
   const out = entries.map((p, k) => {
     const m = /^(\d+)\s*@\s*(\d+(?:\.\d+)?)$/.exec(p);
-    if (!m) throw new InputError(`--sequence: entry ${k + 1} ("${p}") must be notch@seconds, e.g. 4@35`);
+    if (!m) throw new InputError(`--sequence: entry ${k + 1} (${quoted(p)}) must be notch@seconds, e.g. 4@35`);
     const notch = Number(m[1]);
     const atS = Number(m[2]);
     if (notch > maxNotch) throw new InputError(`--sequence: entry ${k + 1} asks for notch ${notch}; the locomotive has ${maxNotch}`);
@@ -202,7 +203,7 @@ export const simulateCommand: Command = {
     if (values["release-at"] !== undefined) opts.releaseAtS = positiveNumber("--release-at", values["release-at"], 3600, true);
     if (values["adhesion-quantile"] !== undefined) {
       const q = Number(values["adhesion-quantile"]);
-      if (!(q > 0 && q < 1)) throw new InputError(`--adhesion-quantile must be between 0 and 1 (got ${String(values["adhesion-quantile"])})`);
+      if (!(q > 0 && q < 1)) throw new InputError(`--adhesion-quantile must be between 0 and 1 (got ${quoted(String(values["adhesion-quantile"]))})`);
       opts.adhesionQuantile = q;
     }
     const report = simulateCase(c, seq, opts);
@@ -214,7 +215,7 @@ export const simulateCommand: Command = {
 function positiveNumber(name: string, raw: unknown, max: number, allowZero = false): number {
   const x = Number(raw);
   if (!Number.isFinite(x) || x < 0 || (!allowZero && x === 0) || x > max) {
-    throw new InputError(`${name} must be a number of seconds ${allowZero ? "from 0" : "above 0"} up to ${max} (got ${String(raw)})`);
+    throw new InputError(`${name} must be a number of seconds ${allowZero ? "from 0" : "above 0"} up to ${max} (got ${quoted(String(raw))})`);
   }
   return x;
 }

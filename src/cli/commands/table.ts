@@ -6,10 +6,11 @@ import { referenceCaseFile, referenceOf, DEFAULT_REFERENCE_TEMPERATURE_C } from 
 import { loadTableRowReport } from "../../profiles/assistanceReport.js";
 import { builtinTrains } from "../../profiles/builtin.js";
 import type { Library } from "../../profiles/library.js";
-import { resolveStartCase } from "../../profiles/parse.js";
+import { parseStartCaseFile, resolveStartCase } from "../../profiles/parse.js";
 import type { LocationNoteFile, StartCaseFile } from "../../profiles/schemas.js";
 import { InputError } from "../errors.js";
-import { library, readNotesFiles } from "../files.js";
+import { printable, quoted } from "../../profiles/text.js";
+import { checkWork, library, readNotesFiles } from "../files.js";
 import type { Command } from "../command.js";
 import { JobPool } from "../batch/pool.js";
 import type { MassOutcome } from "../batch/jobs.js";
@@ -48,7 +49,7 @@ export const tableCommand: Command = {
     `  --wagons N         wagons in the train (default ${TABLE_DEFAULTS.wagons})`,
     `  --wagon-type ID    wagon type (default ${TABLE_DEFAULTS.wagonType})`,
     "  --slack MM         free slack per coupling (default: the wagon type's)",
-    "  --limit KN         coupling working limit (default 970 kN knuckle, 850 kN screw couplings)",
+    "  --limit KN         coupling working limit, 100 to 5000 (default 970 kN knuckle, 850 kN screw)",
     `  --temperature C    air temperature (default ${DEFAULT_REFERENCE_TEMPERATURE_C} °C, or the reference train's)`,
     `  --target-kmh V     speed the start must reach (default ${TABLE_DEFAULTS.targetKmh} km/h, at most the note's speed limit)`,
     "  --jobs N           worker threads (default: the available cores; 1 runs on this thread)",
@@ -134,10 +135,10 @@ function pickNote(where: string, id: string | undefined, lib: Library): Location
   const notes = readNotesFiles([where]);
   if (id !== undefined) {
     const n = notes.find((x) => x.id === id);
-    if (!n) throw new InputError(`--note: no note "${id}" in ${where} (it holds: ${notes.map((x) => x.id).join(", ")})`);
+    if (!n) throw new InputError(`--note: no note ${quoted(id)} in ${printable(where)} (it holds: ${notes.map((x) => x.id).join(", ")})`);
     return n;
   }
-  if (notes.length !== 1) throw new InputError(`${where} holds ${notes.length} notes: choose one with --note ID (${notes.map((x) => x.id).join(", ")})`);
+  if (notes.length !== 1) throw new InputError(`${printable(where)} holds ${notes.length} notes: choose one with --note ID (${notes.map((x) => x.id).join(", ")})`);
   return notes[0]!;
 }
 
@@ -147,7 +148,7 @@ function numberOption(values: Values, name: string, check: (n: number) => boolea
   const v = values[name];
   if (v === undefined) return undefined;
   const n = Number(v);
-  if (!Number.isFinite(n) || !check(n)) throw new InputError(`--${name}: must be ${rule} (got "${String(v)}")`);
+  if (!Number.isFinite(n) || !check(n)) throw new InputError(`--${name}: must be ${rule} (got ${quoted(String(v))})`);
   return n;
 }
 
@@ -161,12 +162,12 @@ export function tableCase(
   const count = numberOption(values, "count", (n) => Number.isInteger(n) && n >= 1 && n <= 8, "a whole number from 1 to 8");
   const wagons = numberOption(values, "wagons", (n) => Number.isInteger(n) && n >= 1 && n <= 400, "a whole number from 1 to 400");
   const slack = numberOption(values, "slack", (n) => n >= 0 && n <= 200, "from 0 to 200 mm");
-  const limit = numberOption(values, "limit", (n) => n > 0, "greater than 0 kN");
+  const limit = numberOption(values, "limit", (n) => n >= 100 && n <= 5000, "from 100 to 5000 kN");
   const temperature = numberOption(values, "temperature", (n) => n >= -60 && n <= 60, "from -60 to 60 °C");
   const targetKmh = numberOption(values, "target-kmh", (n) => n > 0 && n <= 200, "greater than 0 and at most 200 km/h");
   const loco = values.loco as string | undefined;
   const wagonTypeId = values["wagon-type"] as string | undefined;
-  if (loco !== undefined && !lib.locomotives.has(loco)) throw new InputError(`--loco: no locomotive profile "${loco}" (known: ${[...lib.locomotives.keys()].join(", ")})`);
+  if (loco !== undefined && !lib.locomotives.has(loco)) throw new InputError(`--loco: no locomotive profile ${quoted(loco)} (known: ${[...lib.locomotives.keys()].join(", ")})`);
   const trainOptions = wagons !== undefined || wagonTypeId !== undefined || slack !== undefined || limit !== undefined;
   const cap = (kmh: number) => Math.min(kmh, note.speedLimit_kmh ?? kmh);
   let file: StartCaseFile;
@@ -183,7 +184,7 @@ export function tableCase(
     if (loco === undefined) throw new InputError(`--loco ID is needed with the train options --wagons, --wagon-type, --slack and --limit (known profiles: ${[...lib.locomotives.keys()].join(", ")})`);
     const typeId = wagonTypeId ?? TABLE_DEFAULTS.wagonType;
     const w = lib.wagons.get(typeId);
-    if (!w) throw new InputError(`--wagon-type: no wagon type "${typeId}" (known: ${[...lib.wagons.keys()].join(", ")})`);
+    if (!w) throw new InputError(`--wagon-type: no wagon type ${quoted(typeId)} (known: ${[...lib.wagons.keys()].join(", ")})`);
     const n = wagons ?? TABLE_DEFAULTS.wagons;
     file = {
       schema: "taut/start-case@1",
@@ -204,8 +205,12 @@ export function tableCase(
     };
     source = "options";
   }
-  const r = resolveStartCase(file, lib);
+  // The file the options make is checked as any start case is: every field within its range.
+  const valid = parseStartCaseFile(file);
+  if (!valid.ok) throw new InputError(`the train for the table is not valid`, valid.issues);
+  const r = resolveStartCase(valid.value, lib);
   if (!r.ok) throw new InputError(`the train for the table does not fit "${note.id}"`, r.issues);
+  checkWork(r.value, `the train for the table is not valid`);
   const wt = file.train.wagonType !== undefined ? lib.wagons.get(file.train.wagonType) : undefined;
   return { c: r.value, file, source, referenceTrain, capacityT: wt ? Math.round((file.train.wagons * wt.maxGrossKg) / 1000) : null };
 }
@@ -222,7 +227,7 @@ interface TableReport {
 
 function renderTable(t: TableReport): string {
   const lines: string[] = [];
-  lines.push(`Load table — ${t.location.name}`);
+  lines.push(`Load table — ${printable(t.location.name)}`);
   const locos = t.locomotives.map((l) => `${l.count} × ${l.profile} ${typeof l.position === "string" ? `at the ${l.position}` : `after wagon ${(l.position as { afterWagon: number }).afterWagon}`}`).join(", ");
   lines.push(`Locomotives: ${locos}`);
   const tr = t.train;

@@ -4,6 +4,7 @@ import { CHECK_CSV_HEADER } from "../../profiles/csv.js";
 import { csv, num, textTable } from "../table.js";
 import { divideLine, optionLine, VERDICT_WORDS } from "./assistance.js";
 import { wrap } from "./wrap.js";
+import { printable } from "../../profiles/text.js";
 
 /** The remedy of a row in a few words: the cheapest option, or dividing the train. */
 export function remedyText(r: DepartureRow): string {
@@ -45,7 +46,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
     textTable(
       ["id", "row", "rail", "sand", "mass t", "verdict", "why", "margin", "max t", "cheapest assistance"],
       good.map((r) => [
-        r.id,
+        printable(r.id),
         where(r),
         r.rail ?? "",
         r.sand ? "yes" : "no",
@@ -62,7 +63,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
   if (bad.length > 0) {
     lines.push("");
     lines.push(`Rows not answered (${bad.length}):`);
-    for (const r of bad) lines.push(...wrap(`  - ${r.error}`, 110, "    "));
+    for (const r of bad) lines.push(...wrap(`  - ${printable(r.error ?? "")}`, 110, "    "));
   }
   const s = summarise(rows);
   lines.push("");

@@ -4,12 +4,13 @@ import { num, pct, textTable } from "../table.js";
 import { renderAssistance, renderConditions, VERDICT_WORDS } from "./assistance.js";
 import { wrap } from "./wrap.js";
 import { describeOverrides } from "../caseOverrides.js";
+import { printable } from "../../profiles/text.js";
 
 export { wrap };
 
 export function renderPlan(p: PlanReport): string {
   const lines: string[] = [];
-  if (p.case.label) lines.push(p.case.label);
+  if (p.case.label) lines.push(printable(p.case.label));
   if (p.case.overrides && Object.keys(p.case.overrides).length > 0) lines.push(`Changed from the case file: ${describeOverrides(p.case.overrides)}`);
   lines.push(`Verdict: ${VERDICT_WORDS[p.verdict]}${p.reasons.length ? ` (limited by ${p.reasons.join(", ")})` : ""}   margin ${num(p.margin, 2)}`);
   lines.push(

@@ -12,3 +12,4 @@ export * from "./slip.js";
 export * from "./plan.js";
 export { isCancelled } from "./search.js";
 export type { PlannerContext } from "./context.js";
+export * from "./workCap.js";
