@@ -82,7 +82,8 @@ export function departuresFromCsv(text: string, readCase: (casePath: string) => 
   const header = records.shift();
   if (!header) return { ok: false, message: 'the file is empty (a header line "id,case,rail,sand" is needed)' };
   const col = new Map(header.fields.map((h, k) => [h.trim().toLowerCase(), k]));
-  if (!col.has("case")) return { ok: false, message: `line ${header.line}: the header must name the columns id,case,rail,sand (no "case" column in ${quoted(header.fields.join(","))})` };
+  // The header is not quoted back: a file given here by mistake may be anything.
+  if (!col.has("case")) return { ok: false, message: `line ${header.line}: the header must name the columns id,case,rail,sand (its ${header.fields.length} column${header.fields.length === 1 ? "" : "s"} include no "case")` };
   const files = new Map<string, unknown>();
   const cell = (fields: string[], name: string): string => {
     const k = col.get(name);

@@ -37,7 +37,8 @@ const caseFileArb = fc
     count: fc.integer({ min: 1, max: 3 }),
     position: fc.constantFrom<"head" | "rear" | "mid">("head", "rear", "mid"),
     midAt: fc.double({ min: 0, max: 0.999, noNaN: true }),
-    trailingMass_t: fc.double({ min: 1, max: 15_000, noNaN: true }),
+    // Per wagon within the schema's 5–150 t (src/profiles/schemas.ts); up to 15 000 t in all.
+    massPerWagon_t: fc.double({ min: 5, max: 100, noNaN: true }),
     wagons: fc.integer({ min: 1, max: 150 }),
     wagonLength_m: fc.double({ min: 8, max: 25, noNaN: true }),
     couplerSlack_mm: fc.integer({ min: 0, max: 200 }),
@@ -55,7 +56,7 @@ const caseFileArb = fc
     schema: "taut/start-case@1",
     locomotives: [{ profile: r.loco, count: r.count, position: r.position === "mid" ? { afterWagon: Math.max(1, Math.floor(r.midAt * r.wagons)) } : r.position }],
     train: {
-      trailingMass_t: r.trailingMass_t,
+      trailingMass_t: r.massPerWagon_t * r.wagons,
       wagons: r.wagons,
       length_m: r.wagons * r.wagonLength_m,
       couplerSlack_mm: r.couplerSlack_mm,

@@ -45,7 +45,17 @@ export function planWorkProblem(c: StartCase, cap = PLAN_WORK_CAP_VEHICLE_STEPS)
   if (w.vehicleSteps <= cap) return undefined;
   const sci = (x: number) => (Number.isFinite(x) ? x.toExponential(1).replace("e+", " × 10^") : "without end");
   return (
-    `one plan of this train would take ${sci(w.vehicleSteps)} vehicle-steps (${w.vehicles} vehicles at a ${(w.stepS * 1000).toPrecision(2)} ms step, ` +
-    `which the lightest vehicle, ${(w.lightestKg / 1000).toPrecision(2)} t, sets), more than the ${sci(cap)} a plan may take: check the masses`
+    `one plan of this train would take ${sci(w.vehicleSteps)} vehicle-steps (${w.vehicles} vehicles at a ${duration(w.stepS)} step, ` +
+    `which the lightest vehicle, ${mass(w.lightestKg)}, sets), more than the ${sci(cap)} a plan may take: check the masses`
   );
+}
+
+const sig2 = (x: number): string => String(Number(x.toPrecision(2)));
+/** A short time in the unit that reads best: ms, µs or ns. */
+function duration(s: number): string {
+  return s >= 1e-4 ? `${sig2(s * 1000)} ms` : s >= 1e-7 ? `${sig2(s * 1e6)} µs` : `${sig2(s * 1e9)} ns`;
+}
+/** A mass in the unit that reads best: t, kg or g. */
+function mass(kg: number): string {
+  return kg >= 1000 ? `${sig2(kg / 1000)} t` : kg >= 1 ? `${sig2(kg)} kg` : `${sig2(kg * 1000)} g`;
 }
