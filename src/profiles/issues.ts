@@ -93,6 +93,8 @@ function bestBranch(branches: ReadonlyArray<ReadonlyArray<RawIssue>>): ReadonlyA
 function shown(v: unknown): string {
   if (v === undefined) return "nothing";
   if (typeof v === "string") return quoted(v, 40);
+  // A number beyond what a double holds (1e400 in a file reads as infinity) is said in words.
+  if (typeof v === "number" && (v === Infinity || v === -Infinity)) return `a number too ${v > 0 ? "large" : "far below zero"} to hold`;
   if (typeof v === "number" || typeof v === "boolean" || v === null) return String(v);
   if (Array.isArray(v)) return "a list";
   return "an object";

@@ -156,7 +156,13 @@ const contiguousSegments = () =>
     z.minLength(1),
     z.maxLength(MAX_SEGMENTS),
     z.superRefine((segs, ctx) => {
+      // Figures out of their own range have their own message: the join is judged between sound ones only.
+      const sound = (s: unknown) => {
+        const x = s as Partial<SegmentFile> | null | undefined;
+        return !!x && typeof x.from_m === "number" && typeof x.length_m === "number" && Math.abs(x.from_m) <= 1_000_000 && x.length_m >= 1 && x.length_m <= 100_000;
+      };
       for (let k = 1; k < segs.length; k++) {
+        if (!sound(segs[k - 1]) || !sound(segs[k])) continue;
         const prev = segs[k - 1]!;
         const end = prev.from_m + prev.length_m;
         const gap = segs[k]!.from_m - end;
@@ -266,7 +272,7 @@ export const trainSchema = z.object({
   z.superRefine((t, ctx) => {
     const perWagon = (what: "trailingMass_t" | "length_m", r: { min: number; max: number }, unit: string) => {
       // Only when the whole-train figure is itself in range (otherwise that is the one message).
-      if (!(t[what] >= r.min && t[what] <= MAX_WAGONS * r.max)) return;
+      if (!(t[what] >= r.min && t[what] <= MAX_WAGONS * r.max) || !(Number.isInteger(t.wagons) && t.wagons >= 1 && t.wagons <= MAX_WAGONS)) return;
       const x = t[what] / t.wagons;
       if (x >= r.min && x <= r.max) return;
       ctx.issues.push({
