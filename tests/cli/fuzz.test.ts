@@ -86,7 +86,7 @@ function mutate(base: unknown, muts: ReadonlyArray<readonly [number, unknown]>):
 }
 
 // ---------------------------------------------------------------- the valid files mutated
-const goods = builtinCaseJson.find((c) => c.id === "demo-goods-cinderfield")!;
+const goods = builtinCaseJson.find((c) => (c as { id?: string }).id === "demo-goods-cinderfield") as Record<string, unknown> & { train: Record<string, unknown> };
 const cinderfield = lib.locations.get("cinderfield-yard")!;
 /** The demo cases, and one with an inline locomotive profile and an inline track profile. */
 const CASES: unknown[] = [

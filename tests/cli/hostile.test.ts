@@ -33,7 +33,7 @@ function file(name: string, text: string): string {
   return p;
 }
 
-const goods = JSON.parse(JSON.stringify(builtinCaseJson.find((c) => c.id === "demo-goods-cinderfield"))) as Record<string, unknown> & { train: Record<string, unknown> };
+const goods = JSON.parse(JSON.stringify(builtinCaseJson.find((c) => (c as { id?: string }).id === "demo-goods-cinderfield"))) as Record<string, unknown> & { train: Record<string, unknown> };
 /** The goods case with some fields replaced. */
 const goodsWith = (over: Record<string, unknown>, train: Record<string, unknown> = {}) => ({ ...goods, ...over, train: { ...goods.train, ...train } });
 
