@@ -3,11 +3,12 @@
  * from the screen registry — a rail on the left in landscape, along the bottom in portrait. While the
  * device reports movement (and the user allowed the lock), a notice covers every control.
  */
-import { createEffect, createMemo, For, Show, Suspense, type JSX } from "solid-js";
+import { createEffect, createMemo, ErrorBoundary, For, Show, Suspense, type JSX } from "solid-js";
 import { Dynamic } from "solid-js/web";
 import { Icon } from "./components/Icon.js";
 import { OfflineStatus, UpdatePrompt } from "./components/OfflineStatus.js";
 import { PrintStamp } from "./components/PrintStamp.js";
+import { ScreenFailure, SetAsideNotice } from "./components/SetAsideNotice.js";
 import { AppContext, type AppContextValue } from "./context.js";
 import { show } from "./format.js";
 import type { ScreenEntry } from "./screens/registry.js";
@@ -43,9 +44,12 @@ export function App(props: { state: AppContextValue; screens: readonly ScreenEnt
         <UpdatePrompt offline={s.offline} />
         <main class="screen" id="screen" data-screen={current().id}>
           <PrintStamp screen={current().title} />
-          <Suspense fallback={<p class="placeholder-text">Loading…</p>}>
-            <Dynamic component={current().component} />
-          </Suspense>
+          <Show when={s.draft.setAside()}>{(aside) => <SetAsideNotice aside={aside()} onDismiss={() => s.draft.dismissSetAside()} />}</Show>
+          <ErrorBoundary fallback={(error, reset) => <ScreenFailure error={error} onRetry={reset} />}>
+            <Suspense fallback={<p class="placeholder-text">Loading…</p>}>
+              <Dynamic component={current().component} />
+            </Suspense>
+          </ErrorBoundary>
         </main>
         <Show when={!full()}>
           <nav class="tabs" aria-label="Screens">

@@ -69,10 +69,15 @@ export function localiseIssue(issue: FieldIssue, system: UnitSystem): FieldIssue
   const unit = f.fileUnit;
   // Rounded as the field shows it, without trailing zeros ("60 ‰", "7.87 in").
   const shown = (x: string) => `${formatNumber(toDisplay(m, Number(x), unit, system), decimalsOf(m, system)).replace(/(\.\d*?)0+$/, "$1").replace(/\.$/, "")} ${unitSymbol(m, system)}`;
-  const bare = (x: string) => shown(x).slice(0, -(unitSymbol(m, system).length + 1));
+  // A figure per wagon may be small: three significant figures rather than the field's decimals.
+  const precise = (x: string) => {
+    const v = toDisplay(m, Number(x), unit, system);
+    const decimals = Math.max(0, 2 - Math.floor(Math.log10(Math.abs(v) || 1)));
+    return `${formatNumber(v, decimals).replace(/(\.\d*?)0+$/, "$1").replace(/\.$/, "")} ${unitSymbol(m, system)}`;
+  };
   const message = issue.message
-    .replace(RANGE, (_all, a: string, b: string) => `from ${bare(a)} to ${shown(b)}`)
-    .replace(PER_WAGON, (_all, x: string) => `(got ${shown(x)} per wagon`)
+    .replace(RANGE, (_all, a: string, b: string) => `from ${precise(a).slice(0, -(unitSymbol(m, system).length + 1))} to ${precise(b)}`)
+    .replace(PER_WAGON, (_all, x: string) => `(got ${precise(x)} per wagon`)
     .replace(BOUND, (_all, word: string, x: string) => `${word} ${shown(x)}`)
     .replace(GOT, (_all, x: string) => `(got ${shown(x)})`);
   return { ...issue, message };

@@ -16,14 +16,21 @@ export * from "../profiles/referenceTrain.js";
 export { NOTES_DB_VERSION, migrateV1Record, type NoteRecordV1 } from "./migrations.js";
 
 let shared: Promise<NotesStore> | undefined;
+const closedListeners = new Set<(reason: "upgrade" | "terminated") => void>();
 
 /** The device's notes store, opened on first use (with the demo notes on a new device). */
 export function deviceNotesStore(): Promise<NotesStore> {
-  shared ??= openNotesStore({ demos: builtinLocations }).catch((e: unknown) => {
+  shared ??= openNotesStore({ demos: builtinLocations, onClosed: (reason) => closedListeners.forEach((f) => f(reason)) }).catch((e: unknown) => {
     shared = undefined;
     throw e;
   });
   return shared;
+}
+
+/** Be told when the device's store is closed under the page (another tab upgrades the database); returns a way to stop. */
+export function onDeviceNotesClosed(f: (reason: "upgrade" | "terminated") => void): () => void {
+  closedListeners.add(f);
+  return () => closedListeners.delete(f);
 }
 
 /** One saved note as a location picker shows it. */

@@ -1,17 +1,21 @@
 /**
  * Merging notes from a file into the library: which notes are new, which are the same as ours, and
  * which share an id with ours but carry another revision (a conflict the user settles: keep mine,
- * take theirs, or keep both, the imported copy then getting a new id). Pure: no storage here.
+ * take theirs, or keep both, the imported copy then getting a new id). A note whose id is that of a
+ * damaged record is a conflict too: the record may be hours of work that only needs putting right, so
+ * it is never replaced without asking. Pure: no storage here.
  */
 import { canonicalNote, latestRevision } from "../profiles/notes.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 
 export type ConflictChoice = "mine" | "theirs" | "both";
 
-/** An imported note whose id is already in the library with different content. */
+/** An imported note whose id is already in the library with different content, or is a damaged record's. */
 export interface ImportConflict {
   id: string;
-  mine: LocationNoteFile;
+  /** Our note; absent when the id is a damaged record's (`damaged` then says why it could not be read). */
+  mine?: LocationNoteFile;
+  damaged?: string;
   theirs: LocationNoteFile;
   /** True when both carry the same latest revision entry yet differ (edited without a revision). */
   sameRevision: boolean;
@@ -22,8 +26,6 @@ export interface MergePreview {
   added: LocationNoteFile[];
   unchanged: LocationNoteFile[];
   conflicts: ImportConflict[];
-  /** Imported notes that take the place of a damaged record with the same key. */
-  repairs: LocationNoteFile[];
 }
 
 /** The writes an import makes once every conflict has a choice. */
@@ -32,13 +34,15 @@ export interface MergeWrites {
   summary: { added: string[]; replaced: string[]; keptMine: string[]; copies: Array<{ from: string; to: string }>; unchanged: string[]; repaired: string[] };
 }
 
-/** Compare incoming notes with the library (`mine` by id; `damaged` are keys of unreadable records). */
-export function previewMerge(incoming: readonly LocationNoteFile[], mine: ReadonlyMap<string, LocationNoteFile>, damaged: ReadonlySet<string>): MergePreview {
-  const out: MergePreview = { added: [], unchanged: [], conflicts: [], repairs: [] };
+/** Compare incoming notes with the library (`mine` by id; `damaged`: why each unreadable record, by key). */
+export function previewMerge(incoming: readonly LocationNoteFile[], mine: ReadonlyMap<string, LocationNoteFile>, damaged: ReadonlyMap<string, string>): MergePreview {
+  const out: MergePreview = { added: [], unchanged: [], conflicts: [] };
   for (const theirs of incoming) {
     const ours = mine.get(theirs.id);
     if (!ours) {
-      (damaged.has(theirs.id) ? out.repairs : out.added).push(theirs);
+      const why = damaged.get(theirs.id);
+      if (why !== undefined) out.conflicts.push({ id: theirs.id, damaged: why, theirs, sameRevision: false });
+      else out.added.push(theirs);
       continue;
     }
     if (canonicalNote(ours) === canonicalNote(theirs)) {
@@ -60,14 +64,14 @@ export function mergeWrites(preview: MergePreview, choices: Readonly<Record<stri
   const taken = new Set(takenIds);
   for (const n of preview.added) taken.add(n.id);
   const w: MergeWrites = {
-    put: [...preview.added, ...preview.repairs],
+    put: [...preview.added],
     summary: {
       added: preview.added.map((n) => n.id),
       replaced: [],
       keptMine: [],
       copies: [],
       unchanged: preview.unchanged.map((n) => n.id),
-      repaired: preview.repairs.map((n) => n.id),
+      repaired: [],
     },
   };
   for (const c of preview.conflicts) {
@@ -76,7 +80,7 @@ export function mergeWrites(preview: MergePreview, choices: Readonly<Record<stri
     if (choice === "mine") w.summary.keptMine.push(c.id);
     else if (choice === "theirs") {
       w.put.push(c.theirs);
-      w.summary.replaced.push(c.id);
+      (c.mine ? w.summary.replaced : w.summary.repaired).push(c.id);
     } else {
       const copy = importedCopy(c.theirs, taken);
       taken.add(copy.id);

@@ -11,6 +11,7 @@
 import { parseLocationNote } from "../profiles/parse.js";
 import { formatIssues } from "../profiles/issues.js";
 import type { NoteRecord } from "./records.js";
+import { RAIL_CONDITIONS } from "../core/physics/types.js";
 
 export const NOTES_DB_VERSION = 2;
 
@@ -44,14 +45,35 @@ export const V1_CARRIED_OVER = "Carried over from the earlier notes format, whic
 
 const SEASON_ORDER = ["spring", "summer", "autumn", "winter"] as const;
 
+/** The rail words a season may name (the rail conditions of the program). */
+const RAIL_WORDS: readonly string[] = RAIL_CONDITIONS;
+
+export type V1Migration =
+  | { ok: true; record: NoteRecord; flags: string[] }
+  | { ok: false; message: string; partial: Record<string, unknown>; flags: string[] };
+
 /**
- * Turn a version-1 record into a version-2 record; a record that cannot be carried over (missing or
- * invalid fields) is returned as a failure with the reason, and is left in place to be reported on read.
+ * Turn a version-1 record into a version-2 record. What is valid is carried over; a season or hazard
+ * that cannot be (an unknown season or rail word, a hazard that is not text) is left out and named in
+ * `flags`, for the trainer to look at, rather than losing the whole note. A record that still cannot
+ * be carried over (a missing name, a 90 ‰ grade) is a failure with the reason, the note as far as it
+ * could be carried over (`partial`, for the trainer to put right in the editor) and the flags; it is
+ * left in place and reported when read.
  */
-export function migrateV1Record(raw: unknown): { ok: true; record: NoteRecord } | { ok: false; message: string } {
-  if (!raw || typeof raw !== "object") return { ok: false, message: "not an object" };
+export function migrateV1Record(raw: unknown): V1Migration {
+  if (!raw || typeof raw !== "object") return { ok: false, message: "not an object", partial: {}, flags: [] };
   const v1 = raw as Partial<NoteRecordV1>;
   const p = v1.profile;
+  const flags: string[] = [];
+  const hazards = Array.isArray(v1.hazards) ? v1.hazards : [];
+  hazards.forEach((h, k) => {
+    if (typeof h !== "string") flags.push(`Hazard ${k + 1} was not text and was left out.`);
+  });
+  const rail = v1.rail && typeof v1.rail === "object" ? (v1.rail as Record<string, unknown>) : {};
+  for (const [season, word] of Object.entries(rail)) {
+    if (!(SEASON_ORDER as readonly string[]).includes(season)) flags.push(`The usual rail for ${JSON.stringify(season)} was left out: not a season (spring, summer, autumn, winter).`);
+    else if (typeof word !== "string" || !RAIL_WORDS.includes(word)) flags.push(`The usual rail in ${season}, ${JSON.stringify(word)}, was left out: not one of ${RAIL_WORDS.join(", ")}.`);
+  }
   const candidate = {
     schema: "taut/location@1",
     id: v1.id,
@@ -65,13 +87,13 @@ export function migrateV1Record(raw: unknown): { ok: true; record: NoteRecord } 
     frontAt_m: p?.front_m,
     clearAhead_m: p?.clear_m,
     ...(v1.speedLimit_kmh !== undefined ? { speedLimit_kmh: v1.speedLimit_kmh } : {}),
-    hazards: Array.isArray(v1.hazards) ? v1.hazards.filter((h) => typeof h === "string" && h.trim() !== "").map((h) => ({ kind: "other", note: h.trim() })) : [],
-    seasons: SEASON_ORDER.filter((s) => v1.rail?.[s] !== undefined).map((s) => ({ season: s, rail: v1.rail?.[s] })),
+    hazards: hazards.filter((h): h is string => typeof h === "string" && h.trim() !== "").map((h) => ({ kind: "other", note: h.trim() })),
+    seasons: SEASON_ORDER.filter((s) => typeof rail[s] === "string" && RAIL_WORDS.includes(rail[s] as string)).map((s) => ({ season: s, rail: rail[s] })),
     practice: typeof v1.practice === "string" ? v1.practice : "",
     revisions: [{ date: v1.revised, initials: v1.by, change: V1_CARRIED_OVER }],
   };
   const parsed = parseLocationNote(candidate);
-  if (!parsed.ok) return { ok: false, message: formatIssues(parsed.issues).replace(/\n/g, "; ") };
+  if (!parsed.ok) return { ok: false, message: formatIssues(parsed.issues).replace(/\n/g, "; "), partial: candidate, flags };
   const savedAt = typeof v1.revised === "string" ? `${v1.revised}T00:00:00.000Z` : new Date(0).toISOString();
-  return { ok: true, record: { id: parsed.value.id, origin: v1.demo ? "demo" : "mine", savedAt, note: parsed.value } };
+  return { ok: true, record: { id: parsed.value.id, origin: v1.demo ? "demo" : "mine", savedAt, rev: 1, ...(flags.length > 0 ? { flags } : {}), note: parsed.value }, flags };
 }

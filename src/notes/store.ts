@@ -10,7 +10,7 @@ import { parseLocationNote } from "../profiles/parse.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { mergeWrites, previewMerge, type ConflictChoice, type ImportConflict, type MergeWrites } from "./merge.js";
 import { migrateV1Record, NOTES_DB_VERSION } from "./migrations.js";
-import { checkRecord, makeRecord, type NoteOrigin, type NoteRecord, type RecordProblem, type SavedNote } from "./records.js";
+import { checkRecord, keyText, makeRecord, recordRev, type NoteOrigin, type NoteRecord, type RecordProblem, type SavedNote } from "./records.js";
 import { exportReminder, type ExportReminder } from "./reminder.js";
 
 export const DEFAULT_NOTES_DB = "taut-notes";
@@ -37,32 +37,79 @@ export interface NoteList {
 
 export type ReadResult = { status: "ok"; saved: SavedNote } | { status: "missing" } | { status: "damaged"; problem: RecordProblem };
 
-export type PutResult = { ok: true; saved: SavedNote } | { ok: false; issues: FieldIssue[] };
+/**
+ * What a save found instead of the note it started from: the stored note changed since it was opened
+ * (another tab or window saved it: `theirs`), was removed (`theirs` absent), or a note of that id now
+ * exists where a new one was to be made. The trainer chooses: keep mine, take theirs, keep both.
+ */
+export interface SaveConflict {
+  id: string;
+  theirs?: SavedNote;
+  /** The stored record is damaged (it cannot be shown; keeping mine replaces it). */
+  damaged?: RecordProblem;
+}
+
+/** A save: done, refused with field issues, or stopped by a conflict (`issues` then empty). */
+export type PutResult = { ok: true; saved: SavedNote } | { ok: false; issues: FieldIssue[]; conflict?: SaveConflict };
+
+/**
+ * Which stored note a save starts from: `{ rev }` of the note as it was opened, "new" for a note not yet
+ * saved (no record of its id may exist), "replace" to write whatever is there (after the trainer chose
+ * to keep theirs out, or to put a damaged record right).
+ */
+export type SaveBase = { rev: number } | "new" | "replace";
 
 /** Called with the conflicts of an import; returns a choice per conflicting id, or null to cancel. */
 export type ChooseConflicts = (conflicts: ImportConflict[]) => Promise<Record<string, ConflictChoice> | null> | Record<string, ConflictChoice> | null;
 
 export type ImportOutcome = { status: "applied"; summary: MergeWrites["summary"] } | { status: "cancelled" } | { status: "failed"; message: string };
 
+/**
+ * The store's connection was closed under it: another tab or window of a newer Taut upgraded the
+ * database, or the browser ended the connection. Nothing more can be read or written until the page is
+ * reloaded; the note being edited is kept as a draft (the Location notes screen keeps one).
+ */
+export class NotesClosedError extends Error {
+  constructor(readonly reason: "upgrade" | "terminated") {
+    super(
+      reason === "upgrade"
+        ? "The notes library was upgraded by another tab or window of Taut. Reload this page to go on working; your unsaved edit is kept."
+        : "The browser closed the notes library. Reload this page to go on working; your unsaved edit is kept.",
+    );
+    this.name = "NotesClosedError";
+  }
+}
+
 export interface NotesStore {
   /** Every readable note (sorted by name) and a problem for each damaged record. */
   list(): Promise<NoteList>;
   get(id: string): Promise<ReadResult>;
-  /** Validate and save a note (new or edited); nothing is written when it is invalid. */
-  put(note: unknown, origin?: NoteOrigin): Promise<PutResult>;
-  /** Remove a note (or a damaged record) by id; true when something was removed. */
-  delete(id: string): Promise<boolean>;
+  /**
+   * Validate and save a note (new or edited); nothing is written when it is invalid, or when the stored
+   * note is no longer the one the save started from (`base`; without it the save overwrites blindly).
+   */
+  put(note: unknown, origin?: NoteOrigin, base?: SaveBase): Promise<PutResult>;
+  /** Remove a note or a damaged record by its key (a number stays a number); true when something was removed. */
+  delete(key: IDBValidKey): Promise<boolean>;
+  /** A record exactly as stored (for exporting a damaged record before anything is done to it). */
+  rawRecord(key: IDBValidKey): Promise<unknown>;
   /** Remove every note. */
   clear(): Promise<void>;
-  /** Import validated notes: settle conflicts through `choose`, then write all in one transaction. */
-  importBundle(notes: readonly LocationNoteFile[], choose: ChooseConflicts): Promise<ImportOutcome>;
+  /**
+   * Import notes: settle conflicts through `choose`, then write all in one transaction. Notes that come
+   * straight from `readNotesText` (validated already, e.g. in a worker) may say so to skip a second check.
+   */
+  importBundle(notes: readonly LocationNoteFile[], choose: ChooseConflicts, opts?: { validated?: boolean }): Promise<ImportOutcome>;
   /** A bundle of all notes (or those with the given ids); exporting all is remembered as the last export. */
   exportBundle(ids?: readonly string[], now?: Date): Promise<NotesBundleFile>;
   /** ISO date-time of the last export of the whole library. */
   lastExport(): Promise<string | undefined>;
-  exportReminder(now?: Date): Promise<ExportReminder>;
+  /** The export reminder; give the list when it has just been read, to spare reading it again. */
+  exportReminder(now?: Date, list?: NoteList): Promise<ExportReminder>;
   /** Put back the demo notes that are missing; returns how many were added. */
   restoreDemos(): Promise<number>;
+  /** Why the connection was closed under the store, if it was. */
+  closed(): "upgrade" | "terminated" | undefined;
   close(): void;
 }
 
@@ -73,22 +120,35 @@ export interface OpenOptions {
   demos?: readonly LocationNoteFile[];
   /** The clock, for tests. */
   now?: () => Date;
+  /** Told when the connection is closed under the store (another tab upgrades the database). */
+  onClosed?: (reason: "upgrade" | "terminated") => void;
 }
 
 /** Open (creating or migrating as needed) the notes database. */
 export async function openNotesStore(opts: OpenOptions = {}): Promise<NotesStore> {
   const demos = opts.demos ?? [];
   const now = opts.now ?? (() => new Date());
+  const state: { closed?: "upgrade" | "terminated" } = {};
+  const closeUnder = (reason: "upgrade" | "terminated") => {
+    if (state.closed) return;
+    state.closed = reason;
+    opts.onClosed?.(reason);
+  };
   const db = await openDB<NotesDB>(opts.name ?? DEFAULT_NOTES_DB, NOTES_DB_VERSION, {
     upgrade(database, oldVersion, _newVersion, tx) {
       upgradeNotesDb(database, oldVersion, tx, demos, now());
     },
     blocking() {
-      // A newer version of the app wants to upgrade the database: let it.
+      // A newer version of the app wants to upgrade the database: let it, and stop using this connection
+      // (every call after this says so, rather than failing with "the database connection is closing").
       db.close();
+      closeUnder("upgrade");
+    },
+    terminated() {
+      closeUnder("terminated");
     },
   });
-  return makeStore(db, demos, now);
+  return makeStore(db, demos, now, state);
 }
 
 /** Create or migrate the stores, step by step from `oldVersion` (0 = new database). */
@@ -121,22 +181,50 @@ function observed<T>(p: Promise<T>): Promise<T> {
   return p;
 }
 
-function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[], now: () => Date): NotesStore {
+function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[], now: () => Date, state: { closed?: "upgrade" | "terminated" }): NotesStore {
+  /** Refuse at once when the connection was closed under us. */
+  const open = () => {
+    if (state.closed) throw new NotesClosedError(state.closed);
+  };
+  /**
+   * Notes this store validated or wrote, by key with the record's save time and write count: a record
+   * read back unchanged is not validated again (a large library would otherwise be checked in full at
+   * every refresh). Any write from elsewhere changes the save time, so it is validated afresh.
+   */
+  const checked = new Map<string, { stamp: string; saved: SavedNote }>();
+  const stampOf = (raw: unknown) => {
+    const r = raw as Partial<NoteRecord> | null;
+    return r && typeof r === "object" ? `${String(r.savedAt)}|${recordRev(raw)}|${String(r.origin)}` : "";
+  };
+  const remember = (rec: NoteRecord): SavedNote => {
+    const saved: SavedNote = { origin: rec.origin, savedAt: rec.savedAt, rev: rec.rev ?? 0, ...(rec.flags ? { flags: rec.flags } : {}), note: rec.note };
+    checked.set(rec.id, { stamp: stampOf(rec), saved });
+    return saved;
+  };
+  const check = (key: IDBValidKey, raw: unknown) => {
+    if (typeof key === "string") {
+      const hit = checked.get(key);
+      if (hit && hit.stamp === stampOf(raw) && raw && typeof raw === "object" && (raw as NoteRecord).note?.id === key) return { ok: true as const, saved: hit.saved };
+    }
+    const r = checkRecord(key, raw);
+    if (r.ok && typeof key === "string") checked.set(key, { stamp: stampOf(raw), saved: r.saved });
+    return r;
+  };
+
   async function readAll(): Promise<{ valid: Map<string, SavedNote>; problems: RecordProblem[]; keys: Set<string> }> {
+    open();
+    // All records in one request each for keys and values: far quicker than a cursor over a large library.
     const tx = db.transaction("notes", "readonly");
+    const [keys, values] = await Promise.all([tx.store.getAllKeys(), tx.store.getAll()]);
+    await tx.done;
     const valid = new Map<string, SavedNote>();
     const problems: RecordProblem[] = [];
-    const keys = new Set<string>();
-    let cursor = await tx.store.openCursor();
-    while (cursor) {
-      keys.add(String(cursor.key));
-      const r = checkRecord(cursor.key, cursor.value);
+    keys.forEach((key, k) => {
+      const r = check(key, values[k]);
       if (r.ok) valid.set(r.saved.note.id, r.saved);
       else problems.push(r.problem);
-      cursor = await cursor.continue();
-    }
-    await tx.done;
-    return { valid, problems, keys };
+    });
+    return { valid, problems, keys: new Set(keys.map(keyText)) };
   }
 
   const byName = (a: SavedNote, b: SavedNote) => a.note.name.localeCompare(b.note.name) || a.note.id.localeCompare(b.note.id);
@@ -148,37 +236,67 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
     },
 
     async get(id) {
+      open();
       const raw = await db.get("notes", id);
       if (raw === undefined) return { status: "missing" };
-      const r = checkRecord(id, raw);
+      const r = check(id, raw);
       return r.ok ? { status: "ok", saved: r.saved } : { status: "damaged", problem: r.problem };
     },
 
-    async put(note, origin = "mine") {
+    async put(note, origin = "mine", base) {
+      open();
       const parsed = parseLocationNote(note);
       if (!parsed.ok) return { ok: false, issues: parsed.issues };
-      const rec = makeRecord(parsed.value, origin, now());
-      await db.put("notes", rec);
-      return { ok: true, saved: { origin: rec.origin, savedAt: rec.savedAt, note: rec.note } };
+      const id = parsed.value.id;
+      // Read and write in one transaction, so no other save can come between the check and the write.
+      const tx = db.transaction("notes", "readwrite");
+      const raw = (await tx.store.get(id)) as unknown;
+      const stored = raw === undefined ? undefined : checkRecord(id, raw);
+      let conflict: SaveConflict | undefined;
+      if (base === "new" && stored) conflict = { id, ...(stored.ok ? { theirs: stored.saved } : { damaged: stored.problem }) };
+      else if (base !== undefined && base !== "new" && base !== "replace") {
+        if (!stored) conflict = { id };
+        else if (!stored.ok) conflict = { id, damaged: stored.problem };
+        else if (stored.saved.rev !== base.rev) conflict = { id, theirs: stored.saved };
+      }
+      if (conflict) {
+        await tx.done;
+        return { ok: false, issues: [], conflict };
+      }
+      const rec = makeRecord(parsed.value, origin, now(), recordRev(raw) + 1);
+      await tx.store.put(rec);
+      await tx.done;
+      return { ok: true, saved: remember(rec) };
     },
 
-    async delete(id) {
+    async delete(key) {
+      open();
       const tx = db.transaction("notes", "readwrite");
-      const had = (await tx.store.getKey(id)) !== undefined;
-      if (had) await tx.store.delete(id);
+      const had = (await tx.store.getKey(key as string)) !== undefined;
+      if (had) await tx.store.delete(key as string);
       await tx.done;
+      if (typeof key === "string") checked.delete(key);
       return had;
     },
 
-    async clear() {
-      await db.clear("notes");
+    async rawRecord(key) {
+      open();
+      return (await db.get("notes", key as string)) as unknown;
     },
 
-    async importBundle(notes, choose) {
-      // Validate again: the caller may hand in notes that did not come through readNotesText.
-      for (const [k, n] of notes.entries()) {
-        const p = parseLocationNote(n);
-        if (!p.ok) return { status: "failed", message: `Note ${k + 1} is not valid (${p.issues[0]?.path}: ${p.issues[0]?.message}); nothing was imported.` };
+    async clear() {
+      open();
+      await db.clear("notes");
+      checked.clear();
+    },
+
+    async importBundle(notes, choose, opts = {}) {
+      // Validate again unless the caller vouches for it: it may hand in notes that did not come through readNotesText.
+      if (!opts.validated) {
+        for (const [k, n] of notes.entries()) {
+          const p = parseLocationNote(n);
+          if (!p.ok) return { status: "failed", message: `Note ${k + 1} is not valid (${p.issues[0]?.path}: ${p.issues[0]?.message}); nothing was imported.` };
+        }
       }
       const ids = new Set<string>();
       for (const n of notes) {
@@ -187,7 +305,7 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
       }
       const { valid, problems, keys } = await readAll();
       const mine = new Map([...valid].map(([id, s]) => [id, s.note]));
-      const preview = previewMerge(notes, mine, new Set(problems.map((p) => p.key)));
+      const preview = previewMerge(notes, mine, new Map(problems.map((p) => [p.key, p.message])));
       let choices: Record<string, ConflictChoice> = {};
       if (preview.conflicts.length > 0) {
         const chosen = await choose(preview.conflicts);
@@ -200,12 +318,14 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
       } catch (e) {
         return { status: "failed", message: `${(e as Error).message}; nothing was imported.` };
       }
+      open();
       const at = now();
+      const records = writes.put.map((n) => makeRecord(n, "imported", at, (valid.get(n.id)?.rev ?? 0) + 1));
       // One transaction for every write: if any write fails, the transaction aborts and none is kept.
       const tx = db.transaction("notes", "readwrite");
       const pending: Promise<unknown>[] = [observed(tx.done)];
       try {
-        for (const n of writes.put) pending.push(observed(tx.store.put(makeRecord(n, "imported", at))));
+        for (const rec of records) pending.push(observed(tx.store.put(rec)));
         await Promise.all(pending);
       } catch (e) {
         try {
@@ -216,6 +336,7 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
         await Promise.allSettled(pending);
         return { status: "failed", message: `The device refused to save the notes (${(e as Error).message || (e as Error).name}); nothing was imported.` };
       }
+      for (const rec of records) remember(rec);
       return { status: "applied", summary: writes.summary };
     },
 
@@ -231,15 +352,18 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
     },
 
     async lastExport() {
+      open();
       return db.get("meta", "lastExport");
     },
 
-    async exportReminder(at = now()) {
-      const [last, { notes }] = await Promise.all([db.get("meta", "lastExport"), this.list()]);
+    async exportReminder(at = now(), list) {
+      open();
+      const [last, { notes }] = await Promise.all([db.get("meta", "lastExport"), list ?? this.list()]);
       return exportReminder(last, at, notes.some((s) => s.origin !== "demo"));
     },
 
     async restoreDemos() {
+      open();
       const tx = db.transaction("notes", "readwrite");
       let added = 0;
       for (const d of demos) {
@@ -250,6 +374,10 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
       }
       await tx.done;
       return added;
+    },
+
+    closed() {
+      return state.closed;
     },
 
     close() {

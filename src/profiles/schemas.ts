@@ -46,10 +46,11 @@ export const railConditionSchema = z.enum(RAIL_CONDITIONS);
 
 /** Curve radius: 0 for straight track, otherwise at least 80 m. */
 const curveRadius = () =>
+  // No upper bound: a larger radius only comes nearer straight track, which is harmless.
   z.number().check(z.refine((r) => r === 0 || r >= 80, { message: "must be 0 (straight) or at least 80 m" }));
 
 /** Gradient within what adhesion railways operate: ±60 ‰. */
-const gradient = () => z.number().check(z.gte(-60), z.lte(60));
+const gradient = () => within(-60, 60, "‰");
 
 // ---------------------------------------------------------------- locomotive profile
 const notchFractions = () =>
@@ -218,7 +219,7 @@ export const referenceTrainSchema = z.object({
   train: id(),
   locomotive: z.optional(id()),
   count: z.optional(z.int().check(z.gte(1), z.lte(8))),
-  temperature_C: z.optional(z.number().check(z.gte(-60), z.lte(60))),
+  temperature_C: z.optional(within(-60, 60, "°C")),
 });
 export type ReferenceTrainFile = z.infer<typeof referenceTrainSchema>;
 
@@ -291,7 +292,7 @@ export type TrainFile = z.infer<typeof trainSchema>;
 export const conditionsSchema = z.object({
   rail: railConditionSchema,
   sand: z.boolean(),
-  temperature_C: z.number().check(z.gte(-60), z.lte(60)),
+  temperature_C: within(-60, 60, "°C"),
 });
 
 export const targetSchema = z.union([

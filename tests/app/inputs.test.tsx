@@ -28,7 +28,7 @@ describe("Start plan inputs", () => {
     const mass = input(/^Trailing mass/);
     fireEvent.input(mass, { target: { value: "-5" } });
     const issue = fieldOf(mass).querySelector(".field-issue");
-    expect(issue?.textContent).toBe("Trailing mass must be greater than 0 t (got −5 t)");
+    expect(issue?.textContent).toBe("Trailing mass must be from 5 to 60,000 t (got −5 t)");
     expect(mass.getAttribute("aria-invalid")).toBe("true");
     expect(harness.state.draft.checked().ok).toBe(false);
     // The summary names the field too.
@@ -36,7 +36,7 @@ describe("Start plan inputs", () => {
     expect(harness.state.run.status()).toBe("invalid");
 
     harness.state.settings.update({ units: "us" });
-    await waitFor(() => expect(fieldOf(mass).querySelector(".field-issue")?.textContent).toBe("Trailing mass must be greater than 0 short tons (got −6 short tons)"));
+    await waitFor(() => expect(fieldOf(mass).querySelector(".field-issue")?.textContent).toBe("Trailing mass must be from 5.51 to 66,139 short tons (got −6 short tons)"));
 
     fireEvent.input(mass, { target: { value: "1653.47" } });
     expect(fieldOf(mass).querySelector(".field-issue")).toBeNull();
@@ -55,7 +55,7 @@ describe("Start plan inputs", () => {
     harness.state.settings.update({ units: "us" });
     const slack = input(/^Free slack per coupling/);
     fireEvent.input(slack, { target: { value: "10" } });
-    expect(fieldOf(slack).querySelector(".field-issue")?.textContent).toBe("Free slack per coupling must be at most 7.87 in (got 10 in)");
+    expect(fieldOf(slack).querySelector(".field-issue")?.textContent).toBe("Free slack per coupling must be from 0 to 7.87 in (got 10 in)");
     expect(harness.state.draft.draft.train.couplerSlack_mm).toBeCloseTo(254, 9);
   });
 
@@ -64,7 +64,7 @@ describe("Start plan inputs", () => {
     fireEvent.click(screen.getByRole("radio", { name: /Quick entry/ }));
     const grade = input(/^Gradient under the train/);
     fireEvent.input(grade, { target: { value: "75" } });
-    expect(fieldOf(grade).querySelector(".field-issue")?.textContent).toBe("Gradient under the train (rising +) must be at most 60 ‰ (got 75 ‰)");
+    expect(fieldOf(grade).querySelector(".field-issue")?.textContent).toBe("Gradient under the train (rising +) must be from −60 to 60 ‰ (got 75 ‰)");
 
     fireEvent.click(screen.getByRole("radio", { name: "A distance cleared" }));
     const dist = input(/^Target distance/);

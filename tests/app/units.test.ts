@@ -94,6 +94,16 @@ describe("rules broken, in the user's units", () => {
     expect(localiseIssue(r, "metric").message).toBe("must be 0 (straight) or at least 80 m");
   });
 
+  it("rewrites a range and a figure per wagon (the schema's physical ranges)", () => {
+    const t = { path: "train.trailingMass_t", message: "must be from 5 to 60000 t (got 2)" };
+    expect(localiseIssue(t, "metric").message).toBe("must be from 5 to 60,000 t (got 2 t)");
+    // 1 short ton = 907.18474 kg (NIST SP 811, appendix B.8): 5 t = 5.51, 60 000 t = 66 138.7, 2 t = 2.20 short tons.
+    expect(localiseIssue(t, "us").message).toBe("must be from 5.51 to 66,139 short tons (got 2 short tons)");
+    const w = { path: "train.trailingMass_t", message: "must give from 5 to 150 t per wagon (got 0.2 t per wagon over 30 wagons)" };
+    // 0.2 t = 0.220 short tons, to three significant figures.
+    expect(localiseIssue(w, "us").message).toBe("must give from 5.51 to 165 short tons per wagon (got 0.22 short tons per wagon over 30 wagons)");
+  });
+
   it("says 'must be a number' for text that is not one, and leaves fields without units alone", () => {
     expect(localiseIssue({ path: "train.trailingMass_t", message: "must be a number (got NaN)" }, "us").message).toBe("must be a number");
     const w = { path: "train.wagons", message: "must be at most 400 (got 500)" };

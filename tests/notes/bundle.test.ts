@@ -167,7 +167,7 @@ describe("import conflicts: same id, another revision", () => {
     });
     expect(asked).toHaveLength(1);
     expect(asked[0]!.map((c) => c.id)).toEqual(["brackenfold-up-main"]);
-    expect(latestRevision(asked[0]![0]!.mine).change).toBe("First survey.");
+    expect(latestRevision(asked[0]![0]!.mine!).change).toBe("First survey.");
     expect(latestRevision(asked[0]![0]!.theirs).change).toBe("Signal moved back 120 m.");
     expect(asked[0]![0]!.sameRevision).toBe(false);
     expect(outcome.status === "applied" && outcome.summary.keptMine).toEqual(["brackenfold-up-main"]);

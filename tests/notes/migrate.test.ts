@@ -46,6 +46,7 @@ describe("migrateV1Record", () => {
       id: "harrowby-goods-loop",
       origin: "mine",
       savedAt: "2025-11-20T00:00:00.000Z",
+      rev: 1,
       note: {
         schema: "taut/location@1",
         id: "harrowby-goods-loop",
@@ -70,12 +71,28 @@ describe("migrateV1Record", () => {
     });
   });
 
-  it("refuses a record it cannot carry over, naming the field", () => {
-    const m = migrateV1Record({ ...v1Note, rail: { winter: "snowy" } });
+  it("carries over what is valid and flags the rest: an unknown season or rail word does not lose the note", () => {
+    const m = migrateV1Record({ ...v1Note, rail: { winter: "snowy", autumn: "leaves", monsoon: "wet" }, hazards: ["Points ahead", 42] });
+    expect(m.ok).toBe(true);
+    if (!m.ok) return;
+    expect(m.record.note.seasons).toEqual([{ season: "autumn", rail: "leaves" }]);
+    expect(m.record.note.hazards).toEqual([{ kind: "other", note: "Points ahead" }]);
+    expect(m.record.flags).toEqual([
+      "Hazard 2 was not text and was left out.",
+      'The usual rail in winter, "snowy", was left out: not one of dry, damp, wet, frost, leaves, greasy.',
+      'The usual rail for "monsoon" was left out: not a season (spring, summer, autumn, winter).',
+    ]);
+  });
+
+  it("a record it still cannot carry over gives the reason, the note as far as it goes, and the flags", () => {
+    const steep = { ...v1Note, rail: { winter: "snowy" }, profile: { ...v1Note.profile, segments: [{ start_m: 0, length_m: 1600, grade_permille: 90, radius_m: 0 }] } };
+    const m = migrateV1Record(steep);
     expect(m.ok).toBe(false);
     if (m.ok) return;
-    expect(m.message).toContain("seasons[0].rail: must be one of");
-    expect(migrateV1Record(null)).toEqual({ ok: false, message: "not an object" });
+    expect(m.message).toBe("segments[0].gradient_permille: must be from -60 to 60 ‰ (got 90)");
+    expect(m.partial).toMatchObject({ id: "harrowby-goods-loop", name: "Harrowby goods loop (test)", segments: [{ from_m: 0, length_m: 1600, gradient_permille: 90, curveRadius_m: 0 }] });
+    expect(m.flags).toHaveLength(1);
+    expect(migrateV1Record(null)).toEqual({ ok: false, message: "not an object", partial: {}, flags: [] });
   });
 });
 
@@ -91,7 +108,14 @@ describe("opening a version-1 database", () => {
     expect(notes.some((s) => demos.some((d) => d.id === s.note.id))).toBe(false);
     expect(notes.find((s) => s.note.id === "demo-one")!.origin).toBe("demo");
     expect(notes.find((s) => s.note.id === "demo-one")!.note.illustrative).toBe(true);
-    expect(problems).toEqual([{ key: "broken-one", message: 'The saved note "broken-one" is damaged and was skipped: it is in an older format that could not be carried over' }]);
+    // The reason is kept, and what could be carried over is offered for the editor.
+    expect(problems).toHaveLength(1);
+    expect(problems[0]).toMatchObject({
+      key: "broken-one",
+      rawKey: "broken-one",
+      message: 'The saved note "broken-one" is damaged and was skipped: it is in an older format that could not be carried over (name: must not be empty; revisions[0].date: must be a date as YYYY-MM-DD (got "last week"))',
+      rescue: { note: { id: "broken-one", practice: v1Note.practice }, flags: [] },
+    });
     store.close();
 
     const db = await openDB(name);

@@ -16,7 +16,7 @@ const EXPECTED: Record<string, { path: string; message: RegExp }> = {
   "negative-mass.json": { path: "train.trailingMass_t", message: /^must be from 5 to 60000 t \(got -100\)$/ },
   "unknown-rail-condition.json": { path: "conditions.rail", message: /^must be one of "dry", "damp", "wet", "frost", "leaves", "greasy" \(got "icy"\)$/ },
   "curve-radius-50.json": { path: "location.curveRadius_m", message: /^must be 0 \(straight\) or at least 80 m/ },
-  "gradient-75.json": { path: "location.gradient_permille", message: /^must be at most 60 \(got 75\)$/ },
+  "gradient-75.json": { path: "location.gradient_permille", message: /^must be from -60 to 60 ‰ \(got 75\)$/ },
   "after-wagon-beyond-train.json": { path: "locomotives[1].position.afterWagon", message: /^must be less than the number of wagons \(40\) \(got 40\)$/ },
   "unknown-locomotive-profile.json": { path: "locomotives[0].profile", message: /^names no known locomotive profile \("illustrative-9axle-9999"; known: .*illustrative-6axle-1800/ },
   "segments-gap.json": { path: "location.segments[1].from_m", message: /^leaves a gap of 20 m after the previous segment \(which ends at 500 m\)$/ },

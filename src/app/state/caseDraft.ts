@@ -3,7 +3,7 @@
  * km/h, m, ‰, °C). `draftToFile` turns it into the `taut/start-case@1` shape the worker and the command
  * line read; `draftFromFile` fills it from a case file. Pure functions, no Solid.
  */
-import type { RailCondition } from "../../core/physics/types.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
 import type { SlackState } from "../../core/train/types.js";
 import type { StartCaseFile, TrainPresetFile } from "../../profiles/schemas.js";
 
@@ -165,17 +165,88 @@ export function draftToFile(d: CaseDraft, settings?: CaseSettings): Record<strin
 
 /** Whether a value read back from storage has the draft's shape (a stale or foreign value is ignored). */
 export function looksLikeDraft(x: unknown): x is CaseDraft {
-  if (!x || typeof x !== "object") return false;
-  const d = x as Partial<CaseDraft>;
-  return (
-    Array.isArray(d.locomotives) &&
-    d.locomotives.length > 0 &&
-    typeof d.train === "object" &&
-    d.train !== null &&
-    typeof d.quick === "object" &&
-    typeof d.conditions === "object" &&
-    typeof d.target === "object" &&
-    (d.locationMode === "note" || d.locationMode === "quick" || (d.locationMode === "profile" && typeof d.profile === "object" && d.profile !== null)) &&
-    (d.targetKind === "speed" || d.targetKind === "distance")
-  );
+  return storedDraft(x).ok;
+}
+
+type Check = (v: unknown) => boolean;
+const isText: Check = (v) => typeof v === "string";
+const isFlag: Check = (v) => typeof v === "boolean";
+/** A number, or null: a field left empty is NaN in the draft, which JSON writes as null. */
+const isNumber: Check = (v) => typeof v === "number" || v === null;
+const oneOf =
+  (...words: readonly string[]): Check =>
+  (v) =>
+    typeof v === "string" && words.includes(v);
+
+/** The draft's shape, field by field: what each field must hold. */
+const SHAPE = {
+  top: { id: isText, label: isText, illustrative: isFlag, locationMode: oneOf("note", "quick", "profile"), noteId: isText, targetKind: oneOf("speed", "distance") },
+  loco: { profile: isText, count: isNumber, position: oneOf("head", "rear", "after"), afterWagon: isNumber },
+  train: {
+    trailingMass_t: isNumber,
+    wagons: isNumber,
+    length_m: isNumber,
+    couplerSlack_mm: isNumber,
+    bearing: oneOf("roller", "plain"),
+    couplerLimit_kN: isNumber,
+    coupling: oneOf("knuckle", "screw"),
+    wagonType: isText,
+    slackState: oneOf("bunched", "stretched", "from-profile"),
+  },
+  quick: { gradient_permille: isNumber, curveRadius_m: isNumber, clearAhead_m: isNumber },
+  conditions: { rail: oneOf(...RAIL_CONDITIONS), sand: isFlag, temperature_C: isNumber },
+  target: { speed_kmh: isNumber, distance_m: isNumber },
+  profile: { frontAt_m: isNumber, clearAhead_m: isNumber },
+  segment: { from_m: isNumber, length_m: isNumber, gradient_permille: isNumber, curveRadius_m: isNumber },
+} as const;
+
+/** The first field of `x` that breaks `shape`, as "path: what it holds", or undefined. */
+function shapeProblem(x: unknown, shape: Record<string, Check>, at: string): string | undefined {
+  if (!x || typeof x !== "object" || Array.isArray(x)) return `${at || "the inputs"}: not an object`;
+  for (const [k, ok] of Object.entries(shape)) {
+    const v = (x as Record<string, unknown>)[k];
+    if (!ok(v)) return `${at ? `${at}.` : ""}${k}: ${v === undefined ? "missing" : `${JSON.stringify(v)?.slice(0, 40) ?? typeof v} is not allowed here`}`;
+  }
+  return undefined;
+}
+
+/** Empty fields come back from JSON as null: NaN again, as the draft keeps them. */
+function revive<T>(x: T): T {
+  if (Array.isArray(x)) return x.map(revive) as T;
+  // `profile` is null when the case has no track profile of its own; every other null is an empty number field.
+  if (x && typeof x === "object") return Object.fromEntries(Object.entries(x).map(([k, v]) => [k, v === null ? (k === "profile" ? null : Number.NaN) : revive(v)])) as T;
+  return x;
+}
+
+/**
+ * A draft read back from storage, checked field by field (every word one the screen knows, every number
+ * a number), or why it cannot be used. A draft from another version of the app, or damaged, must not
+ * reach the screen: an unknown coupling word there stops the whole app from drawing.
+ */
+export function storedDraft(x: unknown): { ok: true; draft: CaseDraft } | { ok: false; reason: string } {
+  const fail = (reason: string) => ({ ok: false as const, reason });
+  const top = shapeProblem(x, SHAPE.top, "");
+  if (top) return fail(top);
+  const d = x as Record<string, unknown>;
+  for (const part of ["train", "quick", "conditions", "target"] as const) {
+    const p = shapeProblem(d[part], SHAPE[part], part);
+    if (p) return fail(p);
+  }
+  if (!Array.isArray(d.locomotives) || d.locomotives.length === 0) return fail("locomotives: none listed");
+  // The track profile a case file carried: absent or null unless that is the location used.
+  if (d.profile !== undefined && d.profile !== null) {
+    const p = shapeProblem(d.profile, SHAPE.profile, "profile");
+    if (p) return fail(p);
+    const segs = (d.profile as { segments?: unknown }).segments;
+    if (!Array.isArray(segs) || segs.length === 0) return fail("profile.segments: none listed");
+    for (const [k, s] of segs.entries()) {
+      const q = shapeProblem(s, SHAPE.segment, `profile.segments[${k}]`);
+      if (q) return fail(q);
+    }
+  } else if (d.locationMode === "profile") return fail("profile: missing");
+  for (const [k, l] of d.locomotives.entries()) {
+    const p = shapeProblem(l, SHAPE.loco, `locomotives[${k}]`);
+    if (p) return fail(p);
+  }
+  return { ok: true, draft: revive(d) as unknown as CaseDraft };
 }

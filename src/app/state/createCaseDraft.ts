@@ -13,10 +13,18 @@ import type { StartCaseFile, TrainPresetFile } from "../../profiles/schemas.js";
 import { localiseIssue } from "../fields.js";
 import type { AppSettings } from "./createSettings.js";
 import { read, safeLocalStorage, write } from "./createSettings.js";
-import { applyPreset, draftFromFile, draftToFile, looksLikeDraft, type CaseDraft, type DraftLoco } from "./caseDraft.js";
+import { applyPreset, draftFromFile, draftToFile, storedDraft, type CaseDraft, type DraftLoco } from "./caseDraft.js";
 import { validateDraft } from "./validateDraft.js";
 
 export const DRAFT_KEY = "taut.case.v1";
+/** Where a stored draft that cannot be used is kept (for export), instead of being thrown away. */
+export const SET_ASIDE_KEY = "taut.case.v1.set-aside";
+
+/** A stored draft that could not be used: its text as stored, and why. */
+export interface SetAsideDraft {
+  text: string;
+  reason: string;
+}
 
 /** Read every field of a store so an effect re-runs on any change inside it. */
 function trackDeep(x: unknown): void {
@@ -42,6 +50,10 @@ export interface CaseDraftStore {
   issues: Accessor<FieldIssue[]>;
   /** The first issue at one of these field paths (e.g. "train.trailingMass_t"). */
   issueAt(...paths: string[]): FieldIssue | undefined;
+  /** The stored inputs set aside at launch because they could not be used (the demo opened instead). */
+  setAside: Accessor<SetAsideDraft | null>;
+  /** The notice about them has been read (the set-aside copy stays until the next one replaces it). */
+  dismissSetAside(): void;
 }
 
 export interface CaseDraftDeps {
@@ -58,15 +70,21 @@ export function demoCaseFile(): StartCaseFile {
 export function createCaseDraft(deps: CaseDraftDeps): CaseDraftStore {
   const storage = deps.storage === undefined ? safeLocalStorage() : deps.storage;
   const couplingOf = (id: string) => deps.library().wagons.get(id)?.coupling;
+  const [setAside, setSetAside] = createSignal<SetAsideDraft | null>(null);
   const stored = (() => {
     const raw = read(storage, DRAFT_KEY);
     if (!raw) return undefined;
+    let r: ReturnType<typeof storedDraft>;
     try {
-      const x: unknown = JSON.parse(raw);
-      return looksLikeDraft(x) ? x : undefined;
+      r = storedDraft(JSON.parse(raw));
     } catch {
-      return undefined;
+      r = { ok: false, reason: "the stored text is not complete JSON" };
     }
+    if (r.ok) return r.draft;
+    // Kept, not lost: set aside for export, and the app opens on the demo case with a notice.
+    write(storage, SET_ASIDE_KEY, raw);
+    setSetAside({ text: raw, reason: r.reason });
+    return undefined;
   })();
   const [draft, setDraft] = createStore<CaseDraft>(stored ?? draftFromFile(demoCaseFile(), couplingOf));
   const [edited, setEdited] = createSignal(false);
@@ -135,5 +153,7 @@ export function createCaseDraft(deps: CaseDraftDeps): CaseDraftStore {
     checked,
     issues,
     issueAt: (...paths) => issues().find((i) => paths.includes(i.path)),
+    setAside,
+    dismissSetAside: () => setSetAside(null),
   };
 }

@@ -22,7 +22,7 @@ export function ConflictDialog(props: { conflicts: readonly ImportConflict[]; on
   const all = (c: ConflictChoice) => {
     for (const x of props.conflicts) setChoices(x.id, c);
   };
-  const rev = (n: ImportConflict["mine"]) => {
+  const rev = (n: ImportConflict["theirs"]) => {
     const r = latestRevision(n);
     return `revised ${r.date} by ${r.initials}: ${r.change}`;
   };
@@ -48,18 +48,29 @@ export function ConflictDialog(props: { conflicts: readonly ImportConflict[]; on
           <For each={props.conflicts}>
             {(c) => (
               <li>
-                <h3>{c.mine.name}</h3>
-                <p>
-                  <strong>On this device:</strong> {rev(c.mine)}
-                </p>
+                <h3>{c.mine?.name ?? c.theirs.name}</h3>
+                <Show
+                  when={c.mine}
+                  fallback={
+                    <p>
+                      <strong>On this device:</strong> a damaged record of this id that cannot be shown ({c.damaged}). Keep mine leaves it as it is (export it raw from the library first if you may want it); take theirs replaces it.
+                    </p>
+                  }
+                >
+                  {(mine) => (
+                    <p>
+                      <strong>On this device:</strong> {rev(mine())}
+                    </p>
+                  )}
+                </Show>
                 <p>
                   <strong>In the file:</strong> {rev(c.theirs)}
-                  {c.theirs.name !== c.mine.name ? ` (named "${c.theirs.name}")` : ""}
+                  {c.mine && c.theirs.name !== c.mine.name ? ` (named "${c.theirs.name}")` : ""}
                 </p>
                 <Show when={c.sameRevision}>
                   <p class="notes-small">Both carry the same last revision entry, yet they differ: one was changed without a new revision entry.</p>
                 </Show>
-                <SegmentedButtons label={`For ${c.mine.name}`} hideLabel options={OPTIONS} value={choices[c.id] ?? ("" as ConflictChoice)} onChange={(v) => setChoices(c.id, v)} />
+                <SegmentedButtons label={`For ${c.mine?.name ?? c.theirs.name}`} hideLabel options={OPTIONS} value={choices[c.id] ?? ("" as ConflictChoice)} onChange={(v) => setChoices(c.id, v)} />
               </li>
             )}
           </For>

@@ -3,7 +3,7 @@
  * where it came from), damaged records with the reason and a way to remove them, the export reminder,
  * and the library's actions: new note, import a file, export all, put back the demo notes, remove all.
  */
-import { createSignal, For, Show, type JSX } from "solid-js";
+import { createMemo, createSignal, For, Show, type JSX } from "solid-js";
 import { latestRevision } from "../../../profiles/notes.js";
 import type { RecordProblem, SavedNote } from "../../../notes/records.js";
 import type { ExportReminder, PersistResult } from "../../../notes/reminder.js";
@@ -27,13 +27,22 @@ export interface LibraryProps {
   onRailml?: () => void;
   onExportAll: () => void;
   onRestoreDemos: () => void;
-  onRemove: (id: string) => void;
+  /** Remove a note or a damaged record by its key as stored. */
+  onRemove: (key: IDBValidKey) => void;
   onRemoveAll: () => void;
+  /** Save a damaged record as it is stored, to keep or to send. */
+  onExportRaw: (problem: RecordProblem) => void;
+  /** Open what an older record could carry over in the editor, to put the rest right. */
+  onRescue: (problem: RecordProblem) => void;
 }
+
+/** Notes shown at first, and how many more each "Show more" adds: a long library stays quick to draw. */
+export const LIBRARY_PAGE = 100;
 
 const ORIGIN_WORD = { demo: "demo note", mine: "yours", imported: "imported" } as const;
 
 export function NoticeBox(props: { notice: Notice; onDismiss: () => void }): JSX.Element {
+  const reload = () => location.reload();
   return (
     <div class="notes-notice" classList={{ problem: props.notice.kind === "problem" }} role={props.notice.kind === "problem" ? "alert" : "status"}>
       <p>
@@ -48,6 +57,11 @@ export function NoticeBox(props: { notice: Notice; onDismiss: () => void }): JSX
           <p>…and {props.notice.details!.length - 12} more.</p>
         </Show>
       </Show>
+      <Show when={props.notice.reload}>
+        <button type="button" class="button small primary" onClick={reload}>
+          Reload the page
+        </button>
+      </Show>
       <button type="button" class="button small" onClick={() => props.onDismiss()}>
         OK
       </button>
@@ -58,6 +72,15 @@ export function NoticeBox(props: { notice: Notice; onDismiss: () => void }): JSX
 export function Library(props: LibraryProps): JSX.Element {
   let fileInput!: HTMLInputElement;
   const [confirmAll, setConfirmAll] = createSignal(false);
+  const [filter, setFilter] = createSignal("");
+  const [limit, setLimit] = createSignal(LIBRARY_PAGE);
+  /** The notes the filter keeps (name, line or direction, any case). */
+  const matching = createMemo(() => {
+    const f = filter().trim().toLowerCase();
+    if (f === "") return props.notes;
+    return props.notes.filter((s) => `${s.note.name} ${s.note.line ?? ""} ${s.note.direction ?? ""} ${s.note.id}`.toLowerCase().includes(f));
+  });
+  const shown = createMemo(() => matching().slice(0, limit()));
   const reminderText = () => {
     const r = props.reminder;
     if (!r?.due) return "";
@@ -123,8 +146,26 @@ export function Library(props: LibraryProps): JSX.Element {
 
       <Show when={props.ready} fallback={<p class="notes-hint">Opening the library…</p>}>
         <Show when={props.notes.length > 0} fallback={<p class="notes-empty">No notes yet. Make one with "New note", or import a notes file.</p>}>
+          <Show when={props.notes.length > LIBRARY_PAGE}>
+            <label class="notes-filter">
+              <span>Find a note</span>
+              <input
+                type="search"
+                value={filter()}
+                placeholder="Name, line or direction"
+                onInput={(e) => {
+                  setFilter(e.currentTarget.value);
+                  setLimit(LIBRARY_PAGE);
+                }}
+              />
+            </label>
+          </Show>
+          <p class="notes-small" aria-live="polite">
+            {matching().length === props.notes.length ? `${props.notes.length} notes` : `${matching().length} of ${props.notes.length} notes match`}
+            {shown().length < matching().length ? `; the first ${shown().length} are shown` : ""}
+          </p>
           <ul class="notes-list" aria-label="Saved location notes">
-            <For each={props.notes}>
+            <For each={shown()}>
               {(s) => {
                 const rev = () => latestRevision(s.note);
                 return (
@@ -138,6 +179,9 @@ export function Library(props: LibraryProps): JSX.Element {
                       <Show when={s.note.illustrative}>
                         <span class="notes-tag">Illustrative</span>
                       </Show>
+                      <Show when={s.flags && s.flags.length > 0}>
+                        <span class="notes-tag notes-flag">To check: {s.flags!.length} thing{s.flags!.length === 1 ? "" : "s"} not carried over</span>
+                      </Show>
                     </button>
                     <button type="button" class="button" aria-label={`Card of ${s.note.name}`} onClick={() => props.onCard(s.note.id)}>
                       Card
@@ -147,19 +191,40 @@ export function Library(props: LibraryProps): JSX.Element {
               }}
             </For>
           </ul>
+          <Show when={shown().length < matching().length}>
+            <button type="button" class="button" onClick={() => setLimit((n) => n + LIBRARY_PAGE)}>
+              Show {Math.min(LIBRARY_PAGE, matching().length - shown().length)} more
+            </button>
+          </Show>
         </Show>
       </Show>
 
       <Show when={props.problems.length > 0}>
         <section class="notes-damaged" aria-labelledby="notes-damaged-title">
           <h3 id="notes-damaged-title">Damaged records ({props.problems.length})</h3>
-          <p class="notes-hint">These records could not be read and are left out of the library and the pickers. The rest of the library is unaffected.</p>
+          <p class="notes-hint">
+            These records could not be read and are left out of the library and the pickers. The rest of the library is unaffected. Export a record before removing it: it keeps
+            everything it holds.
+          </p>
           <ul>
             <For each={props.problems}>
               {(p) => (
                 <li>
                   <span>{p.message}</span>
-                  <button type="button" class="button small" onClick={() => props.onRemove(p.key)}>
+                  <Show when={p.rescue && p.rescue.flags.length > 0}>
+                    <ul class="notes-small">
+                      <For each={p.rescue!.flags}>{(f) => <li>{f}</li>}</For>
+                    </ul>
+                  </Show>
+                  <Show when={p.rescue}>
+                    <button type="button" class="button small primary" onClick={() => props.onRescue(p)}>
+                      Put it right in the editor
+                    </button>
+                  </Show>
+                  <button type="button" class="button small" onClick={() => props.onExportRaw(p)}>
+                    Export record
+                  </button>
+                  <button type="button" class="button small" onClick={() => props.onRemove(p.rawKey)}>
                     Remove record
                   </button>
                 </li>

@@ -33,6 +33,8 @@ export interface NoteEditor {
   /** 0..1 while the load table is being worked out. */
   loadTableProgress: Accessor<number>;
   load(note: LocationNoteFile | undefined): void;
+  /** Go on with a draft kept from before (a reload, a rescued record); `saved` is the note it started from. */
+  restore(draft: NoteDraft, saved: LocationNoteFile | undefined): void;
   addSegment(): void;
   removeSegment(k: number): void;
   joinSegments(): void;
@@ -73,11 +75,20 @@ export function createNoteEditor(deps: NoteEditorDeps): NoteEditor {
     JSON.stringify(draft);
     return noteFromDraft(d, draft.id || "new");
   });
-  const changed = createMemo(() => {
+  /**
+   * The saved note as the editor would write it back unchanged: padded text trimmed, empty optional
+   * fields left out, the default reference train named. Compared with the draft in the same form, a note
+   * from a file that was written another way does not open as "changed".
+   */
+  const savedShape = createMemo(() => {
     const s = saved();
-    if (!s) return true;
-    // A note saved without a reference train is compared as if it named the default one.
-    return canonicalNote(asSavedShape() as LocationNoteFile) !== canonicalNote({ ...s, referenceTrain: s.referenceTrain ?? fallbackTrain() });
+    if (!s) return undefined;
+    const d = { ...draftFromNote(s, fallbackTrain(), ""), revision: { date: "", initials: "", change: "" } };
+    return canonicalNote(noteFromDraft(d, s.id) as LocationNoteFile);
+  });
+  const changed = createMemo(() => {
+    const s = savedShape();
+    return s === undefined || canonicalNote(asSavedShape() as LocationNoteFile) !== s;
   });
 
   const reference = createMemo(() => referenceSummary(draft.referenceTrain, deps.presets, deps.library()));
@@ -143,9 +154,15 @@ export function createNoteEditor(deps: NoteEditorDeps): NoteEditor {
     if (timer !== undefined) clearTimeout(timer);
   });
 
+  const restore = (d: NoteDraft, from: LocationNoteFile | undefined) => {
+    setSaved(from);
+    setDraft(reconcile(d));
+  };
+
   return {
     draft,
     set: setDraft,
+    restore,
     saved,
     changed,
     issues,

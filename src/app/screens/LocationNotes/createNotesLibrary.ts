@@ -3,19 +3,22 @@
  * reminder, and the actions (save, remove, import with conflict questions, export, restore demos).
  * Every change tells the other screens' location pickers to read the list again.
  */
-import { createSignal, type Accessor } from "solid-js";
-import { readNotesText, type NotesBundleFile } from "../../../profiles/notes.js";
+import { batch, createSignal, onCleanup, type Accessor } from "solid-js";
+import { readNotesText, type NotesBundleFile, type NotesFileResult } from "../../../profiles/notes.js";
 import type { FieldIssue } from "../../../profiles/issues.js";
 import type { ConflictChoice, ImportConflict } from "../../../notes/merge.js";
 import { requestPersistentStorage, type ExportReminder, type PersistResult } from "../../../notes/reminder.js";
 import type { RecordProblem, SavedNote } from "../../../notes/records.js";
-import type { NotesStore, PutResult } from "../../../notes/store.js";
+import { NotesClosedError, type NotesStore, type PutResult, type SaveBase } from "../../../notes/store.js";
+import { readNotesFile, type TextSource } from "./notesFile.js";
 
 export interface Notice {
   kind: "done" | "problem";
   text: string;
   /** Field issues behind a problem (path: message). */
   details?: string[];
+  /** The library was closed under the page (another tab upgraded it): offer to reload. */
+  reload?: boolean;
 }
 
 export interface NotesLibrary {
@@ -29,12 +32,20 @@ export interface NotesLibrary {
   notice: Accessor<Notice | null>;
   setNotice(n: Notice | null): void;
   refresh(): Promise<void>;
-  save(note: unknown): Promise<PutResult>;
-  remove(id: string): Promise<void>;
+  /** Save a note; `base` is the stored note it started from (a conflict comes back when that changed). */
+  save(note: unknown, base?: SaveBase): Promise<PutResult>;
+  /** Remove a note or a damaged record by its key as stored. */
+  remove(key: IDBValidKey): Promise<void>;
+  /** A damaged record exactly as stored, as JSON text to keep, or undefined. */
+  rawText(key: IDBValidKey): Promise<string | undefined>;
+  /** Why the library was closed under the page, if it was. */
+  closed: Accessor<"upgrade" | "terminated" | undefined>;
   /** Remove every note (the trainer confirmed). */
   removeAll(): Promise<void>;
   /** Read a file's text and import it; conflicts go to `ask` (null cancels). */
   importText(text: string, fileName: string, ask: (c: ImportConflict[]) => Promise<Record<string, ConflictChoice> | null>): Promise<void>;
+  /** Read a file off the page's thread and import it; conflicts go to `ask` (null cancels). */
+  importFile(file: TextSource, fileName: string, ask: (c: ImportConflict[]) => Promise<Record<string, ConflictChoice> | null>): Promise<void>;
   /** A bundle of all notes (remembered as the last export) or of the given ones. */
   exportBundle(ids?: string[]): Promise<NotesBundleFile | undefined>;
   restoreDemos(): Promise<void>;
@@ -45,6 +56,10 @@ export interface NotesLibraryDeps {
   /** Called after any change to the library (the pickers re-read it). */
   changed?: () => void;
   storage?: Parameters<typeof requestPersistentStorage>[0];
+  /** How a file to import is read and checked (default: in a worker, see notesFile.ts). */
+  readFile?: (file: TextSource) => Promise<NotesFileResult>;
+  /** Subscribe to the store being closed under the page; returns a way to stop. */
+  onClosed?: (f: (reason: "upgrade" | "terminated") => void) => () => void;
 }
 
 const issueLines = (issues: readonly FieldIssue[]) => issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message));
@@ -57,13 +72,36 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
   const [reminder, setReminder] = createSignal<ExportReminder | undefined>();
   const [persisted, setPersisted] = createSignal<PersistResult | undefined>();
   const [notice, setNotice] = createSignal<Notice | null>(null);
+  const [closed, setClosed] = createSignal<"upgrade" | "terminated" | undefined>();
   let store: NotesStore | undefined;
   let asked = false;
+
+  /** The library was closed under the page: say so, with a way to reload; the editor's draft is kept. */
+  const closedNotice = (e: NotesClosedError) => {
+    setClosed(e.reason);
+    setNotice({ kind: "problem", text: e.message, reload: true });
+  };
+  /** Run a library action; a closed library is reported, not thrown. */
+  async function guarded<T>(f: (s: NotesStore) => Promise<T>): Promise<T | undefined> {
+    const s = await open();
+    if (!s) return undefined;
+    try {
+      return await f(s);
+    } catch (e) {
+      if (e instanceof NotesClosedError) {
+        closedNotice(e);
+        return undefined;
+      }
+      throw e;
+    }
+  }
 
   const open = async (): Promise<NotesStore | undefined> => {
     if (store) return store;
     try {
       store = await deps.openStore();
+      const why = store.closed();
+      if (why) closedNotice(new NotesClosedError(why));
       return store;
     } catch (e) {
       setFailure(`The notes library could not be opened on this device (${(e as Error).message || (e as Error).name}). Notes cannot be saved here.`);
@@ -73,13 +111,17 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
   };
 
   const refresh = async () => {
-    const s = await open();
-    if (!s) return;
-    const [list, rem] = await Promise.all([s.list(), s.exportReminder()]);
-    setNotes(list.notes);
-    setProblems(list.problems);
-    setReminder(rem);
-    setReady(true);
+    await guarded(async (s) => {
+      // One read of the library serves the list and the export reminder.
+      const list = await s.list();
+      const rem = await s.exportReminder(undefined, list);
+      batch(() => {
+        setNotes(list.notes);
+        setProblems(list.problems);
+        setReminder(rem);
+        setReady(true);
+      });
+    });
   };
 
   /** After the first write, ask the browser to keep the notes (asked once per session). */
@@ -95,7 +137,37 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
     void keepSafe();
   };
 
+  const importRead = async (read: NotesFileResult, fileName: string, ask: (c: ImportConflict[]) => Promise<Record<string, ConflictChoice> | null>, validated: boolean) => {
+    if (!read.ok) {
+      setNotice({ kind: "problem", text: `${fileName}: ${read.message}`, details: issueLines(read.issues) });
+      return;
+    }
+    const outcome = await guarded((s) => s.importBundle(read.notes, ask, { validated }));
+    if (outcome === undefined) return;
+    if (outcome.status === "cancelled") {
+      setNotice({ kind: "done", text: `Import of ${fileName} cancelled; nothing was changed.` });
+      return;
+    }
+    if (outcome.status === "failed") {
+      setNotice({ kind: "problem", text: `${fileName}: ${outcome.message}` });
+      return;
+    }
+    await afterChange();
+    const sm = outcome.summary;
+    const parts = [
+      sm.added.length > 0 ? `${sm.added.length} added` : "",
+      sm.repaired.length > 0 ? `${sm.repaired.length} damaged record${sm.repaired.length === 1 ? "" : "s"} replaced by the file's note` : "",
+      sm.replaced.length > 0 ? `${sm.replaced.length} replaced by the file's version` : "",
+      sm.keptMine.length > 0 ? `${sm.keptMine.length} kept as yours` : "",
+      sm.copies.length > 0 ? `${sm.copies.length} kept both (the file's as a copy)` : "",
+      sm.unchanged.length > 0 ? `${sm.unchanged.length} already the same` : "",
+    ].filter(Boolean);
+    setNotice({ kind: "done", text: `Imported ${fileName}: ${parts.join(", ") || "nothing to import"}.` });
+  };
+
   void refresh();
+  const stop = deps.onClosed?.((reason) => closedNotice(new NotesClosedError(reason)));
+  if (stop) onCleanup(stop);
 
   return {
     ready,
@@ -107,75 +179,87 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
     notice,
     setNotice,
     refresh,
-    async save(note) {
+    closed,
+    async save(note, base) {
       const s = await open();
       if (!s) return { ok: false, issues: [{ path: "", message: failure() ?? "The notes library is not available." }] };
-      const r = await s.put(note);
+      let r: PutResult;
+      try {
+        r = await s.put(note, "mine", base);
+      } catch (e) {
+        if (!(e instanceof NotesClosedError)) throw e;
+        closedNotice(e);
+        return { ok: false, issues: [] };
+      }
       if (r.ok) {
         await afterChange();
         setNotice({ kind: "done", text: `Saved "${r.saved.note.name}".` });
       }
       return r;
     },
-    async remove(id) {
-      const s = await open();
-      if (!s) return;
-      const name = notes().find((n) => n.note.id === id)?.note.name ?? id;
-      await s.delete(id);
+    async remove(key) {
+      const name = notes().find((n) => n.note.id === key)?.note.name ?? (typeof key === "string" ? key : JSON.stringify(key));
+      const done = await guarded((s) => s.delete(key));
+      if (done === undefined) return;
       await afterChange();
       setNotice({ kind: "done", text: `Removed "${name}".` });
     },
+    async rawText(key) {
+      const raw = await guarded((s) => s.rawRecord(key));
+      if (raw === undefined) return undefined;
+      return rawRecordText(raw);
+    },
     async removeAll() {
-      const s = await open();
-      if (!s) return;
       const n = notes().length;
-      await s.clear();
+      const done = await guarded(async (s) => (await s.clear(), true));
+      if (!done) return;
       await afterChange();
       setNotice({ kind: "done", text: `Removed all ${n} notes from this device.` });
     },
     async importText(text, fileName, ask) {
-      const s = await open();
-      if (!s) return;
-      const read = readNotesText(text);
-      if (!read.ok) {
-        setNotice({ kind: "problem", text: `${fileName}: ${read.message}`, details: issueLines(read.issues) });
-        return;
-      }
-      const outcome = await s.importBundle(read.notes, ask);
-      if (outcome.status === "cancelled") {
-        setNotice({ kind: "done", text: `Import of ${fileName} cancelled; nothing was changed.` });
-        return;
-      }
-      if (outcome.status === "failed") {
-        setNotice({ kind: "problem", text: `${fileName}: ${outcome.message}` });
-        return;
-      }
-      await afterChange();
-      const sm = outcome.summary;
-      const parts = [
-        sm.added.length + sm.repaired.length > 0 ? `${sm.added.length + sm.repaired.length} added` : "",
-        sm.replaced.length > 0 ? `${sm.replaced.length} replaced by the file's version` : "",
-        sm.keptMine.length > 0 ? `${sm.keptMine.length} kept as yours` : "",
-        sm.copies.length > 0 ? `${sm.copies.length} kept both (the file's as a copy)` : "",
-        sm.unchanged.length > 0 ? `${sm.unchanged.length} already the same` : "",
-      ].filter(Boolean);
-      setNotice({ kind: "done", text: `Imported ${fileName}: ${parts.join(", ") || "nothing to import"}.` });
+      await importRead(readNotesText(text), fileName, ask, true);
+    },
+    async importFile(file, fileName, ask) {
+      await importRead(await (deps.readFile ?? readNotesFile)(file), fileName, ask, true);
     },
     async exportBundle(ids) {
-      const s = await open();
-      if (!s) return undefined;
-      const b = await s.exportBundle(ids);
-      if (!ids) setReminder(await s.exportReminder());
-      return b;
+      return guarded(async (s) => {
+        const b = await s.exportBundle(ids);
+        if (!ids) setReminder(await s.exportReminder());
+        return b;
+      });
     },
     async restoreDemos() {
-      const s = await open();
-      if (!s) return;
-      const n = await s.restoreDemos();
+      const n = await guarded((s) => s.restoreDemos());
+      if (n === undefined) return;
       await afterChange();
       setNotice({ kind: "done", text: n > 0 ? `Put back ${n} demo note${n === 1 ? "" : "s"}.` : "All demo notes are already there." });
     },
   };
+}
+
+/**
+ * A record as stored, as JSON text to keep: whatever it holds (numbers that JSON cannot write, dates,
+ * binary data) is written as far as it can be, never refused, so a damaged record can always be exported.
+ */
+export function rawRecordText(raw: unknown): string {
+  const seen = new WeakSet<object>();
+  return `${JSON.stringify(
+    raw,
+    (_k, v: unknown) => {
+      if (typeof v === "bigint") return v.toString();
+      if (typeof v === "number" && !Number.isFinite(v)) return String(v);
+      if (v instanceof ArrayBuffer || ArrayBuffer.isView(v)) return `(binary data, ${(v as ArrayBuffer).byteLength} bytes)`;
+      if (v instanceof Map) return Object.fromEntries(v);
+      if (v instanceof Set) return [...v];
+      if (v && typeof v === "object") {
+        if (seen.has(v)) return "(repeated)";
+        seen.add(v);
+      }
+      return v;
+    },
+    2,
+  )}\n`;
 }
 
 /** Offer a bundle as a file download (a JSON file named after its date). */

@@ -172,3 +172,75 @@ export function nextSegment(segs: readonly SegmentFile[]): SegmentFile {
   if (!last) return { from_m: 0, length_m: 500, gradient_permille: 0, curveRadius_m: 0 };
   return { from_m: last.from_m + last.length_m, length_m: 500, gradient_permille: last.gradient_permille, curveRadius_m: last.curveRadius_m };
 }
+
+const isObj = (x: unknown): x is Record<string, unknown> => !!x && typeof x === "object" && !Array.isArray(x);
+/** A number as the draft keeps it: NaN for an empty field (JSON writes NaN as null). */
+const num = (x: unknown): number => (typeof x === "number" ? x : Number.NaN);
+const str = (x: unknown): string => (typeof x === "string" ? x : "");
+
+/**
+ * A draft read back from storage, or undefined when it is not one: every field of the right kind, words
+ * the editor knows. Numbers left empty come back as NaN.
+ */
+export function storedNoteDraft(x: unknown): NoteDraft | undefined {
+  if (!isObj(x) || !Array.isArray(x.segments) || !Array.isArray(x.hazards) || !Array.isArray(x.seasons) || !Array.isArray(x.revisions)) return undefined;
+  if (!isObj(x.revision) || !isObj(x.referenceTrain) || typeof x.referenceTrain.train !== "string") return undefined;
+  for (const k of ["id", "name", "line", "direction", "standing", "practice"]) if (typeof x[k] !== "string") return undefined;
+  const kinds = HAZARD_KINDS.map((h) => h.kind as string);
+  if (!x.segments.every(isObj) || !x.hazards.every((h) => isObj(h) && kinds.includes(str(h.kind)))) return undefined;
+  if (!x.seasons.every((s) => isObj(s) && (SEASONS as readonly string[]).includes(str(s.season)) && typeof s.rail === "string")) return undefined;
+  if (!x.revisions.every(isObj)) return undefined;
+  const rt = x.referenceTrain;
+  return {
+    id: str(x.id),
+    name: str(x.name),
+    line: str(x.line),
+    direction: str(x.direction),
+    standing: str(x.standing),
+    illustrative: x.illustrative === true,
+    segments: x.segments.map((s) => ({ from_m: num(s.from_m), length_m: num(s.length_m), gradient_permille: num(s.gradient_permille), curveRadius_m: num(s.curveRadius_m) })),
+    frontAt_m: num(x.frontAt_m),
+    clearAhead_m: num(x.clearAhead_m),
+    speedLimit_kmh: num(x.speedLimit_kmh),
+    hazards: x.hazards.map((h) => ({ kind: str(h.kind) as HazardKind, at_m: num(h.at_m), note: str(h.note) })),
+    seasons: x.seasons.map((s) => ({ season: str(s.season) as Season, rail: str(s.rail) as RailWord, note: str(s.note) })),
+    practice: str(x.practice),
+    revisions: x.revisions.map((r) => ({ date: str(r.date), initials: str(r.initials), change: str(r.change) })),
+    revision: { date: str(x.revision.date), initials: str(x.revision.initials), change: str(x.revision.change) },
+    referenceTrain: {
+      train: str(rt.train),
+      ...(typeof rt.locomotive === "string" ? { locomotive: rt.locomotive } : {}),
+      ...(typeof rt.count === "number" ? { count: rt.count } : {}),
+      ...(typeof rt.temperature_C === "number" ? { temperature_C: rt.temperature_C } : {}),
+    },
+  };
+}
+
+/**
+ * A draft of a note as far as an older record could be carried over (any field may be missing or out of
+ * range): the editor then shows what must be put right, field by field, before it can be saved.
+ */
+export function draftFromPartial(p: Record<string, unknown>, fallbackTrain: ReferenceTrainFile, initials: string, now: Date = new Date()): NoteDraft {
+  const list = (x: unknown): Array<Record<string, unknown>> => (Array.isArray(x) ? x.filter(isObj) : []);
+  const kinds = HAZARD_KINDS.map((h) => h.kind as string);
+  return {
+    id: str(p.id),
+    name: str(p.name),
+    line: str(p.line),
+    direction: str(p.direction),
+    standing: str(p.standing),
+    illustrative: p.illustrative === true,
+    segments: list(p.segments).map((s) => ({ from_m: num(s.from_m), length_m: num(s.length_m), gradient_permille: num(s.gradient_permille), curveRadius_m: num(s.curveRadius_m) })),
+    frontAt_m: num(p.frontAt_m),
+    clearAhead_m: num(p.clearAhead_m),
+    speedLimit_kmh: num(p.speedLimit_kmh),
+    hazards: list(p.hazards).map((h) => ({ kind: (kinds.includes(str(h.kind)) ? str(h.kind) : "other") as HazardKind, at_m: num(h.at_m), note: str(h.note) })),
+    seasons: list(p.seasons)
+      .filter((s) => (SEASONS as readonly string[]).includes(str(s.season)))
+      .map((s) => ({ season: str(s.season) as Season, rail: str(s.rail) as RailWord, note: str(s.note) })),
+    practice: str(p.practice),
+    revisions: list(p.revisions).map((r) => ({ date: str(r.date), initials: str(r.initials), change: str(r.change) })),
+    revision: { date: today(now), initials, change: "Put right after carrying over from the older notes format." },
+    referenceTrain: isObj(p.referenceTrain) && typeof p.referenceTrain.train === "string" ? (p.referenceTrain as ReferenceTrainFile) : fallbackTrain,
+  };
+}

@@ -3,10 +3,13 @@
  * export, connected to the app's settings (units), theme (chart palette) and the location pickers of the
  * other screens. The view is `View.tsx`.
  */
-import { createMemo, createSignal, onCleanup, type JSX } from "solid-js";
+import { createEffect, createMemo, createSignal, onCleanup, Show, type JSX } from "solid-js";
 import { builtinLibrary, builtinTrains } from "../../../profiles/builtin.js";
 import type { ConflictChoice, ImportConflict } from "../../../notes/merge.js";
-import { deviceNotesStore } from "../../../notes/index.js";
+import { deviceNotesStore, onDeviceNotesClosed } from "../../../notes/index.js";
+import type { RecordProblem, SavedNote } from "../../../notes/records.js";
+import type { SaveBase, SaveConflict } from "../../../notes/store.js";
+import type { LocationNoteFile } from "../../../profiles/schemas.js";
 import { cardProvenance, noteFigureInputs } from "../../../profiles/provenance.js";
 import { PALETTES } from "../../charts/palette.js";
 import { useApp } from "../../context.js";
@@ -17,6 +20,8 @@ import { APP_VERSION } from "../../version.js";
 import { cardComplete } from "./Card.js";
 import { createNoteEditor } from "./createNoteEditor.js";
 import { createNotesLibrary, downloadBundle } from "./createNotesLibrary.js";
+import { draftFromPartial, idFromName, storedNoteDraft, today, type NoteDraft } from "./draft.js";
+import { SaveConflictDialog } from "./SaveConflictDialog.js";
 import { noteLoadTableOn } from "./loadTableRunner.js";
 import { installNotesLocationSource } from "./source.js";
 import { cardLoadTable, View, type Mode } from "./View.js";
@@ -24,10 +29,33 @@ import { railmlNote } from "../../../profiles/railml/note.js";
 import type { Stretch } from "../../../profiles/railml/stretch.js";
 import { createRailmlImporter } from "./railml/client.js";
 import { createRailmlImport } from "./railml/createRailmlImport.js";
-import { idFromName, today } from "./draft.js";
 
 /** Where the editor remembers the trainer's initials between revisions. */
 export const INITIALS_KEY = "taut.notes.initials";
+/** Where an edit not yet saved is kept, so a reload (or a library closed under the page) does not lose it. */
+export const NOTE_DRAFT_KEY = "taut.notes.draft.v1";
+/** Where a kept edit that could not be read back is set aside (never thrown away). */
+export const NOTE_DRAFT_SET_ASIDE_KEY = "taut.notes.draft.v1.set-aside";
+
+/** An edit kept on the device: the draft, the note it started from, and which stored version that was. */
+interface KeptEdit {
+  draft: NoteDraft;
+  saved?: LocationNoteFile;
+  base: SaveBase;
+  keptAt: string;
+}
+
+/** Offer text as a file download. */
+function downloadText(text: string, name: string): void {
+  const url = URL.createObjectURL(new Blob([text], { type: "application/json" }));
+  const a = document.createElement("a");
+  a.href = url;
+  a.download = name;
+  document.body.append(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+}
 
 // The other screens' location pickers list the device's notes from the moment the app loads this screen.
 installNotesLocationSource();
@@ -43,7 +71,7 @@ export function LocationNotesScreen(): JSX.Element {
   const [busy, setBusy] = createSignal(false);
   const [conflicts, setConflicts] = createSignal<{ list: ImportConflict[]; answer: (c: Record<string, ConflictChoice> | null) => void } | null>(null);
 
-  const lib = createNotesLibrary({ openStore: deviceNotesStore, changed: notifyLocationsChanged });
+  const lib = createNotesLibrary({ openStore: deviceNotesStore, changed: notifyLocationsChanged, onClosed: onDeviceNotesClosed });
   const editor = createNoteEditor({
     units,
     presets: builtinTrains,
@@ -53,6 +81,121 @@ export function LocationNotesScreen(): JSX.Element {
     computeLoadTable: noteLoadTableOn(app.pool),
   });
   const takenIds = createMemo(() => new Set(lib.notes().map((n) => n.note.id)));
+  /** Which stored version the note being edited started from (a save that finds another asks first). */
+  const [base, setBase] = createSignal<SaveBase>("new");
+  const [saveConflict, setSaveConflict] = createSignal<{ conflict: SaveConflict; note: Record<string, unknown> } | null>(null);
+
+  // ---- the edit in progress is kept on the device until it is saved or closed
+  const keep = (k: KeptEdit | null) => {
+    if (!storage) return;
+    try {
+      if (k) storage.setItem(NOTE_DRAFT_KEY, JSON.stringify(k));
+      else storage.removeItem(NOTE_DRAFT_KEY);
+    } catch {
+      // Storage full or refused: the edit is still on screen.
+    }
+  };
+  let keepTimer: ReturnType<typeof setTimeout> | undefined;
+  const keepNow = () => {
+    keepTimer = undefined;
+    if (mode() === "edit" && editor.changed()) keep({ draft: JSON.parse(JSON.stringify(editor.draft)) as NoteDraft, ...(editor.saved() ? { saved: editor.saved()! } : {}), base: base(), keptAt: new Date().toISOString() });
+    else keep(null);
+  };
+  createEffect(() => {
+    JSON.stringify(editor.draft);
+    mode();
+    editor.changed();
+    if (keepTimer !== undefined) clearTimeout(keepTimer);
+    keepTimer = setTimeout(keepNow, 300);
+  });
+  const flush = () => keepTimer !== undefined && (clearTimeout(keepTimer), keepNow());
+  addEventListener("pagehide", flush);
+  onCleanup(() => {
+    removeEventListener("pagehide", flush);
+    flush();
+  });
+  const forget = () => {
+    if (keepTimer !== undefined) clearTimeout(keepTimer);
+    keepTimer = undefined;
+    keep(null);
+  };
+  // An edit kept from before (a reload, a closed library): open it again, said so.
+  const kept = read(storage, NOTE_DRAFT_KEY);
+  if (kept) {
+    let k: Partial<KeptEdit> | undefined;
+    try {
+      k = JSON.parse(kept) as Partial<KeptEdit>;
+    } catch {
+      k = undefined;
+    }
+    const draft = k ? storedNoteDraft(k.draft) : undefined;
+    const b = k?.base;
+    const okBase = b === "new" || b === "replace" || (!!b && typeof b === "object" && typeof b.rev === "number");
+    if (draft && okBase) {
+      editor.restore(draft, k?.saved);
+      setBase(b);
+      setMode("edit");
+      lib.setNotice({ kind: "done", text: `Your unsaved edit of "${draft.name || "a new note"}" was kept: save it, or go back to the library to drop it.` });
+    } else {
+      write(storage, NOTE_DRAFT_SET_ASIDE_KEY, kept);
+      forget();
+      lib.setNotice({ kind: "problem", text: "An unsaved edit kept on this device could not be read back; it was set aside (kept, not deleted)." });
+    }
+  }
+
+  /** After a save: the editor shows the saved note, the kept edit is dropped, the initials remembered. */
+  const afterSaved = (saved: SavedNote) => {
+    const ini = editor.draft.revision.initials.trim();
+    if (ini) {
+      setInitials(ini);
+      write(storage, INITIALS_KEY, ini);
+    }
+    editor.load(saved.note);
+    setBase({ rev: saved.rev });
+    forget();
+  };
+
+  const settle = async (choice: "mine" | "theirs" | "both" | null) => {
+    const c = saveConflict();
+    setSaveConflict(null);
+    if (!c || choice === null) return;
+    if (choice === "theirs") {
+      forget();
+      if (c.conflict.theirs) {
+        editor.load(c.conflict.theirs.note);
+        setBase({ rev: c.conflict.theirs.rev });
+        lib.setNotice({ kind: "done", text: `Opened "${c.conflict.theirs.note.name}" as it was saved elsewhere; your edit was dropped.` });
+      } else {
+        setMode("library");
+        void lib.refresh();
+      }
+      return;
+    }
+    let note = c.note;
+    let saveBase: SaveBase = "replace";
+    if (choice === "both") {
+      const name = String(c.note.name ?? "");
+      const mark = " (my copy)";
+      note = { ...c.note, id: idFromName(`${name}${mark}`, new Set([...takenIds(), String(c.note.id)])), name: `${name.slice(0, 120 - mark.length)}${mark}` };
+      saveBase = "new";
+    }
+    const r = await lib.save(note, saveBase);
+    if (r.ok) afterSaved(r.saved);
+    else if (r.conflict) setSaveConflict({ conflict: r.conflict, note });
+    else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: "The note was not saved.", details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+  };
+
+  const rescue = (p: RecordProblem) => {
+    if (!p.rescue) return;
+    editor.restore(draftFromPartial(p.rescue.note, { train: builtinTrains[0]?.id ?? "" }, initials()), undefined);
+    setBase("replace");
+    setMode("edit");
+    lib.setNotice({
+      kind: "problem",
+      text: `"${String(p.rescue.note.name ?? p.key)}" as far as it could be carried over: put right what the editor marks, then save (it replaces the damaged record).`,
+      ...(p.rescue.flags.length > 0 ? { details: p.rescue.flags } : {}),
+    });
+  };
 
   // Import from railML: the file is read and the stretch made in a worker; saving goes through the
   // notes store like any note (the schema checks it), or the editor opens with it first.
@@ -75,18 +218,21 @@ export function LocationNotesScreen(): JSX.Element {
         lib.setNotice({ kind: "problem", text: "The stretch does not make a valid note; nothing was saved.", details: n.issues.map((i) => `${i.path}: ${i.message}`) });
         return;
       }
-      const r = await lib.save(n.value);
+      const r = await lib.save(n.value, "new");
       if (!r.ok) {
-        lib.setNotice({ kind: "problem", text: "The note was not saved.", details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+        if (r.conflict) setSaveConflict({ conflict: r.conflict, note: n.value as unknown as Record<string, unknown> });
+        else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: "The note was not saved.", details: r.issues.map((i) => `${i.path}: ${i.message}`) });
         return;
       }
       lib.setNotice({ kind: "done", text: `Saved "${name}" from railML.` });
       editor.load(r.saved.note);
+      setBase({ rev: r.saved.rev });
       setMode("edit");
     });
   const editRailml = (s: Stretch) => {
     lib.setNotice(null);
     editor.load(undefined);
+    setBase("new");
     editor.set({
       name: railml.choice.name.trim(),
       direction: railmlDirection(),
@@ -135,6 +281,7 @@ export function LocationNotesScreen(): JSX.Element {
     if (!s) return;
     lib.setNotice(null);
     editor.load(s.note);
+    setBase({ rev: s.rev });
     setMode(then);
     // Start the opened note at its top: scroll the app's screen area, not the page.
     const area = document.querySelector(".notes-screen")?.closest(".screen");
@@ -153,6 +300,7 @@ export function LocationNotesScreen(): JSX.Element {
     );
 
   return (
+    <>
     <View
       mode={mode()}
       units={units()}
@@ -176,15 +324,21 @@ export function LocationNotesScreen(): JSX.Element {
         notice: lib.notice(),
         busy: busy(),
         onDismissNotice: () => lib.setNotice(null),
-        onImport: (file) => void task(async () => lib.importText(await file.text(), file.name, ask)),
+        onImport: (file) => void task(async () => lib.importFile(file, file.name, ask)),
         onExportAll: () =>
           void task(async () => {
             const b = await lib.exportBundle();
             if (b) downloadBundle(b);
           }),
         onRestoreDemos: () => void task(() => lib.restoreDemos()),
-        onRemove: (id) => void task(() => lib.remove(id)),
+        onRemove: (key) => void task(() => lib.remove(key)),
         onRemoveAll: () => void task(() => lib.removeAll()),
+        onExportRaw: (p) =>
+          void task(async () => {
+            const text = await lib.rawText(p.rawKey);
+            if (text !== undefined) downloadText(text, `taut-damaged-record-${p.key.replace(/[^a-z0-9._-]+/gi, "_").slice(0, 60)}.json`);
+          }),
+        onRescue: rescue,
       }}
       railml={{ imp: railml, onOpen: () => (lib.setNotice(null), setMode("railml")), onSave: saveRailml, onEdit: editRailml }}
       onOpen={(id) => openNote(id, "edit")}
@@ -192,25 +346,24 @@ export function LocationNotesScreen(): JSX.Element {
       onNew={() => {
         lib.setNotice(null);
         editor.load(undefined);
+        setBase("new");
         setMode("edit");
       }}
       onSave={() =>
         void task(async () => {
           const note = editor.toNote(takenIds());
-          const r = await lib.save(note);
+          const r = await lib.save(note, base());
           if (!r.ok) {
-            lib.setNotice({ kind: "problem", text: "The note was not saved.", details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+            if (r.conflict) setSaveConflict({ conflict: r.conflict, note });
+            // No issues and no conflict: the library was closed under the page (its notice says so; the edit is kept).
+            else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: "The note was not saved.", details: r.issues.map((i) => `${i.path}: ${i.message}`) });
             return;
           }
-          const ini = editor.draft.revision.initials.trim();
-          if (ini) {
-            setInitials(ini);
-            write(storage, INITIALS_KEY, ini);
-          }
-          editor.load(r.saved.note);
+          afterSaved(r.saved);
         })
       }
       onClose={() => {
+        forget();
         setMode("library");
         void lib.refresh();
       }}
@@ -219,6 +372,7 @@ export function LocationNotesScreen(): JSX.Element {
           const s = editor.saved();
           if (!s) return;
           await lib.remove(s.id);
+          forget();
           setMode("library");
         })
       }
@@ -233,6 +387,8 @@ export function LocationNotesScreen(): JSX.Element {
       onEdit={() => setMode("edit")}
       onPrint={() => window.print()}
     />
+    <Show when={saveConflict()}>{(c) => <SaveConflictDialog conflict={c().conflict} onChoose={(choice) => void task(() => settle(choice))} />}</Show>
+    </>
   );
 }
 
