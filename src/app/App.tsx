@@ -3,7 +3,7 @@
  * from the screen registry — a rail on the left in landscape, along the bottom in portrait. While the
  * device reports movement (and the user allowed the lock), a notice covers every control.
  */
-import { createEffect, createMemo, ErrorBoundary, For, Show, Suspense, type JSX } from "solid-js";
+import { createEffect, createMemo, ErrorBoundary, For, on, Show, Suspense, type JSX } from "solid-js";
 import { Dynamic } from "solid-js/web";
 import { Icon } from "./components/Icon.js";
 import { OfflineStatus, UpdatePrompt } from "./components/OfflineStatus.js";
@@ -45,7 +45,13 @@ export function App(props: { state: AppContextValue; screens: readonly ScreenEnt
         <main class="screen" id="screen" data-screen={current().id}>
           <PrintStamp screen={current().title} />
           <Show when={s.draft.setAside()}>{(aside) => <SetAsideNotice aside={aside()} onDismiss={() => s.draft.dismissSetAside()} />}</Show>
-          <ErrorBoundary fallback={(error, reset) => <ScreenFailure error={error} onRetry={reset} />}>
+          <ErrorBoundary
+            fallback={(error, reset) => {
+              // Going to another screen leaves the failure behind.
+              createEffect(on(() => current().id, reset, { defer: true }));
+              return <ScreenFailure error={error} onRetry={reset} />;
+            }}
+          >
             <Suspense fallback={<p class="placeholder-text">Loading…</p>}>
               <Dynamic component={current().component} />
             </Suspense>
