@@ -5,6 +5,7 @@
  */
 import { formatIssues } from "../profiles/issues.js";
 import { parseLocationNote } from "../profiles/parse.js";
+import { latestRevision } from "../profiles/notes.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { migrateV1Record } from "./migrations.js";
 
@@ -97,4 +98,45 @@ export function keyText(key: IDBValidKey): string {
   } catch {
     return String(key);
   }
+}
+
+/** A note as the library lists it: enough to show its row and open it, without the note itself. */
+export interface NoteRow {
+  id: string;
+  name: string;
+  line?: string;
+  direction?: string;
+  illustrative: boolean;
+  origin: NoteOrigin;
+  /** The latest revision's date and initials. */
+  revised: { date: string; initials: string };
+  /** How many things a migration could not carry over (0 for most notes). */
+  flags: number;
+}
+
+/** The row of a saved note. */
+export function rowOf(s: SavedNote): NoteRow {
+  const r = latestRevision(s.note);
+  return {
+    id: s.note.id,
+    name: s.note.name,
+    ...(s.note.line ? { line: s.note.line } : {}),
+    ...(s.note.direction ? { direction: s.note.direction } : {}),
+    illustrative: s.note.illustrative === true,
+    origin: s.origin,
+    revised: { date: r.date, initials: r.initials },
+    flags: s.flags?.length ?? 0,
+  };
+}
+
+/** Rows read back from the stored list, or undefined when any is not a row (the list is then rebuilt). */
+export function checkRows(x: unknown): NoteRow[] | undefined {
+  if (!Array.isArray(x)) return undefined;
+  const text = (v: unknown) => typeof v === "string";
+  for (const r of x as Array<Partial<NoteRow> | null>) {
+    if (!r || typeof r !== "object" || !text(r.id) || !text(r.name) || !ORIGINS.includes(r.origin as NoteOrigin) || typeof r.illustrative !== "boolean") return undefined;
+    if (!r.revised || !text(r.revised.date) || !text(r.revised.initials) || typeof r.flags !== "number") return undefined;
+    if ((r.line !== undefined && !text(r.line)) || (r.direction !== undefined && !text(r.direction))) return undefined;
+  }
+  return x as NoteRow[];
 }

@@ -10,7 +10,7 @@ import { parseLocationNote } from "../profiles/parse.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { mergeWrites, previewMerge, type ConflictChoice, type ImportConflict, type MergeWrites } from "./merge.js";
 import { migrateV1Record, NOTES_DB_VERSION } from "./migrations.js";
-import { checkRecord, keyText, makeRecord, recordRev, type NoteOrigin, type NoteRecord, type RecordProblem, type SavedNote } from "./records.js";
+import { checkRecord, checkRows, keyText, makeRecord, recordRev, rowOf, type NoteOrigin, type NoteRecord, type NoteRow, type RecordProblem, type SavedNote } from "./records.js";
 import { exportReminder, type ExportReminder } from "./reminder.js";
 
 export const DEFAULT_NOTES_DB = "taut-notes";
@@ -20,7 +20,27 @@ interface MetaValues {
   lastExport: string;
   /** ISO date-time the demo notes were first added. */
   demosAdded: string;
+  /** How many writes the notes have had, as a decimal count: a read knows whether anything changed since the last. */
+  changes: string;
+  /** The library's rows as last listed (JSON of `StoredRows`), so a large library shows before it is read in full. */
+  rows: string;
 }
+
+/** The rows of the library at a write count. */
+interface StoredRows {
+  changes: string;
+  rows: NoteRow[];
+}
+
+/** Records read per request when the whole library is read: each a short task, the page drawn between. */
+const READ_CHUNK = 400;
+/** Records written per request batch in an import, for the same reason. */
+const WRITE_CHUNK = 400;
+/** The longest the checking of records runs before it lets the page draw, ms. */
+const CHECK_SLICE_MS = 16;
+
+/** Let the page draw and answer input before going on. */
+const yieldToPage = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
 type MetaKey = keyof MetaValues;
 
 interface NotesDB extends DBSchema {
@@ -83,6 +103,12 @@ export class NotesClosedError extends Error {
 export interface NotesStore {
   /** Every readable note (sorted by name) and a problem for each damaged record. */
   list(): Promise<NoteList>;
+  /**
+   * The library's rows as last listed, when nothing has been written since: at once, without reading
+   * every note (undefined when they are not up to date; `list` then gives them). Damaged records are
+   * found only by `list`.
+   */
+  quickRows(): Promise<NoteRow[] | undefined>;
   get(id: string): Promise<ReadResult>;
   /**
    * Validate and save a note (new or edited); nothing is written when it is invalid, or when the stored
@@ -211,28 +237,132 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
     return r;
   };
 
-  async function readAll(): Promise<{ valid: Map<string, SavedNote>; problems: RecordProblem[]; keys: Set<string> }> {
+  /**
+   * The library as last read and checked, with the write count it was read at. Every write here counts
+   * itself (meta "changes", in the same transaction) and updates the snapshot; a write from another tab
+   * moves the count on, so the next read reads the library again. A large library is then read once per
+   * page, not at every refresh.
+   */
+  interface Snapshot {
+    changes: string;
+    valid: Map<string, SavedNote>;
+    problems: RecordProblem[];
+    keys: Set<string>;
+    sorted?: SavedNote[] | undefined;
+  }
+  let snapshot: Snapshot | undefined;
+  let reading: Promise<Snapshot> | undefined;
+
+  async function readAll(): Promise<Snapshot> {
     open();
-    // All records in one request each for keys and values: far quicker than a cursor over a large library.
-    const tx = db.transaction("notes", "readonly");
-    const [keys, values] = await Promise.all([tx.store.getAllKeys(), tx.store.getAll()]);
-    await tx.done;
-    const valid = new Map<string, SavedNote>();
-    const problems: RecordProblem[] = [];
-    keys.forEach((key, k) => {
-      const r = check(key, values[k]);
-      if (r.ok) valid.set(r.saved.note.id, r.saved);
-      else problems.push(r.problem);
+    // A read under way serves every caller (the library and the location pickers ask at the same moment).
+    reading ??= (async () => {
+      const tx = db.transaction(["notes", "meta"], "readonly");
+      const changes = (await tx.objectStore("meta").get("changes")) ?? "0";
+      if (snapshot && snapshot.changes === changes) {
+        await tx.done;
+        return snapshot;
+      }
+      // Keys and values a few hundred at a time: each request is a short task, and the page draws between.
+      const store = tx.objectStore("notes");
+      const keys: IDBValidKey[] = [];
+      const values: unknown[] = [];
+      let range: IDBKeyRange | undefined;
+      for (;;) {
+        const [ks, vs] = await Promise.all([store.getAllKeys(range, READ_CHUNK), store.getAll(range, READ_CHUNK)]);
+        keys.push(...ks);
+        values.push(...vs);
+        if (ks.length < READ_CHUNK) break;
+        range = IDBKeyRange.lowerBound(ks[ks.length - 1]!, true);
+      }
+      await tx.done;
+      const valid = new Map<string, SavedNote>();
+      const problems: RecordProblem[] = [];
+      let slice = performance.now();
+      for (const [k, key] of keys.entries()) {
+        const r = check(key, values[k]);
+        if (r.ok) valid.set(r.saved.note.id, r.saved);
+        else problems.push(r.problem);
+        if (performance.now() - slice > CHECK_SLICE_MS) {
+          await yieldToPage();
+          slice = performance.now();
+        }
+      }
+      snapshot = { changes, valid, problems, keys: new Set(keys.map(keyText)) };
+      keepRows();
+      return snapshot;
+    })().finally(() => {
+      reading = undefined;
     });
-    return { valid, problems, keys: new Set(keys.map(keyText)) };
+    return reading;
   }
 
-  const byName = (a: SavedNote, b: SavedNote) => a.note.name.localeCompare(b.note.name) || a.note.id.localeCompare(b.note.id);
+  /** Count a write in its transaction; returns the counts before and after. */
+  async function countWrite(tx: IDBPTransaction<NotesDB, ("notes" | "meta")[], "readwrite">): Promise<{ before: string; after: string }> {
+    const before = (await tx.objectStore("meta").get("changes")) ?? "0";
+    const after = String(Number(before) + 1);
+    await tx.objectStore("meta").put(after, "changes");
+    return { before, after };
+  }
+
+  /** Bring the snapshot up to a write just made, or drop it when it was already behind. */
+  function applied(count: { before: string; after: string }, change: (s: Snapshot) => void): void {
+    if (!snapshot || snapshot.changes !== count.before) {
+      snapshot = undefined;
+      return;
+    }
+    change(snapshot);
+    snapshot.changes = count.after;
+    snapshot.sorted = undefined;
+    keepRows();
+  }
+  const written = (s: Snapshot, saved: SavedNote) => {
+    s.valid.set(saved.note.id, saved);
+    s.keys.add(saved.note.id);
+    s.problems = s.problems.filter((p) => p.key !== saved.note.id);
+  };
+  const sortedOf = (snap: Snapshot) => (snap.sorted ??= [...snap.valid.values()].sort(byName));
+
+  /**
+   * Store the rows of the snapshot with its write count, for the next page to show at once. Only when no
+   * write came between; a failure only means the next page reads the library in full.
+   */
+  function keepRows(): void {
+    const snap = snapshot;
+    if (!snap) return;
+    const rows: StoredRows = { changes: snap.changes, rows: sortedOf(snap).map(rowOf) };
+    void (async () => {
+      const tx = db.transaction("meta", "readwrite");
+      if (((await tx.store.get("changes")) ?? "0") === rows.changes) await tx.store.put(JSON.stringify(rows), "rows");
+      await tx.done;
+    })().catch(() => undefined);
+  }
+
+  // One collator for every comparison: String.prototype.localeCompare builds one per call, which is slow
+  // over the hundred thousand comparisons a large library's sort makes.
+  const collator = new Intl.Collator();
+  const byName = (a: SavedNote, b: SavedNote) => collator.compare(a.note.name, b.note.name) || collator.compare(a.note.id, b.note.id);
 
   return {
     async list() {
-      const { valid, problems } = await readAll();
-      return { notes: [...valid.values()].sort(byName), problems };
+      const snap = await readAll();
+      return { notes: [...sortedOf(snap)], problems: [...snap.problems] };
+    },
+
+    async quickRows() {
+      open();
+      const tx = db.transaction("meta", "readonly");
+      const [changes, text] = await Promise.all([tx.store.get("changes"), tx.store.get("rows")]);
+      await tx.done;
+      const current = changes ?? "0";
+      if (snapshot && snapshot.changes === current) return sortedOf(snapshot).map(rowOf);
+      if (text === undefined) return undefined;
+      try {
+        const stored = JSON.parse(text) as Partial<StoredRows>;
+        return stored.changes === current ? checkRows(stored.rows) : undefined;
+      } catch {
+        return undefined;
+      }
     },
 
     async get(id) {
@@ -249,8 +379,9 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
       if (!parsed.ok) return { ok: false, issues: parsed.issues };
       const id = parsed.value.id;
       // Read and write in one transaction, so no other save can come between the check and the write.
-      const tx = db.transaction("notes", "readwrite");
-      const raw = (await tx.store.get(id)) as unknown;
+      const tx = db.transaction(["notes", "meta"], "readwrite");
+      const notesStore = tx.objectStore("notes");
+      const raw = (await notesStore.get(id)) as unknown;
       const stored = raw === undefined ? undefined : checkRecord(id, raw);
       let conflict: SaveConflict | undefined;
       if (base === "new" && stored) conflict = { id, ...(stored.ok ? { theirs: stored.saved } : { damaged: stored.problem }) };
@@ -264,18 +395,30 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
         return { ok: false, issues: [], conflict };
       }
       const rec = makeRecord(parsed.value, origin, now(), recordRev(raw) + 1);
-      await tx.store.put(rec);
+      const count = await countWrite(tx);
+      await notesStore.put(rec);
       await tx.done;
-      return { ok: true, saved: remember(rec) };
+      const saved = remember(rec);
+      applied(count, (snap) => written(snap, saved));
+      return { ok: true, saved };
     },
 
     async delete(key) {
       open();
-      const tx = db.transaction("notes", "readwrite");
-      const had = (await tx.store.getKey(key as string)) !== undefined;
-      if (had) await tx.store.delete(key as string);
+      const tx = db.transaction(["notes", "meta"], "readwrite");
+      const notesStore = tx.objectStore("notes");
+      const had = (await notesStore.getKey(key as string)) !== undefined;
+      const count = had ? await countWrite(tx) : undefined;
+      if (had) await notesStore.delete(key as string);
       await tx.done;
       if (typeof key === "string") checked.delete(key);
+      const k = keyText(key);
+      if (count)
+        applied(count, (snap) => {
+          if (typeof key === "string") snap.valid.delete(key);
+          snap.keys.delete(k);
+          snap.problems = snap.problems.filter((p) => p.key !== k);
+        });
       return had;
     },
 
@@ -286,8 +429,16 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
 
     async clear() {
       open();
-      await db.clear("notes");
+      const tx = db.transaction(["notes", "meta"], "readwrite");
+      const count = await countWrite(tx);
+      await tx.objectStore("notes").clear();
+      await tx.done;
       checked.clear();
+      applied(count, (snap) => {
+        snap.valid.clear();
+        snap.keys.clear();
+        snap.problems = [];
+      });
     },
 
     async importBundle(notes, choose, opts = {}) {
@@ -322,11 +473,21 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
       const at = now();
       const records = writes.put.map((n) => makeRecord(n, "imported", at, (valid.get(n.id)?.rev ?? 0) + 1));
       // One transaction for every write: if any write fails, the transaction aborts and none is kept.
-      const tx = db.transaction("notes", "readwrite");
+      const tx = db.transaction(["notes", "meta"], "readwrite");
       const pending: Promise<unknown>[] = [observed(tx.done)];
+      let count: { before: string; after: string } | undefined;
       try {
-        for (const rec of records) pending.push(observed(tx.store.put(rec)));
+        const counting = observed(countWrite(tx));
+        pending.push(counting);
+        // A few hundred writes at a time: the next batch is asked for when the last of this one is done
+        // (the transaction stays open), so the page draws between batches instead of freezing.
+        for (let k = 0; k < records.length; k += WRITE_CHUNK) {
+          const batch = records.slice(k, k + WRITE_CHUNK).map((rec) => observed(tx.objectStore("notes").put(rec)));
+          pending.push(...batch);
+          await batch[batch.length - 1];
+        }
         await Promise.all(pending);
+        count = await counting;
       } catch (e) {
         try {
           tx.abort();
@@ -336,7 +497,8 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
         await Promise.allSettled(pending);
         return { status: "failed", message: `The device refused to save the notes (${(e as Error).message || (e as Error).name}); nothing was imported.` };
       }
-      for (const rec of records) remember(rec);
+      const saved = records.map(remember);
+      if (count) applied(count, (snap) => saved.forEach((x) => written(snap, x)));
       return { status: "applied", summary: writes.summary };
     },
 
@@ -364,16 +526,21 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
 
     async restoreDemos() {
       open();
-      const tx = db.transaction("notes", "readwrite");
-      let added = 0;
+      const tx = db.transaction(["notes", "meta"], "readwrite");
+      const notesStore = tx.objectStore("notes");
+      const added: NoteRecord[] = [];
       for (const d of demos) {
-        if ((await tx.store.getKey(d.id)) === undefined) {
-          await tx.store.put(makeRecord(d, "demo", now()));
-          added++;
+        if ((await notesStore.getKey(d.id)) === undefined) {
+          const rec = makeRecord(d, "demo", now());
+          await notesStore.put(rec);
+          added.push(rec);
         }
       }
+      const count = added.length > 0 ? await countWrite(tx) : undefined;
       await tx.done;
-      return added;
+      const saved = added.map(remember);
+      if (count) applied(count, (snap) => saved.forEach((x) => written(snap, x)));
+      return added.length;
     },
 
     closed() {

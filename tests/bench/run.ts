@@ -12,6 +12,7 @@ import { run as benchStartup } from "./startup.js";
 import { run as benchBatch } from "./batch.js";
 import { run as benchBundle } from "./bundle.js";
 import { run as benchFirstPlan } from "./firstPlan.js";
+import { run as benchNotesLibrary } from "./notesLibrary.js";
 import { printTargets } from "./util.js";
 
 const quick = process.argv.includes("--quick");
@@ -22,4 +23,5 @@ benchStartup();
 benchBatch();
 await benchBundle();
 await benchFirstPlan();
+await benchNotesLibrary();
 printTargets();

@@ -104,17 +104,31 @@ describe("another tab upgrades the database", () => {
 });
 
 describe("a large library", () => {
-  it("reads the library in one pass and checks each record once while it is unchanged", async () => {
+  it("is read once per page: another tab's write is seen, our own writes update what was read", async () => {
     const { store, name } = await freshStore();
-    const notes = Array.from({ length: 300 }, (_, k) => sampleNote({ id: `bulk-${k}`, name: `Bulk ${k} (test)` }));
+    const notes = Array.from({ length: 300 }, (_, k) => sampleNote({ id: `bulk-${k}`, name: `Bulk ${String(k).padStart(3, "0")} (test)` }));
     const r = await store.importBundle(notes, () => null, { validated: true });
     expect(r.status === "applied" && r.summary.added).toHaveLength(300);
     expect((await store.list()).notes).toHaveLength(300);
-    // A record changed behind the store's back (another tab, a hand edit) is checked afresh, not trusted.
-    await writeRaw(name, { id: "bulk-7", origin: "mine", savedAt: "2026-06-01T00:00:00.000Z", rev: 9, note: { ...sampleNote({ id: "bulk-7" }), name: "" } });
+    // Our own save shows at once, in name order.
+    await store.put(sampleNote({ id: "aaa-first", name: "Aaa first (test)" }), "mine", "new");
+    expect((await store.list()).notes[0]!.note.id).toBe("aaa-first");
+    // Another tab saves a note: its write is counted, so this tab reads the library again and sees it.
+    const other = await openNotesStore({ name, demos: [] });
+    await other.put(sampleNote({ id: "bulk-7", name: "Renamed in the other tab (test)" }), "mine", { rev: 1 });
+    expect((await store.list()).notes.find((s) => s.note.id === "bulk-7")!.note.name).toBe("Renamed in the other tab (test)");
+    // A record damaged behind the store's back (written raw, then counted as any write is) is checked afresh, not trusted.
+    await writeRaw(name, { id: "bulk-8", origin: "mine", savedAt: "2026-06-01T00:00:00.000Z", rev: 9, note: { ...sampleNote({ id: "bulk-8" }), name: "" } });
+    const db = await openDB(name);
+    await db.put("meta", String(Number((await db.get("meta", "changes")) ?? "0") + 1), "changes");
+    db.close();
     const again = await store.list();
-    expect(again.notes).toHaveLength(299);
-    expect(again.problems.map((p) => p.key)).toEqual(["bulk-7"]);
+    expect(again.notes).toHaveLength(300);
+    expect(again.problems.map((p) => p.key)).toEqual(["bulk-8"]);
+    // Two reads asked at once are served by one.
+    const [a, b] = await Promise.all([store.list(), store.list()]);
+    expect(a.notes.map((s) => s.note.id)).toEqual(b.notes.map((s) => s.note.id));
+    other.close();
     store.close();
   });
 });

@@ -13,7 +13,7 @@ import { describe, expect, it, vi } from "vitest";
 import LocationNotesScreen, { NOTE_DRAFT_KEY } from "../../../src/app/screens/LocationNotes/index.js";
 import { rawRecordText } from "../../../src/app/screens/LocationNotes/createNotesLibrary.js";
 import { Library, LIBRARY_PAGE } from "../../../src/app/screens/LocationNotes/Library.js";
-import { DEFAULT_NOTES_DB, openNotesStore, type SavedNote } from "../../../src/notes/index.js";
+import { DEFAULT_NOTES_DB, openNotesStore, type NoteRow } from "../../../src/notes/index.js";
 import { builtinLocations } from "../../../src/profiles/builtin.js";
 import { makeNotesBundle } from "../../../src/profiles/notes.js";
 import { render } from "@solidjs/testing-library";
@@ -73,6 +73,8 @@ describe("Location notes: nothing lost", () => {
     const db = await openDB(DEFAULT_NOTES_DB);
     const raw = { id: "marsh-lane", origin: "mine", savedAt: "2026-01-01T00:00:00Z", note: { schema: "taut/location@1", id: "marsh-lane", practice: "Hours of work." } };
     await db.put("notes", raw);
+    // Counted as any write is, as another tab of the app would.
+    await db.put("meta", String(Number((await db.get("meta", "changes")) ?? "0") + 1), "changes");
     db.close();
     await openScreen();
     await waitFor(() => expect(screen.getByText("Damaged records (1)")).toBeTruthy());
@@ -106,6 +108,8 @@ describe("Location notes: nothing lost", () => {
       revised: "2024-10-01",
       by: "OLD",
     });
+    // Counted as any write is, as another tab of the app would.
+    await db.put("meta", String(Number((await db.get("meta", "changes")) ?? "0") + 1), "changes");
     db.close();
     await openScreen();
     await waitFor(() => expect(screen.getByText(/could not be carried over \(segments\[0\]\.gradient_permille: must be from -60 to 60 ‰ \(got 90\)\)/)).toBeTruthy());
@@ -131,6 +135,8 @@ describe("Location notes: nothing lost", () => {
   it("'Remove record' works for a numeric key", async () => {
     const db = await openDB(DEFAULT_NOTES_DB);
     await db.put("notes", { id: 42, origin: "mine", savedAt: "2026-01-01T00:00:00Z", note: { ...demo } });
+    // Counted as any write is, as another tab of the app would.
+    await db.put("meta", String(Number((await db.get("meta", "changes")) ?? "0") + 1), "changes");
     db.close();
     await openScreen();
     await waitFor(() => expect(screen.getByText(/The saved note "42" is damaged/)).toBeTruthy());
@@ -150,14 +156,14 @@ describe("Location notes: nothing lost", () => {
 });
 
 describe("a long library", () => {
-  const many: SavedNote[] = Array.from({ length: 250 }, (_, k) => ({ origin: "imported", savedAt: "2026-01-01T00:00:00Z", rev: 1, note: { ...demo, id: `n-${k}`, name: `Place ${String(k).padStart(3, "0")}` } }));
+  const many: NoteRow[] = Array.from({ length: 250 }, (_, k) => ({ id: `n-${k}`, name: `Place ${String(k).padStart(3, "0")}`, illustrative: false, origin: "imported", revised: { date: "2026-01-01", initials: "T" }, flags: 0 }));
   it("shows the first page, more on request, and finds a note by name", () => {
     const noop = () => undefined;
     render(() => (
       <Library
         ready
         failure={null}
-        notes={many}
+        rows={many}
         problems={[]}
         reminder={undefined}
         persisted={undefined}

@@ -32,9 +32,10 @@ describe("Location notes screen", () => {
     const save = screen.getByRole("button", { name: "Save note" }) as HTMLButtonElement;
     await waitFor(() => expect(save.disabled).toBe(false), { timeout: 10_000 });
     fireEvent.click(save);
+    // A save runs several store transactions (fake-indexeddb is slow on a busy machine): a generous wait.
     await waitFor(() => expect(screen.getByText('Saved "Wrenfield up loop (test)".')).toBeTruthy(), { timeout: 10_000 });
     fireEvent.click(screen.getByRole("button", { name: "Back to the library" }));
-    await waitFor(() => expect(listed()).toContain("Wrenfield up loop (test)"));
+    await waitFor(() => expect(listed()).toContain("Wrenfield up loop (test)"), { timeout: 10_000 });
     const picker = await listNotesForPicker();
     expect(picker.map((p) => p.id)).toContain("wrenfield-up-loop-test");
   }, 60_000);
@@ -70,6 +71,8 @@ describe("Location notes screen", () => {
   it("reports a damaged record and lets the trainer remove it", async () => {
     const db = await openDB(DEFAULT_NOTES_DB);
     await db.put("notes", { id: "scrambled", origin: "mine", savedAt: "2026-01-01T00:00:00Z", note: { schema: "taut/location@1", id: "scrambled" } });
+    // Counted as any write is, as another tab of the app would.
+    await db.put("meta", String(Number((await db.get("meta", "changes")) ?? "0") + 1), "changes");
     db.close();
     renderWithApp(() => <LocationNotesScreen />, { pool: quickTablePool() });
     await waitFor(() => expect(screen.getByText("Damaged records (1)")).toBeTruthy());

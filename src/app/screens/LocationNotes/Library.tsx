@@ -4,15 +4,17 @@
  * and the library's actions: new note, import a file, export all, put back the demo notes, remove all.
  */
 import { createMemo, createSignal, For, Show, type JSX } from "solid-js";
-import { latestRevision } from "../../../profiles/notes.js";
-import type { RecordProblem, SavedNote } from "../../../notes/records.js";
+import type { NoteRow, RecordProblem } from "../../../notes/records.js";
 import type { ExportReminder, PersistResult } from "../../../notes/reminder.js";
 import type { Notice } from "./createNotesLibrary.js";
 
 export interface LibraryProps {
   ready: boolean;
   failure: string | null;
-  notes: readonly SavedNote[];
+  /** The notes as rows (sorted by name). */
+  rows: readonly NoteRow[];
+  /** The rows are from the last listing and the library is still being read and checked. */
+  checking?: boolean;
   problems: readonly RecordProblem[];
   reminder: ExportReminder | undefined;
   persisted: PersistResult | undefined;
@@ -77,8 +79,8 @@ export function Library(props: LibraryProps): JSX.Element {
   /** The notes the filter keeps (name, line or direction, any case). */
   const matching = createMemo(() => {
     const f = filter().trim().toLowerCase();
-    if (f === "") return props.notes;
-    return props.notes.filter((s) => `${s.note.name} ${s.note.line ?? ""} ${s.note.direction ?? ""} ${s.note.id}`.toLowerCase().includes(f));
+    if (f === "") return props.rows;
+    return props.rows.filter((r) => `${r.name} ${r.line ?? ""} ${r.direction ?? ""} ${r.id}`.toLowerCase().includes(f));
   });
   const shown = createMemo(() => matching().slice(0, limit()));
   const reminderText = () => {
@@ -139,14 +141,14 @@ export function Library(props: LibraryProps): JSX.Element {
             Import from railML
           </button>
         </Show>
-        <button type="button" class="button" disabled={props.busy || props.notes.length === 0} onClick={() => props.onExportAll()}>
+        <button type="button" class="button" disabled={props.busy || props.rows.length === 0} onClick={() => props.onExportAll()}>
           Export all notes
         </button>
       </div>
 
       <Show when={props.ready} fallback={<p class="notes-hint">Opening the library…</p>}>
-        <Show when={props.notes.length > 0} fallback={<p class="notes-empty">No notes yet. Make one with "New note", or import a notes file.</p>}>
-          <Show when={props.notes.length > LIBRARY_PAGE}>
+        <Show when={props.rows.length > 0} fallback={<p class="notes-empty">No notes yet. Make one with "New note", or import a notes file.</p>}>
+          <Show when={props.rows.length > LIBRARY_PAGE}>
             <label class="notes-filter">
               <span>Find a note</span>
               <input
@@ -161,34 +163,32 @@ export function Library(props: LibraryProps): JSX.Element {
             </label>
           </Show>
           <p class="notes-small" aria-live="polite">
-            {matching().length === props.notes.length ? `${props.notes.length} notes` : `${matching().length} of ${props.notes.length} notes match`}
+            {matching().length === props.rows.length ? `${props.rows.length} notes` : `${matching().length} of ${props.rows.length} notes match`}
             {shown().length < matching().length ? `; the first ${shown().length} are shown` : ""}
+            {props.checking ? ". Checking the whole library…" : ""}
           </p>
           <ul class="notes-list" aria-label="Saved location notes">
             <For each={shown()}>
-              {(s) => {
-                const rev = () => latestRevision(s.note);
-                return (
-                  <li class="notes-item">
-                    <button type="button" class="notes-item-open" onClick={() => props.onOpen(s.note.id)}>
-                      <span class="notes-item-name">{s.note.name}</span>
-                      <span class="notes-item-detail">
-                        {[s.note.line, s.note.direction].filter(Boolean).join(" · ")}
-                        {s.note.line || s.note.direction ? " — " : ""}revised {rev().date} by {rev().initials} · {ORIGIN_WORD[s.origin]}
-                      </span>
-                      <Show when={s.note.illustrative}>
-                        <span class="notes-tag">Illustrative</span>
-                      </Show>
-                      <Show when={s.flags && s.flags.length > 0}>
-                        <span class="notes-tag notes-flag">To check: {s.flags!.length} thing{s.flags!.length === 1 ? "" : "s"} not carried over</span>
-                      </Show>
-                    </button>
-                    <button type="button" class="button" aria-label={`Card of ${s.note.name}`} onClick={() => props.onCard(s.note.id)}>
-                      Card
-                    </button>
-                  </li>
-                );
-              }}
+              {(s) => (
+                <li class="notes-item">
+                  <button type="button" class="notes-item-open" onClick={() => props.onOpen(s.id)}>
+                    <span class="notes-item-name">{s.name}</span>
+                    <span class="notes-item-detail">
+                      {[s.line, s.direction].filter(Boolean).join(" · ")}
+                      {s.line || s.direction ? " — " : ""}revised {s.revised.date} by {s.revised.initials} · {ORIGIN_WORD[s.origin]}
+                    </span>
+                    <Show when={s.illustrative}>
+                      <span class="notes-tag">Illustrative</span>
+                    </Show>
+                    <Show when={s.flags > 0}>
+                      <span class="notes-tag notes-flag">To check: {s.flags} thing{s.flags === 1 ? "" : "s"} not carried over</span>
+                    </Show>
+                  </button>
+                  <button type="button" class="button" aria-label={`Card of ${s.name}`} onClick={() => props.onCard(s.id)}>
+                    Card
+                  </button>
+                </li>
+              )}
             </For>
           </ul>
           <Show when={shown().length < matching().length}>
@@ -238,7 +238,7 @@ export function Library(props: LibraryProps): JSX.Element {
         <button type="button" class="button" onClick={() => props.onRestoreDemos()}>
           Put back the demo notes
         </button>
-        <Show when={props.notes.length > 0}>
+        <Show when={props.rows.length > 0}>
           <Show
             when={confirmAll()}
             fallback={
@@ -248,7 +248,7 @@ export function Library(props: LibraryProps): JSX.Element {
             }
           >
             <div class="notes-confirm" role="group" aria-label="Confirm removing all notes">
-              <p>Remove all {props.notes.length} notes from this device? Export them first if you may want them again.</p>
+              <p>Remove all {props.rows.length} notes from this device? Export them first if you may want them again.</p>
               <button
                 type="button"
                 class="button danger"

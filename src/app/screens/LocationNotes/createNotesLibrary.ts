@@ -8,7 +8,7 @@ import { readNotesText, type NotesBundleFile, type NotesFileResult } from "../..
 import type { FieldIssue } from "../../../profiles/issues.js";
 import type { ConflictChoice, ImportConflict } from "../../../notes/merge.js";
 import { requestPersistentStorage, type ExportReminder, type PersistResult } from "../../../notes/reminder.js";
-import type { RecordProblem, SavedNote } from "../../../notes/records.js";
+import { rowOf, type NoteRow, type RecordProblem, type SavedNote } from "../../../notes/records.js";
 import { NotesClosedError, type NotesStore, type PutResult, type SaveBase } from "../../../notes/store.js";
 import { readNotesFile, type TextSource } from "./notesFile.js";
 
@@ -26,6 +26,12 @@ export interface NotesLibrary {
   /** Set when the store could not be opened at all (no IndexedDB, blocked by the browser). */
   failure: Accessor<string | null>;
   notes: Accessor<SavedNote[]>;
+  /** The library's rows: at once from the last listing, then from the full read. */
+  rows: Accessor<NoteRow[]>;
+  /** The rows shown come from the last listing; the full read (which finds damaged records) is under way. */
+  checking: Accessor<boolean>;
+  /** One note, validated (from the list when it has been read, else from the store). */
+  note(id: string): Promise<SavedNote | undefined>;
   problems: Accessor<RecordProblem[]>;
   reminder: Accessor<ExportReminder | undefined>;
   persisted: Accessor<PersistResult | undefined>;
@@ -68,6 +74,8 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
   const [ready, setReady] = createSignal(false);
   const [failure, setFailure] = createSignal<string | null>(null);
   const [notes, setNotes] = createSignal<SavedNote[]>([]);
+  const [rows, setRows] = createSignal<NoteRow[]>([]);
+  const [checking, setChecking] = createSignal(false);
   const [problems, setProblems] = createSignal<RecordProblem[]>([]);
   const [reminder, setReminder] = createSignal<ExportReminder | undefined>();
   const [persisted, setPersisted] = createSignal<PersistResult | undefined>();
@@ -112,11 +120,28 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
 
   const refresh = async () => {
     await guarded(async (s) => {
+      // A large library shows at once from its last listing, while the full read (and check) goes on.
+      const t0 = performance.now();
+      if (!ready()) {
+        const quick = await s.quickRows();
+        if (quick && !ready()) {
+          batch(() => {
+            setRows(quick);
+            setChecking(true);
+            setReady(true);
+          });
+          performance.mark("taut:notes-rows", { detail: { notes: quick.length, ms: performance.now() - t0 } });
+        }
+      }
       // One read of the library serves the list and the export reminder.
       const list = await s.list();
       const rem = await s.exportReminder(undefined, list);
+      // For the browser checks and the bench: how long the library took to read.
+      performance.mark("taut:notes-listed", { detail: { notes: list.notes.length, ms: performance.now() - t0 } });
       batch(() => {
         setNotes(list.notes);
+        setRows(list.notes.map(rowOf));
+        setChecking(false);
         setProblems(list.problems);
         setReminder(rem);
         setReady(true);
@@ -180,6 +205,14 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
     setNotice,
     refresh,
     closed,
+    rows,
+    checking,
+    async note(id) {
+      const listed = notes().find((n) => n.note.id === id);
+      if (listed) return listed;
+      const got = await guarded((s) => s.get(id));
+      return got?.status === "ok" ? got.saved : undefined;
+    },
     async save(note, base) {
       const s = await open();
       if (!s) return { ok: false, issues: [{ path: "", message: failure() ?? "The notes library is not available." }] };

@@ -80,7 +80,7 @@ export function LocationNotesScreen(): JSX.Element {
     active: () => mode() !== "library",
     computeLoadTable: noteLoadTableOn(app.pool),
   });
-  const takenIds = createMemo(() => new Set(lib.notes().map((n) => n.note.id)));
+  const takenIds = createMemo(() => new Set(lib.rows().map((r) => r.id)));
   /** Which stored version the note being edited started from (a save that finds another asks first). */
   const [base, setBase] = createSignal<SaveBase>("new");
   const [saveConflict, setSaveConflict] = createSignal<{ conflict: SaveConflict; note: Record<string, unknown> } | null>(null);
@@ -276,8 +276,8 @@ export function LocationNotesScreen(): JSX.Element {
     }
   };
 
-  const openNote = (id: string, then: Mode) => {
-    const s = lib.notes().find((n) => n.note.id === id);
+  const openNote = async (id: string, then: Mode) => {
+    const s = await lib.note(id);
     if (!s) return;
     lib.setNotice(null);
     editor.load(s.note);
@@ -317,7 +317,8 @@ export function LocationNotesScreen(): JSX.Element {
       library={{
         ready: lib.ready(),
         failure: lib.failure(),
-        notes: lib.notes(),
+        rows: lib.rows(),
+        checking: lib.checking(),
         problems: lib.problems(),
         reminder: lib.reminder(),
         persisted: lib.persisted(),
@@ -341,8 +342,8 @@ export function LocationNotesScreen(): JSX.Element {
         onRescue: rescue,
       }}
       railml={{ imp: railml, onOpen: () => (lib.setNotice(null), setMode("railml")), onSave: saveRailml, onEdit: editRailml }}
-      onOpen={(id) => openNote(id, "edit")}
-      onCard={(id) => openNote(id, "card")}
+      onOpen={(id) => void openNote(id, "edit")}
+      onCard={(id) => void openNote(id, "card")}
       onNew={() => {
         lib.setNotice(null);
         editor.load(undefined);

@@ -4,6 +4,7 @@
  * runs here.
  */
 import { readNotesText, type NotesFileResult } from "../../../profiles/notes.js";
+import type { LocationNoteFile } from "../../../profiles/schemas.js";
 import type { NotesFileReply, NotesFileRequest } from "./notesFile.worker.js";
 
 /** Something with the text of a file: a File or Blob in the browser. */
@@ -18,7 +19,12 @@ export async function readNotesFile(file: TextSource): Promise<NotesFileResult> 
     const w = new Worker(new URL("./notesFile.worker.ts", import.meta.url), { type: "module", name: "taut-notes-file" });
     worker = w;
     return await new Promise<NotesFileResult>((resolve, reject) => {
-      w.onmessage = (ev: MessageEvent<NotesFileReply>) => resolve(ev.data.result);
+      const notes: LocationNoteFile[] = [];
+      w.onmessage = (ev: MessageEvent<NotesFileReply>) => {
+        const m = ev.data;
+        if (m.kind === "part") notes.push(...m.notes);
+        else resolve(m.result.ok ? { ...m.result, notes } : m.result);
+      };
       w.onerror = (ev) => reject(new Error(ev.message || "the file reader stopped"));
       w.postMessage({ id: 1, file } satisfies NotesFileRequest);
     });

@@ -4,15 +4,20 @@
  * `readNotesText` result out.
  */
 import { readNotesText, type NotesFileResult } from "../../../profiles/notes.js";
+import type { LocationNoteFile } from "../../../profiles/schemas.js";
 
 export interface NotesFileRequest {
   id: number;
   file: Blob;
 }
-export interface NotesFileReply {
-  id: number;
-  result: NotesFileResult;
-}
+/**
+ * The notes come back a few hundred at a time (`part`), then the result without them (`done`): the page
+ * takes each part in as a short task instead of one long one for a whole library.
+ */
+export type NotesFileReply = { id: number; kind: "part"; notes: LocationNoteFile[] } | { id: number; kind: "done"; result: NotesFileResult };
+
+/** Notes per part. */
+const PART = 500;
 
 interface Scope {
   onmessage: ((ev: MessageEvent<NotesFileRequest>) => void) | null;
@@ -23,7 +28,13 @@ const scope = self as unknown as Scope;
 scope.onmessage = (ev) => {
   const { id, file } = ev.data;
   file.text().then(
-    (text) => scope.postMessage({ id, result: readNotesText(text) }),
-    (e: unknown) => scope.postMessage({ id, result: { ok: false, message: `The file could not be read (${e instanceof Error ? e.message : String(e)}). Nothing was changed.`, issues: [] } }),
+    (text) => {
+      const result = readNotesText(text);
+      if (!result.ok) return scope.postMessage({ id, kind: "done", result });
+      for (let k = 0; k < result.notes.length; k += PART) scope.postMessage({ id, kind: "part", notes: result.notes.slice(k, k + PART) });
+      scope.postMessage({ id, kind: "done", result: { ...result, notes: [] } });
+    },
+    (e: unknown) =>
+      scope.postMessage({ id, kind: "done", result: { ok: false, message: `The file could not be read (${e instanceof Error ? e.message : String(e)}). Nothing was changed.`, issues: [] } }),
   );
 };
