@@ -279,7 +279,8 @@ export function LocationNotesScreen(): JSX.Element {
   const openNote = async (id: string, then: Mode) => {
     const s = await lib.note(id);
     if (!s) return;
-    lib.setNotice(null);
+    // A note carried over from the older format with something left out says what, until it is saved again.
+    lib.setNotice(s.flags && s.flags.length > 0 ? { kind: "problem", text: "Carried over from the older notes format with something left out: check it, then save.", details: s.flags } : null);
     editor.load(s.note);
     setBase({ rev: s.rev });
     setMode(then);
