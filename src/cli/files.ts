@@ -29,10 +29,11 @@ function kindOfFile(st: ReturnType<typeof fstatSync>): string {
 }
 
 /**
- * A regular file's text, or why it cannot be read (in words that never quote the file). The file is opened
- * without blocking and checked on the open handle, so a named pipe is refused, not waited on.
+ * Open a regular file for reading, or say why not (in words that never quote the file). The file is opened
+ * without blocking and checked on the open handle, so a named pipe is refused, not waited on, and nothing
+ * can swap the file between the check and the read. The caller closes the descriptor.
  */
-export function readRegularFile(path: string): { ok: true; text: string } | { ok: false; why: string } {
+export function openRegularFile(path: string): { ok: true; fd: number; size: number } | { ok: false; why: string } {
   let fd: number;
   try {
     fd = openSync(path, constants.O_RDONLY | (constants.O_NONBLOCK ?? 0));
@@ -44,8 +45,24 @@ export function readRegularFile(path: string): { ok: true; text: string } | { ok
   }
   try {
     const st = fstatSync(fd);
-    if (!st.isFile()) return { ok: false, why: `is ${kindOfFile(st)}, not a file: give a JSON or CSV file` };
-    if (st.size > MAX_INPUT_BYTES) return { ok: false, why: `is ${Math.round(st.size / 1048576)} MB, more than the ${MAX_INPUT_BYTES / 1048576} MB a file may have` };
+    if (!st.isFile()) {
+      closeSync(fd);
+      return { ok: false, why: `is ${kindOfFile(st)}, not a file` };
+    }
+    return { ok: true, fd, size: st.size };
+  } catch (e) {
+    closeSync(fd);
+    return { ok: false, why: `cannot be read (${(e as NodeJS.ErrnoException).code ?? "error"})` };
+  }
+}
+
+/** A regular file's text, or why it cannot be read (in words that never quote the file). */
+export function readRegularFile(path: string): { ok: true; text: string } | { ok: false; why: string } {
+  const opened = openRegularFile(path);
+  if (!opened.ok) return { ok: false, why: opened.why.endsWith("not a file") ? `${opened.why}: give a JSON or CSV file` : opened.why };
+  const fd = opened.fd;
+  try {
+    if (opened.size > MAX_INPUT_BYTES) return { ok: false, why: `is ${Math.round(opened.size / 1048576)} MB, more than the ${MAX_INPUT_BYTES / 1048576} MB a file may have` };
     const bytes = readFileSync(fd);
     if (bytes.length > MAX_INPUT_BYTES) return { ok: false, why: `holds more than the ${MAX_INPUT_BYTES / 1048576} MB a file may have` };
     return { ok: true, text: bytes.toString("utf8") };

@@ -114,6 +114,7 @@ describe("files: only regular files are read, case files only from the CSV's fol
     ["simulate", (p) => ["simulate", p, "--sequence", "1@0"]],
     ["check", (p) => ["check", p, "--quiet"]],
     ["table", (p) => ["table", p, "--loco", "illustrative-4axle-1100"]],
+    ["notes from-railml", (p) => ["notes", "from-railml", p, "--at", "0", "--direction", "up"]],
   ];
   for (const [what, path, message] of specials) {
     it(`every command refuses ${what} at once with exit 2`, async () => {
@@ -156,11 +157,18 @@ describe("files: only regular files are read, case files only from the CSV's fol
 
   it("a file named by mistake is not quoted in the error, whichever command reads it", async () => {
     const secret = file("named/passwd", "root:x:0:0:SECRET-TEXT:/root:/bin/sh\n");
-    for (const argv of [["plan", secret], ["simulate", secret, "--sequence", "1@0"], ["plan", "--demo", "--notes", secret], ["check", secret], ["table", secret, "--loco", "illustrative-4axle-1100"]]) {
+    for (const argv of [
+      ["plan", secret],
+      ["simulate", secret, "--sequence", "1@0"],
+      ["plan", "--demo", "--notes", secret],
+      ["check", secret],
+      ["table", secret, "--loco", "illustrative-4axle-1100"],
+      ["notes", "from-railml", secret, "--at", "0", "--direction", "up"],
+    ]) {
       const r = await taut(...argv);
       expect(r.code, argv[0]).toBe(2);
       expect(r.stderr).not.toContain("SECRET");
-      expect(r.stderr).not.toContain("root");
+      expect(r.stderr).not.toContain("root:x");
     }
   });
 });

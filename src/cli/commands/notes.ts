@@ -4,7 +4,8 @@
  * train's front, its gradients and curves laid end to end (src/profiles/railml). The file is read as a
  * stream, so a large export is never held whole in memory.
  */
-import { createReadStream, statSync, writeFileSync } from "node:fs";
+import { createReadStream, writeFileSync } from "node:fs";
+import { openRegularFile, pathText } from "../files.js";
 import { basename } from "node:path";
 import { builtinTrains } from "../../profiles/builtin.js";
 import { createRailmlReader, noteIdFrom, RailmlError, railmlNote, railmlStretch, stretchWords, type FrontPlace, type RailmlModel } from "../../profiles/railml/index.js";
@@ -147,21 +148,17 @@ function today(now = new Date()): string {
 
 /** Read a railML file as a stream of text into the reader. */
 export async function readRailmlFile(path: string): Promise<RailmlModel> {
-  try {
-    if (!statSync(path).isFile()) throw new InputError(`${path}: not a file`);
-  } catch (e) {
-    if (e instanceof InputError) throw e;
-    const code = (e as NodeJS.ErrnoException).code;
-    throw new InputError(code === "ENOENT" ? `${path}: no such file` : `${path}: cannot be read (${code ?? (e as Error).message})`);
-  }
+  // A regular file only, checked on the open handle (a named pipe would be waited on for ever).
+  const opened = openRegularFile(path);
+  if (!opened.ok) throw new InputError(`${pathText(path)}: ${opened.why}`);
   const reader = createRailmlReader();
   try {
-    for await (const chunk of createReadStream(path, { encoding: "utf8", highWaterMark: 1 << 20 })) reader.write(chunk as string);
+    for await (const chunk of createReadStream(path, { fd: opened.fd, encoding: "utf8", highWaterMark: 1 << 20 })) reader.write(chunk as string);
     return reader.close();
   } catch (e) {
-    if (e instanceof RailmlError) throw new InputError(`${path}: ${e.message}`);
+    if (e instanceof RailmlError) throw new InputError(`${pathText(path)}: ${e.message}`);
     const code = (e as NodeJS.ErrnoException).code;
-    if (code) throw new InputError(`${path}: cannot be read (${code})`);
+    if (code) throw new InputError(`${pathText(path)}: cannot be read (${code})`);
     throw e;
   }
 }
