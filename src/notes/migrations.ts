@@ -10,7 +10,7 @@
  */
 import { parseLocationNote } from "../profiles/parse.js";
 import { formatIssues } from "../profiles/issues.js";
-import type { NoteRecord } from "./records.js";
+import type { NoteRecord } from "./recordTypes.js";
 import { RAIL_CONDITIONS } from "../core/physics/types.js";
 
 export const NOTES_DB_VERSION = 2;

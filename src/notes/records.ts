@@ -8,26 +8,11 @@ import { parseLocationNote } from "../profiles/parse.js";
 import { latestRevision } from "../profiles/notes.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { migrateV1Record } from "./migrations.js";
+import type { NoteOrigin, NoteRecord } from "./recordTypes.js";
 
-/** Where a saved note came from: a demo note shipped with the program, the user's own, or a file. */
-export type NoteOrigin = "demo" | "mine" | "imported";
+export type { NoteOrigin, NoteRecord } from "./recordTypes.js";
+
 const ORIGINS: readonly NoteOrigin[] = ["demo", "mine", "imported"];
-
-/** One note as stored (schema version 2): the note file itself plus where it came from and when it was saved. */
-export interface NoteRecord {
-  id: string;
-  origin: NoteOrigin;
-  /** When it was last written on this device, ISO 8601. */
-  savedAt: string;
-  /**
-   * How many times the record has been written on this device (absent in records written before it was
-   * kept: 0). A save says which one it started from, so an edit made in another tab meanwhile is found.
-   */
-  rev?: number;
-  /** What a migration from the older format could not carry over, for the trainer to look at. */
-  flags?: string[];
-  note: LocationNoteFile;
-}
 
 /** A saved note, validated. */
 export interface SavedNote {

@@ -276,9 +276,13 @@ export function LocationNotesScreen(): JSX.Element {
     }
   };
 
-  const openNote = async (id: string, then: Mode) => {
-    const s = await lib.note(id);
-    if (!s) return;
+  const openNote = (id: string, then: Mode) => {
+    // At once when the library has been read; from the store when only its rows are shown yet.
+    const listed = lib.notes().find((n) => n.note.id === id);
+    if (listed) showNote(listed, then);
+    else void lib.note(id).then((s) => s && showNote(s, then));
+  };
+  const showNote = (s: SavedNote, then: Mode) => {
     // A note carried over from the older format with something left out says what, until it is saved again.
     lib.setNotice(s.flags && s.flags.length > 0 ? { kind: "problem", text: "Carried over from the older notes format with something left out: check it, then save.", details: s.flags } : null);
     editor.load(s.note);
@@ -343,8 +347,8 @@ export function LocationNotesScreen(): JSX.Element {
         onRescue: rescue,
       }}
       railml={{ imp: railml, onOpen: () => (lib.setNotice(null), setMode("railml")), onSave: saveRailml, onEdit: editRailml }}
-      onOpen={(id) => void openNote(id, "edit")}
-      onCard={(id) => void openNote(id, "card")}
+      onOpen={(id) => openNote(id, "edit")}
+      onCard={(id) => openNote(id, "card")}
       onNew={() => {
         lib.setNotice(null);
         editor.load(undefined);
