@@ -28,7 +28,7 @@ describe("invalid inputs", () => {
     expect(harness.state.run.status()).toBe("invalid");
     const noPlan = document.querySelector("[data-no-plan]")!;
     expect(noPlan.textContent).toContain("No plan: fix the inputs");
-    expect(noPlan.textContent).toContain("Trailing mass must be greater than 0 t (got −100 t)");
+    expect(noPlan.textContent).toContain("Trailing mass must be from 5 to 60,000 t (got −100 t)");
     expect(document.querySelector(".verdict")).toBeNull();
     expect(document.querySelectorAll(".step-card")).toHaveLength(0);
     expect(screen.queryByRole("button", { name: /Open Cab steps/ })).toBeNull();

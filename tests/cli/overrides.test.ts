@@ -102,7 +102,7 @@ describe("taut plan overrides", () => {
     expect(word.stderr).toMatch(/--mass: a trailing mass in tonnes is needed \(got "heavy"\)/);
     const negative = await taut("plan", base, "--mass=-100");
     expect(negative.code).toBe(2);
-    expect(negative.stderr).toMatch(/train\.trailingMass_t: must be greater than 0 \(got -100\)/);
+    expect(negative.stderr).toMatch(/train\.trailingMass_t: must be from 5 to 60000 t \(got -100\)/);
     const steep = await taut("plan", base, "--grade", "75");
     expect(steep.code).toBe(2);
     expect(steep.stderr).toMatch(/location\.gradient_permille/);

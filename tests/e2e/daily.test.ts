@@ -52,7 +52,7 @@ describe("fit for daily use", () => {
       await page.setViewportSize(LANDSCAPE);
       await mass().fill("-100");
       await page.waitForSelector("[data-no-plan]");
-      expect(await page.locator("[data-no-plan]").textContent()).toContain("Trailing mass must be greater than 0 t (got −100 t)");
+      expect(await page.locator("[data-no-plan]").textContent()).toContain("Trailing mass must be from 5 to 60,000 t (got −100 t)");
       expect(await page.locator(".verdict").count()).toBe(0);
       expect(await page.getByRole("button", { name: "Open Cab steps" }).count()).toBe(0);
       await shot(`invalid-landscape-${t}`);

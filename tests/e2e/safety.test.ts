@@ -96,7 +96,7 @@ describe("data safety in the browser", () => {
 
   it("a Start plan draft the app cannot use is set aside at launch: the demo opens with a notice", async () => {
     await page.goto(`${base}#/start-plan`);
-    await page.locator("[data-verdict]").waitFor({ timeout: 30_000 });
+    await page.locator("section[data-verdict]").waitFor({ timeout: 30_000 });
     await page.evaluate(() => {
       const d = JSON.parse(localStorage.getItem("taut.case.v1") ?? "null") as { train: { coupling: string } } | null;
       if (!d) throw new Error("no stored draft");
@@ -104,7 +104,7 @@ describe("data safety in the browser", () => {
       localStorage.setItem("taut.case.v1", JSON.stringify(d));
     });
     await page.reload();
-    await page.locator("[data-verdict]").waitFor({ timeout: 30_000 });
+    await page.locator("section[data-verdict]").waitFor({ timeout: 30_000 });
     await page.getByText(/Your last Start plan inputs could not be read \(train\.coupling: "chain" is not allowed here\)/).waitFor();
     expect(await page.evaluate(() => localStorage.getItem("taut.case.v1.set-aside"))).toContain('"chain"');
   }, 60_000);
