@@ -58,6 +58,7 @@ export function builtinLibrary(): Library {
     wagons: new Map(wagonFiles.map((f) => [f.id, wagonFromFile(f)])),
     locations: new Map(builtinLocations.map((n) => [n.id, n])),
     adhesion: adhesionFromFile(builtinRailConditions),
+    cases: new Map(builtinCases.map((c, k) => [c.id ?? DEMO_CASE_ID, builtinCaseJson[k]])),
   };
 }
 

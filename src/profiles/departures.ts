@@ -72,6 +72,9 @@ export function caseFileJson(text: string): unknown {
  * Departures from a CSV departures file's text. `readCase(path)` gives the JSON of the start-case file a row
  * names (as written in the CSV), or an Error saying why it cannot; it is asked once per distinct path.
  */
+/** What a case named by id looks like: letters, digits and hyphens only. */
+const CASE_ID = /^[A-Za-z0-9][A-Za-z0-9-]*$/;
+
 export function departuresFromCsv(text: string, readCase: (casePath: string) => unknown, lib: Library): DeparturesRead {
   let records;
   try {
@@ -102,7 +105,9 @@ export function departuresFromCsv(text: string, readCase: (casePath: string) => 
       const sandWord = cell(fields, "sand").toLowerCase();
       if (sandWord !== "" && SAND_WORDS[sandWord] === undefined) return fail(`sand: must be yes or no (true/false, 1/0) (got ${quoted(sandWord)})`);
       const location = cell(fields, "location");
-      if (!files.has(casePath)) files.set(casePath, readCase(casePath));
+      // A bare id (no folder, no extension) names a case of the library — the built-in demo cases — so a
+      // shared departures file need not reach outside its own folder for them.
+      if (!files.has(casePath)) files.set(casePath, CASE_ID.test(casePath) && lib.cases?.has(casePath) ? lib.cases.get(casePath) : readCase(casePath));
       const raw = files.get(casePath);
       const shownPath = printable(casePath);
       if (raw instanceof Error) return fail(`${shownPath}: ${raw.message}`);

@@ -12,6 +12,11 @@ export interface Library {
   wagons: ReadonlyMap<string, WagonType>;
   locations: ReadonlyMap<string, LocationNoteFile>;
   adhesion: AdhesionTable;
+  /**
+   * Start cases a departures file may name by id instead of by path (the built-in demo cases), as their raw
+   * JSON: each row's overrides are applied to it before it is parsed, as to a case file.
+   */
+  cases?: ReadonlyMap<string, unknown>;
 }
 
 /** A library with extra location notes (e.g. the device's own) layered over another. */

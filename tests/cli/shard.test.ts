@@ -5,14 +5,12 @@
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { fileURLToPath } from "node:url";
 import fc from "fast-check";
 import { afterAll, describe, expect, it } from "vitest";
 import { parseShard, shardOf } from "../../src/cli/batch/shard.js";
 import { parseCsv } from "../../src/cli/csvParse.js";
 import { taut } from "../tools/cli.js";
 
-const repo = fileURLToPath(new URL("../../", import.meta.url));
 const dir = mkdtempSync(join(tmpdir(), "taut-shard-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
@@ -39,18 +37,17 @@ describe("shards of a list", () => {
 });
 
 describe("taut check --shard", () => {
-  // The quickest demo train under five rail conditions, and one row that cannot be read.
-  const cases = `${repo}profiles/cases`;
+  // The quickest demo train (a built-in case, named by id) under five rail conditions, and one row that cannot be read.
   const csv = join(dir, "day.csv");
   writeFileSync(
     csv,
     [
       "id,case,rail,sand",
-      `d1,${cases}/demo-goods-cinderfield.json,dry,yes`,
-      `d2,${cases}/demo-goods-cinderfield.json,wet,yes`,
-      `d3,${cases}/no-such-case.json,dry,yes`,
-      `d4,${cases}/demo-goods-cinderfield.json,leaves,yes`,
-      `d5,${cases}/demo-goods-cinderfield.json,dry,yes`,
+      "d1,demo-goods-cinderfield,dry,yes",
+      "d2,demo-goods-cinderfield,wet,yes",
+      "d3,no-such-case.json,dry,yes",
+      "d4,demo-goods-cinderfield,leaves,yes",
+      "d5,demo-goods-cinderfield,dry,yes",
     ].join("\n"),
   );
 

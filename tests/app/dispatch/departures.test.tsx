@@ -165,7 +165,9 @@ describe("Departures", () => {
   it("reads a CSV day with the case files picked alongside, matched by file name; a missing one is named and can be added", async () => {
     const pool = fakePool({ check: (c) => ok(answerFor(c)) });
     renderWithApp(() => <Departures />, { pool });
-    const csv = new File([read("departures/demo-day.csv")], "demo-day.csv", { type: "text/csv" });
+    // The demo day with its cases named as files beside it (the shipped CSV names them by built-in id).
+    const byFile = read("departures/demo-day.csv").replace(/,(demo-[a-z-]+),/g, ",../cases/$1.json,");
+    const csv = new File([byFile], "demo-day.csv", { type: "text/csv" });
     const cases = ["demo-aggregate-ashvale", "demo-ore-lantern", "demo-goods-cinderfield"].map((n) => new File([read(`cases/${n}.json`)], `${n}.json`));
     fireEvent.change(picker(), { target: { files: [csv, cases[0], cases[1]] } });
     await screen.findByText(/Case files named in the CSV but not picked/);
