@@ -7,7 +7,7 @@ import { basename, dirname, extname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { describe, expect, it } from "vitest";
 import { RAIL_CONDITIONS } from "../../src/core/index.js";
-import { builtinLibrary, builtinLocations, builtinRailConditions, builtinTrains, DEMO_CASE_ID } from "../../src/profiles/builtin.js";
+import { builtinCases, builtinLibrary, builtinLocations, builtinRailConditions, builtinTrains, DEMO_CASE_ID } from "../../src/profiles/builtin.js";
 import {
   formatIssues,
   parseJsonText,
@@ -69,13 +69,18 @@ describe("profile files", () => {
     it(`${rel} parses with its folder's schema`, () => {
       const folder = rel.split("/")[0]!;
       if (extname(rel) === ".csv") {
-        // A departures table (INTERFACE.md: columns id,case,rail,sand; case paths relative to the CSV).
+        // A departures table (INTERFACE.md: columns id,case,rail,sand; a case path relative to the CSV, or the
+        // id of a built-in case, which must then be a shipped case file of that name).
         expect(folder).toBe("departures");
         const [header, ...rows] = readFileSync(join(root, rel), "utf8").trim().split(/\r?\n/);
         expect(header!.split(",").slice(0, 4)).toEqual(["id", "case", "rail", "sand"]);
+        const builtinIds = new Set(builtinCases.map((c) => c.id));
         for (const row of rows) {
-          const casePath = join(root, dirname(rel), row.split(",")[1]!);
-          expect(existsSync(casePath), casePath).toBe(true);
+          const ref = row.split(",")[1]!;
+          if (/^[A-Za-z0-9][A-Za-z0-9-]*$/.test(ref)) {
+            expect(builtinIds.has(ref), ref).toBe(true);
+            expect(existsSync(join(root, "cases", `${ref}.json`)), ref).toBe(true);
+          } else expect(existsSync(join(root, dirname(rel), ref)), ref).toBe(true);
         }
         return;
       }
