@@ -39,6 +39,7 @@ const FIELDS: Record<string, FieldDef> = {
   "target.distance_m": { label: "Target distance", measure: "distance", fileUnit: "m" },
   "settings.couplerSafetyFactor": { label: "Coupler safety factor (Settings)" },
   "settings.slipRiskThreshold": { label: "Slip-risk threshold (Settings)" },
+  "settings.marginalSlipRisk": { label: "Marginal slip-risk bound (Settings)" },
 };
 
 /** The field an issue path belongs to (list indices do not matter). */

@@ -49,6 +49,7 @@ export function divideReport(d: DividedTrain): DivideReport {
     firstPart: { wagons: d.wagons, trailingMass_t: t(d.trailingMassKg), length_m: r(d.lengthM, 0) },
     remaining: { wagons: d.remainingWagons, trailingMass_t: Math.ceil(d.remainingMassKg / 1000) },
     trips: d.trips,
+    maxParts: d.maxParts,
     verdict: d.plan ? d.plan.verdict : null,
     peakCouplerForce_kN: d.plan ? kN(d.plan.peakCouplerForceN) : null,
     timeToTarget_s: d.plan && d.plan.timeToTargetS !== null ? r(d.plan.timeToTargetS, 0) : null,
@@ -77,8 +78,9 @@ export function conditionMarginReport(m: ConditionMargin): ConditionMarginReport
     verdict: m.verdict,
     reasons: m.reasons,
     margin: round(m.margin),
-    margins: { adhesion: round(m.margins.adhesion), power: round(m.margins.power), coupler: round(m.margins.coupler), distance: round(m.margins.distance) },
+    margins: { adhesion: round(m.margins.adhesion), power: round(m.margins.power), coupler: round(m.margins.coupler), distance: round(m.margins.distance), brake: round(m.margins.brake) },
     limitedBy: m.limitedBy,
+    binding: m.binding,
   };
 }
 

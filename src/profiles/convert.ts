@@ -35,6 +35,7 @@ export function locomotiveFromFile(f: LocomotiveFile): LocomotiveSpec {
     frontalAreaM2: f.frontalArea_m2 ?? DEFAULT_LOCO_FRONTAL_AREA_M2,
   };
   if (f.startingResistance_permille !== undefined) spec.startingResistancePermille = f.startingResistance_permille;
+  if (f.locomotiveBrakeHolding_kN !== undefined) spec.locoBrakeHoldingN = kNToN(f.locomotiveBrakeHolding_kN);
   return spec;
 }
 

@@ -102,4 +102,6 @@ export const CHECK_CSV_HEADER = [
   "divideFirstWagons",
   "divideFirstMass_t",
   "error",
+  "binding",
+  "largestMarginalMass_t",
 ] as const;

@@ -138,6 +138,8 @@ export function resolveStartCase(f: StartCaseFile, lib: Library): ParseResult<St
       ...DEFAULT_SETTINGS,
       ...(f.settings?.couplerSafetyFactor !== undefined ? { couplerSafetyFactor: f.settings.couplerSafetyFactor } : {}),
       ...(f.settings?.slipRiskThreshold !== undefined ? { slipRiskThreshold: f.settings.slipRiskThreshold } : {}),
+      ...(f.settings?.marginalSlipRisk !== undefined ? { marginalSlipRisk: f.settings.marginalSlipRisk } : {}),
+      ...(f.settings?.maxDividedParts !== undefined ? { maxDividedParts: f.settings.maxDividedParts } : {}),
     },
   };
   if (locNote) {

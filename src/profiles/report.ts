@@ -5,7 +5,7 @@
 import { caseCautions, STANDARD_CAUTIONS } from "../core/planner/cautions.js";
 import type { PlanResult, PlanStep } from "../core/planner/types.js";
 import type { StaticCheck } from "../core/planner/staticCheck.js";
-import type { Reason, Verdict } from "../core/planner/outcome.js";
+import type { LimitCheck, LimitName, Reason, StartKind, Verdict } from "../core/planner/outcome.js";
 import type { StartCase } from "../core/train/types.js";
 import { roundHalfAway } from "./numbers.js";
 
@@ -22,9 +22,26 @@ export interface StepReport {
   adhesionUseAt_kmh?: number;
   adhesionUseEffort_kN?: number;
   slipRisk: number;
+  /** The notch asks for more than the rail the plan assumes gives: the slip protection is expected to act. */
+  protectionActs?: boolean;
   peakCouplerForce_kN: number;
   fallbackNotch: number;
   why: string;
+}
+
+/** One limit of the decision: demand against allowance, with units in the names. */
+export interface LimitReport {
+  name: LimitName;
+  reason: Reason;
+  level: "within" | "soft" | "over";
+  margin: number;
+  /** Demand and allowance in the unit named (kN, m or s). */
+  unit: "kN" | "m" | "s";
+  demand: number;
+  allowance: number;
+  /** Exceeding the allowance is marginal while the band's allowance covers its demand. */
+  band: { demand: number; allowance: number; what: string } | null;
+  what: string;
 }
 
 export interface AssistanceReport {
@@ -56,6 +73,8 @@ export interface DivideReport {
   remaining: { wagons: number; trailingMass_t: number };
   /** Trips if every trip takes a part of this size (a guide: the rest stands on other track). */
   trips: number;
+  /** The most parts dividing may make (the case's setting). */
+  maxParts?: number;
   /** "starts" when a full plan confirmed the first part; null when only a verdict run judged it. */
   verdict: Verdict | null;
   peakCouplerForce_kN: number | null;
@@ -81,9 +100,20 @@ export interface PlanReport {
   case: { id?: string; label?: string; illustrative?: boolean; overrides?: { rail?: string; sand?: boolean; trailingMass_t?: number; gradient_permille?: number } };
   verdict: Verdict;
   reasons: Reason[];
-  /** Smallest of the margins (available ÷ needed). */
+  /** The binding limit's margin (allowance ÷ demand, the smallest of all); starts ⇔ margin ≥ 1. */
   margin: number;
-  margins: { adhesion: number; power: number; coupler: number; distance: number };
+  /** The limit the margin is of. */
+  binding?: LimitName;
+  /** The smallest margin of each reason (99 when not in question). */
+  margins: { adhesion: number; power: number; coupler: number; distance: number; brake?: number };
+  /** Every limit of the decision (How Taut decides, README). */
+  limits?: LimitReport[];
+  /** Power start, or a start gravity makes once the brakes are eased. */
+  startKind?: StartKind;
+  /** Quantile of the rail condition the steps assume. */
+  planAdhesionQuantile?: number;
+  /** Why the verdict is what it is and what would change it (empty when it starts). */
+  advice?: string[];
   resistance_kN: { starting: number; grade: number; curve: number; running: number; total: number };
   adhesion: {
     mu: number;
@@ -98,6 +128,10 @@ export interface PlanReport {
   peakCouplerForce_kN: number;
   timeToTarget_s: number | null;
   maxStartableMass_t: number;
+  /** Largest trailing mass that is at least marginal. */
+  largestMarginalMass_t?: number;
+  /** Where the mass search stops (250 t a wagon): a largest mass this high means no limit below it. */
+  massSearchCeiling_t?: number;
   assistance: AssistanceReport[];
   /** When no assistance option within two added units works: dividing the train. */
   divide?: DivideReport | null;
@@ -115,14 +149,33 @@ export interface PlanReport {
   verification?: { adhesionQuantile: number; slipEvents: number; peakCouplerForce_kN: number; passed: boolean } | null;
 }
 
+/** A limit with units in names. */
+export function limitReport(l: LimitCheck): LimitReport {
+  const k = l.unit === "N" ? 1000 : 1;
+  const val = (x: number) => r(x / k, l.unit === "s" ? 0 : 1);
+  return {
+    name: l.name,
+    reason: l.reason,
+    level: l.level,
+    margin: r(l.margin, 3),
+    unit: l.unit === "N" ? "kN" : l.unit,
+    demand: val(l.demand),
+    allowance: val(l.allowance),
+    band: l.band ? { demand: val(l.band.demand), allowance: val(l.band.allowance), what: l.band.what } : null,
+    what: l.what,
+  };
+}
+
 export interface ConditionMarginReport {
   rail: string;
   sand: boolean;
   verdict: Verdict;
   reasons: Reason[];
   margin: number;
-  margins: { adhesion: number; power: number; coupler: number; distance: number };
+  margins: { adhesion: number; power: number; coupler: number; distance: number; brake?: number };
   limitedBy: Reason;
+  /** The limit whose margin is given. */
+  binding?: LimitName;
 }
 
 /** Round to a number of decimals (for output only), half away from zero as every figure is (numbers.ts). */
@@ -178,6 +231,7 @@ export function stepReport(s: PlanStep): StepReport {
     adhesionUseAt_kmh: kmh(s.adhesionUseAt.speedMps),
     adhesionUseEffort_kN: kN(s.adhesionUseAt.tractiveEffortN, 0),
     slipRisk: r(s.slipRisk, 4),
+    protectionActs: s.protectionActs,
     peakCouplerForce_kN: kN(s.peakCouplerForceN, 0),
     fallbackNotch: s.fallbackNotch,
     why: s.why,
@@ -190,7 +244,14 @@ export function planReport(c: StartCase, p: PlanResult, meta: PlanReport["case"]
   rep.verdict = p.verdict;
   rep.reasons = p.reasons;
   rep.margin = r(p.margin, 3);
-  rep.margins = { adhesion: r(p.margins.adhesion, 3), power: r(p.margins.power, 3), coupler: r(p.margins.coupler, 3), distance: r(p.margins.distance, 3) };
+  rep.binding = p.binding;
+  rep.margins = { adhesion: r(p.margins.adhesion, 3), power: r(p.margins.power, 3), coupler: r(p.margins.coupler, 3), distance: r(p.margins.distance, 3), brake: r(p.margins.brake, 3) };
+  rep.limits = p.limits.map(limitReport);
+  rep.startKind = p.startKind;
+  rep.planAdhesionQuantile = r(p.planQuantile, 3);
+  rep.advice = p.advice;
+  if (Number.isFinite(p.largestMarginalMassKg)) rep.largestMarginalMass_t = Math.floor(p.largestMarginalMassKg / 1000);
+  rep.massSearchCeiling_t = Math.floor(p.massSearchCeilingKg / 1000);
   rep.steps = p.steps.map(stepReport);
   rep.peakCouplerForce_kN = kN(p.peakCouplerForceN);
   rep.timeToTarget_s = p.timeToTargetS === null ? null : r(p.timeToTargetS, 0);

@@ -84,6 +84,8 @@ export const locomotiveFileSchema = z
     rotatingMassFraction: z.optional(z.number().check(z.gte(0), z.lte(1))),
     frontalArea_m2: z.optional(within(1, 30, "m²")),
     startingResistance_permille: z.optional(within(0, 30, "‰")),
+    /** What the locomotive (independent) brake holds, kN; default 15 % of the unit's weight [M]. */
+    locomotiveBrakeHolding_kN: z.optional(within(1, 2000, "kN")),
   })
   .check(
     z.refine((l) => l.adhesiveMass_t <= l.mass_t, { message: "must not exceed mass_t", path: ["adhesiveMass_t"] }),
@@ -303,6 +305,10 @@ export const targetSchema = z.union([
 export const settingsSchema = z.object({
   couplerSafetyFactor: z.optional(z.number().check(z.gte(1), z.lte(3))),
   slipRiskThreshold: z.optional(z.number().check(z.gt(0), z.lte(0.5))),
+  /** Highest slip risk of the needed effort still judged marginal (taken as at least the threshold). */
+  marginalSlipRisk: z.optional(z.number().check(z.gt(0), z.lte(0.5))),
+  /** Most parts dividing the train may make. */
+  maxDividedParts: z.optional(z.int().check(z.gte(2), z.lte(10))),
 });
 
 export const startCaseSchema = z.object({

@@ -8,7 +8,7 @@ import { searchAssistance, type AssistanceOption, type AssistanceResult } from "
 import { conditionMargins, type ConditionMargin } from "../core/dispatch/conditionMargins.js";
 import type { DividedTrain } from "../core/dispatch/divideTrain.js";
 import { loadTableCells, loadTableRow, type LoadTableRow } from "../core/dispatch/loadTable.js";
-import { maxStartableMassKg, planStart } from "../core/planner/index.js";
+import { planStart, startableMasses } from "../core/planner/index.js";
 import type { PlanResult } from "../core/planner/types.js";
 import type { LocomotiveSpec } from "../core/physics/types.js";
 import type { StartCase } from "../core/train/types.js";
@@ -33,7 +33,16 @@ export type Progress = (fraction: number) => void;
 
 /** The figures of a plan the assistance and batch screens show. */
 export function planSummary(p: PlanResult): PlanSummary {
-  return { verdict: p.verdict, reasons: p.reasons, margin: p.margin, margins: { ...p.margins }, peakCouplerForceN: p.peakCouplerForceN, timeToTargetS: p.timeToTargetS };
+  return {
+    verdict: p.verdict,
+    reasons: p.reasons,
+    margin: p.margin,
+    binding: p.binding,
+    margins: { ...p.margins },
+    startKind: p.startKind,
+    peakCouplerForceN: p.peakCouplerForceN,
+    timeToTargetS: p.timeToTargetS,
+  };
 }
 
 export function optionData(o: AssistanceOption): AssistanceOptionData {
@@ -63,6 +72,7 @@ export function divideData(d: DividedTrain | null): DivideData | null {
     remainingWagons: d.remainingWagons,
     remainingMassKg: d.remainingMassKg,
     trips: d.trips,
+    maxParts: d.maxParts,
     verdict: d.plan ? d.plan.verdict : null,
     peakCouplerForceN: d.plan ? d.plan.peakCouplerForceN : null,
     timeToTargetS: d.plan ? d.plan.timeToTargetS : null,
@@ -123,8 +133,8 @@ export function runLoadTable(c: StartCase, cells: readonly LoadTableCell[] = loa
 
 /**
  * One departure, as `taut check` checks it: the verified plan (no mass search); when it does not start, the
- * cheapest assistance option (searched with the batch caps, one option fully planned) or the divided train;
- * and the largest startable mass.
+ * cheapest assistance option (searched with the batch caps, one option fully planned) or, when it needs
+ * assistance, the divided train; and the largest startable and marginal masses.
  */
 export function runCheck(c: StartCase, o: CheckRequestOptions = {}, onProgress?: Progress): CheckAnswer {
   const p = planStart(c, { skipMassSearch: true, onProgress: part(onProgress, 0, 0.3) });
@@ -140,11 +150,13 @@ export function runCheck(c: StartCase, o: CheckRequestOptions = {}, onProgress?:
     });
   }
   onProgress?.(0.6);
-  const massKg = maxStartableMassKg(c);
+  // The same search as the plan's, bracketed by this departure's own verdict.
+  const masses = startableMasses(c, { own: p.verdict });
   const cheapest = a?.options[0];
   return {
     ...planSummary(p),
-    maxStartableMassKg: massKg,
+    maxStartableMassKg: masses.startsKg,
+    largestMarginalMassKg: masses.marginalKg,
     helper: helperOf(a, c, o.helper),
     assistance: cheapest ? optionData(cheapest) : null,
     divide: divideData(a?.divide ?? null),

@@ -11,8 +11,8 @@
  * - `conditionMargins`: verdict, margin and limiting reason for every rail condition, without and with sand.
  * - `loadTable`: the largest startable trailing mass per rail condition and sanding (all twelve rows, or the
  *   cells asked for); each row is also sent as it is found.
- * - `check`: one departure as `taut check` answers it: verdict, reasons, margin, largest startable mass and
- *   the cheapest assistance (or the divided train).
+ * - `check`: one departure as `taut check` answers it: verdict, reasons, margin and its limit, the largest
+ *   startable and marginal masses and the cheapest assistance (or the divided train).
  */
 import type { AssistanceOption, RejectedOption } from "../core/dispatch/assistance.js";
 import type { DividedTrain } from "../core/dispatch/divideTrain.js";
@@ -20,7 +20,7 @@ import type { ConditionMargin } from "../core/dispatch/conditionMargins.js";
 import type { LoadTableRow } from "../core/dispatch/loadTable.js";
 import type { PlanOptions, PlanResult } from "../core/planner/types.js";
 import { RAIL_CONDITIONS, type LocomotiveSpec, type RailCondition } from "../core/physics/types.js";
-import type { Reason, Verdict } from "../core/planner/outcome.js";
+import type { LimitName, Reason, StartKind, Verdict } from "../core/planner/outcome.js";
 import type { StartCase } from "../core/train/types.js";
 
 /** A field problem, as the app shows it (same shape as src/profiles' FieldIssue). */
@@ -35,9 +35,12 @@ export interface WorkerIssue {
 export interface PlanSummary {
   verdict: Verdict;
   reasons: Reason[];
-  /** Smallest of the adhesion, power and coupler margins (available ÷ needed). */
+  /** The binding limit's margin (allowance ÷ demand, the smallest); starts ⇔ margin ≥ 1. */
   margin: number;
-  margins: { adhesion: number; power: number; coupler: number; distance: number };
+  /** The limit the margin is of. */
+  binding: LimitName;
+  margins: PlanResult["margins"];
+  startKind: StartKind;
   /** Largest coupler tension during the start, N. */
   peakCouplerForceN: number;
   /** Seconds from taking power to the target; null when not reached. */
@@ -84,6 +87,8 @@ export interface AssistanceAnswer {
 export interface CheckAnswer extends PlanSummary {
   /** Largest trailing mass that still starts with everything else unchanged, kg. */
   maxStartableMassKg: number;
+  /** Largest trailing mass that is at least marginal, kg. */
+  largestMarginalMassKg: number;
   helper: HelperData;
   /** The cheapest option that starts, or null (none needed, or none works). */
   assistance: AssistanceOptionData | null;
@@ -111,7 +116,7 @@ export interface AssistanceRequestOptions {
 }
 
 export interface ConditionMarginsRequestOptions {
-  /** Verdict runs only (faster, no verifying re-run). */
+  /** Kept for older callers: every row is the plan's own decision. */
   quick?: boolean;
 }
 

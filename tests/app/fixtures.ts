@@ -27,6 +27,7 @@ export function step(p: Partial<PlanStep> & Pick<PlanStep, "notch">): PlanStep {
     adhesionUse: 0,
     adhesionUseAt: { speedMps: p.speedMps ?? 0, tractiveEffortN: p.tractiveEffortN ?? 0 },
     slipRisk: 0,
+    protectionActs: false,
     peakCouplerForceN: 0,
     fallbackNotch: Math.max(0, p.notch - 1),
     why: `Why line for notch ${p.notch}.`,

@@ -81,7 +81,7 @@ describe("the portrait Plan tab", () => {
 
 describe("the compact verdict line", () => {
   it("gives the word, the margin and the binding limit", () => {
-    const p = fixturePlan({ verdict: "marginal", margin: 1.046, margins: { adhesion: 1.046, power: 1.8, coupler: 2.4, distance: 5 } });
+    const p = fixturePlan({ verdict: "marginal", margin: 1.046, binding: "adhesion", margins: { adhesion: 1.046, power: 1.8, coupler: 2.4, distance: 5, brake: 99 } });
     render(() => <VerdictSummary result={p} stale={false} shown />);
     const line = document.querySelector(".verdict-summary")!;
     expect(line.classList.contains("shown")).toBe(true);
@@ -89,10 +89,10 @@ describe("the compact verdict line", () => {
     expect(line.querySelector(".summary-margin")!.textContent).toBe("margin × 1.05");
     expect(line.querySelector(".summary-limit")!.textContent).toBe("adhesion");
   });
-  it("names the limit the plan names, when it carries one", () => {
+  it("names the limit the plan names (the one its margin is of)", () => {
     const p = { ...fixturePlan(), binding: "coupler-tension" } as PlanResult;
     expect(bindingLimit(p)).toBe("coupler tension");
-    expect(bindingLimit(fixturePlan({ margins: { adhesion: 3, power: 1.2, coupler: 2, distance: 9 } }))).toBe("power");
+    expect(bindingLimit(fixturePlan({ binding: "brake-holding" }))).toBe("brake holding");
   });
 });
 

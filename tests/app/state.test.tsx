@@ -52,7 +52,8 @@ describe("settings", () => {
       const s = createSettings(storage);
       const lib = builtinLibrary();
       const d = createCaseDraft({ library: () => lib, settings: s.settings, storage });
-      expect(d.caseJson().settings).toEqual({ couplerSafetyFactor: 1.4, slipRiskThreshold: 0.05 });
+      // The marginal bound not stored: its default goes with the others.
+      expect(d.caseJson().settings).toEqual({ couplerSafetyFactor: 1.4, slipRiskThreshold: 0.05, marginalSlipRisk: 0.25 });
       const c = d.checked();
       expect(c.ok && c.value.settings).toMatchObject({ couplerSafetyFactor: 1.4, slipRiskThreshold: 0.05 });
       dispose();

@@ -85,8 +85,9 @@ function benchStep(cases: Array<[string, StartCase]>): void {
   target({ target: "every coupling's peak within 0.5 % of a 0.1 ms reference", figure: `${((100 * worst) / top).toFixed(2)} %`, ratio: worst / top / 0.005, note: `${name}, at its chosen steps` });
   // The one-mass model from standstill to the target, as the largest-mass search runs it.
   const ctx = plannerContext(cases[cases.length - 1]![1]);
+  const seg = new Int32Array(ctx.model.n);
   const rigid = timeRuns(
-    () => rigidAccelerate(ctx, { timeS: 0, speedMps: 0, travelM: 0, notch: 1 }, (n, v, t, capped) => policyNotch(ctx, n, v, t, MIN_NOTCH_DWELL_S, true, 0, capped), 900),
+    () => rigidAccelerate(ctx, { timeS: 0, speedMps: 0, travelM: 0, notch: 1 }, (n, v, t, capped) => policyNotch(ctx, n, v, 0, t, MIN_NOTCH_DWELL_S, true, 0, capped, seg), 900),
     9,
     2,
   );

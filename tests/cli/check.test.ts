@@ -35,7 +35,11 @@ interface Row {
   verdict?: string;
   reasons?: string[];
   margin?: number;
+  binding?: string;
+  trailingMass_t?: number;
   maxStartableMass_t?: number;
+  largestMarginalMass_t?: number;
+  advice?: string[];
   rail?: string;
   sand?: boolean;
   error?: string;
@@ -238,7 +242,14 @@ describe("the sample departures of the demo scenario (profiles/departures)", () 
       expect(rank[p.verdict!]! < rank[q.verdict!]! || (p.verdict === q.verdict && p.margin! <= q.margin!), `${p.id} before ${q.id}`).toBe(true);
     }
     expect((JSON.parse(b.stdout) as { order: string }).order).toBe("risk");
-    // Something for the dispatcher in every row that does not start.
-    for (const r of rowsA) if (r.verdict !== "starts") expect(r.assistance ?? r.divide).toBeTruthy();
+    // Something for the dispatcher in every row that does not start: an option, a divided train, or what
+    // would change it.
+    for (const r of rowsA) if (r.verdict !== "starts") expect(r.assistance ?? r.divide ?? r.advice).toBeTruthy();
+    // One story on every row: the verdict, the margin and the largest masses agree.
+    for (const r of rowsA) {
+      expect(r.verdict === "starts").toBe(r.margin! >= 1);
+      expect(r.verdict === "starts").toBe(r.trailingMass_t! <= r.maxStartableMass_t!);
+      expect(r.verdict === "needs-assistance").toBe(r.trailingMass_t! > r.largestMarginalMass_t!);
+    }
   }, 120_000);
 });

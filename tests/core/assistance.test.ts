@@ -82,7 +82,7 @@ describe("5000 t on 20 ‰ with 850 kN couplings", () => {
     // Enough units at the head to give the effort: it is the couplings, not power, that stop it.
     if (k >= 2) expect(st.margins.power).toBeGreaterThan(1.1);
     expect(st.peakTensionN).toBeGreaterThan(850_000);
-    const p = planStart(c, { skipMassSearch: true, skipVerification: true, verdictOnly: true });
+    const p = planStart(c, { skipMassSearch: true, skipVerification: true });
     expect(p.verdict).toBe("needs-assistance");
     expect(p.reasons).toContain("coupler");
   });
@@ -92,7 +92,10 @@ describe("5000 t on 20 ‰ with 850 kN couplings", () => {
   it("the search rules out every head-only option on the couplers and finds rear or mid-train options that start", () => {
     for (const x of result.rejected.filter((r) => r.added.every((a) => a.position === "head"))) {
       expect(x.verdict).toBe("needs-assistance");
-      expect(x.reasons).toContain("coupler");
+      // Judged by the planned start, the couplers rule it out; screened out before any dynamics, it is the
+      // effort (adhesion, power) that is short already (the full plan then names the couplers too, above).
+      if (x.by === "planner") expect(x.reasons).toContain("coupler");
+      else expect(x.reasons.some((r) => r === "adhesion" || r === "power")).toBe(true);
     }
     expect(result.options.length).toBeGreaterThan(0);
     for (const o of result.options) {

@@ -112,7 +112,7 @@ describe("margins per rail condition", () => {
       if (r.reasons.length > 0) expect(r.reasons).toContain(r.limitedBy);
       expect(r.margins[r.limitedBy]).toBeLessThanOrEqual(Math.min(...(r.reasons.length ? r.reasons : (["adhesion", "power", "coupler", "distance"] as const)).map((k) => r.margins[k])) + 1e-12);
     }
-    expect(limitingReason({ adhesion: 2, power: 1.5, coupler: 3, distance: 9 })).toBe("power");
-    expect(limitingReason({ adhesion: 2, power: 1.5, coupler: 0.9, distance: 9 }, ["adhesion"])).toBe("adhesion");
+    expect(limitingReason({ adhesion: 2, power: 1.5, coupler: 3, distance: 9, brake: 99 })).toBe("power");
+    expect(limitingReason({ adhesion: 2, power: 1.5, coupler: 0.9, distance: 9, brake: 99 }, ["adhesion"])).toBe("adhesion");
   });
 });

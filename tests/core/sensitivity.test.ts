@@ -1,11 +1,13 @@
 /**
- * Sensitivity of the start margin, against the analytic form of the static balance: margin = available ÷
- * needed, so scaling adhesion by 0.9 scales an adhesion-limited margin by exactly 0.9, and the needed effort
- * grows with mass and grade by m·g·sin(atan i) (PHYSICS.md §1).
+ * Sensitivity of the start margin, against the analytic form of the balance: margin = allowance ÷ demand
+ * (the rail's effort ÷ the effort the start needs), so scaling adhesion by 0.9 scales an adhesion-limited
+ * margin by exactly 0.9, and the needed effort grows with mass and grade by m·g·sin(atan i) (PHYSICS.md §1).
  */
 import { describe, expect, it } from "vitest";
 import { sensitivity } from "../../src/core/planner/sensitivity.js";
 import { staticCheck } from "../../src/core/planner/staticCheck.js";
+import { quasiStaticLimits } from "../../src/core/planner/decision.js";
+import { marginalBound, plannerContext } from "../../src/core/planner/context.js";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 
@@ -36,10 +38,13 @@ describe("sensitivity", () => {
   it("mass +10 % and +1 ‰ lower the margin by the extra resistance they bring", () => {
     expect(by("mass").marginAfter).toBeLessThan(by("mass").marginBefore);
     expect(by("grade").marginAfter).toBeLessThan(by("grade").marginBefore);
-    // 6 → 7 ‰ under the whole train adds m·g·(sin(atan 0.007) − sin(atan 0.006)) to what is needed.
+    // 6 → 7 ‰ under the whole train adds m·g·(sin(atan 0.007) − sin(atan 0.006)) to what is needed at every
+    // point of the start, so the binding adhesion margin becomes allowance ÷ (demand + that).
     const totalMassKg = 1_200_000 + 120_000;
     const extra = totalMassKg * 9.80665 * (Math.sin(Math.atan(0.007)) - Math.sin(Math.atan(0.006)));
-    expect(by("grade").marginAfter).toBeCloseTo((st.margin * st.requiredN) / (st.requiredN + extra), 6);
+    const adhesion = quasiStaticLimits(plannerContext(c), marginalBound(c.settings)).limits.find((l) => l.name === "adhesion")!;
+    expect(by("grade").marginBefore).toBeCloseTo(adhesion.margin, 12);
+    expect(by("grade").marginAfter / (adhesion.allowance / (adhesion.demand + extra))).toBeCloseTo(1, 3);
   });
   it("slack leaves the margin alone but lengthens the stretch of a bunched train by the added slack", () => {
     expect(by("slack").marginAfter).toBeCloseTo(by("slack").marginBefore, 12);

@@ -113,7 +113,7 @@ describe("dispatcher's screens in the browser", () => {
     const path = join(work, "check.csv");
     await download.saveAs(path);
     const lines = readFileSync(path, "utf8").trimEnd().split("\n");
-    expect(lines[0]).toBe("id,line,index,rail,sand,trailingMass_t,verdict,reasons,margin,maxStartableMass_t,peakCouplerForce_kN,timeToTarget_s,assistance,assistanceVerdict,assistancePeakCouplerForce_kN,divideFirstWagons,divideFirstMass_t,error");
+    expect(lines[0]).toBe("id,line,index,rail,sand,trailingMass_t,verdict,reasons,margin,maxStartableMass_t,peakCouplerForce_kN,timeToTarget_s,assistance,assistanceVerdict,assistancePeakCouplerForce_kN,divideFirstWagons,divideFirstMass_t,error,binding,largestMarginalMass_t");
     expect(lines).toHaveLength(13);
     expect(lines[1]).toMatch(/^agg-0610,,0,damp,true,1400,/);
     await inBothOrientations("departures", "day", 500);

@@ -198,7 +198,7 @@ describe("planner pool with in-process workers", () => {
     const progress: number[] = [];
     const [a, b, bad] = await Promise.all([
       pool.check(dep("agg-0930"), { onProgress: (f) => progress.push(f) }),
-      pool.check(dep("goods-2300")),
+      pool.check(dep("agg-1415")),
       pool.check({ train: {} } as unknown as StartCase),
     ]);
     expect(a).toMatchObject({ ok: true, result: { verdict: "starts", assistance: null } });

@@ -48,12 +48,12 @@ function resultOf<K extends WorkRequest["type"]>(kind: K, last: WorkerResponse):
 
 describe("assistance request", () => {
   it("answers a train that needs help with the core's options, cheapest first, and the case's own verdict", () => {
-    // goods-2300: damp rail, 1,100 t behind one small unit — the demo day's "needs assistance" that a rear unit fixes.
-    const c = departure("goods-2300");
+    // agg-1415: wet rail, no sand, 1,400 t behind one unit — the demo day's "needs assistance" that a rear unit fixes.
+    const c = departure("agg-1415");
     const { posted, last } = ask({ type: "assistance", id: 1, startCase: c });
     const a = resultOf("assistance", last);
-    const base = planStart(departure("goods-2300"), { skipMassSearch: true });
-    const direct = searchAssistance(departure("goods-2300"), { baseVerdict: base.verdict });
+    const base = planStart(departure("agg-1415"), { skipMassSearch: true });
+    const direct = searchAssistance(departure("agg-1415"), { baseVerdict: base.verdict });
     expect(a.base.verdict).toBe(base.verdict);
     expect(a.base.margin).toBeCloseTo(base.margin, 12);
     expect(a.needed).toBe(true);
@@ -88,17 +88,22 @@ describe("assistance request", () => {
     expect(a.rejected).toEqual([]);
   });
 
-  it("divides the train when no added unit makes it start", () => {
-    // agg-1845: leaves on the rail; no option with two more units starts, a short first part does.
-    const { last } = ask({ type: "assistance", id: 3, startCase: departure("agg-1845"), options: { budget: 8, divideBudget: 6 } });
-    const a = resultOf("assistance", last);
-    expect(a.options).toEqual([]);
-    expect(a.rejected.length).toBeGreaterThan(0);
+  it("divides the train when no added unit makes it start, in no more parts than the case allows", () => {
+    // agg-1845: leaves on the rail; no option with two more units starts. Into three parts (the default) it
+    // does not start either, so nothing is offered; allowed ten parts, a short first part does.
+    const leaves = departure("agg-1845");
+    const three = resultOf("assistance", ask({ type: "assistance", id: 3, startCase: leaves, options: { budget: 8, divideBudget: 6 } }).last);
+    expect(three.options).toEqual([]);
+    expect(three.rejected.length).toBeGreaterThan(0);
+    expect(three.divide).toBeNull();
+    const ten = { ...leaves, settings: { ...leaves.settings, maxDividedParts: 10 } };
+    const a = resultOf("assistance", ask({ type: "assistance", id: 3, startCase: ten, options: { budget: 8, divideBudget: 6 } }).last);
     expect(a.divide).not.toBeNull();
     const d = a.divide!;
-    expect(d.wagons).toBeGreaterThanOrEqual(1);
-    expect(d.wagons + d.remainingWagons).toBe(departure("agg-1845").train.wagons);
-    expect(d.trailingMassKg + d.remainingMassKg).toBeCloseTo(departure("agg-1845").train.trailingMassKg, 6);
+    expect(d.wagons).toBeGreaterThanOrEqual(Math.ceil(leaves.train.wagons / 10));
+    expect(d.trips).toBeLessThanOrEqual(10);
+    expect(d.wagons + d.remainingWagons).toBe(leaves.train.wagons);
+    expect(d.trailingMassKg + d.remainingMassKg).toBeCloseTo(leaves.train.trailingMassKg, 6);
   });
 });
 
@@ -149,7 +154,7 @@ describe("check request", () => {
   });
 
   it("answers a departure as the command line's batch job does, down to the exported CSV line", () => {
-    for (const id of ["goods-2300", "agg-0930"]) {
+    for (const id of ["agg-1415", "agg-0930"]) {
       const { last } = ask({ type: "check", id: 7, startCase: departure(id) });
       const a = resultOf("check", last);
       const cli = runJob({ kind: "check", case: departure(id) }) as CheckOutcome;
@@ -172,7 +177,9 @@ describe("check request", () => {
         verdict: cli.verdict,
         reasons: cli.reasons,
         margin: cli.margin,
+        binding: cli.binding,
         maxStartableMass_t: Math.floor(mass.maxStartableMassKg / 1000),
+        largestMarginalMass_t: Math.floor(mass.largestMarginalMassKg / 1000),
         peakCouplerForce_kN: cli.peakCouplerForce_kN,
         timeToTarget_s: cli.timeToTarget_s,
         assistance: cli.assistance,

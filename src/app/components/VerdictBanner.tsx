@@ -15,7 +15,7 @@ export const VERDICT_WORD: Record<Verdict, string> = {
 /** What each verdict means, in a line. */
 export const VERDICT_LINE: Record<Verdict, string> = {
   starts: "This locomotive set should start this train here, within the safety settings.",
-  marginal: "It may start, but at least one margin is thin: brief the start carefully.",
+  marginal: "It may start, but a limit is exceeded within its band (or it needs a better rail than the threshold assumes): brief the start carefully.",
   "needs-assistance": "It is not expected to start within the safety settings without help.",
 };
 
@@ -24,9 +24,10 @@ export const REASON_LINE: Record<Reason, string> = {
   power: "Power — the locomotives' tractive effort is barely enough, or not enough.",
   coupler: "Coupler — coupler forces come close to, or over, the working limit.",
   distance: "Distance — taking up the slack or reaching the target needs more room than is clear ahead.",
+  brake: "Brake holding — the brakes may not hold the train while its brake releases.",
 };
 
-export const REASON_WORD: Record<Reason, string> = { adhesion: "adhesion", power: "power", coupler: "coupler", distance: "distance" };
+export const REASON_WORD: Record<Reason, string> = { adhesion: "adhesion", power: "power", coupler: "coupler", distance: "distance", brake: "brake holding" };
 
 /** The verdict's shape (filled) with its mark. */
 export function VerdictIcon(props: { verdict: Verdict; size?: number }): JSX.Element {

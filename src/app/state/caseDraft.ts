@@ -56,6 +56,7 @@ export interface DraftProfile {
 export interface CaseSettings {
   couplerSafetyFactor: number;
   slipRiskThreshold: number;
+  marginalSlipRisk?: number;
 }
 
 /** Working limits used when the coupling type changes (PHYSICS.md §4). */
@@ -159,7 +160,13 @@ export function draftToFile(d: CaseDraft, settings?: CaseSettings): Record<strin
         : { ...d.quick };
   out.conditions = { ...d.conditions };
   out.target = d.targetKind === "speed" ? { speed_kmh: d.target.speed_kmh } : { distance_m: d.target.distance_m };
-  if (settings) out.settings = { couplerSafetyFactor: settings.couplerSafetyFactor, slipRiskThreshold: settings.slipRiskThreshold };
+  if (settings) {
+    out.settings = {
+      couplerSafetyFactor: settings.couplerSafetyFactor,
+      slipRiskThreshold: settings.slipRiskThreshold,
+      ...(settings.marginalSlipRisk !== undefined ? { marginalSlipRisk: settings.marginalSlipRisk } : {}),
+    };
+  }
   return out;
 }
 

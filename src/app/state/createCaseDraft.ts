@@ -124,7 +124,7 @@ export function createCaseDraft(deps: CaseDraftDeps): CaseDraftStore {
 
   const caseJson = createMemo(() => {
     const s = deps.settings();
-    return draftToFile(draft, { couplerSafetyFactor: s.couplerSafetyFactor, slipRiskThreshold: s.slipRiskThreshold });
+    return draftToFile(draft, { couplerSafetyFactor: s.couplerSafetyFactor, slipRiskThreshold: s.slipRiskThreshold, marginalSlipRisk: s.marginalSlipRisk });
   });
   const checked = createMemo(() => validateDraft(caseJson(), unwrap(draft), deps.library()));
   const issues = createMemo(() => {

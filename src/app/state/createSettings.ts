@@ -14,8 +14,10 @@ export interface AppSettings {
   theme: ThemeChoice;
   /** Peak coupler force must stay ≤ working limit ÷ this (1..3). */
   couplerSafetyFactor: number;
-  /** Highest acceptable slip risk of any step, 0..0.5. */
+  /** Highest acceptable slip risk of the effort a start needs, 0..0.5. */
   slipRiskThreshold: number;
+  /** Highest slip risk of the needed effort that is still "marginal" rather than "needs assistance", 0..0.5. */
+  marginalSlipRisk: number;
   /** Hide the controls while the device reports movement (uses Geolocation). */
   motionLock: boolean;
 }
@@ -25,6 +27,7 @@ export const DEFAULT_APP_SETTINGS: AppSettings = {
   theme: "system",
   couplerSafetyFactor: DEFAULT_SETTINGS.couplerSafetyFactor,
   slipRiskThreshold: DEFAULT_SETTINGS.slipRiskThreshold,
+  marginalSlipRisk: DEFAULT_SETTINGS.marginalSlipRisk,
   motionLock: false,
 };
 
@@ -34,6 +37,7 @@ export const SETTINGS_KEY = "taut.settings.v1";
 export const SAFETY_BOUNDS = {
   couplerSafetyFactor: { min: 1, max: 3, step: 0.05 },
   slipRiskThreshold: { min: 0.01, max: 0.5, step: 0.01 },
+  marginalSlipRisk: { min: 0.01, max: 0.5, step: 0.01 },
 } as const;
 
 /** Read settings from storage, keeping only values of the right kind and range. */
@@ -54,6 +58,8 @@ export function readSettings(raw: string | null): AppSettings {
   if (typeof f === "number" && f >= SAFETY_BOUNDS.couplerSafetyFactor.min && f <= SAFETY_BOUNDS.couplerSafetyFactor.max) out.couplerSafetyFactor = f;
   const t = o.slipRiskThreshold;
   if (typeof t === "number" && t >= SAFETY_BOUNDS.slipRiskThreshold.min && t <= SAFETY_BOUNDS.slipRiskThreshold.max) out.slipRiskThreshold = t;
+  const b = o.marginalSlipRisk;
+  if (typeof b === "number" && b >= SAFETY_BOUNDS.marginalSlipRisk.min && b <= SAFETY_BOUNDS.marginalSlipRisk.max) out.marginalSlipRisk = b;
   if (typeof o.motionLock === "boolean") out.motionLock = o.motionLock;
   return out;
 }
@@ -75,7 +81,12 @@ export function createSettings(storage: Storage | null = safeLocalStorage()): Se
   return {
     settings,
     update,
-    resetSafety: () => update({ couplerSafetyFactor: DEFAULT_APP_SETTINGS.couplerSafetyFactor, slipRiskThreshold: DEFAULT_APP_SETTINGS.slipRiskThreshold }),
+    resetSafety: () =>
+      update({
+        couplerSafetyFactor: DEFAULT_APP_SETTINGS.couplerSafetyFactor,
+        slipRiskThreshold: DEFAULT_APP_SETTINGS.slipRiskThreshold,
+        marginalSlipRisk: DEFAULT_APP_SETTINGS.marginalSlipRisk,
+      }),
   };
 }
 

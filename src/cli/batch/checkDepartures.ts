@@ -1,8 +1,8 @@
 /**
- * Check a day's departures: for each good row, the plan's verdict, reasons and margin, the largest startable
- * mass and the cheapest assistance, worked out in a pool of worker threads. Identical work is done once:
- * departures with the same case share one check, and those that differ only in trailing mass share one
- * mass search (the largest startable mass does not depend on the mass the train has today).
+ * Check a day's departures: for each good row, the plan's verdict, reasons and margin (with the limit it is
+ * of), the largest startable and marginal masses and the cheapest assistance, worked out in a pool of worker
+ * threads. Identical departures share one check and one mass search; the mass search starts from the
+ * departure's own verdict, so a train that starts never shows a largest startable mass below its own.
  */
 import type { LocomotiveSpec } from "../../core/physics/types.js";
 import type { StartCase } from "../../core/train/types.js";
@@ -23,7 +23,11 @@ export interface DepartureRow {
   verdict?: CheckOutcome["verdict"];
   reasons?: CheckOutcome["reasons"];
   margin?: number;
+  /** The limit the margin is of. */
+  binding?: CheckOutcome["binding"];
   maxStartableMass_t?: number;
+  /** Largest trailing mass that is at least marginal. */
+  largestMarginalMass_t?: number;
   peakCouplerForce_kN?: number;
   timeToTarget_s?: number | null;
   /** The cheapest assistance option that starts (null when none is needed or none works). */
@@ -32,6 +36,8 @@ export interface DepartureRow {
   divide?: DivideReport | null;
   /** The assistance search was cut short by its cap. */
   searchCapped?: boolean;
+  /** Why it does not start and what would change it. */
+  advice?: string[];
   /** Bad input (the row names its line or index) or an internal failure. */
   error?: string;
   /** "input" for a row that could not be read, "internal" for one the calculation failed on. */
@@ -52,9 +58,9 @@ export interface CheckStats {
   massMs: number[];
 }
 
-/** The key of a case, and of the case without its trailing mass. */
-function keys(c: StartCase): { check: string; mass: string } {
-  return { check: JSON.stringify(c), mass: JSON.stringify({ ...c, train: { ...c.train, trailingMassKg: 0 } }) };
+/** The key of a case. */
+function keyOf(c: StartCase): string {
+  return JSON.stringify(c);
 }
 
 /** Answer every departure; bad rows come back with their error, the others with their figures. */
@@ -77,17 +83,18 @@ export async function checkDepartures(
       return { ...base, error: d.error ?? `${d.where}: cannot be read`, errorKind: "input" };
     }
     const c = d.case;
-    const k = keys(c);
-    let check = checks.get(k.check);
+    const k = keyOf(c);
+    let check = checks.get(k);
     if (!check) {
       check = timed(pool.run({ kind: "check", case: c, ...(opts.helper ? { helper: opts.helper } : {}) }));
-      checks.set(k.check, check);
+      checks.set(k, check);
       stats.checks++;
     }
-    let mass = masses.get(k.mass);
+    let mass = masses.get(k);
     if (!mass) {
-      mass = timed(pool.run({ kind: "mass", case: c }));
-      masses.set(k.mass, mass);
+      // Bracketed by the departure's own verdict (startableMass.ts), so it follows the check.
+      mass = check.then((o) => timed(pool.run({ kind: "mass", case: c, own: (o as CheckOutcome).verdict })));
+      masses.set(k, mass);
       stats.massSearches++;
     }
     const described: DepartureRow = { ...base, rail: c.conditions.rail, sand: c.conditions.sand, trailingMass_t: Math.round(c.train.trailingMassKg / 1000) };
@@ -98,12 +105,15 @@ export async function checkDepartures(
         verdict: o.verdict,
         reasons: o.reasons,
         margin: o.margin,
+        binding: o.binding,
         maxStartableMass_t: Math.floor(m.maxStartableMassKg / 1000),
+        largestMarginalMass_t: Math.floor(m.largestMarginalMassKg / 1000),
         peakCouplerForce_kN: o.peakCouplerForce_kN,
         timeToTarget_s: o.timeToTarget_s,
         assistance: o.assistance,
         divide: o.divide,
         ...(o.searchCapped ? { searchCapped: true } : {}),
+        ...(o.advice.length > 0 ? { advice: o.advice } : {}),
       };
     } catch (e) {
       return { ...described, error: `${d.where}: internal error: ${(e as Error).message}`, errorKind: "internal" };

@@ -4,9 +4,9 @@
  * are plain data (they cross a thread boundary by structured clone); results are already in output units.
  */
 import { searchAssistance } from "../../core/dispatch/assistance.js";
-import { maxStartableMassKg, planStart } from "../../core/planner/index.js";
+import { planStart, startableMasses } from "../../core/planner/index.js";
 import type { LocomotiveSpec } from "../../core/physics/types.js";
-import type { Reason, Verdict } from "../../core/planner/outcome.js";
+import type { LimitName, Reason, Verdict } from "../../core/planner/outcome.js";
 import type { StartCase } from "../../core/train/types.js";
 import { assistanceReport } from "../../profiles/assistanceReport.js";
 import { r, type AssistanceReport, type DivideReport } from "../../profiles/report.js";
@@ -17,13 +17,16 @@ export const CHECK_DIVIDE_BUDGET = 6;
 
 export type Job =
   | { kind: "check"; case: StartCase; helper?: LocomotiveSpec }
-  | { kind: "mass"; case: StartCase };
+  /** The largest masses; `own` is the case's verdict when known (it brackets the search), `startsOnly` skips the marginal one. */
+  | { kind: "mass"; case: StartCase; own?: Verdict; startsOnly?: boolean };
 
 export interface CheckOutcome {
   kind: "check";
   verdict: Verdict;
   reasons: Reason[];
   margin: number;
+  /** The limit the margin is of. */
+  binding: LimitName;
   peakCouplerForce_kN: number;
   timeToTarget_s: number | null;
   /** The cheapest option that starts, or null. */
@@ -32,12 +35,16 @@ export interface CheckOutcome {
   divide: DivideReport | null;
   /** The search was cut short by its cap. */
   searchCapped: boolean;
+  /** Why it does not start and what would change it (empty when it starts). */
+  advice: string[];
   elapsedMs: number;
 }
 
 export interface MassOutcome {
   kind: "mass";
   maxStartableMassKg: number;
+  /** NaN when only the largest startable mass was asked for. */
+  largestMarginalMassKg: number;
   elapsedMs: number;
 }
 
@@ -46,7 +53,10 @@ export type JobOutcome = CheckOutcome | MassOutcome;
 /** Run one job on this thread. */
 export function runJob(job: Job): JobOutcome {
   const t0 = performance.now();
-  if (job.kind === "mass") return { kind: "mass", maxStartableMassKg: maxStartableMassKg(job.case), elapsedMs: performance.now() - t0 };
+  if (job.kind === "mass") {
+    const m = startableMasses(job.case, { ...(job.own ? { own: job.own } : {}), ...(job.startsOnly ? { startsOnly: true } : {}) });
+    return { kind: "mass", maxStartableMassKg: m.startsKg, largestMarginalMassKg: m.marginalKg, elapsedMs: performance.now() - t0 };
+  }
   const c = job.case;
   const p = planStart(c, { skipMassSearch: true });
   let assistance: AssistanceReport | null = null;
@@ -70,11 +80,13 @@ export function runJob(job: Job): JobOutcome {
     verdict: p.verdict,
     reasons: p.reasons,
     margin: r(p.margin, 3),
+    binding: p.binding,
     peakCouplerForce_kN: r(p.peakCouplerForceN / 1000, 0),
     timeToTarget_s: p.timeToTargetS === null ? null : r(p.timeToTargetS, 0),
     assistance,
     divide,
     searchCapped,
+    advice: p.advice,
     elapsedMs: performance.now() - t0,
   };
 }

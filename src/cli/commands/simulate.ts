@@ -1,6 +1,8 @@
 /** `taut simulate CASE.json --sequence "1@0,2@20,4@35,8@50"` — run a given notch sequence through the dynamics model. */
 import { simulate, sequenceControls, type SimResult } from "../../core/dynamics/simulate.js";
 import { modelFromCase } from "../../core/train/trainModel.js";
+import { ACCELERATE_MAX_S } from "../../core/planner/search.js";
+import { brakeSchedule, plannerContext } from "../../core/planner/index.js";
 import type { StartCase } from "../../core/train/types.js";
 import { InputError } from "../errors.js";
 import { quoted } from "../../profiles/text.js";
@@ -9,8 +11,15 @@ import type { Command } from "../command.js";
 import { num, textTable } from "../table.js";
 import { wrap } from "../render/wrap.js";
 
-/** Longest run when the target is not reached, s. */
-const MAX_DURATION_S = 180;
+/** Longest run when the target is not reached: the plan's own time cap, s. */
+const MAX_DURATION_S = ACCELERATE_MAX_S;
+/** A train that has moved and then stands this long has stalled, s. */
+const STALL_S = 20;
+/** Wheels held slipping by the protection at a standstill this long: stop (rail burns), s. */
+const SPIN_S = 10;
+
+/** Why a run ended. */
+export type StopReason = "target" | "duration" | "cap" | "stall" | "slips";
 
 export interface SequenceEntry {
   notch: number;
@@ -59,6 +68,12 @@ export interface SimulateReport {
   slipTime_s: number;
   /** What the reader must not miss (wheel slip above all), one line each. */
   warnings: string[];
+  /** Why the run ended: the target, the asked duration, the time cap, a stall, or wheels spinning at a standstill. */
+  stoppedBy: StopReason;
+  /** When the train-brake release began, s; null when it was already released. */
+  trainBrakeRelease_s: number | null;
+  /** The train brake was eased in stages (a falling grade the locomotive brake cannot hold), as the plan does. */
+  graduatedRelease: boolean;
   series?: { time_s: number[]; speed_kmh: number[]; notch: number[]; distance_m: number[]; maxTension_kN: number[] };
 }
 
@@ -66,30 +81,59 @@ const r1 = (x: number) => Math.round(x * 10) / 10;
 const r2 = (x: number) => Math.round(x * 100) / 100;
 
 /** Run the sequence on the case and express the result with units in names. */
-export function simulateCase(c: StartCase, seq: SequenceEntry[], opts: { durationS?: number; releaseAtS?: number; adhesionQuantile?: number; series?: boolean }): SimulateReport {
+export function simulateCase(
+  c: StartCase,
+  seq: SequenceEntry[],
+  opts: { durationS?: number; releaseAtS?: number; adhesionQuantile?: number; series?: boolean; brakeReleased?: boolean },
+): SimulateReport {
   const q = opts.adhesionQuantile ?? 0.5;
-  const model = modelFromCase(c, { adhesionQuantile: q });
   const firstPower = seq.find((e) => e.notch > 0)?.atS ?? 0;
-  // The train brake is released before the sequence starts; the locomotive brake holds until the first
-  // notch's effort has built up (common practice on a rising grade), unless told otherwise.
-  const release = opts.releaseAtS ?? firstPower + 3;
-  const controls = sequenceControls(seq, { trainBrakeReleaseS: -1e6, locoBrakeReleaseS: release });
+  // The brakes come off as the plan takes them off (the train brake from time 0, released in stages on a
+  // falling grade the locomotive brake cannot hold), unless told the train brake is already released.
+  const ctx = plannerContext(c);
+  const graduated = !opts.brakeReleased && ctx.startKind === "gravity" && !ctx.locoBrakeHolds;
+  const plan = brakeSchedule(ctx);
+  const model = modelFromCase(c, { adhesionQuantile: q, graduatedRelease: graduated });
+  const trainRelease = opts.brakeReleased ? -1e6 : plan.trainBrakeReleaseS;
+  // The locomotive brake holds until the first notch's effort has built up (common practice on a rising
+  // grade), and not before the plan would ease it, unless told otherwise.
+  const release = opts.releaseAtS ?? (opts.brakeReleased ? firstPower + 3 : graduated ? plan.locoBrakeReleaseS : Math.max(plan.locoBrakeReleaseS, firstPower + 3));
+  const controls = sequenceControls(seq, { trainBrakeReleaseS: trainRelease, locoBrakeReleaseS: release });
   const target = c.target;
   const reached = (o: { leadSpeedMps: number; tailTravelM: number }) =>
     target.kind === "speed" ? o.leadSpeedMps >= target.speedMps : o.tailTravelM >= target.distanceM;
-  let hit = false;
+  const stop: { why: StopReason } = { why: opts.durationS === undefined ? "cap" : "duration" };
+  let moved = false;
+  let standingSince = -1;
+  let spinningSince = -1;
+  const lastEntryS = seq[seq.length - 1]!.atS;
   const res: SimResult = simulate(model, controls, {
     durationS: opts.durationS ?? MAX_DURATION_S,
     ...(opts.durationS === undefined
       ? {
           stopWhen: (o) => {
-            hit = reached(o);
-            return hit;
+            if (reached(o)) {
+              stop.why = "target";
+              return true;
+            }
+            if (o.leadSpeedMps > 0.05) moved = true;
+            const standing = o.leadSpeedMps <= 0.01;
+            standingSince = standing ? (standingSince < 0 ? o.timeS : standingSince) : -1;
+            if (moved && standing && o.timeS - standingSince > STALL_S && o.timeS > lastEntryS) {
+              stop.why = "stall";
+              return true;
+            }
+            spinningSince = standing && o.slipped ? (spinningSince < 0 ? o.timeS : spinningSince) : -1;
+            if (spinningSince >= 0 && o.timeS - spinningSince > SPIN_S) {
+              stop.why = "slips";
+              return true;
+            }
+            return false;
           },
         }
       : {}),
   });
-  if (opts.durationS !== undefined) hit = reached({ leadSpeedMps: res.final.leadSpeedMps, tailTravelM: res.final.tailTravelM });
+  const hit = reached({ leadSpeedMps: res.final.leadSpeedMps, tailTravelM: res.final.tailTravelM }) || stop.why === "target";
   const report: SimulateReport = {
     schema: "taut/simulation@1",
     sequence: seq,
@@ -109,6 +153,9 @@ export function simulateCase(c: StartCase, seq: SequenceEntry[], opts: { duratio
     targetReached: hit,
     slipTime_s: r1(res.slipEpisodes.reduce((t, e) => t + (e.endS - e.startS), 0)),
     warnings: [],
+    stoppedBy: stop.why,
+    trainBrakeRelease_s: opts.brakeReleased ? null : trainRelease,
+    graduatedRelease: graduated,
   };
   report.warnings = simulationWarnings(report);
   if (opts.series) {
@@ -141,6 +188,14 @@ export function simulationWarnings(r: Pick<SimulateReport, "slipEvents" | "slipT
   return out;
 }
 
+const STOP_WORDS: Record<StopReason, string> = {
+  target: "the target was reached",
+  duration: "the asked duration ran out",
+  cap: `the target was not reached within ${MAX_DURATION_S} s`,
+  stall: `the train stalled (it stood still for ${STALL_S} s after moving)`,
+  slips: `the wheels were held slipping at a standstill for ${SPIN_S} s (this burns the rail)`,
+};
+
 export function renderSimulation(r: SimulateReport): string {
   const lines = [
     ...r.warnings.flatMap((w) => wrap(`WARNING: ${w}`, 100, "         ")),
@@ -151,7 +206,8 @@ export function renderSimulation(r: SimulateReport): string {
     `Peak coupler force: ${num(r.peakCouplerForce_kN)} kN at coupling ${r.peakAt.coupling + 1} (${num(r.peakAt.time_s, 1)} s); peak compression ${num(r.peakCompression_kN)} kN`,
     `Fastest take-up: run-out ${num(r.maxRunOut_kmh, 2)} km/h, run-in ${num(r.maxRunIn_kmh, 2)} km/h`,
     `Wheel slip: ${r.slipEvents.length === 0 ? "none" : `${num(r.slipTime_s, 1)} s in all — ${r.slipEvents.map((e) => `unit ${e.unit + 1} ${num(e.start_s, 1)}–${num(e.end_s, 1)} s (${e.cuts} cuts)`).join("; ")}`}`,
-    `End: ${num(r.final.time_s, 1)} s, ${num(r.final.speed_kmh, 1)} km/h, ${num(r.final.distance_m, 1)} m${r.targetReached ? (r.slipEvents.length > 0 ? " (target reached, with the wheels slipping: see the warning above)" : " (target reached)") : " (target not reached)"}`,
+    `Train brake: ${r.trainBrakeRelease_s === null ? "already released" : `released from ${num(r.trainBrakeRelease_s, 0)} s${r.graduatedRelease ? ", in stages (graduated release)" : ""}`}`,
+    `End: ${num(r.final.time_s, 1)} s, ${num(r.final.speed_kmh, 1)} km/h, ${num(r.final.distance_m, 1)} m — stopped because ${STOP_WORDS[r.stoppedBy]}${r.targetReached ? (r.slipEvents.length > 0 ? " (target reached, with the wheels slipping: see the warning above)" : r.stoppedBy !== "target" ? " (target reached)" : "") : ""}`,
     "",
     "Peak force along the train (every tenth coupling):",
     textTable(
@@ -167,18 +223,23 @@ export function renderSimulation(r: SimulateReport): string {
 export const simulateCommand: Command = {
   name: "simulate",
   summary: "run a given notch sequence through the train dynamics model",
-  usage: 'taut simulate CASE.json --sequence "1@0,2@20,4@35,8@50" [--duration S] [--release-at S] [--adhesion-quantile Q] [--json] [--series]',
+  usage: 'taut simulate CASE.json --sequence "1@0,2@20,4@35,8@50" [--duration S] [--release-at S] [--brake-released] [--adhesion-quantile Q] [--json] [--series]',
   help: [
     "Runs the notches you give (notch@seconds) and reports when the last vehicle moves, coupler forces",
     "along the train, take-up speeds, wheel slips and the final speed and distance. A run in which the",
     "wheels slip opens with a WARNING (and `warnings` in the JSON): try lower notches or later steps.",
-    "The train brake is taken as released; the locomotive brake holds until --release-at (default: 3 s after",
-    "the first notch).",
+    "The brakes come off as the plan takes them off: the train brake's release starts at 0 s and runs to the",
+    "rear (on a falling grade the locomotive brake cannot hold, it is eased in stages); the locomotive brake",
+    "holds until --release-at (default: the plan's moment, and at least 3 s after the first notch).",
+    "Without --duration the run goes on until the case's target is reached, and says why it stopped first:",
+    `the time cap (${MAX_DURATION_S} s), a stall, or wheels held slipping at a standstill.`,
     "",
     "Options:",
     "  --sequence S          notch@seconds, comma separated (required)",
-    "  --duration S          simulate exactly S seconds (default: until the case's target, at most 180 s)",
+    "  --duration S          simulate exactly S seconds",
     "  --release-at S        when the locomotive brake is eased off, s",
+    "  --brake-released      the train brake is already released at 0 s (the locomotive brake then holds",
+    "                        until 3 s after the first notch unless --release-at says otherwise)",
     "  --adhesion-quantile Q adhesion the run assumes: 0.5 median (default), 0.1 the 10 % worst",
     "  --json                JSON output",
     "  --series              with --json, include the decimated time series",
@@ -187,6 +248,7 @@ export const simulateCommand: Command = {
     sequence: { type: "string" },
     duration: { type: "string" },
     "release-at": { type: "string" },
+    "brake-released": { type: "boolean" },
     "adhesion-quantile": { type: "string" },
     json: { type: "boolean" },
     series: { type: "boolean" },
@@ -198,7 +260,7 @@ export const simulateCommand: Command = {
     const { c } = readStartCase(path, library());
     const maxNotch = Math.min(...c.locomotives.map((g) => g.spec.notchPower.length));
     const seq = parseSequence(values.sequence, maxNotch);
-    const opts: Parameters<typeof simulateCase>[2] = { series: values.series === true };
+    const opts: Parameters<typeof simulateCase>[2] = { series: values.series === true, brakeReleased: values["brake-released"] === true };
     if (values.duration !== undefined) opts.durationS = positiveNumber("--duration", values.duration, 3600);
     if (values["release-at"] !== undefined) opts.releaseAtS = positiveNumber("--release-at", values["release-at"], 3600, true);
     if (values["adhesion-quantile"] !== undefined) {

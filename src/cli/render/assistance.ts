@@ -2,6 +2,7 @@
 import type { AssistanceReport, ConditionMarginReport, DivideReport, PlanReport } from "../../profiles/report.js";
 import { num, textTable } from "../table.js";
 import { wrap } from "./wrap.js";
+import { LIMIT_WORDS } from "../../core/planner/outcome.js";
 
 export const VERDICT_WORDS: Record<PlanReport["verdict"], string> = {
   starts: "STARTS",
@@ -83,10 +84,10 @@ export function renderConditions(rows: readonly ConditionMarginReport[]): string
   if (rows.length === 0) return [];
   return [
     "",
-    "By rail condition (margin = available ÷ needed):",
+    "By rail condition (margin = allowance ÷ demand of the limit that binds):",
     ...textTable(
       ["rail", "sand", "verdict", "margin", "adhesion", "power", "coupler", "limited by"],
-      rows.map((m) => [m.rail, m.sand ? "yes" : "no", VERDICT_WORDS[m.verdict].toLowerCase(), num(m.margin, 2), num(m.margins.adhesion, 2), num(m.margins.power, 2), num(m.margins.coupler, 2), m.limitedBy]),
+      rows.map((m) => [m.rail, m.sand ? "yes" : "no", VERDICT_WORDS[m.verdict].toLowerCase(), num(m.margin, 2), num(m.margins.adhesion, 2), num(m.margins.power, 2), num(m.margins.coupler, 2), m.binding ? LIMIT_WORDS[m.binding] : m.limitedBy]),
     )
       .split("\n")
       .map((l) => `  ${l}`),

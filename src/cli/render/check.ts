@@ -5,13 +5,22 @@ import { csv, num, textTable } from "../table.js";
 import { divideLine, optionLine, VERDICT_WORDS } from "./assistance.js";
 import { wrap } from "./wrap.js";
 import { printable } from "../../profiles/text.js";
+import { LIMIT_WORDS } from "../../core/planner/outcome.js";
 
 /** The remedy of a row in a few words: the cheapest option, or dividing the train. */
 export function remedyText(r: DepartureRow): string {
   if (r.verdict === undefined || r.verdict === "starts") return "";
   if (r.assistance) return optionLine(r.assistance);
   if (r.divide) return divideLine(r.divide);
-  return "none found";
+  if (r.maxStartableMass_t !== undefined && r.maxStartableMass_t > 0) return `none found; less load: ${r.maxStartableMass_t} t or less starts`;
+  return "none found; see taut plan for what would change it";
+}
+
+/** "1263 / 1650": the largest startable and at-least-marginal masses; "none" when not even a light train starts. */
+export function massesText(r: DepartureRow): string {
+  const t = (x: number | undefined) => (x === undefined ? "" : x > 0 ? num(x) : "none");
+  const m = r.largestMarginalMass_t;
+  return m !== undefined && m !== r.maxStartableMass_t ? `${t(r.maxStartableMass_t)} / ${t(m)}` : t(r.maxStartableMass_t);
 }
 
 function where(r: DepartureRow): string {
@@ -44,7 +53,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
   const good = rows.filter((r) => !r.error);
   lines.push(
     textTable(
-      ["id", "row", "rail", "sand", "mass t", "verdict", "why", "margin", "max t", "cheapest assistance"],
+      ["id", "row", "rail", "sand", "mass t", "verdict", "margin", "largest t (starts / marginal)", "cheapest assistance"],
       good.map((r) => [
         printable(r.id),
         where(r),
@@ -52,9 +61,8 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
         r.sand ? "yes" : "no",
         num(r.trailingMass_t),
         VERDICT_WORDS[r.verdict!].toLowerCase(),
-        (r.reasons ?? []).join(", ") || "—",
-        num(r.margin, 2),
-        r.maxStartableMass_t !== undefined && r.maxStartableMass_t <= 0 ? "none" : num(r.maxStartableMass_t),
+        `${num(r.margin, 2)}${r.binding ? ` (${LIMIT_WORDS[r.binding]})` : ""}`,
+        massesText(r),
         remedyText(r) || "—",
       ]),
     ),
@@ -70,6 +78,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
   lines.push(
     `${s.departures} departures: ${s.starts} start, ${s.marginal} marginal, ${s.needsAssistance} need assistance${s.badRows ? `, ${s.badRows} bad rows` : ""}${s.internalErrors ? `, ${s.internalErrors} failed` : ""}.`,
   );
+  lines.push("Margin: allowance ÷ demand of the limit that binds (a train starts when it is at least 1). Largest: the heaviest train of these wagons that starts, and that is at least marginal.");
   if (rows.some((r) => r.searchCapped)) lines.push("Some assistance searches were cut short by their cap (marked in --json as searchCapped); `taut plan` on the case shows more.");
   lines.push("");
   lines.push("Cautions:");
@@ -100,6 +109,8 @@ export function checkCsv(rows: readonly DepartureRow[]): string {
       r.divide?.firstPart.wagons,
       r.divide?.firstPart.trailingMass_t,
       r.error,
+      r.binding,
+      r.largestMarginalMass_t,
     ]),
   );
 }

@@ -1,15 +1,18 @@
 /**
  * The assistance check: when a train does not start (or only marginally), which added locomotives make it
  * start — at the head, at the rear, or mid-train after a wagon, one or two units, working in step with the
- * train's own (the same notch). Every option is screened by the static check, then judged by the start
- * planner, which runs the longitudinal dynamics; the options returned carry a full, verified plan.
- * When no option with up to two added units works, the train is divided: the largest first part that starts
+ * train's own (the same notch). Every option is judged by the one decision (decision.ts): first by the
+ * limits known before any dynamics, then by the planned start in the longitudinal dynamics; the options
+ * returned carry a full, verified plan. When no option with up to two added units works and the train needs
+ * assistance, the train is divided into a practical number of parts: the largest first part that starts
  * (common practice: "doubling", PRACTICE.md, Alaska Railroad manual p. 64-18 [P]).
  */
 import { middleWagon, positionWords, proportionalSplitWagon, withAddedUnits, leadSpec, type AddedUnits } from "./assistPlacement.js";
 import { divideTrain, type DividedTrain } from "./divideTrain.js";
-import { planStart, type PlanResult } from "../planner/index.js";
+import { judge, planStart, quasiStaticLimits, type PlanResult } from "../planner/index.js";
 import { staticCheck } from "../planner/staticCheck.js";
+import { marginalBound, plannerContext } from "../planner/context.js";
+import type { LimitCheck } from "../planner/outcome.js";
 import type { LocomotiveSpec } from "../physics/types.js";
 import type { Reason, Verdict } from "../planner/outcome.js";
 import type { StartCase } from "../train/types.js";
@@ -47,7 +50,7 @@ export interface RejectedOption {
   units: number;
   verdict: Verdict;
   reasons: Reason[];
-  /** "static" when the static check already ruled it out, "planner" when the planned start did. */
+  /** "static" when the limits known before any dynamics ruled it out, "planner" when the planned start did. */
   by: "static" | "planner";
 }
 
@@ -59,7 +62,7 @@ export interface AssistanceResult {
   /** Options that make the verdict `starts`, cheapest first (fewest units, then lowest peak coupler force). */
   options: AssistanceOption[];
   rejected: RejectedOption[];
-  /** The largest first part that starts with the train's own locomotives, when no option works. */
+  /** The largest first part that starts with the train's own locomotives, when no option works and the train needs assistance. */
   divide: DividedTrain | null;
   /** Planner runs used (verdict runs, full plans and dividing). */
   plannerRuns: number;
@@ -82,7 +85,7 @@ export interface AssistanceOptions {
   allLevels?: boolean;
   /** The case's own verdict when the caller already has it (saves a planner run); `starts` means no search. */
   baseVerdict?: Verdict;
-  /** Search for a divided train when no option works; default true. */
+  /** Search for a divided train when no option works and the train needs assistance; default true. */
   divide?: boolean;
   shouldStop?: () => boolean;
   onProgress?: (fraction: number) => void;
@@ -139,23 +142,21 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
 
   let base = opts.baseVerdict;
   if (base === undefined) {
-    base = staticCheck(c).verdict;
-    if (base === "starts") {
-      base = planStart(c, { ...planOpts, skipMassSearch: true, skipVerification: true, verdictOnly: true }).verdict;
-      runs++;
-    }
+    base = judge(c, stop ? { shouldStop: stop } : {}).verdict;
+    runs++;
   }
   if (base === "starts") return { ...result, needed: false, plannerRuns: runs };
+  const bound = marginalBound(c.settings);
 
   for (let units = 1; units <= maxUnits; units++) {
     if (result.options.length > 0 && !opts.allLevels) break;
     const candidates = candidatePlacements(c, spec, units).map((added) => candidateOf(c, spec, added, units));
-    // Static screen: the planner cannot do better than the static check.
+    // Screen: a start needs its quasi-static limits within before any dynamics can make it start.
     const screened: Candidate[] = [];
     for (const k of candidates) {
-      const st = staticCheck(k.case);
-      if (st.verdict !== "starts") result.rejected.push({ added: k.added, units, verdict: st.verdict, reasons: st.reasons, by: "static" });
-      else screened.push({ ...k, staticPeakN: st.peakTensionN });
+      const qs = quasiStaticLimits(plannerContext(k.case), bound).limits;
+      if (!qs.every((l) => l.level === "within")) result.rejected.push({ added: k.added, units, ...ruledOut(qs), by: "static" });
+      else screened.push({ ...k, staticPeakN: staticCheck(k.case).peakTensionN });
     }
     // Verdict runs, easiest on the couplers first, so a short budget keeps the likeliest options; one run is
     // kept back for the full plan of an option that passes.
@@ -166,10 +167,10 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
         complete = false;
         break;
       }
-      const p = planStart(k.case, { ...planOpts, skipMassSearch: true, skipVerification: true, verdictOnly: true });
+      const d = judge(k.case, { depth: "starts", ...planOpts });
       runs++;
-      if (p.verdict === "starts") passing.push({ k, peakN: p.peakCouplerForceN });
-      else result.rejected.push({ added: k.added, units, verdict: p.verdict, reasons: p.reasons, by: "planner" });
+      if (d.verdict === "starts") passing.push({ k, peakN: d.threshold.search?.branch.peakTensionN() ?? 0 });
+      else result.rejected.push({ added: k.added, units, ...ruledOut(d.limits), by: "planner" });
     }
     opts.onProgress?.(units / (maxUnits + 1));
     // Full, verified plans, lowest coupler force (in the verdict run) first, until `maxFull` are confirmed.
@@ -191,12 +192,20 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
   }
   result.options.sort((a, b) => a.units - b.units || a.peakCouplerForceN - b.peakCouplerForceN);
 
-  if (result.options.length === 0 && opts.divide !== false) {
+  if (result.options.length === 0 && opts.divide !== false && base === "needs-assistance") {
     result.divide = divideTrain(c, { budget: opts.divideBudget ?? 8, ...(stop ? { shouldStop: stop } : {}) });
     runs += result.divide.plannerRuns;
   }
   opts.onProgress?.(1);
   return { ...result, plannerRuns: runs, complete };
+}
+
+/** A verdict and its reasons from the threshold's limits of a start judged only as far as "starts". */
+function ruledOut(limits: readonly LimitCheck[]): { verdict: Verdict; reasons: Reason[] } {
+  const failing = limits.filter((l) => l.level !== "within");
+  const over = failing.filter((l) => l.level === "over");
+  const deciding = over.length > 0 ? over : failing;
+  return { verdict: over.length > 0 ? "needs-assistance" : "marginal", reasons: [...new Set(deciding.map((l) => l.reason))] };
 }
 
 function candidateOf(c: StartCase, spec: LocomotiveSpec, added: AddedUnits[], units: number): Candidate {

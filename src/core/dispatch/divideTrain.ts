@@ -1,15 +1,15 @@
 /**
  * Dividing the train ("doubling"): when it will not start whole, take the largest first part — wagons
  * from the head, with their share of the mass and length — that the train's own locomotives start, and
- * come back for the rest (common practice; PRACTICE.md, Alaska Railroad manual p. 64-18 [P]).
- * Found by bisection on the wagon count with the planner's verdict, below the static check's limit.
+ * come back for the rest (common practice; PRACTICE.md, Alaska Railroad manual p. 64-18 [P]). Offered only
+ * in a practical number of parts (the case's `maxDividedParts`, default 3): a first part smaller than
+ * the train ÷ that number is no answer. Found by bisection on the wagon count with the one decision.
  */
-import { planStart, plannerStarts, type PlanResult } from "../planner/index.js";
-import { staticCheck } from "../planner/staticCheck.js";
+import { planStart, plannerStarts, withTrailingMass, type PlanResult } from "../planner/index.js";
 import type { LocoGroup, StartCase } from "../train/types.js";
 
 export interface DividedTrain {
-  /** Wagons in the first part (from the head); 0 when not even one wagon starts. */
+  /** Wagons in the first part (from the head); 0 when no part of a practical size starts. */
   wagons: number;
   trailingMassKg: number;
   lengthM: number;
@@ -18,6 +18,8 @@ export interface DividedTrain {
   remainingMassKg: number;
   /** Trips needed if every trip takes a part of this size (the rest stands on other track, so a guide only). */
   trips: number;
+  /** The most parts dividing may make (the case's setting). */
+  maxParts: number;
   /** The full, verified plan of the first part (null when nothing starts or the budget ran out before it). */
   plan: PlanResult | null;
   /** The first part as a start case (null when nothing starts). */
@@ -45,53 +47,47 @@ export function firstPart(c: StartCase, wagons: number): StartCase {
   };
 }
 
-/** The largest first part that starts. */
+/** The smallest first part dividing may offer: the train in at most `maxParts` trips. */
+export function smallestPart(c: StartCase): number {
+  const parts = Math.max(2, Math.round(c.settings.maxDividedParts ?? 3));
+  return Math.max(1, Math.ceil(c.train.wagons / parts));
+}
+
+/** The largest first part that starts, if one of a practical size does. */
 export function divideTrain(c: StartCase, opts: DivideOptions = {}): DividedTrain {
   const budget = opts.budget ?? 10;
   let runs = 0;
   const total = c.train.wagons;
-  // The static limit bounds the planner's from above, at no planner cost.
-  let hiStatic = 0;
-  {
-    let lo = 0;
-    let hi = total;
-    while (hi - lo > 1) {
-      const mid = (lo + hi) >> 1;
-      if (staticCheck(firstPart(c, mid)).verdict === "starts") lo = mid;
-      else hi = mid;
-    }
-    hiStatic = lo;
-  }
+  const maxParts = Math.max(2, Math.round(c.settings.maxDividedParts ?? 3));
+  const least = smallestPart(c);
   const starts = (w: number): boolean => {
     runs++;
     return plannerStarts(firstPart(c, w), opts.shouldStop);
   };
   let best = 0;
-  if (hiStatic >= 1) {
-    // Planner bisection over [0, hiStatic]; the static limit itself is tried first (it often holds).
-    if (starts(hiStatic)) best = hiStatic;
-    else {
-      let lo = 0;
-      let hi = hiStatic;
-      while (hi - lo > 1 && runs < budget - 1) {
-        const mid = (lo + hi) >> 1;
-        if (starts(mid)) lo = mid;
-        else hi = mid;
-      }
-      best = lo;
+  // A part that starts beside a largest startable mass of "none" would contradict it: when not even a lightly
+  // loaded train of these wagons starts (the mass search's floor, 1 t a wagon), nothing is offered.
+  const lightest = (): boolean => {
+    runs++;
+    return plannerStarts(withTrailingMass(c, total * 1000), opts.shouldStop);
+  };
+  // Bisection over [least, total − 1]: the smallest practical part is tried first (if it fails, nothing will).
+  if (total >= 2 && least < total && lightest() && starts(least)) {
+    let lo = least;
+    let hi = total;
+    while (hi - lo > 1 && runs < budget - 1) {
+      const mid = (lo + hi) >> 1;
+      if (starts(mid)) lo = mid;
+      else hi = mid;
     }
+    best = lo;
   }
   let plan: PlanResult | null = null;
-  // Confirm with a full, verified plan; step down a little if the verification makes it marginal. When the
-  // budget runs out first, the part stands on the verdict run alone (plan null).
-  while (best >= 1 && runs < budget) {
-    const p = planStart(firstPart(c, best), { skipMassSearch: true, ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}) });
+  // Confirm with a full, verified plan (the same decision: it starts). When the budget runs out first, the
+  // part stands on its verdict alone (plan null).
+  if (best >= 1 && runs < budget) {
+    plan = planStart(firstPart(c, best), { skipMassSearch: true, ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}) });
     runs++;
-    if (p.verdict === "starts") {
-      plan = p;
-      break;
-    }
-    best = Math.floor(best * 0.9);
   }
   const part = best >= 1 ? firstPart(c, best) : null;
   return {
@@ -101,6 +97,7 @@ export function divideTrain(c: StartCase, opts: DivideOptions = {}): DividedTrai
     remainingWagons: total - best,
     remainingMassKg: c.train.trailingMassKg - (part?.train.trailingMassKg ?? 0),
     trips: best >= 1 ? Math.ceil(total / best) : 0,
+    maxParts,
     plan,
     case: part,
     plannerRuns: runs,

@@ -1,11 +1,10 @@
 /**
  * Load table: the largest trailing mass that starts at a location with a locomotive set, for every
- * rail condition, with and without sand. Each row is a bisection over the same verdict the planner gives
- * (below the static check's limit, with the planner's verdict runs), so a mass just below a table value
- * starts and one just above does not. Rows are independent: one can be computed on its own (in a worker).
+ * rail condition, with and without sand. Each cell is the plan's own largest startable mass (the same
+ * decision, the same search, this train's wagons), so a mass just below a table value starts and one just
+ * above does not. Rows are independent: one can be computed on its own (in a worker).
  */
-import { maxStartableMassKg } from "../planner/index.js";
-import { largestStartableMassKg } from "../planner/startableMass.js";
+import { largestStartableMassKg, startableMasses } from "../planner/startableMass.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../physics/types.js";
 import type { StartCase } from "../train/types.js";
 
@@ -30,7 +29,7 @@ export function loadTableCells(): Array<{ rail: RailCondition; sand: boolean }> 
 
 /**
  * One row: the largest trailing mass for a rail condition and sanding. With `starts` given, a plain bisection
- * over that verdict; by default the planner's (static bound first, then verdict runs).
+ * over that verdict; by default the plan's largest startable mass.
  */
 export function loadTableRow(
   base: StartCase,
@@ -40,7 +39,9 @@ export function loadTableRow(
   opts: Pick<LoadTableOptions, "shouldStop" | "toleranceKg"> = {},
 ): LoadTableRow {
   const c: StartCase = { ...base, conditions: { ...base.conditions, rail, sand } };
-  const kg = starts ? largestStartableMassKg(c, starts, opts.toleranceKg !== undefined ? { toleranceKg: opts.toleranceKg } : {}) : maxStartableMassKg(c, opts.shouldStop);
+  const kg = starts
+    ? largestStartableMassKg(c, starts, opts.toleranceKg !== undefined ? { toleranceKg: opts.toleranceKg } : {})
+    : startableMasses(c, { startsOnly: true, ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}) }).startsKg;
   return { rail, sand, maxTrailingMassKg: kg };
 }
 

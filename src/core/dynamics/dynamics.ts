@@ -336,7 +336,7 @@ function gearForce(prevF: number, prevE: number, e: number, travel: number, rate
   return g < unload ? unload : g;
 }
 
-/** Traction: effort follows the notch with a lag, limited by adhesion; a slip cuts it back. */
+/** Traction: effort follows the notch with a lag, limited by adhesion; the slip protection holds it at what the rails give. */
 function updateTraction(m: TrainModel, s: DynamicsState, dt: number): void {
   if (m.nl === 0) return;
   if (dt !== s.lagDt) {
@@ -364,7 +364,8 @@ function updateTraction(m: TrainModel, s: DynamicsState, dt: number): void {
     // Curtius–Kniffler shape scales the standstill adhesion with speed.
     const limit = m.adhesiveWeightN[k]! * m.mu0[k]! * ((7.5 / (sp * 3.6 + 44) + 0.161) / CK0);
     if (e > limit) {
-      s.slipCount[k]! += 1;
+      // The protection acts: a new slip unless it was already acting at the previous evaluation.
+      if (!(s.lastSlipT[k]! >= s.t - dt - 1e-9)) s.slipCount[k]! += 1;
       s.lastSlipT[k] = s.t;
       e = m.slipCutFraction * limit;
     }

@@ -263,6 +263,12 @@ export class Run {
       effort += s.effortN[k]!;
       target += s.targetN[k]!;
       const c = s.slipCount[k]!;
+      const open = this.openEpisode[k];
+      if (c === this.lastSlipCount[k]! && open && s.lastSlipT[k]! > open.endS) {
+        // The protection is still holding the effort at what the rails give: the episode goes on.
+        open.endS = s.lastSlipT[k]!;
+        slipped = true;
+      }
       if (c > this.lastSlipCount[k]!) {
         slipped = true;
         const ep = this.openEpisode[k];

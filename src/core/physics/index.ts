@@ -8,3 +8,4 @@ export * from "./adhesion.js";
 export * from "./traction.js";
 export * from "./track.js";
 export * from "./coupling.js";
+export * from "./brakes.js";

@@ -13,17 +13,27 @@ export function gradeForceN(massKg: number, gradePermille: number): number {
   return massKg * GRAVITY_MPS2 * Math.sin(Math.atan(gradePermille / 1000));
 }
 
+/** Radius at which Röckl's two branches are joined, m [S]. */
+export const ROECKL_BRANCH_RADIUS_M = 300;
+
 /**
- * Röckl's curve resistance for standard gauge, ‰ (N per kN of weight); 0 for straight track (R = 0).
- * R ≥ 300 m: 650/(R − 55); R < 300 m: 500/(R − 30). Source: Röckl, as quoted in PHYSICS.md §1 [S].
+ * Curve resistance for standard gauge, ‰ (N per kN of weight); 0 for straight track (R = 0). Röckl's
+ * formula as quoted in PHYSICS.md §1 [S]: R ≥ 300 m: 650/(R − 55); R < 300 m: 500/(R − 30). Its two
+ * branches do not meet (2.653 ‰ just at 300 m, 1.852 ‰ just below), so taken literally a sharper curve
+ * would resist less. We use their monotone envelope [D]: Röckl's large-radius branch from 300 m up, its
+ * small-radius branch where that gives more (below R = 30 + 500·245/650 ≈ 218.5 m), and between the two the
+ * 300 m value held flat. Continuous, never smaller on a sharper curve, and equal to Röckl's own values
+ * wherever either branch is above the join.
  */
 export function curveResistancePermille(radiusM: number): number {
   if (radiusM === 0 || !Number.isFinite(radiusM)) return 0;
   if (radiusM <= 30) throw new RangeError(`curve radius ${radiusM} m is below the formula's range`);
-  return radiusM >= 300 ? 650 / (radiusM - 55) : 500 / (radiusM - 30);
+  const large = (r: number) => 650 / (r - 55);
+  if (radiusM >= ROECKL_BRANCH_RADIUS_M) return large(radiusM);
+  return Math.max(500 / (radiusM - 30), large(ROECKL_BRANCH_RADIUS_M));
 }
 
-/** Curve resistance force on a vehicle, N (Röckl). */
+/** Curve resistance force on a vehicle, N (Röckl, monotone envelope). */
 export function curveForceN(massKg: number, radiusM: number): number {
   return (curveResistancePermille(radiusM) / 1000) * massKg * GRAVITY_MPS2;
 }

@@ -42,6 +42,8 @@ export interface LocomotiveSpec {
   frontalAreaM2: number;
   /** Optional override of the breakaway resistance, N per kN of weight (‰). */
   startingResistancePermille?: number;
+  /** What the locomotive (independent) brake holds, N; default 15 % of the unit's weight (`locoBrakeHoldingN`). */
+  locoBrakeHoldingN?: number;
 }
 
 /** One wagon type (all wagons of a train share it). */

@@ -13,6 +13,7 @@ export interface StepRecord {
   endS: number;
   startTravelM: number;
   endTravelM: number;
+  startSpeedMps: number;
   endSpeedMps: number;
   maxRisk: number;
   maxUse: number;
@@ -55,6 +56,7 @@ export class Branch {
       endS: s.t,
       startTravelM: s.x[this.run.lead]!,
       endTravelM: s.x[this.run.lead]!,
+      startSpeedMps: s.v[this.run.lead]!,
       endSpeedMps: s.v[this.run.lead]!,
       maxRisk: 0,
       maxUse: 0,

@@ -13,11 +13,23 @@ export const STANDARD_CAUTIONS: readonly string[] = [
   "Plan and brief before departure. Use of a device in the cab follows local rules; nothing here needs input while the train moves.",
 ];
 
+/** How the start is made, where the case's cautions depend on it. */
+export interface StartHow {
+  kind: "power" | "gravity";
+  /** On a falling grade: the locomotive brake alone holds the released train. */
+  locoBrakeHolds: boolean;
+}
+
 /** Extra cautions for this case. */
-export function caseCautions(c: StartCase, totalResistanceN: number): string[] {
+export function caseCautions(c: StartCase, totalResistanceN: number, how?: StartHow): string[] {
   const out: string[] = [];
-  if (totalResistanceN < 0) {
+  if (totalResistanceN < 0 || how?.kind === "gravity") {
     out.push("On this falling grade the train will move when its brakes release: control the start with the brakes, not with power.");
+    if (how && !how.locoBrakeHolds) {
+      out.push(
+        "The locomotive brake alone cannot hold this train here: a heavy train on a falling grade is held on the train brake. Ease the train brake in stages only where it allows graduated release; a brake that releases fully once released (direct release) cannot be eased that way: follow the local instructions for starting on this grade.",
+      );
+    }
   }
   if (c.conditions.sand) {
     out.push("Do not sand over points or crossings; heavy sanding can insulate track circuits. Check the sand boxes before departure.");

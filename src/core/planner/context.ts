@@ -1,72 +1,115 @@
 /**
- * What the planner knows about a case before it simulates anything: the static check, the forces on the
- * standing train, whether it would roll back, the limits it must respect and the notch it can hold with.
+ * What the planner knows about a case before it simulates anything: the static figures, the forces on the
+ * standing train, whether it would roll back or run away when released, the limits it must respect, the
+ * rail it plans on (a quantile of the rail condition) and the notch it can hold with.
  */
 import { adhesionSpeedFactor, slipRisk, standstillMedian } from "../physics/adhesion.js";
+import { locoBrakeHoldingN, trainBrakeHoldingN } from "../physics/brakes.js";
 import { buildConsist, type Consist } from "../train/consist.js";
 import { standingForces, type StandingForces } from "../train/standing.js";
 import { staticCheckOf, type StaticCheck } from "./staticCheck.js";
 import { modelFromCase, trainBrakeReleaseS, type TrainModel } from "../train/trainModel.js";
 import { notchTargetN } from "../dynamics/runner.js";
-import type { StartCase } from "../train/types.js";
+import type { Settings, StartCase } from "../train/types.js";
+import { minimumAccelerationMps2, needAtN } from "./need.js";
+
+import type { StartKind } from "./outcome.js";
+
+export type { StartKind } from "./outcome.js";
 
 export interface PlannerContext {
   c: StartCase;
   consist: Consist;
   forces: StandingForces;
   st: StaticCheck;
+  /** The dynamics model, with each unit's adhesion at the quantile the plan is made for. */
   model: TrainModel;
+  /** Quantile of the rail condition the plan assumes (the slip-risk threshold, or the marginal bound). */
+  quantile: number;
   sigmaLn: number;
-  /** Median standstill adhesion of each unit (sand included where fitted and used). */
+  /** Median standstill adhesion of each unit (sand included where fitted and used): slip risks are read against it. */
   mu0Median: Float64Array;
-  /** Highest slip risk a step may carry: the threshold, or what starting needs when the start is marginal. */
-  riskCap: number;
+  /** Highest slip risk a notch may carry without being needed: the case's threshold. */
+  threshold: number;
   /** Peak coupler force the plan must keep under, N. */
   couplerAllowanceN: number;
   /** Net force pulling the released train backwards (grade less what holds it), N; ≤ 0 when it would not roll back. */
   rollBackPullN: number;
   /** Net force pulling the released train forwards down a falling grade, N; ≤ 0 when it would stand. */
   runAwayPullN: number;
+  /** What the locomotive brakes of all units hold, N. */
+  locoBrakeN: number;
+  /** What the train brake holds, fully applied, N. */
+  trainBrakeN: number;
+  startKind: StartKind;
+  /** On a falling grade: the locomotive brake alone (with 10 % in hand) holds the released train. */
+  locoBrakeHolds: boolean;
   /** Time for the train-brake release to reach the rear and the rear brake to come off, s. */
   releaseS: number;
   maxNotch: number;
   trainMassKg: number;
+  effMassKg: number;
+  /** Slowest acceleration that still reaches the target in time, m/s² (need.ts). */
+  aMinMps2: number;
 }
 
 /** Notch settling: the effort lag's time constant ×3 and never under the 2–3 s practice minimum. */
 export const MIN_NOTCH_DWELL_S = 3;
+/** What a holding force must exceed the pull it holds by [M]: the pull itself is an estimate. */
+export const HOLD_RESERVE = 1.1;
 
-export function plannerContext(c: StartCase): PlannerContext {
+/** The highest slip risk of the needed effort still judged marginal (never below the threshold). */
+export function marginalBound(s: Settings): number {
+  return Math.max(s.slipRiskThreshold, s.marginalSlipRisk ?? 0.25);
+}
+
+/** The planner's view of a case, planning on the rail at its `quantile` (default: the slip-risk threshold). */
+export function plannerContext(c: StartCase, quantile = c.settings.slipRiskThreshold): PlannerContext {
   const consist = buildConsist(c);
   const forces = standingForces(consist, c.location.track);
   const st = staticCheckOf(c, consist, forces);
-  const model = modelFromCase(c);
   const cond = c.adhesion[c.conditions.rail];
-  const mu0Median = Float64Array.from(model.locoSpecs.map((s) => standstillMedian(cond, c.conditions.sand && s.sanders)));
   let grade = 0;
   let hold = 0;
+  let trainBrakeN = 0;
+  let locoBrakeN = 0;
+  let effMassKg = 0;
   for (let i = 0; i < forces.gradeN.length; i++) {
     grade += forces.gradeN[i]!;
     hold += forces.breakawayN[i]! + forces.curveN[i]!;
+    const v = consist.vehicles[i]!;
+    if (v.loco) locoBrakeN += locoBrakeHoldingN(v.loco);
+    else trainBrakeN += trainBrakeHoldingN(v.massKg);
+    effMassKg += v.effectiveMassKg;
   }
-  const threshold = c.settings.slipRiskThreshold;
-  const maxNotch = Math.min(...model.locoSpecs.map((s) => s.notchPower.length));
+  const runAwayPullN = -grade - hold;
+  const startKind: StartKind = runAwayPullN > 0 ? "gravity" : "power";
+  const locoBrakeHolds = locoBrakeN >= HOLD_RESERVE * runAwayPullN;
+  // A train the locomotive brake cannot hold on a falling grade is held on the train brake, eased in stages.
+  const model = modelFromCase(c, { adhesionQuantile: quantile, graduatedRelease: startKind === "gravity" && !locoBrakeHolds });
+  const specs = model.locoSpecs;
   return {
     c,
     consist,
     forces,
     st,
     model,
+    quantile,
     sigmaLn: cond.sigmaLn,
-    mu0Median,
-    // A marginal start may carry the risk that starting itself needs, never more than even odds.
-    riskCap: Math.min(0.5, Math.max(threshold, st.slipRiskAtStart + 0.005)),
+    mu0Median: Float64Array.from(specs.map((s) => standstillMedian(cond, c.conditions.sand && s.sanders))),
+    threshold: c.settings.slipRiskThreshold,
     couplerAllowanceN: c.train.couplerLimitN / c.settings.couplerSafetyFactor,
     rollBackPullN: grade - hold,
-    runAwayPullN: -grade - hold,
+    runAwayPullN,
+    locoBrakeN,
+    trainBrakeN,
+    startKind,
+    locoBrakeHolds,
     releaseS: trainBrakeReleaseS(consist.lengthM),
-    maxNotch,
+    maxNotch: Math.min(...specs.map((s) => s.notchPower.length)),
     trainMassKg: consist.vehicles.reduce((s, v) => s + v.massKg, 0),
+    effMassKg,
+    aMinMps2: minimumAccelerationMps2(c.target),
   };
 }
 
@@ -77,7 +120,28 @@ export function notchEffortAllN(ctx: PlannerContext, notch: number, speedMps: nu
   return f;
 }
 
-/** Slip risk and adhesion use of a notch at a speed (worst unit, median adhesion). */
+/** Σ effort the rails pass in a notch at a speed on the rail the plan assumes (the protection holds the rest back), N. */
+export function notchDeliveredN(ctx: PlannerContext, notch: number, speedMps: number): number {
+  const m = ctx.model;
+  const factor = adhesionSpeedFactor(speedMps);
+  let f = 0;
+  for (let k = 0; k < m.nl; k++) f += Math.min(notchTargetN(m, k, notch, speedMps), m.adhesiveWeightN[k]! * m.mu0[k]! * factor);
+  return f;
+}
+
+/** Every unit in this notch asks for at least what the rails give on the rail the plan assumes. */
+export function notchSaturated(ctx: PlannerContext, notch: number, speedMps: number): boolean {
+  const m = ctx.model;
+  const factor = adhesionSpeedFactor(speedMps);
+  for (let k = 0; k < m.nl; k++) if (notchTargetN(m, k, notch, speedMps) < m.adhesiveWeightN[k]! * m.mu0[k]! * factor) return false;
+  return true;
+}
+
+/**
+ * Slip risk and adhesion use of a notch at a speed (worst unit, against the median adhesion and the
+ * condition's spread): the chance that the rails give less than the notch asks, i.e. that the wheel-slip
+ * protection acts in this step.
+ */
 export function notchAdhesion(ctx: PlannerContext, notch: number, speedMps: number): { risk: number; use: number } {
   const m = ctx.model;
   let risk = 0;
@@ -92,11 +156,19 @@ export function notchAdhesion(ctx: PlannerContext, notch: number, speedMps: numb
   return { risk, use };
 }
 
-/** Lowest notch whose effort at standstill holds the train against rolling back (with 10 % in hand). */
+/**
+ * Lowest notch that, with the locomotive brake, holds the train against rolling back (with 10 % in hand) on
+ * the rail the plan assumes; 0 when nothing pulls it back; −1 when no notch can.
+ */
 export function holdingNotch(ctx: PlannerContext): number {
   if (ctx.rollBackPullN <= 0) return 0;
   for (let n = 1; n <= ctx.maxNotch; n++) {
-    if (notchEffortAllN(ctx, n, 0) >= 1.1 * ctx.rollBackPullN && notchAdhesion(ctx, n, 0).risk <= ctx.riskCap) return n;
+    if (notchDeliveredN(ctx, n, 0) + ctx.locoBrakeN >= HOLD_RESERVE * ctx.rollBackPullN) return n;
   }
   return -1;
+}
+
+/** The effort the train needs at this travel and speed to keep the slowest acceleration, N. */
+export function needNowN(ctx: PlannerContext, travelM: number, speedMps: number, seg: Int32Array): number {
+  return needAtN(ctx.model, ctx.aMinMps2, ctx.effMassKg, travelM, speedMps, seg);
 }

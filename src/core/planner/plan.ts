@@ -1,56 +1,76 @@
 /**
  * The start planner: from a start case to a notch sequence with slip risk, coupler forces and a verdict.
- * Static screen first; then a deterministic, phase-by-phase search in the full dynamics model
- * (median adhesion), and a verifying re-run of the chosen notch timing with pessimistic adhesion.
+ * The verdict, its margin and the plan come from the one decision (decision.ts); this module turns them
+ * into what a driver and a dispatcher read: steps, cautions, the slip card, the largest masses, advice.
  */
 import { caseCautions, STANDARD_CAUTIONS } from "./cautions.js";
 import { modelFromCase } from "../train/trainModel.js";
 import { sequenceControls, simulate } from "../dynamics/simulate.js";
 import { sensitivity } from "./sensitivity.js";
 import { slipGuidance } from "./slip.js";
-import { largestStartableMassKg } from "./startableMass.js";
-import { staticCheck } from "./staticCheck.js";
+import { massCeilingKg, startableMasses } from "./startableMass.js";
 import { gradeAt } from "../physics/track.js";
 import type { StartCase } from "../train/types.js";
-import { MIN_NOTCH_DWELL_S, plannerContext, type PlannerContext } from "./context.js";
-import { ACCELERATE_MAX_S, policyNotch, searchPlan, type SearchResult } from "./search.js";
-import { rigidAccelerate } from "./rigid.js";
+import type { PlannerContext } from "./context.js";
+import { brakeSchedule, type SearchResult } from "./search.js";
 import { planSteps } from "./steps.js";
 import type { PlanOptions, PlanResult, PlanSeries, PlanStep } from "./types.js";
-import { planVerdict } from "./verdict.js";
+import { goesAt, judge, quasiStaticLimits, startsAt, type Decision } from "./decision.js";
+import { LIMIT_WORDS, type LimitCheck } from "./outcome.js";
+import { marginalBound, plannerContext } from "./context.js";
+import { MAX_MARGIN } from "./need.js";
+import type { Reason } from "./outcome.js";
 
 /** Plan the start of a case. Throws a "cancelled" error when `shouldStop` says so. */
 export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
-  const ctx = plannerContext(c);
-  const search = searchPlan(ctx, searchOptions(opts));
-  const used = { ...ctx, riskCap: search.riskCap };
-  const verification = opts.skipVerification || search.failure !== null ? null : verify(used, search);
-  const v = planVerdict(used, search, { slip: verification?.slipped ?? false, coupler: verification?.overAllowance ?? false }, search.riskCap > ctx.riskCap || stretchAboveCap(ctx, search));
-  const steps = search.failure === null ? planSteps(used, search) : [];
-  const maxKg = opts.skipMassSearch ? Number.NaN : maxStartableMassKg(c, opts.shouldStop);
-  opts.onProgress?.(1);
-  const run = search.branch.run;
+  const progress = opts.onProgress;
+  const d = judge(c, {
+    depth: "full",
+    ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}),
+    ...(progress ? { onProgress: (f: number) => progress(opts.skipMassSearch ? f : 0.5 * f) } : {}),
+  });
+  const shown = d.shown;
+  const ctx = shown.ctx;
+  const r = shown.search!;
+  const goes = d.verdict !== "needs-assistance" && r.failure === null;
+  const verification = opts.skipVerification || !goes ? null : verify(ctx, r);
+  const steps = goes ? planSteps(ctx, r) : [];
+  const masses = opts.skipMassSearch ? { startsKg: Number.NaN, marginalKg: Number.NaN, ceilingKg: massCeilingKg(c) } : startableMasses(c, { own: d.verdict, ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}) });
+  progress?.(1);
+  const run = r.branch.run;
   const series = run.seriesView();
   return {
-    verdict: v.verdict,
-    reasons: v.reasons,
-    margin: v.margin,
-    margins: v.margins,
+    verdict: d.verdict,
+    reasons: d.reasons,
+    margin: d.margin,
+    binding: d.binding,
+    limits: d.limits,
+    margins: reasonMargins(d.limits),
+    startKind: d.startKind,
+    planQuantile: ctx.quantile,
+    advice: advice(c, d, masses),
     static: ctx.st,
     steps,
-    peakCouplerForceN: search.failure === null ? search.branch.peakTensionN() : ctx.st.peakTensionN,
-    peakCompressionN: search.failure === null ? search.branch.steps.reduce((m, s) => Math.max(m, s.peakCompressionN), 0) : ctx.st.peakCompressionN,
+    peakCouplerForceN: r.branch.peakTensionN(),
+    peakCompressionN: r.branch.steps.reduce((m, s) => Math.max(m, s.peakCompressionN), 0),
     couplerPeaksN: run.s.peakTensionN.slice(),
     couplerCompressionPeaksN: run.s.peakCompressionN.slice(),
-    timeToTargetS: search.targetReachedS === null ? null : search.targetReachedS - search.powerS,
-    maxStartableMassKg: maxKg,
+    timeToTargetS: r.targetReachedS === null ? null : r.targetReachedS - r.powerS,
+    maxStartableMassKg: masses.startsKg,
+    largestMarginalMassKg: masses.marginalKg,
+    massSearchCeilingKg: masses.ceilingKg,
     slipGuidance: slipGuidance({
       sand: c.conditions.sand,
       sanders: ctx.model.locoSpecs.some((s) => s.sanders),
       risingGrade: gradeAt(c.location.track, c.location.frontAtM - 1) > 2 || ctx.rollBackPullN > 0,
       pointsAhead: true,
     }),
-    cautions: [...STANDARD_CAUTIONS, ...caseCautions(c, ctx.st.resistance.totalN), ...heatingCautions(ctx, steps)],
+    cautions: [
+      ...STANDARD_CAUTIONS,
+      ...caseCautions(c, ctx.st.resistance.totalN, { kind: ctx.startKind, locoBrakeHolds: ctx.locoBrakeHolds }),
+      ...protectionCautions(steps),
+      ...heatingCautions(ctx, steps),
+    ],
     series: {
       timeS: series.timeS,
       speedMps: series.leadSpeedMps,
@@ -61,11 +81,74 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
     verification,
     sensitivity: sensitivity(c),
     stretch: {
-      lastVehicleMovesS: run.lastVehicleMovesS === null ? null : run.lastVehicleMovesS - search.powerS,
+      // Eased off in stages, a train gravity starts is moving before the preparing ends: 0 s then.
+      lastVehicleMovesS: run.lastVehicleMovesS === null ? null : Math.max(0, run.lastVehicleMovesS - r.powerS),
       locoTravelToStretchM: run.locoTravelToStretchM,
       maxRunOutMps: run.s.takeUp.maxRunOutMps,
     },
   };
+}
+
+/** The smallest margin of each reason, 99 when none of its limits is in question. */
+export function reasonMargins(limits: readonly LimitCheck[]): PlanResult["margins"] {
+  const m = { adhesion: MAX_MARGIN, power: MAX_MARGIN, coupler: MAX_MARGIN, distance: MAX_MARGIN, brake: MAX_MARGIN };
+  for (const l of limits) m[l.reason as Reason] = Math.min(m[l.reason as Reason], l.margin);
+  return m;
+}
+
+const t = (kg: number): string => `${Math.floor(kg / 1000)} t`;
+const pct = (q: number): string => `${Math.round(q * 100)} %`;
+
+/**
+ * Why the verdict is what it is, and — unless it starts — what would change it: sand, another rail, less
+ * load, assistance. Sand and the rail are judged on the quasi-static limits (no plan needed for them).
+ */
+function advice(c: StartCase, d: Decision, masses: { startsKg: number; marginalKg: number }): string[] {
+  if (d.verdict === "starts") return [];
+  const out: string[] = [];
+  const b = d.limits.find((l) => l.name === d.binding)!;
+  out.push(`Limited by ${LIMIT_WORDS[b.name]} (margin ${b.margin.toFixed(2)}): ${b.what}.`);
+  if (d.verdict === "marginal") {
+    const soft = d.limits.filter((l) => l.level === "soft");
+    if (soft.length > 0) out.push(`Exceeded within its band: ${soft.map((l) => `${LIMIT_WORDS[l.name]} (marginal up to ${l.band!.what})`).join("; ")}. Brief the start carefully.`);
+    if (d.relaxed) {
+      out.push(
+        `The plan shown assumes the rail gives at least its ${pct(d.shown.ctx.quantile)} quantile: about one start in ${Math.max(2, Math.round(1 / d.shown.ctx.quantile))} the rail gives less, the slip protection keeps acting and the train may stall. Have help arranged.`,
+      );
+    }
+  }
+  const changes: string[] = [];
+  const spec = d.threshold.ctx.model.locoSpecs;
+  const bound = marginalBound(c.settings);
+  const qsMargin = (x: StartCase): number => Math.min(...quasiStaticLimits(plannerContext(x), bound).limits.map((l) => l.margin));
+  const traction = d.limits.some((l) => (l.name === "adhesion" || l.name === "power" || l.name === "time-to-target" || l.name === "brake-holding") && l.level !== "within");
+  if (traction) {
+    if (!c.conditions.sand && spec.some((s) => s.sanders)) {
+      const m = qsMargin({ ...c, conditions: { ...c.conditions, sand: true } });
+      changes.push(`sand (adhesion and power margin with sand ${m.toFixed(2)})`);
+    }
+    if (c.conditions.rail !== "dry") {
+      const m = qsMargin({ ...c, conditions: { ...c.conditions, rail: "dry" } });
+      changes.push(`a better rail (dry${c.conditions.sand ? " with sand" : ""}: margin ${m.toFixed(2)})`);
+    }
+  }
+  if (Number.isFinite(masses.startsKg)) {
+    if (masses.startsKg > 0) changes.push(`less load: ${t(masses.startsKg)} or less starts${masses.marginalKg > masses.startsKg ? `, ${t(masses.marginalKg)} or less is at least marginal` : ""}`);
+    else changes.push("less load will not do it: not even a lightly loaded train of these wagons starts here");
+  } else changes.push("less load");
+  changes.push("assistance (more units at the head, mid-train or at the rear)");
+  out.push(`What would change it: ${changes.join("; ")}.`);
+  return out;
+}
+
+/** Where the plan counts on the slip protection, what that costs. */
+function protectionCautions(steps: readonly PlanStep[]): string[] {
+  const acting = steps.filter((s) => s.protectionActs);
+  if (acting.length === 0) return [];
+  const standstill = acting.some((s) => s.phase === "stretch" || s.phase === "prepare");
+  return [
+    `In ${acting.length === 1 ? "one step" : `${acting.length} steps`} the notch asks for more than the rail may give: the slip protection is expected to act (it trims the effort to what the rails give and reapplies). Expect repeated slips there; hold the notch and sand while it copes, and drop a notch only if the slipping keeps returning.${standstill ? " At a standstill never let the wheels spin: it burns the rail and the wheels." : ""}`,
+  ];
 }
 
 /** Longest a plan may hold current above the continuous rating at low speed before we say so, s [M]. */
@@ -88,73 +171,34 @@ function heatingCautions(ctx: PlannerContext, steps: PlanStep[]): string[] {
   ];
 }
 
-/** The stretch notch itself carried more slip risk than the case accepts. */
-function stretchAboveCap(ctx: PlannerContext, r: SearchResult): boolean {
-  const st = r.branch.steps.find((s) => s.phase === "stretch");
-  return st !== undefined && st.maxRisk > ctx.riskCap + 1e-9;
-}
-
-function searchOptions(opts: PlanOptions) {
-  return {
-    ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}),
-    ...(opts.onProgress ? { onProgress: (f: number) => opts.onProgress!(opts.skipMassSearch ? f : 0.5 * f) } : {}),
-    mode: opts.verdictOnly ? ("verdict" as const) : ("full" as const),
-  };
-}
-
-/** Does the planner say this case starts? The static verdict is checked first: the plan cannot do better. */
+/** Does this case start? Exactly the plan's verdict, with no more work than that needs. */
 export function plannerStarts(c: StartCase, shouldStop?: () => boolean): boolean {
-  if (staticCheck(c).verdict !== "starts") return false;
-  return planStart(c, { skipMassSearch: true, skipVerification: true, verdictOnly: true, ...(shouldStop ? { shouldStop } : {}) }).verdict === "starts";
+  return startsAt(c, shouldStop);
 }
 
-/**
- * Largest trailing mass the planner says starts: bisection over the planner's verdict, below the static
- * limit (which the planner can only lower).
- */
+/** Is this case at least marginal? Exactly the plan's verdict, with no more work than that needs. */
+export function plannerGoes(c: StartCase, shouldStop?: () => boolean): boolean {
+  return goesAt(c, shouldStop);
+}
+
+/** Largest trailing mass that starts, kg (startableMass.ts). */
 export function maxStartableMassKg(c: StartCase, shouldStop?: () => boolean): number {
-  const staticMax = largestStartableMassKg(c, (x) => staticCheck(x).verdict === "starts");
-  if (staticMax <= 0) return 0;
-  // A cheap first estimate from the one-mass model brackets the answer, so the planner itself is asked
-  // only a handful of times around it.
-  const guess = largestStartableMassKg(c, rigidStarts, { upperBoundKg: staticMax, relativeTolerance: 0.01 });
-  return largestStartableMassKg(c, (x) => plannerStarts(x, shouldStop), {
-    upperBoundKg: staticMax,
-    toleranceKg: Math.max(500, 0.002 * staticMax),
-    ...(guess > 0 && guess < staticMax ? { guessKg: guess } : {}),
-  });
+  return startableMasses(c, { startsOnly: true, ...(shouldStop ? { shouldStop } : {}) }).startsKg;
 }
 
 /**
- * The one-mass estimate of "starts": the static check holds and the whole train, taken as one mass from
- * rest, reaches the target under the planner's notch rule within the slip-risk threshold.
- */
-function rigidStarts(c: StartCase): boolean {
-  const ctx = plannerContext(c);
-  if (ctx.st.verdict !== "starts") return false;
-  const out = rigidAccelerate(
-    ctx,
-    { timeS: 0, speedMps: 0, travelM: 0, notch: 1 },
-    (notch, v, inStepS, capped) => policyNotch(ctx, notch, v, inStepS, MIN_NOTCH_DWELL_S, true, 0, capped),
-    ACCELERATE_MAX_S,
-  );
-  return out.reachedS !== null;
-}
-
-/**
- * Re-run the chosen notch timing in the full model with adhesion at the accepted risk (the pessimistic
- * quantile): no wheel slip and couplers within their allowance confirm the plan.
+ * Re-run the chosen notch timing in the full model on the median rail: on a rail better than the plan
+ * assumes each notch passes more of what it asks into the couplers. Reported, not judged (the verdict is
+ * the decision's, on the pessimistic rail).
  */
 function verify(ctx: PlannerContext, r: SearchResult): NonNullable<PlanResult["verification"]> {
-  // At the cap's quantile every step's demand is within what the rails give (risk ≤ cap ⟺ demand ≤ μ_cap).
-  const q = Math.max(0.01, ctx.riskCap);
-  const model = modelFromCase(ctx.c, { adhesionQuantile: q });
+  const q = 0.5;
+  const model = modelFromCase(ctx.c, { adhesionQuantile: q, graduatedRelease: ctx.startKind === "gravity" && !ctx.locoBrakeHolds });
   const seq = r.branch.steps.map((s) => ({ notch: s.notch, atS: s.startS }));
-  // Slips and coupler peaks come with notch changes: verify through the last change and a minute after
-  // it (the notch then held was checked for its slip risk up to the target speed).
+  // Slips and coupler peaks come with notch changes: verify through the last change and a minute after it.
   const lastChange = r.branch.steps[r.branch.steps.length - 1]!.startS;
   const end = Math.min(r.branch.run.s.t, lastChange + 60);
-  const res = simulate(model, sequenceControls(seq, { trainBrakeReleaseS: 0, locoBrakeReleaseS: r.powerS }), { durationS: end });
+  const res = simulate(model, sequenceControls(seq, brakeSchedule(ctx)), { durationS: end });
   return {
     adhesionQuantile: q,
     slipped: res.slipEpisodes.length > 0,

@@ -1,14 +1,15 @@
 /**
  * The plan search: prepare → stretch → build → accelerate, each phase tried on clones of the run that
  * reached it, choosing by common practice (lowest stretch notch that moves the whole train slowly;
- * quickest build pace that keeps couplers within their allowance) and checked by the full dynamics.
- * Deterministic: the same case always gives the same plan.
+ * quickest build pace that keeps couplers within their allowance) and checked by the full dynamics, on the
+ * rail the plan assumes (a quantile of the rail condition; the wheel-slip protection holds any effort above
+ * what that rail gives at what it gives). A train that gravity starts once its brakes are eased is started
+ * on the brakes: no notch until the train needs one. Deterministic: the same case always gives the same plan.
  */
-import { Run, type Observation } from "../dynamics/runner.js";
+import { Run, type BrakeSchedule, type Observation } from "../dynamics/runner.js";
 import { stabilityTimeStep } from "../train/trainModel.js";
 import { Branch } from "./branch.js";
-import { rigidAccelerate } from "./rigid.js";
-import { holdingNotch, MIN_NOTCH_DWELL_S, notchAdhesion, notchEffortAllN, type PlannerContext } from "./context.js";
+import { MIN_NOTCH_DWELL_S, holdingNotch, needNowN, notchAdhesion, notchDeliveredN, notchSaturated, type PlannerContext, type StartKind } from "./context.js";
 
 /** Longest the planner waits for a stretch notch to get the last vehicle moving, s. */
 export const STRETCH_MAX_S = 90;
@@ -23,34 +24,43 @@ export type StretchOutcome = "ok" | "weak" | "fast" | "force" | "rollback";
 
 export interface SearchResult {
   branch: Branch;
-  /** Time the locomotive brake comes off and the stretch notch is taken, s. */
+  /** Time the locomotive brake comes off and the stretch notch is taken (or gravity takes over), s. */
   powerS: number;
   holdNotch: number;
+  startKind: StartKind;
   stretch: { notch: number; outcome: StretchOutcome; tried: Array<{ notch: number; outcome: StretchOutcome }> } | null;
   buildDwellS: number | null;
   /** Build pace kept the couplers within their allowance. */
   buildWithinAllowance: boolean;
-  /** Time the build phase ended (highest notch reached or no further notch allowed), s. */
+  /** Time the build phase ended (highest notch reached or no further notch allowed), s, and the locomotive's travel then, m. */
   buildEndS: number | null;
+  buildEndTravelM: number | null;
   targetReachedS: number | null;
   /** Locomotive travel when the target was reached, m. */
   targetTravelM: number | null;
+  /** Highest locomotive speed and the tail's furthest travel the plan reached (progress when it fell short), m/s and m. */
+  bestSpeedMps: number;
+  bestTailTravelM: number;
   stalled: boolean;
-  /** The notch-up was held back by the slip-risk cap at some point. */
+  /** A notch-up was held back because the rails would give no more or the train needed no more. */
   adhesionCapped: boolean;
-  /** Slip-risk cap the plan was made with (above the case's threshold when the target needed more). */
-  riskCap: number;
   failure: null | "cannot-hold" | "cannot-start";
 }
 
 export interface SearchOptions {
   shouldStop?: () => boolean;
   onProgress?: (fraction: number) => void;
-  /** "verdict": follow the acceleration with the one-mass model (the verdict needs no more). */
-  mode?: "full" | "verdict";
 }
 
 class Cancelled extends Error {}
+
+/** When the brakes come off: the train brake from the start, the locomotive brake when power is taken. */
+export function brakeSchedule(ctx: PlannerContext): BrakeSchedule {
+  const powerS = ctx.releaseS + 2;
+  // Held on the train brake eased in stages (graduated release): the locomotive brake is not what holds it.
+  if (ctx.startKind === "gravity" && !ctx.locoBrakeHolds) return { trainBrakeReleaseS: 0, locoBrakeReleaseS: 0 };
+  return { trainBrakeReleaseS: 0, locoBrakeReleaseS: powerS };
+}
 
 /** Run the search for a case. */
 export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): SearchResult {
@@ -59,47 +69,69 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
   };
   const hold = holdingNotch(ctx);
   const powerS = ctx.releaseS + 2;
-  const run = Run.start(ctx.model, { trainBrakeReleaseS: 0, locoBrakeReleaseS: powerS });
+  const run = Run.start(ctx.model, brakeSchedule(ctx));
   const prep = new Branch(run, []);
   prep.open("prepare", Math.max(0, hold));
   const base: SearchResult = {
     branch: prep,
     powerS,
     holdNotch: hold,
+    startKind: ctx.startKind,
     stretch: null,
     buildDwellS: null,
     buildWithinAllowance: true,
     buildEndS: null,
+    buildEndTravelM: null,
     targetReachedS: null,
     targetTravelM: null,
+    bestSpeedMps: 0,
+    bestTailTravelM: 0,
     stalled: false,
     adhesionCapped: false,
-    riskCap: ctx.riskCap,
     failure: null,
   };
   if (hold < 0) return { ...base, failure: "cannot-hold" };
 
-  // Prepare: release the train brake with the locomotive brake (and a holding notch on a rising grade) on.
+  // Prepare: release the train brake with the locomotive brake (and a holding notch on a rising grade) on;
+  // on a falling grade the locomotive brake holds the released train, or the train brake is eased in stages.
+  const graduated = ctx.startKind === "gravity" && !ctx.locoBrakeHolds;
   while (prep.run.s.t < powerS - 1e-9) {
     const obs = prep.tick(ctx);
-    if (obs.leadTravelM < -ROLL_BACK_LIMIT_M) break;
+    if (obs.leadTravelM < -ROLL_BACK_LIMIT_M) return { ...base, failure: "cannot-hold" };
+    // Eased in stages, the train starts by itself before the brake is fully off: that ends the preparing.
+    if (graduated && obs.allMoving) break;
   }
-  prep.current.trigger = "time";
+  prep.current.trigger = graduated && prep.run.lastVehicleMovesS !== null ? "moved" : "time";
   check();
   opts.onProgress?.(0.2);
+
+  if (ctx.startKind === "gravity") {
+    // No notch: gravity starts the train; power only if it then needs more to reach the target.
+    const b = prep.clone();
+    b.open("accelerate", 0);
+    const acc = accelerate(ctx, b, MIN_NOTCH_DWELL_S, prep.run.s.t, check);
+    opts.onProgress?.(0.85);
+    return { ...base, branch: b, powerS: prep.run.s.t, ...accelerationOutcome(acc) };
+  }
 
   // Stretch: the lowest notch that gets every vehicle moving with the locomotive slow and couplers easy.
   const tried: Array<{ notch: number; outcome: StretchOutcome }> = [];
   let chosen: { branch: Branch; notch: number; outcome: StretchOutcome } | null = null;
-  const stretchCap = opts.mode === "verdict" ? ctx.riskCap : 0.5;
   for (let n = Math.max(1, hold); n <= ctx.maxNotch; n++) {
-    if (notchAdhesion(ctx, n, 0).risk > stretchCap) break;
-    if (!canEverMove(ctx, n)) continue;
+    // Once a notch asks for all the rails give, a higher one gives no more on this rail.
+    const last = notchSaturated(ctx, n, 0);
+    if (!canEverMove(ctx, n)) {
+      if (last) break;
+      continue;
+    }
     const b = prep.clone();
     const outcome = stretchWith(ctx, b, n);
     tried.push({ notch: n, outcome });
     check();
-    if (outcome === "weak") continue;
+    if (outcome === "weak" || outcome === "rollback") {
+      if (last) break;
+      continue;
+    }
     chosen = { branch: b, notch: n, outcome };
     break;
   }
@@ -107,52 +139,45 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
   if (!chosen) return { ...base, stretch: { notch: 0, outcome: "weak", tried }, failure: "cannot-start" };
   const stretch = { notch: chosen.notch, outcome: chosen.outcome, tried };
 
-  // Coarse notches may leave no way to the target within the slip-risk cap. Check each cap of the ladder
-  // with the one-mass model (cheap) from where the stretch ended and plan with the first that gets there.
-  let plannedCtx = ctx;
-  let riskCap = ctx.riskCap;
-  for (const cap of riskLadder(ctx, opts)) {
-    plannedCtx = cap === ctx.riskCap ? ctx : { ...ctx, riskCap: cap };
-    riskCap = cap;
-    const probe = accelerateRigid(plannedCtx, chosen.branch, MIN_NOTCH_DWELL_S, powerS);
-    if (probe.reachedS !== null) break;
-  }
-
   // Build: the shortest pace between notches that keeps the couplers within their allowance.
-  let built: { branch: Branch; dwell: number; endS: number; capped: boolean } | null = null;
+  let built: { branch: Branch; dwell: number; endS: number; endTravelM: number; capped: boolean } | null = null;
   for (const dwell of BUILD_DWELLS_S) {
     const b = chosen.branch.clone();
-    const r = buildWith(plannedCtx, b, dwell);
+    const r = buildWith(ctx, b, dwell);
     check();
-    built = { branch: b, dwell, endS: r.endS, capped: r.capped };
+    built = { branch: b, dwell, endS: r.endS, endTravelM: b.run.s.x[b.run.lead]!, capped: r.capped };
     if (b.peakTensionN() <= ctx.couplerAllowanceN) break;
   }
   opts.onProgress?.(0.65);
   const b = built!.branch;
   const withinAllowance = b.peakTensionN() <= ctx.couplerAllowanceN;
 
-  // Accelerate: hold the highest notch the rails allow (adjusting as speed changes) to the target.
-  const acc = opts.mode === "verdict" ? accelerateRigid(plannedCtx, b, built!.dwell, powerS) : accelerate(plannedCtx, b, built!.dwell, powerS, check);
+  // Accelerate: hold the notch the policy settles on (adjusting as speed changes) to the target.
+  const acc = accelerate(ctx, b, built!.dwell, powerS, check);
   opts.onProgress?.(0.85);
+  const out = accelerationOutcome(acc);
   return {
     ...base,
     branch: b,
     stretch,
-    riskCap,
     buildDwellS: built!.dwell,
     buildWithinAllowance: withinAllowance,
     buildEndS: built!.endS,
-    targetReachedS: acc.reachedS,
-    targetTravelM: acc.travelM,
-    stalled: acc.stalled,
-    adhesionCapped: built!.capped || acc.capped,
+    buildEndTravelM: built!.endTravelM,
+    ...out,
+    adhesionCapped: built!.capped || out.adhesionCapped,
   };
 }
 
-/** Slip-risk caps to try: the case's own, then (unless only the verdict is wanted) more lenient ones. */
-function riskLadder(ctx: PlannerContext, opts: SearchOptions): number[] {
-  if (opts.mode === "verdict") return [ctx.riskCap];
-  return [ctx.riskCap, 0.25, 0.5].filter((x, i) => i === 0 || x > ctx.riskCap);
+function accelerationOutcome(acc: ReturnType<typeof accelerate>) {
+  return {
+    targetReachedS: acc.reachedS,
+    targetTravelM: acc.travelM,
+    bestSpeedMps: acc.bestSpeedMps,
+    bestTailTravelM: acc.bestTailTravelM,
+    stalled: acc.stalled,
+    adhesionCapped: acc.capped,
+  };
 }
 
 export function isCancelled(e: unknown): boolean {
@@ -167,7 +192,7 @@ function canEverMove(ctx: PlannerContext, notch: number): boolean {
   const f = ctx.forces;
   let rolling = 0;
   for (let i = 0; i < f.gradeN.length; i++) rolling += f.runningN[i]! + f.gradeN[i]! + f.curveN[i]!;
-  return notchEffortAllN(ctx, notch, 0) > rolling;
+  return notchDeliveredN(ctx, notch, 0) > rolling;
 }
 
 /** Take `notch` and wait for the last vehicle to move; classify how it went. */
@@ -195,27 +220,46 @@ function stretchWith(ctx: PlannerContext, b: Branch, notch: number): StretchOutc
 }
 
 /** The notch the policy wants next, or the same notch. */
-function nextNotch(ctx: PlannerContext, obs: Observation, notch: number, inStepS: number, dwell: number, capped: { hit: boolean }): number {
-  return policyNotch(ctx, notch, Math.max(0, obs.leadSpeedMps), inStepS, dwell, obs.effortSettled && !obs.slipped, obs.maxTensionN, capped);
+function nextNotch(ctx: PlannerContext, obs: Observation, notch: number, inStepS: number, dwell: number, capped: { hit: boolean }, seg: Int32Array): number {
+  return policyNotch(ctx, notch, Math.max(0, obs.leadSpeedMps), obs.leadTravelM, inStepS, dwell, obs.effortSettled && !obs.slipped, obs.maxTensionN, capped, seg);
 }
 
 /**
- * The planner's notch rule: ease off a notch if its slip risk has crept over the cap; advance one notch
- * only after the dwell, with the current settled, when the next notch's slip risk (now and a little
- * faster) stays within the cap and the extra effort keeps the head coupling within its allowance.
+ * The planner's notch rule. Advance one notch only after the dwell, with the current settled, when the rails
+ * pass more in the next notch (on the rail the plan assumes) and the extra effort keeps the head coupling
+ * within its allowance. A notch is never dropped for slipping the protection copes with (the driver drops
+ * one only when it cannot: the If wheels slip card). A train that gravity starts gets no notch until it
+ * needs one to keep the slowest acceleration that still reaches its target.
  */
-export function policyNotch(ctx: PlannerContext, notch: number, v: number, inStepS: number, dwell: number, settled: boolean, tensionN: number, capped: { hit: boolean }): number {
-  if (notch > 1 && notchAdhesion(ctx, notch, v).risk > ctx.riskCap) return notch - 1;
+export function policyNotch(
+  ctx: PlannerContext,
+  notch: number,
+  v: number,
+  travelM: number,
+  inStepS: number,
+  dwell: number,
+  settled: boolean,
+  tensionN: number,
+  capped: { hit: boolean },
+  seg: Int32Array,
+): number {
   if (notch >= ctx.maxNotch || inStepS < dwell || !settled) return notch;
   const up = notch + 1;
-  if (notchRiskAhead(ctx, up, v) > ctx.riskCap) {
+  const now = notchDeliveredN(ctx, notch, v);
+  const gain = notchDeliveredN(ctx, up, v) - now;
+  if (gain <= 1) {
+    capped.hit = true;
+    return notch;
+  }
+  // A power start takes what the rails give (the protection holds any excess there): more effort never
+  // makes a start slower or a heavier train quicker. A train gravity starts takes power only when it needs it.
+  if (ctx.startKind === "gravity" && now >= needNowN(ctx, travelM, v, seg)) {
     capped.hit = true;
     return notch;
   }
   // Quasi-static rise of the head coupler force from the extra effort must stay within the allowance.
-  const extra = notchEffortAllN(ctx, up, v) - notchEffortAllN(ctx, notch, v);
   const leadShare = 1 - (ctx.consist.vehicles[ctx.model.locoVehicle[0] ?? 0]?.massKg ?? 0) / ctx.trainMassKg;
-  if (tensionN + extra * leadShare > 0.95 * ctx.couplerAllowanceN) return notch;
+  if (tensionN + gain * leadShare > 0.95 * ctx.couplerAllowanceN) return notch;
   return up;
 }
 
@@ -249,12 +293,13 @@ function targetSpeedMps(ctx: PlannerContext): number {
 /** Notch up at the given pace until the highest notch is reached or none is allowed for a while. */
 function buildWith(ctx: PlannerContext, b: Branch, dwell: number): { endS: number; capped: boolean } {
   const capped = { hit: false };
+  const seg = new Int32Array(ctx.model.n);
   let lastChange = b.run.s.t;
   for (;;) {
     const obs = b.tick(ctx);
     if (targetReached(ctx, obs)) break;
     const notch = b.current.notch;
-    const next = nextNotch(ctx, obs, notch, obs.timeS - b.current.startS, dwell, capped);
+    const next = nextNotch(ctx, obs, notch, obs.timeS - b.current.startS, dwell, capped, seg);
     if (next !== notch) {
       b.current.trigger = next > notch ? "time" : "speed";
       b.open("build", next);
@@ -276,8 +321,9 @@ function targetReached(ctx: PlannerContext, obs: Observation): boolean {
 function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: number, check: () => void) {
   // Stretched and rolling, no coupling goes in or out of its slack any more: the stability-limited step
   // is enough (the accuracy limit is for slack engagement).
-  b.run.setStep(Math.max(b.run.dt, stabilityTimeStep(ctx.model)));
+  if (ctx.startKind === "power") b.run.setStep(Math.max(b.run.dt, stabilityTimeStep(ctx.model)));
   const capped = { hit: false };
+  const seg = new Int32Array(ctx.model.n);
   let reachedS: number | null = null;
   let travelM: number | null = null;
   let stalled = false;
@@ -285,13 +331,16 @@ function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numbe
   let ticks = 0;
   let best = Math.max(0, b.run.s.v[b.run.lead]!);
   let bestAt = b.run.s.t;
+  let bestTail = b.run.s.x[b.run.m.n - 1]!;
   // The step current at the end of the build is the one held to accelerate.
   b.current.phase = b.current.phase === "stretch" ? "stretch" : "accelerate";
   for (;;) {
     const obs = b.tick(ctx);
+    if (obs.tailTravelM > bestTail) bestTail = obs.tailTravelM;
     if (targetReached(ctx, obs)) {
       reachedS = obs.timeS;
       travelM = obs.leadTravelM;
+      best = Math.max(best, obs.leadSpeedMps);
       b.current.trigger = "target";
       break;
     }
@@ -309,25 +358,13 @@ function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numbe
     } else if (ctx.c.target.kind === "speed" && obs.timeS - bestAt > 60) break;
     if (obs.timeS - powerS > ACCELERATE_MAX_S) break;
     const notch = b.current.notch;
-    const next = nextNotch(ctx, obs, notch, obs.timeS - b.current.startS, dwell, capped);
+    const next = nextNotch(ctx, obs, notch, obs.timeS - b.current.startS, dwell, capped, seg);
     if (next !== notch) {
       b.current.trigger = "speed";
-      b.open("accelerate", next);
+      b.open(next > notch && notch === 0 ? "build" : "accelerate", next);
     }
     if (++ticks % 200 === 0) check();
   }
   if (b.current.phase === "stretch" && reachedS !== null) b.current.trigger = "target";
-  return { reachedS, travelM, stalled, capped: capped.hit };
-}
-
-/** The acceleration followed with the one-mass model from where the build ended. */
-function accelerateRigid(ctx: PlannerContext, b: Branch, dwell: number, powerS: number) {
-  const run = b.run;
-  const out = rigidAccelerate(
-    ctx,
-    { timeS: run.s.t, speedMps: run.s.v[run.lead]!, travelM: run.s.x[run.lead]!, notch: b.current.notch },
-    (notch, v, inStepS, capped) => policyNotch(ctx, notch, v, inStepS, dwell, true, 0, capped),
-    Math.max(0, ACCELERATE_MAX_S - (run.s.t - powerS)),
-  );
-  return { reachedS: out.reachedS, travelM: out.reachedS === null ? null : out.travelM, stalled: out.stalled, capped: out.capped };
+  return { reachedS, travelM, stalled, capped: capped.hit, bestSpeedMps: best, bestTailTravelM: bestTail };
 }

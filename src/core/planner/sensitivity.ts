@@ -1,23 +1,16 @@
 /**
  * Sensitivity: which input moves the start's margin most. Each input is nudged by a step a driver or
- * dispatcher would recognise as a plausible error or change, and the static margin (available ÷ needed,
- * the smallest of adhesion, power and coupler) is compared with the case's own.
+ * dispatcher would recognise as a plausible error or change, and the margin of the limits known before any
+ * dynamics (adhesion and power along the start, brake holding: decision.ts) is compared with the case's own.
  */
 import { staticCheck } from "./staticCheck.js";
+import { quasiStaticLimits } from "./decision.js";
+import { marginalBound, plannerContext } from "./context.js";
 import type { AdhesionTable } from "../physics/types.js";
 import type { StartCase } from "../train/types.js";
+import type { SensitivityInput, SensitivityRow } from "./types.js";
 
-export type SensitivityInput = "mass" | "adhesion" | "grade" | "slack";
-
-export interface SensitivityRow {
-  input: SensitivityInput;
-  /** The nudge, in words with its unit. */
-  change: string;
-  marginBefore: number;
-  marginAfter: number;
-  /** Change in locomotive travel needed to stretch the train, m (slack matters there, not in the margin). */
-  stretchTravelChangeM: number;
-}
+export type { SensitivityInput, SensitivityRow } from "./types.js";
 
 /** Nudges: +10 % trailing mass, −10 % adhesion, +1 ‰ gradient everywhere, +25 mm slack per coupling. */
 export function sensitivity(c: StartCase): SensitivityRow[] {
@@ -32,9 +25,10 @@ export function sensitivity(c: StartCase): SensitivityRow[] {
     ],
     ["slack", "+25 mm slack per coupling", { ...c, train: { ...c.train, couplerSlackM: c.train.couplerSlackM + 0.025 } }],
   ];
+  const before = quasiStaticMargin(c);
   const rows = nudged.map(([input, change, x]) => {
     const s = staticCheck(x);
-    return { input, change, marginBefore: base.margin, marginAfter: s.margin, stretchTravelChangeM: s.stretchTravelM - base.stretchTravelM };
+    return { input, change, marginBefore: before, marginAfter: quasiStaticMargin(x), stretchTravelChangeM: s.stretchTravelM - base.stretchTravelM };
   });
   return rows.sort((a, b) => Math.abs(b.marginAfter - b.marginBefore) - Math.abs(a.marginAfter - a.marginBefore));
 }
@@ -43,4 +37,9 @@ function scaleAdhesion(t: AdhesionTable, f: number): AdhesionTable {
   const out = {} as AdhesionTable;
   for (const [k, v] of Object.entries(t) as Array<[keyof AdhesionTable, AdhesionTable[keyof AdhesionTable]]>) out[k] = { ...v, median: v.median * f, sanded: v.sanded * f };
   return out;
+}
+
+/** The smallest margin of the limits known before any dynamics, on the rail at the slip-risk threshold. */
+export function quasiStaticMargin(c: StartCase): number {
+  return Math.min(...quasiStaticLimits(plannerContext(c), marginalBound(c.settings)).limits.map((l) => l.margin));
 }

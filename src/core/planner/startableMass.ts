@@ -1,8 +1,13 @@
 /**
- * The largest trailing mass that still starts, everything else unchanged (same wagons, same length),
- * found by bisection over a verdict function. The verdict must be monotonic in mass.
+ * The largest trailing mass that still starts (and the largest that is at least marginal), everything else
+ * unchanged: the same wagons and length, each wagon carrying its share. Found by bisection over the one
+ * verdict (decision.ts), bracketed by the case's own verdict, so that a case that starts never has a largest
+ * startable mass below its own and one that needs assistance never has a largest marginal mass above it.
  */
 import type { StartCase } from "../train/types.js";
+import type { Verdict } from "./outcome.js";
+import { goesAt, quasiStaticLimits, startsAt } from "./decision.js";
+import { marginalBound, plannerContext } from "./context.js";
 
 /** The bracket never needs to be narrower than this, kg. */
 const MIN_TOLERANCE_KG = 50;
@@ -30,27 +35,28 @@ export interface MassSearchOptions {
 
 /** Bracket step around a guess: ×/÷ this factor until the verdict changes. */
 const GUESS_STEP = 1.04;
+/** Lightest train searched: one tonne per wagon (lighter is not a train). */
+const floorKgOf = (c: StartCase): number => c.train.wagons * 1000;
 
 /**
  * Largest trailing mass (kg) for which `starts(case)` holds; 0 when even a near-empty train does not
- * start. Doubles up from the case's mass to bracket the limit, then bisects.
+ * start. Doubles up from the case's mass to bracket the limit, then bisects. A plain bisection over any
+ * verdict function (the load table accepts one); the product's own figures come from `startableMasses`.
  */
 export function largestStartableMassKg(c: StartCase, starts: (c: StartCase) => boolean, opts: MassSearchOptions = {}): number {
   const tol = opts.toleranceKg ?? 500;
   const ceiling = opts.ceilingKg ?? 5e7;
-  const floorKg = c.train.wagons * 1000; // one tonne per wagon: lighter is not a train
+  const floorKg = floorKgOf(c);
   const ok = (m: number): boolean => starts(withTrailingMass(c, m));
   const bound = opts.upperBoundKg;
   if (bound !== undefined) {
     if (bound < floorKg) return 0;
-    // The bound itself usually holds (when the static limit is what binds): one evaluation then.
     if (ok(bound)) return bound;
   }
   let lo: number;
   let hi: number;
   const guess = opts.guessKg;
   if (guess !== undefined && guess > floorKg && (bound === undefined || guess < bound)) {
-    // Bracket around the estimate: a few evaluations when it is close.
     const top = bound ?? ceiling;
     if (ok(guess)) {
       lo = guess;
@@ -79,11 +85,113 @@ export function largestStartableMassKg(c: StartCase, starts: (c: StartCase) => b
       hi = Math.min(ceiling, hi * 2);
     }
   }
-  const rel = opts.relativeTolerance ?? 0.005;
+  return bisect(lo, hi, ok, opts.relativeTolerance ?? 0.005, tol);
+}
+
+function bisect(lo: number, hi: number, ok: (m: number) => boolean, rel: number, tol: number): number {
   while (hi - lo > Math.min(tol, Math.max(MIN_TOLERANCE_KG, rel * lo))) {
     const mid = 0.5 * (lo + hi);
     if (ok(mid)) lo = mid;
     else hi = mid;
   }
   return lo;
+}
+
+/**
+ * Heaviest wagon the search goes to, kg: beyond any freight wagon's gross mass [M], so a largest mass at this
+ * ceiling means the locomotives set no limit (on a falling grade, for example, the brakes hold any load).
+ */
+export const CEILING_KG_PER_WAGON = 250_000;
+/** The search's ceiling for a case: 250 t a wagon, or the case's own mass if that is more, kg. */
+export function massCeilingKg(c: StartCase): number {
+  return Math.max(c.train.trailingMassKg, c.train.wagons * CEILING_KG_PER_WAGON);
+}
+/** Relative width the search narrows to (0.5 %), and never wider than 2 t. */
+const RELATIVE_TOLERANCE = 0.005;
+const TOLERANCE_KG = 2000;
+
+/**
+ * Largest mass for which `ok` holds, given what is known of the case's own mass (`ownOk`) and a mass known
+ * to hold (`atLeastKg`, 0 for none). A first probe at `probeKg` (the quasi-static limit: above it the
+ * verdict fails before any dynamics, so probes there cost little) shapes the bracket.
+ */
+function largestMass(c: StartCase, ok: (m: number) => boolean, ownOk: boolean, atLeastKg: number, probeKg: number): number {
+  const own = c.train.trailingMassKg;
+  const floorKg = floorKgOf(c);
+  const ceiling = massCeilingKg(c);
+  let lo = Math.max(atLeastKg, ownOk ? own : 0);
+  let hi = ownOk ? ceiling : own;
+  // A mass known to fail (the case's own when it does; none yet when it holds).
+  let failing = !ownOk;
+  if (hi <= lo) return lo;
+  if (lo < floorKg) {
+    if (!ok(floorKg)) return 0;
+    lo = floorKg;
+  }
+  if (probeKg > lo && probeKg < hi) {
+    if (ok(probeKg)) lo = probeKg;
+    else {
+      hi = probeKg;
+      failing = true;
+    }
+  }
+  // No failing mass known yet: double until one fails (each probe above the quasi-static limit is cheap).
+  while (!failing) {
+    const next = Math.min(ceiling, lo * 2);
+    if (next <= lo) return lo;
+    if (ok(next)) {
+      lo = next;
+      if (next >= ceiling) return lo;
+    } else {
+      hi = next;
+      failing = true;
+    }
+  }
+  return bisect(lo, hi, ok, RELATIVE_TOLERANCE, TOLERANCE_KG);
+}
+
+/** The largest mass for which the quasi-static limits allow the verdict (all within, or none over). */
+function quasiStaticMassKg(c: StartCase, need: "within" | "not-over"): number {
+  const bound = marginalBound(c.settings);
+  const holds = (m: number): boolean => {
+    const x = withTrailingMass(c, m);
+    const ls = quasiStaticLimits(plannerContext(x), bound).limits;
+    return need === "within" ? ls.every((l) => l.level === "within") : ls.every((l) => l.level !== "over");
+  };
+  return largestStartableMassKg(c, (x) => holds(x.train.trailingMassKg), { relativeTolerance: 0.002, toleranceKg: 200 });
+}
+
+export interface StartableMasses {
+  /** Largest trailing mass that starts, kg (0: none). */
+  startsKg: number;
+  /** Largest trailing mass that is at least marginal, kg (0: none); never below `startsKg`. */
+  marginalKg: number;
+  /** The search's ceiling (`massCeilingKg`): a mass equal to it means "no limit up to here", kg. */
+  ceilingKg: number;
+}
+
+export interface StartableMassOptions {
+  /** The case's own verdict when the caller already has it (saves a plan). */
+  own?: Verdict;
+  shouldStop?: () => boolean;
+  /** Only the largest startable mass (skip the largest marginal one). */
+  startsOnly?: boolean;
+}
+
+/**
+ * The largest trailing masses that start and that are at least marginal, with this train's wagons. By
+ * construction: the case starts ⇔ its mass ≤ `startsKg`, and it needs assistance ⇔ its mass > `marginalKg`.
+ */
+export function startableMasses(c: StartCase, opts: StartableMassOptions = {}): StartableMasses {
+  const stop = opts.shouldStop;
+  const starts = (m: number) => startsAt(withTrailingMass(c, m), stop);
+  const goes = (m: number) => goesAt(withTrailingMass(c, m), stop);
+  const own = opts.own;
+  const ownStarts = own !== undefined ? own === "starts" : starts(c.train.trailingMassKg);
+  const startsKg = largestMass(c, starts, ownStarts, 0, quasiStaticMassKg(c, "within"));
+  const ceilingKg = massCeilingKg(c);
+  if (opts.startsOnly) return { startsKg, marginalKg: Number.NaN, ceilingKg };
+  const ownGoes = ownStarts || (own !== undefined ? own !== "needs-assistance" : goes(c.train.trailingMassKg));
+  const marginalKg = largestMass(c, goes, ownGoes, startsKg, quasiStaticMassKg(c, "not-over"));
+  return { startsKg, marginalKg: Math.max(startsKg, marginalKg), ceilingKg };
 }

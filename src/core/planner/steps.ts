@@ -1,12 +1,13 @@
 /**
  * From the search's step records to the plan a driver reads: what to watch for before advancing, the
- * expected figures, the fallback notch if the wheels slip, and one plain line of physics saying why.
+ * expected figures, the fallback notch if the wheels slip, and one plain line of physics saying why —
+ * including where the notch asks for more than the rail may give and the slip protection is expected to act.
  */
 import { adhesionSpeedFactor, slipRiskAfterSlip } from "../physics/adhesion.js";
 import { notchTargetN } from "../dynamics/runner.js";
 import { mpsToKmh } from "../physics/units.js";
 import type { StepRecord } from "./branch.js";
-import type { PlannerContext } from "./context.js";
+import { notchDeliveredN, notchEffortAllN, type PlannerContext } from "./context.js";
 import type { SearchResult } from "./search.js";
 import type { PlanStep } from "./types.js";
 
@@ -36,6 +37,18 @@ const kN = (n: number): string => `${Math.round(n / 1000)} kN`;
 const pct = (x: number): string => (x > 0 && x < 0.005 ? "< 1 %" : `${Math.round(x * 100)} %`);
 const km = (mps: number): string => `${mpsToKmh(mps).toFixed(1)} km/h`;
 
+/** Asking this much more than the rail gives counts as asking more (below it the two are the same figure) [D]. */
+const BEYOND_RAIL = 1.01;
+
+/** The notch asks for more than the rail the plan assumes passes, at the step's start or end speed. */
+function asksBeyondRail(ctx: PlannerContext, rec: StepRecord): boolean {
+  if (rec.notch <= 0) return false;
+  return [rec.startSpeedMps, rec.endSpeedMps].some((v) => {
+    const speed = Math.max(0, v);
+    return notchEffortAllN(ctx, rec.notch, speed) > notchDeliveredN(ctx, rec.notch, speed) * BEYOND_RAIL;
+  });
+}
+
 /** Turn the chosen branch into plan steps. */
 export function planSteps(ctx: PlannerContext, r: SearchResult): PlanStep[] {
   const recs = r.branch.steps;
@@ -43,10 +56,11 @@ export function planSteps(ctx: PlannerContext, r: SearchResult): PlanStep[] {
   // Power steps after the stretch notch up to the running notch (build); the last is held to the target.
   const lastPower = recs.length - 1;
   return recs.map((rec, k) => {
-    if (rec.phase === "build" || rec.phase === "accelerate") rec.phase = k === lastPower && r.targetReachedS !== null ? "accelerate" : "build";
+    if ((rec.phase === "build" || rec.phase === "accelerate") && rec.notch > 0) rec.phase = k === lastPower && r.targetReachedS !== null ? "accelerate" : "build";
     const duration = rec.endS - rec.startS;
     const moved = rec.endTravelM - rec.startTravelM;
     const speed = Math.max(0, rec.endSpeedMps);
+    const protectionActs = asksBeyondRail(ctx, rec);
     return {
       phase: rec.phase,
       notch: rec.notch,
@@ -57,11 +71,21 @@ export function planSteps(ctx: PlannerContext, r: SearchResult): PlanStep[] {
       adhesionUse: rec.maxUse,
       adhesionUseAt: { speedMps: rec.maxUseSpeedMps, tractiveEffortN: rec.maxUseEffortN },
       slipRisk: rec.maxRisk,
+      protectionActs,
       peakCouplerForceN: rec.peakTensionN,
       fallbackNotch: rec.notch === 0 ? 0 : fallbackNotch(ctx, rec.notch, speed),
-      why: whyLine(ctx, r, rec, k, resistanceN),
+      why: whyLine(ctx, r, rec, k, resistanceN) + (protectionActs ? protectionLine(ctx, rec) : ""),
     };
   });
+}
+
+/** What the slip protection is expected to do in a step whose notch asks more than the rail may give. */
+function protectionLine(ctx: PlannerContext, rec: StepRecord): string {
+  const v = Math.max(0, rec.startSpeedMps);
+  const asks = notchEffortAllN(ctx, rec.notch, v);
+  const gives = notchDeliveredN(ctx, rec.notch, v);
+  const still = rec.startSpeedMps <= 0.01 ? " No wheelspin at a standstill: it burns the rail." : "";
+  return ` It asks ${kN(asks)}, more than a poor rail gives (${kN(gives)}): the slip protection may act (chance ${pct(rec.maxRisk)}), holding the effort there; expect slips, hold the notch and sand.${still}`;
 }
 
 function whyLine(ctx: PlannerContext, r: SearchResult, rec: StepRecord, k: number, resistanceN: number): string {
@@ -72,10 +96,14 @@ function whyLine(ctx: PlannerContext, r: SearchResult, rec: StepRecord, k: numbe
       const release = `the train brake releases along ${Math.round(ctx.consist.lengthM)} m in about ${Math.round(ctx.releaseS)} s`;
       const sand = c.conditions.sand && ctx.model.locoSpecs.some((s) => s.sanders) ? "; sand before the wheels turn" : "";
       if (rec.notch > 0) {
-        return `Grade pulls the train back with ${kN(ctx.rollBackPullN)} more than its brakes-off resistance holds: notch ${rec.notch} (${kN(rec.effortN)}) on the locomotive brake holds it while ${release}${sand}.`;
+        return `Grade pulls the train back with ${kN(ctx.rollBackPullN)} more than its brakes-off resistance holds: notch ${rec.notch} (${kN(notchDeliveredN(ctx, rec.notch, 0))}) with the locomotive brake (${kN(ctx.locoBrakeN)}) holds it while ${release}${sand}.`;
       }
-      if (ctx.runAwayPullN > 0) {
-        return `On this falling grade the released train runs forward with ${kN(ctx.runAwayPullN)} to spare: hold it on the brakes while ${release}; take no power yet${sand}.`;
+      if (ctx.startKind === "gravity") {
+        if (ctx.locoBrakeHolds) {
+          return `On this falling grade the released train pulls forward with ${kN(ctx.runAwayPullN)}; the locomotive brake holds up to ${kN(ctx.locoBrakeN)}, enough: keep it applied while ${release}. No power is needed: easing the locomotive brake off starts the train.`;
+        }
+        const share = Math.max(0, Math.min(100, Math.round((100 * ctx.runAwayPullN) / Math.max(1, ctx.trainBrakeN))));
+        return `On this falling grade the released train pulls forward with ${kN(ctx.runAwayPullN)}; the locomotive brake holds only ${kN(ctx.locoBrakeN)} of it, so it cannot hold the train. Keep the train brake applied and release it in stages where the brake allows it (graduated release): the train starts once about ${share} % of the train brake's ${kN(ctx.trainBrakeN)} is left. No power is needed.`;
       }
       return `No power on a standing train until its brakes are off: the locomotive brake holds while ${release}${sand}.`;
     }
@@ -86,12 +114,29 @@ function whyLine(ctx: PlannerContext, r: SearchResult, rec: StepRecord, k: numbe
       return `Notch ${rec.notch} gives ${kN(rec.effortN)} against ${kN(resistanceN)} to start the whole train at once: wagons break away one by one at walking pace and ${travel}; peak coupler ${kN(rec.peakTensionN)} of ${kN(allowance)} allowed.${tooFast}`;
     }
     case "build":
+      if (rec.notch === 0) return rollLine(ctx, rec);
       // The adhesion figure with its basis: the notch's effort at the speed where it uses the most adhesion.
       return `At ${km(rec.maxUseSpeedMps)} notch ${rec.notch} asks ${kN(rec.maxUseEffortN)}, ${pct(rec.maxUse)} of the median adhesion there (slip risk ${pct(rec.maxRisk)}); advance only once the current has settled${k === 2 ? ` — at least ${Math.round(r.buildDwellS ?? 3)} s per notch` : ""}; peak coupler ${kN(rec.peakTensionN)} of ${kN(allowance)} allowed.`;
     case "accelerate": {
-      const reason = r.adhesionCapped && rec.notch < ctx.maxNotch ? ` A higher notch would raise the slip risk above ${pct(ctx.riskCap)}.` : "";
+      if (rec.notch === 0) return rollLine(ctx, rec);
+      const reason = r.adhesionCapped && rec.notch < ctx.maxNotch ? " A higher notch would pass no more on a poor rail, or is not needed." : "";
       const to = c.target.kind === "speed" ? `to ${km(c.target.speedMps)}` : `until the train has cleared ${Math.round(c.target.distanceM)} m`;
       return `Hold notch ${rec.notch} ${to}: ${kN(rec.effortN)} against the running, grade and curve resistance accelerates the stretched train; slip risk ${pct(rec.maxRisk)}.${reason}`;
     }
   }
+}
+
+/** A step without power on a falling grade: gravity accelerates the train, the brakes control it. */
+function rollLine(ctx: PlannerContext, rec: StepRecord): string {
+  const c = ctx.c;
+  const duration = Math.max(1e-9, rec.endS - rec.startS);
+  const accel = Math.max(0, rec.endSpeedMps - Math.max(0, rec.startSpeedMps)) / duration;
+  const to = c.target.kind === "speed" ? `${km(c.target.speedMps)}` : `the ${Math.round(c.target.distanceM)} m target`;
+  const travel = rec.endTravelM;
+  const within = travel <= c.location.clearAheadM ? `within the ${Math.round(c.location.clearAheadM)} m clear ahead` : `beyond the ${Math.round(c.location.clearAheadM)} m clear ahead: have it under control before then`;
+  const control = `control the speed with the train brake${ctx.locoBrakeHolds ? "" : " (eased in stages)"} and the locomotive brake`;
+  if (rec.trigger !== "target") {
+    return `No power yet: gravity accelerates the train at about ${accel.toFixed(2)} m/s² to ${km(rec.endSpeedMps)} after about ${Math.round(travel)} m; ${control}. Beyond that it needs power to reach ${to}.`;
+  }
+  return `No power: gravity accelerates the train at about ${accel.toFixed(2)} m/s²; ${control}. It reaches ${to} after about ${Math.round(travel)} m of travel, ${within}; then hold the speed on the brakes.`;
 }

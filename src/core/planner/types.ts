@@ -2,11 +2,23 @@
  * What the start planner returns, in SI. The CLI turns it into the INTERFACE.md JSON; the app formats
  * it for display in the chosen units.
  */
-import type { SensitivityRow } from "./sensitivity.js";
 import type { StaticCheck } from "./staticCheck.js";
-import type { Reason, Verdict } from "./outcome.js";
+import type { LimitCheck, LimitName, Reason, StartKind, Verdict } from "./outcome.js";
 
 export type Phase = "prepare" | "stretch" | "build" | "accelerate";
+
+export type SensitivityInput = "mass" | "adhesion" | "grade" | "slack";
+
+/** One nudged input and what it does to the margin (sensitivity.ts). */
+export interface SensitivityRow {
+  input: SensitivityInput;
+  /** The nudge, in words with its unit. */
+  change: string;
+  marginBefore: number;
+  marginAfter: number;
+  /** Change in locomotive travel needed to stretch the train, m (slack matters there, not in the margin). */
+  stretchTravelChangeM: number;
+}
 
 /** What the driver watches for before moving to the next step. */
 export type Trigger = "time" | "moved" | "speed" | "target";
@@ -30,8 +42,10 @@ export interface PlanStep {
    * where `tractiveEffortN` and `speedMps` are taken.
    */
   adhesionUseAt: { speedMps: number; tractiveEffortN: number };
-  /** Probability that the rails give less than the demand, 0..1. */
+  /** Probability that the rails give less than the notch asks (the slip protection acts), 0..1. */
   slipRisk: number;
+  /** The notch asks more than the rail the plan assumes gives: the slip protection is expected to act. */
+  protectionActs: boolean;
   /** Largest coupler force (tension) during the step, N. */
   peakCouplerForceN: number;
   /** Notch to drop to if the wheels slip in this step. */
@@ -63,9 +77,20 @@ export interface PlanSeries {
 export interface PlanResult {
   verdict: Verdict;
   reasons: Reason[];
-  /** Smallest of the margins (available ÷ needed). */
+  /** The binding limit's margin (allowance ÷ demand, the smallest of all); starts ⇔ margin ≥ 1. */
   margin: number;
-  margins: StaticCheck["margins"];
+  /** The limit whose margin is printed. */
+  binding: LimitName;
+  /** Every limit with its demand, allowance, margin and level (decision.ts). */
+  limits: LimitCheck[];
+  /** The smallest margin of each reason (99 when it is not in question). */
+  margins: { adhesion: number; power: number; coupler: number; distance: number; brake: number };
+  /** Power start, or a start gravity makes once the brakes are eased (falling grade). */
+  startKind: StartKind;
+  /** Quantile of the rail condition the shown plan assumes (the threshold, or the marginal bound). */
+  planQuantile: number;
+  /** Why the verdict is what it is and what would change it, in plain lines (empty when it starts). */
+  advice: string[];
   static: StaticCheck;
   steps: PlanStep[];
   peakCouplerForceN: number;
@@ -76,11 +101,19 @@ export interface PlanResult {
   couplerCompressionPeaksN: Float64Array;
   /** Seconds from taking power to reaching the target; null when it is not reached. */
   timeToTargetS: number | null;
+  /** Largest trailing mass (this train's wagons) that starts; NaN when not searched. */
   maxStartableMassKg: number;
+  /** Largest trailing mass that is at least marginal; NaN when not searched. */
+  largestMarginalMassKg: number;
+  /** The masses' search ceiling (250 t a wagon): a largest mass equal to it means no limit below it. */
+  massSearchCeilingKg: number;
   slipGuidance: SlipGuidance;
   cautions: string[];
   series: PlanSeries;
-  /** The verifying re-run at pessimistic adhesion; null when there is no plan to verify or it was skipped. */
+  /**
+   * The plan's notch timing re-run on the median rail (a better rail than the plan assumes passes more of
+   * each notch into the couplers); null when there is no plan to verify or it was skipped.
+   */
   verification: {
     adhesionQuantile: number;
     slipped: boolean;
@@ -101,8 +134,6 @@ export interface PlanOptions {
   shouldStop?: () => boolean;
   /** Skip the largest-startable-mass search (used inside that search and by batch screens). */
   skipMassSearch?: boolean;
-  /** Skip the verifying re-run at pessimistic adhesion. */
+  /** Skip the verifying re-run on the median rail. */
   skipVerification?: boolean;
-  /** Only the verdict is wanted: follow the acceleration with the one-mass model, no risk relaxing. */
-  verdictOnly?: boolean;
 }

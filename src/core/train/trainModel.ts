@@ -3,6 +3,7 @@
  * parameters flattened into Float64Arrays so the inner loop reads memory in order and allocates nothing.
  */
 import { adhesionQuantile, standstillMedian } from "../physics/adhesion.js";
+import { locoBrakeHoldingN, trainBrakeHoldingN } from "../physics/brakes.js";
 import { GRAVITY_MPS2 } from "../physics/constants.js";
 import { buildConsist, type Consist } from "./consist.js";
 import { PRELOAD_RAMP_M, type CouplingSpec } from "../physics/coupling.js";
@@ -63,7 +64,10 @@ export interface TrainModel {
   /** Time constants of the tractive-effort build-up and fall, s. */
   effortRiseS: number;
   effortFallS: number;
-  /** After a slip the protection cuts effort to this fraction of what the rails held, then reapplies. */
+  /**
+   * When the effort asked for exceeds what the rails give, the wheel-slip protection holds the effort at
+   * this fraction of what the rails give (1: it trims the excitation to hold the effort at adhesion).
+   */
   slipCutFraction: number;
 
   /** Brake holding capacity when fully applied, N. */
@@ -88,16 +92,26 @@ export interface ModelOptions {
   slackState?: SlackState;
   effortRiseS?: number;
   effortFallS?: number;
+  /**
+   * Train brake released in stages (graduated release, where the brake allows it): every vehicle's brake
+   * eases together over the release time instead of a release running from the head to the rear.
+   */
+  graduatedRelease?: boolean;
 }
 
 /** Effort build-up time constant: current settles within ≈ 3τ (common practice: ≥ 2–3 s between notches) [M]. */
 export const DEFAULT_EFFORT_RISE_S = 1.5;
 export const DEFAULT_EFFORT_FALL_S = 0.5;
-/** Share of the slipping effort the protection keeps before reapplying [M]. */
-export const DEFAULT_SLIP_CUT = 0.7;
-/** Brake holding capacity as a fraction of weight: train brake 10 %, locomotive brake 15 % [M]. */
-export const TRAIN_BRAKE_FRACTION = 0.1;
-export const LOCO_BRAKE_FRACTION = 0.15;
+/**
+ * Share of what the rails give that the wheel-slip protection holds the effort at when the notch asks for
+ * more. The protection sands, cuts the excitation sharply and reapplies it, levelling off near the power at
+ * which the slip began (PRACTICE.md "Wheel slip" [S: builder's maintenance manual]): on average the effort
+ * stays close to what the rails give. We take it as exactly that; the small loss of each cycle is far inside
+ * the scatter of adhesion itself, which the plan covers by judging the start at a pessimistic quantile [M].
+ */
+export const DEFAULT_SLIP_CUT = 1;
+/** Brake holding forces (train 10 %, locomotive 15 % of weight by default): `physics/brakes.ts` [M]. */
+export { TRAIN_BRAKE_FRACTION, DEFAULT_LOCO_BRAKE_FRACTION as LOCO_BRAKE_FRACTION } from "../physics/brakes.js";
 /** A vehicle's brake releases over this time once the release reaches it, s [M]. */
 export const BRAKE_RELEASE_RAMP_S = 8;
 
@@ -122,6 +136,7 @@ export function modelFromCase(c: StartCase, opts: ModelOptions = {}): TrainModel
     },
     effortRiseS: opts.effortRiseS ?? DEFAULT_EFFORT_RISE_S,
     effortFallS: opts.effortFallS ?? DEFAULT_EFFORT_FALL_S,
+    graduatedRelease: opts.graduatedRelease ?? false,
   });
 }
 
@@ -129,6 +144,8 @@ export interface ConsistModelOptions {
   muFor: (spec: LocomotiveSpec) => number;
   effortRiseS: number;
   effortFallS: number;
+  /** See `ModelOptions.graduatedRelease`. */
+  graduatedRelease?: boolean;
 }
 
 /** Build the model from a placed consist, its initial slack signs and the track. */
@@ -178,7 +195,7 @@ export function modelFromConsist(consist: Consist, slack: Int8Array, track: Trac
     trainBrakeN: f(n),
     locoBrakeN: f(n),
     brakeReleaseDelayS: f(n),
-    brakeReleaseRampS: BRAKE_RELEASE_RAMP_S,
+    brakeReleaseRampS: o.graduatedRelease ? trainBrakeReleaseS(consist.lengthM) : BRAKE_RELEASE_RAMP_S,
     segStartM: f(track.segments.length),
     segEndM: f(track.segments.length),
     segSin: f(track.segments.length),
@@ -196,11 +213,11 @@ export function modelFromConsist(consist: Consist, slack: Int8Array, track: Trac
     m.breakawayExcessN[i] = Math.max(0, v.breakawayN - v.davis.aN);
     m.chainage0M[i] = v.centreChainageM;
     m.lengthM[i] = v.lengthM;
-    const weight = v.massKg * GRAVITY_MPS2;
-    if (v.kind === "locomotive") m.locoBrakeN[i] = LOCO_BRAKE_FRACTION * weight;
-    else m.trainBrakeN[i] = TRAIN_BRAKE_FRACTION * weight;
-    // The release travels from the head: 0 s at the front, `releaseS` at the rear.
-    m.brakeReleaseDelayS[i] = consist.lengthM > 0 ? ((frontM - v.centreChainageM) / consist.lengthM) * (releaseS - BRAKE_RELEASE_RAMP_S) : 0;
+    if (v.kind === "locomotive") m.locoBrakeN[i] = locoBrakeHoldingN(v.loco!);
+    else m.trainBrakeN[i] = trainBrakeHoldingN(v.massKg);
+    // The release travels from the head: 0 s at the front, `releaseS` at the rear. Released in stages, every
+    // brake eases together over the whole release time.
+    m.brakeReleaseDelayS[i] = o.graduatedRelease || consist.lengthM <= 0 ? 0 : ((frontM - v.centreChainageM) / consist.lengthM) * (releaseS - BRAKE_RELEASE_RAMP_S);
   });
   consist.couplings.forEach((cp: CouplingSpec, j) => {
     m.halfSlackM[j] = cp.freeSlackM / 2;

@@ -47,6 +47,14 @@ export interface Settings {
   slipRiskThreshold: number;
   /** Locomotive speed to keep while the slack comes out, m/s (common practice: about 1 mph). */
   stretchSpeedMps: number;
+  /**
+   * Highest slip risk of the needed effort that still counts as "marginal" rather than "needs assistance"
+   * (probability, at least the threshold): a start that only works if the rail is no worse than this
+   * quantile of its condition is marginal.
+   */
+  marginalSlipRisk: number;
+  /** Most parts a train may be divided into when dividing is offered (a practical number of trips). */
+  maxDividedParts: number;
 }
 
 export const DEFAULT_SETTINGS: Settings = {
@@ -55,6 +63,12 @@ export const DEFAULT_SETTINGS: Settings = {
   slipRiskThreshold: 0.1,
   // Common practice: about 1 mph until the whole train moves (NAVFAC P-301).
   stretchSpeedMps: 0.44704,
+  // [M] One start in four failing is as far as "marginal" goes: beyond that the train needs help. A briefing
+  // can cover a thin margin; it cannot cover odds worse than that.
+  marginalSlipRisk: 0.25,
+  // Common practice: dividing ("doubling") means coming back for the rest; more than three trips is no
+  // longer a practical way to move the train.
+  maxDividedParts: 3,
 };
 
 export interface StartCase {

@@ -38,7 +38,7 @@ const split: AssistanceOptionData = {
 
 function answer(p: Partial<AssistanceAnswer> = {}): AssistanceAnswer {
   return {
-    base: { verdict: "needs-assistance", reasons: ["adhesion"], margin: 0.93, margins: { adhesion: 0.93, power: 2, coupler: 3, distance: 4 }, peakCouplerForceN: 500_000, timeToTargetS: null },
+    base: { verdict: "needs-assistance", reasons: ["adhesion"], margin: 0.93, binding: "adhesion", startKind: "power", margins: { brake: 99, adhesion: 0.93, power: 2, coupler: 3, distance: 4 }, peakCouplerForceN: 500_000, timeToTargetS: null },
     needed: true,
     helper: { id: "illustrative-6axle-3000", label: "Illustrative helper unit" },
     options: [rear, split],
@@ -89,7 +89,7 @@ describe("Assistance check", () => {
   });
 
   it("says plainly when the train starts already, with no cards", async () => {
-    const starts = answer({ needed: false, options: [], rejected: [], base: { verdict: "starts", reasons: [], margin: 1.74, margins: { adhesion: 1.74, power: 3, coupler: 2, distance: 4 }, peakCouplerForceN: 247_000, timeToTargetS: 202 } });
+    const starts = answer({ needed: false, options: [], rejected: [], base: { verdict: "starts", reasons: [], margin: 1.74, binding: "adhesion", startKind: "power", margins: { brake: 99, adhesion: 1.74, power: 3, coupler: 2, distance: 4 }, peakCouplerForceN: 247_000, timeToTargetS: 202 } });
     renderWithApp(() => <AssistanceCheck />, { pool: fakePool({ assistance: () => ok(starts), conditionMargins: () => ok(marginRows()) }) });
     await screen.findByText("Starts already: no assistance needed");
     expect(cards()).toHaveLength(0);
@@ -99,7 +99,7 @@ describe("Assistance check", () => {
   it("offers dividing the train when no option works, with what ruled the placements out", async () => {
     const none = answer({
       options: [],
-      divide: { wagons: 8, trailingMassKg: 293_000, lengthM: 120, remainingWagons: 22, remainingMassKg: 807_000, trips: 4, verdict: "starts", peakCouplerForceN: 180_000, timeToTargetS: 60 },
+      divide: { wagons: 8, trailingMassKg: 293_000, lengthM: 120, remainingWagons: 22, remainingMassKg: 807_000, trips: 4, maxParts: 3, verdict: "starts", peakCouplerForceN: 180_000, timeToTargetS: 60 },
     });
     renderWithApp(() => <AssistanceCheck />, { pool: fakePool({ assistance: () => ok(none), conditionMargins: () => ok(marginRows()) }) });
     await screen.findByText(/No option with one or two more units makes this train start/);
@@ -110,7 +110,7 @@ describe("Assistance check", () => {
   });
 
   it("names dividing in two as it is, without calling it impractical", () => {
-    const line = divideLine({ wagons: 15, trailingMassKg: 1_300_000, lengthM: 210, remainingWagons: 13, remainingMassKg: 1_100_000, trips: 2, verdict: "starts", peakCouplerForceN: 1, timeToTargetS: 1 }, "us");
+    const line = divideLine({ wagons: 15, trailingMassKg: 1_300_000, lengthM: 210, remainingWagons: 13, remainingMassKg: 1_100_000, trips: 2, maxParts: 3, verdict: "starts", peakCouplerForceN: 1, timeToTargetS: 1 }, "us");
     expect(line).toBe("Divide the train: take the first 15 wagons (1,433 short tons), then the remaining 13 wagons (1,213 short tons) — about 2 trips.");
   });
 

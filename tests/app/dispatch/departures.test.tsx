@@ -18,8 +18,8 @@ const demoDay = JSON.parse(read("departures/demo-day.json")) as Array<Record<str
 
 /** A fixed answer by rail condition (the fake worker's "physics"). */
 function answerFor(c: StartCase): CheckAnswer {
-  const base = { reasons: ["adhesion" as const], margins: { adhesion: 1, power: 2, coupler: 2, distance: 3 }, peakCouplerForceN: 400_000, timeToTargetS: 80, helper: { id: "illustrative-6axle-3000", label: "Illustrative helper" }, searchCapped: false };
-  const divide = { wagons: 8, trailingMassKg: 293_400, lengthM: 110, remainingWagons: 20, remainingMassKg: 806_600, trips: 4, verdict: "starts" as const, peakCouplerForceN: 150_000, timeToTargetS: 50 };
+  const base = { reasons: ["adhesion" as const], margins: { brake: 99, adhesion: 1, power: 2, coupler: 2, distance: 3 }, peakCouplerForceN: 400_000, timeToTargetS: 80, helper: { id: "illustrative-6axle-3000", label: "Illustrative helper" }, searchCapped: false };
+  const divide = { wagons: 8, trailingMassKg: 293_400, lengthM: 110, remainingWagons: 20, remainingMassKg: 806_600, trips: 4, maxParts: 3, verdict: "starts" as const, peakCouplerForceN: 150_000, timeToTargetS: 50 };
   const option = (added: CheckAnswer["assistance"] extends infer T ? (T extends { added: infer A } ? A : never) : never) => ({
     added,
     units: added.reduce((s, a) => s + a.count, 0),
@@ -36,15 +36,15 @@ function answerFor(c: StartCase): CheckAnswer {
   });
   switch (c.conditions.rail) {
     case "leaves":
-      return { ...base, verdict: "needs-assistance", margin: 0.44, maxStartableMassKg: 0, assistance: null, divide };
+      return { ...base, verdict: "needs-assistance", margin: 0.44, binding: "adhesion", startKind: "power", maxStartableMassKg: 0, largestMarginalMassKg: 0, assistance: null, divide };
     case "wet":
-      return { ...base, verdict: "needs-assistance", margin: 0.98, maxStartableMassKg: 460_700, assistance: option([{ count: 1, position: { afterWagon: 9 } }, { count: 1, position: "rear" }]), divide: null };
+      return { ...base, verdict: "needs-assistance", margin: 0.98, binding: "adhesion", startKind: "power", maxStartableMassKg: 460_700, largestMarginalMassKg: 460_700, assistance: option([{ count: 1, position: { afterWagon: 9 } }, { count: 1, position: "rear" }]), divide: null };
     case "frost":
-      return { ...base, verdict: "marginal", margin: 0.88, maxStartableMassKg: 78_900, assistance: null, divide };
+      return { ...base, verdict: "marginal", margin: 0.88, binding: "adhesion", startKind: "power", maxStartableMassKg: 78_900, largestMarginalMassKg: 78_900, assistance: null, divide };
     case "damp":
-      return { ...base, verdict: "marginal", margin: 1.07, maxStartableMassKg: 709_200, assistance: option([{ count: 1, position: "rear" }]), divide: null };
+      return { ...base, verdict: "marginal", margin: 1.07, binding: "adhesion", startKind: "power", maxStartableMassKg: 709_200, largestMarginalMassKg: 709_200, assistance: option([{ count: 1, position: "rear" }]), divide: null };
     default:
-      return { ...base, reasons: [], verdict: "starts", margin: 1.74, maxStartableMassKg: 1_466_300, assistance: null, divide: null };
+      return { ...base, reasons: [], verdict: "starts", margin: 1.74, binding: "adhesion", startKind: "power", maxStartableMassKg: 1_466_300, largestMarginalMassKg: 1_466_300, assistance: null, divide: null };
   }
 }
 
@@ -157,8 +157,8 @@ describe("Departures", () => {
     const lines = saved[0]!.trimEnd().split("\n");
     expect(lines[0]).toBe(CHECK_CSV_HEADER.join(","));
     expect(lines.slice(1).map((l) => l.split(",")[0])).toEqual(["d-dry", "d-wet", "d-broken", "d-leaves", "d-damp", "d-frost"]);
-    expect(lines[2]).toBe('d-wet,,1,wet,false,1400,needs-assistance,adhesion,0.98,460,400,80,"2 × illustrative-6axle-3000 (1 after wagon 9, 1 at the rear)",starts,301.2,,,');
-    expect(lines[4]).toBe("d-leaves,,3,leaves,false,1400,needs-assistance,adhesion,0.44,0,400,80,,,,8,293,");
+    expect(lines[2]).toBe('d-wet,,1,wet,false,1400,needs-assistance,adhesion,0.98,460,400,80,"2 × illustrative-6axle-3000 (1 after wagon 9, 1 at the rear)",starts,301.2,,,,adhesion,460');
+    expect(lines[4]).toBe("d-leaves,,3,leaves,false,1400,needs-assistance,adhesion,0.44,0,400,80,,,,8,293,,adhesion,0");
     expect(lines[3]).toMatch(/^d-broken,,2,,,,,,,,,,,,,,,\[2\] \(d-broken\): train\.trailingMass_t: .*$/);
   });
 

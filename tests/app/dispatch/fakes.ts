@@ -72,7 +72,7 @@ export function marginRows(): ConditionMargin[] {
       const m = base[rail]! * (sand ? 1.3 : 1);
       const verdict = m >= 1.2 ? "starts" : m >= 1 ? "marginal" : "needs-assistance";
       const reasons = verdict === "starts" ? [] : (["adhesion"] as ConditionMargin["reasons"]);
-      return { rail, sand, verdict, reasons, margin: m, margins: { adhesion: m, power: 3, coupler: 2, distance: 5 }, limitedBy: "adhesion" };
+      return { rail, sand, verdict, reasons, margin: m, margins: { brake: 99, adhesion: m, power: 3, coupler: 2, distance: 5 }, limitedBy: "adhesion", binding: "adhesion" };
     }),
   );
 }

@@ -15,7 +15,7 @@ import { Icon } from "../../components/Icon.js";
 import { REASON_LINE, VerdictBanner, VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
 import { duration, localiseText, margin, show, type UnitSystem } from "../../format.js";
 import { Cautions } from "../shared/Cautions.js";
-import { divideLine, optionHeadline, placeWords, REASON_SHORT } from "../shared/words.js";
+import { divideLine, limitWord, optionHeadline, placeWords, REASON_SHORT } from "../shared/words.js";
 import type { CheckStatus } from "./createAssistanceCheck.js";
 import { marginChart, MARGIN_AXIS_TOP } from "./marginChart.js";
 import { RailSandTable } from "../shared/RailSandTable.js";
@@ -115,7 +115,7 @@ function Options(props: { answer: AssistanceAnswer; units: UnitSystem; canTry: b
   return (
     <>
       <Show when={a().needed}>
-        <VerdictBanner verdict={a().base.verdict} reasons={a().base.reasons} detail={`As it stands: smallest margin ${margin(a().base.margin)}`} compact />
+        <VerdictBanner verdict={a().base.verdict} reasons={a().base.reasons} detail={`As it stands: margin ${margin(a().base.margin)} (${limitWord(a().base.binding)})`} compact />
       </Show>
       <Show when={a().needed && a().base.reasons.length > 0}>
         <ul class="reasons">
@@ -150,7 +150,7 @@ function StartsAlready(props: { answer: AssistanceAnswer; units: UnitSystem }): 
         <VerdictIcon verdict="starts" size={32} /> Starts already: no assistance needed
       </h2>
       <p>
-        With its own locomotives this train is expected to start here in these conditions (smallest margin {margin(b().margin)}, peak coupler force{" "}
+        With its own locomotives this train is expected to start here in these conditions (margin {margin(b().margin)} ({limitWord(b().binding)}), peak coupler force{" "}
         {show("force", b().peakCouplerForceN, props.units)}
         {b().timeToTargetS !== null ? `, target reached after ${duration(b().timeToTargetS!)}` : ""}). The margins per rail condition show how much worse the rail can get before it no longer does.
       </p>

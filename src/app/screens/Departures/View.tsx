@@ -11,7 +11,7 @@ import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
 import { margin, show, showAtMost, type UnitSystem } from "../../format.js";
 import { Cautions } from "../shared/Cautions.js";
-import { divideLine, optionHeadline, RAIL_WORD, REASON_SHORT } from "../shared/words.js";
+import { divideLine, limitWord, optionHeadline, RAIL_WORD, REASON_SHORT } from "../shared/words.js";
 import type { RunState } from "./createDeparturesRun.js";
 import type { DepartureRow, DeparturesSummary } from "./rows.js";
 
@@ -311,7 +311,7 @@ function Row(props: { row: DepartureRow; units: UnitSystem; onOpen?: (row: Depar
       </td>
       <td data-label="Why" class="why">{a() ? (a()!.reasons.length > 0 ? a()!.reasons.map((r) => REASON_SHORT[r]).join(", ") : "—") : ""}</td>
       <td data-label="Margin" data-short="margin" class="num">
-        {a() ? margin(a()!.margin) : ""}
+        {a() ? `${margin(a()!.margin)} (${limitWord(a()!.binding)})` : ""}
       </td>
       <td data-label="Largest mass that starts" data-short="largest" class="num">
         {a() ? (a()!.maxStartableMassKg >= 1000 ? showAtMost("mass", a()!.maxStartableMassKg, props.units) : "none") : ""}

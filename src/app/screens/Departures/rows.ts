@@ -89,6 +89,8 @@ export function departuresCsv(rows: readonly DepartureRow[]): string {
         div?.wagons,
         div ? Math.floor(div.trailingMassKg / 1000) : undefined,
         x.error,
+        a?.binding,
+        a ? Math.floor(a.largestMarginalMassKg / 1000) : undefined,
       ];
     });
   return toCsv(CHECK_CSV_HEADER, lines);

@@ -35,8 +35,11 @@ export function SettingsView(props: SettingsViewProps): JSX.Element {
   // What the user typed, kept even when it is out of range (then shown with the rule, and not applied).
   const [factor, setFactor] = createSignal(s().couplerSafetyFactor);
   const [threshold, setThreshold] = createSignal(s().slipRiskThreshold * 100);
+  const [bound, setBound] = createSignal(s().marginalSlipRisk * 100);
   createEffect(() => setFactor(s().couplerSafetyFactor));
   createEffect(() => setThreshold(s().slipRiskThreshold * 100));
+  createEffect(() => setBound(s().marginalSlipRisk * 100));
+  const bb = { min: SAFETY_BOUNDS.marginalSlipRisk.min * 100, max: SAFETY_BOUNDS.marginalSlipRisk.max * 100 };
   const fb = SAFETY_BOUNDS.couplerSafetyFactor;
   const tb = { min: SAFETY_BOUNDS.slipRiskThreshold.min * 100, max: SAFETY_BOUNDS.slipRiskThreshold.max * 100 };
   return (
@@ -109,14 +112,38 @@ export function SettingsView(props: SettingsViewProps): JSX.Element {
           issue={outOfRange(threshold(), tb, " %")}
           hint={
             <>
-              The highest chance of wheel slip accepted in any step. Default {percent(DEFAULT_APP_SETTINGS.slipRiskThreshold, 0)}: real adhesion scatters, and
-              planning to the typical (median) value would mean slipping about half the time; planning to the value the rails beat nine times in ten keeps
-              slips rare without giving up too much tractive effort.
+              The highest chance that the rails give less than the start needs, for "starts". Default {percent(DEFAULT_APP_SETTINGS.slipRiskThreshold, 0)}: real
+              adhesion scatters, and planning to the typical (median) value would mean slipping about half the time; planning to the value the rails beat
+              nine times in ten keeps slips rare without giving up too much tractive effort.
+            </>
+          }
+        />
+        <QuantityField
+          name="marginalSlipRisk"
+          label="Marginal up to"
+          value={bound()}
+          onValue={(v) => {
+            setBound(v);
+            if (!outOfRange(v, bb)) props.onChange({ marginalSlipRisk: v / 100 });
+          }}
+          units={s().units}
+          unit="%"
+          decimals={0}
+          step={1}
+          min={bb.min}
+          max={bb.max}
+          issue={outOfRange(bound(), bb, " %")}
+          hint={
+            <>
+              A start that needs a better rail than the threshold assumes is "marginal" while the chance that the rails give less stays below this, and
+              "needs assistance" beyond it (never below the threshold). Default {percent(DEFAULT_APP_SETTINGS.marginalSlipRisk, 0)}: one start in four failing is as
+              far as a careful briefing can carry; beyond that the train needs help.
             </>
           }
         />
         <button type="button" class="button" onClick={() => props.onResetSafety()}>
-          Back to the defaults ({DEFAULT_APP_SETTINGS.couplerSafetyFactor} and {percent(DEFAULT_APP_SETTINGS.slipRiskThreshold, 0)})
+          Back to the defaults ({DEFAULT_APP_SETTINGS.couplerSafetyFactor}, {percent(DEFAULT_APP_SETTINGS.slipRiskThreshold, 0)} and{" "}
+          {percent(DEFAULT_APP_SETTINGS.marginalSlipRisk, 0)})
         </button>
       </section>
 

@@ -6,7 +6,7 @@
  */
 import { createEffect, createMemo, createSignal, For, Index, onCleanup, Show, type JSX } from "solid-js";
 import type { PlanResult } from "../../../core/planner/types.js";
-import type { Reason } from "../../../core/planner/outcome.js";
+import { LIMIT_WORDS, type Reason } from "../../../core/planner/outcome.js";
 import type { StartCase } from "../../../core/train/types.js";
 import { couplerChart } from "../../charts/couplerAlong.js";
 import { effortChart } from "../../charts/effortSpeed.js";
@@ -44,18 +44,14 @@ export interface ResultViewProps {
   onRetry: () => void;
 }
 
-const MARGIN_WORD: Record<Reason, string> = { adhesion: "Adhesion", power: "Power", coupler: "Coupler", distance: "Distance" };
+const MARGIN_WORD: Record<Reason, string> = { adhesion: "Adhesion", power: "Power", coupler: "Coupler", distance: "Distance", brake: "Brake holding" };
 
 /**
- * The limit that binds, in words: the one the plan names when it carries one (`binding`), else the
- * smallest of its margins.
+ * The limit that binds, in words: the one the plan names (`binding`, decision.ts), whose margin is the one
+ * shown.
  */
 export function bindingLimit(res: PlanResult): string {
-  const named = (res as { binding?: unknown }).binding;
-  if (typeof named === "string" && named !== "") return named.replace(/-/g, " ");
-  const m = res.margins;
-  const keys: Reason[] = ["adhesion", "power", "coupler", "distance"];
-  return MARGIN_WORD[keys.reduce((a, b) => ((m[b] ?? Infinity) < (m[a] ?? Infinity) ? b : a))].toLowerCase();
+  return LIMIT_WORDS[res.binding];
 }
 
 /** The verdict in one line, kept in view at the top of the plan's pane. */
@@ -171,11 +167,21 @@ export function ResultView(props: ResultViewProps): JSX.Element {
         {(res) => (
           <>
             <div ref={setBanner}>
-              <VerdictBanner verdict={res().verdict} reasons={res().reasons} stale={!props.current} detail={`Margin ${margin(res().margin)}, limited by ${bindingLimit(res())}`} />
+              <VerdictBanner
+                verdict={res().verdict}
+                reasons={res().reasons}
+                stale={!props.current}
+                detail={`Margin ${margin(res().margin)}, limited by ${bindingLimit(res())}${res().startKind === "gravity" ? " — a brake-controlled start: gravity starts the train" : ""}`}
+              />
             </div>
             <Show when={res().reasons.length > 0}>
               <ul class="reasons">
                 <For each={res().reasons}>{(reason) => <li>{REASON_LINE[reason]}</li>}</For>
+              </ul>
+            </Show>
+            <Show when={res().advice.length > 0}>
+              <ul class="reasons advice" data-advice>
+                <For each={res().advice}>{(a) => <li>{localiseText(a, props.units)}</li>}</For>
               </ul>
             </Show>
 
@@ -213,11 +219,11 @@ export function ResultView(props: ResultViewProps): JSX.Element {
             </section>
 
             <section class="panel" aria-labelledby="margins-h">
-              <h2 id="margins-h">Margins (available ÷ needed)</h2>
+              <h2 id="margins-h">Margins (allowance ÷ demand)</h2>
               <ul class="margins">
-                <For each={["adhesion", "power", "coupler", "distance"] as Reason[]}>
+                <For each={(["adhesion", "power", "coupler", "distance", "brake"] as Reason[]).filter((k) => k !== "brake" || res().margins.brake < 99)}>
                   {(k) => (
-                    <li classList={{ limiting: res().reasons.includes(k) }}>
+                    <li classList={{ limiting: res().limits.find((l) => l.name === res().binding)?.reason === k }}>
                       <span class="margin-name">{MARGIN_WORD[k]}</span>
                       <span class="margin-bar" aria-hidden="true">
                         <span style={{ width: `${Math.min(100, (res().margins[k] / 2) * 100)}%` }} classList={{ under: res().margins[k] < 1 }} />
@@ -266,11 +272,16 @@ export function ResultView(props: ResultViewProps): JSX.Element {
                 </div>
                 <div>
                   <dt>Largest trailing mass that starts</dt>
-                  <dd>{Number.isFinite(res().maxStartableMassKg) ? showAtMost("mass", res().maxStartableMassKg, props.units) : props.massPending ? "working it out…" : "–"}</dd>
+                  <dd>
+                    {Number.isFinite(res().maxStartableMassKg) ? showAtMost("mass", res().maxStartableMassKg, props.units) : props.massPending ? "working it out…" : "–"}
+                    <Show when={Number.isFinite(res().largestMarginalMassKg) && res().largestMarginalMassKg > res().maxStartableMassKg}>
+                      <span class="muted"> (at least marginal up to {showAtMost("mass", res().largestMarginalMassKg, props.units)})</span>
+                    </Show>
+                  </dd>
                 </div>
                 <div>
                   <dt>Time to the target</dt>
-                  <dd>{res().timeToTargetS === null ? "not computed" : duration(res().timeToTargetS!)}</dd>
+                  <dd>{res().timeToTargetS === null || res().steps.length === 0 ? "–" : duration(res().timeToTargetS!)}</dd>
                 </div>
               </dl>
             </section>

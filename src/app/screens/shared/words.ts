@@ -4,13 +4,18 @@
  */
 import type { LocoPosition } from "../../../core/train/types.js";
 import type { RailCondition } from "../../../core/physics/types.js";
-import type { Reason } from "../../../core/planner/outcome.js";
+import { LIMIT_WORDS, type LimitName, type Reason } from "../../../core/planner/outcome.js";
 import type { AssistanceOptionData, DivideData } from "../../../worker/protocol.js";
 import { show, type UnitSystem } from "../../format.js";
 
 export const RAIL_WORD: Record<RailCondition, string> = { dry: "Dry", damp: "Damp", wet: "Wet", frost: "Frost", leaves: "Leaves", greasy: "Greasy" };
 
-export const REASON_SHORT: Record<Reason, string> = { adhesion: "adhesion", power: "power", coupler: "coupler", distance: "distance" };
+export const REASON_SHORT: Record<Reason, string> = { adhesion: "adhesion", power: "power", coupler: "coupler", distance: "distance", brake: "brake" };
+
+/** The binding limit in words, for beside a margin: "(adhesion)", "(coupler tension)". */
+export function limitWord(binding: LimitName | undefined): string {
+  return binding ? LIMIT_WORDS[binding] : "";
+}
 
 /** "at the head", "at the rear", "after wagon 14". */
 export function placeWords(p: LocoPosition): string {
@@ -33,7 +38,7 @@ export function optionLineText(o: Pick<AssistanceOptionData, "added">, profileId
   return `${n} × ${profileId} (${o.added.map((a) => `${a.count} ${placeWords(a.position)}`).join(", ")})`;
 }
 
-/** More trips than this and dividing is named as hardly practical (a guide for the reader, not a rule). */
+/** More trips than this and dividing is named as hardly practical (the core offers no more than the case's maxDividedParts). */
 export const PRACTICAL_TRIPS = 3;
 
 /** The divided train in a line, in the user's units. */

@@ -1,0 +1,261 @@
+/**
+ * How Taut decides: the one definition of the verdict, its margin and the limit that binds. Every answer a
+ * dispatcher or a driver reads — the plan, the departures check, the load table, the margins per rail
+ * condition, the assistance and the app's screens — comes from `judge` here, so they cannot disagree.
+ *
+ * Each limit is a named check of a demand against an allowance; its margin is allowance ÷ demand and it is
+ * "within" exactly when the margin is at least 1. A limit that is not within may still be "soft": exceeded,
+ * but inside a stated band (the coupler's working limit itself rather than limit ÷ safety factor; the rail
+ * at the marginal slip-risk bound rather than at the threshold; ...). The limits:
+ *
+ *  - adhesion: what the rails pass of the units' full-notch effort, with the rail at the slip-risk threshold's
+ *    quantile of its condition (a pessimistic rail), against the effort the start needs along the slowest
+ *    acceptable start (need.ts). The wheel-slip protection holds any notch asking more at what the rails give,
+ *    so the effort the plan *needs* is what counts, not what a notch asks. Band: the same at the marginal bound.
+ *  - power: the units' full-notch effort (current limit and power), with 10 % in hand, against the same need.
+ *    Band: without the 10 %.
+ *  - brake holding: what holds the train while its brake releases — on a rising grade the locomotive brake
+ *    and a holding notch against the pull back; on a falling grade the locomotive brake and the train brake
+ *    (eased in stages) against the pull forward — with 10 % in hand. Band: without it.
+ *  - coupler tension and compression: the peaks of the planned start in the full dynamics against the
+ *    working limit ÷ safety factor. Band: up to the working limit.
+ *  - distance: locomotive travel until the plan is at its running notch against the distance clear ahead.
+ *    Band: the stretch (every vehicle moving) within it.
+ *  - time to target: the planned start reaches its target within the plan's time cap. No band. Counted when
+ *    adhesion and power are within (otherwise they, not the time, are what fails).
+ *
+ * The verdict: "starts" when the plan made on the rail at the threshold keeps every limit within;
+ * "marginal" when a plan keeps every limit within its band and reaches its target — one made on the rail at
+ * the marginal bound (shown when it does), or the threshold's; "needs assistance" otherwise. The margin printed is the
+ * smallest margin of the threshold's plan, named with its limit, so "starts" ⇔ margin ≥ 1 by construction.
+ */
+import { MAX_MARGIN, motorEffortN, needPath, pathMargin, railEffortN, rigidResistanceN, unitMuAt, type NeedPath, type PathMargin } from "./need.js";
+import { HOLD_RESERVE, marginalBound, plannerContext, type PlannerContext } from "./context.js";
+import { ACCELERATE_MAX_S, searchPlan, type SearchOptions, type SearchResult } from "./search.js";
+import { POWER_RESERVE } from "./staticCheck.js";
+import { LIMIT_REASON, type LimitCheck, type LimitLevel, type LimitName, type Reason, type StartKind, type Verdict } from "./outcome.js";
+
+export { LIMIT_REASON, LIMIT_WORDS, type LimitCheck, type LimitLevel, type LimitName } from "./outcome.js";
+import type { StartCase } from "../train/types.js";
+
+const ratio = (allowance: number, demand: number): number => (demand <= 0 ? MAX_MARGIN : Math.min(MAX_MARGIN, allowance / demand));
+
+/** A limit check: margin and level follow from demand, allowance and band, nothing else. */
+export function limitCheck(name: LimitName, unit: LimitCheck["unit"], demand: number, allowance: number, band: LimitCheck["band"], what: string): LimitCheck {
+  const margin = ratio(allowance, demand);
+  const level: LimitLevel = margin >= 1 ? "within" : band !== null && band.allowance >= band.demand ? "soft" : "over";
+  return { name, reason: LIMIT_REASON[name], unit, demand, allowance, margin, level, band, what };
+}
+
+/** The limit with the smallest margin (ties: the first listed). */
+export function bindingLimit(limits: readonly LimitCheck[]): LimitCheck {
+  return limits.reduce((b, l) => (l.margin < b.margin ? l : b));
+}
+
+const allWithin = (ls: readonly LimitCheck[]) => ls.every((l) => l.level === "within");
+const noneOver = (ls: readonly LimitCheck[]) => ls.every((l) => l.level !== "over");
+
+// ---------------------------------------------------------------------------------------------- quasi-static
+
+/** The limits known before any dynamics: adhesion and power along the need path, and brake holding. */
+export interface QuasiStatic {
+  limits: LimitCheck[];
+  path: NeedPath;
+  /** The worst point of the path for the rail at the plan's quantile and at the marginal bound, and for power. */
+  adhesion: PathMargin;
+  adhesionAtBound: PathMargin;
+  power: PathMargin;
+  /** Adhesion and power within: the start's traction is not in question, so its time to target counts. */
+  tractionWithin: boolean;
+}
+
+const kN = (n: number): string => `${Math.round(n / 1000)} kN`;
+const kmh = (mps: number): string => `${(mps * 3.6).toFixed(1)} km/h`;
+
+/** The quasi-static limits, the rail taken at `ctx.quantile` and its band at `boundQ`. */
+export function quasiStaticLimits(ctx: PlannerContext, boundQ: number): QuasiStatic {
+  const m = ctx.model;
+  const path = needPath(m, ctx.c.target);
+  const muBound = unitMuAt(ctx.c, m.locoSpecs, boundQ);
+  const adhesion = pathMargin(path, (v) => railEffortN(m, m.mu0, v));
+  const adhesionAtBound = pathMargin(path, (v) => railEffortN(m, muBound, v));
+  const power = pathMargin(path, (v) => motorEffortN(m, v));
+  const gravity = "no effort needed: gravity alone takes the train to its target";
+  const where = (p: PathMargin, what: string) => (p.needed ? `${what}: ${kN(p.availableN)} against ${kN(p.needN)} needed at ${kmh(p.speedMps)} after ${Math.round(p.travelM)} m` : gravity);
+  const limits: LimitCheck[] = [
+    limitCheck("adhesion", "N", adhesion.needN, adhesion.availableN, { demand: adhesionAtBound.needN, allowance: adhesionAtBound.availableN, what: `the rail at its ${pct(boundQ)} quantile` }, where(adhesion, `rail at its ${pct(ctx.quantile)} quantile`)),
+    limitCheck("power", "N", power.needN, power.availableN / POWER_RESERVE, { demand: power.needN, allowance: power.availableN, what: "no reserve" }, power.needed ? `${where(power, "full notch")} (10 % kept in hand)` : gravity),
+  ];
+  const hold = brakeHolding(ctx, muBound);
+  if (hold) limits.push(hold);
+  const tractionWithin = limits[0]!.level === "within" && limits[1]!.level === "within";
+  return { limits, path, adhesion, adhesionAtBound, power, tractionWithin };
+}
+
+const pct = (q: number): string => `${Math.round(q * 100)} %`;
+
+/**
+ * What holds the train while its brake releases. Rising grade: the locomotive brake and the strongest notch
+ * the rail passes (at the plan's quantile) against the pull back. Falling grade: the locomotive brake and the
+ * train brake, eased in stages where the brake allows it, against the pull forward at rest and at the target
+ * speed. Null when nothing pulls the released train either way.
+ */
+function brakeHolding(ctx: PlannerContext, muBound: Float64Array): LimitCheck | null {
+  const m = ctx.model;
+  if (ctx.rollBackPullN > 0) {
+    const atQ = ctx.locoBrakeN + railEffortN(m, m.mu0, 0);
+    const atBound = ctx.locoBrakeN + railEffortN(m, muBound, 0);
+    return limitCheck(
+      "brake-holding",
+      "N",
+      ctx.rollBackPullN,
+      atQ / HOLD_RESERVE,
+      { demand: ctx.rollBackPullN, allowance: atBound, what: "no reserve, the rail at the marginal bound" },
+      `rising grade: locomotive brake ${kN(ctx.locoBrakeN)} and power ${kN(atQ - ctx.locoBrakeN)} hold against ${kN(ctx.rollBackPullN)} pulling back (10 % kept in hand)`,
+    );
+  }
+  if (ctx.runAwayPullN > 0) {
+    const vTarget = ctx.c.target.kind === "speed" ? ctx.c.target.speedMps : 40 / 3.6;
+    const pullAtSpeed = -rigidResistanceN(m, 0, vTarget, new Int32Array(m.n));
+    const pull = Math.max(ctx.runAwayPullN, pullAtSpeed);
+    const holds = ctx.locoBrakeN + ctx.trainBrakeN;
+    return limitCheck(
+      "brake-holding",
+      "N",
+      pull,
+      holds / HOLD_RESERVE,
+      { demand: pull, allowance: holds, what: "no reserve" },
+      `falling grade: train brake ${kN(ctx.trainBrakeN)} and locomotive brake ${kN(ctx.locoBrakeN)} hold against ${kN(pull)} pulling forward (10 % kept in hand)`,
+    );
+  }
+  return null;
+}
+
+// ---------------------------------------------------------------------------------------------- dynamic
+
+/** The limits the planned start shows in the full dynamics. */
+export function dynamicLimits(ctx: PlannerContext, r: SearchResult, withTarget: boolean): LimitCheck[] {
+  const c = ctx.c;
+  const out: LimitCheck[] = [];
+  const tension = r.branch.peakTensionN();
+  const compression = r.branch.steps.reduce((x, s) => Math.max(x, s.peakCompressionN), 0);
+  const limit = c.train.couplerLimitN;
+  const factor = c.settings.couplerSafetyFactor;
+  out.push(limitCheck("coupler-tension", "N", tension, ctx.couplerAllowanceN, { demand: tension, allowance: limit, what: "the working limit" }, `peak pull ${kN(tension)} against ${kN(limit)} ÷ ${factor}`));
+  // The same working limit in buff until a train gives its own.
+  out.push(limitCheck("coupler-compression", "N", compression, ctx.couplerAllowanceN, { demand: compression, allowance: limit, what: "the working limit" }, `peak push ${kN(compression)} against ${kN(limit)} ÷ ${factor}`));
+  const stretchM = r.branch.run.locoTravelToStretchM;
+  if (stretchM !== null) {
+    const clear = c.location.clearAheadM;
+    const built = r.startKind === "power" ? (r.buildEndTravelM ?? stretchM) : stretchM;
+    const demand = Math.max(built, c.target.kind === "distance" ? c.target.distanceM : 0);
+    out.push(
+      limitCheck("distance", "m", demand, clear, { demand: stretchM, allowance: clear, what: "the stretch within the clear distance" }, `${Math.round(demand)} m of travel to ${r.startKind === "power" ? "the running notch" : "the whole train moving"}${c.target.kind === "distance" ? " or the target" : ""}, ${Math.round(clear)} m clear ahead`),
+    );
+  }
+  if (withTarget) {
+    const t = c.target;
+    const reached = r.targetReachedS !== null;
+    const progress = t.kind === "speed" ? r.bestSpeedMps / t.speedMps : r.bestTailTravelM / t.distanceM;
+    // Not reached: the margin is the share of the target reached (below 1); reached: time cap ÷ time taken.
+    const demand = reached ? Math.max(1e-6, r.targetReachedS! - r.powerS) : ACCELERATE_MAX_S / Math.max(1e-6, Math.min(0.999, progress));
+    out.push(limitCheck("time-to-target", "s", demand, ACCELERATE_MAX_S, null, reached ? `target reached ${Math.round(demand)} s after taking power` : `target not reached: ${Math.round(progress * 100)} % of it at best`));
+  }
+  return out;
+}
+
+// ---------------------------------------------------------------------------------------------- the decision
+
+/** One evaluation of a case on the rail at one quantile. */
+export interface Evaluation {
+  ctx: PlannerContext;
+  qs: QuasiStatic;
+  search: SearchResult | null;
+  limits: LimitCheck[];
+}
+
+export interface Decision {
+  verdict: Verdict;
+  /** The reasons of the limits that decide the verdict (the binding limit's first); empty when it starts. */
+  reasons: Reason[];
+  /** The binding limit's margin (the smallest of the threshold's plan); starts ⇔ margin ≥ 1. */
+  margin: number;
+  binding: LimitName;
+  /** Every limit of the threshold's plan. */
+  limits: LimitCheck[];
+  startKind: StartKind;
+  /** The plan to show: the threshold's, or (marginal) the one made on the rail at the marginal bound. */
+  shown: Evaluation;
+  /** The shown plan was made on the rail at the marginal bound. */
+  relaxed: boolean;
+  /** The threshold's evaluation (the margins' source). */
+  threshold: Evaluation;
+  /** The marginal bound's evaluation when one was made. */
+  bound: Evaluation | null;
+}
+
+/** How far `judge` needs to go: only whether it starts, whether it is at least marginal, or everything. */
+export type JudgeDepth = "starts" | "marginal" | "full";
+
+export interface JudgeOptions extends SearchOptions {
+  depth?: JudgeDepth;
+}
+
+/** The quasi-static part of an evaluation on the rail at quantile `q` (its band at `boundQ`). */
+function quasiStatic(c: StartCase, q: number, boundQ: number): Evaluation {
+  const ctx = plannerContext(c, q);
+  const qs = quasiStaticLimits(ctx, boundQ);
+  return { ctx, qs, search: null, limits: qs.limits };
+}
+
+/** The evaluation completed by the planned start in the full dynamics. */
+function withPlan(e: Evaluation, opts: SearchOptions): Evaluation {
+  const search = searchPlan(e.ctx, opts);
+  return { ...e, search, limits: [...e.qs.limits, ...dynamicLimits(e.ctx, search, e.qs.tractionWithin)] };
+}
+
+function decision(verdict: Verdict, thr: Evaluation, shown: Evaluation, bound: Evaluation | null): Decision {
+  const b = bindingLimit(thr.limits);
+  const deciding = verdict === "starts" ? [] : verdict === "marginal" ? thr.limits.filter((l) => l.level !== "within") : [...thr.limits, ...(bound?.limits ?? [])].filter((l) => l.level === "over");
+  const reasons: Reason[] = [];
+  for (const l of [b, ...deciding]) if (verdict !== "starts" && l.level !== "within" && !reasons.includes(l.reason)) reasons.push(l.reason);
+  return { verdict, reasons, margin: b.margin, binding: b.name, limits: thr.limits, startKind: thr.ctx.startKind, shown, relaxed: shown !== thr, threshold: thr, bound };
+}
+
+/**
+ * The verdict of a case (and, at depth "full", every limit and the plan to show). At depth "starts" only
+ * "starts" is exact (anything else comes back as "needs-assistance" without the work to tell marginal from
+ * it); at depth "marginal" the verdict is exact; "full" also runs the threshold's plan when the quasi-static
+ * limits already rule the start out, so every limit has its figure.
+ */
+export function judge(c: StartCase, opts: JudgeOptions = {}): Decision {
+  const depth = opts.depth ?? "full";
+  const thrQ = c.settings.slipRiskThreshold;
+  const boundQ = marginalBound(c.settings);
+  const search: SearchOptions = { ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}), ...(opts.onProgress ? { onProgress: opts.onProgress } : {}) };
+  const pre = quasiStatic(c, thrQ, boundQ);
+  const qsOver = !noneOver(pre.qs.limits);
+  if (qsOver && depth !== "full") return decision("needs-assistance", pre, pre, null);
+  if (depth === "starts" && !allWithin(pre.qs.limits)) return decision("needs-assistance", pre, pre, null);
+  const thr = withPlan(pre, search);
+  if (qsOver) return decision("needs-assistance", thr, thr, null);
+  if (allWithin(thr.limits)) return decision("starts", thr, thr, null);
+  if (depth === "starts") return decision("needs-assistance", thr, thr, null);
+  // Marginal: a plan on the rail at the marginal bound keeps every limit within its band, or the threshold's
+  // does. The bound's plan is shown when it works, so that every marginal plan assumes the same rail (and a
+  // heavier train's is never the quicker for assuming a better one).
+  const bound = withPlan(quasiStatic(c, boundQ, boundQ), search);
+  if (noneOver(bound.limits) && bound.search!.targetReachedS !== null) return decision("marginal", thr, bound, bound);
+  if (noneOver(thr.limits) && thr.search!.targetReachedS !== null) return decision("marginal", thr, thr, bound);
+  return decision("needs-assistance", thr, thr, bound);
+}
+
+/** Exactly `judge(c).verdict === "starts"`, with no more work than that needs. */
+export function startsAt(c: StartCase, shouldStop?: () => boolean): boolean {
+  return judge(c, { depth: "starts", ...(shouldStop ? { shouldStop } : {}) }).verdict === "starts";
+}
+
+/** Exactly `judge(c).verdict !== "needs-assistance"`, with no more work than that needs. */
+export function goesAt(c: StartCase, shouldStop?: () => boolean): boolean {
+  return judge(c, { depth: "marginal", ...(shouldStop ? { shouldStop } : {}) }).verdict !== "needs-assistance";
+}
