@@ -79,7 +79,7 @@ describe("case files", () => {
     const onScreen = harness.state.draft.checked();
     expect(r.ok && onScreen.ok && r.value).toEqual(onScreen.ok && onScreen.value);
     // The settings of the app go with it, so `taut plan` plans with the same safety settings.
-    expect(file.settings).toEqual({ couplerSafetyFactor: 1.2, slipRiskThreshold: 0.1 });
+    expect(file.settings).toEqual({ couplerSafetyFactor: 1.2, slipRiskThreshold: 0.1, marginalSlipRisk: 0.25 });
   });
 
   it("opens a case with a track profile and plans it as the file says", async () => {

@@ -53,7 +53,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
   const good = rows.filter((r) => !r.error);
   lines.push(
     textTable(
-      ["id", "row", "rail", "sand", "mass t", "verdict", "margin", "largest t (starts / marginal)", "cheapest assistance"],
+      ["id", "row", "rail", "sand", "mass t", "verdict", "why", "margin", "largest t (starts / marginal)", "cheapest assistance"],
       good.map((r) => [
         printable(r.id),
         where(r),
@@ -61,6 +61,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
         r.sand ? "yes" : "no",
         num(r.trailingMass_t),
         VERDICT_WORDS[r.verdict!].toLowerCase(),
+        (r.reasons ?? []).join(", ") || "—",
         `${num(r.margin, 2)}${r.binding ? ` (${LIMIT_WORDS[r.binding]})` : ""}`,
         massesText(r),
         remedyText(r) || "—",
