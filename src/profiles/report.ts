@@ -39,8 +39,8 @@ export interface LimitReport {
   unit: "kN" | "m" | "s";
   demand: number;
   allowance: number;
-  /** Exceeding the allowance is marginal while the band's allowance covers its demand. */
-  band: { demand: number; allowance: number; what: string } | null;
+  /** Exceeding the allowance is marginal while the band's allowance covers its demand; absent when the limit has no band. */
+  band?: { demand: number; allowance: number; what: string };
   what: string;
 }
 
@@ -161,7 +161,7 @@ export function limitReport(l: LimitCheck): LimitReport {
     unit: l.unit === "N" ? "kN" : l.unit,
     demand: val(l.demand),
     allowance: val(l.allowance),
-    band: l.band ? { demand: val(l.band.demand), allowance: val(l.band.allowance), what: l.band.what } : null,
+    ...(l.band ? { band: { demand: val(l.band.demand), allowance: val(l.band.allowance), what: l.band.what } } : {}),
     what: l.what,
   };
 }
