@@ -99,7 +99,7 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
             <strong>JSON:</strong> a list of start cases, each with an optional <code>id</code> — the same file <code>taut check</code> reads.
           </li>
           <li>
-            <strong>CSV:</strong> columns <code>id,case,rail,sand</code>; <code>case</code> names a start-case file, <code>rail</code> and <code>sand</code> override its
+            <strong>CSV:</strong> columns <code>id,case,rail,sand</code>; <code>case</code> names a start-case file (or a built-in demo case by its id), <code>rail</code> and <code>sand</code> override its
             conditions. A browser cannot open those files by their path, so <strong>pick the case files together with the CSV</strong> (select several at once): they are
             matched by file name.
           </li>
