@@ -9,6 +9,7 @@ import { conditionMargins, type ConditionMargin } from "../core/dispatch/conditi
 import type { DividedTrain } from "../core/dispatch/divideTrain.js";
 import { loadTableCells, loadTableRow, type LoadTableRow } from "../core/dispatch/loadTable.js";
 import { planStart, startableMasses } from "../core/planner/index.js";
+import { withEvaluationMemo } from "../core/planner/evaluationMemo.js";
 import type { PlanResult } from "../core/planner/types.js";
 import type { LocomotiveSpec } from "../core/physics/types.js";
 import type { StartCase } from "../core/train/types.js";
@@ -95,6 +96,11 @@ const part =
  * search for added units and, when none works, the divided train. The core's defaults unless told.
  */
 export function runAssistance(c: StartCase, o: AssistanceRequestOptions = {}, onProgress?: Progress): AssistanceAnswer {
+  // Plans shared between the searches' judgements (evaluationMemo.ts); the answer is plain data, copied out.
+  return withEvaluationMemo(() => assistanceOf(c, o, onProgress));
+}
+
+function assistanceOf(c: StartCase, o: AssistanceRequestOptions, onProgress?: Progress): AssistanceAnswer {
   const base = planStart(c, { skipMassSearch: true, onProgress: part(onProgress, 0, 0.25) });
   const a = searchAssistance(c, {
     baseVerdict: base.verdict,
@@ -137,6 +143,10 @@ export function runLoadTable(c: StartCase, cells: readonly LoadTableCell[] = loa
  * assistance, the divided train; and the largest startable and marginal masses.
  */
 export function runCheck(c: StartCase, o: CheckRequestOptions = {}, onProgress?: Progress): CheckAnswer {
+  return withEvaluationMemo(() => checkOf(c, o, onProgress));
+}
+
+function checkOf(c: StartCase, o: CheckRequestOptions, onProgress?: Progress): CheckAnswer {
   const p = planStart(c, { skipMassSearch: true, onProgress: part(onProgress, 0, 0.3) });
   let a: AssistanceResult | null = null;
   if (p.verdict !== "starts") {

@@ -8,7 +8,7 @@ import type { LocomotiveSpec } from "../../core/physics/types.js";
 import type { StartCase } from "../../core/train/types.js";
 import type { AssistanceReport, DivideReport } from "../../profiles/report.js";
 import type { Departure } from "./departures.js";
-import type { CheckOutcome, JobOutcome, MassOutcome } from "./jobs.js";
+import type { CheckOutcome, JobOutcome } from "./jobs.js";
 import type { JobPool } from "./pool.js";
 
 /** One answered (or refused) departure, in output units. */
@@ -70,9 +70,15 @@ export async function checkDepartures(
   opts: { helper?: LocomotiveSpec; onProgress?: (p: CheckProgress) => void } = {},
 ): Promise<{ rows: DepartureRow[]; stats: CheckStats }> {
   const checks = new Map<string, Promise<JobOutcome>>();
-  const masses = new Map<string, Promise<JobOutcome>>();
   const stats: CheckStats = { checks: 0, massSearches: 0, checkMs: [], massMs: [] };
-  const timed = (p: Promise<JobOutcome>) => p.then((o) => ((o.kind === "check" ? stats.checkMs : stats.massMs).push(o.elapsedMs), o));
+  const timed = (p: Promise<JobOutcome>) =>
+    p.then((o) => {
+      if (o.kind === "check") {
+        stats.checkMs.push(o.elapsedMs);
+        if (o.masses) stats.massMs.push(o.masses.elapsedMs);
+      } else stats.massMs.push(o.elapsedMs);
+      return o;
+    });
   let done = 0;
   const total = deps.length;
   const tick = () => opts.onProgress?.({ done: ++done, total });
@@ -86,20 +92,17 @@ export async function checkDepartures(
     const k = keyOf(c);
     let check = checks.get(k);
     if (!check) {
-      check = timed(pool.run({ kind: "check", case: c, ...(opts.helper ? { helper: opts.helper } : {}) }));
+      // The check and the largest masses in one job: the mass search is bracketed by the departure's own
+      // verdict (startableMass.ts) and shares the plans it has in common with the check on that thread.
+      check = timed(pool.run({ kind: "check", case: c, masses: true, ...(opts.helper ? { helper: opts.helper } : {}) }));
       checks.set(k, check);
       stats.checks++;
-    }
-    let mass = masses.get(k);
-    if (!mass) {
-      // Bracketed by the departure's own verdict (startableMass.ts), so it follows the check.
-      mass = check.then((o) => timed(pool.run({ kind: "mass", case: c, own: (o as CheckOutcome).verdict })));
-      masses.set(k, mass);
       stats.massSearches++;
     }
     const described: DepartureRow = { ...base, rail: c.conditions.rail, sand: c.conditions.sand, trailingMass_t: Math.round(c.train.trailingMassKg / 1000) };
     try {
-      const [o, m] = (await Promise.all([check, mass])) as [CheckOutcome, MassOutcome];
+      const o = (await check) as CheckOutcome;
+      const m = o.masses!;
       return {
         ...described,
         verdict: o.verdict,

@@ -5,6 +5,7 @@
  */
 import { searchAssistance } from "../../core/dispatch/assistance.js";
 import { planStart, startableMasses } from "../../core/planner/index.js";
+import { withEvaluationMemo } from "../../core/planner/evaluationMemo.js";
 import type { LocomotiveSpec } from "../../core/physics/types.js";
 import type { LimitName, Reason, Verdict } from "../../core/planner/outcome.js";
 import type { StartCase } from "../../core/train/types.js";
@@ -16,7 +17,8 @@ export const CHECK_ASSISTANCE_BUDGET = 12;
 export const CHECK_DIVIDE_BUDGET = 6;
 
 export type Job =
-  | { kind: "check"; case: StartCase; helper?: LocomotiveSpec }
+  /** `masses`: also the largest masses, on the same thread, so the searches share the plans they have in common. */
+  | { kind: "check"; case: StartCase; helper?: LocomotiveSpec; masses?: boolean }
   /** The largest masses; `own` is the case's verdict when known (it brackets the search), `startsOnly` skips the marginal one. */
   | { kind: "mass"; case: StartCase; own?: Verdict; startsOnly?: boolean };
 
@@ -37,6 +39,8 @@ export interface CheckOutcome {
   searchCapped: boolean;
   /** Why it does not start and what would change it (empty when it starts). */
   advice: string[];
+  /** The largest masses when the job asked for them (bracketed by the verdict above). */
+  masses?: MassOutcome;
   elapsedMs: number;
 }
 
@@ -52,13 +56,20 @@ export type JobOutcome = CheckOutcome | MassOutcome;
 
 /** Run one job on this thread. */
 export function runJob(job: Job): JobOutcome {
+  return withEvaluationMemo(() => (job.kind === "mass" ? massJob(job.case, job.own, job.startsOnly) : checkJob(job)));
+}
+
+function massJob(c: StartCase, own?: Verdict, startsOnly?: boolean): MassOutcome {
   const t0 = performance.now();
-  if (job.kind === "mass") {
-    const m = startableMasses(job.case, { ...(job.own ? { own: job.own } : {}), ...(job.startsOnly ? { startsOnly: true } : {}) });
-    return { kind: "mass", maxStartableMassKg: m.startsKg, largestMarginalMassKg: m.marginalKg, elapsedMs: performance.now() - t0 };
-  }
+  const m = startableMasses(c, { ...(own ? { own } : {}), ...(startsOnly ? { startsOnly: true } : {}) });
+  return { kind: "mass", maxStartableMassKg: m.startsKg, largestMarginalMassKg: m.marginalKg, elapsedMs: performance.now() - t0 };
+}
+
+function checkJob(job: Extract<Job, { kind: "check" }>): CheckOutcome {
+  const t0 = performance.now();
   const c = job.case;
-  const p = planStart(c, { skipMassSearch: true });
+  // The check reports no verification run (the plan's re-run on the median rail): not made.
+  const p = planStart(c, { skipMassSearch: true, skipVerification: true });
   let assistance: AssistanceReport | null = null;
   let divide: DivideReport | null = null;
   let searchCapped = false;
@@ -75,6 +86,8 @@ export function runJob(job: Job): JobOutcome {
     divide = rep.divide;
     searchCapped = !a.complete;
   }
+  const checkMs = performance.now() - t0;
+  const masses = job.masses ? massJob(c, p.verdict) : undefined;
   return {
     kind: "check",
     verdict: p.verdict,
@@ -87,6 +100,7 @@ export function runJob(job: Job): JobOutcome {
     divide,
     searchCapped,
     advice: p.advice,
-    elapsedMs: performance.now() - t0,
+    ...(masses ? { masses } : {}),
+    elapsedMs: checkMs,
   };
 }

@@ -6,6 +6,7 @@
 import { searchAssistance } from "../../core/dispatch/assistance.js";
 import { conditionMargins } from "../../core/dispatch/conditionMargins.js";
 import { planStart } from "../../core/planner/index.js";
+import { withEvaluationMemo } from "../../core/planner/evaluationMemo.js";
 import { builtinCaseJson, DEMO_CASE_ID } from "../../profiles/builtin.js";
 import { parseStartCase } from "../../profiles/parse.js";
 import { planReport as reportOf, type PlanReport } from "../../profiles/report.js";
@@ -113,6 +114,11 @@ export function caseMeta(raw: Record<string, unknown>): PlanReport["case"] {
 
 /** The plan report for a case: the planner's result with units in names, and assistance when it does not start. */
 export function planReport(c: StartCase, meta: PlanReport["case"], opts: { assistance?: boolean; helper?: LocomotiveSpec } = {}): PlanReport {
+  // The plan, its mass search and the assistance search share the plans they have in common (evaluationMemo.ts).
+  return withEvaluationMemo(() => reportWithAssistance(c, meta, opts));
+}
+
+function reportWithAssistance(c: StartCase, meta: PlanReport["case"], opts: { assistance?: boolean; helper?: LocomotiveSpec }): PlanReport {
   const p = planStart(c);
   const rep = reportOf(c, p, meta);
   if (opts.assistance !== false && p.verdict !== "starts") {

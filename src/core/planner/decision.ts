@@ -31,7 +31,8 @@
  */
 import { MAX_MARGIN, motorEffortN, needPath, pathMargin, railEffortN, rigidResistanceN, unitMuAt, type NeedPath, type PathMargin } from "./need.js";
 import { HOLD_RESERVE, marginalBound, plannerContext, type PlannerContext } from "./context.js";
-import { ACCELERATE_MAX_S, searchPlan, type SearchOptions, type SearchResult } from "./search.js";
+import { ACCELERATE_MAX_S, type SearchOptions, type SearchResult } from "./search.js";
+import { memoSearchPlan } from "./evaluationMemo.js";
 import { POWER_RESERVE } from "./staticCheck.js";
 import { LIMIT_REASON, type LimitCheck, type LimitLevel, type LimitName, type Reason, type StartKind, type Verdict } from "./outcome.js";
 
@@ -210,7 +211,7 @@ function quasiStatic(c: StartCase, q: number, boundQ: number): Evaluation {
 
 /** The evaluation completed by the planned start in the full dynamics. */
 function withPlan(e: Evaluation, opts: SearchOptions): Evaluation {
-  const search = searchPlan(e.ctx, opts);
+  const search = memoSearchPlan(e.ctx, opts);
   return { ...e, search, limits: [...e.qs.limits, ...dynamicLimits(e.ctx, search, e.qs.tractionWithin)] };
 }
 
@@ -257,5 +258,15 @@ export function startsAt(c: StartCase, shouldStop?: () => boolean): boolean {
 
 /** Exactly `judge(c).verdict !== "needs-assistance"`, with no more work than that needs. */
 export function goesAt(c: StartCase, shouldStop?: () => boolean): boolean {
-  return judge(c, { depth: "marginal", ...(shouldStop ? { shouldStop } : {}) }).verdict !== "needs-assistance";
+  const opts: SearchOptions = shouldStop ? { shouldStop } : {};
+  const boundQ = marginalBound(c.settings);
+  const pre = quasiStatic(c, c.settings.slipRiskThreshold, boundQ);
+  if (!noneOver(pre.qs.limits)) return false;
+  // Traction not within on the threshold's rail: it cannot start, so it goes when either plan keeps within
+  // its bands — the marginal bound's first, which settles it alone when it does (no threshold's plan needed).
+  if (!allWithin(pre.qs.limits)) {
+    const goes = (e: Evaluation) => noneOver(e.limits) && e.search!.targetReachedS !== null;
+    return goes(withPlan(quasiStatic(c, boundQ, boundQ), opts)) || goes(withPlan(pre, opts));
+  }
+  return judge(c, { depth: "marginal", ...opts }).verdict !== "needs-assistance";
 }

@@ -8,6 +8,7 @@ import type { StartCase } from "../train/types.js";
 import type { Verdict } from "./outcome.js";
 import { goesAt, quasiStaticLimits, startsAt } from "./decision.js";
 import { marginalBound, plannerContext } from "./context.js";
+import { withEvaluationMemo } from "./evaluationMemo.js";
 
 /** The bracket never needs to be narrower than this, kg. */
 const MIN_TOLERANCE_KG = 50;
@@ -124,16 +125,27 @@ function largestMass(c: StartCase, ok: (m: number) => boolean, ownOk: boolean, a
   // A mass known to fail (the case's own when it does; none yet when it holds).
   let failing = !ownOk;
   if (hi <= lo) return lo;
-  if (lo < floorKg) {
-    if (!ok(floorKg)) return 0;
-    lo = floorKg;
-  }
+  // Below the floor (nothing known to hold yet) the floor decides between "none" and a search — but a probe
+  // that holds settles that too, and the floor is the dearest train to plan (light wagons take the smallest
+  // steps): so the probe first, the floor only when the probe fails.
+  let floorUnknown = lo < floorKg;
+  if (floorUnknown) lo = floorKg;
   if (probeKg > lo && probeKg < hi) {
-    if (ok(probeKg)) lo = probeKg;
-    else {
+    if (ok(probeKg)) {
+      lo = probeKg;
+      floorUnknown = false;
+    } else {
       hi = probeKg;
       failing = true;
     }
+  }
+  if (floorUnknown && !ok(floorKg)) return 0;
+  // No quasi-static limit below the ceiling (a falling grade: the brakes hold any load): the ceiling itself
+  // is the likeliest answer, and one plan there settles it instead of a plan at every doubling.
+  if (!failing && probeKg >= ceiling && lo < ceiling) {
+    if (ok(ceiling)) return ceiling;
+    hi = ceiling;
+    failing = true;
   }
   // No failing mass known yet: double until one fails (each probe above the quasi-static limit is cheap).
   while (!failing) {
@@ -183,6 +195,11 @@ export interface StartableMassOptions {
  * construction: the case starts ⇔ its mass ≤ `startsKg`, and it needs assistance ⇔ its mass > `marginalKg`.
  */
 export function startableMasses(c: StartCase, opts: StartableMassOptions = {}): StartableMasses {
+  // The two searches try some masses in common (the threshold's plan is the same for both).
+  return withEvaluationMemo(() => searchMasses(c, opts));
+}
+
+function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses {
   const stop = opts.shouldStop;
   const starts = (m: number) => startsAt(withTrailingMass(c, m), stop);
   const goes = (m: number) => goesAt(withTrailingMass(c, m), stop);
