@@ -45,14 +45,24 @@ const floorKgOf = (c: StartCase): number => c.train.wagons * 1000;
  * verdict function (the load table accepts one); the product's own figures come from `startableMasses`.
  */
 export function largestStartableMassKg(c: StartCase, starts: (c: StartCase) => boolean, opts: MassSearchOptions = {}): number {
+  return startableBracketKg(c, starts, opts).lo;
+}
+
+/** The bracket the search ends with: `lo` holds (0: none does), `hi` fails (null: no failing mass tried). */
+interface Bracket {
+  lo: number;
+  hi: number | null;
+}
+
+function startableBracketKg(c: StartCase, starts: (c: StartCase) => boolean, opts: MassSearchOptions): Bracket {
   const tol = opts.toleranceKg ?? 500;
   const ceiling = opts.ceilingKg ?? 5e7;
   const floorKg = floorKgOf(c);
   const ok = (m: number): boolean => starts(withTrailingMass(c, m));
   const bound = opts.upperBoundKg;
   if (bound !== undefined) {
-    if (bound < floorKg) return 0;
-    if (ok(bound)) return bound;
+    if (bound < floorKg) return { lo: 0, hi: null };
+    if (ok(bound)) return { lo: bound, hi: null };
   }
   let lo: number;
   let hi: number;
@@ -66,7 +76,7 @@ export function largestStartableMassKg(c: StartCase, starts: (c: StartCase) => b
         lo = hi;
         hi = Math.min(top, hi * GUESS_STEP);
       }
-      if (hi >= top && bound === undefined && ok(hi)) return hi;
+      if (hi >= top && bound === undefined && ok(hi)) return { lo: hi, hi: null };
     } else {
       hi = guess;
       lo = Math.max(floorKg, guess / GUESS_STEP);
@@ -74,28 +84,28 @@ export function largestStartableMassKg(c: StartCase, starts: (c: StartCase) => b
         hi = lo;
         lo = Math.max(floorKg, lo / GUESS_STEP);
       }
-      if (lo <= floorKg && !ok(floorKg)) return 0;
+      if (lo <= floorKg && !ok(floorKg)) return { lo: 0, hi: floorKg };
     }
   } else {
-    if (!ok(floorKg)) return 0;
+    if (!ok(floorKg)) return { lo: 0, hi: floorKg };
     lo = floorKg;
     hi = bound ?? Math.max(c.train.trailingMassKg, 2 * floorKg);
     while (bound === undefined && ok(hi)) {
       lo = hi;
-      if (hi >= ceiling) return ceiling;
+      if (hi >= ceiling) return { lo: ceiling, hi: null };
       hi = Math.min(ceiling, hi * 2);
     }
   }
   return bisect(lo, hi, ok, opts.relativeTolerance ?? 0.005, tol);
 }
 
-function bisect(lo: number, hi: number, ok: (m: number) => boolean, rel: number, tol: number): number {
+function bisect(lo: number, hi: number, ok: (m: number) => boolean, rel: number, tol: number): Bracket {
   while (hi - lo > Math.min(tol, Math.max(MIN_TOLERANCE_KG, rel * lo))) {
     const mid = 0.5 * (lo + hi);
     if (ok(mid)) lo = mid;
     else hi = mid;
   }
-  return lo;
+  return { lo, hi };
 }
 
 /**
@@ -113,10 +123,12 @@ const TOLERANCE_KG = 2000;
 
 /**
  * Largest mass for which `ok` holds, given what is known of the case's own mass (`ownOk`) and a mass known
- * to hold (`atLeastKg`, 0 for none). A first probe at `probeKg` (the quasi-static limit: above it the
- * verdict fails before any dynamics, so probes there cost little) shapes the bracket.
+ * to hold (`atLeastKg`, 0 for none). The probe is the quasi-static limit's bracket: its upper end fails
+ * before any dynamics, so when a plan at its lower end holds, that one plan settles the answer (the
+ * dynamics only verify it); when it fails, the search goes on below it with plans.
  */
-function largestMass(c: StartCase, ok: (m: number) => boolean, ownOk: boolean, atLeastKg: number, probeKg: number): number {
+function largestMass(c: StartCase, ok: (m: number) => boolean, ownOk: boolean, atLeastKg: number, probe: Bracket): number {
+  const probeKg = probe.lo;
   const own = c.train.trailingMassKg;
   const floorKg = floorKgOf(c);
   const ceiling = massCeilingKg(c);
@@ -134,6 +146,11 @@ function largestMass(c: StartCase, ok: (m: number) => boolean, ownOk: boolean, a
     if (ok(probeKg)) {
       lo = probeKg;
       floorUnknown = false;
+      // Just above the probe the quasi-static limits already rule the verdict out: no plan can bring it back.
+      if (probe.hi !== null && probe.hi > lo && probe.hi < hi) {
+        hi = probe.hi;
+        failing = true;
+      }
     } else {
       hi = probeKg;
       failing = true;
@@ -159,18 +176,21 @@ function largestMass(c: StartCase, ok: (m: number) => boolean, ownOk: boolean, a
       failing = true;
     }
   }
-  return bisect(lo, hi, ok, RELATIVE_TOLERANCE, TOLERANCE_KG);
+  return bisect(lo, hi, ok, RELATIVE_TOLERANCE, TOLERANCE_KG).lo;
 }
 
-/** The largest mass for which the quasi-static limits allow the verdict (all within, or none over). */
-function quasiStaticMassKg(c: StartCase, need: "within" | "not-over"): number {
+/**
+ * The largest mass for which the quasi-static limits allow the verdict (all within, or none over), and the
+ * mass just above it where they do not (so neither does the decision: it needs them within, or none over).
+ */
+function quasiStaticMassKg(c: StartCase, need: "within" | "not-over"): Bracket {
   const bound = marginalBound(c.settings);
   const holds = (m: number): boolean => {
     const x = withTrailingMass(c, m);
     const ls = quasiStaticLimits(plannerContext(x), bound).limits;
     return need === "within" ? ls.every((l) => l.level === "within") : ls.every((l) => l.level !== "over");
   };
-  return largestStartableMassKg(c, (x) => holds(x.train.trailingMassKg), { relativeTolerance: 0.002, toleranceKg: 200 });
+  return startableBracketKg(c, (x) => holds(x.train.trailingMassKg), { relativeTolerance: 0.002, toleranceKg: 200 });
 }
 
 export interface StartableMasses {
