@@ -4,7 +4,7 @@
  * are plain data (they cross a thread boundary by structured clone); results are already in output units.
  */
 import { searchAssistance } from "../../core/dispatch/assistance.js";
-import { planStart, startableMasses } from "../../core/planner/index.js";
+import { goesAt, planStart, startableMasses, startsAt } from "../../core/planner/index.js";
 import { withEvaluationMemo } from "../../core/planner/evaluationMemo.js";
 import type { LocomotiveSpec } from "../../core/physics/types.js";
 import type { LimitName, Reason, Verdict } from "../../core/planner/outcome.js";
@@ -20,7 +20,13 @@ export type Job =
   /** `masses`: also the largest masses, on the same thread, so the searches share the plans they have in common. */
   | { kind: "check"; case: StartCase; helper?: LocomotiveSpec; masses?: boolean }
   /** The largest masses; `own` is the case's verdict when known (it brackets the search), `startsOnly` skips the marginal one. */
-  | { kind: "mass"; case: StartCase; own?: Verdict; startsOnly?: boolean };
+  | { kind: "mass"; case: StartCase; own?: Verdict; startsOnly?: boolean }
+  /**
+   * One verdict of a mass search, judged ahead of time (speculate.ts): "starts" or "goes" (at least marginal).
+   * `shared` also receives it in word 0 (1 holds, 2 does not, 3 failed; word 1 is set when the job begins), for a
+   * thread that waits without an event loop.
+   */
+  | { kind: "verdict"; case: StartCase; need: "starts" | "goes"; shared?: Int32Array };
 
 export interface CheckOutcome {
   kind: "check";
@@ -52,11 +58,47 @@ export interface MassOutcome {
   elapsedMs: number;
 }
 
-export type JobOutcome = CheckOutcome | MassOutcome;
+export interface VerdictOutcome {
+  kind: "verdict";
+  holds: boolean;
+  elapsedMs: number;
+}
+
+export type JobOutcome = CheckOutcome | MassOutcome | VerdictOutcome;
 
 /** Run one job on this thread. */
 export function runJob(job: Job): JobOutcome {
+  if (job.kind === "verdict") return verdictJob(job);
   return withEvaluationMemo(() => (job.kind === "mass" ? massJob(job.case, job.own, job.startsOnly) : checkJob(job)));
+}
+
+/** Shared-state codes of a verdict job (see `Job`). */
+export const VERDICT_PENDING = 0;
+export const VERDICT_HOLDS = 1;
+export const VERDICT_FAILS = 2;
+export const VERDICT_ERROR = 3;
+
+function verdictJob(job: Extract<Job, { kind: "verdict" }>): VerdictOutcome {
+  const t0 = performance.now();
+  if (job.shared) {
+    Atomics.store(job.shared, 1, 1);
+    Atomics.notify(job.shared, 1);
+  }
+  let holds: boolean;
+  try {
+    holds = job.need === "starts" ? startsAt(job.case) : goesAt(job.case);
+  } catch (e) {
+    if (job.shared) {
+      Atomics.store(job.shared, 0, VERDICT_ERROR);
+      Atomics.notify(job.shared, 0);
+    }
+    throw e;
+  }
+  if (job.shared) {
+    Atomics.store(job.shared, 0, holds ? VERDICT_HOLDS : VERDICT_FAILS);
+    Atomics.notify(job.shared, 0);
+  }
+  return { kind: "verdict", holds, elapsedMs: performance.now() - t0 };
 }
 
 function massJob(c: StartCase, own?: Verdict, startsOnly?: boolean): MassOutcome {

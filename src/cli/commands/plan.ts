@@ -5,7 +5,8 @@
  */
 import { searchAssistance } from "../../core/dispatch/assistance.js";
 import { conditionMargins } from "../../core/dispatch/conditionMargins.js";
-import { planStart } from "../../core/planner/index.js";
+import { planStart, type MassVerdictLookup } from "../../core/planner/index.js";
+import { speculateMassVerdicts } from "../batch/speculate.js";
 import { withEvaluationMemo } from "../../core/planner/evaluationMemo.js";
 import { builtinCaseJson, DEMO_CASE_ID } from "../../profiles/builtin.js";
 import { parseStartCase } from "../../profiles/parse.js";
@@ -67,7 +68,7 @@ export const planCommand: Command = {
     conditions: { type: "boolean" },
     ...OVERRIDE_OPTIONS,
   },
-  run({ values, positionals }, io) {
+  async run({ values, positionals }, io) {
     const overrides = overridesFrom(values);
     const lib = library(readNotesFiles((values.notes as string[] | undefined) ?? []));
     const location = values.location as string | undefined;
@@ -97,7 +98,14 @@ export const planCommand: Command = {
       meta = caseMeta(read.raw);
     }
     if (hasOverrides(overrides)) meta.overrides = { ...overrides };
-    const report = planReport(c, meta, { assistance: !values["no-assistance"], ...(helper ? { helper } : {}) });
+    // The mass search's first plans judged on other threads meanwhile (batch/speculate.ts): the same answer, sooner.
+    const speculation = speculateMassVerdicts(c);
+    let report: PlanReport;
+    try {
+      report = planReport(c, meta, { assistance: !values["no-assistance"], ...(helper ? { helper } : {}), ...(speculation ? { massVerdictAt: speculation.verdictAt } : {}) });
+    } finally {
+      await speculation?.close();
+    }
     if (values.conditions) report.byCondition = conditionMargins(c).map(conditionMarginReport);
     io.out(values.json ? JSON.stringify(report, null, 2) : renderPlan(report));
     return 0;
@@ -113,13 +121,20 @@ export function caseMeta(raw: Record<string, unknown>): PlanReport["case"] {
 }
 
 /** The plan report for a case: the planner's result with units in names, and assistance when it does not start. */
-export function planReport(c: StartCase, meta: PlanReport["case"], opts: { assistance?: boolean; helper?: LocomotiveSpec } = {}): PlanReport {
+export interface PlanReportOptions {
+  assistance?: boolean;
+  helper?: LocomotiveSpec;
+  /** Verdicts of the mass search found on other threads (batch/speculate.ts). */
+  massVerdictAt?: MassVerdictLookup;
+}
+
+export function planReport(c: StartCase, meta: PlanReport["case"], opts: PlanReportOptions = {}): PlanReport {
   // The plan, its mass search and the assistance search share the plans they have in common (evaluationMemo.ts).
   return withEvaluationMemo(() => reportWithAssistance(c, meta, opts));
 }
 
-function reportWithAssistance(c: StartCase, meta: PlanReport["case"], opts: { assistance?: boolean; helper?: LocomotiveSpec }): PlanReport {
-  const p = planStart(c);
+function reportWithAssistance(c: StartCase, meta: PlanReport["case"], opts: PlanReportOptions): PlanReport {
+  const p = planStart(c, opts.massVerdictAt ? { massVerdictAt: opts.massVerdictAt } : {});
   const rep = reportOf(c, p, meta);
   if (opts.assistance !== false && p.verdict !== "starts") {
     const a = searchAssistance(c, {

@@ -35,7 +35,7 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
   const goes = d.verdict !== "needs-assistance" && r.failure === null;
   const verification = opts.skipVerification || !goes ? null : verify(ctx, r);
   const steps = goes ? planSteps(ctx, r) : [];
-  const masses = opts.skipMassSearch ? { startsKg: Number.NaN, marginalKg: Number.NaN, ceilingKg: massCeilingKg(c) } : startableMasses(c, { own: d.verdict, ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}) });
+  const masses = opts.skipMassSearch ? { startsKg: Number.NaN, marginalKg: Number.NaN, ceilingKg: massCeilingKg(c) } : startableMasses(c, { own: d.verdict, ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}), ...(opts.massVerdictAt ? { verdictAt: opts.massVerdictAt } : {}) });
   progress?.(1);
   const run = r.branch.run;
   const series = run.seriesView();

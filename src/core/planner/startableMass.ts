@@ -208,6 +208,25 @@ export interface StartableMassOptions {
   shouldStop?: () => boolean;
   /** Only the largest startable mass (skip the largest marginal one). */
   startsOnly?: boolean;
+  /**
+   * A verdict already found elsewhere (another thread judging the masses `massProbesKg` gives while this
+   * one plans the case): true or false for "starts" or "goes" (at least marginal) at a mass, or undefined.
+   */
+  verdictAt?: MassVerdictLookup;
+}
+
+/** See `StartableMassOptions.verdictAt`. */
+export type MassVerdictLookup = (need: "starts" | "goes", massKg: number) => boolean | undefined;
+
+/**
+ * The masses the two searches plan first (the quasi-static limits, or the ceiling where they set none): what
+ * another thread may judge ahead of time. The searches go elsewhere only when these plans fail or the case's
+ * own verdict already settles them.
+ */
+export function massProbesKg(c: StartCase): { startsKg: number; goesKg: number } {
+  const ceiling = massCeilingKg(c);
+  const first = (b: Bracket) => Math.min(b.lo, ceiling);
+  return { startsKg: first(quasiStaticMassKg(c, "within")), goesKg: first(quasiStaticMassKg(c, "not-over")) };
 }
 
 /**
@@ -221,8 +240,9 @@ export function startableMasses(c: StartCase, opts: StartableMassOptions = {}): 
 
 function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses {
   const stop = opts.shouldStop;
-  const starts = (m: number) => startsAt(withTrailingMass(c, m), stop);
-  const goes = (m: number) => goesAt(withTrailingMass(c, m), stop);
+  const known = opts.verdictAt;
+  const starts = (m: number) => known?.("starts", m) ?? startsAt(withTrailingMass(c, m), stop);
+  const goes = (m: number) => known?.("goes", m) ?? goesAt(withTrailingMass(c, m), stop);
   const own = opts.own;
   const ownStarts = own !== undefined ? own === "starts" : starts(c.train.trailingMassKg);
   const startsKg = largestMass(c, starts, ownStarts, 0, quasiStaticMassKg(c, "within"));

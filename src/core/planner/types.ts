@@ -136,4 +136,6 @@ export interface PlanOptions {
   skipMassSearch?: boolean;
   /** Skip the verifying re-run on the median rail. */
   skipVerification?: boolean;
+  /** Verdicts of the mass search already found elsewhere (startableMass.ts, `StartableMassOptions.verdictAt`). */
+  massVerdictAt?: (need: "starts" | "goes", massKg: number) => boolean | undefined;
 }
