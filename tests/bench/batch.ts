@@ -13,7 +13,7 @@
  */
 import { spawnSync } from "node:child_process";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { RAIL_CONDITIONS } from "../../src/core/physics/types.js";
@@ -22,6 +22,9 @@ import { tableCase } from "../../src/cli/commands/table.js";
 import { builtinCaseJson, builtinLibrary, builtinLocations } from "../../src/profiles/builtin.js";
 import { allDifferentDepartures } from "./departures.js";
 import { heading, line, target } from "./util.js";
+import { runJob, type CheckOutcome } from "../../src/cli/batch/jobs.js";
+import { planStart } from "../../src/core/planner/index.js";
+import { parseStartCase } from "../../src/profiles/parse.js";
 
 const repo = fileURLToPath(new URL("../../", import.meta.url));
 
@@ -94,12 +97,14 @@ export function run(): void {
       target: "500 all-different departures ≤ 60 s on 2 cores",
       figure: `${(b.wallS * scale).toFixed(0)} s`,
       ratio: (b.wallS * scale) / 60,
-      note: `${count === 500 ? "" : `scaled from ${count}; `}awaits the decision model (issue 11) for its search work`,
+      note: `${count === 500 ? "" : `scaled from ${count}; `}load ${loadavg()[0]!.toFixed(1)} at the end`,
     });
     line("thread time (Σ checks + mass searches)", `${bs.threadWork_s.toFixed(0)} s`, `${((1000 * bs.threadWork_s) / count).toFixed(0)} ms per departure`);
     line("median / worst check (plan + assistance)", `${bs.medianCheck_ms} / ${bs.maxCheck_ms} ms`);
     line("median / worst mass search", `${bs.medianMassSearch_ms} / ${bs.maxMassSearch_ms} ms`);
     line("verdicts", `${bs.starts}/${bs.marginal}/${bs.needsAssistance}`, "starts / marginal / needs assistance");
+
+    departureAgainstPlan(count === 500 ? 40 : 16);
 
     heading("Load table — taut table ashvale-loop-up --loco illustrative-6axle-3000 (40 loaded hoppers; 12 mass searches)");
     const t0 = performance.now();
@@ -115,4 +120,39 @@ export function run(): void {
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
+}
+
+/**
+ * A departure's thread time (the check with its assistance and both mass searches, as `taut check` runs it)
+ * against one plan of the same train (its verdict and verified plan, no mass search), on the first `n`
+ * all-different departures, in this process, one after the other: Σ departures ÷ Σ plans.
+ */
+function departureAgainstPlan(n: number): void {
+  const lib = builtinLibrary();
+  const cases = allDifferentDepartures(n).map((d) => {
+    const r = parseStartCase(d, lib);
+    if (!r.ok) throw new Error(`generated departure ${String(d.id)} does not parse`);
+    return r.value;
+  });
+  planStart(cases[0]!, { skipMassSearch: true }); // warm-up
+  let planMs = 0;
+  let departureMs = 0;
+  let worst = 0;
+  let searches = 0;
+  for (const c of cases) {
+    const t0 = performance.now();
+    planStart(c, { skipMassSearch: true });
+    const p = performance.now() - t0;
+    const t1 = performance.now();
+    const o = runJob({ kind: "check", case: c, masses: true }) as CheckOutcome;
+    const d = performance.now() - t1;
+    planMs += p;
+    departureMs += d;
+    searches += o.masses ? 1 : 0;
+    worst = Math.max(worst, d / p);
+  }
+  heading(`A departure against one plan of the same train (first ${n} all-different departures, in process, one thread)`);
+  line("one plan (verdict and verified plan)", `${(planMs / n).toFixed(0)} ms`, "mean");
+  line("one departure (check, assistance, both masses)", `${(departureMs / n).toFixed(0)} ms`, `mean; ${searches} mass searches`);
+  target({ target: "a departure's CPU ≤ 1.5 × one plan of the same train", figure: `${(departureMs / planMs).toFixed(2)}×`, ratio: departureMs / planMs / 1.5, note: `Σ departures ÷ Σ plans; worst single departure ${worst.toFixed(1)}×` });
 }
