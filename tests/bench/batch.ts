@@ -63,7 +63,8 @@ export function run(): void {
   const dir = mkdtempSync(join(tmpdir(), "taut-bench-"));
   try {
     const rnd = seeded(20261012);
-    const cases = builtinCaseJson.map((j) => `${repo}profiles/cases/${(j as { id: string }).id}.json`);
+    // Built-in cases by id (a case file outside the departures file's folder is refused).
+    const cases = builtinCaseJson.map((j) => (j as { id: string }).id);
     const rows = ["id,case,rail,sand"];
     for (let k = 1; k <= 500; k++) {
       const c = cases[Math.floor(rnd() * cases.length)]!;
