@@ -5,3 +5,7 @@ export * from "./conditionMargins.js";
 export * from "./assistPlacement.js";
 export * from "./assistance.js";
 export * from "./divideTrain.js";
+export * from "./recording.js";
+export * from "./reviewFit.js";
+export * from "./reviewSlips.js";
+export * from "./startReview.js";
