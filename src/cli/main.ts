@@ -13,8 +13,9 @@ import { simulateCommand } from "./commands/simulate.js";
 import { checkCommand } from "./commands/check.js";
 import { tableCommand } from "./commands/table.js";
 import { notesCommand } from "./commands/notes.js";
+import { reviewCommand } from "./commands/review.js";
 
-const COMMANDS: Command[] = [planCommand, checkCommand, tableCommand, simulateCommand, notesCommand];
+const COMMANDS: Command[] = [planCommand, checkCommand, tableCommand, simulateCommand, reviewCommand, notesCommand];
 
 /** Register a command (each issue's command adds itself here). */
 export function commands(): readonly Command[] {

@@ -39,7 +39,9 @@ export const FACTOR_RANGE: readonly [number, number] = [0.5, 2];
 /** Seconds of the recording before its moment of start that are still compared (the standing train). */
 const BEFORE_START_S = 10;
 /** Gauss–Newton iterations at most. */
-const MAX_ITERATIONS = 8;
+const MAX_ITERATIONS = 6;
+/** A step on a factor smaller than this ends the search (a tenth of the ±0.05 the fit is asked to meet). */
+const CONVERGED = 0.005;
 /** |correlation| of the joint estimates beyond which mass and effort are not told apart. */
 export const INSEPARABLE_CORRELATION = 0.9;
 
@@ -208,13 +210,18 @@ export function fitFactors(runs: ReviewRuns, free: readonly Free[], start: Facto
   let r = runs.residuals(curve, offset);
   let sse = sumSq(r);
   let jac: number[][] = [];
+  let prev: { f: Factors; curve: RunCurve } | null = null;
   for (let it = 0; it < MAX_ITERATIONS; it++) {
     jac = free.map((k) => {
-      const g = { ...f, [k]: f[k] + STEP };
-      const cg = runs.run(g);
+      // One factor free and the last step long enough: the secant through the last two points is the
+      // derivative (a run saved per iteration); otherwise a forward difference.
+      const d = prev ? f[k] - prev.f[k] : 0;
+      const secant = prev !== null && free.length === 1 && Math.abs(d) >= STEP / 4;
+      const cg = secant ? prev!.curve : runs.run({ ...f, [k]: f[k] + STEP });
+      const h = secant ? -d : STEP;
       // The offset is held while a factor moves (it has its own column).
       const rg = runs.residuals(cg, offset);
-      return rg.map((x, i) => (x - r[i]!) / STEP);
+      return rg.map((x, i) => (x - r[i]!) / h);
     });
     if (offsetFree) jac.push(runs.accelerations(curve, offset).map((a) => -a));
     const step = solveNormal(jac, r);
@@ -232,13 +239,14 @@ export function fitFactors(runs: ReviewRuns, free: readonly Free[], start: Facto
       const sg = sumSq(rg);
       if (sg <= sse) {
         const moved = Math.max(...free.map((k) => Math.abs(g[k] - f[k])));
+        prev = { f, curve };
         f = g;
         curve = cg;
         offset = og;
         r = rg;
         sse = sg;
         accepted = true;
-        if (moved < 0.002) it = MAX_ITERATIONS;
+        if (moved < CONVERGED) it = MAX_ITERATIONS;
         break;
       }
     }
