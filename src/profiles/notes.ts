@@ -1,33 +1,78 @@
 /**
  * Shareable location-note files: a single note (`taut/location@1`) or a bundle of notes
- * (`taut/notes-bundle@1`). A bundle is validated as a whole: one bad note rejects the file, and the
+ * (`taut/notes-bundle@2`, which also carries the notes' Start reviews; a `taut/notes-bundle@1` file, from
+ * before reviews, is migrated on reading: its notes, no reviews). A bundle is validated as a whole: one bad note rejects the file, and the
  * issue names the note's index and the field path, so a library is never half-updated from a file.
  */
 import * as z from "zod/mini";
 import { fromZodIssues, type FieldIssue, type RawIssue } from "./issues.js";
 import { fileKind, kindText, parseLocationNote, parseJsonText } from "./parse.js";
 import { quoted } from "./text.js";
-import { locationNoteSchema, type LocationNoteFile } from "./schemas.js";
+import { locationNoteSchema, railConditionSchema, type LocationNoteFile } from "./schemas.js";
 
-export const NOTES_BUNDLE_SCHEMA = "taut/notes-bundle@1";
+export const NOTES_BUNDLE_SCHEMA = "taut/notes-bundle@2";
+/** The bundle before Start reviews: notes only. Still read (migrated), no longer written. */
+export const NOTES_BUNDLE_SCHEMA_V1 = "taut/notes-bundle@1";
 export const LOCATION_NOTE_SCHEMA = "taut/location@1";
+
+const DATE = /^\d{4}-\d{2}-\d{2}$/;
+const finite = z.number().check(z.refine(Number.isFinite, "must be a finite number"));
+/** A fitted factor and its 95 % interval. */
+const factorSchema = z.object({ value: finite, low: finite, high: finite });
+
+/**
+ * A Start review kept as evidence beside a location note: when, on what rail, which train, the observed
+ * factors with their intervals, and a small thumbnail of the recorded speed curve.
+ */
+export const startReviewSchema = z.object({
+  id: z.string().check(z.minLength(1), z.maxLength(80)),
+  /** The note (location id) it belongs to. */
+  location: z.string().check(z.minLength(1), z.maxLength(80)),
+  date: z.string().check(z.regex(DATE, "must be a date, YYYY-MM-DD")),
+  rail: railConditionSchema,
+  /** The train, in the trainer's words (or the case's label). */
+  train: z.string().check(z.minLength(1), z.maxLength(200)),
+  initials: z.optional(z.string().check(z.maxLength(10))),
+  massFactor: factorSchema,
+  effortFactor: z.optional(factorSchema),
+  /** Whether the recording told mass and effort apart (absent: only the mass was fitted). */
+  separable: z.optional(z.boolean()),
+  plannedVerdict: z.enum(["starts", "marginal", "needs-assistance"]),
+  replannedVerdict: z.enum(["starts", "marginal", "needs-assistance"]),
+  /** The recorded speed curve, a few dozen points from the moment of start. */
+  thumbnail: z.object({ time_s: z.array(finite).check(z.maxLength(120)), speed_kmh: z.array(finite).check(z.maxLength(120)) }),
+  comment: z.optional(z.string().check(z.maxLength(2000))),
+});
+export type StartReviewFile = z.infer<typeof startReviewSchema>;
 
 export const notesBundleSchema = z.object({
   schema: z.literal(NOTES_BUNDLE_SCHEMA),
   /** When the bundle was written, ISO 8601 date-time (UTC). */
   exported: z.iso.datetime({ offset: true, message: "must be an ISO date and time, e.g. 2026-10-12T08:30:00Z" }),
   notes: z.array(locationNoteSchema),
+  reviews: z.array(startReviewSchema),
 });
 export type NotesBundleFile = z.infer<typeof notesBundleSchema>;
 
-/** A notes file read and checked: the notes it holds, and whether it was one note or a bundle. */
+/** A notes file read and checked: the notes it holds (and their reviews), and whether it was one note or a bundle. */
 export type NotesFileResult =
-  | { ok: true; kind: "note" | "bundle"; notes: LocationNoteFile[]; exported?: string }
+  | { ok: true; kind: "note" | "bundle"; notes: LocationNoteFile[]; reviews: StartReviewFile[]; exported?: string; migratedFrom?: string }
   | { ok: false; message: string; issues: FieldIssue[] };
 
-/** Validate an already-parsed bundle: schema, every note, and ids unique within the bundle. */
+/**
+ * A version-1 bundle as version 2: the same notes and no reviews (version 1 had none). Anything that is
+ * not a version-1 bundle is returned as it is, for the version-2 checks to judge.
+ */
+export function migrateNotesBundle(data: unknown): unknown {
+  if (!data || typeof data !== "object" || Array.isArray(data)) return data;
+  const d = data as Record<string, unknown>;
+  if (d.schema !== NOTES_BUNDLE_SCHEMA_V1) return data;
+  return { ...d, schema: NOTES_BUNDLE_SCHEMA, reviews: [] };
+}
+
+/** Validate an already-parsed bundle: schema, every note and review, ids unique, each review's note present. */
 export function parseNotesBundle(data: unknown): { ok: true; value: NotesBundleFile } | { ok: false; issues: FieldIssue[] } {
-  const r = notesBundleSchema.safeParse(data, { reportInput: true });
+  const r = notesBundleSchema.safeParse(migrateNotesBundle(data), { reportInput: true });
   if (!r.success) return { ok: false, issues: fromZodIssues(r.error.issues as ReadonlyArray<RawIssue>) };
   const seen = new Map<string, number>();
   const issues: FieldIssue[] = [];
@@ -35,6 +80,12 @@ export function parseNotesBundle(data: unknown): { ok: true; value: NotesBundleF
     const first = seen.get(n.id);
     if (first !== undefined) issues.push({ path: `notes[${k}].id`, message: `repeats the id of note ${first + 1} ("${n.id}"); ids must be unique in a bundle` });
     else seen.set(n.id, k);
+  });
+  const reviewIds = new Set<string>();
+  r.data.reviews.forEach((v, k) => {
+    if (!seen.has(v.location)) issues.push({ path: `reviews[${k}].location`, message: `names the note "${v.location}", which is not in the bundle` });
+    if (reviewIds.has(v.id)) issues.push({ path: `reviews[${k}].id`, message: `repeats the id of another review ("${v.id}")` });
+    reviewIds.add(v.id);
   });
   return issues.length > 0 ? { ok: false, issues } : { ok: true, value: r.data };
 }
@@ -59,15 +110,15 @@ export function readNotesText(text: string): NotesFileResult {
 /** As `readNotesText`, for data already parsed from JSON. */
 export function readNotesData(data: unknown): NotesFileResult {
   const kind = fileKind(data);
-  if (kind === NOTES_BUNDLE_SCHEMA) {
+  if (kind === NOTES_BUNDLE_SCHEMA || kind === NOTES_BUNDLE_SCHEMA_V1) {
     const r = parseNotesBundle(data);
     if (!r.ok) return { ok: false, message: bundleHeadline(r.issues, data), issues: r.issues };
-    return { ok: true, kind: "bundle", notes: r.value.notes, exported: r.value.exported };
+    return { ok: true, kind: "bundle", notes: r.value.notes, reviews: r.value.reviews, exported: r.value.exported, ...(kind === NOTES_BUNDLE_SCHEMA_V1 ? { migratedFrom: kind } : {}) };
   }
   if (kind === LOCATION_NOTE_SCHEMA) {
     const r = parseLocationNote(data);
     if (!r.ok) return { ok: false, message: `The location note ${nameText(data)} is not valid. Nothing was changed.`, issues: r.issues };
-    return { ok: true, kind: "note", notes: [r.value] };
+    return { ok: true, kind: "note", notes: [r.value], reviews: [] };
   }
   if (kind === undefined) {
     return {
@@ -113,9 +164,22 @@ function nameOf(x: unknown): string | undefined {
   return undefined;
 }
 
-/** A bundle of notes written now (or at `now`). */
-export function makeNotesBundle(notes: readonly LocationNoteFile[], now: Date = new Date()): NotesBundleFile {
-  return { schema: NOTES_BUNDLE_SCHEMA, exported: now.toISOString(), notes: [...notes] };
+/** A bundle of notes (and the reviews of those notes) written now (or at `now`). */
+export function makeNotesBundle(notes: readonly LocationNoteFile[], now: Date = new Date(), reviews: readonly StartReviewFile[] = []): NotesBundleFile {
+  const ids = new Set(notes.map((n) => n.id));
+  return { schema: NOTES_BUNDLE_SCHEMA, exported: now.toISOString(), notes: [...notes], reviews: reviews.filter((r) => ids.has(r.location)) };
+}
+
+/**
+ * The observed factor of a location's reviews: the median of their mass factors (one odd start does not
+ * move a median), with how many reviews it rests on. Shown as observed, beside the model; never applied
+ * silently. Null without reviews.
+ */
+export function observedMassFactor(reviews: readonly StartReviewFile[]): { median: number; reviews: number } | null {
+  if (reviews.length === 0) return null;
+  const xs = reviews.map((r) => r.massFactor.value).sort((a, b) => a - b);
+  const m = xs.length >> 1;
+  return { median: xs.length % 2 ? xs[m]! : 0.5 * (xs[m - 1]! + xs[m]!), reviews: xs.length };
 }
 
 /** The note's latest revision entry: the latest date; of equal dates, the one listed last. */

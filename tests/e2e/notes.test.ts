@@ -121,7 +121,7 @@ describe("Location notes in the browser", () => {
   it("exports, clears, imports, and gets the same notes back", async () => {
     await openNotes();
     const before = await exportAll();
-    expect(before.bundle.schema).toBe("taut/notes-bundle@1");
+    expect(before.bundle.schema).toBe("taut/notes-bundle@2");
     const mine = before.bundle.notes.find((n) => n.name === NAME);
     expect(mine?.segments).toEqual([
       { from_m: 0, length_m: 1000, gradient_permille: 6, curveRadius_m: 0 },

@@ -19,9 +19,9 @@ describe("reading a notes file", () => {
   it("reads a bundle and a single note", () => {
     const b = makeNotesBundle([sampleNote()], new Date("2026-06-01T12:00:00Z"));
     const r = readNotesText(JSON.stringify(b));
-    expect(r).toEqual({ ok: true, kind: "bundle", notes: [sampleNote()], exported: "2026-06-01T12:00:00.000Z" });
+    expect(r).toEqual({ ok: true, kind: "bundle", notes: [sampleNote()], reviews: [], exported: "2026-06-01T12:00:00.000Z" });
     const one = readNotesText(JSON.stringify(sampleNote()));
-    expect(one).toEqual({ ok: true, kind: "note", notes: [sampleNote()] });
+    expect(one).toEqual({ ok: true, kind: "note", notes: [sampleNote()], reviews: [] });
   });
 
   it("refuses a bundle repeating an id", () => {
@@ -42,7 +42,7 @@ describe("reading a notes file", () => {
 
   it("names the schema of a foreign file and of a file with none", () => {
     const foreign = readNotesText(JSON.stringify({ schema: "taut/start-case@1" }));
-    expect(foreign.ok === false && foreign.message).toBe("This is a \"taut/start-case@1\" file, not location notes (taut/notes-bundle@1 or taut/location@1). Nothing was changed.");
+    expect(foreign.ok === false && foreign.message).toBe("This is a \"taut/start-case@1\" file, not location notes (taut/notes-bundle@2 or taut/location@1). Nothing was changed.");
     const none = readNotesText(JSON.stringify([1, 2, 3]));
     expect(none.ok === false && none.message).toContain('it has no "schema" field');
     const empty = readNotesText("   ");
@@ -87,7 +87,7 @@ describe("export and import", () => {
 
   for (const [what, text, expected] of [
     ["a truncated file", () => JSON.stringify(makeNotesBundle([sampleNote({ id: "new-one" })])).slice(0, 180), "The file is not complete JSON: it may have been cut short while copying or downloading. Nothing was changed."],
-    ["a file of another kind", () => JSON.stringify({ schema: "taut/locomotive@1", id: "x" }), "This is a \"taut/locomotive@1\" file, not location notes (taut/notes-bundle@1 or taut/location@1). Nothing was changed."],
+    ["a file of another kind", () => JSON.stringify({ schema: "taut/locomotive@1", id: "x" }), "This is a \"taut/locomotive@1\" file, not location notes (taut/notes-bundle@2 or taut/location@1). Nothing was changed."],
     [
       "a bundle with one bad note",
       () => JSON.stringify(makeNotesBundle([sampleNote({ id: "new-one" }), sampleNote({ id: "new-two", name: "Bad one (test)", clearAhead_m: -5 })])),
