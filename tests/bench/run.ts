@@ -13,12 +13,14 @@ import { run as benchBatch } from "./batch.js";
 import { run as benchBundle } from "./bundle.js";
 import { run as benchFirstPlan } from "./firstPlan.js";
 import { run as benchNotesLibrary } from "./notesLibrary.js";
+import { benchReview } from "./review.js";
 import { printTargets } from "./util.js";
 
 const quick = process.argv.includes("--quick");
 console.log(`Taut benchmarks — Node ${process.version}, ${availableParallelism()} cores, load ${loadavg().map((x) => x.toFixed(1)).join(" ")}, ${new Date().toISOString()}`);
 benchDynamics({ compare: !quick });
 benchPlanner();
+benchReview();
 benchStartup();
 benchBatch();
 await benchBundle();
