@@ -5,15 +5,18 @@
  * hazards as plain lines of text, the usual rail condition as a map from season to condition, and a
  * single "last revised" date and initials instead of a revision history.
  *
- * Version 2 (current) keeps each note as a whole `taut/location@1` file inside a record that says
- * where it came from and when it was saved, and adds a `meta` store (last export, demo notes added).
+ * Version 2 keeps each note as a whole `taut/location@1` file inside a record that says where it came
+ * from and when it was saved, and adds a `meta` store (last export, demo notes added).
+ *
+ * Version 3 (current) adds a `reviews` store: Start reviews kept beside the notes, by id, indexed by the
+ * note they belong to. Notes are not touched by the step.
  */
 import { parseLocationNote } from "../profiles/parse.js";
 import { formatIssues } from "../profiles/issues.js";
 import type { NoteRecord } from "./recordTypes.js";
 import { RAIL_CONDITIONS } from "../core/physics/types.js";
 
-export const NOTES_DB_VERSION = 2;
+export const NOTES_DB_VERSION = 3;
 
 /** A version-1 record, as version 1 wrote it. */
 export interface NoteRecordV1 {

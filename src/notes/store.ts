@@ -5,7 +5,7 @@
  */
 import { openDB, type DBSchema, type IDBPDatabase, type IDBPTransaction } from "idb";
 import type { FieldIssue } from "../profiles/issues.js";
-import { makeNotesBundle, type NotesBundleFile } from "../profiles/notes.js";
+import { makeNotesBundle, startReviewSchema, type NotesBundleFile, type StartReviewFile } from "../profiles/notes.js";
 import { parseLocationNote } from "../profiles/parse.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { mergeWrites, previewMerge, type ConflictChoice, type ImportConflict, type MergeWrites } from "./merge.js";
@@ -46,6 +46,8 @@ type MetaKey = keyof MetaValues;
 interface NotesDB extends DBSchema {
   notes: { key: string; value: NoteRecord };
   meta: { key: MetaKey; value: string };
+  /** Start reviews kept as evidence beside the notes (schema version 3), by review id. */
+  reviews: { key: string; value: StartReviewFile; indexes: { location: string } };
 }
 
 /** Validated notes and the records that could not be read. */
@@ -125,9 +127,15 @@ export interface NotesStore {
    * Import notes: settle conflicts through `choose`, then write all in one transaction. Notes that come
    * straight from `readNotesText` (validated already, e.g. in a worker) may say so to skip a second check.
    */
-  importBundle(notes: readonly LocationNoteFile[], choose: ChooseConflicts, opts?: { validated?: boolean }): Promise<ImportOutcome>;
-  /** A bundle of all notes (or those with the given ids); exporting all is remembered as the last export. */
+  importBundle(notes: readonly LocationNoteFile[], choose: ChooseConflicts, opts?: { validated?: boolean; reviews?: readonly StartReviewFile[] }): Promise<ImportOutcome>;
+  /** A bundle of all notes (or those with the given ids) with their reviews; exporting all is remembered as the last export. */
   exportBundle(ids?: readonly string[], now?: Date): Promise<NotesBundleFile>;
+  /** The Start reviews kept for a note, oldest first; damaged records are left out. */
+  reviews(location: string): Promise<StartReviewFile[]>;
+  /** Keep a review beside its note (which must exist); false with the reason when it cannot be. */
+  addReview(review: StartReviewFile): Promise<{ ok: true } | { ok: false; message: string }>;
+  /** Remove a review; true when there was one. */
+  deleteReview(id: string): Promise<boolean>;
   /** ISO date-time of the last export of the whole library. */
   lastExport(): Promise<string | undefined>;
   /** The export reminder; give the list when it has just been read, to spare reading it again. */
@@ -178,7 +186,7 @@ export async function openNotesStore(opts: OpenOptions = {}): Promise<NotesStore
 }
 
 /** Create or migrate the stores, step by step from `oldVersion` (0 = new database). */
-function upgradeNotesDb(db: IDBPDatabase<NotesDB>, oldVersion: number, tx: IDBPTransaction<NotesDB, ("notes" | "meta")[], "versionchange">, demos: readonly LocationNoteFile[], now: Date): void {
+function upgradeNotesDb(db: IDBPDatabase<NotesDB>, oldVersion: number, tx: IDBPTransaction<NotesDB, ("notes" | "meta" | "reviews")[], "versionchange">, demos: readonly LocationNoteFile[], now: Date): void {
   if (oldVersion < 1) db.createObjectStore("notes", { keyPath: "id" });
   if (oldVersion < 2) {
     db.createObjectStore("meta");
@@ -189,10 +197,12 @@ function upgradeNotesDb(db: IDBPDatabase<NotesDB>, oldVersion: number, tx: IDBPT
       void tx.objectStore("meta").put(now.toISOString(), "demosAdded");
     }
   }
+  // Version 3 adds the reviews beside the notes; the notes themselves are unchanged.
+  if (oldVersion < 3) db.createObjectStore("reviews", { keyPath: "id" }).createIndex("location", "location");
 }
 
 /** Rewrite every version-1 record in place; one that cannot be carried over stays as it was and is reported when read. */
-async function migrateFromV1(tx: IDBPTransaction<NotesDB, ("notes" | "meta")[], "versionchange">): Promise<void> {
+async function migrateFromV1(tx: IDBPTransaction<NotesDB, ("notes" | "meta" | "reviews")[], "versionchange">): Promise<void> {
   let cursor = await tx.objectStore("notes").openCursor();
   while (cursor) {
     const m = migrateV1Record(cursor.value as unknown);
@@ -472,8 +482,13 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
       open();
       const at = now();
       const records = writes.put.map((n) => makeRecord(n, "imported", at, (valid.get(n.id)?.rev ?? 0) + 1));
+      // Reviews come with the notes they belong to: those of notes written now, or of notes the library
+      // already holds unchanged (the same note, or mine kept); never of a note that is not there.
+      const present = new Set([...writes.put.map((n) => n.id), ...valid.keys()]);
+      const reviews = (opts.reviews ?? []).filter((r) => present.has(r.location) && startReviewSchema.safeParse(r).success);
       // One transaction for every write: if any write fails, the transaction aborts and none is kept.
-      const tx = db.transaction(["notes", "meta"], "readwrite");
+      const tx = db.transaction(["notes", "meta", "reviews"], "readwrite") as unknown as IDBPTransaction<NotesDB, ("notes" | "meta")[], "readwrite">;
+      const reviewStore = (tx as unknown as IDBPTransaction<NotesDB, ("notes" | "meta" | "reviews")[], "readwrite">).objectStore("reviews");
       const pending: Promise<unknown>[] = [observed(tx.done)];
       let count: { before: string; after: string } | undefined;
       try {
@@ -486,6 +501,7 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
           pending.push(...batch);
           await batch[batch.length - 1];
         }
+        for (const r of reviews) pending.push(observed(reviewStore.put(r)));
         await Promise.all(pending);
         count = await counting;
       } catch (e) {
@@ -505,12 +521,43 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
     async exportBundle(ids, at = now()) {
       const { notes } = await this.list();
       const wanted = ids ? notes.filter((s) => ids.includes(s.note.id)) : notes;
+      const all = await db.getAll("reviews");
       const bundle = makeNotesBundle(
         wanted.map((s) => s.note),
         at,
+        all.filter((r) => startReviewSchema.safeParse(r).success).sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : 0)),
       );
       if (!ids) await db.put("meta", bundle.exported, "lastExport");
       return bundle;
+    },
+
+    async reviews(location) {
+      open();
+      const raw = await db.getAllFromIndex("reviews", "location", location);
+      return raw.filter((r) => startReviewSchema.safeParse(r).success).sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : 0));
+    },
+
+    async addReview(review) {
+      open();
+      const parsed = startReviewSchema.safeParse(review);
+      if (!parsed.success) return { ok: false, message: `The review is not valid (${parsed.error.issues[0]?.path.join(".")}: ${parsed.error.issues[0]?.message}); nothing was saved.` };
+      const tx = db.transaction(["notes", "reviews"], "readwrite");
+      if ((await tx.objectStore("notes").getKey(review.location)) === undefined) {
+        await tx.done;
+        return { ok: false, message: `There is no note "${review.location}" to keep the review beside; nothing was saved.` };
+      }
+      await tx.objectStore("reviews").put(parsed.data);
+      await tx.done;
+      return { ok: true };
+    },
+
+    async deleteReview(id) {
+      open();
+      const tx = db.transaction("reviews", "readwrite");
+      const had = (await tx.store.getKey(id)) !== undefined;
+      if (had) await tx.store.delete(id);
+      await tx.done;
+      return had;
     },
 
     async lastExport() {

@@ -120,7 +120,7 @@ describe("opening a version-1 database", () => {
 
     const db = await openDB(name);
     expect(db.version).toBe(NOTES_DB_VERSION);
-    expect([...db.objectStoreNames].sort()).toEqual(["meta", "notes"]);
+    expect([...db.objectStoreNames].sort()).toEqual(["meta", "notes", "reviews"]);
     db.close();
   });
 

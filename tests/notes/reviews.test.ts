@@ -4,9 +4,10 @@
  * is refused whole, and the observed factor is the median of the reviews' mass factors (the median of an
  * odd count is the middle value, of an even count the mean of the two middle values — common practice).
  */
+import { openDB } from "idb";
 import { describe, expect, it } from "vitest";
 import { makeNotesBundle, migrateNotesBundle, observedMassFactor, readNotesText, type StartReviewFile } from "../../src/profiles/notes.js";
-import { sampleNote } from "./helpers.js";
+import { freshName, freshStore, sampleNote } from "./helpers.js";
 
 function review(over: Partial<StartReviewFile> = {}): StartReviewFile {
   const note = sampleNote();
@@ -68,5 +69,48 @@ describe("notes bundles with reviews", () => {
     const f = (v: number) => review({ massFactor: { value: v, low: v - 0.05, high: v + 0.05 } });
     expect(observedMassFactor([f(1.3), f(1.05), f(1.1)])).toEqual({ median: 1.1, reviews: 3 });
     expect(observedMassFactor([f(1.3), f(1.05), f(1.1), f(0.95)])!.median).toBeCloseTo(1.075, 12);
+  });
+});
+
+describe("reviews in the notes store (database version 3)", () => {
+  it("a review kept beside a note goes out with the note's export and comes back with its import", async () => {
+    const { store } = await freshStore();
+    expect((await store.put(sampleNote(), "mine")).ok).toBe(true);
+    expect(await store.addReview(review())).toEqual({ ok: true });
+    expect(await store.addReview(review({ id: "stray", location: "no-such-note" }))).toMatchObject({ ok: false });
+    expect(await store.addReview({ ...review(), date: "yesterday" })).toMatchObject({ ok: false });
+    const bundle = await store.exportBundle(undefined, new Date("2026-12-01T08:00:00Z"));
+    expect(bundle.reviews).toEqual([review()]);
+    const read = readNotesText(JSON.stringify(bundle));
+    if (!read.ok) throw new Error(read.message);
+    const { store: other } = await freshStore();
+    const outcome = await other.importBundle(read.notes, () => null, { validated: true, reviews: read.reviews });
+    expect(outcome.status).toBe("applied");
+    expect(await other.reviews(sampleNote().id)).toEqual([review()]);
+    expect(await other.exportBundle(undefined, new Date("2026-12-01T08:00:00Z"))).toEqual(bundle);
+    expect(await other.deleteReview(review().id)).toBe(true);
+    expect(await other.reviews(sampleNote().id)).toEqual([]);
+  });
+
+  it("a database of version 2 opens at version 3 with its notes as they were and no reviews", async () => {
+    const name = freshName();
+    const note = sampleNote();
+    const v2 = await openDB(name, 2, {
+      upgrade(d) {
+        d.createObjectStore("notes", { keyPath: "id" });
+        d.createObjectStore("meta");
+      },
+    });
+    await v2.put("notes", { id: note.id, origin: "mine", savedAt: "2026-10-01T00:00:00.000Z", rev: 1, note });
+    v2.close();
+    const { store } = await freshStore({ name });
+    const got = await store.get(note.id);
+    expect(got.status === "ok" && got.saved.note).toEqual(note);
+    expect(await store.reviews(note.id)).toEqual([]);
+    store.close();
+    const raw = await openDB(name);
+    expect(raw.version).toBe(3);
+    expect([...raw.objectStoreNames]).toEqual(expect.arrayContaining(["notes", "meta", "reviews"]));
+    raw.close();
   });
 });

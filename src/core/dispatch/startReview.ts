@@ -132,9 +132,9 @@ export function reviewStart(c: StartCase, recording: Recording): StartReviewResu
     };
   };
   const planned = measure(ps.timeS, ps.speedMps, ps.locoTravelM, planStartS);
-  // The plan's series may end a sample short of its target; the plan's own time to target then says when.
+  // The plan's series ends where the plan reaches its target, which may fall between two of its samples.
   if (planned.timeToTargetS === null && plan.timeToTargetS !== null && planStartS !== null) {
-    const reach = powerS + plan.timeToTargetS;
+    const reach = ps.timeS[ps.timeS.length - 1]!;
     planned.timeToTargetS = reach - planStartS;
     planned.distanceToTargetM = interpolate(ps.timeS, ps.locoTravelM, reach) - interpolate(ps.timeS, ps.locoTravelM, planStartS);
   }

@@ -167,7 +167,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       setNotice({ kind: "problem", text: `${fileName}: ${read.message}`, details: issueLines(read.issues) });
       return;
     }
-    const outcome = await guarded((s) => s.importBundle(read.notes, ask, { validated }));
+    const outcome = await guarded((s) => s.importBundle(read.notes, ask, { validated, reviews: read.reviews }));
     if (outcome === undefined) return;
     if (outcome.status === "cancelled") {
       setNotice({ kind: "done", text: `Import of ${fileName} cancelled; nothing was changed.` });
