@@ -59,7 +59,7 @@ export function App(props: { state: AppContextValue; screens: readonly ScreenEnt
         </main>
         <Show when={!full()}>
           <nav class="tabs" aria-label="Screens">
-            <For each={props.screens}>
+            <For each={props.screens.filter((x) => !x.noTab)}>
               {(x) => (
                 <a class="tab" href={`#/${x.id}`} aria-current={x.id === current().id ? "page" : undefined} onClick={(e) => (e.preventDefault(), s.nav.go(x.id))}>
                   {typeof x.icon === "string" ? <Icon name={x.icon} size={28} /> : x.icon()}

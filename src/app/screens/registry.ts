@@ -4,6 +4,7 @@
  * line here, before Settings. Every screen but Start plan is loaded on demand, so the page that shows the
  * first plan carries only what it needs:
  *   { id: "location-notes", title: "Location notes", icon: "notes", component: lazy(() => import("./LocationNotes/index.js")) },
+  { id: "start-review", title: "Start review", icon: "notes", component: lazy(() => import("./StartReview/index.js")), noTab: true },
  * Once the first plan is on screen, the app fetches the lazy screens in the background (`preloadScreens`),
  * so a tab opens at once and offline. Icons drawn for the screens to come: "assist" (Assistance
  * check), "departures" (Departures), "table" (Load table), "notes" (Location notes).
@@ -21,6 +22,8 @@ export interface ScreenEntry {
   component: Component;
   /** Hides the top bar and the tabs (Cab steps). */
   fullScreen?: boolean;
+  /** Reached from another screen, not from a tab (Start review, from a location note). */
+  noTab?: boolean;
 }
 
 export const SCREENS: readonly ScreenEntry[] = [
@@ -30,6 +33,7 @@ export const SCREENS: readonly ScreenEntry[] = [
   { id: "departures", title: "Departures", icon: "departures", component: lazy(() => import("./Departures/index.js")) },
   { id: "load-table", title: "Load table", icon: "table", component: lazy(() => import("./LoadTable/index.js")) },
   { id: "location-notes", title: "Location notes", icon: "notes", component: lazy(() => import("./LocationNotes/index.js")) },
+  { id: "start-review", title: "Start review", icon: "notes", component: lazy(() => import("./StartReview/index.js")), noTab: true },
   { id: "settings", title: "Settings", icon: "settings", component: lazy(() => import("./Settings/index.js")) },
 ];
 

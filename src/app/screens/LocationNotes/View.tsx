@@ -44,6 +44,8 @@ export interface ViewProps {
   onExportNote: () => void;
   onEdit: () => void;
   onPrint: () => void;
+  /** Open the Start review place for the note shown. */
+  onReview?: (id: string) => void;
   /** When the card is printed, "YYYY-MM-DD HH:MM" (refreshed just before each print). */
   printedAt: string;
   /** A print was started (the browser's own command) before the card was complete. */
@@ -166,6 +168,11 @@ export function View(props: ViewProps): JSX.Element {
                 <button type="button" class="button" onClick={() => props.onEdit()}>
                   Edit note
                 </button>
+                <Show when={props.onReview}>
+                  <button type="button" class="button" onClick={() => props.onReview?.(note().id)}>
+                    Start review
+                  </button>
+                </Show>
                 <button type="button" class="button" onClick={() => props.onClose()}>
                   Back to the library
                 </button>

@@ -17,6 +17,7 @@ import { notifyLocationsChanged } from "../../locations.js";
 import { read, safeLocalStorage, write } from "../../state/createSettings.js";
 import { declarePrintStatus, printStamp } from "../../state/printStatus.js";
 import { APP_VERSION } from "../../version.js";
+import { setReviewTarget } from "../../state/reviewTarget.js";
 import { cardComplete } from "./Card.js";
 import { createNoteEditor } from "./createNoteEditor.js";
 import { createNotesLibrary, downloadBundle } from "./createNotesLibrary.js";
@@ -392,6 +393,10 @@ export function LocationNotesScreen(): JSX.Element {
       }
       onEdit={() => setMode("edit")}
       onPrint={() => window.print()}
+      onReview={(id) => {
+        setReviewTarget(id);
+        app.nav.go("start-review");
+      }}
     />
     <Show when={saveConflict()}>{(c) => <SaveConflictDialog conflict={c().conflict} onChoose={(choice) => void task(() => settle(choice))} />}</Show>
     </>

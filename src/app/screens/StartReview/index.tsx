@@ -1,0 +1,155 @@
+/**
+ * Start review (wiring): the note chosen in Location notes, the start case from Start plan placed at that
+ * note's location, the recording read and reviewed, and the note's reviews in the device's notes store.
+ * The review runs on the page's thread after a paint (a few hundred milliseconds for a short train, a few
+ * seconds for a long one).
+ */
+import { createMemo, createResource, createSignal, type JSX } from "solid-js";
+import { reviewStart, RecordingRejected, type StartReviewResult } from "../../../core/dispatch/index.js";
+import { deviceNotesStore } from "../../../notes/index.js";
+import { locationFromNote } from "../../../profiles/convert.js";
+import { observedMassFactor, type StartReviewFile } from "../../../profiles/notes.js";
+import { problemText, readRecording, RecordingFileError, type ReadRecording } from "../../../profiles/recording.js";
+import { reviewReport } from "../../../profiles/reviewReport.js";
+import { useApp } from "../../context.js";
+import { reviewTarget } from "../../state/reviewTarget.js";
+import { StartReviewView, type KeepForm } from "./View.js";
+
+const today = () => new Date().toISOString().slice(0, 10);
+
+/** About forty points of the recorded speed from the moment of start, for the note's thumbnail. */
+function thumbnail(r: StartReviewResult): StartReviewFile["thumbnail"] {
+  const o = r.overlay;
+  const step = Math.max(1, Math.ceil(o.timeS.length / 40));
+  const keep = o.timeS.map((_, i) => i).filter((i) => i % step === 0 || i === o.timeS.length - 1);
+  return { time_s: keep.map((i) => o.timeS[i]!), speed_kmh: keep.map((i) => Math.round(o.recordedSpeedMps[i]! * 360) / 100) };
+}
+
+export default function StartReview(): JSX.Element {
+  const app = useApp();
+  const noteId = reviewTarget;
+  const [note] = createResource(noteId, async (id) => {
+    const s = await deviceNotesStore();
+    const r = await s.get(id);
+    return r.status === "ok" ? r.saved.note : null;
+  });
+  const [version, setVersion] = createSignal(0);
+  const [reviews] = createResource(
+    () => [noteId(), version()] as const,
+    async ([id]) => (id ? (await deviceNotesStore()).reviews(id) : []),
+  );
+  const startCase = createMemo(() => {
+    const c = app.draft.checked();
+    const n = note();
+    if (!c.ok || !n) return null;
+    return { ...c.value, location: locationFromNote(n) };
+  });
+  const [busy, setBusy] = createSignal(false);
+  const [problem, setProblem] = createSignal<string | null>(null);
+  const [result, setResult] = createSignal<{ r: StartReviewResult; read: ReadRecording } | null>(null);
+  const [kept, setKept] = createSignal(false);
+  const [form, setForm] = createSignal<KeepForm>({ date: today(), rail: "dry", train: "", initials: "" });
+
+  const blocked = () => {
+    if (!noteId()) return "Open a location note and choose Start review there.";
+    if (note.loading) return "Reading the note…";
+    if (!note()) return "The note is not in the library any more.";
+    if (!startCase()) return "Set up the train, locomotives and conditions in Start plan first: the review plans that start at this note's location.";
+    return null;
+  };
+
+  const onFile = (file: File) => {
+    const c = startCase();
+    if (!c) return;
+    setProblem(null);
+    setResult(null);
+    setKept(false);
+    setBusy(true);
+    void file
+      .text()
+      .then(
+        (text) =>
+          new Promise<void>((resolve) =>
+            // Let the page paint "Reviewing…" before the work starts.
+            setTimeout(() => {
+              try {
+                const read = readRecording(file.name, text);
+                const r = reviewStart(c, read.recording);
+                setResult({ r, read });
+                setForm((f) => ({ ...f, rail: c.conditions.rail, train: f.train || `${Math.round(c.train.trailingMassKg / 1000)} t, ${c.train.wagons} wagons` }));
+              } catch (e) {
+                if (e instanceof RecordingFileError) setProblem(`${file.name}: ${e.message}`);
+                else if (e instanceof RecordingRejected) setProblem(`${file.name}: ${e.problems.map(problemText).join("\n")}`);
+                else setProblem(`${file.name}: the review failed (${(e as Error).message || String(e)}).`);
+              }
+              resolve();
+            }, 30),
+          ),
+      )
+      .finally(() => setBusy(false));
+  };
+
+  const onKeep = () => {
+    const res = result();
+    const id = noteId();
+    if (!res || !id) return;
+    const f = form();
+    const r = res.r;
+    const review: StartReviewFile = {
+      id: `${id}-${f.date}-${Date.now().toString(36)}`.slice(0, 80),
+      location: id,
+      date: f.date,
+      rail: f.rail,
+      train: f.train.trim() || "train not named",
+      ...(f.initials.trim() ? { initials: f.initials.trim() } : {}),
+      massFactor: r.massFit.estimates.massFactor!,
+      ...(r.effortFit ? { effortFactor: r.effortFit.estimates.effortFactor! } : {}),
+      ...(r.separable !== null ? { separable: r.separable } : {}),
+      plannedVerdict: r.plan.verdict,
+      replannedVerdict: r.replanned.verdict,
+      thumbnail: thumbnail(r),
+    };
+    setBusy(true);
+    void deviceNotesStore()
+      .then((s) => s.addReview(review))
+      .then((out) => {
+        if (out.ok) {
+          setKept(true);
+          setVersion((v) => v + 1);
+        } else setProblem(out.message);
+      })
+      .finally(() => setBusy(false));
+  };
+
+  const report = createMemo(() => {
+    const res = result();
+    return res ? reviewReport(res.r, res.read, true) : null;
+  });
+
+  return (
+    <StartReviewView
+      noteName={note()?.name ?? null}
+      blocked={blocked()}
+      caseText={(() => {
+        const c = startCase();
+        return c ? `The start case from Start plan (${Math.round(c.train.trailingMassKg / 1000)} t, ${c.train.wagons} wagons, ${c.conditions.rail} rail${c.conditions.sand ? ", sand" : ""}), placed at this note's location.` : "";
+      })()}
+      busy={busy()}
+      problem={problem()}
+      report={report()}
+      form={form()}
+      kept={kept()}
+      reviews={reviews() ?? []}
+      observed={observedMassFactor(reviews() ?? [])}
+      onFile={onFile}
+      onForm={(f) => setForm((old) => ({ ...old, ...f }))}
+      onKeep={onKeep}
+      onDelete={(rid) =>
+        void deviceNotesStore()
+          .then((s) => s.deleteReview(rid))
+          .then(() => setVersion((v) => v + 1))
+      }
+      onBack={() => app.nav.go("location-notes")}
+    />
+  );
+}
