@@ -14,13 +14,13 @@ import { deviceNotesStore } from "../../../src/notes/index.js";
 import { builtinLocations } from "../../../src/profiles/builtin.js";
 import { locationFromNote } from "../../../src/profiles/convert.js";
 import { csvText, simulatedStart } from "../../tools/recordings.js";
-import { renderWithApp } from "../harness.js";
+import { quickTablePool, renderWithApp } from "../harness.js";
 
 describe("Start review place", () => {
   it("reviews a recording against Start plan's case at the note's location and keeps it with the note", async () => {
     const note = builtinLocations[0]!;
     setReviewTarget(note.id);
-    const r = renderWithApp(() => <StartReview />);
+    const r = renderWithApp(() => <StartReview />, { pool: quickTablePool() });
     await waitFor(() => expect(screen.getByLabelText("Recording file")).toBeTruthy(), { timeout: 10_000 });
     const checked = r.harness.state.draft.checked();
     if (!checked.ok) throw new Error("the default case is not valid");
@@ -41,5 +41,28 @@ describe("Start review place", () => {
     expect(kept).toHaveLength(1);
     expect(Math.abs(kept[0]!.massFactor.value - 1.15)).toBeLessThanOrEqual(0.05);
     expect(kept[0]!.thumbnail.time_s.length).toBeGreaterThan(5);
+
+    // The note's load table beside the same masses with the observed factor applied, labelled observed.
+    fireEvent.click(screen.getByRole("button", { name: "Load table with the observed factor" }));
+    await waitFor(() => expect(document.querySelectorAll(".review-table tbody tr").length).toBeGreaterThan(0), { timeout: 30_000 });
+    const f = kept[0]!.massFactor.value;
+    for (const tr of document.querySelectorAll(".review-table tbody tr")) {
+      const [, , model, observed] = [...tr.querySelectorAll("td")].map((td) => td.textContent ?? "");
+      if (model === "none") continue;
+      expect(observed).toMatch(/\(observed\)$/);
+      // A train starting as if f times heavier: the masses on paper that start are the model's ÷ f.
+      expect(Math.abs(Number.parseInt(observed!, 10) - Number(model) / f)).toBeLessThanOrEqual(1);
+    }
+  }, 60_000);
+
+  it("is reached from a note's card, and has no tab of its own", async () => {
+    const note = builtinLocations[1]!;
+    renderWithApp(undefined, { pool: quickTablePool() });
+    expect(screen.queryByRole("link", { name: "Start review" })).toBeNull();
+    fireEvent.click(screen.getByRole("link", { name: "Location notes" }));
+    fireEvent.click(await screen.findByRole("button", { name: `Card of ${note.name}` }, { timeout: 10_000 }));
+    fireEvent.click(await screen.findByRole("button", { name: "Start review" }, { timeout: 10_000 }));
+    await waitFor(() => expect(location.hash).toBe("#/start-review"));
+    expect(await screen.findByRole("heading", { name: `Start review: ${note.name}` }, { timeout: 10_000 })).toBeTruthy();
   }, 60_000);
 });

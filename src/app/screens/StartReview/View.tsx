@@ -9,6 +9,13 @@ import type { ReviewReport } from "../../../profiles/reviewReport.js";
 import type { StartReviewFile } from "../../../profiles/notes.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../../core/physics/types.js";
 
+/** The note's load table, the model's masses and the same with the observed factor, in tonnes (null: none starts). */
+export interface ObservedTable {
+  working: boolean;
+  rows?: Array<{ rail: string; sand: boolean; modelT: number | null; observedT: number | null }>;
+  why?: string;
+}
+
 export interface KeepForm {
   date: string;
   rail: RailCondition;
@@ -33,6 +40,9 @@ export interface StartReviewViewProps {
   onKeep: () => void;
   onDelete: (id: string) => void;
   onBack: () => void;
+  /** The note's load table beside the same masses with the observed factor applied; null until asked. */
+  table: ObservedTable | null;
+  onTable: () => void;
 }
 
 /** A small speed–time sketch: polylines in a fixed box, the first series solid, the others dashed. */
@@ -150,6 +160,42 @@ export function StartReviewView(props: StartReviewViewProps): JSX.Element {
             (each largest mass ÷ {o().median.toFixed(2)}), beside the model, never in its place.
           </p>
         )}
+      </Show>
+      <Show when={props.observed}>
+        <button type="button" class="button" disabled={props.table?.working === true} onClick={() => props.onTable()}>
+          Load table with the observed factor
+        </button>
+        <Show when={props.table?.working}>
+          <p role="status">Working out the note's load table…</p>
+        </Show>
+        <Show when={props.table?.why}>{(why) => <p class="problem">{why()}</p>}</Show>
+        <Show when={props.table?.rows}>
+          {(rows) => (
+            <table class="review-table">
+              <caption>The note's load table (its reference train): the model's largest trailing mass, and the same ÷ the observed factor — observed, not the model.</caption>
+              <thead>
+                <tr>
+                  <th scope="col">Rail</th>
+                  <th scope="col">Sand</th>
+                  <th scope="col">Model, t</th>
+                  <th scope="col">Observed, t</th>
+                </tr>
+              </thead>
+              <tbody>
+                <For each={rows()}>
+                  {(row) => (
+                    <tr>
+                      <td>{row.rail}</td>
+                      <td>{row.sand ? "yes" : "no"}</td>
+                      <td>{row.modelT === null ? "none" : row.modelT}</td>
+                      <td>{row.observedT === null ? "none" : `${row.observedT} (observed)`}</td>
+                    </tr>
+                  )}
+                </For>
+              </tbody>
+            </table>
+          )}
+        </Show>
       </Show>
       <Show when={props.reviews.length > 0} fallback={<p>None yet.</p>}>
         <ul class="review-list">

@@ -13,7 +13,9 @@ import { problemText, readRecording, RecordingFileError, type ReadRecording } fr
 import { reviewReport } from "../../../profiles/reviewReport.js";
 import { useApp } from "../../context.js";
 import { reviewTarget } from "../../state/reviewTarget.js";
-import { StartReviewView, type KeepForm } from "./View.js";
+import { builtinTrains } from "../../../profiles/builtin.js";
+import { computeNoteLoadTable } from "../LocationNotes/loadTableRunner.js";
+import { StartReviewView, type KeepForm, type ObservedTable } from "./View.js";
 
 const today = () => new Date().toISOString().slice(0, 10);
 
@@ -121,6 +123,25 @@ export default function StartReview(): JSX.Element {
       .finally(() => setBusy(false));
   };
 
+  const [table, setTable] = createSignal<ObservedTable | null>(null);
+  const onTable = () => {
+    const n = note();
+    const o = observedMassFactor(reviews() ?? []);
+    if (!n || !o) return;
+    const ref = n.referenceTrain ?? { train: builtinTrains[0]?.id ?? "" };
+    setTable({ working: true });
+    void computeNoteLoadTable(n, ref, app.pool).then(
+      (out) => {
+        if (!out.ok) return setTable({ working: false, why: out.issues.map((i) => i.message).join("; ") });
+        // A train that starts as if f times heavier than its papers: of the masses on paper, the model's
+        // largest ÷ f start as the model's largest does.
+        const t = (kg: number) => (kg > 0 ? Math.floor(kg / 1000) : null);
+        setTable({ working: false, rows: out.rows.map((r) => ({ rail: r.rail, sand: r.sand, modelT: t(r.maxTrailingMassKg), observedT: t(r.maxTrailingMassKg / o.median) })) });
+      },
+      (e: unknown) => setTable({ working: false, why: `The load table could not be worked out (${(e as Error).message || String(e)}).` }),
+    );
+  };
+
   const report = createMemo(() => {
     const res = result();
     return res ? reviewReport(res.r, res.read, true) : null;
@@ -150,6 +171,8 @@ export default function StartReview(): JSX.Element {
           .then(() => setVersion((v) => v + 1))
       }
       onBack={() => app.nav.go("location-notes")}
+      table={table()}
+      onTable={onTable}
     />
   );
 }
