@@ -1,16 +1,15 @@
 /**
  * Start review (wiring): the note chosen in Location notes, the start case from Start plan placed at that
  * note's location, the recording read and reviewed, and the note's reviews in the device's notes store.
- * The review runs on the page's thread after a paint (a few hundred milliseconds for a short train, a few
- * seconds for a long one).
+ * The review runs in a worker (a few hundred milliseconds for a short train, a few seconds for a long one).
  */
 import { createMemo, createResource, createSignal, type JSX } from "solid-js";
-import { reviewStart, RecordingRejected, type StartReviewResult } from "../../../core/dispatch/index.js";
 import { deviceNotesStore } from "../../../notes/index.js";
 import { locationFromNote } from "../../../profiles/convert.js";
 import { observedMassFactor, type StartReviewFile } from "../../../profiles/notes.js";
-import { problemText, readRecording, RecordingFileError, type ReadRecording } from "../../../profiles/recording.js";
-import { reviewReport } from "../../../profiles/reviewReport.js";
+import type { ReviewReport } from "../../../profiles/reviewReport.js";
+import { reviewInWorker } from "./reviewClient.js";
+import type { ReviewFindings } from "./runReview.js";
 import { useApp } from "../../context.js";
 import { reviewTarget } from "../../state/reviewTarget.js";
 import { builtinTrains } from "../../../profiles/builtin.js";
@@ -18,14 +17,6 @@ import { computeNoteLoadTable } from "../LocationNotes/loadTableRunner.js";
 import { StartReviewView, type KeepForm, type ObservedTable } from "./View.js";
 
 const today = () => new Date().toISOString().slice(0, 10);
-
-/** About forty points of the recorded speed from the moment of start, for the note's thumbnail. */
-function thumbnail(r: StartReviewResult): StartReviewFile["thumbnail"] {
-  const o = r.overlay;
-  const step = Math.max(1, Math.ceil(o.timeS.length / 40));
-  const keep = o.timeS.map((_, i) => i).filter((i) => i % step === 0 || i === o.timeS.length - 1);
-  return { time_s: keep.map((i) => o.timeS[i]!), speed_kmh: keep.map((i) => Math.round(o.recordedSpeedMps[i]! * 360) / 100) };
-}
 
 export default function StartReview(): JSX.Element {
   const app = useApp();
@@ -48,7 +39,7 @@ export default function StartReview(): JSX.Element {
   });
   const [busy, setBusy] = createSignal(false);
   const [problem, setProblem] = createSignal<string | null>(null);
-  const [result, setResult] = createSignal<{ r: StartReviewResult; read: ReadRecording } | null>(null);
+  const [result, setResult] = createSignal<{ report: ReviewReport; findings: ReviewFindings } | null>(null);
   const [kept, setKept] = createSignal(false);
   const [form, setForm] = createSignal<KeepForm>({ date: today(), rail: "dry", train: "", initials: "" });
 
@@ -69,25 +60,13 @@ export default function StartReview(): JSX.Element {
     setBusy(true);
     void file
       .text()
-      .then(
-        (text) =>
-          new Promise<void>((resolve) =>
-            // Let the page paint "Reviewing…" before the work starts.
-            setTimeout(() => {
-              try {
-                const read = readRecording(file.name, text);
-                const r = reviewStart(c, read.recording);
-                setResult({ r, read });
-                setForm((f) => ({ ...f, rail: c.conditions.rail, train: f.train || `${Math.round(c.train.trailingMassKg / 1000)} t, ${c.train.wagons} wagons` }));
-              } catch (e) {
-                if (e instanceof RecordingFileError) setProblem(`${file.name}: ${e.message}`);
-                else if (e instanceof RecordingRejected) setProblem(`${file.name}: ${e.problems.map(problemText).join("\n")}`);
-                else setProblem(`${file.name}: the review failed (${(e as Error).message || String(e)}).`);
-              }
-              resolve();
-            }, 30),
-          ),
-      )
+      .then((text) => reviewInWorker(c, file.name, text))
+      .then((out) => {
+        if (!out.ok) return setProblem(out.message);
+        setResult(out);
+        setForm((f) => ({ ...f, rail: c.conditions.rail, train: f.train || `${Math.round(c.train.trailingMassKg / 1000)} t, ${c.train.wagons} wagons` }));
+      })
+      .catch((e: unknown) => setProblem(`${file.name}: the review failed (${(e as Error).message || String(e)}).`))
       .finally(() => setBusy(false));
   };
 
@@ -96,7 +75,6 @@ export default function StartReview(): JSX.Element {
     const id = noteId();
     if (!res || !id) return;
     const f = form();
-    const r = res.r;
     const review: StartReviewFile = {
       id: `${id}-${f.date}-${Date.now().toString(36)}`.slice(0, 80),
       location: id,
@@ -104,12 +82,7 @@ export default function StartReview(): JSX.Element {
       rail: f.rail,
       train: f.train.trim() || "train not named",
       ...(f.initials.trim() ? { initials: f.initials.trim() } : {}),
-      massFactor: r.massFit.estimates.massFactor!,
-      ...(r.effortFit ? { effortFactor: r.effortFit.estimates.effortFactor! } : {}),
-      ...(r.separable !== null ? { separable: r.separable } : {}),
-      plannedVerdict: r.plan.verdict,
-      replannedVerdict: r.replanned.verdict,
-      thumbnail: thumbnail(r),
+      ...res.findings,
     };
     setBusy(true);
     void deviceNotesStore()
@@ -142,10 +115,6 @@ export default function StartReview(): JSX.Element {
     );
   };
 
-  const report = createMemo(() => {
-    const res = result();
-    return res ? reviewReport(res.r, res.read, true) : null;
-  });
 
   return (
     <StartReviewView
@@ -157,7 +126,7 @@ export default function StartReview(): JSX.Element {
       })()}
       busy={busy()}
       problem={problem()}
-      report={report()}
+      report={result()?.report ?? null}
       form={form()}
       kept={kept()}
       reviews={reviews() ?? []}
