@@ -165,7 +165,7 @@ export function readLocationNote(path: string): LocationNoteFile {
 
 /**
  * Read location notes from files, each a single note (taut/location@1) or a bundle
- * (taut/notes-bundle@1); a note id given twice across files is bad input.
+ * (taut/notes-bundle@2); a note id given twice across files is bad input.
  */
 export function readNotesFiles(paths: readonly string[]): LocationNoteFile[] {
   const notes: LocationNoteFile[] = [];

@@ -40,7 +40,7 @@ export const checkCommand: Command = {
     "                order. --sort file (the default) keeps the file's order.",
     "  --json        rows as JSON: { schema, departures: [...], summary, cautions }",
     "  --csv         rows as CSV",
-    "  --notes FILE  location notes (a taut/location@1 note or a taut/notes-bundle@1 bundle); repeatable",
+    "  --notes FILE  location notes (a taut/location@1 note or a taut/notes-bundle@2 bundle); repeatable",
     "  --helper ID   locomotive profile the assistance options add (default: each train's lead unit's)",
     `  --jobs N      worker threads (default: the available cores, here ${defaultPoolSize()}; 1 runs on this thread)`,
     "  --shard K/N   answer only every N-th departure of the file, from the K-th (K = 1…N): N jobs of a",

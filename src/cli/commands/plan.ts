@@ -50,7 +50,7 @@ export const planCommand: Command = {
     "  --json              print the plan as JSON instead of a table: the same figures, each field named",
     "                      with its unit (trailingMass_t, peakCouplerForce_kN, ...), for scripts",
     "  --demo              use the built-in illustrative demo case instead of a file",
-    "  --notes FILE        location notes (a taut/location@1 note or a taut/notes-bundle@1 bundle)",
+    "  --notes FILE        location notes (a taut/location@1 note or a taut/notes-bundle@2 bundle)",
     "                      the case's \"location\" may name by id; may be given more than once",
     "  --location NOTE-ID  start at this location note instead of the case's own location",
     "  --helper ID         locomotive profile the assistance options add (default: the lead unit's)",

@@ -34,7 +34,7 @@ export const tableCommand: Command = {
     "train just lighter than the figure starts and one just heavier does not. Twelve mass searches, run in",
     "parallel worker threads: expect some seconds.",
     "",
-    "LOCATION.json is a location note (taut/location@1), or a bundle (taut/notes-bundle@1) with --note ID;",
+    "LOCATION.json is a location note (taut/location@1), or a bundle (taut/notes-bundle@2) with --note ID;",
     "a built-in note may be named by its id instead of a file.",
     "",
     "The train the table is for: the note's reference train — the one the app's Location notes card uses —",
