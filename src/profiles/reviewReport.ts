@@ -101,7 +101,9 @@ export function reviewSummary(r: StartReviewResult): string[] {
     out.push(`From the moment of start to the target: ${num(a.timeToTargetS, 0)} s and ${num(a.distanceToTargetM!, 0)} m recorded, ${num(p.timeToTargetS, 0)} s and ${num(p.distanceToTargetM!, 0)} m planned${r.tookLonger ? " — it took longer than planned" : ""}.`);
   } else if (a.timeToTargetS === null) out.push("The recording does not reach the case's target.");
   else out.push(`The recording reaches the target ${num(a.timeToTargetS, 0)} s after the moment of start; the plan does not reach it.`);
-  if (p.stretchS !== null && a.stretchS !== null) {
+  if (p.stretchS !== null && a.stretchS !== null && p.stretchS < 0.5 && a.stretchS < 0.5) {
+    out.push("The slack was out before the speed reached 2 km/h, in the plan and in the recording.");
+  } else if (p.stretchS !== null && a.stretchS !== null) {
     out.push(`The locomotive covered the plan's travel to the stretched train in ${num(a.stretchS, 0)} s (planned ${num(p.stretchS, 0)} s)${r.stretchTookLonger ? ": the stretch took longer than planned" : ""}.`);
   }
   for (const s of r.slips) {
