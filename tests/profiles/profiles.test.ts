@@ -7,6 +7,7 @@ import { basename, dirname, extname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { describe, expect, it } from "vitest";
 import { RAIL_CONDITIONS } from "../../src/core/index.js";
+import { readRecording } from "../../src/profiles/recording.js";
 import { builtinCases, builtinLibrary, builtinLocations, builtinRailConditions, builtinTrains, DEMO_CASE_ID } from "../../src/profiles/builtin.js";
 import {
   formatIssues,
@@ -82,6 +83,12 @@ describe("profile files", () => {
             expect(existsSync(join(root, "cases", `${ref}.json`)), ref).toBe(true);
           } else expect(existsSync(join(root, dirname(rel), ref)), ref).toBe(true);
         }
+        return;
+      }
+      if (extname(rel) === ".gpx") {
+        // A recorded start for trying Start review: it reads as a start (the reader throws on what cannot be one).
+        expect(folder).toBe("recordings");
+        expect(readRecording(rel, readFileSync(join(root, rel), "utf8")).recording.samples.length).toBeGreaterThan(60);
         return;
       }
       expect(extname(rel), `${rel}: unexpected file kind`).toBe(".json");
