@@ -11,7 +11,11 @@ import { PrintStamp } from "./components/PrintStamp.js";
 import { ScreenFailure, SetAsideNotice } from "./components/SetAsideNotice.js";
 import { AppContext, type AppContextValue } from "./context.js";
 import { show } from "./format.js";
+import { shell } from "../i18n/en/shell.js";
+import { tr } from "./i18n.js";
 import type { ScreenEntry } from "./screens/registry.js";
+
+const t = tr.ns(shell);
 
 export function App(props: { state: AppContextValue; screens: readonly ScreenEntry[] }): JSX.Element {
   const s = props.state;
@@ -52,13 +56,13 @@ export function App(props: { state: AppContextValue; screens: readonly ScreenEnt
               return <ScreenFailure error={error} onRetry={reset} />;
             }}
           >
-            <Suspense fallback={<p class="placeholder-text">Loading…</p>}>
+            <Suspense fallback={<p class="placeholder-text">{t("loading")}</p>}>
               <Dynamic component={current().component} />
             </Suspense>
           </ErrorBoundary>
         </main>
         <Show when={!full()}>
-          <nav class="tabs" aria-label="Screens">
+          <nav class="tabs" aria-label={t("screensNav")}>
             <For each={props.screens.filter((x) => !x.noTab)}>
               {(x) => (
                 <a class="tab" href={`#/${x.id}`} aria-current={x.id === current().id ? "page" : undefined} onClick={(e) => (e.preventDefault(), s.nav.go(x.id))}>
@@ -73,11 +77,9 @@ export function App(props: { state: AppContextValue; screens: readonly ScreenEnt
       <Show when={s.motion.moving()}>
         <div class="moving-notice" role="alertdialog" aria-modal="true" aria-labelledby="moving-h" aria-describedby="moving-text">
           <Icon name="moving" size={64} />
-          <h2 id="moving-h">The train is moving</h2>
+          <h2 id="moving-h">{t("movingTitle")}</h2>
           <p id="moving-text">
-            Taut is for planning and briefing before departure, so its controls are hidden while the device reports movement
-            {s.motion.speedMps() !== null ? ` (${show("speed", s.motion.speedMps()!, s.settings.settings().units)})` : ""}. They come back once it has been still
-            for 10 seconds.
+            {t("movingText", { speed: s.motion.speedMps() !== null ? t("movingSpeed", { speed: show("speed", s.motion.speedMps()!, s.settings.settings().units) }) : "" })}
           </p>
         </div>
       </Show>

@@ -1,5 +1,5 @@
 /** Build the app's state from its parts (the browser wiring in launch.tsx; fakes in tests). */
-import { createMemo } from "solid-js";
+import { createEffect, createMemo, on } from "solid-js";
 import type { PlanResult } from "../core/planner/types.js";
 import type { PlannerClient } from "../worker/client.js";
 import { createBrowserPlannerPool, type PlannerPool } from "../worker/pool.js";
@@ -13,6 +13,7 @@ import { createOffline, type RegisterSW } from "./state/createOffline.js";
 import { createPlanRun } from "./state/createPlanRun.js";
 import { createSettings } from "./state/createSettings.js";
 import { createTheme } from "./state/createTheme.js";
+import { resolveLanguage, setAppLanguage } from "./i18n.js";
 
 export interface AppDeps {
   planner: PlannerClient;
@@ -86,6 +87,8 @@ export function createAppState(deps: AppDeps): AppContextValue {
     if (d.locationMode === "note" && !locations.library().locations.has(d.noteId)) installDeviceNotesLater();
     else void firstPlanShown.then(installDeviceNotesLater);
   }
+  // The language on screen follows Settings (or the device's languages); a catalog loads on demand.
+  createEffect(on(() => settings.settings().language, (choice) => void setAppLanguage(resolveLanguage(choice))));
   return {
     settings,
     draft,

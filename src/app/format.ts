@@ -3,7 +3,9 @@
  * unit factors (`convert`). Every figure the app shows and every number it reads passes through here.
  */
 import { convert, convertTemperature, type Quantity } from "../core/physics/units.js";
-import { fixedDigits, roundHalfAway } from "../profiles/numbers.js";
+import { roundHalfAway } from "../profiles/numbers.js";
+import { parseNumberIn } from "../i18n/numbers.js";
+import { appLang, appNumber } from "./i18n.js";
 
 export type UnitSystem = "metric" | "us";
 
@@ -88,19 +90,11 @@ export function siUnit(m: MeasureKey): string {
 }
 
 /**
- * A number with grouping and a fixed count of decimals; "−" for negatives, "–" for not-a-number.
- * The same text as `Intl.NumberFormat("en-GB", { minimumFractionDigits: d, maximumFractionDigits: d })`,
- * without loading the browser's locale data, which costs tens of milliseconds on the main thread at the
- * first call, in the middle of the load.
+ * A number with grouping and a fixed count of decimals as the language on screen writes it (en-GB
+ * "1,500.5", hu "1500,5" and "12 345", de "1.500,5"); "−" for negatives, "–" for not-a-number.
  */
 export function formatNumber(x: number, decimals: number): string {
-  if (!Number.isFinite(x)) return "–";
-  const s = fixedDigits(x, Math.max(0, Math.min(20, Math.trunc(decimals))));
-  const dot = s.indexOf(".");
-  const whole = dot < 0 ? s : s.slice(0, dot);
-  const body = (s.includes("e") ? whole : whole.replace(/\B(?=(\d{3})+$)/g, ",")) + (dot < 0 ? "" : s.slice(dot));
-  // No "−0" after rounding; a true minus sign.
-  return x < 0 && /[1-9]/.test(body) ? `\u2212${body}` : body;
+  return appNumber(x, decimals);
 }
 
 /** Display value (number only) of an SI quantity. */
@@ -170,16 +164,11 @@ export function clock(s: number): string {
 }
 
 /**
- * Read a number typed by a user: accepts a decimal comma, spaces and grouping commas ("1,500");
- * NaN when the text is not a number.
+ * Read a number typed by a user in the language on screen: a decimal comma or point where it cannot be a
+ * grouping, spaces and the language's grouping; NaN when the text is not a number.
  */
 export function parseNumber(text: string): number {
-  let t = text.trim().replace(/[\s\u202f\u00a0]/g, "").replace(/\u2212/g, "-");
-  if (t === "") return Number.NaN;
-  if (/^[-+]?\d{1,3}(,\d{3})+(\.\d+)?$/.test(t)) t = t.replace(/,/g, "");
-  else if (!t.includes(".") && /^[-+]?\d*,\d+$/.test(t)) t = t.replace(",", ".");
-  if (!/^[-+]?(\d+\.?\d*|\.\d+)$/.test(t)) return Number.NaN;
-  return Number(t);
+  return parseNumberIn(appLang(), text);
 }
 
 const TEXT_UNITS: Record<string, { m: MeasureKey; from: string }> = {

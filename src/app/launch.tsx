@@ -21,6 +21,7 @@ import { createAppState } from "./createAppState.js";
 import { decodePlan } from "./planCodec.js";
 import { preloadScreens, SCREENS } from "./screens/registry.js";
 import { registerSW } from "./sw/register.js";
+import { resolveLanguage, setAppLanguage } from "./i18n.js";
 
 /** The longest the first render waits for the worker to take the first request, ms. */
 const RENDER_WAIT_MS = 600;
@@ -71,6 +72,8 @@ export async function launch(firstWorker: Worker): Promise<void> {
     performance.mark("taut:first-request");
     await Promise.race([answered, delay(RENDER_WAIT_MS)]);
   }
+  // A language other than English: its catalog (a small chunk) before the first render, so nothing shows in two languages.
+  await setAppLanguage(resolveLanguage(state.settings.settings().language));
   const root = document.getElementById("root")!;
   root.textContent = "";
   render(() => <App state={state} screens={SCREENS} />, root);

@@ -11,6 +11,10 @@ import { createEffect, createSignal, For, on, onCleanup, onMount, Show, type JSX
 import type { ChartReply, ChartRequest } from "../charts/chart.worker.js";
 import { colourOf, withAlpha, type ChartPalette } from "../charts/palette.js";
 import type { ChartSpec, LegendEntry } from "../charts/spec.js";
+import { shell } from "../../i18n/en/shell.js";
+import { tr } from "../i18n.js";
+
+const t = tr.ns(shell);
 
 type LineConfig = ChartConfiguration<"line", Array<{ x: number; y: number }>>;
 
@@ -169,7 +173,7 @@ export function Chart(props: ChartProps): JSX.Element {
       >
         {(spec) => (
           <>
-            <ChartCanvas spec={spec()} palette={props.palette} height={props.height ?? 280} label={`${props.title}. ${props.caption}`} />
+            <ChartCanvas spec={spec()} palette={props.palette} height={props.height ?? 280} label={t("chartLabel", { title: props.title, caption: props.caption })} />
             <Legend entries={spec().legend} palette={props.palette} />
           </>
         )}
@@ -250,7 +254,7 @@ function ChartCanvas(props: { spec: ChartSpec; palette: ChartPalette; height: nu
     <div class="chart-box" ref={box} style={{ height: `${props.height}px` }} data-drawn={drawn() ? "yes" : "no"}>
       <canvas ref={canvas} role="img" aria-label={props.label} />
       <Show when={unsupported()}>
-        <p class="chart-empty chart-unsupported">This browser cannot draw charts here; the figures above and the legend below still hold.</p>
+        <p class="chart-empty chart-unsupported">{t("chartUnsupported")}</p>
       </Show>
     </div>
   );

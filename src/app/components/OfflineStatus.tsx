@@ -3,6 +3,10 @@ import { Show, type JSX } from "solid-js";
 import type { Observation } from "../state/createConnection.js";
 import type { OfflineState } from "../state/createOffline.js";
 import { Icon } from "./Icon.js";
+import { shell } from "../../i18n/en/shell.js";
+import { tr } from "../i18n.js";
+
+const t = tr.ns(shell);
 
 /** Hours and minutes, written out (no Intl: its locale data would load for this alone). */
 function clock(at: number): string {
@@ -12,16 +16,16 @@ function clock(at: number): string {
 
 /** What the status rests on, in words: the device's own report, or the app's last request to its server. */
 export function observationText(o: Observation): string {
-  if (o.source === "browser") return o.online ? "The device reports a network connection" : "The device reports no network connection";
-  return o.online ? `The server answered at ${clock(o.at)}` : `No answer from the server at ${clock(o.at)}`;
+  if (o.source === "browser") return o.online ? t("deviceOnline") : t("deviceOffline");
+  return o.online ? t("serverAnswered", { time: clock(o.at) }) : t("serverSilent", { time: clock(o.at) });
 }
 
 export function OfflineStatus(props: { offline: OfflineState }): JSX.Element {
   const o = props.offline;
   const text = () => {
-    if (!o.supported) return "Online only";
-    if (!o.online()) return o.ready() ? "Offline — working from the saved copy" : "Offline";
-    return o.ready() ? "Ready offline" : "Saving for offline use…";
+    if (!o.supported) return t("onlineOnly");
+    if (!o.online()) return o.ready() ? t("offlineSaved") : t("offline");
+    return o.ready() ? t("readyOffline") : t("savingOffline");
   };
   return (
     <p
@@ -49,15 +53,15 @@ export function UpdatePrompt(props: { offline: OfflineState }): JSX.Element {
         <Icon name="update" size={28} />
         <div>
           <p id="update-title" class="update-title">
-            A new version of Taut is ready
+            {t("updateTitle")}
           </p>
-          <p id="update-text">Update now (the page reloads; your inputs are kept), or later — the current version keeps working offline.</p>
+          <p id="update-text">{t("updateText")}</p>
         </div>
         <button type="button" class="button primary" onClick={() => void props.offline.update()}>
-          Update now
+          {t("updateNow")}
         </button>
         <button type="button" class="button" onClick={() => props.offline.later()}>
-          Later
+          {t("updateLater")}
         </button>
       </div>
     </Show>

@@ -8,6 +8,10 @@ import { createSignal, onCleanup, Show, type JSX } from "solid-js";
 import { fingerprint } from "../../profiles/fingerprint.js";
 import { printStamp, printStatus } from "../state/printStatus.js";
 import { APP_VERSION } from "../version.js";
+import { shell } from "../../i18n/en/shell.js";
+import { tr } from "../i18n.js";
+
+const t = tr.ns(shell);
 
 export function PrintStamp(props: { screen: string }): JSX.Element {
   const [at, setAt] = createSignal(printStamp());
@@ -19,12 +23,14 @@ export function PrintStamp(props: { screen: string }): JSX.Element {
     <div class="print-stamp" aria-hidden="true">
       <Show when={status() && !status()!.complete}>
         <p class="print-incomplete">
-          <strong>Incomplete — wait for {status()!.waitingFor}.</strong> Printed while figures were still being worked out: do not use this copy.
+          <strong>{t("printIncomplete", { what: status()!.waitingFor })}</strong>
+          {t("printIncompleteText")}
         </p>
       </Show>
       <p>
-        Taut {APP_VERSION} · {props.screen} · printed {at()}
-        <Show when={status()}>{(s) => ` · inputs fingerprint ${fingerprint([APP_VERSION, s().inputs])}`}</Show> · advisory only
+        {t("printStamp", { version: APP_VERSION, screen: props.screen, at: at() })}
+        <Show when={status()}>{(s) => t("printFingerprint", { fingerprint: fingerprint([APP_VERSION, s().inputs]) })}</Show>
+        {t("printAdvisory")}
       </p>
     </div>
   );

@@ -7,6 +7,8 @@
 import { createEffect, createSignal, on, Show, type JSX } from "solid-js";
 import { decimalsOf, formatNumber, fromDisplay, parseNumber, toDisplay, unitSymbol, type MeasureKey, type UnitSystem } from "../format.js";
 import { Icon } from "./Icon.js";
+import { shell } from "../../i18n/en/shell.js";
+import { tr } from "../i18n.js";
 
 export interface QuantityFieldProps {
   label: string;
@@ -32,6 +34,7 @@ export interface QuantityFieldProps {
 }
 
 let counter = 0;
+const t = tr.ns(shell);
 
 export function QuantityField(props: QuantityFieldProps): JSX.Element {
   const id = `q-${++counter}`;
@@ -106,7 +109,7 @@ export function QuantityField(props: QuantityFieldProps): JSX.Element {
       </label>
       <div class="quantity">
         <Show when={stepOf() !== undefined}>
-          <button type="button" class="step-button" aria-label={`${props.label}: less`} disabled={!canDown()} onClick={() => bump(-1)}>
+          <button type="button" class="step-button" aria-label={t("fieldLess", { label: props.label })} disabled={!canDown()} onClick={() => bump(-1)}>
             <Icon name="remove" size={28} />
           </button>
         </Show>
@@ -132,14 +135,14 @@ export function QuantityField(props: QuantityFieldProps): JSX.Element {
           </Show>
         </div>
         <Show when={stepOf() !== undefined}>
-          <button type="button" class="step-button" aria-label={`${props.label}: more`} disabled={!canUp()} onClick={() => bump(1)}>
+          <button type="button" class="step-button" aria-label={t("fieldMore", { label: props.label })} disabled={!canUp()} onClick={() => bump(1)}>
             <Icon name="add" size={28} />
           </button>
         </Show>
       </div>
       <Show when={props.issue}>
         <p class="field-issue" id={`${id}-issue`} role="alert">
-          {props.label} {props.issue}
+          {t("fieldIssue", { label: props.label, issue: props.issue ?? "" })}
         </p>
       </Show>
       <Show when={props.hint}>

@@ -7,6 +7,10 @@
 import type { JSX } from "solid-js";
 import { DRAFT_KEY, SET_ASIDE_KEY, type SetAsideDraft } from "../state/createCaseDraft.js";
 import { read, safeLocalStorage, write } from "../state/createSettings.js";
+import { shell } from "../../i18n/en/shell.js";
+import { tr } from "../i18n.js";
+
+const t = tr.ns(shell);
 
 /** Offer text as a file download. */
 function download(text: string, name: string): void {
@@ -24,14 +28,14 @@ export function SetAsideNotice(props: { aside: SetAsideDraft; onDismiss: () => v
   return (
     <div class="app-notice" role="alert">
       <p>
-        <strong>Your last Start plan inputs could not be read</strong> ({props.aside.reason}), so the demo case is open. They are kept on this device: export them to look at
-        them or to send them with a report.
+        <strong>{t("setAsideTitle")}</strong>
+        {t("setAsideText", { reason: props.aside.reason })}
       </p>
       <button type="button" class="button" onClick={() => download(props.aside.text, "taut-start-plan-inputs-set-aside.json")}>
-        Export the set-aside inputs
+        {t("setAsideExport")}
       </button>
       <button type="button" class="button" onClick={() => props.onDismiss()}>
-        OK
+        {t("ok")}
       </button>
     </div>
   );
@@ -54,14 +58,14 @@ export function ScreenFailure(props: { error: unknown; onRetry: () => void }): J
   return (
     <div class="app-notice" role="alert">
       <p>
-        <strong>This screen could not be drawn</strong> ({props.error instanceof Error ? props.error.message : String(props.error)}). Your location notes are not affected.
-        If it happens again, set the stored Start plan inputs aside (they are kept for export) and reload.
+        <strong>{t("screenFailedTitle")}</strong>
+        {t("screenFailedText", { error: props.error instanceof Error ? props.error.message : String(props.error) })}
       </p>
       <button type="button" class="button" onClick={() => props.onRetry()}>
-        Try again
+        {t("tryAgain")}
       </button>
       <button type="button" class="button" onClick={() => setAsideAndReload()}>
-        Set the inputs aside and reload
+        {t("setAsideReload")}
       </button>
     </div>
   );

@@ -5,29 +5,11 @@
  */
 import { For, Show, type JSX } from "solid-js";
 import type { Reason, Verdict } from "../../core/planner/outcome.js";
+import { words as en } from "../../i18n/en/words.js";
+import { tr } from "../i18n.js";
+import { words } from "../words.js";
 
-export const VERDICT_WORD: Record<Verdict, string> = {
-  starts: "Starts",
-  marginal: "Marginal",
-  "needs-assistance": "Needs assistance",
-};
-
-/** What each verdict means, in a line. */
-export const VERDICT_LINE: Record<Verdict, string> = {
-  starts: "This locomotive set should start this train here, within the safety settings.",
-  marginal: "It may start, but a limit is exceeded within its band (or it needs a better rail than the threshold assumes): brief the start carefully.",
-  "needs-assistance": "It is not expected to start within the safety settings without help.",
-};
-
-export const REASON_LINE: Record<Reason, string> = {
-  adhesion: "Adhesion — the rails may not give the tractive effort needed without slipping.",
-  power: "Power — the locomotives' tractive effort is barely enough, or not enough.",
-  coupler: "Coupler — coupler forces come close to, or over, the working limit.",
-  distance: "Distance — taking up the slack or reaching the target needs more room than is clear ahead.",
-  brake: "Brake holding — the brakes may not hold the train while its brake releases.",
-};
-
-export const REASON_WORD: Record<Reason, string> = { adhesion: "adhesion", power: "power", coupler: "coupler", distance: "distance", brake: "brake holding" };
+const t = tr.ns(en);
 
 /** The verdict's shape (filled) with its mark. */
 export function VerdictIcon(props: { verdict: Verdict; size?: number }): JSX.Element {
@@ -74,26 +56,26 @@ export function VerdictBanner(props: VerdictBannerProps): JSX.Element {
     <section
       class={`verdict verdict-${props.verdict}`}
       classList={{ stale: props.stale === true, compact: props.compact === true }}
-      aria-label={`Verdict: ${VERDICT_WORD[props.verdict]}`}
+      aria-label={t("verdictLabel", { word: words.verdict(props.verdict) })}
       data-verdict={props.verdict}
     >
       <VerdictIcon verdict={props.verdict} size={props.compact ? 36 : 56} />
       <div class="verdict-text">
-        <p class="verdict-word">{VERDICT_WORD[props.verdict]}</p>
+        <p class="verdict-word">{words.verdict(props.verdict)}</p>
         <Show when={!props.compact}>
-          <p class="verdict-line">{VERDICT_LINE[props.verdict]}</p>
+          <p class="verdict-line">{words.verdictLine(props.verdict)}</p>
         </Show>
         <Show when={props.detail}>
           <p class="verdict-detail">{props.detail}</p>
         </Show>
         <Show when={props.reasons.length > 0}>
           <p class="verdict-reasons">
-            <span class="visually-hidden">Reasons: </span>
-            <For each={props.reasons}>{(r) => <span class="chip">{REASON_WORD[r]}</span>}</For>
+            <span class="visually-hidden">{t("reasonsLabel")}</span>
+            <For each={props.reasons}>{(r) => <span class="chip">{words.reason(r)}</span>}</For>
           </p>
         </Show>
         <Show when={props.stale}>
-          <p class="verdict-stale">For the previous inputs — updating…</p>
+          <p class="verdict-stale">{t("verdictStale")}</p>
         </Show>
       </div>
     </section>

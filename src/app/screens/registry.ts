@@ -3,21 +3,22 @@
  * `index.tsx` default-exports a component that reads the app state with `useApp()`. To add one, add one
  * line here, before Settings. Every screen but Start plan is loaded on demand, so the page that shows the
  * first plan carries only what it needs:
- *   { id: "location-notes", title: "Location notes", icon: "notes", component: lazy(() => import("./LocationNotes/index.js")) },
-  { id: "start-review", title: "Start review", icon: "notes", component: lazy(() => import("./StartReview/index.js")), noTab: true },
+ *   screen({ id: "location-notes", icon: "notes", component: lazy(() => import("./LocationNotes/index.js")) }, () => t("screenLocationNotes")),
  * Once the first plan is on screen, the app fetches the lazy screens in the background (`preloadScreens`),
  * so a tab opens at once and offline. Icons drawn for the screens to come: "assist" (Assistance
  * check), "departures" (Departures), "table" (Load table), "notes" (Location notes).
  */
 import { lazy, type Component, type JSX } from "solid-js";
+import { shell } from "../../i18n/en/shell.js";
+import { tr } from "../i18n.js";
 import type { IconName } from "../components/Icon.js";
 import StartPlan from "./StartPlan/index.js";
 
 export interface ScreenEntry {
   /** The hash route: #/<id>. */
   id: string;
-  /** Name on the tab and in the top bar (NAMING.md). */
-  title: string;
+  /** Name on the tab and in the top bar (NAMING.md), in the language on screen. */
+  readonly title: string;
   icon: IconName | (() => JSX.Element);
   component: Component;
   /** Hides the top bar and the tabs (Cab steps). */
@@ -26,15 +27,22 @@ export interface ScreenEntry {
   noTab?: boolean;
 }
 
+const t = tr.ns(shell);
+
+/** A screen whose title follows the language on screen. */
+function screen(e: Omit<ScreenEntry, "title">, title: () => string): ScreenEntry {
+  return Object.defineProperty(e, "title", { get: title, enumerable: true }) as ScreenEntry;
+}
+
 export const SCREENS: readonly ScreenEntry[] = [
-  { id: "start-plan", title: "Start plan", icon: "plan", component: StartPlan },
-  { id: "cab-steps", title: "Cab steps", icon: "steps", component: lazy(() => import("./CabSteps/index.js")), fullScreen: true },
-  { id: "assistance-check", title: "Assistance check", icon: "assist", component: lazy(() => import("./AssistanceCheck/index.js")) },
-  { id: "departures", title: "Departures", icon: "departures", component: lazy(() => import("./Departures/index.js")) },
-  { id: "load-table", title: "Load table", icon: "table", component: lazy(() => import("./LoadTable/index.js")) },
-  { id: "location-notes", title: "Location notes", icon: "notes", component: lazy(() => import("./LocationNotes/index.js")) },
-  { id: "start-review", title: "Start review", icon: "notes", component: lazy(() => import("./StartReview/index.js")), noTab: true },
-  { id: "settings", title: "Settings", icon: "settings", component: lazy(() => import("./Settings/index.js")) },
+  screen({ id: "start-plan", icon: "plan", component: StartPlan }, () => t("screenStartPlan")),
+  screen({ id: "cab-steps", icon: "steps", component: lazy(() => import("./CabSteps/index.js")), fullScreen: true }, () => t("screenCabSteps")),
+  screen({ id: "assistance-check", icon: "assist", component: lazy(() => import("./AssistanceCheck/index.js")) }, () => t("screenAssistanceCheck")),
+  screen({ id: "departures", icon: "departures", component: lazy(() => import("./Departures/index.js")) }, () => t("screenDepartures")),
+  screen({ id: "load-table", icon: "table", component: lazy(() => import("./LoadTable/index.js")) }, () => t("screenLoadTable")),
+  screen({ id: "location-notes", icon: "notes", component: lazy(() => import("./LocationNotes/index.js")) }, () => t("screenLocationNotes")),
+  screen({ id: "start-review", icon: "notes", component: lazy(() => import("./StartReview/index.js")), noTab: true }, () => t("screenStartReview")),
+  screen({ id: "settings", icon: "settings", component: lazy(() => import("./Settings/index.js")) }, () => t("screenSettings")),
 ];
 
 /** Fetch every screen loaded on demand (Solid's `lazy(...).preload()`), e.g. when the page is idle. */

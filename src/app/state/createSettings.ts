@@ -1,11 +1,12 @@
 /**
- * The app's settings: units, theme, the two safety settings that go into every case, and whether the
+ * The app's settings: language, units, theme, the two safety settings that go into every case, and whether the
  * moving lock may use the device's location. Kept in localStorage; a missing or damaged entry falls
  * back to the defaults field by field.
  */
 import { createSignal, type Accessor } from "solid-js";
 import { DEFAULT_SETTINGS } from "../../core/train/types.js";
 import type { UnitSystem } from "../format.js";
+import { isLanguageChoice, type LanguageChoice } from "../i18n.js";
 
 export type ThemeChoice = "day" | "night" | "system";
 
@@ -20,6 +21,8 @@ export interface AppSettings {
   marginalSlipRisk: number;
   /** Hide the controls while the device reports movement (uses Geolocation). */
   motionLock: boolean;
+  /** The language on screen: one of ours, or "auto" (the device's preferred languages). */
+  language: LanguageChoice;
 }
 
 export const DEFAULT_APP_SETTINGS: AppSettings = {
@@ -29,6 +32,7 @@ export const DEFAULT_APP_SETTINGS: AppSettings = {
   slipRiskThreshold: DEFAULT_SETTINGS.slipRiskThreshold,
   marginalSlipRisk: DEFAULT_SETTINGS.marginalSlipRisk,
   motionLock: false,
+  language: "auto",
 };
 
 export const SETTINGS_KEY = "taut.settings.v1";
@@ -61,6 +65,7 @@ export function readSettings(raw: string | null): AppSettings {
   const b = o.marginalSlipRisk;
   if (typeof b === "number" && b >= SAFETY_BOUNDS.marginalSlipRisk.min && b <= SAFETY_BOUNDS.marginalSlipRisk.max) out.marginalSlipRisk = b;
   if (typeof o.motionLock === "boolean") out.motionLock = o.motionLock;
+  if (isLanguageChoice(o.language)) out.language = o.language;
   return out;
 }
 

@@ -12,7 +12,8 @@ import type { AssistanceAnswer, AssistanceOptionData } from "../../../worker/pro
 import type { ChartPalette } from "../../charts/palette.js";
 import { Chart } from "../../components/Chart.js";
 import { Icon } from "../../components/Icon.js";
-import { REASON_LINE, VerdictBanner, VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
+import { VerdictBanner, VerdictIcon } from "../../components/VerdictBanner.js";
+import { words } from "../../words.js";
 import { duration, localiseText, margin, show, type UnitSystem } from "../../format.js";
 import { Cautions } from "../shared/Cautions.js";
 import { divideLine, limitWord, optionHeadline, placeWords, REASON_SHORT } from "../shared/words.js";
@@ -119,7 +120,7 @@ function Options(props: { answer: AssistanceAnswer; units: UnitSystem; canTry: b
       </Show>
       <Show when={a().needed && a().base.reasons.length > 0}>
         <ul class="reasons">
-          <For each={a().base.reasons}>{(r: Reason) => <li>{REASON_LINE[r]}</li>}</For>
+          <For each={a().base.reasons}>{(r: Reason) => <li>{words.reasonLine(r)}</li>}</For>
         </ul>
       </Show>
       <Show when={a().needed} fallback={<StartsAlready answer={a()} units={props.units} />}>
@@ -173,7 +174,7 @@ function OptionCard(props: { option: AssistanceOptionData; rank: number; units: 
           </h3>
           <p class="option-verdict">
             <VerdictIcon verdict={o().verdict} size={28} />
-            <span>{VERDICT_WORD[o().verdict]}</span>
+            <span>{words.verdict(o().verdict)}</span>
             <span class="muted">with this help, margin {margin(o().margin)}</span>
           </p>
         </div>
@@ -214,7 +215,7 @@ function NothingWorks(props: { answer: AssistanceAnswer; units: UnitSystem }): J
   const groups = () => {
     const m = new Map<string, number>();
     for (const x of a().rejected) {
-      const key = x.reasons.length > 0 ? x.reasons.map((r) => REASON_SHORT[r]).join(" and ") : VERDICT_WORD[x.verdict].toLowerCase();
+      const key = x.reasons.length > 0 ? x.reasons.map((r) => REASON_SHORT[r]).join(" and ") : words.verdictInline(x.verdict);
       m.set(key, (m.get(key) ?? 0) + 1);
     }
     return [...m.entries()];
@@ -240,7 +241,7 @@ function NothingWorks(props: { answer: AssistanceAnswer; units: UnitSystem }): J
             <Show when={d().verdict}>
               {(v) => (
                 <p>
-                  The first part: <VerdictIcon verdict={v()} size={22} /> {VERDICT_WORD[v()].toLowerCase()}
+                  The first part: <VerdictIcon verdict={v()} size={22} /> {words.verdictInline(v())}
                   {d().peakCouplerForceN !== null ? `, peak coupler force ${show("force", d().peakCouplerForceN!, props.units)}` : ""}.
                 </p>
               )}
@@ -266,7 +267,7 @@ function MarginsPanel(props: { rows: ConditionMargin[] | null; info: CaseInfo | 
           <span class="margin-num">{margin(r.margin)}</span>
         </span>
         <span class="margin-verdict">
-          {VERDICT_WORD[r.verdict]}
+          {words.verdict(r.verdict)}
           {r.verdict !== "starts" ? ` (${REASON_SHORT[r.limitedBy]})` : ""}
         </span>
         <Show when={isCurrent(rail, sand)}>

@@ -1,4 +1,5 @@
 /** Assistance check (wiring): the case being edited in Start plan, checked on the planner workers; the view is View.tsx. */
+import { words } from "../../words.js";
 import { createMemo, type JSX } from "solid-js";
 import { unwrap } from "solid-js/store";
 import type { StartCase } from "../../../core/train/types.js";
@@ -9,7 +10,7 @@ import { show, type UnitSystem } from "../../format.js";
 import type { CaseDraft } from "../../state/caseDraft.js";
 import { declarePrintStatus } from "../../state/printStatus.js";
 import "../shared/dispatch.css";
-import { placeWords, RAIL_WORD } from "../shared/words.js";
+import { placeWords } from "../shared/words.js";
 import { createAssistanceCheck } from "./createAssistanceCheck.js";
 import { AssistanceView, type CaseInfo } from "./View.js";
 
@@ -30,7 +31,7 @@ export function caseInfo(c: StartCase, d: CaseDraft, placeName: string | undefin
       `Locomotives: ${locos}`,
       `Train: ${show("mass", c.train.trailingMassKg, units)} in ${c.train.wagons} wagons, ${show("distance", c.train.lengthM, units)}`,
       `Place: ${place}`,
-      `Rail: ${RAIL_WORD[c.conditions.rail]}, ${c.conditions.sand ? "with sand" : "without sand"}, ${show("temperature", c.conditions.temperatureC, units)}`,
+      `Rail: ${words.rail(c.conditions.rail)}, ${c.conditions.sand ? "with sand" : "without sand"}, ${show("temperature", c.conditions.temperatureC, units)}`,
     ],
     rail: c.conditions.rail,
     sand: c.conditions.sand,

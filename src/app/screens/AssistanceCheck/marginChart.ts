@@ -3,11 +3,11 @@
  * and with sand, against × 1 (as much needed as available). The axis stops at × 3: beyond that the bar is
  * cut and the table beside gives the figure.
  */
+import { words } from "../../words.js";
 import type { ConditionMargin } from "../../../core/dispatch/conditionMargins.js";
 import { RAIL_CONDITIONS } from "../../../core/physics/types.js";
 import type { ChartSpec } from "../../charts/spec.js";
 import { barChart } from "../shared/bars.js";
-import { RAIL_WORD } from "../shared/words.js";
 
 export const MARGIN_AXIS_TOP = 3;
 
@@ -15,7 +15,7 @@ export function marginChart(rows: readonly ConditionMargin[]): ChartSpec | null 
   if (rows.length === 0) return null;
   const value = (rail: string, sand: boolean) => rows.find((r) => r.rail === rail && r.sand === sand)?.margin ?? Number.NaN;
   return barChart({
-    categories: RAIL_CONDITIONS.map((r) => RAIL_WORD[r]),
+    categories: RAIL_CONDITIONS.map((r) => words.rail(r)),
     groups: [
       { id: "no-sand", label: "Without sand", role: "second", dashed: true, values: RAIL_CONDITIONS.map((r) => value(r, false)) },
       { id: "sand", label: "With sand", role: "main", values: RAIL_CONDITIONS.map((r) => value(r, true)) },

@@ -6,7 +6,8 @@ import { Show, type JSX } from "solid-js";
 import type { PlanResult } from "../../../core/planner/types.js";
 import type { Target } from "../../../core/train/types.js";
 import { Icon } from "../../components/Icon.js";
-import { VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
+import { VerdictIcon } from "../../components/VerdictBanner.js";
+import { words } from "../../words.js";
 import { clock, localiseText, percent, show, type UnitSystem } from "../../format.js";
 import type { WakeLockState } from "../../state/createWakeLock.js";
 import { advanceLead, advanceOthers, notchText, PHASE_LINE, PHASE_WORD, STILL_SLIPPING_LABEL, stillSlipping } from "../../steps.js";
@@ -92,7 +93,7 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
               {(r) => (
                 <>
                   <p class="cab-verdict">
-                    <VerdictIcon verdict={r().verdict} size={56} /> {VERDICT_WORD[r().verdict]}
+                    <VerdictIcon verdict={r().verdict} size={56} /> {words.verdict(r().verdict)}
                   </p>
                   <p>This plan has no notch steps to show.</p>
                 </>

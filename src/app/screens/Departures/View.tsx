@@ -6,12 +6,14 @@
  */
 import { For, Show, type JSX } from "solid-js";
 import type { Verdict } from "../../../core/planner/outcome.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../../../core/physics/types.js";
 import { Icon } from "../../components/Icon.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
-import { VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
+import { VerdictIcon } from "../../components/VerdictBanner.js";
+import { words } from "../../words.js";
 import { margin, show, showAtMost, type UnitSystem } from "../../format.js";
 import { Cautions } from "../shared/Cautions.js";
-import { divideLine, limitWord, optionHeadline, RAIL_WORD, REASON_SHORT } from "../shared/words.js";
+import { divideLine, limitWord, optionHeadline, REASON_SHORT } from "../shared/words.js";
 import type { RunState } from "./createDeparturesRun.js";
 import type { DepartureRow, DeparturesSummary } from "./rows.js";
 
@@ -276,7 +278,7 @@ function Row(props: { row: DepartureRow; units: UnitSystem; onOpen?: (row: Depar
   const x = () => props.row;
   const a = () => x().answer;
   const sub = () =>
-    [x().where, x().rail ? `${RAIL_WORD[x().rail as keyof typeof RAIL_WORD] ?? x().rail}${x().sand ? ", sand" : ", no sand"}` : "", x().trailingMassKg !== undefined ? show("mass", x().trailingMassKg!, props.units) : ""]
+    [x().where, x().rail ? `${((RAIL_CONDITIONS as readonly string[]).includes(x().rail!) ? words.rail(x().rail as RailCondition) : x().rail)}${x().sand ? ", sand" : ", no sand"}` : "", x().trailingMassKg !== undefined ? show("mass", x().trailingMassKg!, props.units) : ""]
       .filter((s) => s !== "")
       .join(" · ");
   const remedy = (): JSX.Element => {
@@ -304,7 +306,7 @@ function Row(props: { row: DepartureRow; units: UnitSystem; onOpen?: (row: Depar
           {(r) => (
             <span class={`verdict-cell verdict-${r().verdict}`}>
               <VerdictIcon verdict={r().verdict} size={26} />
-              {VERDICT_WORD[r().verdict]}
+              {words.verdict(r().verdict)}
             </span>
           )}
         </Show>

@@ -1,10 +1,10 @@
 /** The load table as bars per rail condition (without and with sand) in the user's mass unit, with the train's own mass as a line. */
+import { words } from "../../words.js";
 import type { LoadTableRow } from "../../../core/dispatch/loadTable.js";
 import { RAIL_CONDITIONS } from "../../../core/physics/types.js";
 import type { ChartSpec } from "../../charts/spec.js";
 import { toDisplay, unitSymbol, type UnitSystem } from "../../format.js";
 import { barChart } from "../shared/bars.js";
-import { RAIL_WORD } from "../shared/words.js";
 
 export function loadChart(rows: readonly LoadTableRow[], trainMassKg: number | null, units: UnitSystem): ChartSpec | null {
   if (rows.length === 0) return null;
@@ -15,7 +15,7 @@ export function loadChart(rows: readonly LoadTableRow[], trainMassKg: number | n
   };
   const unit = unitSymbol("mass", units);
   return barChart({
-    categories: RAIL_CONDITIONS.map((r) => RAIL_WORD[r]),
+    categories: RAIL_CONDITIONS.map((r) => words.rail(r)),
     groups: [
       { id: "no-sand", label: "Without sand", role: "second", dashed: true, values: RAIL_CONDITIONS.map((r) => value(r, false)) },
       { id: "sand", label: "With sand", role: "main", values: RAIL_CONDITIONS.map((r) => value(r, true)) },

@@ -9,6 +9,7 @@
  * defaults and a fingerprint of all of them) and when it was printed, so an old printout can be told from
  * a current one.
  */
+import { words } from "../../words.js";
 import { For, Show, type JSX } from "solid-js";
 import { STANDARD_CAUTIONS } from "../../../core/planner/cautions.js";
 import type { LoadTableRow } from "../../../core/dispatch/loadTable.js";
@@ -24,7 +25,6 @@ import type { LoadTableOutcome } from "./loadTableRunner.js";
 import { slackSentence, type ProfileModel } from "./profileModel.js";
 import { ProfileSketch } from "./ProfileSketch.js";
 import { RailSandTable } from "../shared/RailSandTable.js";
-import { RAIL_WORD } from "../shared/words.js";
 
 const SEASON_WORD = { spring: "Spring", summer: "Summer", autumn: "Autumn", winter: "Winter" } as const;
 
@@ -207,7 +207,7 @@ export function Card(props: CardProps): JSX.Element {
               <For each={n().seasons}>
                 {(s) => (
                   <li>
-                    <strong>{SEASON_WORD[s.season]}:</strong> {RAIL_WORD[s.rail].toLowerCase()}
+                    <strong>{SEASON_WORD[s.season]}:</strong> {words.railInline(s.rail)}
                     {s.note ? ` — ${s.note}` : ""}
                   </li>
                 )}

@@ -4,6 +4,7 @@
  * and the revision entry for this save. Every rule broken is said in words at the field and in the
  * list above the Save button.
  */
+import { words } from "../../words.js";
 import { For, Match, Show, Switch, type JSX } from "solid-js";
 import { RAIL_CONDITIONS } from "../../../core/physics/types.js";
 import { DEFAULT_REFERENCE_TEMPERATURE_C } from "../../../profiles/referenceTrain.js";
@@ -13,7 +14,6 @@ import type { ChartPalette } from "../../charts/palette.js";
 import { QuantityField } from "../../components/QuantityField.js";
 import { show, type UnitSystem } from "../../format.js";
 import { LoadTableResult } from "./Card.js";
-import { RAIL_WORD } from "../shared/words.js";
 import type { NoteEditor } from "./createNoteEditor.js";
 import { HAZARD_KINDS, SEASONS, type HazardKind, type RailWord, type Season } from "./draft.js";
 import { SelectField, TextField } from "./fields.js";
@@ -210,7 +210,7 @@ export function Editor(props: EditorProps): JSX.Element {
           {(s, k) => (
             <div class="notes-list-row">
               <SelectField<Season> label="Season" name={`seasons[${k()}].season`} value={s.season} options={SEASONS.map((x) => ({ value: x, label: SEASON_LABEL[x] }))} onValue={(v) => e().set("seasons", k(), "season", v)} />
-              <SelectField<RailWord> label="Rail" name={`seasons[${k()}].rail`} value={s.rail} options={RAIL_CONDITIONS.map((x) => ({ value: x, label: RAIL_WORD[x] }))} onValue={(v) => e().set("seasons", k(), "rail", v)} />
+              <SelectField<RailWord> label="Rail" name={`seasons[${k()}].rail`} value={s.rail} options={RAIL_CONDITIONS.map((x) => ({ value: x, label: words.rail(x) }))} onValue={(v) => e().set("seasons", k(), "rail", v)} />
               <TextField label="Note" name={`seasons[${k()}].note`} value={s.note} onValue={(v) => e().set("seasons", k(), "note", v)} maxLength={400} class="wide" />
               <button type="button" class="notes-icon-button" aria-label={`Remove season ${k() + 1}`} onClick={() => e().set("seasons", (ss) => ss.filter((_, i) => i !== k()))}>
                 ✕

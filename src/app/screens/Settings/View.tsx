@@ -8,6 +8,11 @@ import { Toggle } from "../../components/Toggle.js";
 import { percent, type UnitSystem } from "../../format.js";
 import type { MotionLockStatus } from "../../state/createMotionLock.js";
 import { DEFAULT_APP_SETTINGS, SAFETY_BOUNDS, type AppSettings, type ThemeChoice } from "../../state/createSettings.js";
+import { settings as en } from "../../../i18n/en/settings.js";
+import { LANGS, LANGUAGE_NAMES } from "../../../i18n/language.js";
+import { appNumber, tr, type LanguageChoice } from "../../i18n.js";
+
+const t = tr.ns(en);
 
 export interface SettingsViewProps {
   settings: AppSettings;
@@ -22,12 +27,12 @@ export interface SettingsViewProps {
   version: string;
 }
 
-const MOTION_TEXT: Record<MotionLockStatus, string> = {
-  off: "Off: Taut does not read the device's location.",
-  watching: "On: the controls hide while the device reports a speed above 5 km/h (3 mph).",
-  unsupported: "This browser gives no location, so the lock cannot work here.",
-  denied: "Location was refused: allow it in the browser's site settings, or turn this off.",
-  unavailable: "No position fix yet: the lock acts once the device reports its speed.",
+const MOTION_TEXT: Record<MotionLockStatus, () => string> = {
+  off: () => t("motionOff"),
+  watching: () => t("motionWatching"),
+  unsupported: () => t("motionUnsupported"),
+  denied: () => t("motionDenied"),
+  unavailable: () => t("motionUnavailable"),
 };
 
 export function SettingsView(props: SettingsViewProps): JSX.Element {
@@ -45,37 +50,45 @@ export function SettingsView(props: SettingsViewProps): JSX.Element {
   return (
     <div class="settings">
       <section class="panel">
-        <h2>Display</h2>
+        <h2>{t("display")}</h2>
+        <SegmentedButtons<LanguageChoice>
+          name="language"
+          label={t("language")}
+          value={s().language}
+          onChange={(language) => props.onChange({ language })}
+          options={[...LANGS.map((l) => ({ value: l as LanguageChoice, label: LANGUAGE_NAMES[l] })), { value: "auto", label: t("languageAuto") }]}
+        />
+        <p class="muted">{t("languageNote")}</p>
         <SegmentedButtons<UnitSystem>
           name="units"
-          label="Units"
+          label={t("units")}
           value={s().units}
           onChange={(units) => props.onChange({ units })}
           options={[
-            { value: "metric", label: "Metric (t, kN, km/h, m)" },
-            { value: "us", label: "US customary (short tons, klbf, mph, ft)" },
+            { value: "metric", label: t("unitsMetric") },
+            { value: "us", label: t("unitsUs") },
           ]}
         />
         <SegmentedButtons<ThemeChoice>
           name="theme"
-          label="Theme"
+          label={t("theme")}
           value={s().theme}
           onChange={(theme) => props.onChange({ theme })}
           options={[
-            { value: "day", label: "Day" },
-            { value: "night", label: "Night" },
-            { value: "system", label: "Follow the device" },
+            { value: "day", label: t("themeDay") },
+            { value: "night", label: t("themeNight") },
+            { value: "system", label: t("themeSystem") },
           ]}
         />
-        <p class="muted">Night is dark with dim, warm accents, to keep glare down in a dark cab.</p>
+        <p class="muted">{t("themeNote")}</p>
       </section>
 
       <section class="panel">
-        <h2>Safety settings</h2>
-        <p class="muted">Every plan uses these. Change them only as your railway's practice says.</p>
+        <h2>{t("safety")}</h2>
+        <p class="muted">{t("safetyNote")}</p>
         <QuantityField
           name="couplerSafetyFactor"
-          label="Coupler safety factor"
+          label={t("couplerFactor")}
           value={factor()}
           onValue={(v) => {
             setFactor(v);
@@ -88,16 +101,11 @@ export function SettingsView(props: SettingsViewProps): JSX.Element {
           min={SAFETY_BOUNDS.couplerSafetyFactor.min}
           max={SAFETY_BOUNDS.couplerSafetyFactor.max}
           issue={outOfRange(factor(), fb)}
-          hint={
-            <>
-              Peak coupler force must stay below the coupling's working limit divided by this. Default {DEFAULT_APP_SETTINGS.couplerSafetyFactor}: it leaves room
-              for what the model does not capture — uneven slack, worn draft gear, a harder pull than planned.
-            </>
-          }
+          hint={t("couplerFactorHint", { value: appNumber(DEFAULT_APP_SETTINGS.couplerSafetyFactor, 1) })}
         />
         <QuantityField
           name="slipRiskThreshold"
-          label="Slip-risk threshold"
+          label={t("slipThreshold")}
           value={threshold()}
           onValue={(v) => {
             setThreshold(v);
@@ -110,17 +118,11 @@ export function SettingsView(props: SettingsViewProps): JSX.Element {
           min={SAFETY_BOUNDS.slipRiskThreshold.min * 100}
           max={SAFETY_BOUNDS.slipRiskThreshold.max * 100}
           issue={outOfRange(threshold(), tb, " %")}
-          hint={
-            <>
-              The highest chance that the rails give less than the start needs, for "starts". Default {percent(DEFAULT_APP_SETTINGS.slipRiskThreshold, 0)}: real
-              adhesion scatters, and planning to the typical (median) value would mean slipping about half the time; planning to the value the rails beat
-              nine times in ten keeps slips rare without giving up too much tractive effort.
-            </>
-          }
+          hint={t("slipThresholdHint", { value: percent(DEFAULT_APP_SETTINGS.slipRiskThreshold, 0) })}
         />
         <QuantityField
           name="marginalSlipRisk"
-          label="Marginal up to"
+          label={t("marginalUpTo")}
           value={bound()}
           onValue={(v) => {
             setBound(v);
@@ -133,55 +135,47 @@ export function SettingsView(props: SettingsViewProps): JSX.Element {
           min={bb.min}
           max={bb.max}
           issue={outOfRange(bound(), bb, " %")}
-          hint={
-            <>
-              A start that needs a better rail than the threshold assumes is "marginal" while the chance that the rails give less stays below this, and
-              "needs assistance" beyond it (never below the threshold). Default {percent(DEFAULT_APP_SETTINGS.marginalSlipRisk, 0)}: one start in four failing is as
-              far as a careful briefing can carry; beyond that the train needs help.
-            </>
-          }
+          hint={t("marginalUpToHint", { value: percent(DEFAULT_APP_SETTINGS.marginalSlipRisk, 0) })}
         />
         <button type="button" class="button" onClick={() => props.onResetSafety()}>
-          Back to the defaults ({DEFAULT_APP_SETTINGS.couplerSafetyFactor}, {percent(DEFAULT_APP_SETTINGS.slipRiskThreshold, 0)} and{" "}
-          {percent(DEFAULT_APP_SETTINGS.marginalSlipRisk, 0)})
+          {t("resetSafety", { factor: appNumber(DEFAULT_APP_SETTINGS.couplerSafetyFactor, 1), threshold: percent(DEFAULT_APP_SETTINGS.slipRiskThreshold, 0), bound: percent(DEFAULT_APP_SETTINGS.marginalSlipRisk, 0) })}
         </button>
       </section>
 
       <section class="panel">
-        <h2>While the train moves</h2>
-        <Toggle name="motionLock" label="Hide the controls while moving" icon="moving" on={s().motionLock} onChange={(motionLock) => props.onChange({ motionLock })} />
-        <p class="muted">{MOTION_TEXT[props.motionStatus]} Taut is for planning and briefing before departure; device use in the cab follows local rules.</p>
+        <h2>{t("moving")}</h2>
+        <Toggle name="motionLock" label={t("motionLock")} icon="moving" on={s().motionLock} onChange={(motionLock) => props.onChange({ motionLock })} />
+        <p class="muted">
+          {MOTION_TEXT[props.motionStatus]()}
+          {t("motionRule")}
+        </p>
       </section>
 
       <section class="panel">
-        <h2>Offline</h2>
+        <h2>{t("offline")}</h2>
         <p>
-          <Show when={props.offlineSupported} fallback="This browser cannot keep an offline copy.">
-            {props.offlineReady ? "Ready offline: Taut works without a connection on this device." : "Saving a copy for offline use…"}
+          <Show when={props.offlineSupported} fallback={t("offlineUnsupported")}>
+            {props.offlineReady ? t("offlineReady") : t("offlineSaving")}
           </Show>
         </p>
         <Show when={props.offlineSupported}>
           <button type="button" class="button" onClick={() => props.onCheckUpdate()}>
-            <Icon name="update" /> Check for a new version
+            <Icon name="update" /> {t("checkUpdate")}
           </button>
-          <p class="muted">A new version is never installed without asking you first.</p>
+          <p class="muted">{t("updateNote")}</p>
         </Show>
       </section>
 
       <section class="panel about">
-        <h2>About Taut</h2>
-        <p>
-          Taut {props.version} plans the start of a heavy freight train: which notch to start in, how long to hold it while the slack comes out, how far to notch
-          up before the wheels slip, and whether the train needs assistance. It computes this from running and starting resistance, grade and curve
-          resistance, adhesion with its statistical spread, the locomotives' traction characteristics and the train's couplings.
-        </p>
-        <h3>Cautions</h3>
+        <h2>{t("about")}</h2>
+        <p>{t("aboutText", { version: props.version })}</p>
+        <h3>{t("cautions")}</h3>
         <ul>
           <For each={STANDARD_CAUTIONS}>{(c) => <li>{c}</li>}</For>
         </ul>
-        <h3>Demo data</h3>
-        <p>The built-in places, trains and locomotive profiles are invented and illustrative; none is a real class, route or place.</p>
-        <h3>Sources</h3>
+        <h3>{t("demoData")}</h3>
+        <p>{t("demoDataText")}</p>
+        <h3>{t("sources")}</h3>
         <ul class="sources">
           <li>Adhesion against speed: E. W. Curtius and A. Kniffler, Elektrische Bahnen 20 (1950).</li>
           <li>Adhesion as a statistical problem: S. Johnsson, IMechE (1963).</li>
@@ -198,6 +192,7 @@ export function SettingsView(props: SettingsViewProps): JSX.Element {
 }
 
 function outOfRange(v: number, b: { min: number; max: number }, unit = ""): string | undefined {
-  if (!Number.isFinite(v)) return "must be a number";
-  return v < b.min - 1e-9 || v > b.max + 1e-9 ? `must be between ${b.min}${unit} and ${b.max}${unit}; the last good value still applies` : undefined;
+  if (!Number.isFinite(v)) return t("mustBeNumber");
+  const bound = (x: number) => `${appNumber(x, Number.isInteger(x) ? 0 : 2)}${unit}`;
+  return v < b.min - 1e-9 || v > b.max + 1e-9 ? t("mustBeBetween", { min: bound(b.min), max: bound(b.max) }) : undefined;
 }

@@ -6,7 +6,7 @@
  */
 import { createEffect, createMemo, createSignal, For, Index, onCleanup, Show, type JSX } from "solid-js";
 import type { PlanResult } from "../../../core/planner/types.js";
-import { LIMIT_WORDS, type Reason } from "../../../core/planner/outcome.js";
+import type { Reason } from "../../../core/planner/outcome.js";
 import type { StartCase } from "../../../core/train/types.js";
 import { couplerChart } from "../../charts/couplerAlong.js";
 import { effortChart } from "../../charts/effortSpeed.js";
@@ -15,7 +15,8 @@ import type { ChartSpec } from "../../charts/spec.js";
 import { speedNotchChart } from "../../charts/speedNotch.js";
 import { Chart } from "../../components/Chart.js";
 import { Icon } from "../../components/Icon.js";
-import { REASON_LINE, VerdictBanner, VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
+import { VerdictBanner, VerdictIcon } from "../../components/VerdictBanner.js";
+import { words } from "../../words.js";
 import { issueLine } from "../../fields.js";
 import type { FieldIssue } from "../../../profiles/issues.js";
 import { duration, localiseText, margin, percent, percentOf, show, showAtMost, showForce, type UnitSystem } from "../../format.js";
@@ -51,7 +52,7 @@ const MARGIN_WORD: Record<Reason, string> = { adhesion: "Adhesion", power: "Powe
  * shown.
  */
 export function bindingLimit(res: PlanResult): string {
-  return LIMIT_WORDS[res.binding];
+  return words.limit(res.binding);
 }
 
 /** The verdict in one line, kept in view at the top of the plan's pane. */
@@ -64,10 +65,10 @@ export function VerdictSummary(props: { result: PlanResult; stale: boolean; show
       data-verdict={v()}
       aria-hidden={props.shown ? undefined : "true"}
       role="status"
-      aria-label={`Verdict: ${VERDICT_WORD[v()]}`}
+      aria-label={`Verdict: ${words.verdict(v())}`}
     >
       <VerdictIcon verdict={v()} size={30} />
-      <span class="summary-word">{VERDICT_WORD[v()]}</span>
+      <span class="summary-word">{words.verdict(v())}</span>
       <span class="summary-margin">margin {margin(props.result.margin)}</span>
       <span class="summary-limit">{bindingLimit(props.result)}</span>
       <Show when={props.stale}>
@@ -176,7 +177,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
             </div>
             <Show when={res().reasons.length > 0}>
               <ul class="reasons">
-                <For each={res().reasons}>{(reason) => <li>{REASON_LINE[reason]}</li>}</For>
+                <For each={res().reasons}>{(reason) => <li>{words.reasonLine(reason)}</li>}</For>
               </ul>
             </Show>
             <Show when={res().advice.length > 0}>

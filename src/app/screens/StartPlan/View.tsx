@@ -5,7 +5,8 @@
  */
 import { createSignal, Show, type JSX } from "solid-js";
 import type { Verdict } from "../../../core/planner/outcome.js";
-import { VerdictIcon, VERDICT_WORD } from "../../components/VerdictBanner.js";
+import { VerdictIcon } from "../../components/VerdictBanner.js";
+import { words } from "../../words.js";
 import { InputsView, type InputsViewProps } from "./InputsView.js";
 import { ResultView, type ResultViewProps } from "./ResultView.js";
 
@@ -52,7 +53,7 @@ export function StartPlanView(props: StartPlanViewProps): JSX.Element {
             {(v) => (
               <span class={`pane-verdict verdict-${v()}`}>
                 <VerdictIcon verdict={v()} size={24} />
-                {VERDICT_WORD[v()]}
+                {words.verdict(v())}
                 <Show when={stale()}>
                   <span class="pane-stale">updating…</span>
                 </Show>

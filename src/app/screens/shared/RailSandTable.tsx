@@ -1,7 +1,7 @@
 /** The rail condition × sand grid the load table, the margins per condition and the note's card all use. */
+import { words } from "../../words.js";
 import { For, type JSX } from "solid-js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../../core/physics/types.js";
-import { RAIL_WORD } from "./words.js";
 
 export function RailSandTable(props: {
   class: string;
@@ -23,7 +23,7 @@ export function RailSandTable(props: {
         <For each={RAIL_CONDITIONS}>
           {(rail) => (
             <tr>
-              <th scope="row">{RAIL_WORD[rail]}</th>
+              <th scope="row">{words.rail(rail)}</th>
               {props.cell(rail, false)}
               {props.cell(rail, true)}
             </tr>

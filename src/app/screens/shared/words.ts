@@ -3,18 +3,16 @@
  * added units go, an assistance option and a divided train in a line. Pure; figures in the user's units.
  */
 import type { LocoPosition } from "../../../core/train/types.js";
-import type { RailCondition } from "../../../core/physics/types.js";
-import { LIMIT_WORDS, type LimitName, type Reason } from "../../../core/planner/outcome.js";
+import type { LimitName, Reason } from "../../../core/planner/outcome.js";
+import { words } from "../../words.js";
 import type { AssistanceOptionData, DivideData } from "../../../worker/protocol.js";
 import { show, type UnitSystem } from "../../format.js";
-
-export const RAIL_WORD: Record<RailCondition, string> = { dry: "Dry", damp: "Damp", wet: "Wet", frost: "Frost", leaves: "Leaves", greasy: "Greasy" };
 
 export const REASON_SHORT: Record<Reason, string> = { adhesion: "adhesion", power: "power", coupler: "coupler", distance: "distance", brake: "brake" };
 
 /** The binding limit in words, for beside a margin: "(adhesion)", "(coupler tension)". */
 export function limitWord(binding: LimitName | undefined): string {
-  return binding ? LIMIT_WORDS[binding] : "";
+  return binding ? words.limit(binding) : "";
 }
 
 /** "at the head", "at the rear", "after wagon 14". */

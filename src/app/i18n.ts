@@ -1,0 +1,78 @@
+/**
+ * The app's language: English in the first chunk; Hungarian and German catalogs loaded on demand (a chunk
+ * each, kept offline by the service worker). `tr` is the app's translator: its messages and numbers read
+ * the current language, so whatever shows them redraws when Settings changes it. The language follows the
+ * device's preferred languages unless Settings names one.
+ */
+import { batch, createSignal } from "solid-js";
+import { isLang, langFromPreferences, LOCALE_TAGS, type Lang } from "../i18n/language.js";
+import { fill, type Catalog, type Messages, type Namespace } from "../i18n/messages.js";
+import { formatNumberIn } from "../i18n/numbers.js";
+import { messageOf, type MessageFn, type Translator } from "../i18n/translator.js";
+
+/** The language setting: a language, or "auto" (the device's). */
+export type LanguageChoice = Lang | "auto";
+
+export function isLanguageChoice(x: unknown): x is LanguageChoice {
+  return x === "auto" || isLang(x);
+}
+
+const [lang, setLang] = createSignal<Lang>("en");
+const [catalog, setCatalog] = createSignal<Catalog | null>(null);
+
+/** The language on screen. */
+export const appLang = lang;
+
+/** A number as the language on screen writes it, with grouping and a true minus sign. */
+export function appNumber(x: number, decimals: number): string {
+  return formatNumberIn(lang(), x, decimals, { grouping: true, minus: "\u2212" });
+}
+
+const whole = (x: number) => appNumber(x, Number.isInteger(x) ? 0 : 1);
+
+/** The app's translator (reactive: it reads the language on screen at each call). */
+export const tr: Translator = {
+  get lang() {
+    return lang();
+  },
+  ns<M extends Messages>(n: Namespace<string, M>): MessageFn<M> {
+    return ((key: string, params?: Readonly<Record<string, string | number>>) => fill(messageOf(n, key, lang() === "en" ? null : catalog()), params, whole)) as MessageFn<M>;
+  },
+  num: appNumber,
+};
+
+/** Load a language's catalog (a chunk of its own); English has none to load. */
+export async function loadCatalog(l: Lang): Promise<Catalog | null> {
+  if (l === "hu") return (await import("../i18n/hu/index.js")).hu;
+  if (l === "de") return (await import("../i18n/de/index.js")).de;
+  return null;
+}
+
+let wanted: Lang = "en";
+
+/**
+ * Show the app in `l`: its catalog is loaded first, then the language switches at once (never half in one
+ * language). A catalog that cannot be loaded (offline before it was ever saved) leaves the language as it was.
+ */
+export async function setAppLanguage(l: Lang): Promise<boolean> {
+  wanted = l;
+  let c: Catalog | null;
+  try {
+    c = await loadCatalog(l);
+  } catch {
+    return false;
+  }
+  // A later choice made while this catalog was loading wins.
+  if (wanted !== l) return false;
+  batch(() => {
+    setCatalog(c);
+    setLang(l);
+  });
+  if (typeof document !== "undefined") document.documentElement.lang = LOCALE_TAGS[l].slice(0, 2);
+  return true;
+}
+
+/** The language a choice means on this device. */
+export function resolveLanguage(choice: LanguageChoice, preferred: readonly string[] | undefined = typeof navigator !== "undefined" ? navigator.languages : undefined): Lang {
+  return choice === "auto" ? langFromPreferences(preferred) : choice;
+}
