@@ -14,6 +14,8 @@ import { checkCommand } from "./commands/check.js";
 import { tableCommand } from "./commands/table.js";
 import { notesCommand } from "./commands/notes.js";
 import { reviewCommand } from "./commands/review.js";
+import { cli } from "../i18n/en/cli.js";
+import { cliTr, languageOf, setCliLanguage } from "./lang.js";
 
 const COMMANDS: Command[] = [planCommand, checkCommand, tableCommand, simulateCommand, reviewCommand, notesCommand];
 
@@ -27,20 +29,25 @@ export function addCommand(c: Command): void {
 }
 
 function topHelp(): string {
+  const t = cliTr().ns(cli);
   const width = Math.max(...COMMANDS.map((c) => c.name.length));
   return [
-    "taut — starting advisor for heavy trains (advisory only: operating rules, local instructions",
-    "and the locomotive's own instructions prevail)",
+    t("topTitle"),
+    t("topTitle2"),
     "",
-    "Usage: taut <command> [options]",
+    t("usage"),
     "",
-    "Commands:",
+    t("commandsTitle"),
     ...COMMANDS.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`),
     "",
-    "Run `taut <command> --help` for a command's options; `taut --version` prints the version.",
-    "Exit codes: 0 success, 2 bad input, 1 internal error.",
+    t("topHelpMore"),
+    t("topHelpLang"),
+    t("exitCodes"),
   ].join("\n");
 }
+
+/** Every command takes --lang (the language of its text; JSON and CSV do not change). */
+const LANG_OPTION = { lang: { type: "string" } } as const;
 
 const stdio: Output = {
   out: (t) => process.stdout.write(t.endsWith("\n") ? t : `${t}\n`),
@@ -63,12 +70,20 @@ function safeOutput(io: Output): Output {
 }
 
 /** Run the command line; returns the exit code. */
-export async function main(argv: string[], rawIo: Output = stdio): Promise<number> {
+export async function main(argv: string[], rawIo: Output = stdio, env: Readonly<Record<string, string | undefined>> = process.env): Promise<number> {
   const io = safeOutput(rawIo);
-  const [name, ...rest] = argv;
+  const chosen = languageOf(argv, env);
+  setCliLanguage(chosen.lang);
+  const t = cliTr().ns(cli);
+  // --lang may come before the command: `taut --lang de plan --demo`.
+  const [name, ...rest] = stripLeadingLang(argv);
   if (name === undefined || name === "--help" || name === "-h" || name === "help") {
     io.out(topHelp());
     return name === undefined ? EXIT_BAD_INPUT : EXIT_OK;
+  }
+  if (chosen.bad !== undefined) {
+    io.err(`taut: ${t("badLang", { value: quoted(chosen.bad) })}`);
+    return EXIT_BAD_INPUT;
   }
   if (name === "--version" || name === "-V") {
     io.out(`taut ${packageVersion()}`);
@@ -76,18 +91,18 @@ export async function main(argv: string[], rawIo: Output = stdio): Promise<numbe
   }
   const cmd = COMMANDS.find((c) => c.name === name);
   if (!cmd) {
-    io.err(`taut: unknown command ${quoted(name)}. Commands: ${COMMANDS.map((c) => c.name).join(", ")}. See taut --help.`);
+    io.err(t("unknownCommand", { name: quoted(name), list: COMMANDS.map((c) => c.name).join(", ") }));
     return EXIT_BAD_INPUT;
   }
   try {
     let parsed;
     try {
-      parsed = parseArgs({ args: rest, options: { ...cmd.options, help: { type: "boolean", short: "h" } }, allowPositionals: true, strict: true });
+      parsed = parseArgs({ args: rest, options: { ...cmd.options, ...LANG_OPTION, help: { type: "boolean", short: "h" } }, allowPositionals: true, strict: true });
     } catch (e) {
       throw new InputError(`${printable((e as Error).message.replace(/\. To specify a positional.*$/s, ""))}\n  usage: ${cmd.usage}`);
     }
     if (parsed.values.help) {
-      io.out(`Usage: ${cmd.usage}\n\n${cmd.help}`);
+      io.out(`${t("usageOf", { usage: cmd.usage })}\n\n${cmd.help}\n  --lang en|hu|de     ${t("topHelpLang").replace(/^--lang en\|hu\|de /, "")}`);
       return EXIT_OK;
     }
     return await cmd.run(parsed as { values: Record<string, unknown>; positionals: string[] }, io);
@@ -96,8 +111,15 @@ export async function main(argv: string[], rawIo: Output = stdio): Promise<numbe
       io.err(`taut ${cmd.name}: ${e.describe()}`);
       return EXIT_BAD_INPUT;
     }
-    io.err(`taut ${cmd.name}: internal error: ${printable((e as Error).message)}\nPlease report this with the input file.`);
+    io.err(t("internalError", { command: cmd.name, message: printable((e as Error).message) }));
     if (process.env.TAUT_DEBUG) io.err(String((e as Error).stack));
     return EXIT_INTERNAL;
   }
+}
+
+/** The arguments without a --lang given before the command's name. */
+function stripLeadingLang(argv: readonly string[]): string[] {
+  const out = [...argv];
+  while (out[0] === "--lang" || out[0]?.startsWith("--lang=")) out.splice(0, out[0] === "--lang" ? 2 : 1);
+  return out;
 }

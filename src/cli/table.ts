@@ -1,25 +1,29 @@
 /** Plain-text tables for the terminal: columns padded, numbers right-aligned. */
-import { fixedText } from "../profiles/numbers.js";
+import { cliTr } from "./lang.js";
 
 export function textTable(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<string>>): string {
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
-  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+<]?[\d.,]+%?( @[\d.]+)?$|^—$|^none$/.test(r[i] ?? "")));
+  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+<]?[\d.,]+%?( @[\d.,]+)?$|^—$|^none$/.test(r[i] ?? "")));
   const line = (cells: readonly string[]) =>
     cells.map((c, i) => (isNum[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join("  ").trimEnd();
   return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");
 }
 
-/** Format with fixed decimals (rounded as the app rounds: src/profiles/numbers.ts), or a dash when absent. */
+/**
+ * Format with fixed decimals (rounded as the app rounds: src/profiles/numbers.ts) as this run's language
+ * writes them (a decimal comma in Hungarian and German; no grouping), or a dash when absent. Text only: CSV
+ * and JSON carry their numbers as they are.
+ */
 export function num(x: number | null | undefined, decimals = 0): string {
   if (x === null || x === undefined || !Number.isFinite(x)) return "—";
-  return fixedText(x, decimals);
+  return cliTr().num(x, decimals);
 }
 
 /** A fraction as a percentage; a small one that would read 0 reads "<0.1%" (as the app shows it). */
 export function pct(x: number, decimals = 0): string {
   const p = x * 100;
-  if (p > 0 && p < 0.5 * 10 ** -decimals) return `<${fixedText(10 ** -decimals, decimals)}%`;
-  return `${fixedText(p, decimals)}%`;
+  if (p > 0 && p < 0.5 * 10 ** -decimals) return `<${num(10 ** -decimals, decimals)}%`;
+  return `${num(p, decimals)}%`;
 }
 
 export { toCsv as csv } from "../profiles/csv.js";

@@ -2,50 +2,64 @@
 import type { AssistanceReport, ConditionMarginReport, DivideReport, PlanReport } from "../../profiles/report.js";
 import { num, textTable } from "../table.js";
 import { wrap } from "./wrap.js";
-import { LIMIT_WORDS } from "../../core/planner/outcome.js";
+import { cli } from "../../i18n/en/cli.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
+import { cliTr, cliWords } from "../lang.js";
 
-export const VERDICT_WORDS: Record<PlanReport["verdict"], string> = {
-  starts: "STARTS",
-  marginal: "MARGINAL",
-  "needs-assistance": "NEEDS ASSISTANCE",
-};
+/** The verdict as the printout's headline shows it: "STARTS", "NEEDS ASSISTANCE". */
+export function verdictWord(v: PlanReport["verdict"]): string {
+  const t = cliTr().ns(cli);
+  return v === "starts" ? t("verdictStarts") : v === "marginal" ? t("verdictMarginal") : t("verdictNeedsAssistance");
+}
 
 /** A place in words: "at the head", "at the rear", "after wagon 30"; combined places joined with "+". */
-export function where(position: string): string {
+export function where(position: string, neutral = false): string {
+  const t = neutral ? (k: "atHead" | "atRear" | "afterWagon", p?: { wagon: string }) => (k === "atHead" ? "at the head" : k === "atRear" ? "at the rear" : `after wagon ${p!.wagon}`) : cliTr().ns(cli);
   return position
     .split(" + ")
-    .map((p) => p.replace(/^(\d+ )?(head|rear)$/, (_m, n: string | undefined, end: string) => `${n ?? ""}at the ${end}`))
+    .map((p) =>
+      p
+        .replace(/^(\d+ )?(head|rear)$/, (_m, n: string | undefined, end: string) => `${n ?? ""}${end === "head" ? t("atHead") : t("atRear")}`)
+        .replace(/^(\d+ )?after wagon (\d+)$/, (_m, n: string | undefined, wagon: string) => `${n ?? ""}${t("afterWagon", { wagon })}`),
+    )
     .join(" + ");
 }
 
-/** One option in a line: "1 × id at the rear"; units in two places: "2 × id (1 after wagon 9, 1 at the rear)". */
-export function optionLine(a: AssistanceReport): string {
-  if (a.position.includes(" + ")) return `${a.add} (${where(a.position).split(" + ").join(", ")})`;
-  return `${a.add} ${where(a.position)}`;
+/** One option in a line (`neutral`: in English whatever the language, as CSV carries it): "1 × id at the rear"; units in two places: "2 × id (1 after wagon 9, 1 at the rear)". */
+export function optionLine(a: AssistanceReport, neutral = false): string {
+  if (a.position.includes(" + ")) return `${a.add} (${where(a.position, neutral).split(" + ").join(", ")})`;
+  return `${a.add} ${where(a.position, neutral)}`;
+}
+
+/** A figure with the decimals it has, in this run's language. */
+function asGiven(x: number): string {
+  return num(x, Number.isInteger(x) ? 0 : (String(x).split(".")[1]?.length ?? 0));
 }
 
 /** The divided train in a line. */
 export function divideLine(d: DivideReport): string {
-  const wagons = (n: number) => `${n} wagon${n === 1 ? "" : "s"}`;
-  return `divide the train: first ${wagons(d.firstPart.wagons)} (${d.firstPart.trailingMass_t} t), ${wagons(d.remaining.wagons)} (${d.remaining.trailingMass_t} t) left`;
+  const t = cliTr().ns(cli);
+  const wagons = (n: number) => t("wagons", { count: n });
+  return t("divide", { first: wagons(d.firstPart.wagons), firstMass: asGiven(d.firstPart.trailingMass_t), rest: wagons(d.remaining.wagons), restMass: asGiven(d.remaining.trailingMass_t) });
 }
 
 /** The "Assistance" section of a plan. */
 export function renderAssistance(p: PlanReport): string[] {
+  const t = cliTr().ns(cli);
   const lines: string[] = [];
   const s = p.assistanceSearch;
   if (!s && p.assistance.length === 0) return lines;
   lines.push("");
-  lines.push("Assistance options:");
+  lines.push(t("assistanceTitle"));
   if (p.assistance.length > 0) {
     lines.push(
       textTable(
-        ["#", "add", "where", "verdict", "peak pull kN", "peak push kN", "to target s"],
+        ["#", t("colAdd"), t("colWhere"), t("colVerdict"), t("colPeakPull"), t("colPeakPush"), t("colToTarget")],
         p.assistance.map((a, i) => [
           String(i + 1),
           a.add,
           where(a.position),
-          VERDICT_WORDS[a.verdict].toLowerCase(),
+          cliWords().verdictInline(a.verdict),
           num(a.peakCouplerForce_kN),
           a.peakCompression_kN === undefined ? "—" : num(a.peakCompression_kN),
           num(a.timeToTarget_s),
@@ -59,22 +73,22 @@ export function renderAssistance(p: PlanReport): string[] {
       if (a.note) lines.push(...wrap(`  ${i + 1}. ${a.note}`, 100, "     "));
     });
   } else {
-    lines.push(`  No option with one or two more units${s ? ` of ${s.profile}` : ""} makes this train start.`);
+    lines.push(s ? t("noOptionOf", { profile: s.profile }) : t("noOption"));
   }
   if (p.divide) {
     const d = p.divide;
-    lines.push(...wrap(`  Otherwise ${divideLine(d)}; about ${d.trips} trips in all.${d.verdict === "starts" ? ` The first part starts (peak coupler ${num(d.peakCouplerForce_kN)} kN).` : ""}`, 100, "    "));
+    lines.push(...wrap(t("otherwise", { divide: divideLine(d), trips: d.trips }) + (d.verdict === "starts" ? t("firstPartStarts", { peak: num(d.peakCouplerForce_kN) }) : ""), 100, "    "));
   }
   if (s) {
     // Grouped by what ruled them out: "coupler: 1 at the head, 2 at the head".
     const groups = new Map<string, string[]>();
     for (const x of s.ruledOut) {
-      const key = x.reasons.length > 0 ? x.reasons.join(" and ") : VERDICT_WORDS[x.verdict].toLowerCase();
+      const key = x.reasons.length > 0 ? x.reasons.map((r) => cliWords().reason(r)).join(t("and")) : cliWords().verdictInline(x.verdict);
       const units = /^(\d+) ×/.exec(x.add)?.[1] ?? x.add;
       groups.set(key, [...(groups.get(key) ?? []), x.position.includes(" + ") ? where(x.position) : `${units} ${where(x.position)}`]);
     }
-    for (const [why, list] of groups) lines.push(...wrap(`  Ruled out by ${why}: ${list.join(", ")}.`, 100, "    "));
-    lines.push(`  Search: ${s.plannerRuns} planner runs (cap ${s.budget})${s.complete ? "" : "; the cap cut it short"}.`);
+    for (const [why, list] of groups) lines.push(...wrap(t("ruledOut", { why, list: list.join(", ") }), 100, "    "));
+    lines.push(t(s.complete ? "search" : "searchCut", { runs: s.plannerRuns, cap: s.budget }));
   }
   return lines;
 }
@@ -82,12 +96,14 @@ export function renderAssistance(p: PlanReport): string[] {
 /** Verdict and margins for every rail condition. */
 export function renderConditions(rows: readonly ConditionMarginReport[]): string[] {
   if (rows.length === 0) return [];
+  const t = cliTr().ns(cli);
+  const w = cliWords();
   return [
     "",
-    "By rail condition (margin = allowance ÷ demand of the limit that binds):",
+    t("byConditionTitle"),
     ...textTable(
-      ["rail", "sand", "verdict", "margin", "adhesion", "power", "coupler", "limited by"],
-      rows.map((m) => [m.rail, m.sand ? "yes" : "no", VERDICT_WORDS[m.verdict].toLowerCase(), num(m.margin, 2), num(m.margins.adhesion, 2), num(m.margins.power, 2), num(m.margins.coupler, 2), m.binding ? LIMIT_WORDS[m.binding] : m.limitedBy]),
+      [t("colRail"), t("colSand"), t("colVerdict"), t("colMargin"), w.reason("adhesion"), w.reason("power"), w.reason("coupler"), t("colLimitedBy")],
+      rows.map((m) => [(RAIL_CONDITIONS as readonly string[]).includes(m.rail) ? w.railInline(m.rail as RailCondition) : m.rail, m.sand ? t("yes") : t("no"), w.verdictInline(m.verdict), num(m.margin, 2), num(m.margins.adhesion, 2), num(m.margins.power, 2), num(m.margins.coupler, 2), m.binding ? w.limit(m.binding) : m.limitedBy]),
     )
       .split("\n")
       .map((l) => `  ${l}`),

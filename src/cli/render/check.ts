@@ -2,10 +2,10 @@
 import type { DepartureRow } from "../batch/checkDepartures.js";
 import { CHECK_CSV_HEADER } from "../../profiles/csv.js";
 import { csv, num, textTable } from "../table.js";
-import { divideLine, optionLine, VERDICT_WORDS } from "./assistance.js";
+import { divideLine, optionLine } from "./assistance.js";
+import { cliWords } from "../lang.js";
 import { wrap } from "./wrap.js";
 import { printable } from "../../profiles/text.js";
-import { LIMIT_WORDS } from "../../core/planner/outcome.js";
 
 /** The remedy of a row in a few words: the cheapest option, or dividing the train. */
 export function remedyText(r: DepartureRow): string {
@@ -60,9 +60,9 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
         r.rail ?? "",
         r.sand ? "yes" : "no",
         num(r.trailingMass_t),
-        VERDICT_WORDS[r.verdict!].toLowerCase(),
+        cliWords().verdictInline(r.verdict!),
         (r.reasons ?? []).join(", ") || "—",
-        `${num(r.margin, 2)}${r.binding ? ` (${LIMIT_WORDS[r.binding]})` : ""}`,
+        `${num(r.margin, 2)}${r.binding ? ` (${cliWords().limit(r.binding)})` : ""}`,
         massesText(r),
         remedyText(r) || "—",
       ]),
@@ -104,7 +104,7 @@ export function checkCsv(rows: readonly DepartureRow[]): string {
       r.maxStartableMass_t,
       r.peakCouplerForce_kN,
       r.timeToTarget_s,
-      r.assistance ? optionLine(r.assistance) : "",
+      r.assistance ? optionLine(r.assistance, true) : "",
       r.assistance?.verdict,
       r.assistance?.peakCouplerForce_kN,
       r.divide?.firstPart.wagons,

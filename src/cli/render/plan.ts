@@ -1,8 +1,10 @@
 /** The readable form of a plan: verdict first, then the figures and a numbered step table. */
 import type { PlanReport } from "../../profiles/report.js";
-import { LIMIT_WORDS, type LimitName } from "../../core/planner/outcome.js";
+import type { LimitName } from "../../core/planner/outcome.js";
+import { cli } from "../../i18n/en/cli.js";
+import { cliTr, cliWords } from "../lang.js";
 import { num, pct, textTable } from "../table.js";
-import { renderAssistance, renderConditions, VERDICT_WORDS } from "./assistance.js";
+import { renderAssistance, renderConditions, verdictWord } from "./assistance.js";
 import { wrap } from "./wrap.js";
 import { describeOverrides } from "../caseOverrides.js";
 import { printable } from "../../profiles/text.js";
@@ -10,27 +12,29 @@ import { printable } from "../../profiles/text.js";
 export { wrap };
 
 export function renderPlan(p: PlanReport): string {
+  const t = cliTr().ns(cli);
+  const w = cliWords();
   const lines: string[] = [];
   if (p.case.label) lines.push(printable(p.case.label));
-  if (p.case.overrides && Object.keys(p.case.overrides).length > 0) lines.push(`Changed from the case file: ${describeOverrides(p.case.overrides)}`);
-  lines.push(`Verdict: ${VERDICT_WORDS[p.verdict]}   ${marginText(p.margin, p.binding)}${p.startKind === "gravity" ? "   (brake-controlled start: gravity starts the train)" : ""}`);
+  if (p.case.overrides && Object.keys(p.case.overrides).length > 0) lines.push(t("changedFromCase", { what: describeOverrides(p.case.overrides) }));
+  lines.push(t("verdictLine", { verdict: verdictWord(p.verdict), margin: marginText(p.margin, p.binding) }) + (p.startKind === "gravity" ? t("gravityStart") : ""));
+  const r = p.resistance_kN;
+  lines.push(t("resistance", { total: num(r.total), starting: num(r.starting), running: num(r.running), grade: num(r.grade), curve: num(r.curve) }));
+  const a = p.adhesion;
   lines.push(
-    `Resistance at start: ${num(p.resistance_kN.total)} kN  (breakaway ${num(p.resistance_kN.starting)} + running ${num(p.resistance_kN.running)} + grade ${num(p.resistance_kN.grade)} + curve ${num(p.resistance_kN.curve)})`,
-  );
-  lines.push(
-    `Adhesion: μ ${num(p.adhesion.mu, 3)} median, ${num(p.adhesion.muDesign, 3)} at ${pct(p.adhesion.slipRiskThreshold)} slip risk → ${num(p.adhesion.maxTractiveEffort_kN)} kN; needed ${num(p.adhesion.requiredTractiveEffort_kN)} kN (slip risk ${pct(p.adhesion.slipRiskAtStart, 1)})`,
+    t("adhesion", { mu: num(a.mu, 3), muDesign: num(a.muDesign, 3), threshold: pct(a.slipRiskThreshold), max: num(a.maxTractiveEffort_kN), needed: num(a.requiredTractiveEffort_kN), risk: pct(a.slipRiskAtStart, 1) }),
   );
   const atCeiling = p.massSearchCeiling_t !== undefined && p.maxStartableMass_t >= p.massSearchCeiling_t;
-  lines.push(
-    `Largest trailing mass that starts here: ${atCeiling ? `no limit up to ${num(p.maxStartableMass_t)} t (250 t a wagon)` : p.maxStartableMass_t > 0 ? `${num(p.maxStartableMass_t)} t` : "none"}${p.largestMarginalMass_t !== undefined && p.largestMarginalMass_t > p.maxStartableMass_t ? `; at least marginal up to ${num(p.largestMarginalMass_t)} t` : ""}`,
-  );
+  const largest = atCeiling ? t("largestMassNoLimit", { mass: num(p.maxStartableMass_t) }) : p.maxStartableMass_t > 0 ? t("largestMassValue", { mass: num(p.maxStartableMass_t) }) : t("largestMassNone");
+  const marginalTo = p.largestMarginalMass_t !== undefined && p.largestMarginalMass_t > p.maxStartableMass_t ? t("largestMarginal", { mass: num(p.largestMarginalMass_t) }) : "";
+  lines.push(t("largestMass", { mass: largest }) + marginalTo);
   if (p.limits && p.limits.length > 0) {
     lines.push("");
-    lines.push("Limits (margin = allowance ÷ demand; starts when every one is at least 1):");
+    lines.push(t("limitsTitle"));
     lines.push(
       textTable(
-        ["limit", "margin", "", "what"],
-        p.limits.map((l) => [LIMIT_WORDS[l.name], num(l.margin, 2), l.level === "within" ? "ok" : l.level === "soft" ? "marginal" : "over", l.what]),
+        [t("colLimit"), t("colMargin"), "", t("colWhat")],
+        p.limits.map((l) => [w.limit(l.name), num(l.margin, 2), l.level === "within" ? t("levelOk") : l.level === "soft" ? t("levelMarginal") : t("levelOver"), l.what]),
       )
         .split("\n")
         .map((x) => `  ${x}`)
@@ -38,19 +42,19 @@ export function renderPlan(p: PlanReport): string {
     );
   }
   if (p.stretch && p.stretch.lastVehicleMoves_s !== null) {
-    lines.push(`Stretch: last vehicle moves ${num(p.stretch.lastVehicleMoves_s, 0)} s after taking power, after ${num(p.stretch.locoTravelToStretch_m, 1)} m of locomotive travel`);
+    lines.push(t("stretch", { time: num(p.stretch.lastVehicleMoves_s, 0), travel: num(p.stretch.locoTravelToStretch_m, 1) }));
   }
   if (p.steps.length > 0) {
-    lines.push(`Time to target: ${p.timeToTarget_s === null ? "not reached" : `${num(p.timeToTarget_s)} s from taking power`}   peak coupler force ${num(p.peakCouplerForce_kN)} kN`);
+    lines.push(t("timeToTarget", { time: p.timeToTarget_s === null ? t("targetNotReached") : t("targetAfter", { time: num(p.timeToTarget_s) }), peak: num(p.peakCouplerForce_kN) }));
   }
   if (p.steps.length > 0) {
     lines.push("");
     lines.push(
       textTable(
-        ["#", "phase", "notch", "advance when", "km/h", "TE kN", "adhesion", "slip risk", "coupler kN", "still slipping"],
+        ["#", t("colPhase"), t("colNotch"), t("colAdvance"), "km/h", t("colTe"), t("colAdhesion"), t("colSlipRisk"), t("colCoupler"), t("colStillSlipping")],
         p.steps.map((s, i) => [
           String(i + 1),
-          s.phase,
+          w.phaseInline(s.phase),
           String(s.notch),
           advance(s.advanceWhen),
           num(s.speed_kmh, 1),
@@ -58,18 +62,18 @@ export function renderPlan(p: PlanReport): string {
           s.adhesionUseAt_kmh !== undefined ? `${pct(s.adhesionUse)} @${num(s.adhesionUseAt_kmh, 1)}` : pct(s.adhesionUse),
           `${pct(s.slipRisk, 1)}${s.protectionActs ? " *" : ""}`,
           num(s.peakCouplerForce_kN),
-          s.notch === 0 ? "—" : `notch ${s.fallbackNotch}`,
+          s.notch === 0 ? "—" : t("fallbackNotch", { notch: s.fallbackNotch }),
         ]),
       ),
     );
-    lines.push(...wrap("km/h and TE kN: at the end of each step. adhesion: the step's highest share of the median adhesion, reached at the speed after @ (km/h). coupler kN: the step's peak, against the allowance (limit ÷ safety factor).", 100, ""));
-    if (p.steps.some((s) => s.protectionActs)) lines.push("* the notch asks for more than the rail may give: the slip protection is expected to act in this step.");
+    lines.push(...wrap(t("stepsNote"), 100, ""));
+    if (p.steps.some((s) => s.protectionActs)) lines.push(t("protectionNote"));
     lines.push("");
-    lines.push("Why:");
+    lines.push(t("why"));
     p.steps.forEach((s, i) => lines.push(...wrap(`${i + 1}. ${s.why}`, 100, "   ")));
   } else if (p.verdict === "needs-assistance") {
     lines.push("");
-    lines.push("No notch sequence is offered: this train should not be started here as it stands.");
+    lines.push(t("noSteps"));
   }
   if (p.advice && p.advice.length > 0) {
     lines.push("");
@@ -77,37 +81,39 @@ export function renderPlan(p: PlanReport): string {
   }
   if (p.ifWheelsSlip && p.steps.some((s) => s.notch > 0)) {
     lines.push("");
-    lines.push("If wheels slip:");
-    lines.push(...wrap("  In every step, hold its notch while the protection acts; only if the slip keeps returning, drop to the notch in the table's \"still slipping\" column.", 100, "  "));
-    lines.push("  What you do, in order:");
+    lines.push(t("slipTitle"));
+    lines.push(...wrap(t("slipHold"), 100, "  "));
+    lines.push(t("slipDriver"));
     p.ifWheelsSlip.driver.forEach((t, i) => lines.push(...wrap(`  ${i + 1}. ${t}`, 100, "     ")));
-    lines.push("  Why you hold — what the locomotive does:");
+    lines.push(t("slipProtection"));
     for (const t of p.ifWheelsSlip.protection) lines.push(...wrap(`  - ${t}`, 100, "    "));
-    lines.push("  If the train stalls:");
+    lines.push(t("slipStall"));
     for (const t of p.ifWheelsSlip.stall) lines.push(...wrap(`  - ${t}`, 100, "    "));
   }
   lines.push(...renderAssistance(p));
   lines.push(...renderConditions(p.byCondition ?? []));
   lines.push("");
-  lines.push("Cautions:");
+  lines.push(t("cautions"));
   for (const c of p.cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
   return lines.join("\n");
 }
 
 function advance(a: PlanReport["steps"][number]["advanceWhen"]): string {
+  const t = cliTr().ns(cli);
   switch (a.primary) {
     case "moved":
-      return `moved ${num(a.moved_m, 1)} m`;
+      return t("advanceMoved", { distance: num(a.moved_m, 1) });
     case "speed":
-      return `${num(a.speed_kmh, 1)} km/h`;
+      return t("advanceSpeed", { speed: num(a.speed_kmh, 1) });
     case "target":
-      return "target";
+      return t("advanceTarget");
     default:
-      return `after ${num(a.after_s)} s`;
+      return t("advanceAfter", { time: num(a.after_s) });
   }
 }
 
 /** "margin 0.93 (adhesion)": the binding limit's margin, named. */
 export function marginText(margin: number, binding?: LimitName): string {
-  return `margin ${num(margin, 2)}${binding ? ` (${LIMIT_WORDS[binding]})` : ""}`;
+  const t = cliTr().ns(cli);
+  return binding ? t("marginNamed", { value: num(margin, 2), limit: cliWords().limit(binding) }) : t("margin", { value: num(margin, 2) });
 }

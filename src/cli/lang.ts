@@ -1,0 +1,47 @@
+/**
+ * The command line's language: `--lang en|hu|de` on any command, else the POSIX locale (LC_ALL,
+ * LC_MESSAGES, LANG), else English. Chosen once per run (`setCliLanguage`, by main) and read by every
+ * printout through `cliTr()`. Only text is translated: JSON and CSV are the same in every language.
+ */
+import { cliDe } from "../i18n/de/cli.js";
+import { de } from "../i18n/de/index.js";
+import { cliHu } from "../i18n/hu/cli.js";
+import { hu } from "../i18n/hu/index.js";
+import { langFromEnvironment, isLang, type Lang } from "../i18n/language.js";
+import type { Catalog } from "../i18n/messages.js";
+import { createTranslator, type Translator } from "../i18n/translator.js";
+import { wordsOf } from "../i18n/words.js";
+
+const CATALOGS: Readonly<Record<Lang, Catalog | null>> = { en: null, hu: { ...hu, cli: cliHu }, de: { ...de, cli: cliDe } };
+
+let current: Translator = createTranslator("en", null);
+
+export function setCliLanguage(l: Lang): void {
+  current = createTranslator(l, CATALOGS[l]);
+}
+
+/** The translator of this run. */
+export function cliTr(): Translator {
+  return current;
+}
+
+/** The words for a plan's codes in this run's language. */
+export function cliWords(): ReturnType<typeof wordsOf> {
+  return wordsOf(current);
+}
+
+/**
+ * The language asked for on the command line (`--lang X` or `--lang=X`, looked for before the options are
+ * parsed so that even a parse error is written in it), else the environment's. `undefined` value: not a
+ * language of ours (the caller says so).
+ */
+export function languageOf(args: readonly string[], env: Readonly<Record<string, string | undefined>>): { lang: Lang; bad?: string } {
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i]!;
+    if (a === "--") break;
+    const v = a === "--lang" ? args[i + 1] : a.startsWith("--lang=") ? a.slice("--lang=".length) : undefined;
+    if (v === undefined) continue;
+    return isLang(v) ? { lang: v } : { lang: langFromEnvironment(env), bad: v };
+  }
+  return { lang: langFromEnvironment(env) };
+}
