@@ -19,7 +19,7 @@ export default defineConfig({
           name: "unit",
           root,
           environment: "node",
-          include: ["tests/{architecture,core,reference,profiles,cli,notes,worker}/**/*.test.ts"],
+          include: ["tests/{architecture,core,reference,profiles,cli,notes,worker,i18n}/**/*.test.ts"],
           testTimeout: 60_000,
         },
       },

@@ -114,8 +114,10 @@ export const LAYERS: Readonly<Record<string, readonly string[]>> = {
   // The workers carry no schema code: the app parses files and sends the core's SI form.
   worker: ["core"],
   notes: ["core", "profiles"],
-  cli: ["core", "profiles"],
-  app: ["core", "profiles", "worker", "notes"],
+  // Message catalogs and the renderers of the core's codes, shared by the command line and the app.
+  i18n: ["core", "profiles"],
+  cli: ["core", "profiles", "i18n"],
+  app: ["core", "profiles", "worker", "notes", "i18n"],
 };
 
 function coreFolder(path: string): string | null {

@@ -130,7 +130,7 @@ describe("the real tree under src", () => {
 
   it("is read whole: every layer, the core's folders, and edges known to exist", () => {
     const layers = new Set([...g.keys()].map((k) => k.split("/")[0]));
-    expect([...layers].sort()).toEqual(["app", "cli", "core", "notes", "profiles", "worker"]);
+    expect([...layers].sort()).toEqual(["app", "cli", "core", "i18n", "notes", "profiles", "worker"]);
     expect(g.get("core/index.ts")).toEqual(new Set(["core/physics/index.ts", "core/train/index.ts", "core/dynamics/index.ts", "core/planner/index.ts", "core/dispatch/index.ts"]));
     expect(g.get("cli/main.ts")?.has("cli/commands/plan.ts")).toBe(true);
     expect(g.get("cli/taut.mjs")?.has("cli/main.ts")).toBe(true);

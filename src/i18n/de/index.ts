@@ -1,7 +1,8 @@
 /** The German catalog, a chunk of its own in the app (loaded when German is chosen). */
 import type { Catalog } from "../messages.js";
 import { shellDe } from "./shell.js";
+import { cardDe } from "./card.js";
 import { settingsDe } from "./settings.js";
 import { wordsDe } from "./words.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe };

@@ -1,7 +1,8 @@
 /** The Hungarian catalog, a chunk of its own in the app (loaded when Hungarian is chosen). */
 import type { Catalog } from "../messages.js";
 import { shellHu } from "./shell.js";
+import { cardHu } from "./card.js";
 import { settingsHu } from "./settings.js";
 import { wordsHu } from "./words.js";
 
-export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu };
+export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu };

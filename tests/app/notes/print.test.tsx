@@ -29,7 +29,7 @@ describe("printing a location card", () => {
     expect(printButton().disabled).toBe(true);
     const why = document.getElementById(printButton().getAttribute("aria-describedby")!)!;
     expect(why.textContent).toContain("Printing waits for the load table");
-    expect(printCopy().textContent).toContain(INCOMPLETE_LINE);
+    expect(printCopy().textContent).toContain(INCOMPLETE_LINE());
     expect(printCopy().querySelector(".notes-loadtable")).toBeNull();
 
     // The browser's own print command, early: the screen says the copy is marked incomplete.
@@ -42,7 +42,7 @@ describe("printing a location card", () => {
 
     await waitFor(() => expect(printButton().disabled).toBe(false));
     expect(printButton().getAttribute("aria-describedby")).toBeNull();
-    expect(printCopy().textContent).not.toContain(INCOMPLETE_LINE);
+    expect(printCopy().textContent).not.toContain(INCOMPLETE_LINE());
     expect(printCopy().querySelectorAll(".notes-loadtable tbody td")).toHaveLength(12);
   }, 30_000);
 

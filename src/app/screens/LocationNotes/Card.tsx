@@ -19,14 +19,17 @@ import type { LocationNoteFile } from "../../../profiles/schemas.js";
 import type { CardProvenance } from "../../../profiles/provenance.js";
 import { DEFAULT_REFERENCE_TEMPERATURE_C, type ReferenceSummary } from "../../../profiles/referenceTrain.js";
 import { show, showAtMost, type UnitSystem } from "../../format.js";
-import { HAZARD_KINDS } from "./draft.js";
+import { HAZARD_KINDS, hazardWord, type HazardKind } from "./draft.js";
 import type { NoteFigures } from "./figures.js";
 import type { LoadTableOutcome } from "./loadTableRunner.js";
 import { slackSentence, type ProfileModel } from "./profileModel.js";
 import { ProfileSketch } from "./ProfileSketch.js";
 import { RailSandTable } from "../shared/RailSandTable.js";
+import { card } from "../../../i18n/en/card.js";
+import { tr } from "../../i18n.js";
 
-const SEASON_WORD = { spring: "Spring", summer: "Summer", autumn: "Autumn", winter: "Winter" } as const;
+const t = tr.ns(card);
+const SEASON_WORD = { spring: () => t("spring"), summer: () => t("summer"), autumn: () => t("autumn"), winter: () => t("winter") } as const;
 
 export interface CardProps {
   note: LocationNoteFile;
@@ -44,7 +47,7 @@ export interface CardProps {
 }
 
 /** The line an unfinished card carries at its top, on screen and on paper. */
-export const INCOMPLETE_LINE = "Incomplete — wait for the load table.";
+export const INCOMPLETE_LINE = (): string => t("incomplete");
 
 /** Whether every figure of the card is worked out (a table that cannot be worked out says why, so counts). */
 export function cardComplete(loadTable: LoadTableOutcome | undefined): boolean {
@@ -54,7 +57,7 @@ export function cardComplete(loadTable: LoadTableOutcome | undefined): boolean {
 /** A mass cell of the load table: "none" when even a light train would not start; rounded down, as `taut table` gives it. */
 export function massCell(row: LoadTableRow | undefined, units: UnitSystem): string {
   if (!row) return "–";
-  if (row.maxTrailingMassKg < 1000) return "none";
+  if (row.maxTrailingMassKg < 1000) return t("none");
   return showAtMost("mass", row.maxTrailingMassKg, units);
 }
 
@@ -68,12 +71,12 @@ export function LoadTableResult(props: { outcome: LoadTableOutcome; units: UnitS
   const rows = () => (props.outcome.ok ? props.outcome.rows : undefined);
   const why = () => (props.outcome.ok ? "" : props.outcome.issues.map((i) => i.message).join("; "));
   return (
-    <Show when={rows()} fallback={<p class="notes-issue-box">The load table cannot be worked out: {why()}</p>}>
+    <Show when={rows()} fallback={<p class="notes-issue-box">{t("cannotWorkOut", { why: why() })}</p>}>
       {(r) => (
         <>
-          <LoadTableGrid rows={r()} units={props.units} caption="Largest trailing mass that starts" />
+          <LoadTableGrid rows={r()} units={props.units} caption={t("largestMass")} />
           <Show when={r().some((x) => x.maxTrailingMassKg <= 0)}>
-            <p class="card-small">"none": not even a light train of these wagons is expected to start in that condition with these locomotives.</p>
+            <p class="card-small">{t("noneNote")}</p>
           </Show>
         </>
       )}
@@ -90,18 +93,21 @@ export function Card(props: CardProps): JSX.Element {
   const last = () => latestRevision(n());
   const stretch = (f: NoteFigures["under"]) => {
     if (!f) return "–";
-    const g = Math.abs(f.maxGradient - f.minGradient) < 1e-9 ? `${grade(f.meanGradient)} throughout` : `${grade(f.minGradient)} to ${grade(f.maxGradient)}, ${grade(f.meanGradient)} on average`;
-    return `${g}; ${f.sharpestRadius > 0 ? `sharpest curve ${show("radius", f.sharpestRadius, u())}` : "straight"}`;
+    const g =
+      Math.abs(f.maxGradient - f.minGradient) < 1e-9
+        ? t("gradeThroughout", { grade: grade(f.meanGradient) })
+        : t("gradeRange", { min: grade(f.minGradient), max: grade(f.maxGradient), mean: grade(f.meanGradient) });
+    return `${g}; ${f.sharpestRadius > 0 ? t("sharpestCurve", { radius: show("radius", f.sharpestRadius, u()) }) : t("straight")}`;
   };
   const hazardsNumbered = () => {
     // Hazards with a place are numbered in the sketch's order (by chainage), the rest follow.
     const placed = n().hazards.filter((h) => h.at_m !== undefined).sort((a, b) => a.at_m! - b.at_m!);
     return [...placed, ...n().hazards.filter((h) => h.at_m === undefined)];
   };
-  const kind = (k: string) => HAZARD_KINDS.find((h) => h.kind === k)?.label ?? k;
+  const kind = (k: string) => (HAZARD_KINDS.some((h) => h.kind === k) ? hazardWord(k as HazardKind) : k);
 
   return (
-    <article class="notes-card" aria-label={`Location card: ${n().name}`}>
+    <article class="notes-card" aria-label={t("label", { name: n().name })}>
       <header class="card-head">
         <div>
           <h2 class="card-title">{n().name}</h2>
@@ -110,30 +116,30 @@ export function Card(props: CardProps): JSX.Element {
           </Show>
         </div>
         <div class="card-rev">
-          <span>Revised {last().date}</span>
-          <span>by {last().initials}</span>
+          <span>{t("revised", { date: last().date })}</span>
+          <span>{t("by", { initials: last().initials })}</span>
           <Show when={n().illustrative}>
-            <span class="card-tag">Illustrative demo note</span>
+            <span class="card-tag">{t("illustrative")}</span>
           </Show>
         </div>
       </header>
 
       <Show when={!cardComplete(props.loadTable)}>
         <p class="card-incomplete" role="status">
-          <strong>{INCOMPLETE_LINE}</strong> The load table was still being worked out: this copy lacks the card's main figures. Do not use
-          it; print again once the load table is shown.
+          <strong>{INCOMPLETE_LINE()}</strong>
+          {t("incompleteText")}
         </p>
       </Show>
 
       <Show when={n().standing}>
         <p class="card-standing">
-          <strong>Standing: </strong>
+          <strong>{t("standing")}</strong>
           {n().standing}
         </p>
       </Show>
 
       <section class="card-sketch">
-        <Show when={props.model} fallback={<p class="card-missing">No profile to draw.</p>}>
+        <Show when={props.model} fallback={<p class="card-missing">{t("noProfile")}</p>}>
           {(m) => <ProfileSketch model={m()} units={u()} />}
         </Show>
         <Show when={props.placementIssue}>
@@ -143,25 +149,25 @@ export function Card(props: CardProps): JSX.Element {
 
       <div class="card-columns">
         <section class="card-figures">
-          <h3>Key figures</h3>
+          <h3>{t("keyFigures")}</h3>
           <dl>
-            <dt>Front of train</dt>
-            <dd>at {dist(n().frontAt_m)}</dd>
-            <dt>Clear ahead</dt>
+            <dt>{t("frontOfTrain")}</dt>
+            <dd>{t("frontAt", { distance: dist(n().frontAt_m) })}</dd>
+            <dt>{t("clearAhead")}</dt>
             <dd>{dist(n().clearAhead_m)}</dd>
             <Show when={n().speedLimit_kmh !== undefined}>
-              <dt>Speed limit</dt>
+              <dt>{t("speedLimit")}</dt>
               <dd>{show("speed", (n().speedLimit_kmh ?? 0) / 3.6, u(), 0)}</dd>
             </Show>
-            <dt>Under the train</dt>
+            <dt>{t("underTrain")}</dt>
             <dd>{stretch(props.figures.under)}</dd>
-            <dt>Ahead</dt>
+            <dt>{t("ahead")}</dt>
             <dd>{stretch(props.figures.ahead)}</dd>
             <Show when={props.model?.train}>
-              {(t) => (
+              {(train) => (
                 <>
-                  <dt>Slack at rest</dt>
-                  <dd>{slackSentence(t().runs, dist)}</dd>
+                  <dt>{t("slackAtRest")}</dt>
+                  <dd>{slackSentence(train().runs, dist)}</dd>
                 </>
               )}
             </Show>
@@ -169,32 +175,34 @@ export function Card(props: CardProps): JSX.Element {
         </section>
 
         <section class="card-load">
-          <h3>Load table</h3>
-          <Show when={props.loadTable} fallback={<p>Working out…</p>}>
-            {(t) => <LoadTableResult outcome={t()} units={u()} />}
+          <h3>{t("loadTable")}</h3>
+          <Show when={props.loadTable} fallback={<p>{t("workingOut")}</p>}>
+            {(table) => <LoadTableResult outcome={table()} units={u()} />}
           </Show>
           <p class="card-small">
-            For {props.reference.locomotives || "the reference locomotives"}; train make-up of "{props.reference.trainLabel}" (its
-            wagons, length and slack), {show("temperature", n().referenceTrain?.temperature_C ?? DEFAULT_REFERENCE_TEMPERATURE_C, u())}. Computed from the physics; an estimate, not a
-            rating.
+            {t("forTrain", {
+              locomotives: props.reference.locomotives || t("referenceLocos"),
+              train: props.reference.trainLabel,
+              temperature: show("temperature", n().referenceTrain?.temperature_C ?? DEFAULT_REFERENCE_TEMPERATURE_C, u()),
+            })}
           </p>
         </section>
       </div>
 
       <div class="card-columns">
         <section class="card-practice">
-          <h3>Recommended practice</h3>
-          <p class="card-text">{n().practice || "None recorded."}</p>
+          <h3>{t("practice")}</h3>
+          <p class="card-text">{n().practice || t("noneRecorded")}</p>
         </section>
         <section class="card-hazards">
-          <h3>Hazards</h3>
-          <Show when={hazardsNumbered().length > 0} fallback={<p>None recorded.</p>}>
+          <h3>{t("hazards")}</h3>
+          <Show when={hazardsNumbered().length > 0} fallback={<p>{t("noneRecorded")}</p>}>
             <ol>
               <For each={hazardsNumbered()}>
                 {(h) => (
                   <li>
                     <strong>{kind(h.kind)}</strong>
-                    {h.at_m !== undefined ? ` at ${dist(h.at_m)}` : ""}
+                    {h.at_m !== undefined ? t("hazardAt", { distance: dist(h.at_m) }) : ""}
                     {h.note ? ` — ${h.note}` : ""}
                   </li>
                 )}
@@ -202,12 +210,12 @@ export function Card(props: CardProps): JSX.Element {
             </ol>
           </Show>
           <Show when={n().seasons.length > 0}>
-            <h3>Usual rail by season</h3>
+            <h3>{t("seasons")}</h3>
             <ul>
               <For each={n().seasons}>
                 {(s) => (
                   <li>
-                    <strong>{SEASON_WORD[s.season]}:</strong> {words.railInline(s.rail)}
+                    <strong>{SEASON_WORD[s.season]()}:</strong> {words.railInline(s.rail)}
                     {s.note ? ` — ${s.note}` : ""}
                   </li>
                 )}
@@ -218,14 +226,14 @@ export function Card(props: CardProps): JSX.Element {
       </div>
 
       <section class="card-cautions">
-        <h3>Cautions</h3>
+        <h3>{t("cautions")}</h3>
         <ul>
           <For each={STANDARD_CAUTIONS}>{(c) => <li>{c}</li>}</For>
         </ul>
       </section>
 
       <section class="card-revisions">
-        <h3>Revisions</h3>
+        <h3>{t("revisions")}</h3>
         <table>
           <tbody>
             <For each={[...n().revisions].reverse().slice(0, 3)}>
@@ -240,17 +248,27 @@ export function Card(props: CardProps): JSX.Element {
           </tbody>
         </table>
         <Show when={n().revisions.length > 3}>
-          <p class="card-small">{n().revisions.length - 3} earlier revision(s) are kept in the note file.</p>
+          <p class="card-small">{t("earlierRevisions", { count: n().revisions.length - 3 })}</p>
         </Show>
       </section>
       <footer class="card-foot">
         <p>
-          Taut location card · {n().id} · revision {props.provenance.revision} of {props.provenance.revisionDate} · printed {props.printedAt} · Taut{" "}
-          {props.provenance.version} · fingerprint {props.provenance.fingerprint} · advisory only
+          {t("foot", {
+            id: n().id,
+            revision: String(props.provenance.revision),
+            date: props.provenance.revisionDate,
+            at: props.printedAt,
+            version: props.provenance.version,
+            fingerprint: props.provenance.fingerprint,
+          })}
         </p>
         <p class="card-computed">
-          Computed from: {props.reference.locomotives || "the reference locomotives"} with "{props.reference.trainLabel}",{" "}
-          {show("temperature", n().referenceTrain?.temperature_C ?? DEFAULT_REFERENCE_TEMPERATURE_C, u())}; rail-condition defaults, {props.provenance.rail}.
+          {t("computedFrom", {
+            locomotives: props.reference.locomotives || t("referenceLocos"),
+            train: props.reference.trainLabel,
+            temperature: show("temperature", n().referenceTrain?.temperature_C ?? DEFAULT_REFERENCE_TEMPERATURE_C, u()),
+            rail: props.provenance.rail,
+          })}
         </p>
       </footer>
     </article>

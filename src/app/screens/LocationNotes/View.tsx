@@ -20,7 +20,13 @@ import { Library, NoticeBox, type LibraryProps } from "./Library.js";
 import type { Stretch } from "../../../profiles/railml/index.js";
 import type { RailmlImport } from "./railml/createRailmlImport.js";
 import { RailmlImportView } from "./railml/RailmlImport.js";
+import { SegmentedButtons } from "../../components/SegmentedButtons.js";
+import { card } from "../../../i18n/en/card.js";
+import { LANGS, LANGUAGE_NAMES, type Lang } from "../../../i18n/language.js";
+import { appLang, tr } from "../../i18n.js";
 import "./notes.css";
+
+const t = tr.ns(card);
 
 export type Mode = "library" | "edit" | "card" | "railml";
 
@@ -46,6 +52,8 @@ export interface ViewProps {
   onPrint: () => void;
   /** Open the Start review place for the note shown. */
   onReview?: (id: string) => void;
+  /** Print the card in another language: the app shows that language (Settings keeps it). */
+  onLanguage?: (l: Lang) => void;
   /** When the card is printed, "YYYY-MM-DD HH:MM" (refreshed just before each print). */
   printedAt: string;
   /** A print was started (the browser's own command) before the card was complete. */
@@ -163,7 +171,7 @@ export function View(props: ViewProps): JSX.Element {
                   aria-describedby={cardComplete(table()) ? undefined : "notes-print-wait"}
                   onClick={() => props.onPrint()}
                 >
-                  Print / save as PDF
+                  {t("print")}
                 </button>
                 <button type="button" class="button" onClick={() => props.onEdit()}>
                   Edit note
@@ -187,6 +195,20 @@ export function View(props: ViewProps): JSX.Element {
                 }
               >
                 <p class="notes-hint">One page, A4 or Letter. In the print dialog choose "Save as PDF" to make a file to share.</p>
+              </Show>
+              <Show when={props.onLanguage}>
+                {(choose) => (
+                  <SegmentedButtons<Lang>
+                    name="cardLanguage"
+                    label={t("cardLanguage")}
+                    value={appLang()}
+                    onChange={(l) => choose()(l)}
+                    options={LANGS.map((l) => ({ value: l, label: LANGUAGE_NAMES[l] }))}
+                  />
+                )}
+              </Show>
+              <Show when={props.onLanguage}>
+                <p class="notes-hint">{t("cardLanguageNote")}</p>
               </Show>
               <div class="notes-card-preview">{cardOf(note())}</div>
               <Portal ref={fitToPage}>{cardOf(note())}</Portal>

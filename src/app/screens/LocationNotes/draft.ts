@@ -4,6 +4,8 @@
  * only on save; ids are made from the name once, when a new note is first saved.
  */
 import type { LocationNoteFile, ReferenceTrainFile, SegmentFile } from "../../../profiles/schemas.js";
+import { card } from "../../../i18n/en/card.js";
+import { tr } from "../../i18n.js";
 
 export type HazardKind = LocationNoteFile["hazards"][number]["kind"];
 export type Season = LocationNoteFile["seasons"][number]["season"];
@@ -19,6 +21,20 @@ export const HAZARD_KINDS: ReadonlyArray<{ kind: HazardKind; label: string }> = 
   { kind: "platform", label: "Platform" },
   { kind: "other", label: "Other" },
 ];
+const HAZARD_KEY = {
+  points: "hazardPoints",
+  "level-crossing": "hazardLevelCrossing",
+  tunnel: "hazardTunnel",
+  signal: "hazardSignal",
+  bridge: "hazardBridge",
+  platform: "hazardPlatform",
+  other: "hazardOther",
+} as const satisfies Record<HazardKind, keyof typeof card.en>;
+
+/** A hazard's kind in the language on screen. */
+export function hazardWord(k: HazardKind): string {
+  return tr.ns(card)(HAZARD_KEY[k]);
+}
 export const SEASONS: readonly Season[] = ["spring", "summer", "autumn", "winter"];
 
 export interface DraftHazard {

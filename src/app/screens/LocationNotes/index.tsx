@@ -316,6 +316,7 @@ export function LocationNotesScreen(): JSX.Element {
       editor={editor}
       busy={busy()}
       printedAt={printedAt()}
+      onLanguage={(language) => app.settings.update({ language })}
       printedEarly={printedEarly() && !cardComplete(cardLoadTable(editor))}
       provenance={(note) => cardProvenance(note, builtinTrains, profiles, APP_VERSION)}
       conflicts={conflicts()?.list ?? null}

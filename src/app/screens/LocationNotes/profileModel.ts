@@ -10,6 +10,10 @@ import type { StartCase } from "../../../core/train/types.js";
 import type { TrackProfile } from "../../../core/physics/types.js";
 import type { SegmentFile } from "../../../profiles/schemas.js";
 import type { HazardKind } from "./draft.js";
+import { card } from "../../../i18n/en/card.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(card);
 
 export type SlackWord = "stretched" | "bunched";
 
@@ -123,13 +127,11 @@ export function placeTrain(c: StartCase): NonNullable<ProfileModel["train"]> {
 export function slackSentence(runs: readonly SlackRun[], dist: (m: number) => string): string {
   if (runs.length === 0) return "";
   if (runs.length === 1) {
-    return runs[0]!.state === "stretched"
-      ? "Stretched from end to end: the train hangs back on the grade, so the couplings are already drawn out."
-      : "Bunched from end to end: the slack is in, and it will run out wagon by wagon as the train starts.";
+    return runs[0]!.state === "stretched" ? t("slackStretched") : t("slackBunched");
   }
   const parts = runs.map((r, k) => {
-    const where = k === 0 ? "the front" : k === runs.length - 1 ? "the rear" : "the next";
-    return `${r.state} over ${where} ${dist(r.frontM - r.rearM)}`;
+    const where = k === 0 ? t("slackFront") : k === runs.length - 1 ? t("slackRear") : t("slackNext");
+    return t(r.state === "stretched" ? "slackPartStretched" : "slackPartBunched", { where, length: dist(r.frontM - r.rearM) });
   });
   const s = parts.join(", ");
   return `${s.charAt(0).toUpperCase()}${s.slice(1)}.`;

@@ -1,5 +1,9 @@
 /** The rail condition × sand grid the load table, the margins per condition and the note's card all use. */
 import { words } from "../../words.js";
+import { card } from "../../../i18n/en/card.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(card);
 import { For, type JSX } from "solid-js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../../core/physics/types.js";
 
@@ -14,9 +18,9 @@ export function RailSandTable(props: {
       <caption>{props.caption}</caption>
       <thead>
         <tr>
-          <th scope="col">Rail</th>
-          <th scope="col">Without sand</th>
-          <th scope="col">With sand</th>
+          <th scope="col">{t("rail")}</th>
+          <th scope="col">{t("withoutSand")}</th>
+          <th scope="col">{t("withSand")}</th>
         </tr>
       </thead>
       <tbody>

@@ -1,0 +1,8 @@
+/** Every English namespace: the one list the catalog checks walk (tests/i18n) — add a new namespace here. */
+import { card } from "./card.js";
+import { cli } from "./cli.js";
+import { settings } from "./settings.js";
+import { shell } from "./shell.js";
+import { words } from "./words.js";
+
+export const NAMESPACES = [shell, words, settings, card, cli] as const;

@@ -1,0 +1,73 @@
+/**
+ * The command line in three languages: `LANG=hu_HU.UTF-8 taut plan --demo` and `--lang de` print the plan
+ * in Hungarian and German with the same figures as English (a decimal comma instead of a point); `--json`
+ * and CSV are the same bytes in every language; `--lang` beats the environment, and a language Taut does
+ * not speak is a usage error (exit 2).
+ */
+import { describe, expect, it } from "vitest";
+import { cli } from "../../src/i18n/en/cli.js";
+import { cliDe } from "../../src/i18n/de/cli.js";
+import { cliHu } from "../../src/i18n/hu/cli.js";
+import { taut, tautWithEnv } from "../tools/cli.js";
+
+/** The figures of a printout, as numbers, in order (a decimal comma read as a point). */
+function figures(text: string): number[] {
+  return [...text.matchAll(/\d+(?:[.,]\d+)?/g)].map((m) => Number(m[0].replace(",", ".")));
+}
+
+/** The printout down to the "Why:" lines (whose sentences come from the planner in English until it is language-free). */
+const head = (text: string) => text.split(/\n(?:Why|Miért|Warum):\n/)[0]!;
+
+describe("taut in Hungarian and German", () => {
+  it("LANG=hu_HU.UTF-8 and --lang de print the plan translated, with the same figures as English", async () => {
+    const en = await tautWithEnv({ LANG: "C" }, "plan", "--demo");
+    const hu = await tautWithEnv({ LANG: "hu_HU.UTF-8" }, "plan", "--demo");
+    const de = await tautWithEnv({ LANG: "hu_HU.UTF-8" }, "plan", "--demo", "--lang", "de");
+    for (const r of [en, hu, de]) expect(r.code).toBe(0);
+    expect(en.stdout).toContain(`Verdict: ${cli.en.verdictStarts}`);
+    expect(hu.stdout).toContain(`Eredmény: ${cliHu.verdictStarts}`);
+    expect(de.stdout).toContain(`Ergebnis: ${cliDe.verdictStarts}`);
+    expect(hu.stdout).not.toContain("Verdict:");
+    expect(de.stdout).not.toContain("Verdict:");
+    // A decimal comma in both: the median adhesion "0,330".
+    expect(hu.stdout).toMatch(/μ 0,\d{3} /);
+    expect(de.stdout).toMatch(/μ 0,\d{3} /);
+    // The same figures: the same multiset of numbers down to the why lines (word order may move them).
+    const sorted = (t: string) => figures(head(t)).sort((a, b) => a - b);
+    expect(sorted(hu.stdout)).toEqual(sorted(en.stdout));
+    expect(sorted(de.stdout)).toEqual(sorted(en.stdout));
+    // The step table's rows carry the same figures in the same order.
+    const rows = (t: string) => head(t).split("\n").filter((l) => /^\d  \S/.test(l)).map(figures);
+    expect(rows(hu.stdout)).toEqual(rows(en.stdout));
+    expect(rows(de.stdout).length).toBeGreaterThan(0);
+    expect(rows(de.stdout)).toEqual(rows(en.stdout));
+  });
+
+  it("--json is the same in every language (LANG, LC_ALL or --lang)", async () => {
+    const en = await tautWithEnv({ LANG: "en_GB.UTF-8" }, "plan", "--demo", "--json");
+    const hu = await tautWithEnv({ LANG: "hu_HU.UTF-8" }, "plan", "--demo", "--json");
+    const de = await tautWithEnv({ LC_ALL: "de_DE.UTF-8" }, "plan", "--demo", "--json", "--lang", "de");
+    expect(en.code).toBe(0);
+    expect(hu.stdout).toBe(en.stdout);
+    expect(de.stdout).toBe(en.stdout);
+  });
+
+  it("a table's CSV is the same in every language", async () => {
+    const args = ["table", "cinderfield-yard", "--loco", "illustrative-4axle-1100", "--count", "2", "--wagons", "10", "--limit", "500", "--quiet", "--csv"];
+    const en = await taut(...args);
+    if (en.code !== 0) return expect.fail(`taut ${args.join(" ")}: ${en.stderr}`);
+    const de = await taut(...args, "--lang", "de");
+    expect(de.stdout).toBe(en.stdout);
+  }, 120_000);
+
+  it("--lang beats the environment; --lang before the command works; a language not ours is exit 2", async () => {
+    const r = await tautWithEnv({ LC_ALL: "de_DE.UTF-8" }, "--lang", "hu", "plan", "--demo", "--no-assistance");
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain("Eredmény:");
+    const bad = await taut("plan", "--demo", "--lang", "fr");
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toContain("--lang");
+    const help = await tautWithEnv({ LANG: "de_DE.UTF-8" }, "--help");
+    expect(help.stdout).toContain(cliDe.commandsTitle);
+  });
+});

@@ -1,0 +1,81 @@
+/**
+ * The catalogs: every language has every key of every namespace, no other, with the same placeholders and
+ * the same shape (a plain message or a plural pair), and nothing empty. The types check this when the
+ * catalogs compile (see the @ts-expect-error lines below, which fail to compile if the check lets a
+ * missing key or a misspelt placeholder through); this test checks the same at run time, from the
+ * catalog objects, so a cast cannot hide a gap.
+ */
+import { describe, expect, it } from "vitest";
+import { cliDe } from "../../src/i18n/de/cli.js";
+import { de } from "../../src/i18n/de/index.js";
+import { NAMESPACES } from "../../src/i18n/en/index.js";
+import { words } from "../../src/i18n/en/words.js";
+import { cliHu } from "../../src/i18n/hu/cli.js";
+import { hu } from "../../src/i18n/hu/index.js";
+import { fill, namespace, placeholdersOf, translation, type Catalog, type Message } from "../../src/i18n/messages.js";
+import { createTranslator } from "../../src/i18n/translator.js";
+
+const CATALOGS: Record<"hu" | "de", Catalog> = { hu: { ...hu, cli: cliHu }, de: { ...de, cli: cliDe } };
+const shape = (m: Message) => (typeof m === "string" ? "text" : "plural");
+const texts = (m: Message) => (typeof m === "string" ? [m] : [m.one, m.other]);
+
+describe("catalog parity", () => {
+  for (const [lang, catalog] of Object.entries(CATALOGS)) {
+    it(`${lang}: every namespace, every key, the same placeholders and shape, nothing empty`, () => {
+      const problems: string[] = [];
+      expect(Object.keys(catalog).sort()).toEqual(NAMESPACES.map((n) => n.name).sort());
+      for (const n of NAMESPACES) {
+        const t = catalog[n.name]!;
+        const en: Record<string, Message> = n.en;
+        for (const k of Object.keys(en)) if (!(k in t)) problems.push(`${n.name}.${k}: missing`);
+        for (const k of Object.keys(t)) {
+          const e = en[k];
+          if (e === undefined) {
+            problems.push(`${n.name}.${k}: not in English`);
+            continue;
+          }
+          const m = t[k]!;
+          if (shape(m) !== shape(e)) problems.push(`${n.name}.${k}: ${shape(m)} where English has ${shape(e)}`);
+          if (placeholdersOf(m).sort().join() !== placeholdersOf(e).sort().join()) problems.push(`${n.name}.${k}: placeholders ${placeholdersOf(m)} ≠ ${placeholdersOf(e)}`);
+          if (texts(m).some((x) => x.trim() === "")) problems.push(`${n.name}.${k}: empty`);
+          // A stray brace (an unclosed or misspelt placeholder) would print as it is.
+          if (texts(m).some((x) => /[{}]/.test(x.replace(/\{[A-Za-z]+\}/g, "")))) problems.push(`${n.name}.${k}: stray brace`);
+        }
+      }
+      expect(problems).toEqual([]);
+    });
+
+    it(`${lang}: translated, not copied — most messages differ from the English`, () => {
+      let same = 0;
+      let all = 0;
+      for (const n of NAMESPACES) {
+        for (const [k, e] of Object.entries(n.en as Record<string, Message>)) {
+          all++;
+          if (JSON.stringify(e) === JSON.stringify(catalog[n.name]![k])) same++;
+        }
+      }
+      // Unit symbols, "OK", "{title}. {caption}" and the like are the same in every language; little else.
+      expect(same / all).toBeLessThan(0.1);
+    });
+  }
+
+  it("a translator fills placeholders, picks the plural by count and writes numbers in its language", () => {
+    const ns = namespace("demo", { n: { one: "{count} wagon", other: "{count} wagons" }, v: "about {x} t" });
+    const tde = createTranslator("de", { demo: { n: { one: "{count} Wagen", other: "{count} Wagen" }, v: "etwa {x} t" } });
+    expect(createTranslator("en", null).ns(ns)("n", { count: 1 })).toBe("1 wagon");
+    expect(createTranslator("en", null).ns(ns)("n", { count: 3 })).toBe("3 wagons");
+    expect(tde.ns(ns)("v", { x: 2.5 })).toBe("etwa 2,5 t");
+    expect(fill("{a} and {b}", { a: "x" }, String)).toBe("x and {b}");
+  });
+
+  it("the types reject a missing key, an extra key and a misspelt placeholder", () => {
+    const t = translation<typeof words.en>();
+    const ok = { ...(CATALOGS.de.words as Record<string, string>) };
+    const { verdictStarts: _dropped, ...missing } = ok;
+    // @ts-expect-error verdictStarts is missing
+    t(missing as { [K in Exclude<keyof typeof words.en, "verdictStarts">]: string });
+    // @ts-expect-error a placeholder misspelt: {wort} for {word}
+    t({ ...(ok as { [K in keyof typeof words.en]: string }), verdictLabel: "Ergebnis: {wort}" } as const);
+    expect(_dropped).toBe("Fährt an");
+  });
+});
