@@ -9,6 +9,7 @@ import { isLang, langFromPreferences, LOCALE_TAGS, type Lang } from "../i18n/lan
 import { fill, type Catalog, type Messages, type Namespace } from "../i18n/messages.js";
 import { formatNumberIn } from "../i18n/numbers.js";
 import { messageOf, type MessageFn, type Translator } from "../i18n/translator.js";
+import { pseudoMessage } from "../i18n/pseudo.js";
 
 /** The language setting: a language, or "auto" (the device's). */
 export type LanguageChoice = Lang | "auto";
@@ -28,7 +29,21 @@ export function appNumber(x: number, decimals: number): string {
   return formatNumberIn(lang(), x, decimals, { grouping: true, minus: "\u2212" });
 }
 
+/** A number for an input field: the language's decimal sign, no grouping and a plain "-", so it reads back unambiguously. */
+export function fieldNumber(x: number, decimals: number): string {
+  return formatNumberIn(lang(), x, decimals, { grouping: false, minus: "-" });
+}
+
 const whole = (x: number) => appNumber(x, Number.isInteger(x) ? 0 : 1);
+
+/** Pseudo-localised English (layout checks): localStorage "taut.pseudo" = "1". */
+const pseudo = (() => {
+  try {
+    return typeof localStorage !== "undefined" && localStorage.getItem("taut.pseudo") === "1";
+  } catch {
+    return false;
+  }
+})();
 
 /** The app's translator (reactive: it reads the language on screen at each call). */
 export const tr: Translator = {
@@ -36,7 +51,10 @@ export const tr: Translator = {
     return lang();
   },
   ns<M extends Messages>(n: Namespace<string, M>): MessageFn<M> {
-    return ((key: string, params?: Readonly<Record<string, string | number>>) => fill(messageOf(n, key, lang() === "en" ? null : catalog()), params, whole)) as MessageFn<M>;
+    return ((key: string, params?: Readonly<Record<string, string | number>>) => {
+      const m = messageOf(n, key, lang() === "en" ? null : catalog());
+      return fill(pseudo && lang() === "en" ? pseudoMessage(m) : m, params, whole);
+    }) as MessageFn<M>;
   },
   num: appNumber,
 };

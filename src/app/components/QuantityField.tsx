@@ -5,10 +5,10 @@
  * rewritten only when the value changes from elsewhere (a preset, a stepper, a switch of units).
  */
 import { createEffect, createSignal, on, Show, type JSX } from "solid-js";
-import { decimalsOf, formatNumber, fromDisplay, parseNumber, toDisplay, unitSymbol, type MeasureKey, type UnitSystem } from "../format.js";
+import { decimalsOf, fromDisplay, parseNumber, toDisplay, unitSymbol, type MeasureKey, type UnitSystem } from "../format.js";
 import { Icon } from "./Icon.js";
 import { shell } from "../../i18n/en/shell.js";
-import { tr } from "../i18n.js";
+import { appLang, fieldNumber, tr } from "../i18n.js";
 
 export interface QuantityFieldProps {
   label: string;
@@ -41,17 +41,19 @@ export function QuantityField(props: QuantityFieldProps): JSX.Element {
   const decimals = () => props.decimals ?? (props.integer ? 0 : props.measure ? decimalsOf(props.measure, props.units) : 2);
   const toShown = (v: number) => (props.measure && props.fileUnit ? toDisplay(props.measure, v, props.fileUnit, props.units) : v);
   const fromShown = (v: number) => (props.measure && props.fileUnit ? fromDisplay(props.measure, v, props.fileUnit, props.units) : v);
-  /** Text for a value: rounded, without grouping, so it reads back unambiguously. */
-  const textOf = (v: number) => (Number.isFinite(v) ? formatNumber(toShown(v), decimals()).replace(/,/g, "").replace("−", "-") : "");
+  /** Text for a value: rounded, without grouping, so it reads back unambiguously (a decimal comma in hu and de). */
+  const textOf = (v: number) => (Number.isFinite(v) ? fieldNumber(toShown(v), decimals()) : "");
   const [text, setText] = createSignal(textOf(props.value));
   let lastSent = props.value;
 
-  // A value set from elsewhere, or a change of units, rewrites the text.
+  // A value set from elsewhere, or a change of units or of language, rewrites the text.
   let lastUnits = props.units;
+  let lastLang = appLang();
   createEffect(
-    on([() => props.value, () => props.units], ([v, units]) => {
-      const unitsChanged = units !== lastUnits;
+    on([() => props.value, () => props.units, appLang], ([v, units, lang]) => {
+      const unitsChanged = units !== lastUnits || lang !== lastLang;
       lastUnits = units;
+      lastLang = lang;
       if (unitsChanged || !(Object.is(v, lastSent) || (Number.isNaN(v) && Number.isNaN(lastSent)))) {
         lastSent = v;
         setText(textOf(v));
@@ -85,7 +87,7 @@ export function QuantityField(props: QuantityFieldProps): JSX.Element {
     if (props.min !== undefined) next = Math.max(props.min, next);
     if (props.max !== undefined) next = Math.min(props.max, next);
     next = Number(next.toFixed(6));
-    setText(formatNumber(next, decimals()).replace(/,/g, "").replace("−", "-"));
+    setText(fieldNumber(next, decimals()));
     send(fromShown(next));
   };
 

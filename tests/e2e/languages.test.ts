@@ -1,0 +1,165 @@
+/**
+ * Taut in Hungarian and German in Chromium: the language chosen in Settings (and kept over a reload), a
+ * screenshot of every screen in each language at 1280×800 and 800×1280 (test-results/screenshots/lang-*,
+ * looked at by a person), the location card printed in each language with the note's name and its load
+ * table (PDF text, pdfjs-dist), and pseudo-localised English — every message 40 % longer, with accented
+ * letters — with no text overflowing a button or a labelled control at either size.
+ */
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import type { BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { LANDSCAPE, launch, PORTRAIT, SHOTS } from "./browser.js";
+import { shell } from "../../src/i18n/en/shell.js";
+import { shellDe } from "../../src/i18n/de/shell.js";
+import { shellHu } from "../../src/i18n/hu/shell.js";
+import { cardDe } from "../../src/i18n/de/card.js";
+import { cardHu } from "../../src/i18n/hu/card.js";
+import { card } from "../../src/i18n/en/card.js";
+import { wordsDe } from "../../src/i18n/de/words.js";
+import { wordsHu } from "../../src/i18n/hu/words.js";
+
+let context: BrowserContext;
+let page: Page;
+let profile: string;
+let problems: string[] = [];
+const base = inject("baseURL");
+
+const SCREENS = ["start-plan", "cab-steps", "assistance-check", "departures", "load-table", "location-notes", "settings"] as const;
+const TITLES = {
+  en: [shell.en.screenStartPlan, shell.en.screenSettings],
+  hu: [shellHu.screenStartPlan, shellHu.screenSettings],
+  de: [shellDe.screenStartPlan, shellDe.screenSettings],
+} as const;
+
+async function go(id: string): Promise<void> {
+  await page.evaluate((h) => (location.hash = h), `#/${id}`);
+  await page.waitForFunction((h) => location.hash === h, `#/${id}`);
+  // Lazy screens: wait for the loading line to go, then for the current plan where there is one.
+  await page.waitForFunction(() => !document.querySelector("main .placeholder-text"), undefined, { timeout: 30_000 });
+  if (id === "start-plan") await page.waitForSelector(".verdict:not(.stale)", { timeout: 60_000 });
+  await page.waitForTimeout(300);
+}
+
+/** Visible buttons and labelled controls whose text runs past their box (scrollWidth over clientWidth). */
+async function overflowing(label: string): Promise<string[]> {
+  const found = await page.evaluate(() => {
+    const out: string[] = [];
+    const sel = "button, a.tab, [role=radio], [role=tab], label, .field-label, .chip, .toggle-label, .toggle-state, .verdict-word, .summary-word, h1, h2, h3";
+    for (const el of document.querySelectorAll<HTMLElement>(sel)) {
+      const cs = getComputedStyle(el);
+      if (cs.display === "inline" || cs.visibility === "hidden" || el.closest(".visually-hidden, .notes-print-root")) continue;
+      const r = el.getBoundingClientRect();
+      if (r.width === 0 || r.height === 0) continue;
+      if (el.scrollWidth > el.clientWidth + 1) out.push(`${el.tagName.toLowerCase()}.${el.className} "${(el.textContent ?? "").trim().slice(0, 50)}" (${el.scrollWidth} > ${el.clientWidth})`);
+    }
+    if (document.documentElement.scrollWidth > window.innerWidth + 1) out.push(`the page scrolls sideways (${document.documentElement.scrollWidth} > ${window.innerWidth})`);
+    return out;
+  });
+  return found.map((f) => `${label}: ${f}`);
+}
+
+/** All text of a PDF, page by page (pdfjs-dist, legacy build for Node). */
+async function pdfText(data: Uint8Array): Promise<string[]> {
+  const P = Promise as unknown as { withResolvers?: unknown };
+  if (!P.withResolvers)
+    P.withResolvers = () => {
+      let resolve!: (v: unknown) => void;
+      let reject!: (e: unknown) => void;
+      const promise = new Promise((a, b) => ((resolve = a), (reject = b)));
+      return { promise, resolve, reject };
+    };
+  const pdfjs = await import("pdfjs-dist/legacy/build/pdf.mjs");
+  const task = pdfjs.getDocument({ data, useSystemFonts: false });
+  const doc = await task.promise;
+  const pages: string[] = [];
+  for (let k = 1; k <= doc.numPages; k++) {
+    const tc = await (await doc.getPage(k)).getTextContent();
+    pages.push(tc.items.map((i) => ("str" in i ? i.str : "")).join(" ").replace(/\s+/g, " "));
+  }
+  await task.destroy();
+  return pages;
+}
+
+beforeAll(async () => {
+  profile = mkdtempSync(join(tmpdir(), "taut-lang-"));
+  ({ context, page, problems } = await launch(inject("chromiumPath"), profile));
+});
+
+afterAll(async () => {
+  await context?.close();
+  if (profile) rmSync(profile, { recursive: true, force: true });
+});
+
+describe("Taut in three languages", () => {
+  it("switches to Hungarian and German in Settings, keeps the choice over a reload, and shows every screen (screenshots)", async () => {
+    await page.goto(base);
+    await go("start-plan");
+    expect(await page.locator("a.tab").allTextContents()).toEqual(expect.arrayContaining([...TITLES.en]));
+    for (const [lang, name] of [["hu", "Magyar"], ["de", "Deutsch"]] as const) {
+      await go("settings");
+      await page.getByRole("radio", { name }).click();
+      await expect.poll(() => page.locator("a.tab").allTextContents()).toEqual(expect.arrayContaining([...TITLES[lang]]));
+      expect(await page.evaluate(() => document.documentElement.lang)).toBe(lang);
+      await page.reload();
+      await go("start-plan");
+      expect(await page.locator("a.tab").allTextContents()).toEqual(expect.arrayContaining([...TITLES[lang]]));
+      const verdict = (await page.locator(".verdict .verdict-word").textContent()) ?? "";
+      const w = lang === "hu" ? wordsHu : wordsDe;
+      expect([w.verdictStarts, w.verdictMarginal, w.verdictNeedsAssistance]).toContain(verdict);
+      for (const [size, name2] of [[LANDSCAPE, "landscape"], [PORTRAIT, "portrait"]] as const) {
+        await page.setViewportSize(size);
+        for (const id of SCREENS) {
+          await go(id);
+          await page.screenshot({ path: join(SHOTS, `lang-${lang}-${id}-${name2}.png`), fullPage: id !== "cab-steps" });
+        }
+      }
+      await page.setViewportSize(LANDSCAPE);
+    }
+    expect(problems).toEqual([]);
+  }, 300_000);
+
+  it("prints the location card in each language with the note's name and its load table (PDF text)", async () => {
+    for (const [lang, c, name] of [["en", card.en, "English"], ["hu", cardHu, "Magyar"], ["de", cardDe, "Deutsch"]] as const) {
+      await go("location-notes");
+      const open = page.locator('button[aria-label^="Card of "]').first();
+      await open.waitFor({ timeout: 60_000 });
+      const note = ((await open.getAttribute("aria-label")) ?? "").replace(/^Card of /, "");
+      await open.click();
+      await page.getByRole("radio", { name }).click();
+      await page.locator(".notes-card-preview .notes-loadtable").waitFor({ timeout: 120_000 });
+      const cells = await page.locator(".notes-card-preview .notes-loadtable tbody tr").first().locator("td").allTextContents();
+      const text = (await pdfText(new Uint8Array(await page.pdf({ format: "A4" }))))[0]!;
+      expect(text, lang).toContain(note);
+      expect(text, lang).toContain(c.loadTable);
+      expect(text, lang).toContain(c.largestMass);
+      expect(text, lang).toContain(`${c.rail} ${c.withoutSand} ${c.withSand}`);
+      // The first row: the dry rail's word in the language, then its two masses as the screen shows them.
+      const dry = lang === "en" ? "Dry" : lang === "hu" ? wordsHu.railDry : wordsDe.railDry;
+      expect(text, lang).toContain(`${dry} ${cells[0]} ${cells[1]}`);
+      expect(cells[0]).toMatch(/\d/);
+      // Back to the library (the card view's last button).
+      await page.locator(".notes-card-view .notes-row-actions button").last().click();
+    }
+    // Back to the device's language for the next test.
+    await go("settings");
+    await page.getByRole("radio", { name: "English" }).click();
+  }, 300_000);
+
+  it("pseudo-localised (40 % longer, accented): no text runs past a button or a labelled control at 1280×800 or 800×1280", async () => {
+    await page.evaluate(() => localStorage.setItem("taut.pseudo", "1"));
+    await page.reload();
+    const found: string[] = [];
+    for (const [size, name] of [[LANDSCAPE, "landscape"], [PORTRAIT, "portrait"]] as const) {
+      await page.setViewportSize(size);
+      for (const id of SCREENS) {
+        await go(id);
+        found.push(...(await overflowing(`${id} ${name}`)));
+        await page.screenshot({ path: join(SHOTS, `lang-pseudo-${id}-${name}.png`), fullPage: id !== "cab-steps" });
+      }
+    }
+    await page.evaluate(() => localStorage.removeItem("taut.pseudo"));
+    expect(found).toEqual([]);
+  }, 300_000);
+});
