@@ -2,15 +2,17 @@
 import type { Phase, PlanStep } from "../core/planner/types.js";
 import type { Target } from "../core/train/types.js";
 import { formatNumber, show, type UnitSystem } from "./format.js";
+import { steps } from "../i18n/en/steps.js";
+import { tr } from "./i18n.js";
+import { words } from "./words.js";
 
-export const PHASE_WORD: Record<Phase, string> = { prepare: "Prepare", stretch: "Stretch", build: "Build", accelerate: "Accelerate" };
+const t = tr.ns(steps);
 
-export const PHASE_LINE: Record<Phase, string> = {
-  prepare: "Get ready: brakes, sand, holding power",
-  stretch: "Take the slack out at low effort",
-  build: "Notch up as adhesion and couplers allow",
-  accelerate: "Accelerate the stretched train",
-};
+/** A phase's name ("Prepare"), in the language on screen. */
+export const phaseWord = (p: Phase): string => words.phase(p);
+
+/** What a phase is for, in a line. */
+export const phaseLine = (p: Phase): string => words.phaseLine(p);
 
 /** A distance moved: to the decimetre (or tenth of a foot) when short, else whole. */
 function moved(m: number, units: UnitSystem): string {
@@ -18,9 +20,9 @@ function moved(m: number, units: UnitSystem): string {
   return Math.abs(m) < (units === "us" ? 3.048 : 10) ? show("distance", m, units, 1) : shown;
 }
 
-function targetText(t: Target | undefined, units: UnitSystem): string {
-  if (!t) return "the target";
-  return t.kind === "speed" ? show("speed", t.speedMps, units) : `${show("distance", t.distanceM, units)} travelled`;
+function targetText(tg: Target | undefined, units: UnitSystem): string {
+  if (!tg) return t("theTarget");
+  return tg.kind === "speed" ? show("speed", tg.speedMps, units) : t("travelled", { distance: show("distance", tg.distanceM, units) });
 }
 
 /** What to watch, with its verb: "Advance after 8 s", "Advance at 5.0 km/h", "Hold until 20.0 km/h". */
@@ -28,13 +30,13 @@ export function advanceLead(s: PlanStep, units: UnitSystem, target?: Target): st
   const a = s.advanceWhen;
   switch (a.primary) {
     case "time":
-      return `Advance after ${formatNumber(a.afterS, 0)} s`;
+      return t("advanceAfter", { time: formatNumber(a.afterS, 0) });
     case "moved":
-      return `Advance after ${moved(a.movedM, units)} of locomotive travel`;
+      return t("advanceMoved", { distance: moved(a.movedM, units) });
     case "speed":
-      return `Advance at ${show("speed", a.speedMps, units)}`;
+      return t("advanceAt", { speed: show("speed", a.speedMps, units) });
     case "target":
-      return `Hold until ${targetText(target, units)}`;
+      return t("holdUntil", { target: targetText(target, units) });
   }
 }
 
@@ -42,8 +44,8 @@ export function advanceLead(s: PlanStep, units: UnitSystem, target?: Target): st
 export function advanceOthers(s: PlanStep, units: UnitSystem): string[] {
   const a = s.advanceWhen;
   const out: string[] = [];
-  if (a.primary !== "time" && a.afterS > 0) out.push(`about ${formatNumber(a.afterS, 0)} s in this step`);
-  if (a.primary !== "moved" && a.movedM > 0) out.push(`${moved(a.movedM, units)} moved`);
+  if (a.primary !== "time" && a.afterS > 0) out.push(t("aboutInStep", { time: formatNumber(a.afterS, 0) }));
+  if (a.primary !== "moved" && a.movedM > 0) out.push(t("moved", { distance: moved(a.movedM, units) }));
   if (a.primary !== "speed" && a.primary !== "target" && a.speedMps > 0) out.push(`${show("speed", a.speedMps, units)}`);
   return out;
 }
@@ -59,9 +61,9 @@ export function notchText(n: number): string {
  */
 export function stillSlipping(s: Pick<PlanStep, "notch" | "fallbackNotch">): string {
   if (s.notch <= 0) return "—";
-  if (s.fallbackNotch <= 0 || s.fallbackNotch >= s.notch) return "shut off, start again";
-  return `drop to notch ${s.fallbackNotch}`;
+  if (s.fallbackNotch <= 0 || s.fallbackNotch >= s.notch) return t("shutOff");
+  return t("dropTo", { notch: s.fallbackNotch });
 }
 
 /** The label beside `stillSlipping`. */
-export const STILL_SLIPPING_LABEL = "Slip keeps returning";
+export const stillSlippingLabel = (): string => t("stillSlippingLabel");

@@ -3,6 +3,7 @@ import type { Catalog } from "../messages.js";
 import { shellDe } from "./shell.js";
 import { cardDe } from "./card.js";
 import { settingsDe } from "./settings.js";
+import { stepsDe } from "./steps.js";
 import { wordsDe } from "./words.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe };

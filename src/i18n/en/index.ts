@@ -3,6 +3,7 @@ import { card } from "./card.js";
 import { cli } from "./cli.js";
 import { settings } from "./settings.js";
 import { shell } from "./shell.js";
+import { steps } from "./steps.js";
 import { words } from "./words.js";
 
-export const NAMESPACES = [shell, words, settings, card, cli] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, cli] as const;

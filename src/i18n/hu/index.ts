@@ -3,6 +3,7 @@ import type { Catalog } from "../messages.js";
 import { shellHu } from "./shell.js";
 import { cardHu } from "./card.js";
 import { settingsHu } from "./settings.js";
+import { stepsHu } from "./steps.js";
 import { wordsHu } from "./words.js";
 
-export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu };
+export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu };

@@ -10,6 +10,10 @@ import type { SlipGuidance } from "../../../core/planner/types.js";
 import { Icon } from "../../components/Icon.js";
 import { localiseText, type UnitSystem } from "../../format.js";
 import { notchText } from "../../steps.js";
+import { steps } from "../../../i18n/en/steps.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(steps);
 
 export interface SlipCardProps {
   guidance: SlipGuidance;
@@ -37,10 +41,10 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
     <div class="slip-card" role="dialog" aria-modal="true" aria-labelledby="slip-h">
       <div class="slip-head">
         <h2 id="slip-h" tabIndex={-1} ref={heading}>
-          <Icon name="slip" size={36} /> If wheels slip
+          <Icon name="slip" size={36} /> {t("ifWheelsSlip")}
         </h2>
         <button type="button" class="button big" onClick={() => props.onClose()}>
-          <Icon name="close" /> Close
+          <Icon name="close" /> {t("close")}
         </button>
       </div>
       <Show when={props.step}>
@@ -50,7 +54,7 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
           return (
             <div class="slip-now">
               <p class="slip-step">
-                Step {s().number} · notch {notchText(s().notch)}
+                {t("slipStep", { number: s().number, notch: notchText(s().notch) })}
               </p>
               <p class="slip-hold">
                 <span class="slip-order" aria-hidden="true">1</span>
@@ -60,7 +64,7 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
                 <span class="slip-order" aria-hidden="true">2</span>
                 <Show when={drops()} fallback={<span>{h().then}</span>}>
                   <span>
-                    <span class="fallback-label">Still slipping: drop to notch</span> <strong class="fallback-notch">{notchText(s().fallbackNotch)}</strong>
+                    <span class="fallback-label">{t("stillSlippingDrop")}</span> <strong class="fallback-notch">{notchText(s().fallbackNotch)}</strong>
                   </span>
                 </Show>
               </p>
@@ -69,16 +73,16 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
         }}
       </Show>
       <div class="slip-lists">
-        <SlipList title="What you do, in order" items={g().driver} units={props.units} lead />
-        <SlipList title="Why you hold: what the locomotive does" items={g().protection} units={props.units} bullets />
-        <SlipList title="If the train stalls" items={g().stall} units={props.units} />
+        <SlipList title={t("slipDriver")} items={g().driver} units={props.units} lead />
+        <SlipList title={t("slipProtection")} items={g().protection} units={props.units} bullets />
+        <SlipList title={t("slipStall")} items={g().stall} units={props.units} />
       </div>
       <Show when={empty()}>
-        <p class="placeholder-text">This plan carries no slip guidance. Follow the locomotive's own instructions and your railway's rules.</p>
+        <p class="placeholder-text">{t("slipNone")}</p>
       </Show>
       <div class="slip-foot">
         <button type="button" class="button huge" onClick={() => props.onClose()}>
-          <Icon name="back" size={36} /> Back to the step
+          <Icon name="back" size={36} /> {t("backToStep")}
         </button>
       </div>
     </div>

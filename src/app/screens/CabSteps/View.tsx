@@ -10,7 +10,10 @@ import { VerdictIcon } from "../../components/VerdictBanner.js";
 import { words } from "../../words.js";
 import { clock, localiseText, percent, show, type UnitSystem } from "../../format.js";
 import type { WakeLockState } from "../../state/createWakeLock.js";
-import { advanceLead, advanceOthers, notchText, PHASE_LINE, PHASE_WORD, STILL_SLIPPING_LABEL, stillSlipping } from "../../steps.js";
+import { advanceLead, advanceOthers, notchText, phaseLine, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
+import { shell } from "../../../i18n/en/shell.js";
+import { steps } from "../../../i18n/en/steps.js";
+import { tr } from "../../i18n.js";
 import { SlipCard } from "./SlipCard.js";
 
 export interface CabStepsViewProps {
@@ -34,11 +37,13 @@ export interface CabStepsViewProps {
   onClose: () => void;
 }
 
-const WAKE_TEXT: Record<WakeLockState, string> = {
-  on: "Screen stays on",
-  off: "Screen may sleep",
-  unsupported: "Screen may sleep (this browser cannot keep it on)",
-  refused: "Screen may sleep (the browser refused to keep it on)",
+const t = tr.ns(steps);
+
+const WAKE_TEXT: Record<WakeLockState, () => string> = {
+  on: () => t("wakeOn"),
+  off: () => t("wakeOff"),
+  unsupported: () => t("wakeUnsupported"),
+  refused: () => t("wakeRefused"),
 };
 
 export function CabStepsView(props: CabStepsViewProps): JSX.Element {
@@ -50,27 +55,27 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
     <div class="cab" data-step={props.index + 1}>
       <header class="cab-top">
         <button type="button" class="button big" onClick={() => props.onClose()}>
-          <Icon name="back" /> Start plan
+          <Icon name="back" /> {tr.ns(shell)("screenStartPlan")}
         </button>
         <p class="cab-count" aria-live="polite">
-          <Show when={step()} fallback={result() ? <span>No steps</span> : <span>No plan</span>}>
+          <Show when={step()} fallback={result() ? <span>{t("noSteps")}</span> : <span>{t("noPlan")}</span>}>
             {(s) => (
               <>
-                Step <strong>{props.index + 1}</strong> of {count()} · {PHASE_WORD[s().phase]}
+                {t("stepCount", { number: props.index + 1, count: count(), phase: phaseWord(s().phase) })}
               </>
             )}
           </Show>
         </p>
         <Show when={result()}>
           <button type="button" class="button big slip-button" onClick={() => props.onSlip(true)}>
-            <Icon name="slip" size={30} /> If wheels slip
+            <Icon name="slip" size={30} /> {t("ifWheelsSlip")}
           </button>
         </Show>
       </header>
 
       <Show when={result() && !props.current}>
         <p class="cab-stale" role="status">
-          These steps are for the previous inputs; the new plan is on its way.
+          {t("stale")}
         </p>
       </Show>
 
@@ -83,10 +88,10 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
               fallback={
                 props.invalid ? (
                   <p class="cab-no-plan" role="alert">
-                    No plan: the inputs on Start plan break a rule. Fix them there; the previous plan's steps are withdrawn.
+                    {t("invalid")}
                   </p>
                 ) : (
-                  <p>There is no plan yet. Open Start plan and enter the case.</p>
+                  <p>{t("noPlanYet")}</p>
                 )
               }
             >
@@ -95,7 +100,7 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
                   <p class="cab-verdict">
                     <VerdictIcon verdict={r().verdict} size={56} /> {words.verdict(r().verdict)}
                   </p>
-                  <p>This plan has no notch steps to show.</p>
+                  <p>{t("noNotchSteps")}</p>
                 </>
               )}
             </Show>
@@ -104,10 +109,10 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
       >
         {(s) => (
           <main class="cab-main">
-            <div class="cab-notch" aria-label={`Notch ${notchText(s().notch)}`}>
-              <span class="cab-notch-label">Notch</span>
+            <div class="cab-notch" aria-label={t("notchIs", { notch: notchText(s().notch) })}>
+              <span class="cab-notch-label">{t("notch")}</span>
               <span class="cab-notch-value">{notchText(s().notch)}</span>
-              <span class="cab-phase-line">{PHASE_LINE[s().phase]}</span>
+              <span class="cab-phase-line">{phaseLine(s().phase)}</span>
             </div>
             <div class="cab-info">
               <p class="cab-advance">{advanceLead(s(), props.units, props.target)}</p>
@@ -116,22 +121,22 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
               </Show>
               <dl class="cab-figures">
                 <div>
-                  <dt>Expected speed</dt>
+                  <dt>{t("expectedSpeed")}</dt>
                   <dd>{show("speed", s().speedMps, props.units)}</dd>
                 </div>
                 <div classList={{ alert: s().slipRisk > props.slipThreshold }}>
-                  <dt>Slip risk</dt>
+                  <dt>{t("slipRisk")}</dt>
                   <dd>{percent(s().slipRisk)}</dd>
                 </div>
                 <div>
-                  <dt>{STILL_SLIPPING_LABEL}</dt>
+                  <dt>{stillSlippingLabel()}</dt>
                   <dd>{stillSlipping(s())}</dd>
                 </div>
               </dl>
               <p class="cab-why">{localiseText(s().why, props.units)}</p>
-              <p class="cab-clock" aria-label={`Time in this step ${clock(props.stepSeconds)}`}>
+              <p class="cab-clock" aria-label={t("timeInStep", { time: clock(props.stepSeconds) })}>
                 <Icon name="clock" size={32} /> <span>{clock(props.stepSeconds)}</span>
-                <span class="cab-small"> in this step</span>
+                <span class="cab-small">{t("inThisStep")}</span>
               </p>
             </div>
           </main>
@@ -140,22 +145,22 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
 
       <footer class="cab-nav">
         <button type="button" class="button huge" disabled={props.index <= 0 || count() === 0} onClick={() => props.onIndex(props.index - 1)}>
-          <Icon name="back" size={36} /> Back
+          <Icon name="back" size={36} /> {t("back")}
         </button>
         <Show
           when={props.index < count() - 1}
           fallback={
             <button type="button" class="button huge primary" onClick={() => props.onClose()}>
-              Done <Icon name="next" size={36} />
+              {t("done")} <Icon name="next" size={36} />
             </button>
           }
         >
           <button type="button" class="button huge primary" onClick={() => props.onIndex(props.index + 1)}>
-            Next <Icon name="next" size={36} />
+            {t("next")} <Icon name="next" size={36} />
           </button>
         </Show>
       </footer>
-      <p class="cab-wake">{WAKE_TEXT[props.wakeLock]}</p>
+      <p class="cab-wake">{WAKE_TEXT[props.wakeLock]()}</p>
 
       <Show when={props.slipOpen && result()}>
         {(_) => (

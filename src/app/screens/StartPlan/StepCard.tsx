@@ -3,7 +3,11 @@ import { Show, type JSX } from "solid-js";
 import type { PlanStep } from "../../../core/planner/types.js";
 import type { Target } from "../../../core/train/types.js";
 import { localiseText, percentOf, show, type UnitSystem } from "../../format.js";
-import { advanceLead, advanceOthers, notchText, PHASE_WORD, STILL_SLIPPING_LABEL, stillSlipping } from "../../steps.js";
+import { advanceLead, advanceOthers, notchText, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
+import { steps } from "../../../i18n/en/steps.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(steps);
 
 export interface StepCardProps {
   step: PlanStep;
@@ -21,14 +25,14 @@ export function StepCard(props: StepCardProps): JSX.Element {
   const risky = () => s().slipRisk > props.slipThreshold;
   const heavy = () => s().peakCouplerForceN > props.couplerWorkingN;
   return (
-    <li class={`step-card phase-${s().phase}`} aria-label={`Step ${props.index + 1} of ${props.count}: notch ${notchText(s().notch)}`}>
+    <li class={`step-card phase-${s().phase}`} aria-label={t("stepOf", { number: props.index + 1, count: props.count, notch: notchText(s().notch) })}>
       <div class="step-notch">
-        <span class="step-number">Step {props.index + 1}</span>
-        <span class="notch-label">Notch</span>
+        <span class="step-number">{t("step", { number: props.index + 1 })}</span>
+        <span class="notch-label">{t("notch")}</span>
         <span class="notch-value">{notchText(s().notch)}</span>
       </div>
       <div class="step-body">
-        <p class="step-phase">{PHASE_WORD[s().phase]}</p>
+        <p class="step-phase">{phaseWord(s().phase)}</p>
         <p class="step-advance">
           <strong>{advanceLead(s(), props.units, props.target)}</strong>
           <Show when={advanceOthers(s(), props.units).length > 0}>
@@ -37,42 +41,42 @@ export function StepCard(props: StepCardProps): JSX.Element {
         </p>
         <dl class="figures">
           <div>
-            <dt>Expected speed</dt>
+            <dt>{t("expectedSpeed")}</dt>
             <dd>{show("speed", s().speedMps, props.units)}</dd>
           </div>
           <div classList={{ alert: risky() }}>
-            <dt>Slip risk</dt>
+            <dt>{t("slipRisk")}</dt>
             <dd>
               {percentOf(s().slipRisk)}
-              <Show when={risky()}> — above your {percentOf(props.slipThreshold, 0)}</Show>
+              <Show when={risky()}>{t("aboveYour", { threshold: percentOf(props.slipThreshold, 0) })}</Show>
             </dd>
           </div>
           <div>
-            <dt>{STILL_SLIPPING_LABEL}</dt>
+            <dt>{stillSlippingLabel()}</dt>
             <dd>{stillSlipping(s())}</dd>
           </div>
           <div>
-            <dt>Tractive effort</dt>
+            <dt>{t("tractiveEffort")}</dt>
             <dd>
               {show("force", s().tractiveEffortN, props.units)}
-              <span class="basis">at {show("speed", s().speedMps, props.units)}, the step's end</span>
+              <span class="basis">{t("atStepEnd", { speed: show("speed", s().speedMps, props.units) })}</span>
             </dd>
           </div>
           <div classList={{ alert: heavy() }}>
-            <dt>Peak coupler force</dt>
+            <dt>{t("peakCoupler")}</dt>
             <dd>
               {show("force", s().peakCouplerForceN, props.units)}
               <Show when={Number.isFinite(props.couplerWorkingN)}>
-                <span class="basis">of {show("force", props.couplerWorkingN, props.units)} allowed</span>
+                <span class="basis">{t("ofAllowed", { force: show("force", props.couplerWorkingN, props.units) })}</span>
               </Show>
             </dd>
           </div>
           <div>
-            <dt>Adhesion used</dt>
+            <dt>{t("adhesionUsed")}</dt>
             <dd>
               {percentOf(s().adhesionUse, 0)}
               <span class="basis">
-                highest, at {show("speed", s().adhesionUseAt.speedMps, props.units)} ({show("force", s().adhesionUseAt.tractiveEffortN, props.units)})
+                {t("highestAt", { speed: show("speed", s().adhesionUseAt.speedMps, props.units), force: show("force", s().adhesionUseAt.tractiveEffortN, props.units) })}
               </span>
             </dd>
           </div>
