@@ -4,6 +4,7 @@ import { shellDe } from "./shell.js";
 import { cardDe } from "./card.js";
 import { settingsDe } from "./settings.js";
 import { stepsDe } from "./steps.js";
+import { planDe } from "./plan.js";
 import { wordsDe } from "./words.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe };

@@ -4,6 +4,7 @@ import { shellHu } from "./shell.js";
 import { cardHu } from "./card.js";
 import { settingsHu } from "./settings.js";
 import { stepsHu } from "./steps.js";
+import { planHu } from "./plan.js";
 import { wordsHu } from "./words.js";
 
-export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu };
+export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu };

@@ -22,6 +22,10 @@ import type { FieldIssue } from "../../../profiles/issues.js";
 import { duration, localiseText, margin, percent, percentOf, show, showAtMost, showForce, type UnitSystem } from "../../format.js";
 import type { RunStatus } from "../../state/createPlanRun.js";
 import { StepCard } from "./StepCard.js";
+import { plan } from "../../../i18n/en/plan.js";
+import { appNumber, tr } from "../../i18n.js";
+
+const t = tr.ns(plan);
 
 export interface ResultViewProps {
   status: RunStatus;
@@ -45,7 +49,13 @@ export interface ResultViewProps {
   onRetry: () => void;
 }
 
-const MARGIN_WORD: Record<Reason, string> = { adhesion: "Adhesion", power: "Power", coupler: "Coupler", distance: "Distance", brake: "Brake holding" };
+const MARGIN_WORD: Record<Reason, () => string> = {
+  adhesion: () => t("marginAdhesion"),
+  power: () => t("marginPower"),
+  coupler: () => t("marginCoupler"),
+  distance: () => t("marginDistance"),
+  brake: () => t("marginBrake"),
+};
 
 /**
  * The limit that binds, in words: the one the plan names (`binding`, decision.ts), whose margin is the one
@@ -65,14 +75,14 @@ export function VerdictSummary(props: { result: PlanResult; stale: boolean; show
       data-verdict={v()}
       aria-hidden={props.shown ? undefined : "true"}
       role="status"
-      aria-label={`Verdict: ${words.verdict(v())}`}
+      aria-label={t("verdictLabel", { word: words.verdict(v()) })}
     >
       <VerdictIcon verdict={v()} size={30} />
       <span class="summary-word">{words.verdict(v())}</span>
-      <span class="summary-margin">margin {margin(props.result.margin)}</span>
+      <span class="summary-margin">{t("margin", { value: margin(props.result.margin) })}</span>
       <span class="summary-limit">{bindingLimit(props.result)}</span>
       <Show when={props.stale}>
-        <span class="summary-stale">previous inputs — updating…</span>
+        <span class="summary-stale">{t("staleShort")}</span>
       </Show>
     </div>
   );
@@ -119,38 +129,35 @@ export function ResultView(props: ResultViewProps): JSX.Element {
       <Show when={shownResult()}>{(res) => <VerdictSummary result={res()} stale={!props.current} shown={!bannerInView()} />}</Show>
       <Show when={props.illustrative}>
         <p class="illustrative-note">
-          <Icon name="info" size={20} /> Illustrative demo data: invented places, trains and locomotive profiles (not real classes).
+          <Icon name="info" size={20} /> {t("illustrative")}
         </p>
       </Show>
 
       <Show when={props.status === "running" || props.status === "waiting"}>
-        <div class="progress" role="progressbar" aria-label="Planning" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(props.progress * 100)}>
+        <div class="progress" role="progressbar" aria-label={t("planning")} aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(props.progress * 100)}>
           <span style={{ width: `${Math.max(4, props.progress * 100)}%` }} />
         </div>
       </Show>
 
       <Show when={props.status === "failed"}>
         <div class="problem" role="alert">
-          <p>The planner could not finish: {props.error}</p>
+          <p>{t("failed", { error: props.error ?? "" })}</p>
           <button type="button" class="button" onClick={() => props.onRetry()}>
-            Try again
+            {t("tryAgain")}
           </button>
         </div>
       </Show>
 
       <Show when={invalid()}>
-        <section class="no-plan" role="alert" aria-label="No plan: the inputs break a rule" data-no-plan>
+        <section class="no-plan" role="alert" aria-label={t("noPlanLabel")} data-no-plan>
           <p class="no-plan-word">
             <svg class="no-plan-icon" width="44" height="44" viewBox="0 0 48 48" aria-hidden="true">
               <circle cx="24" cy="24" r="21" />
               <path d="M14 34 34 14" />
             </svg>
-            No plan: fix the inputs
+            {t("noPlanWord")}
           </p>
-          <p>
-            {(props.issues ?? []).length === 1 ? "One input breaks a rule" : `${(props.issues ?? []).length || "Some"} inputs break a rule`}, so there is no plan for this
-            case. The previous plan and its Cab steps are withdrawn.
-          </p>
+          <p>{(props.issues ?? []).length > 0 ? t("brokenInputs", { count: (props.issues ?? []).length }) : t("brokenSome")}</p>
           <Show when={(props.issues ?? []).length > 0}>
             <ul>
               <For each={(props.issues ?? []).slice(0, 4)}>{(i) => <li>{issueLine(i)}</li>}</For>
@@ -158,13 +165,13 @@ export function ResultView(props: ResultViewProps): JSX.Element {
           </Show>
           <Show when={props.onShowInputs}>
             <button type="button" class="button primary show-inputs" onClick={() => props.onShowInputs?.()}>
-              <Icon name="back" /> Go to the inputs
+              <Icon name="back" /> {t("goToInputs")}
             </button>
           </Show>
         </section>
       </Show>
 
-      <Show when={shownResult()} fallback={<Show when={!invalid()}>{<p class="placeholder-text">Planning…</p>}</Show>}>
+      <Show when={shownResult()} fallback={<Show when={!invalid()}>{<p class="placeholder-text">{t("planningDots")}</p>}</Show>}>
         {(res) => (
           <>
             <div ref={setBanner}>
@@ -172,7 +179,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
                 verdict={res().verdict}
                 reasons={res().reasons}
                 stale={!props.current}
-                detail={`Margin ${margin(res().margin)}, limited by ${bindingLimit(res())}${res().startKind === "gravity" ? " — a brake-controlled start: gravity starts the train" : ""}`}
+                detail={t("detail", { margin: margin(res().margin), limit: bindingLimit(res()) }) + (res().startKind === "gravity" ? t("gravity") : "")}
               />
             </div>
             <Show when={res().reasons.length > 0}>
@@ -188,16 +195,16 @@ export function ResultView(props: ResultViewProps): JSX.Element {
 
             <section class="panel" aria-labelledby="steps-h">
               <div class="panel-head">
-                <h2 id="steps-h">Steps</h2>
+                <h2 id="steps-h">{t("steps")}</h2>
                 <button type="button" class="button primary" onClick={() => props.onOpenCab()}>
-                  <Icon name="cab" /> Open Cab steps
+                  <Icon name="cab" /> {t("openCab")}
                 </button>
               </div>
               <Show
                 when={res().steps.length > 0}
                 fallback={
                   <p class="placeholder-text" data-empty-steps>
-                    No notch steps in this plan{res().verdict === "needs-assistance" ? ": it is not expected to start as it stands." : "."}
+                    {res().verdict === "needs-assistance" ? t("noStepsAssist") : t("noSteps")}
                   </p>
                 }
               >
@@ -220,12 +227,12 @@ export function ResultView(props: ResultViewProps): JSX.Element {
             </section>
 
             <section class="panel" aria-labelledby="margins-h">
-              <h2 id="margins-h">Margins (allowance ÷ demand)</h2>
+              <h2 id="margins-h">{t("margins")}</h2>
               <ul class="margins">
                 <For each={(["adhesion", "power", "coupler", "distance", "brake"] as Reason[]).filter((k) => k !== "brake" || res().margins.brake < 99)}>
                   {(k) => (
                     <li classList={{ limiting: res().limits.find((l) => l.name === res().binding)?.reason === k }}>
-                      <span class="margin-name">{MARGIN_WORD[k]}</span>
+                      <span class="margin-name">{MARGIN_WORD[k]()}</span>
                       <span class="margin-bar" aria-hidden="true">
                         <span style={{ width: `${Math.min(100, (res().margins[k] / 2) * 100)}%` }} classList={{ under: res().margins[k] < 1 }} />
                       </span>
@@ -234,80 +241,80 @@ export function ResultView(props: ResultViewProps): JSX.Element {
                   )}
                 </For>
               </ul>
-              <p class="muted">The bar's middle is × 1: below it the need is larger than what is available.</p>
+              <p class="muted">{t("marginNote")}</p>
             </section>
 
             <section class="panel" aria-labelledby="figures-h">
-              <h2 id="figures-h">Key figures</h2>
+              <h2 id="figures-h">{t("keyFigures")}</h2>
               <dl class="figures wide">
                 <div>
-                  <dt>Tractive effort needed to start</dt>
+                  <dt>{t("needed")}</dt>
                   <dd>
                     {showForce(res().static.requiredN, props.units)}
-                    <span class="basis">at standstill, the whole train's resistance</span>
+                    <span class="basis">{t("neededBasis")}</span>
                   </dd>
                 </div>
                 <div>
-                  <dt>Rails give at {percent(threshold(), 0)} slip risk</dt>
+                  <dt>{t("railsGive", { risk: percent(threshold(), 0) })}</dt>
                   <dd>
                     {showForce(res().static.adhesionLimitN, props.units)}
-                    <span class="basis">at standstill</span>
+                    <span class="basis">{t("atStandstill")}</span>
                   </dd>
                 </div>
                 <div>
-                  <dt>Slip risk at the start</dt>
+                  <dt>{t("slipAtStart")}</dt>
                   <dd>{percentOf(res().static.slipRiskAtStart)}</dd>
                 </div>
                 <div>
-                  <dt>Peak coupler force</dt>
+                  <dt>{t("peakCoupler")}</dt>
                   <dd>
                     {showForce(res().peakCouplerForceN, props.units)}
                     <Show when={limitN()}>
                       {(l) => (
                         <span class="basis" data-coupler-basis>
-                          of {show("force", l() / factor(), props.units)} allowed (limit {show("force", l(), props.units)} ÷ {factor()})
+                          {t("couplerBasis", { allowed: show("force", l() / factor(), props.units), limit: show("force", l(), props.units), factor: appNumber(factor(), Number.isInteger(factor() * 10) ? 1 : 2) })}
                         </span>
                       )}
                     </Show>
                   </dd>
                 </div>
                 <div>
-                  <dt>Largest trailing mass that starts</dt>
+                  <dt>{t("largestMass")}</dt>
                   <dd>
-                    {Number.isFinite(res().maxStartableMassKg) ? showAtMost("mass", res().maxStartableMassKg, props.units) : props.massPending ? "working it out…" : "–"}
+                    {Number.isFinite(res().maxStartableMassKg) ? showAtMost("mass", res().maxStartableMassKg, props.units) : props.massPending ? t("workingOut") : "–"}
                     <Show when={Number.isFinite(res().largestMarginalMassKg) && res().largestMarginalMassKg > res().maxStartableMassKg}>
-                      <span class="muted"> (at least marginal up to {showAtMost("mass", res().largestMarginalMassKg, props.units)})</span>
+                      <span class="muted">{t("marginalUpTo", { mass: showAtMost("mass", res().largestMarginalMassKg, props.units) })}</span>
                     </Show>
                   </dd>
                 </div>
                 <div>
-                  <dt>Time to the target</dt>
+                  <dt>{t("timeToTarget")}</dt>
                   <dd>{res().timeToTargetS === null || res().steps.length === 0 ? "–" : duration(res().timeToTargetS!)}</dd>
                 </div>
               </dl>
             </section>
 
             <Chart
-              title="Speed and notch"
-              caption="Locomotive speed and notch over time in the verifying run of the plan."
+              title={t("chartSpeed")}
+              caption={t("chartSpeedCaption")}
               spec={speedNotchChart(res(), props.units)}
               palette={props.palette}
-              empty="No time series in this plan: the chart appears when the plan carries its verifying run."
+              empty={t("chartSpeedEmpty")}
             />
             <Chart
-              title="Peak coupler force along the train"
-              caption="Largest tension in each coupling during the start, head to tail, against the limit."
+              title={t("chartCoupler")}
+              caption={t("chartCouplerCaption")}
               spec={limitN() !== null ? couplerChart(res(), limitN()!, factor(), props.units) : null}
               palette={props.palette}
-              empty="No force per coupling in this plan: the chart appears when the plan carries its verifying run."
+              empty={t("chartCouplerEmpty")}
             />
             <Chart
-              title="Tractive effort and adhesion"
-              caption={`Each notch's tractive effort against speed; each band runs from the adhesion with ${percent(threshold(), 0)} slip risk up to the median (50 %). A step's "adhesion used" is its effort ÷ the median, read at its mark S1, S2….`}
+              title={t("chartEffort")}
+              caption={t("chartEffortCaption", { risk: percent(threshold(), 0) })}
               spec={effortSpec()}
               palette={props.palette}
               height={340}
-              empty="Appears when the inputs are valid."
+              empty={t("chartEffortEmpty")}
             />
           </>
         )}
@@ -316,7 +323,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
       <Show when={shownResult()}>
         {(res) => (
           <section class="panel cautions" aria-labelledby="cautions-h">
-            <h2 id="cautions-h">Cautions</h2>
+            <h2 id="cautions-h">{t("cautions")}</h2>
             <ul>
               <For each={res().cautions}>{(c) => <li>{localiseText(c, props.units)}</li>}</For>
             </ul>
