@@ -5,6 +5,7 @@ import { cardDe } from "./card.js";
 import { settingsDe } from "./settings.js";
 import { stepsDe } from "./steps.js";
 import { planDe } from "./plan.js";
+import { inputsDe } from "./inputs.js";
 import { wordsDe } from "./words.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe };

@@ -1,10 +1,11 @@
 /** Every English namespace: the one list the catalog checks walk (tests/i18n) — add a new namespace here. */
 import { card } from "./card.js";
 import { cli } from "./cli.js";
+import { inputs } from "./inputs.js";
 import { plan } from "./plan.js";
 import { settings } from "./settings.js";
 import { shell } from "./shell.js";
 import { steps } from "./steps.js";
 import { words } from "./words.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, cli] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, cli] as const;

@@ -5,6 +5,7 @@ import { cardHu } from "./card.js";
 import { settingsHu } from "./settings.js";
 import { stepsHu } from "./steps.js";
 import { planHu } from "./plan.js";
+import { inputsHu } from "./inputs.js";
 import { wordsHu } from "./words.js";
 
-export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu };
+export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu };

@@ -7,8 +7,14 @@ import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { Toggle } from "../../components/Toggle.js";
 import { issueFinder, type InputSectionProps } from "./inputSection.js";
 
+import { inputs } from "../../../i18n/en/inputs.js";
+import { tr } from "../../i18n.js";
+
+import { words } from "../../words.js";
+
+const t = tr.ns(inputs);
+
 const RAIL_ICON: Record<RailCondition, IconName> = { dry: "dry", damp: "damp", wet: "wet", frost: "frost", leaves: "leaves", greasy: "greasy" };
-const RAIL_LABEL: Record<RailCondition, string> = { dry: "Dry", damp: "Damp", wet: "Wet", frost: "Frost", leaves: "Leaves", greasy: "Greasy" };
 
 /** Rail condition with its icon, sand on or off, temperature. */
 export function ConditionsSection(props: InputSectionProps): JSX.Element {
@@ -17,21 +23,21 @@ export function ConditionsSection(props: InputSectionProps): JSX.Element {
   const issue = issueFinder(s);
   return (
     <section class="panel">
-      <h2>Rail and weather</h2>
+      <h2>{t("railWeather")}</h2>
       <SegmentedButtons<RailCondition>
         name="conditions.rail"
-        label="Rail condition"
+        label={t("railCondition")}
         tall
         value={d.conditions.rail}
         onChange={(v) => s.set("conditions", "rail", v)}
-        options={RAIL_CONDITIONS.map((r) => ({ value: r, label: RAIL_LABEL[r], icon: RAIL_ICON[r] }))}
+        options={RAIL_CONDITIONS.map((r) => ({ value: r, label: words.rail(r), icon: RAIL_ICON[r] }))}
         issue={issue("conditions.rail")}
       />
       <div class="row">
-        <Toggle name="conditions.sand" label="Sand" icon="sand" on={d.conditions.sand} onChange={(v) => s.set("conditions", "sand", v)} onText="On" offText="Off" />
+        <Toggle name="conditions.sand" label={t("sand")} icon="sand" on={d.conditions.sand} onChange={(v) => s.set("conditions", "sand", v)} />
         <QuantityField
           name="conditions.temperature_C"
-          label="Temperature"
+          label={t("temperature")}
           measure="temperature"
           fileUnit="C"
           value={d.conditions.temperature_C}

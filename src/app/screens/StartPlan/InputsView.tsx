@@ -14,6 +14,11 @@ import { PresetsSection } from "./PresetsSection.js";
 import { TargetSection } from "./TargetSection.js";
 import { TrainSection } from "./TrainSection.js";
 
+import { inputs } from "../../../i18n/en/inputs.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(inputs);
+
 export interface InputsViewProps {
   store: CaseDraftStore;
   units: UnitSystem;
@@ -30,7 +35,7 @@ export interface InputsViewProps {
 
 export function InputsView(props: InputsViewProps): JSX.Element {
   return (
-    <form class="inputs" onSubmit={(e) => e.preventDefault()} aria-label="Start plan inputs">
+    <form class="inputs" onSubmit={(e) => e.preventDefault()} aria-label={t("inputsLabel")}>
       <ErrorList issues={props.store.issues()} />
       <PresetsSection store={props.store} presets={props.presets} cases={props.cases ?? []} library={props.library} {...(props.settings ? { settings: props.settings } : {})} />
       <LocomotivesSection store={props.store} units={props.units} library={props.library} />

@@ -12,6 +12,11 @@ import { show, type UnitSystem } from "../../format.js";
 import type { LocationChoice } from "../../locations.js";
 import { issueFinder, type InputSectionProps } from "./inputSection.js";
 
+import { inputs } from "../../../i18n/en/inputs.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(inputs);
+
 export interface LocationSectionProps extends InputSectionProps {
   locations: readonly LocationChoice[];
   /** Why the saved notes could not be read, if they could not. */
@@ -25,27 +30,27 @@ export function LocationSection(props: LocationSectionProps): JSX.Element {
   const issue = issueFinder(s);
   return (
     <section class="panel">
-      <h2>Location</h2>
+      <h2>{t("location")}</h2>
       <SegmentedButtons
         name="locationMode"
-        label="Location from"
+        label={t("locationFrom")}
         hideLabel
         value={d.locationMode}
         onChange={(v) => s.set("locationMode", v)}
         options={[
-          { value: "note", label: "Saved note", icon: "notes" },
-          { value: "quick", label: "Quick entry", icon: "plan" },
-          ...(d.profile ? [{ value: "profile" as const, label: "Case file's profile", icon: "table" as const }] : []),
+          { value: "note", label: t("savedNote"), icon: "notes" },
+          { value: "quick", label: t("quickEntry"), icon: "plan" },
+          ...(d.profile ? [{ value: "profile" as const, label: t("caseProfile"), icon: "table" as const }] : []),
         ]}
       />
       <Show when={d.locationMode === "profile" && d.profile}>
         {(p) => (
           <div class="field" data-field="location">
             <p class="profile-from-file">{profileFacts(p(), props.units)}</p>
-            <p class="muted">The track profile of the opened case file, used as it is. Choose a saved note or quick entry to plan somewhere else.</p>
+            <p class="muted">{t("caseProfileNote")}</p>
             <Show when={issue("location", "location.frontAt_m")}>
               <p class="field-issue" role="alert">
-                Location {issue("location", "location.frontAt_m")}
+                {t("locationIssue", { issue: issue("location", "location.frontAt_m") ?? "" })}
               </p>
             </Show>
           </div>
@@ -53,8 +58,8 @@ export function LocationSection(props: LocationSectionProps): JSX.Element {
       </Show>
       <Show when={d.locationMode === "note"}>
         <div class="field" data-field="location">
-          <div class="note-list" role="radiogroup" aria-label="Location note">
-            <For each={props.locations} fallback={<p class="muted">No saved location notes. Use quick entry, or add notes under Location notes.</p>}>
+          <div class="note-list" role="radiogroup" aria-label={t("locationNote")}>
+            <For each={props.locations} fallback={<p class="muted">{t("noNotes")}</p>}>
               {(c) => (
                 <button type="button" role="radio" aria-checked={d.noteId === c.id} class="note-choice" onClick={() => s.set("noteId", c.id)}>
                   <span class="note-name">{c.name}</span>
@@ -65,12 +70,12 @@ export function LocationSection(props: LocationSectionProps): JSX.Element {
           </div>
           <Show when={props.locationsError}>
             <p class="field-issue" role="alert">
-              The saved notes could not be read ({props.locationsError}). The built-in notes and quick entry still work.
+              {t("notesUnreadable", { error: props.locationsError ?? "" })}
             </p>
           </Show>
           <Show when={issue("location", "location.frontAt_m")}>
             <p class="field-issue" role="alert">
-              Location {issue("location", "location.frontAt_m")}
+              {t("locationIssue", { issue: issue("location", "location.frontAt_m") ?? "" })}
             </p>
           </Show>
         </div>
@@ -78,7 +83,7 @@ export function LocationSection(props: LocationSectionProps): JSX.Element {
       <Show when={d.locationMode === "quick"}>
         <QuantityField
           name="location.gradient_permille"
-          label="Gradient under the train (rising +)"
+          label={t("gradient")}
           measure="grade"
           fileUnit="permille"
           value={d.quick.gradient_permille}
@@ -92,7 +97,7 @@ export function LocationSection(props: LocationSectionProps): JSX.Element {
         <div class="row">
           <QuantityField
             name="location.curveRadius_m"
-            label="Curve radius (0 = straight)"
+            label={t("curveRadius")}
             measure="radius"
             fileUnit="m"
             value={d.quick.curveRadius_m}
@@ -102,7 +107,7 @@ export function LocationSection(props: LocationSectionProps): JSX.Element {
           />
           <QuantityField
             name="location.clearAhead_m"
-            label="Clear ahead"
+            label={t("clearAhead")}
             measure="distance"
             fileUnit="m"
             value={d.quick.clearAhead_m}
@@ -119,15 +124,15 @@ export function LocationSection(props: LocationSectionProps): JSX.Element {
 /** One line about a case file's profile: segments, gradient at the front, clear ahead. */
 export function profileFacts(p: { segments: LocationNoteFile["segments"]; frontAt_m: number; clearAhead_m: number }, units: UnitSystem): string {
   const g = gradeAt(trackFromSegments(p.segments), p.frontAt_m - 1);
-  return `${p.segments.length} segment${p.segments.length === 1 ? "" : "s"} · ${show("grade", g / 1000, units)} at the front · ${show("distance", p.clearAhead_m, units)} clear ahead`;
+  return [t("segments", { count: p.segments.length }), t("atFront", { grade: show("grade", g / 1000, units) }), t("clearAheadIs", { distance: show("distance", p.clearAhead_m, units) })].join(" · ");
 }
 
 /** One line about a note: gradient at the front, clear ahead, hazards. */
 export function noteFacts(n: LocationNoteFile, units: UnitSystem): string {
   const track = trackFromSegments(n.segments);
   const g = gradeAt(track, n.frontAt_m - 1);
-  const parts = [`${show("grade", g / 1000, units)} at the front`, `${show("distance", n.clearAhead_m, units)} clear ahead`];
-  if (n.hazards.length > 0) parts.push(`${n.hazards.length} hazard${n.hazards.length === 1 ? "" : "s"}`);
-  if (n.illustrative) parts.push("illustrative");
+  const parts = [t("atFront", { grade: show("grade", g / 1000, units) }), t("clearAheadIs", { distance: show("distance", n.clearAhead_m, units) })];
+  if (n.hazards.length > 0) parts.push(t("hazards", { count: n.hazards.length }));
+  if (n.illustrative) parts.push(t("illustrative"));
   return parts.join(" · ");
 }

@@ -14,6 +14,11 @@ import type { CaseSettings } from "../../state/caseDraft.js";
 import type { CaseDraftStore } from "../../state/createCaseDraft.js";
 import { caseFileName, caseFileText, readCaseFile } from "./caseFile.js";
 
+import { inputs } from "../../../i18n/en/inputs.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(inputs);
+
 export interface PresetsSectionProps {
   store: CaseDraftStore;
   presets: readonly TrainPresetFile[];
@@ -49,9 +54,9 @@ export function PresetsSection(props: PresetsSectionProps): JSX.Element {
   };
   return (
     <section class="panel">
-      <h2>Quick fill</h2>
+      <h2>{t("quickFill")}</h2>
       <Show when={(props.cases ?? []).length > 0}>
-        <p class="muted">A demo case fills everything: train, place, rail and target (illustrative).</p>
+        <p class="muted">{t("casesNote")}</p>
         <div class="preset-row" data-quick="cases">
           <For each={props.cases}>
             {(c) => (
@@ -66,7 +71,7 @@ export function PresetsSection(props: PresetsSectionProps): JSX.Element {
           </For>
         </div>
       </Show>
-      <p class="muted">A train fills the locomotives and the train only, keeping place, rail and target.</p>
+      <p class="muted">{t("trainsNote")}</p>
       <div class="preset-row" data-quick="trains">
         <For each={props.presets}>
           {(p) => (
@@ -82,14 +87,14 @@ export function PresetsSection(props: PresetsSectionProps): JSX.Element {
       </div>
       <div class="file-actions case-files">
         <button type="button" class="button" onClick={() => picker.click()}>
-          <Icon name="open" /> Open case file…
+          <Icon name="open" /> {t("openFile")}
         </button>
         <input
           ref={picker}
           class="visually-hidden"
           type="file"
           accept=".json,application/json"
-          aria-label="Start-case file to open"
+          aria-label={t("fileToOpen")}
           tabIndex={-1}
           onChange={(e) => {
             const f = e.currentTarget.files?.[0];
@@ -98,20 +103,20 @@ export function PresetsSection(props: PresetsSectionProps): JSX.Element {
           }}
         />
         <button type="button" class="button" onClick={save}>
-          <Icon name="ready" /> Save case file
+          <Icon name="ready" /> {t("saveFile")}
         </button>
       </div>
-      <p class="muted small-print">The file is a start case (taut/start-case@1), the one `taut plan FILE` reads.</p>
+      <p class="muted small-print">{t("fileNote")}</p>
       <Show when={opened()} keyed>
         {(v) =>
           v.kind === "bad" ? (
             <div class="problem" role="alert">
-              <p>{v.message}. Nothing was changed.</p>
-              <ErrorList issues={v.issues} title="What the file breaks" />
+              <p>{t("nothingChanged", { message: v.message })}</p>
+              <ErrorList issues={v.issues} title={t("fileBreaks")} />
             </div>
           ) : (
             <div class="opened-case" role="status">
-              <p>Opened {v.name}.</p>
+              <p>{t("opened", { name: v.name })}</p>
               <For each={v.notes}>{(n) => <p class="alert-text">{n}</p>}</For>
             </div>
           )
@@ -120,7 +125,7 @@ export function PresetsSection(props: PresetsSectionProps): JSX.Element {
       <Show when={d.label}>
         <p class="case-label">
           <strong>{d.label}</strong>
-          <Show when={s.edited()}> — edited</Show>
+          <Show when={s.edited()}>{t("edited")}</Show>
         </p>
       </Show>
     </section>

@@ -4,6 +4,11 @@ import { QuantityField } from "../../components/QuantityField.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { issueFinder, type InputSectionProps } from "./inputSection.js";
 
+import { inputs } from "../../../i18n/en/inputs.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(inputs);
+
 /** The end of the plan: a speed or a distance cleared. */
 export function TargetSection(props: InputSectionProps): JSX.Element {
   const s = props.store;
@@ -11,15 +16,15 @@ export function TargetSection(props: InputSectionProps): JSX.Element {
   const issue = issueFinder(s);
   return (
     <section class="panel">
-      <h2>Target</h2>
+      <h2>{t("target")}</h2>
       <SegmentedButtons
         name="targetKind"
-        label="Plan until"
+        label={t("planUntil")}
         value={d.targetKind}
         onChange={(v) => s.set("targetKind", v)}
         options={[
-          { value: "speed", label: "A speed" },
-          { value: "distance", label: "A distance cleared" },
+          { value: "speed", label: t("aSpeed") },
+          { value: "distance", label: t("aDistance") },
         ]}
       />
       <Show
@@ -27,7 +32,7 @@ export function TargetSection(props: InputSectionProps): JSX.Element {
         fallback={
           <QuantityField
             name="target.distance_m"
-            label="Target distance"
+            label={t("targetDistance")}
             measure="distance"
             fileUnit="m"
             value={d.target.distance_m}
@@ -41,7 +46,7 @@ export function TargetSection(props: InputSectionProps): JSX.Element {
       >
         <QuantityField
           name="target.speed_kmh"
-          label="Target speed"
+          label={t("targetSpeed")}
           measure="speed"
           fileUnit="kmh"
           value={d.target.speed_kmh}

@@ -10,6 +10,11 @@ import { words } from "../../words.js";
 import { InputsView, type InputsViewProps } from "./InputsView.js";
 import { ResultView, type ResultViewProps } from "./ResultView.js";
 
+import { inputs } from "../../../i18n/en/inputs.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(inputs);
+
 export interface StartPlanViewProps {
   inputs: InputsViewProps;
   result: ResultViewProps;
@@ -32,11 +37,11 @@ export function StartPlanView(props: StartPlanViewProps): JSX.Element {
   };
   return (
     <div class="start-plan" data-pane={pane()}>
-      <div class="pane-switch" role="tablist" aria-label="Start plan view">
+      <div class="pane-switch" role="tablist" aria-label={t("viewLabel")}>
         <button type="button" role="tab" id="tab-inputs" aria-controls="pane-inputs" aria-selected={pane() === "inputs"} onClick={() => setPane("inputs")}>
-          Inputs
+          {t("inputs")}
           <Show when={props.inputs.store.issues().length > 0}>
-            <span class="badge">{props.inputs.store.issues().length} to fix</span>
+            <span class="badge">{t("toFix", { count: props.inputs.store.issues().length })}</span>
           </Show>
         </button>
         <button
@@ -48,27 +53,27 @@ export function StartPlanView(props: StartPlanViewProps): JSX.Element {
           onClick={() => setPane("plan")}
           classList={{ stale: stale(), "no-plan-tab": invalid() }}
         >
-          Plan
+          {t("plan")}
           <Show when={verdict()}>
             {(v) => (
               <span class={`pane-verdict verdict-${v()}`}>
                 <VerdictIcon verdict={v()} size={24} />
                 {words.verdict(v())}
                 <Show when={stale()}>
-                  <span class="pane-stale">updating…</span>
+                  <span class="pane-stale">{t("updating")}</span>
                 </Show>
               </span>
             )}
           </Show>
           <Show when={invalid()}>
-            <span class="pane-verdict pane-no-plan">no plan: fix inputs</span>
+            <span class="pane-verdict pane-no-plan">{t("noPlanFix")}</span>
           </Show>
         </button>
       </div>
-      <div class="pane pane-inputs" id="pane-inputs" role="region" aria-label="Inputs" ref={inputsPane}>
+      <div class="pane pane-inputs" id="pane-inputs" role="region" aria-label={t("inputs")} ref={inputsPane}>
         <InputsView {...props.inputs} />
       </div>
-      <div class="pane pane-plan" id="pane-plan" role="region" aria-label="Plan">
+      <div class="pane pane-plan" id="pane-plan" role="region" aria-label={t("plan")}>
         <ResultView {...props.result} onShowInputs={showInputs} />
       </div>
     </div>
