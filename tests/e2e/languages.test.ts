@@ -112,7 +112,7 @@ describe("Taut in three languages", () => {
         await page.setViewportSize(size);
         for (const id of SCREENS) {
           await go(id);
-          await page.screenshot({ path: join(SHOTS, `lang-${lang}-${id}-${name2}.png`), fullPage: id !== "cab-steps" });
+          await page.screenshot({ path: join(SHOTS, `lang-${lang}-${id}-${name2}.png`) });
         }
       }
       await page.setViewportSize(LANDSCAPE);
@@ -156,7 +156,7 @@ describe("Taut in three languages", () => {
       for (const id of SCREENS) {
         await go(id);
         found.push(...(await overflowing(`${id} ${name}`)));
-        await page.screenshot({ path: join(SHOTS, `lang-pseudo-${id}-${name}.png`), fullPage: id !== "cab-steps" });
+        await page.screenshot({ path: join(SHOTS, `lang-pseudo-${id}-${name}.png`) });
       }
     }
     await page.evaluate(() => localStorage.removeItem("taut.pseudo"));

@@ -6,6 +6,7 @@ import { settingsDe } from "./settings.js";
 import { stepsDe } from "./steps.js";
 import { planDe } from "./plan.js";
 import { inputsDe } from "./inputs.js";
+import { dispatchDe } from "./dispatch.js";
 import { wordsDe } from "./words.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe };

@@ -1,6 +1,7 @@
 /** Every English namespace: the one list the catalog checks walk (tests/i18n) — add a new namespace here. */
 import { card } from "./card.js";
 import { cli } from "./cli.js";
+import { dispatch } from "./dispatch.js";
 import { inputs } from "./inputs.js";
 import { plan } from "./plan.js";
 import { settings } from "./settings.js";
@@ -8,4 +9,4 @@ import { shell } from "./shell.js";
 import { steps } from "./steps.js";
 import { words } from "./words.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, cli] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cli] as const;

@@ -17,6 +17,10 @@ import { Cautions } from "../shared/Cautions.js";
 import type { TableStatus } from "./createLoadTableRun.js";
 import { loadChart } from "./loadChart.js";
 import { RailSandTable } from "../shared/RailSandTable.js";
+import { dispatch } from "../../../i18n/en/dispatch.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(dispatch);
 
 export interface Option {
   value: string;
@@ -58,10 +62,10 @@ export function LoadTableView(props: LoadTableViewProps): JSX.Element {
     const below = () => r !== undefined && props.trainMassKg !== null && props.trainMassKg > r.maxTrailingMassKg;
     return (
       <td data-cell={`${rail}-${sand ? "sand" : "no-sand"}`} classList={{ none: r !== undefined && r.maxTrailingMassKg < 1000, waiting: r === undefined }}>
-        {r === undefined ? (props.status === "running" ? "working…" : "–") : r.maxTrailingMassKg >= 1000 ? showAtMost("mass", r.maxTrailingMassKg, props.units) : "none"}
+        {r === undefined ? (props.status === "running" ? t("working") : "–") : r.maxTrailingMassKg >= 1000 ? showAtMost("mass", r.maxTrailingMassKg, props.units) : t("none")}
         <Show when={r !== undefined && props.trainMassKg !== null && !below()}>
           <span class="this-train">
-            <VerdictIcon verdict="starts" size={18} /> this train starts
+            <VerdictIcon verdict="starts" size={18} /> {t("thisTrainStarts")}
           </span>
         </Show>
       </td>
@@ -70,31 +74,30 @@ export function LoadTableView(props: LoadTableViewProps): JSX.Element {
   return (
     <div class="dispatch load-table">
       <p class="advisory">
-        <Icon name="info" size={22} /> Advisory only: operating rules, local instructions and the locomotive's own instructions prevail. Every figure is an estimate with
-        wide uncertainty.
+        <Icon name="info" size={22} /> {t("advisory")}
       </p>
 
       <div class="dispatch-columns">
         <div class="dispatch-col">
           <section class="panel" aria-labelledby="where-h">
-            <h2 id="where-h">Location</h2>
-            <div class="note-list choice-list" role="radiogroup" aria-label="Location">
-              <For each={props.locations} fallback={<p class="muted">No location notes.</p>}>
+            <h2 id="where-h">{t("location")}</h2>
+            <div class="note-list choice-list" role="radiogroup" aria-label={t("location")}>
+              <For each={props.locations} fallback={<p class="muted">{t("noNotes")}</p>}>
                 {(c) => (
                   <button type="button" role="radio" aria-checked={c.id === props.locationId} class="note-choice" onClick={() => props.onLocation(c.id)}>
                     <span class="note-name">{c.name}</span>
-                    <span class="note-facts">{c.origin === "device" ? "saved on this device" : "built-in demo note (illustrative)"}</span>
+                    <span class="note-facts">{c.origin === "device" ? t("onDevice") : t("builtIn")}</span>
                   </button>
                 )}
               </For>
             </div>
           </section>
           <section class="panel" aria-labelledby="train-h">
-            <h2 id="train-h">Train and locomotives</h2>
+            <h2 id="train-h">{t("trainLocos")}</h2>
             <div>
               <div class="field" data-field="train">
                 <label class="field-label" for="lt-train">
-                  Train (wagons and their make-up)
+                  {t("trainMakeUp")}
                 </label>
                 <select id="lt-train" class="select" value={props.trainId} onChange={(e) => props.onTrain(e.currentTarget.value)}>
                   <For each={props.trains}>{(t) => <option value={t.value}>{t.label}</option>}</For>
@@ -102,7 +105,7 @@ export function LoadTableView(props: LoadTableViewProps): JSX.Element {
               </div>
               <div class="field" data-field="locomotive">
                 <label class="field-label" for="lt-loco">
-                  Locomotive profile
+                  {t("locoProfile")}
                 </label>
                 <select id="lt-loco" class="select" value={props.locoId} onChange={(e) => props.onLoco(e.currentTarget.value)}>
                   <For each={props.locomotives}>{(l) => <option value={l.value}>{l.label}</option>}</For>
@@ -111,7 +114,7 @@ export function LoadTableView(props: LoadTableViewProps): JSX.Element {
             </div>
             <SegmentedButtons
               name="count"
-              label="Locomotives at the head"
+              label={t("locosAtHead")}
               value={String(props.count)}
               onChange={(v) => props.onCount(Number(v))}
               options={["1", "2", "3", "4"].map((v) => ({ value: v, label: v }))}
@@ -123,65 +126,65 @@ export function LoadTableView(props: LoadTableViewProps): JSX.Element {
         <div class="dispatch-col">
           <section class="panel" aria-labelledby="table-h">
             <div class="panel-head">
-              <h2 id="table-h">Largest trailing mass that starts</h2>
+              <h2 id="table-h">{t("largestMass")}</h2>
               <Show when={props.status === "running"}>
                 <button type="button" class="button" onClick={() => props.onCancel()}>
-                  <Icon name="close" /> Cancel
+                  <Icon name="close" /> {t("cancel")}
                 </button>
               </Show>
               <Show when={props.status === "cancelled" || props.status === "failed"}>
                 <button type="button" class="button primary" onClick={() => props.onRetry()}>
-                  <Icon name="update" /> Work it out again
+                  <Icon name="update" /> {t("again")}
                 </button>
               </Show>
             </div>
             <Show when={props.problem}>
               <p class="problem" role="alert">
-                The table cannot be worked out: {props.problem}
+                {t("cannot", { problem: props.problem ?? "" })}
               </p>
             </Show>
             <Show when={props.error}>
               <p class="problem" role="alert">
-                The table could not be finished: {props.error}
+                {t("notFinished", { error: props.error ?? "" })}
               </p>
             </Show>
             <Show when={props.status === "running"}>
-              <div class="progress" role="progressbar" aria-label="Load table" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(props.progress * 100)}>
+              <div class="progress" role="progressbar" aria-label={t("progressLabel")} aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(props.progress * 100)}>
                 <span style={{ width: `${Math.max(4, props.progress * 100)}%` }} />
               </div>
               <p class="muted" aria-live="polite">
-                {props.rows.length} of 12 figures: each is checked in the train dynamics model, so the table takes several seconds.
+                {t("progress", { done: props.rows.length })}
               </p>
             </Show>
             <Show when={props.status === "cancelled"}>
-              <p>Cancelled: {props.rows.length} of 12 figures found.</p>
+              <p>{t("cancelled", { done: props.rows.length })}</p>
             </Show>
             <Show when={!props.problem}>
               <RailSandTable
                 class="dispatch-table load-table-grid"
                 caption={
                   <>
-                    Each figure is the Start plan's own verdict at its limit: a train just lighter starts, one just heavier does not.
-                    {props.trainMassKg !== null ? ` This train (${show("mass", props.trainMassKg, props.units)}) starts where it is marked.` : ""}
+                    {t("tableCaption")}
+                    {props.trainMassKg !== null ? t("thisTrainMarked", { mass: show("mass", props.trainMassKg, props.units) }) : ""}
                   </>
                 }
                 cell={cell}
               />
               <Show when={props.rows.some((r) => r.maxTrailingMassKg <= 0)}>
-                <p class="muted">"none": not even a light train of these wagons is expected to start in that condition with these locomotives.</p>
+                <p class="muted">{t("noneNote")}</p>
               </Show>
               <Show when={props.status === "done" && props.elapsedMs !== null}>
-                <p class="muted">Worked out in {duration(props.elapsedMs! / 1000)}.</p>
+                <p class="muted">{t("workedOut", { time: duration(props.elapsedMs! / 1000) })}</p>
               </Show>
             </Show>
           </section>
           <Show when={props.rows.length > 0}>
             <Chart
-              title="Load table by rail condition"
-              caption="Largest trailing mass that starts, without and with sand; the dashed line is the chosen train's own mass."
+              title={t("chartTitle")}
+              caption={t("chartCaption")}
               spec={loadChart(props.rows, props.trainMassKg, props.units)}
               palette={props.palette}
-              empty="No figures yet."
+              empty={t("chartEmpty")}
               height={280}
             />
           </Show>

@@ -14,6 +14,10 @@ import { declarePrintStatus } from "../../state/printStatus.js";
 import "../shared/dispatch.css";
 import { createLoadTableRun } from "./createLoadTableRun.js";
 import { LoadTableView } from "./View.js";
+import { dispatch } from "../../../i18n/en/dispatch.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(dispatch);
 
 type Picked = { train?: string; locomotive?: string; count?: number };
 
@@ -89,7 +93,7 @@ export default function LoadTable(): JSX.Element {
       count={ref()?.count ?? 1}
       describe={(() => {
         const s = summary();
-        return s ? `${s.trainLabel}, with ${s.locomotives}. The table varies the rail condition and sanding; everything else stays as the note and the train give it.` : "";
+        return s ? t("describe", { train: s.trainLabel, locomotives: s.locomotives }) : "";
       })()}
       trainMassKg={(() => {
         const s = summary();
