@@ -6,10 +6,9 @@
  */
 import { batch, createSignal } from "solid-js";
 import { isLang, langFromPreferences, LOCALE_TAGS, type Lang } from "../i18n/language.js";
-import { fill, type Catalog, type Messages, type Namespace } from "../i18n/messages.js";
+import { fill, type Catalog, type Message, type Messages, type Namespace } from "../i18n/messages.js";
 import { formatNumberIn } from "../i18n/numbers.js";
 import { messageOf, type MessageFn, type Translator } from "../i18n/translator.js";
-import { pseudoMessage } from "../i18n/pseudo.js";
 
 /** The language setting: a language, or "auto" (the device's). */
 export type LanguageChoice = Lang | "auto";
@@ -36,14 +35,13 @@ export function fieldNumber(x: number, decimals: number): string {
 
 const whole = (x: number) => appNumber(x, Number.isInteger(x) ? 0 : 1);
 
-/** Pseudo-localised English (layout checks): localStorage "taut.pseudo" = "1". */
-const pseudo = (() => {
-  try {
-    return typeof localStorage !== "undefined" && localStorage.getItem("taut.pseudo") === "1";
-  } catch {
-    return false;
-  }
-})();
+/** Pseudo-localised English (layout checks): localStorage "taut.pseudo" = "1"; its code loads only then. */
+const [pseudo, setPseudo] = createSignal<((m: Message) => Message) | null>(null);
+try {
+  if (typeof localStorage !== "undefined" && localStorage.getItem("taut.pseudo") === "1") void import("../i18n/pseudo.js").then((m) => setPseudo(() => m.pseudoMessage));
+} catch {
+  // No storage: no pseudo-localisation.
+}
 
 /** The app's translator (reactive: it reads the language on screen at each call). */
 export const tr: Translator = {
@@ -53,7 +51,8 @@ export const tr: Translator = {
   ns<M extends Messages>(n: Namespace<string, M>): MessageFn<M> {
     return ((key: string, params?: Readonly<Record<string, string | number>>) => {
       const m = messageOf(n, key, lang() === "en" ? null : catalog());
-      return fill(pseudo && lang() === "en" ? pseudoMessage(m) : m, params, whole);
+      const p = lang() === "en" ? pseudo() : null;
+      return fill(p ? p(m) : m, params, whole);
     }) as MessageFn<M>;
   },
   num: appNumber,

@@ -79,3 +79,29 @@ describe("catalog parity", () => {
     expect(_dropped).toBe("Fährt an");
   });
 });
+
+describe("the words for a plan's codes", () => {
+  it("every verdict, reason, limit, rail condition and phase has its words in every language (no key falls through)", async () => {
+    const { wordsOf } = await import("../../src/i18n/words.js");
+    const { RAIL_CONDITIONS } = await import("../../src/core/physics/types.js");
+    const codes = {
+      verdict: ["starts", "marginal", "needs-assistance"] as const,
+      reason: ["adhesion", "power", "coupler", "distance", "brake"] as const,
+      limit: ["adhesion", "power", "brake-holding", "coupler-tension", "coupler-compression", "distance", "time-to-target"] as const,
+      phase: ["prepare", "stretch", "build", "accelerate"] as const,
+    };
+    for (const [lang, catalog] of [["en", null], ["hu", CATALOGS.hu], ["de", CATALOGS.de]] as const) {
+      const w = wordsOf(createTranslator(lang, catalog));
+      const all = [
+        ...codes.verdict.flatMap((v) => [w.verdict(v), w.verdictInline(v), w.verdictLine(v)]),
+        ...codes.reason.flatMap((r) => [w.reason(r), w.reasonLine(r)]),
+        ...codes.limit.map((l) => w.limit(l)),
+        ...RAIL_CONDITIONS.flatMap((r) => [w.rail(r), w.railInline(r)]),
+        ...codes.phase.flatMap((p) => [w.phase(p), w.phaseInline(p), w.phaseLine(p)]),
+      ];
+      // A key that is not in the catalog comes back as the key itself ("verdictStarts"): none may.
+      expect(all.filter((x) => /^[a-z]+[A-Z]/.test(x)), lang).toEqual([]);
+      expect(all.every((x) => x.length > 0)).toBe(true);
+    }
+  });
+});
