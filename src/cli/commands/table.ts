@@ -15,6 +15,10 @@ import type { Command } from "../command.js";
 import { JobPool } from "../batch/pool.js";
 import type { MassOutcome } from "../batch/jobs.js";
 import { csv, num, textTable } from "../table.js";
+import { cli } from "../../i18n/en/cli.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
+import { cliTr, cliWords } from "../lang.js";
+import { where } from "../render/assistance.js";
 import { wrap } from "../render/wrap.js";
 import { jobsOption, progressReporter } from "../options.js";
 import { existsSync } from "node:fs";
@@ -226,22 +230,35 @@ interface TableReport {
 }
 
 function renderTable(t: TableReport): string {
+  const say = cliTr().ns(cli);
+  const w = cliWords();
   const lines: string[] = [];
-  lines.push(`Load table — ${printable(t.location.name)}`);
-  const locos = t.locomotives.map((l) => `${l.count} × ${l.profile} ${typeof l.position === "string" ? `at the ${l.position}` : `after wagon ${(l.position as { afterWagon: number }).afterWagon}`}`).join(", ");
-  lines.push(`Locomotives: ${locos}`);
+  lines.push(say("tableTitle", { name: printable(t.location.name) }));
+  const locos = t.locomotives.map((l) => `${l.count} × ${l.profile} ${where(typeof l.position === "string" ? l.position : `after wagon ${(l.position as { afterWagon: number }).afterWagon}`)}`).join(", ");
+  lines.push(say("tableLocos", { list: locos }));
   const tr = t.train;
+  const source = tr.source === "referenceTrain" ? say("tableRefTrain", { train: tr.referenceTrain ?? "" }) : tr.source === "defaultReferenceTrain" ? say("tableDefaultTrain", { train: tr.referenceTrain ?? "" }) : "";
   lines.push(
-    `Train: ${tr.wagons} × ${tr.wagonType ?? "wagons"} (${num(tr.length_m)} m), slack ${num(tr.couplerSlack_mm)} mm, couplings ${num(tr.couplerLimit_kN)} kN, ${tr.bearing} bearings, ${num(tr.temperature_C)} °C; target ${num(tr.target_kmh)} km/h${tr.source === "referenceTrain" ? ` (the note's reference train, ${tr.referenceTrain})` : tr.source === "defaultReferenceTrain" ? ` (the note names no reference train: the first train preset, ${tr.referenceTrain}, as on the app's card)` : ""}`,
+    say("tableTrain", {
+      wagons: tr.wagons,
+      type: tr.wagonType ?? say("tableWagons"),
+      length: num(tr.length_m),
+      slack: num(tr.couplerSlack_mm),
+      limit: num(tr.couplerLimit_kN),
+      bearing: tr.bearing,
+      temperature: num(tr.temperature_C),
+      target: num(tr.target_kmh),
+    }) + source,
   );
   lines.push("");
-  lines.push("Largest trailing mass that starts, t:");
+  lines.push(say("tableHeading"));
   const by = (rail: string, sand: boolean) => t.rows.find((r) => r.rail === rail && r.sand === sand)!.maxTrailingMass_t;
   const rails = [...new Set(t.rows.map((r) => r.rail))];
+  const railWord = (r: string) => ((RAIL_CONDITIONS as readonly string[]).includes(r) ? w.railInline(r as RailCondition) : r);
   lines.push(
     textTable(
-      ["rail", "no sand", "sand"],
-      rails.map((rail) => [rail, massCell(by(rail, false)), massCell(by(rail, true))]),
+      [say("colRail"), say("colNoSand"), say("colSand")],
+      rails.map((rail) => [railWord(rail), massCell(by(rail, false)), massCell(by(rail, true))]),
     )
       .split("\n")
       .map((l) => `  ${l}`)
@@ -250,16 +267,16 @@ function renderTable(t: TableReport): string {
   const cap = t.wagonCapacity_t;
   const above = cap === undefined ? [] : t.rows.filter((r) => r.maxTrailingMass_t > cap);
   if (cap !== undefined && above.length > 0) {
-    lines.push(...wrap(`  Above what these wagons carry (${cap} t), so the wagons, not the locomotives, limit: ${above.map((r) => `${r.rail}${r.sand ? " with sand" : ""}`).join(", ")}.`, 100, "    "));
+    lines.push(...wrap(say("tableAbove", { capacity: num(cap), list: above.map((r) => `${railWord(r.rail)}${r.sand ? say("withSand") : ""}`).join(", ") }), 100, "    "));
   }
-  if (t.rows.some((r) => r.maxTrailingMass_t <= 0)) lines.push(`  "none": not even a light train of these wagons is expected to start in that condition with these locomotives.`);
+  if (t.rows.some((r) => r.maxTrailingMass_t <= 0)) lines.push(say("noneNote"));
   lines.push("");
-  lines.push("Cautions:");
+  lines.push(say("cautions"));
   for (const c of t.cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
   return lines.join("\n");
 }
 
 /** A mass cell as the app shows it: "none" when not even a light train starts (the JSON and CSV keep 0). */
 function massCell(t: number): string {
-  return t > 0 ? num(t) : "none";
+  return t > 0 ? num(t) : cliTr().ns(cli)("none");
 }
