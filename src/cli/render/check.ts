@@ -3,7 +3,9 @@ import type { DepartureRow } from "../batch/checkDepartures.js";
 import { CHECK_CSV_HEADER } from "../../profiles/csv.js";
 import { csv, num, textTable } from "../table.js";
 import { divideLine, optionLine } from "./assistance.js";
-import { cliWords } from "../lang.js";
+import { cliTr, cliWords } from "../lang.js";
+import { cli } from "../../i18n/en/cli.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
 import { wrap } from "./wrap.js";
 import { printable } from "../../profiles/text.js";
 
@@ -12,19 +14,20 @@ export function remedyText(r: DepartureRow): string {
   if (r.verdict === undefined || r.verdict === "starts") return "";
   if (r.assistance) return optionLine(r.assistance);
   if (r.divide) return divideLine(r.divide);
-  if (r.maxStartableMass_t !== undefined && r.maxStartableMass_t > 0) return `none found; less load: ${r.maxStartableMass_t} t or less starts`;
-  return "none found; see taut plan for what would change it";
+  const t = cliTr().ns(cli);
+  if (r.maxStartableMass_t !== undefined && r.maxStartableMass_t > 0) return t("lessLoad", { mass: num(r.maxStartableMass_t) });
+  return t("noneFound");
 }
 
 /** "1263 / 1650": the largest startable and at-least-marginal masses; "none" when not even a light train starts. */
 export function massesText(r: DepartureRow): string {
-  const t = (x: number | undefined) => (x === undefined ? "" : x > 0 ? num(x) : "none");
+  const t = (x: number | undefined) => (x === undefined ? "" : x > 0 ? num(x) : cliTr().ns(cli)("none"));
   const m = r.largestMarginalMass_t;
   return m !== undefined && m !== r.maxStartableMass_t ? `${t(r.maxStartableMass_t)} / ${t(m)}` : t(r.maxStartableMass_t);
 }
 
 function where(r: DepartureRow): string {
-  return r.line !== undefined ? `line ${r.line}` : r.index !== undefined ? `[${r.index}]` : "";
+  return r.line !== undefined ? cliTr().ns(cli)("rowLine", { line: r.line }) : r.index !== undefined ? `[${r.index}]` : "";
 }
 
 export interface CheckSummary {
@@ -49,19 +52,21 @@ export function summarise(rows: readonly DepartureRow[]): CheckSummary {
 }
 
 export function renderCheck(rows: readonly DepartureRow[], cautions: readonly string[]): string {
+  const t = cliTr().ns(cli);
+  const w = cliWords();
   const lines: string[] = [];
   const good = rows.filter((r) => !r.error);
   lines.push(
     textTable(
-      ["id", "row", "rail", "sand", "mass t", "verdict", "why", "margin", "largest t (starts / marginal)", "cheapest assistance"],
+      [t("colId"), t("colRow"), t("colRail"), t("colSand"), t("colMassT"), t("colVerdict"), t("colWhy"), t("colMargin"), t("colLargest"), t("colCheapest")],
       good.map((r) => [
         printable(r.id),
         where(r),
-        r.rail ?? "",
-        r.sand ? "yes" : "no",
+        r.rail !== undefined && (RAIL_CONDITIONS as readonly string[]).includes(r.rail) ? w.railInline(r.rail as RailCondition) : (r.rail ?? ""),
+        r.sand ? t("yes") : t("no"),
         num(r.trailingMass_t),
         cliWords().verdictInline(r.verdict!),
-        (r.reasons ?? []).join(", ") || "—",
+        (r.reasons ?? []).map((x) => w.reason(x)).join(", ") || "—",
         `${num(r.margin, 2)}${r.binding ? ` (${cliWords().limit(r.binding)})` : ""}`,
         massesText(r),
         remedyText(r) || "—",
@@ -71,18 +76,21 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
   const bad = rows.filter((r) => r.error);
   if (bad.length > 0) {
     lines.push("");
-    lines.push(`Rows not answered (${bad.length}):`);
+    lines.push(t("notAnswered", { count: bad.length }));
     for (const r of bad) lines.push(...wrap(`  - ${printable(r.error ?? "")}`, 110, "    "));
   }
   const s = summarise(rows);
   lines.push("");
   lines.push(
-    `${s.departures} departures: ${s.starts} start, ${s.marginal} marginal, ${s.needsAssistance} need assistance${s.badRows ? `, ${s.badRows} bad rows` : ""}${s.internalErrors ? `, ${s.internalErrors} failed` : ""}.`,
+    t("summary", { departures: s.departures, starts: s.starts, marginal: s.marginal, assist: s.needsAssistance }) +
+      (s.badRows ? t("summaryBad", { count: s.badRows }) : "") +
+      (s.internalErrors ? t("summaryFailed", { count: s.internalErrors }) : "") +
+      ".",
   );
-  lines.push("Margin: allowance ÷ demand of the limit that binds (a train starts when it is at least 1). Largest: the heaviest train of these wagons that starts, and that is at least marginal.");
-  if (rows.some((r) => r.searchCapped)) lines.push("Some assistance searches were cut short by their cap (marked in --json as searchCapped); `taut plan` on the case shows more.");
+  lines.push(t("checkMarginNote"));
+  if (rows.some((r) => r.searchCapped)) lines.push(t("checkCapped"));
   lines.push("");
-  lines.push("Cautions:");
+  lines.push(t("cautions"));
   for (const c of cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
   return lines.join("\n");
 }
