@@ -2,10 +2,10 @@
  * Numbers as each language writes them: the decimal sign and the grouping of thousands (CLDR, as
  * `Intl.NumberFormat` writes them for en-GB, hu and de — checked against it in tests/i18n/numbers.test.ts),
  * written here rather than through Intl, whose first use loads locale data for tens of milliseconds in the
- * middle of the app's load. Rounding is the one rule of src/profiles/numbers.ts (half away from zero on the
+ * middle of the app's load. Rounding is the one rule of rounding.ts (half away from zero on the
  * shortest decimal form), so every language shows the same digits.
  */
-import { fixedDigits } from "../profiles/numbers.js";
+import { fixedDigits } from "./rounding.js";
 import type { Lang } from "./language.js";
 
 export interface NumberStyle {

@@ -1,39 +1,5 @@
 /**
- * How a figure is rounded for people, in one place for the app and the command line: half away from zero,
- * decided on the number's shortest decimal form (as a person reading "1.005" expects "1.01"), not on its
- * binary value (which `toFixed` uses, giving "1.00" for 1.005). The app and `taut` then print the same
- * digits for the same figure.
+ * How a figure is rounded for people: the rule lives with the number formats of each language
+ * (src/i18n/rounding.ts); files and reports use it from here.
  */
-
-/** `|x|` rounded half away from zero to `d` decimals, as digits (no sign, no grouping). */
-export function fixedDigits(x: number, d: number): string {
-  const s = Math.abs(x).toString();
-  // An exponent form (below 1e-6 or from 1e21): no ties at the few decimals shown.
-  if (s.includes("e")) return Math.abs(x).toFixed(d);
-  const dot = s.indexOf(".");
-  const whole = dot < 0 ? s : s.slice(0, dot);
-  const frac = dot < 0 ? "" : s.slice(dot + 1);
-  if (frac.length <= d) return d === 0 ? whole : `${whole}.${frac.padEnd(d, "0")}`;
-  const digits = (whole + frac.slice(0, d)).split("");
-  if (frac.charCodeAt(d) >= 53 /* "5" */) {
-    let k = digits.length - 1;
-    while (k >= 0 && digits[k] === "9") digits[k--] = "0";
-    if (k >= 0) digits[k] = String(Number(digits[k]) + 1);
-    else digits.unshift("1");
-  }
-  const cut = digits.length - d;
-  return d === 0 ? digits.join("") : `${digits.slice(0, cut).join("")}.${digits.slice(cut).join("")}`;
-}
-
-/** `x` rounded half away from zero to `d` decimals (0 ≤ d ≤ 20), as a number. */
-export function roundHalfAway(x: number, d: number): number {
-  if (!Number.isFinite(x)) return x;
-  const v = Number(fixedDigits(x, Math.max(0, Math.min(20, Math.trunc(d)))));
-  return x < 0 && v !== 0 ? -v : v;
-}
-
-/** Plain text of a figure with `d` decimals ("-" for negatives, no grouping): the command line's form. */
-export function fixedText(x: number, d: number): string {
-  const body = fixedDigits(x, Math.max(0, Math.min(20, Math.trunc(d))));
-  return x < 0 && /[1-9]/.test(body) ? `-${body}` : body;
-}
+export { fixedDigits, fixedText, roundHalfAway } from "../i18n/rounding.js";

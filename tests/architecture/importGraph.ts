@@ -110,12 +110,13 @@ export const CORE_FOLDERS = ["physics", "train", "dynamics", "planner", "dispatc
  */
 export const LAYERS: Readonly<Record<string, readonly string[]>> = {
   core: [],
-  profiles: ["core"],
+  // Message catalogs, number formats and rounding per language, and the renderers of the core's codes,
+  // shared by files (English renderings in reports), the command line and the app.
+  i18n: ["core"],
+  profiles: ["core", "i18n"],
   // The workers carry no schema code: the app parses files and sends the core's SI form.
   worker: ["core"],
   notes: ["core", "profiles"],
-  // Message catalogs and the renderers of the core's codes, shared by the command line and the app.
-  i18n: ["core", "profiles"],
   cli: ["core", "profiles", "i18n"],
   app: ["core", "profiles", "worker", "notes", "i18n"],
 };
