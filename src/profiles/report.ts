@@ -2,7 +2,9 @@
  * Output shapes (INTERFACE.md "Output of taut plan"): the core's SI results expressed with units in
  * field names, rounded for people and scripts. Add fields freely; never rename.
  */
-import { caseCautions, STANDARD_CAUTIONS } from "../core/planner/cautions.js";
+import { caseCautions, STANDARD_CAUTIONS, type Caution } from "../core/planner/cautions.js";
+import { cautionText } from "../i18n/render.js";
+import { createTranslator } from "../i18n/translator.js";
 import type { PlanResult, PlanStep } from "../core/planner/types.js";
 import type { StaticCheck } from "../core/planner/staticCheck.js";
 import type { LimitCheck, LimitName, Reason, StartKind, Verdict } from "../core/planner/outcome.js";
@@ -138,7 +140,10 @@ export interface PlanReport {
   assistanceSearch?: AssistanceSearchReport;
   /** Verdict and margins for every rail condition, without and with sand (`taut plan --conditions`). */
   byCondition?: ConditionMarginReport[];
+  /** The cautions in English (the same in every language of the command line; `cautionCodes` carries them as codes). */
   cautions: string[];
+  /** The cautions as codes with their figures, in the order of `cautions`. */
+  cautionCodes: CautionReport[];
   /** What to do if the wheels slip (`driver`, in order), why (`protection`: what the locomotive does) and if the train stalls. */
   ifWheelsSlip?: { driver: string[]; protection: string[]; stall: string[] };
   /** The stretch as the dynamics run showed it. */
@@ -214,7 +219,8 @@ export function staticReport(c: StartCase, s: StaticCheck, maxStartableMassKg: n
     timeToTarget_s: null,
     maxStartableMass_t: Number.isFinite(maxStartableMassKg) ? Math.floor(maxStartableMassKg / 1000) : 0,
     assistance: [],
-    cautions: [...STANDARD_CAUTIONS, ...caseCautions(c, s.resistance.totalN)],
+    cautions: cautionsInEnglish([...STANDARD_CAUTIONS, ...caseCautions(c, s.resistance.totalN)]),
+    cautionCodes: [...STANDARD_CAUTIONS, ...caseCautions(c, s.resistance.totalN)].map(cautionReport),
   };
 }
 
@@ -238,6 +244,34 @@ export function stepReport(s: PlanStep): StepReport {
   };
 }
 
+/** A caution as a code, with its figures named with their units. */
+export interface CautionReport {
+  code: Caution["code"];
+  steps?: number;
+  standstill?: boolean;
+  hold_s?: number;
+}
+
+const ENGLISH = createTranslator("en", null);
+
+export function cautionReport(c: Caution): CautionReport {
+  if (c.code === "protection-acts") return { code: c.code, steps: c.steps, standstill: c.standstill };
+  if (c.code === "heating") return { code: c.code, hold_s: r(c.holdS, 0) };
+  return { code: c.code };
+}
+
+/** A caution back from its report (the command line writes the report's cautions in its language). */
+export function cautionOf(x: CautionReport): Caution {
+  if (x.code === "protection-acts") return { code: x.code, steps: x.steps ?? 1, standstill: x.standstill === true };
+  if (x.code === "heating") return { code: x.code, holdS: x.hold_s ?? 0 };
+  return { code: x.code };
+}
+
+/** The English text of the cautions, as reports carry them. */
+export function cautionsInEnglish(cs: readonly Caution[]): string[] {
+  return cs.map((c) => cautionText(ENGLISH, c));
+}
+
 /** The plan report (INTERFACE.md) from the planner's result. */
 export function planReport(c: StartCase, p: PlanResult, meta: PlanReport["case"] = {}): PlanReport {
   const rep = staticReport(c, p.static, p.maxStartableMassKg, meta);
@@ -255,7 +289,8 @@ export function planReport(c: StartCase, p: PlanResult, meta: PlanReport["case"]
   rep.steps = p.steps.map(stepReport);
   rep.peakCouplerForce_kN = kN(p.peakCouplerForceN);
   rep.timeToTarget_s = p.timeToTargetS === null ? null : r(p.timeToTargetS, 0);
-  rep.cautions = p.cautions;
+  rep.cautions = cautionsInEnglish(p.cautions);
+  rep.cautionCodes = p.cautions.map(cautionReport);
   rep.ifWheelsSlip = p.slipGuidance;
   rep.stretch = {
     lastVehicleMoves_s: p.stretch.lastVehicleMovesS === null ? null : r(p.stretch.lastVehicleMovesS, 1),

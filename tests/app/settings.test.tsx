@@ -12,7 +12,11 @@ describe("Settings", () => {
     renderWithApp(() => <Settings />);
     expect(screen.getByText(/Default 1\.2: it leaves room/)).toBeTruthy();
     expect(screen.getByText(/Default 10 %: real adhesion scatters/)).toBeTruthy();
-    for (const c of STANDARD_CAUTIONS) expect(screen.getByText(c)).toBeTruthy();
+    expect(STANDARD_CAUTIONS.length).toBe(4);
+    expect(screen.getByText(/^Advisory only\. Operating rules, timetables/)).toBeTruthy();
+    expect(screen.getByText(/^Decisions on assistance, dividing the train/)).toBeTruthy();
+    expect(screen.getByText(/^Adhesion is statistical/)).toBeTruthy();
+    expect(screen.getByText(/^Plan and brief before departure/)).toBeTruthy();
     expect(screen.getByText(/Curtius and A\. Kniffler/)).toBeTruthy();
   });
 

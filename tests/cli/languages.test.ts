@@ -9,6 +9,9 @@ import { cli } from "../../src/i18n/en/cli.js";
 import { cliDe } from "../../src/i18n/de/cli.js";
 import { cliHu } from "../../src/i18n/hu/cli.js";
 import { taut, tautWithEnv } from "../tools/cli.js";
+import { cautions } from "../../src/i18n/en/cautions.js";
+import { cautionsDe } from "../../src/i18n/de/cautions.js";
+import { cautionsHu } from "../../src/i18n/hu/cautions.js";
 
 /** The figures of a printout, as numbers, in order (a decimal comma read as a point). */
 function figures(text: string): number[] {
@@ -41,6 +44,11 @@ describe("taut in Hungarian and German", () => {
     expect(rows(hu.stdout)).toEqual(rows(en.stdout));
     expect(rows(de.stdout).length).toBeGreaterThan(0);
     expect(rows(de.stdout)).toEqual(rows(en.stdout));
+    // The cautions (codes from the planner) in each language: the first words of the advisory-only caution.
+    const start = (x: string) => x.split(" ").slice(0, 4).join(" ");
+    expect(hu.stdout).toContain(start(cautionsHu.advisory));
+    expect(de.stdout).toContain(start(cautionsDe.advisory));
+    expect(en.stdout).toContain(start(cautions.en.advisory));
   });
 
   it("--json is the same in every language (LANG, LC_ALL or --lang)", async () => {

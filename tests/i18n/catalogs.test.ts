@@ -105,3 +105,23 @@ describe("the words for a plan's codes", () => {
     }
   });
 });
+
+describe("the cautions, from the core's codes", () => {
+  it("every caution code has its words in every language, with its figures", async () => {
+    const { cautionText } = await import("../../src/i18n/render.js");
+    const all = [
+      ...(["advisory", "decisions", "statistical", "brief", "falling-grade", "loco-brake-cannot-hold", "sand-points", "rising-grade", "sharp-curve"] as const).map((code) => ({ code })),
+      { code: "protection-acts" as const, steps: 3, standstill: true },
+      { code: "heating" as const, holdS: 75.4 },
+    ];
+    for (const [lang, catalog] of [["en", null], ["hu", CATALOGS.hu], ["de", CATALOGS.de]] as const) {
+      const tr = createTranslator(lang, catalog);
+      const texts = all.map((c) => cautionText(tr, c));
+      expect(new Set(texts).size, lang).toBe(texts.length);
+      expect(texts.every((x) => x.length > 40 && !/[{}]/.test(x)), lang).toBe(true);
+      // The figures reach the words: three steps, 75 s.
+      expect(texts[9], lang).toMatch(/\b3\b/);
+      expect(texts[10], lang).toMatch(/\b75\b/);
+    }
+  });
+});

@@ -1,5 +1,6 @@
 /** `taut check DEPARTURES.csv|json` — a day's departures checked at once, in parallel worker threads. */
 import { STANDARD_CAUTIONS } from "../../core/planner/cautions.js";
+import { cautionsInEnglish } from "../../profiles/report.js";
 import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "../errors.js";
 import { library, readNotesFiles } from "../files.js";
 import type { Command } from "../command.js";
@@ -106,7 +107,7 @@ export const checkCommand: Command = {
       maxMassSearch_ms: Math.round(Math.max(0, ...stats.massMs)),
       threadWork_s: Math.round([...stats.checkMs, ...stats.massMs].reduce((a, b) => a + b, 0) / 100) / 10,
     };
-    if (values.json) io.out(JSON.stringify({ schema: "taut/departures-check@1", file: path, order: sort, departures: rows, summary, cautions: STANDARD_CAUTIONS }, null, 2));
+    if (values.json) io.out(JSON.stringify({ schema: "taut/departures-check@1", file: path, order: sort, departures: rows, summary, cautions: cautionsInEnglish(STANDARD_CAUTIONS) }, null, 2));
     else if (values.csv) io.out(checkCsv(rows));
     else io.out(renderCheck(rows, STANDARD_CAUTIONS));
     if (!values.quiet) io.err(`taut check: ${shard ? `shard ${shard.k}/${shard.n}, ` : ""}${rows.length} departures${shard ? ` of ${all.length}` : ""} in ${summary.elapsed_s} s (${jobs} worker${jobs === 1 ? "" : "s"}; ${stats.checks} distinct checks, ${stats.massSearches} mass searches)`);

@@ -1,5 +1,7 @@
 /** `taut table LOCATION.json --loco ID` — the load table of a location: largest startable mass per rail condition. */
 import { STANDARD_CAUTIONS } from "../../core/planner/cautions.js";
+import { cautionsInEnglish } from "../../profiles/report.js";
+import { cautionText } from "../../i18n/render.js";
 import { loadTableCells, type LoadTableRow } from "../../core/dispatch/loadTable.js";
 import type { StartCase } from "../../core/train/types.js";
 import { referenceCaseFile, referenceOf, DEFAULT_REFERENCE_TEMPERATURE_C } from "../../profiles/referenceTrain.js";
@@ -123,7 +125,7 @@ export const tableCommand: Command = {
       ...(built.capacityT !== null ? { wagonCapacity_t: built.capacityT } : {}),
       rows: out,
       elapsed_s: elapsedS,
-      cautions: STANDARD_CAUTIONS,
+      cautions: cautionsInEnglish(STANDARD_CAUTIONS),
     };
     if (values.json) io.out(JSON.stringify(table, null, 2));
     else if (values.csv) io.out(csv(["rail", "sand", "maxTrailingMass_t"], out.map((r) => [r.rail, r.sand, r.maxTrailingMass_t])));
@@ -272,7 +274,8 @@ function renderTable(t: TableReport): string {
   if (t.rows.some((r) => r.maxTrailingMass_t <= 0)) lines.push(say("noneNote"));
   lines.push("");
   lines.push(say("cautions"));
-  for (const c of t.cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
+  // The JSON carries the cautions in English; the printout in the run's language.
+  for (const c of STANDARD_CAUTIONS) lines.push(...wrap(`  - ${cautionText(cliTr(), c)}`, 100, "    "));
   return lines.join("\n");
 }
 

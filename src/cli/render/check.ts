@@ -5,6 +5,8 @@ import { csv, num, textTable } from "../table.js";
 import { divideLine, optionLine } from "./assistance.js";
 import { cliTr, cliWords } from "../lang.js";
 import { cli } from "../../i18n/en/cli.js";
+import { cautionText } from "../../i18n/render.js";
+import type { Caution } from "../../core/planner/cautions.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
 import { wrap } from "./wrap.js";
 import { printable } from "../../profiles/text.js";
@@ -51,7 +53,7 @@ export function summarise(rows: readonly DepartureRow[]): CheckSummary {
   };
 }
 
-export function renderCheck(rows: readonly DepartureRow[], cautions: readonly string[]): string {
+export function renderCheck(rows: readonly DepartureRow[], cautions: readonly Caution[]): string {
   const t = cliTr().ns(cli);
   const w = cliWords();
   const lines: string[] = [];
@@ -91,7 +93,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly st
   if (rows.some((r) => r.searchCapped)) lines.push(t("checkCapped"));
   lines.push("");
   lines.push(t("cautions"));
-  for (const c of cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
+  for (const c of cautions) lines.push(...wrap(`  - ${cautionText(cliTr(), c)}`, 100, "    "));
   return lines.join("\n");
 }
 

@@ -1,5 +1,6 @@
 /** The readable form of a plan: verdict first, then the figures and a numbered step table. */
-import type { PlanReport } from "../../profiles/report.js";
+import { cautionOf, type PlanReport } from "../../profiles/report.js";
+import { cautionText } from "../../i18n/render.js";
 import type { LimitName } from "../../core/planner/outcome.js";
 import { cli } from "../../i18n/en/cli.js";
 import { cliTr, cliWords } from "../lang.js";
@@ -94,7 +95,7 @@ export function renderPlan(p: PlanReport): string {
   lines.push(...renderConditions(p.byCondition ?? []));
   lines.push("");
   lines.push(t("cautions"));
-  for (const c of p.cautions) lines.push(...wrap(`  - ${c}`, 100, "    "));
+  for (const c of p.cautionCodes) lines.push(...wrap(`  - ${cautionText(cliTr(), cautionOf(c))}`, 100, "    "));
   return lines.join("\n");
 }
 

@@ -1,17 +1,34 @@
 /**
  * Cautions shown with every result (PRACTICE.md "Cautions the tool must show"), plus the ones a
- * particular case calls for. Plain words, our own.
+ * particular case calls for. The core gives each as a code with its figures (SI); the words, our own, are
+ * in the message catalogs (src/i18n/en/notes.ts and its translations) and rendered where they are shown.
  */
 import { gradeAt } from "../physics/track.js";
 import type { StartCase } from "../train/types.js";
 
-/** Shown with every plan, card and table. */
-export const STANDARD_CAUTIONS: readonly string[] = [
-  "Advisory only. Operating rules, timetables, special and local instructions, the locomotive's own instructions and the driver's judgement always prevail. Taut never authorises a movement.",
-  "Decisions on assistance, dividing the train or reducing the load belong to those your railway's rules name.",
-  "Adhesion is statistical and every figure here is an estimate with wide uncertainty: read the margins, not a single 'safe' number.",
-  "Plan and brief before departure. Use of a device in the cab follows local rules; nothing here needs input while the train moves.",
-];
+/** A caution: a code, and the figures its words quote. */
+export type Caution =
+  | {
+      code:
+        | "advisory"
+        | "decisions"
+        | "statistical"
+        | "brief"
+        | "falling-grade"
+        | "loco-brake-cannot-hold"
+        | "sand-points"
+        | "rising-grade"
+        | "sharp-curve";
+    }
+  /** The slip protection is expected to act in `steps` steps; `standstill`: one of them is at a standstill. */
+  | { code: "protection-acts"; steps: number; standstill: boolean }
+  /** Traction current above the continuous rating at low speed for up to `holdS` seconds. */
+  | { code: "heating"; holdS: number };
+
+export type CautionCode = Caution["code"];
+
+/** Shown with every plan, card and table: advisory only, who decides, figures are estimates, plan before departure. */
+export const STANDARD_CAUTIONS: readonly Caution[] = [{ code: "advisory" }, { code: "decisions" }, { code: "statistical" }, { code: "brief" }];
 
 /** How the start is made, where the case's cautions depend on it. */
 export interface StartHow {
@@ -21,24 +38,19 @@ export interface StartHow {
 }
 
 /** Extra cautions for this case. */
-export function caseCautions(c: StartCase, totalResistanceN: number, how?: StartHow): string[] {
-  const out: string[] = [];
+export function caseCautions(c: StartCase, totalResistanceN: number, how?: StartHow): Caution[] {
+  const out: Caution[] = [];
+  // A falling grade: control the start with the brakes; where the locomotive brake alone cannot hold the
+  // released train, it is held on the train brake (graduated release only where the brake allows it).
   if (totalResistanceN < 0 || how?.kind === "gravity") {
-    out.push("On this falling grade the train will move when its brakes release: control the start with the brakes, not with power.");
-    if (how && !how.locoBrakeHolds) {
-      out.push(
-        "The locomotive brake alone cannot hold this train here: a heavy train on a falling grade is held on the train brake. Ease the train brake in stages only where it allows graduated release; a brake that releases fully once released (direct release) cannot be eased that way: follow the local instructions for starting on this grade.",
-      );
-    }
+    out.push({ code: "falling-grade" });
+    if (how && !how.locoBrakeHolds) out.push({ code: "loco-brake-cannot-hold" });
   }
-  if (c.conditions.sand) {
-    out.push("Do not sand over points or crossings; heavy sanding can insulate track circuits. Check the sand boxes before departure.");
-  }
-  if (gradeAt(c.location.track, c.location.frontAtM - 1) >= 5) {
-    out.push("Rising grade: hold on the locomotive brake in a low notch while the train brake releases; do not start by first bunching the slack.");
-  }
-  if (c.location.track.segments.some((g) => g.curveRadiusM > 0 && g.curveRadiusM < 300)) {
-    out.push("Sharp curve under or ahead of the train: take power one notch at a time; a sudden pull can lift light wagons off the inside rail.");
-  }
+  // Sand: never over points or crossings (track circuits); check the sand boxes.
+  if (c.conditions.sand) out.push({ code: "sand-points" });
+  // Rising grade: hold on the locomotive brake in a low notch; do not bunch the slack first.
+  if (gradeAt(c.location.track, c.location.frontAtM - 1) >= 5) out.push({ code: "rising-grade" });
+  // A sharp curve: one notch at a time; a sudden pull can lift light wagons off the inside rail.
+  if (c.location.track.segments.some((g) => g.curveRadiusM > 0 && g.curveRadiusM < 300)) out.push({ code: "sharp-curve" });
   return out;
 }

@@ -3,7 +3,7 @@
  * The verdict, its margin and the plan come from the one decision (decision.ts); this module turns them
  * into what a driver and a dispatcher read: steps, cautions, the slip card, the largest masses, advice.
  */
-import { caseCautions, STANDARD_CAUTIONS } from "./cautions.js";
+import { caseCautions, STANDARD_CAUTIONS, type Caution } from "./cautions.js";
 import { modelFromCase } from "../train/trainModel.js";
 import { sequenceControls, simulate } from "../dynamics/simulate.js";
 import { sensitivity } from "./sensitivity.js";
@@ -142,13 +142,12 @@ function advice(c: StartCase, d: Decision, masses: { startsKg: number; marginalK
 }
 
 /** Where the plan counts on the slip protection, what that costs. */
-function protectionCautions(steps: readonly PlanStep[]): string[] {
+function protectionCautions(steps: readonly PlanStep[]): Caution[] {
   const acting = steps.filter((s) => s.protectionActs);
   if (acting.length === 0) return [];
-  const standstill = acting.some((s) => s.phase === "stretch" || s.phase === "prepare");
-  return [
-    `In ${acting.length === 1 ? "one step" : `${acting.length} steps`} the notch asks for more than the rail may give: the slip protection is expected to act (it trims the effort to what the rails give and reapplies). Expect repeated slips there; hold the notch and sand while it copes, and drop a notch only if the slipping keeps returning.${standstill ? " At a standstill never let the wheels spin: it burns the rail and the wheels." : ""}`,
-  ];
+  // Expect repeated slips in those steps: hold the notch and sand while the protection copes; at a
+  // standstill never let the wheels spin.
+  return [{ code: "protection-acts", steps: acting.length, standstill: acting.some((s) => s.phase === "stretch" || s.phase === "prepare") }];
 }
 
 /** Longest a plan may hold current above the continuous rating at low speed before we say so, s [M]. */
@@ -159,16 +158,15 @@ const HEATING_WARN_S = 60;
  * keep power on a standing locomotive longer than needed). Flag steps that hold effort above the continuous
  * rating below the continuous speed for long.
  */
-function heatingCautions(ctx: PlannerContext, steps: PlanStep[]): string[] {
+function heatingCautions(ctx: PlannerContext, steps: PlanStep[]): Caution[] {
   const spec = ctx.model.locoSpecs[0];
   if (!spec) return [];
   const perUnitContinuous = spec.continuousTractiveEffortN * ctx.model.nl;
   const hot = steps.filter((s) => s.notch > 0 && s.tractiveEffortN > perUnitContinuous && s.speedMps < spec.continuousSpeedMps && s.advanceWhen.afterS > HEATING_WARN_S);
   if (hot.length === 0) return [];
   const longest = Math.max(...hot.map((s) => s.advanceWhen.afterS));
-  return [
-    `The plan holds traction current above the continuous rating at low speed for up to ${Math.round(longest)} s: keep within the locomotive's short-time ratings and do not hold power on a train that is not moving.`,
-  ];
+  // Keep within the locomotive's short-time ratings; do not hold power on a train that is not moving.
+  return [{ code: "heating", holdS: longest }];
 }
 
 /** Does this case start? Exactly the plan's verdict, with no more work than that needs. */

@@ -2,6 +2,7 @@
  * What the start planner returns, in SI. The CLI turns it into the INTERFACE.md JSON; the app formats
  * it for display in the chosen units.
  */
+import type { Caution } from "./cautions.js";
 import type { StaticCheck } from "./staticCheck.js";
 import type { LimitCheck, LimitName, Reason, StartKind, Verdict } from "./outcome.js";
 
@@ -108,7 +109,8 @@ export interface PlanResult {
   /** The masses' search ceiling (250 t a wagon): a largest mass equal to it means no limit below it. */
   massSearchCeilingKg: number;
   slipGuidance: SlipGuidance;
-  cautions: string[];
+  /** Codes with their figures; the words are in the message catalogs (src/i18n). */
+  cautions: Caution[];
   series: PlanSeries;
   /**
    * The plan's notch timing re-run on the median rail (a better rail than the plan assumes passes more of

@@ -7,6 +7,7 @@ import { stepsDe } from "./steps.js";
 import { planDe } from "./plan.js";
 import { inputsDe } from "./inputs.js";
 import { dispatchDe } from "./dispatch.js";
+import { cautionsDe } from "./cautions.js";
 import { wordsDe } from "./words.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe };

@@ -1,5 +1,6 @@
 /** Every English namespace: the one list the catalog checks walk (tests/i18n) — add a new namespace here. */
 import { card } from "./card.js";
+import { cautions } from "./cautions.js";
 import { cli } from "./cli.js";
 import { dispatch } from "./dispatch.js";
 import { inputs } from "./inputs.js";
@@ -9,4 +10,4 @@ import { shell } from "./shell.js";
 import { steps } from "./steps.js";
 import { words } from "./words.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cli] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli] as const;

@@ -12,6 +12,7 @@
 import { words } from "../../words.js";
 import { For, Show, type JSX } from "solid-js";
 import { STANDARD_CAUTIONS } from "../../../core/planner/cautions.js";
+import { cautionWords } from "../../cautions.js";
 import type { LoadTableRow } from "../../../core/dispatch/loadTable.js";
 import type { RailCondition } from "../../../core/physics/types.js";
 import { latestRevision } from "../../../profiles/notes.js";
@@ -228,7 +229,7 @@ export function Card(props: CardProps): JSX.Element {
       <section class="card-cautions">
         <h3>{t("cautions")}</h3>
         <ul>
-          <For each={STANDARD_CAUTIONS}>{(c) => <li>{c}</li>}</For>
+          <For each={STANDARD_CAUTIONS}>{(c) => <li>{cautionWords(c)}</li>}</For>
         </ul>
       </section>
 

@@ -1,6 +1,7 @@
 /** Settings: units, theme, safety settings with their defaults explained, the moving lock, offline, About. */
 import { createEffect, createSignal, For, Show, type JSX } from "solid-js";
 import { STANDARD_CAUTIONS } from "../../../core/planner/cautions.js";
+import { cautionWords } from "../../cautions.js";
 import { Icon } from "../../components/Icon.js";
 import { QuantityField } from "../../components/QuantityField.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
@@ -171,7 +172,7 @@ export function SettingsView(props: SettingsViewProps): JSX.Element {
         <p>{t("aboutText", { version: props.version })}</p>
         <h3>{t("cautions")}</h3>
         <ul>
-          <For each={STANDARD_CAUTIONS}>{(c) => <li>{c}</li>}</For>
+          <For each={STANDARD_CAUTIONS}>{(c) => <li>{cautionWords(c)}</li>}</For>
         </ul>
         <h3>{t("demoData")}</h3>
         <p>{t("demoDataText")}</p>

@@ -22,6 +22,7 @@ import type { FieldIssue } from "../../../profiles/issues.js";
 import { duration, localiseText, margin, percent, percentOf, show, showAtMost, showForce, type UnitSystem } from "../../format.js";
 import type { RunStatus } from "../../state/createPlanRun.js";
 import { StepCard } from "./StepCard.js";
+import { cautionWords } from "../../cautions.js";
 import { plan } from "../../../i18n/en/plan.js";
 import { appNumber, tr } from "../../i18n.js";
 
@@ -325,7 +326,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
           <section class="panel cautions" aria-labelledby="cautions-h">
             <h2 id="cautions-h">{t("cautions")}</h2>
             <ul>
-              <For each={res().cautions}>{(c) => <li>{localiseText(c, props.units)}</li>}</For>
+              <For each={res().cautions}>{(c) => <li>{localiseText(cautionWords(c), props.units)}</li>}</For>
             </ul>
           </section>
         )}
