@@ -46,8 +46,8 @@ describe("taut in Hungarian and German", () => {
     expect(rows(de.stdout)).toEqual(rows(en.stdout));
     // The cautions (codes from the planner) in each language: the first words of the advisory-only caution.
     const start = (x: string) => x.split(" ").slice(0, 4).join(" ");
-    expect(hu.stdout).toContain(start(cautionsHu.advisory));
-    expect(de.stdout).toContain(start(cautionsDe.advisory));
+    expect(hu.stdout).toContain(start(cautionsHu.advisory as string));
+    expect(de.stdout).toContain(start(cautionsDe.advisory as string));
     expect(en.stdout).toContain(start(cautions.en.advisory));
   });
 

@@ -9,7 +9,7 @@ export const cautionsDe = translation<typeof cautions.en>()({
   brief: "Vor der Abfahrt planen und einweisen. Die Gerätenutzung im Führerstand folgt den örtlichen Regeln; während der Fahrt braucht hier nichts eine Eingabe.",
   fallingGrade: "In diesem Gefälle setzt sich der Zug in Bewegung, sobald seine Bremsen lösen: die Anfahrt mit den Bremsen steuern, nicht mit Zugkraft.",
   locoBrakeCannotHold:
-    "Die Lokbremse allein hält diesen Zug hier nicht: ein schwerer Zug im Gefälle wird mit der Zugbremse gehalten. Die Zugbremse nur dort stufenweise lösen, wo sie stufenweise lösbar ist; eine Bremse, die einmal gelöst ganz löst (einlösig), lässt sich so nicht lösen: die örtlichen Anweisungen für das Anfahren in diesem Gefälle befolgen.",
+    "Die Lokbremse allein hält diesen Zug hier nicht: ein schwerer Zug im Gefälle wird mit der Zugbremse gehalten. Die Zugbremse nur dort stufenweise lösen, wo sie stufenweise lösbar ist; eine Bremse, die einmal gelöst vollständig löst (einlösig), lässt sich so nicht lösen: die örtlichen Anweisungen für das Anfahren in diesem Gefälle befolgen.",
   sandPoints: "Nicht über Weichen oder Kreuzungen sanden; starkes Sanden kann Gleisstromkreise isolieren. Die Sandkästen vor der Abfahrt prüfen.",
   risingGrade: "Steigung: mit der Lokbremse in einer niedrigen Fahrstufe halten, während die Zugbremse löst; nicht anfahren, indem der Zug zuerst zusammengedrückt wird.",
   sharpCurve: "Enger Bogen unter oder vor dem Zug: Zugkraft Stufe für Stufe aufschalten; ein plötzlicher Ruck kann leichte Wagen von der Innenschiene heben.",
