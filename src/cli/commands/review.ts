@@ -1,7 +1,10 @@
 /** `taut review CASE.json RECORDING.gpx|.csv [--json]` — a recorded start held against its plan (Start review). */
 import { reviewStart, RecordingRejected, type StartReviewResult } from "../../core/dispatch/index.js";
 import { readRecording, RecordingFileError, problemText, type ReadRecording } from "../../profiles/recording.js";
-import { reviewReport, VERDICT_WORDS, type ReviewReport } from "../../profiles/reviewReport.js";
+import { reviewReport, type ReviewReport } from "../../profiles/reviewReport.js";
+import { cli } from "../../i18n/en/cli.js";
+import { cliTr, cliWords } from "../lang.js";
+import type { Verdict } from "../../core/planner/outcome.js";
 import { InputError } from "../errors.js";
 import { library, pathText, readStartCase, readText } from "../files.js";
 import type { Command } from "../command.js";
@@ -9,16 +12,18 @@ import { num } from "../table.js";
 import { wrap } from "../render/wrap.js";
 
 export function renderReview(rep: ReviewReport): string {
+  const t = cliTr().ns(cli);
+  const r = rep.recording;
   return [
-    `Recording: ${rep.recording.kind.toUpperCase()}, ${rep.recording.samples} samples over ${num(rep.recording.duration_s, 0)} s${rep.recording.notchLogged ? ", notch logged" : ""}${rep.recording.currentLogged ? ", current logged" : ""}`,
-    ...rep.recording.notices.map((n) => `  ${n}`),
-    `Planned verdict: ${VERDICT_WORDS[rep.planned.verdict]}`,
+    t("reviewRecording", { kind: r.kind.toUpperCase(), samples: r.samples, duration: num(r.duration_s, 0) }) + (r.notchLogged ? t("reviewNotchLogged") : "") + (r.currentLogged ? t("reviewCurrentLogged") : ""),
+    ...r.notices.map((n) => `  ${n}`),
+    t("reviewPlanned", { verdict: cliWords().verdictInline(rep.planned.verdict as Verdict) }),
     "",
     ...rep.summary.flatMap((s) => wrap(s, 100, "  ")),
     "",
-    `Fit: ${rep.fit.samples} samples compared, speed difference ${num(rep.fit.rms_kmh, 2)} km/h (root mean square), ${rep.fit.runs} re-simulations on the median rail.`,
-    "Observed factors are evidence from one start; use them as observed, beside the model, never in its place.",
-    "Advisory only: operating rules, local instructions and the locomotive's own instructions prevail.",
+    t("reviewFit", { samples: rep.fit.samples, rms: num(rep.fit.rms_kmh, 2), runs: rep.fit.runs }),
+    t("reviewEvidence"),
+    t("reviewAdvisory"),
   ].join("\n");
 }
 

@@ -108,6 +108,14 @@ export const cli = namespace("cli", {
   checkCapped: "Some assistance searches were cut short by their cap (marked in --json as searchCapped); `taut plan` on the case shows more.",
   lessLoad: "none found; less load: {mass} t or less starts",
   noneFound: "none found; see taut plan for what would change it",
+  // taut review.
+  reviewRecording: "Recording: {kind}, {samples} samples over {duration} s",
+  reviewNotchLogged: ", notch logged",
+  reviewCurrentLogged: ", current logged",
+  reviewPlanned: "Planned verdict: {verdict}",
+  reviewFit: "Fit: {samples} samples compared, speed difference {rms} km/h (root mean square), {runs} re-simulations on the median rail.",
+  reviewEvidence: "Observed factors are evidence from one start; use them as observed, beside the model, never in its place.",
+  reviewAdvisory: "Advisory only: operating rules, local instructions and the locomotive's own instructions prevail.",
   // The frame.
   topTitle: "taut — starting advisor for heavy trains (advisory only: operating rules, local instructions",
   topTitle2: "and the locomotive's own instructions prevail)",
