@@ -1,6 +1,7 @@
 /** Build the app's state from its parts (the browser wiring in launch.tsx; fakes in tests). */
 import { createEffect, createMemo, on } from "solid-js";
 import type { PlanResult } from "../core/planner/types.js";
+import type { StartCase } from "../core/train/types.js";
 import type { PlannerClient } from "../worker/client.js";
 import { createBrowserPlannerPool, type PlannerPool } from "../worker/pool.js";
 import type { AppContextValue } from "./context.js";
@@ -29,6 +30,8 @@ export interface AppDeps {
   onFirstPlan?: (workerMs: number, fromBuild: boolean) => void;
   /** A plan worked out at build time for the first request (see createPlanRun's `initial`). */
   firstPlan?: { key: string; result: PlanResult };
+  /** The demo case checked at build time: the draft's JSON text and the case (see createCaseDraft). */
+  prechecked?: { caseJson: string; value: StartCase };
   geolocation?: Geolocation;
   /** Workers for batch work (default: the browser's pool, started on first use). */
   pool?: PlannerPool;
@@ -55,14 +58,20 @@ function installDeviceNotesLater(): void {
 export function createAppState(deps: AppDeps): AppContextValue {
   const settings = createSettings(deps.storage === undefined ? undefined : deps.storage);
   const locations = createLocations();
-  const draft = createCaseDraft({ library: locations.library, settings: settings.settings, ...(deps.storage !== undefined ? { storage: deps.storage } : {}) });
+  const draft = createCaseDraft({
+    library: locations.library,
+    settings: settings.settings,
+    ...(deps.storage !== undefined ? { storage: deps.storage } : {}),
+    ...(deps.prechecked ? { prechecked: deps.prechecked } : {}),
+  });
   // The service worker registers once the first plan is on screen (or after a few seconds without one).
   let firstShown!: () => void;
   const firstPlanShown = new Promise<void>((resolve) => (firstShown = resolve));
   const fallback = setTimeout(() => firstShown(), 5000);
+  // undefined while the draft's checker loads: the plan waits rather than calling the inputs invalid.
   const validCase = createMemo(() => {
     const c = draft.checked();
-    return c.ok ? c.value : null;
+    return c.ok ? c.value : "pending" in c ? undefined : null;
   });
   const run = createPlanRun({
     client: deps.planner,

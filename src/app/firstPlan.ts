@@ -14,14 +14,20 @@ import { planStart } from "../core/planner/plan.js";
 import type { PlanResult } from "../core/planner/types.js";
 import { DEFAULT_SETTINGS } from "../core/train/types.js";
 import { builtinCases, builtinLibrary, DEMO_CASE_ID } from "../profiles/builtin.js";
-import { encodePlan } from "./planCodec.js";
+import { encodeExact, encodePlan } from "./planCodec.js";
 import { draftFromFile, draftToFile } from "./state/caseDraft.js";
 import { validateDraft } from "./state/validateDraft.js";
 
-/** What the build embeds: the request's key (the case as the plan run keys it) and the plan, as text. */
+/**
+ * What the build embeds: the request's key (the case as the plan run keys it), the plan, and the demo
+ * case as the Start plan draft writes it with the checked case it resolves to (so the page need not load
+ * the schemas to know the demo is valid), as text.
+ */
 export interface FirstPlanData {
   key: string;
   plan: string;
+  caseJson: string;
+  startCase: string;
 }
 
 /** The options of the page's first plan request (createPlanRun): a quick plan, nothing else. */
@@ -38,10 +44,19 @@ export function computeFirstPlan(): FirstPlanData {
   const lib = builtinLibrary();
   const file = builtinCases.find((c) => c.id === DEMO_CASE_ID) ?? builtinCases[0]!;
   const draft = draftFromFile(file, (id) => lib.wagons.get(id)?.coupling);
-  const json = draftToFile(draft, { couplerSafetyFactor: DEFAULT_SETTINGS.couplerSafetyFactor, slipRiskThreshold: DEFAULT_SETTINGS.slipRiskThreshold });
+  const json = draftToFile(draft, {
+    couplerSafetyFactor: DEFAULT_SETTINGS.couplerSafetyFactor,
+    slipRiskThreshold: DEFAULT_SETTINGS.slipRiskThreshold,
+    marginalSlipRisk: DEFAULT_SETTINGS.marginalSlipRisk,
+  });
   const checked = validateDraft(json, draft, lib);
   if (!checked.ok) throw new Error(`the built-in demo case does not validate: ${JSON.stringify(checked.issues)}`);
-  return { key: JSON.stringify(checked.value), plan: encodePlan(withoutSeries(planStart(checked.value, { ...FIRST_PLAN_OPTIONS }))) };
+  return {
+    key: JSON.stringify(checked.value),
+    plan: encodePlan(withoutSeries(planStart(checked.value, { ...FIRST_PLAN_OPTIONS }))),
+    caseJson: JSON.stringify(json),
+    startCase: encodeExact(checked.value),
+  };
 }
 
 const VIRTUAL_ID = "virtual:taut/first-plan";

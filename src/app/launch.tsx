@@ -18,7 +18,8 @@ import { createBrowserPlannerClient, createPlannerClient, type WorkerLike } from
 import { App } from "./App.js";
 import { holdChartsUntil } from "./components/Chart.js";
 import { createAppState } from "./createAppState.js";
-import { decodePlan } from "./planCodec.js";
+import { decodeExact, decodePlan } from "./planCodec.js";
+import type { StartCase } from "../core/train/types.js";
 import { preloadScreens, SCREENS } from "./screens/registry.js";
 import { registerSW } from "./sw/register.js";
 import { resolveLanguage, setAppLanguage } from "./i18n.js";
@@ -54,6 +55,7 @@ export async function launch(firstWorker: Worker): Promise<void> {
       registerSW,
       screenIds: SCREENS.map((s) => s.id),
       firstPlan: { key: firstPlan.key, result: decodePlan(firstPlan.plan) },
+      prechecked: { caseJson: firstPlan.caseJson, value: decodeExact(firstPlan.startCase) as StartCase },
       // The time from load to the first plan on screen (and the planner's share), for the browser checks:
       // the build-time plan when the first case is the demo, then the live one.
       onFirstPlan: (workerMs, fromBuild) =>

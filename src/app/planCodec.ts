@@ -10,7 +10,17 @@ const NUM = "$num";
 
 /** JSON text of a plan. */
 export function encodePlan(plan: PlanResult): string {
-  return JSON.stringify(plan, (_key, value: unknown) => {
+  return encodeExact(plan);
+}
+
+/** The plan back from `encodePlan`'s text. */
+export function decodePlan(text: string): PlanResult {
+  return decodeExact(text) as PlanResult;
+}
+
+/** JSON text of any value made of plain objects, arrays, numbers (any double), strings and Float64Arrays. */
+export function encodeExact(x: unknown): string {
+  return JSON.stringify(x, (_key, value: unknown) => {
     // Tagged by name, not instanceof: an array made in another realm (a worker, a test environment) counts too.
     if (Object.prototype.toString.call(value) === "[object Float64Array]") {
       return { [F64]: Array.from(value as Float64Array, (x) => (Number.isFinite(x) ? x : { [NUM]: String(x) })) };
@@ -20,8 +30,8 @@ export function encodePlan(plan: PlanResult): string {
   });
 }
 
-/** The plan back from `encodePlan`'s text. */
-export function decodePlan(text: string): PlanResult {
+/** The value back from `encodeExact`'s text. */
+export function decodeExact(text: string): unknown {
   return JSON.parse(text, (_key, value: unknown) => {
     if (value && typeof value === "object") {
       const o = value as Record<string, unknown>;
@@ -29,5 +39,5 @@ export function decodePlan(text: string): PlanResult {
       if (F64 in o) return Float64Array.from(o[F64] as number[]);
     }
     return value;
-  }) as PlanResult;
+  });
 }

@@ -13,6 +13,7 @@ import { fileURLToPath } from "node:url";
 import { defineConfig, type HtmlTagDescriptor, type Plugin } from "vite";
 import { VitePWA } from "vite-plugin-pwa";
 import solid from "vite-plugin-solid";
+import { builtinProfilesPlugin } from "./builtinProfiles.js";
 import { firstPlanPlugin } from "./firstPlan.js";
 
 const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
@@ -88,9 +89,12 @@ export default defineConfig({
     // possibly effectful, the scales the app never registers (category, logarithmic, radial, time) would
     // stay in the chart worker. Our code and chart.js read no property with a getter that does work.
     rolldownOptions: { treeshake: { propertyReadSideEffects: false } },
+    plugins: () => [builtinProfilesPlugin()],
   },
   plugins: [
     solid(),
+    // The built-in profiles as checked at build time, without the schema code (builtinProfiles.ts).
+    builtinProfilesPlugin(),
     // The demo's first plan, worked out now and shown at once on a first visit (firstPlan.ts).
     firstPlanPlugin(),
     preloadApp(here("launch.tsx")),

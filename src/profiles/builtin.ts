@@ -18,7 +18,7 @@ import trainGoods from "../../profiles/trains/goods-1100.json" with { type: "jso
 import caseAggregate from "../../profiles/cases/demo-aggregate-ashvale.json" with { type: "json" };
 import caseOre from "../../profiles/cases/demo-ore-lantern.json" with { type: "json" };
 import caseGoods from "../../profiles/cases/demo-goods-cinderfield.json" with { type: "json" };
-import { adhesionFromFile, locomotiveFromFile, wagonFromFile } from "./convert.js";
+import { DEMO_CASE_ID, libraryOf, type BuiltinFiles } from "./builtinSet.js";
 import { formatIssues, type ParseResult } from "./issues.js";
 import type { Library } from "./library.js";
 import {
@@ -31,36 +31,42 @@ import {
 } from "./parse.js";
 import type { LocationNoteFile, RailConditionsFile, StartCaseFile, TrainPresetFile } from "./schemas.js";
 
+export { DEMO_CASE_ID };
+
 /** The built-in files are part of the program: an invalid one is a programming error. */
 function must<T>(r: ParseResult<T>, what: string): T {
   if (!r.ok) throw new Error(`built-in ${what} is invalid:\n${formatIssues(r.issues)}`);
   return r.value;
 }
 
-const locoFiles = [loco4, loco6a, loco6b].map((f) => must(parseLocomotiveFile(f), `locomotive ${String(f.id)}`));
-const wagonFiles = [wagonLoaded, wagonEmpty, wagonVan].map((f) => must(parseWagonFile(f), `wagon ${String(f.id)}`));
+const caseJson: unknown[] = [caseAggregate, caseOre, caseGoods];
+
+/**
+ * Every built-in file read with its schema. The app's build embeds this object as it is (src/app/
+ * builtinProfiles.ts) instead of running the schemas at load.
+ */
+export const builtinFiles: BuiltinFiles = {
+  locomotives: [loco4, loco6a, loco6b].map((f) => must(parseLocomotiveFile(f), `locomotive ${String(f.id)}`)),
+  wagons: [wagonLoaded, wagonEmpty, wagonVan].map((f) => must(parseWagonFile(f), `wagon ${String(f.id)}`)),
+  railConditions: must(parseRailConditionsFile(railConditions), "rail-condition table"),
+  locations: [locAshvale, locCinderfield, locLantern].map((f) => must(parseLocationNote(f), `location ${String(f.id)}`)),
+  trains: [trainAggregate, trainOre, trainGoods].map((f) => must(parseTrainPreset(f), `train ${String(f.id)}`)),
+  cases: caseJson.map((f) => must(parseStartCaseFile(f), `case ${String((f as { id?: unknown }).id)}`)),
+  caseJson,
+};
 
 /** The rail-condition table with its sources. */
-export const builtinRailConditions: RailConditionsFile = must(parseRailConditionsFile(railConditions), "rail-condition table");
+export const builtinRailConditions: RailConditionsFile = builtinFiles.railConditions;
 /** Demo location notes (illustrative). */
-export const builtinLocations: LocationNoteFile[] = [locAshvale, locCinderfield, locLantern].map((f) => must(parseLocationNote(f), `location ${String(f.id)}`));
+export const builtinLocations: LocationNoteFile[] = builtinFiles.locations;
 /** Demo trains (illustrative). */
-export const builtinTrains: TrainPresetFile[] = [trainAggregate, trainOre, trainGoods].map((f) => must(parseTrainPreset(f), `train ${String(f.id)}`));
+export const builtinTrains: TrainPresetFile[] = builtinFiles.trains;
 /** Demo start cases (illustrative); the first is the built-in demo. */
-export const builtinCases: StartCaseFile[] = [caseAggregate, caseOre, caseGoods].map((f) => must(parseStartCaseFile(f), `case ${String(f.id)}`));
+export const builtinCases: StartCaseFile[] = builtinFiles.cases;
 /** Raw demo case files, as a user would write them. */
-export const builtinCaseJson: unknown[] = [caseAggregate, caseOre, caseGoods];
+export const builtinCaseJson: unknown[] = builtinFiles.caseJson;
 
 /** The library of built-in profiles. */
 export function builtinLibrary(): Library {
-  return {
-    locomotives: new Map(locoFiles.map((f) => [f.id, { spec: locomotiveFromFile(f), file: f }])),
-    wagons: new Map(wagonFiles.map((f) => [f.id, wagonFromFile(f)])),
-    locations: new Map(builtinLocations.map((n) => [n.id, n])),
-    adhesion: adhesionFromFile(builtinRailConditions),
-    cases: new Map(builtinCases.map((c, k) => [c.id ?? DEMO_CASE_ID, builtinCaseJson[k]])),
-  };
+  return libraryOf(builtinFiles);
 }
-
-/** The id of the case `taut plan --demo` and the app open with. */
-export const DEMO_CASE_ID = "demo-aggregate-ashvale";

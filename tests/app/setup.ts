@@ -4,6 +4,12 @@
  */
 import { cleanup } from "@solidjs/testing-library";
 import { afterEach, beforeEach } from "vitest";
+import { loadDraftChecker } from "../../src/app/state/draftChecker.js";
+
+// The page loads the draft's checker (the schemas) apart from its first screen; components under test
+// check their drafts at once, as the page does once it has loaded (tests/app/draftChecker.test.tsx covers
+// the moment before).
+await loadDraftChecker();
 
 beforeEach(() => {
   localStorage.clear();

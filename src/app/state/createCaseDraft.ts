@@ -14,7 +14,7 @@ import { localiseIssue } from "../fields.js";
 import type { AppSettings } from "./createSettings.js";
 import { read, safeLocalStorage, write } from "./createSettings.js";
 import { applyPreset, draftFromFile, draftToFile, storedDraft, type CaseDraft, type DraftLoco } from "./caseDraft.js";
-import { validateDraft } from "./validateDraft.js";
+import { loadDraftChecker, loadedDraftChecker } from "./draftChecker.js";
 
 export const DRAFT_KEY = "taut.case.v1";
 /** Where a stored draft that cannot be used is kept (for export), instead of being thrown away. */
@@ -45,7 +45,8 @@ export interface CaseDraftStore {
   removeLocomotive(k: number): void;
   /** The `taut/start-case@1` object, with the safety settings. */
   caseJson: Accessor<Record<string, unknown>>;
-  checked: Accessor<ParseResult<StartCase>>;
+  /** The draft checked; `pending` for the moment before the checker has loaded (nothing known yet). */
+  checked: Accessor<DraftCheck>;
   /** Every issue, in the user's units. */
   issues: Accessor<FieldIssue[]>;
   /** The first issue at one of these field paths (e.g. "train.trailingMass_t"). */
@@ -60,7 +61,14 @@ export interface CaseDraftDeps {
   library: Accessor<Library>;
   settings: Accessor<AppSettings>;
   storage?: Storage | null;
+  /** A case already checked (the built-in demo, at build time): its start-case JSON text and the result. */
+  prechecked?: { caseJson: string; value: StartCase };
 }
+
+/** The draft's check: the checker's result, or pending until the checker has loaded. */
+export type DraftCheck = ParseResult<StartCase> | { ok: false; issues: FieldIssue[]; pending: true };
+
+const PENDING: DraftCheck = { ok: false, issues: [], pending: true };
 
 /** The demo case the app opens with. */
 export function demoCaseFile(): StartCaseFile {
@@ -126,7 +134,16 @@ export function createCaseDraft(deps: CaseDraftDeps): CaseDraftStore {
     const s = deps.settings();
     return draftToFile(draft, { couplerSafetyFactor: s.couplerSafetyFactor, slipRiskThreshold: s.slipRiskThreshold, marginalSlipRisk: s.marginalSlipRisk });
   });
-  const checked = createMemo(() => validateDraft(caseJson(), unwrap(draft), deps.library()));
+  const [checker, setChecker] = createSignal(loadedDraftChecker());
+  if (!checker()) void loadDraftChecker().then((f) => setChecker(() => f));
+  const checked = createMemo((): DraftCheck => {
+    const validate = checker();
+    const json = caseJson();
+    if (validate) return validate(json, unwrap(draft), deps.library());
+    // Before the checker has loaded: the case checked at build time when the draft is that case.
+    const pre = deps.prechecked;
+    return pre && JSON.stringify(json) === pre.caseJson ? { ok: true, value: pre.value } : PENDING;
+  });
   const issues = createMemo(() => {
     const c = checked();
     const units = deps.settings().units;

@@ -40,8 +40,8 @@ export interface PlanRunDeps {
   client: PlanningClient;
   /** A second worker for the slower largest-startable-mass search that follows each plan; without it that figure is not computed. */
   background?: PlanningClient;
-  /** The validated case to plan (core SI form), or null while the inputs break a rule. */
-  startCase: Accessor<StartCase | null>;
+  /** The validated case to plan (core SI form), null while the inputs break a rule, undefined while not yet checked. */
+  startCase: Accessor<StartCase | null | undefined>;
   /** Wait after the last change before planning, ms. */
   debounceMs?: number;
   /**
@@ -77,7 +77,7 @@ export function createPlanRun(deps: PlanRunDeps): PlanRun {
   // The case's identity: its full SI content (a changed note or setting replans even under the same ids).
   const key = createMemo(() => {
     const c = deps.startCase();
-    return c ? JSON.stringify(c) : null;
+    return c === undefined ? undefined : c ? JSON.stringify(c) : null;
   });
 
   const cancel = () => {
@@ -157,7 +157,7 @@ export function createPlanRun(deps: PlanRunDeps): PlanRun {
   {
     const k = key();
     const c = deps.startCase();
-    if (k !== null && c !== null) {
+    if (k && c) {
       const initial = deps.initial?.key === k ? deps.initial : undefined;
       if (initial) {
         setResult(initial.result);
@@ -175,6 +175,12 @@ export function createPlanRun(deps: PlanRunDeps): PlanRun {
       if (!retried && k !== null && k === requestedKey && (status() === "running" || status() === "done")) return;
       cancel();
       const c = deps.startCase();
+      if (k === undefined || c === undefined) {
+        // Not checked yet (the checker is loading): nothing to plan, nothing wrong either.
+        requestedKey = null;
+        setStatus("waiting");
+        return;
+      }
       if (k === null || c === null) {
         requestedKey = null;
         setStatus("invalid");

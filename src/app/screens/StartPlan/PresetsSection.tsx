@@ -12,7 +12,7 @@ import { Icon } from "../../components/Icon.js";
 import { download } from "../../download.js";
 import type { CaseSettings } from "../../state/caseDraft.js";
 import type { CaseDraftStore } from "../../state/createCaseDraft.js";
-import { caseFileName, caseFileText, readCaseFile } from "./caseFile.js";
+import { caseFileName, caseFileText } from "./caseFile.js";
 
 import { inputs } from "../../../i18n/en/inputs.js";
 import { tr } from "../../i18n.js";
@@ -40,6 +40,8 @@ export function PresetsSection(props: PresetsSectionProps): JSX.Element {
   const open = async (file: File) => {
     const text = await file.text();
     const settings = props.settings ?? { couplerSafetyFactor: 1.2, slipRiskThreshold: 0.1 };
+    // The schemas load with the first file opened, not with the screen.
+    const { readCaseFile } = await import("./openCaseFile.js");
     const r = props.library ? readCaseFile(file.name, text, props.library, settings) : { ok: false as const, message: "no library", issues: [] };
     if (!r.ok) {
       setOpened({ kind: "bad", message: r.message, issues: r.issues });
