@@ -1,5 +1,6 @@
 /** Option helpers shared by several commands: --jobs, --helper and the progress lines on stderr. */
 import type { LocomotiveSpec } from "../core/physics/types.js";
+import type { UnitControl } from "../core/train/types.js";
 import type { Library } from "../profiles/library.js";
 import type { CheckProgress } from "./batch/checkDepartures.js";
 import { defaultPoolSize } from "./batch/pool.js";
@@ -13,6 +14,13 @@ export function helperSpec(lib: Library, id: string | undefined): LocomotiveSpec
   const found = lib.locomotives.get(id);
   if (!found) throw new InputError(`--helper: no locomotive profile ${quoted(id)} (known: ${[...lib.locomotives.keys()].join(", ")})`);
   return found.spec;
+}
+
+/** --helper-control remote|helper: how units the assistance options add mid-train or at the rear are driven (default remote). */
+export function helperControl(v: string | undefined): UnitControl | undefined {
+  if (v === undefined) return undefined;
+  if (v === "remote" || v === "helper") return v;
+  throw new InputError(`--helper-control: must be remote or helper (got ${quoted(v)})`);
 }
 
 /** --jobs N: a whole number from 1 to 64; default the available cores. */

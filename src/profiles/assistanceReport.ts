@@ -37,10 +37,14 @@ export function optionReport(o: AssistanceOption, profile: string): AssistanceRe
     reasons: o.reasons,
     margin: r(o.margin, 3),
     units: o.units,
-    locomotives: o.added.map((a) => ({ profile, count: a.count, position: typeof a.position === "string" ? a.position : { afterWagon: a.position.afterWagon } })),
+    locomotives: o.added.map((a) => {
+      const entry = o.case.locomotives[o.case.locomotives.length - o.added.length + o.added.indexOf(a)];
+      return { profile, count: a.count, position: typeof a.position === "string" ? a.position : { afterWagon: a.position.afterWagon }, ...(entry?.control ? { control: entry.control } : {}) };
+    }),
     peakCompressionAt: { coupling: o.peakCompressionAt + 1, of: couplings },
     headCompression_kN: kN(o.headCompressionN),
     note: o.note,
+    effortSplit: o.effortSplit.map((g) => ({ name: g.name, notch: g.notch, share: r(g.share, 3) })),
   };
 }
 

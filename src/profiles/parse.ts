@@ -3,7 +3,8 @@
  * `parseX` function; start cases are also resolved against a library of named profiles.
  */
 import { buildConsist } from "../core/train/consist.js";
-import { DEFAULT_SETTINGS, type LocoGroup, type LocoPosition, type StartCase } from "../core/train/types.js";
+import { DEFAULT_SETTINGS, type LocoGroup, type LocoPosition, type StartCase, type WagonGroup } from "../core/train/types.js";
+import { groupTotals } from "../core/train/groups.js";
 import type { WagonSpec } from "../core/physics/types.js";
 import { kmhToMps, kNToN, tonnesToKg } from "../core/physics/units.js";
 import { uniformTrack } from "../core/physics/track.js";
@@ -93,14 +94,22 @@ export function resolveStartCase(f: StartCaseFile, lib: Library): ParseResult<St
     if (typeof position === "object" && position.afterWagon >= f.train.wagons) {
       issues.push({ path: `locomotives[${k}].position.afterWagon`, message: `must be less than the number of wagons (${f.train.wagons}) (got ${position.afterWagon})` });
     }
-    groups.push({ spec, count: entry.count, position });
+    groups.push({ spec, count: entry.count, position, ...(entry.control !== undefined ? { control: entry.control } : {}) });
   });
 
-  let wagon: WagonSpec = genericWagon(f.train.coupling ?? "knuckle", f.train.length_m / f.train.wagons);
-  if (f.train.wagonType !== undefined) {
+  const wagonGroups: WagonGroup[] = [];
+  (f.train.groups ?? []).forEach((g, k) => {
+    const w = lib.wagons.get(g.wagonType);
+    if (!w) issues.push({ path: `train.groups[${k}].wagonType`, message: `names no known wagon type ("${g.wagonType}"; known: ${[...lib.wagons.keys()].join(", ")})` });
+    else wagonGroups.push({ wagons: g.wagons, wagon: w, massKg: tonnesToKg(g.mass_t) });
+  });
+  const totals = f.train.groups ? groupTotals(wagonGroups) : null;
+  const lengthM = totals ? totals.lengthM : (f.train.length_m ?? 0);
+  let wagon: WagonSpec = wagonGroups[0]?.wagon ?? genericWagon(f.train.coupling ?? "knuckle", lengthM / f.train.wagons);
+  if (f.train.wagonType !== undefined && !f.train.groups) {
     const w = lib.wagons.get(f.train.wagonType);
     if (!w) issues.push({ path: "train.wagonType", message: `names no known wagon type ("${f.train.wagonType}"; known: ${[...lib.wagons.keys()].join(", ")})` });
-    else wagon = { ...w, lengthM: f.train.length_m / f.train.wagons };
+    else wagon = { ...w, lengthM: lengthM / f.train.wagons };
   }
 
   let locNote: Pick<LocationNoteFile, "segments" | "frontAt_m" | "clearAhead_m"> | undefined;
@@ -122,13 +131,15 @@ export function resolveStartCase(f: StartCaseFile, lib: Library): ParseResult<St
     train: {
       trailingMassKg: tonnesToKg(f.train.trailingMass_t),
       wagons: f.train.wagons,
-      lengthM: f.train.length_m,
+      lengthM,
       couplerSlackM: f.train.couplerSlack_mm / 1000,
       bearing: f.train.bearing,
       couplerLimitN: kNToN(f.train.couplerLimit_kN),
       coupling: f.train.coupling ?? wagon.coupling,
       wagon,
       slackState: f.train.slackState,
+      ...(f.train.groups ? { groups: wagonGroups } : {}),
+      ...(f.train.couplerBuffLimit_kN !== undefined ? { couplerBuffLimitN: kNToN(f.train.couplerBuffLimit_kN) } : {}),
     },
     location,
     conditions: { rail: f.conditions.rail, sand: f.conditions.sand, temperatureC: f.conditions.temperature_C },

@@ -76,7 +76,7 @@ export interface ReferenceSummary {
 export function referenceSummary(ref: ReferenceTrainFile, presets: readonly TrainPresetFile[], lib: Library): ReferenceSummary {
   const preset = presets.find((p) => p.id === ref.train);
   if (!preset) return { lengthM: Number.NaN, trailingMassKg: Number.NaN, trainLabel: ref.train, locomotives: "" };
-  let lengthM = preset.train.length_m;
+  let lengthM = preset.train.length_m ?? groupsLengthM(preset.train.groups ?? [], lib);
   const words: string[] = [];
   for (const g of referenceLocomotives(ref, preset)) {
     const id = typeof g.profile === "string" ? g.profile : g.profile.id;
@@ -86,4 +86,9 @@ export function referenceSummary(ref: ReferenceTrainFile, presets: readonly Trai
     words.push(`${g.count} × ${loco?.label ?? id} ${where}`);
   }
   return { lengthM, trailingMassKg: preset.train.trailingMass_t * 1000, trainLabel: preset.label, locomotives: words.join(", ") };
+}
+
+/** Length over the wagons of a grouped train from its wagon types, m (NaN where a type is unknown). */
+function groupsLengthM(groups: ReadonlyArray<{ wagons: number; wagonType: string }>, lib: Library): number {
+  return groups.reduce((s, g) => s + g.wagons * (lib.wagons.get(g.wagonType)?.lengthM ?? Number.NaN), 0);
 }

@@ -29,6 +29,8 @@ export interface StepReport {
   peakCouplerForce_kN: number;
   fallbackNotch: number;
   why: string;
+  /** With several control groups: each group's notch (head first; `notch` is the head's), its share of the effort, and how a helper follows. */
+  groups?: Array<{ name: string; control: "with-head" | "remote" | "helper"; notch: number; effortShare: number; coordination?: string }>;
 }
 
 /** One limit of the decision: demand against allowance, with units in the names. */
@@ -38,7 +40,7 @@ export interface LimitReport {
   level: "within" | "soft" | "over";
   margin: number;
   /** Demand and allowance in the unit named (kN, m or s). */
-  unit: "kN" | "m" | "s";
+  unit: "kN" | "m" | "s" | "ratio";
   demand: number;
   allowance: number;
   /** Exceeding the allowance is marginal while the band's allowance covers its demand; absent when the limit has no band. */
@@ -60,13 +62,15 @@ export interface AssistanceReport {
   /** Units added. */
   units?: number;
   /** The added units as start-case entries (paste into `locomotives` to plan the option). */
-  locomotives?: Array<{ profile: string; count: number; position: "head" | "rear" | { afterWagon: number } }>;
+  locomotives?: Array<{ profile: string; count: number; position: "head" | "rear" | { afterWagon: number }; control?: "with-head" | "remote" | "helper" }>;
   /** Coupling (1 = behind the first vehicle) of the peak compression, and how many couplings there are. */
   peakCompressionAt?: { coupling: number; of: number };
   /** Largest compression in the front quarter of the couplings. */
   headCompression_kN?: number;
   /** What to watch with this option. */
   note?: string;
+  /** Each control group's notch and share of the effort in the option's running step. */
+  effortSplit?: Array<{ name: string; notch: number; share: number }>;
 }
 
 /** Dividing the train: the largest first part that starts with the train's own locomotives. */
@@ -146,6 +150,10 @@ export interface PlanReport {
   cautionCodes: CautionReport[];
   /** What to do if the wheels slip (`driver`, in order), why (`protection`: what the locomotive does) and if the train stalls. */
   ifWheelsSlip?: { driver: string[]; protection: string[]; stall: string[] };
+  /** With wagon groups: what the largest-mass search scales. */
+  massSearchScales?: string;
+  /** The highest wheel-climb L/V of the planned start (when units push or the train is mixed, and a coupling was in buff on a curve). */
+  wheelClimb?: { ratio: number; allowance: number; nadalLimit: number; vehicle: string; buff_kN: number; curveRadius_m: number };
   /** The stretch as the dynamics run showed it. */
   stretch?: { lastVehicleMoves_s: number | null; locoTravelToStretch_m: number | null; maxRunOut_kmh: number };
   /** Which input moves the margin most, largest first. */
@@ -157,7 +165,7 @@ export interface PlanReport {
 /** A limit with units in names. */
 export function limitReport(l: LimitCheck): LimitReport {
   const k = l.unit === "N" ? 1000 : 1;
-  const val = (x: number) => r(x / k, l.unit === "s" ? 0 : 1);
+  const val = (x: number) => r(x / k, l.unit === "s" ? 0 : l.unit === "ratio" ? 2 : 1);
   return {
     name: l.name,
     reason: l.reason,
@@ -241,6 +249,7 @@ export function stepReport(s: PlanStep): StepReport {
     peakCouplerForce_kN: kN(s.peakCouplerForceN, 0),
     fallbackNotch: s.fallbackNotch,
     why: s.why,
+    ...(s.groups ? { groups: s.groups.map((g) => ({ name: g.name, control: g.control, notch: g.notch, effortShare: r(g.effortShare, 3), ...(g.coordination ? { coordination: g.coordination } : {}) })) } : {}),
   };
 }
 
@@ -286,8 +295,13 @@ export function planReport(c: StartCase, p: PlanResult, meta: PlanReport["case"]
   rep.advice = p.advice;
   if (Number.isFinite(p.largestMarginalMassKg)) rep.largestMarginalMass_t = Math.floor(p.largestMarginalMassKg / 1000);
   rep.massSearchCeiling_t = Math.floor(p.massSearchCeilingKg / 1000);
+  if (c.train.groups) rep.massSearchScales = "the load above tare of every wagon group, in proportion";
   rep.steps = p.steps.map(stepReport);
   rep.peakCouplerForce_kN = kN(p.peakCouplerForceN);
+  if (p.wheelClimb) {
+    const w = p.wheelClimb;
+    rep.wheelClimb = { ratio: r(w.ratio, 3), allowance: r(w.allowance, 3), nadalLimit: r(w.nadalLimit, 3), vehicle: w.vehicle, buff_kN: kN(w.forceN), curveRadius_m: r(w.radiusM, 0) };
+  }
   rep.timeToTarget_s = p.timeToTargetS === null ? null : r(p.timeToTargetS, 0);
   rep.cautions = cautionsInEnglish(p.cautions);
   rep.cautionCodes = p.cautions.map(cautionReport);

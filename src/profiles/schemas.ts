@@ -256,31 +256,67 @@ export const locoEntrySchema = z.object({
   profile: z.union([id(), locomotiveFileSchema]),
   count: z._default(z.int().check(z.gte(1), z.lte(8)), 1),
   position: z._default(positionSchema, "head"),
+  /** with-head (the head's notch), remote (own notch from the head cab), helper (own driver); default by position. */
+  control: z.optional(z.enum(["with-head", "remote", "helper"])),
 });
 
-export const trainSchema = z.object({
-  trailingMass_t: within(WAGON_MASS_T.min, MAX_WAGONS * WAGON_MASS_T.max, "t"),
-  wagons: z.int().check(z.gte(1), z.lte(MAX_WAGONS)),
-  length_m: within(WAGON_LENGTH_M.min, MAX_WAGONS * WAGON_LENGTH_M.max, "m"),
+/** One wagon group of a mixed train: its wagons, their type and the group's total mass. */
+export const wagonGroupSchema = z
+  .object({
+    wagons: z.int().check(z.gte(1), z.lte(MAX_WAGONS)),
+    wagonType: id(),
+    mass_t: within(WAGON_MASS_T.min, MAX_WAGONS * WAGON_MASS_T.max, "t"),
+  })
+  .check(
+    z.superRefine((g, ctx) => {
+      if (!(Number.isInteger(g.wagons) && g.wagons >= 1 && g.wagons <= MAX_WAGONS) || !(g.mass_t >= WAGON_MASS_T.min)) return;
+      const x = g.mass_t / g.wagons;
+      if (x >= WAGON_MASS_T.min && x <= WAGON_MASS_T.max) return;
+      ctx.issues.push({ code: "custom", input: g.mass_t, path: ["mass_t"], message: `must give from ${WAGON_MASS_T.min} to ${WAGON_MASS_T.max} t per wagon (got ${roundTo3(x)} t per wagon over ${g.wagons} wagon${g.wagons === 1 ? "" : "s"})` });
+    }),
+  );
+export type WagonGroupFile = z.infer<typeof wagonGroupSchema>;
+
+const trainObject = z.object({
+  // With `groups` these three may be left out: they are derived from the groups and their wagon types.
+  trailingMass_t: z.optional(within(WAGON_MASS_T.min, MAX_WAGONS * WAGON_MASS_T.max, "t")),
+  wagons: z.optional(z.int().check(z.gte(1), z.lte(MAX_WAGONS))),
+  length_m: z.optional(within(WAGON_LENGTH_M.min, MAX_WAGONS * WAGON_LENGTH_M.max, "m")),
+  /** A mixed train: wagon groups in order from the head. */
+  groups: z.optional(z.array(wagonGroupSchema).check(z.minLength(1), z.maxLength(MAX_WAGONS))),
   couplerSlack_mm: within(0, 200, "mm"),
   bearing: z.enum(["roller", "plain"]),
   // Working limits run from some 300 kN (old screw couplings) to some 2000 kN (heavy-haul knuckles);
   // the bound leaves room either side (common practice).
   couplerLimit_kN: within(100, 5000, "kN"),
+  /** Working limit in buff (compression), kN; default the working limit in draft. */
+  couplerBuffLimit_kN: z.optional(within(100, 5000, "kN")),
   coupling: z.optional(z.enum(["knuckle", "screw"])),
   wagonType: z.optional(id()),
   slackState: z._default(z.enum(["bunched", "stretched", "from-profile"]), "from-profile"),
 }).check(
   // Per wagon: the whole train's mass and length are checked against what one wagon can be.
   z.superRefine((t, ctx) => {
+    if (t.groups === undefined) {
+      for (const what of ["trailingMass_t", "wagons", "length_m"] as const) {
+        if (t[what] === undefined) ctx.issues.push({ code: "custom", input: t, path: [what], message: "is needed (or give the train as wagon groups)" });
+      }
+    } else {
+      const wagons = t.groups.reduce((s, g) => s + g.wagons, 0);
+      const mass = t.groups.reduce((s, g) => s + g.mass_t, 0);
+      if (wagons > MAX_WAGONS) ctx.issues.push({ code: "custom", input: t.groups, path: ["groups"], message: `must hold at most ${MAX_WAGONS} wagons (got ${wagons})` });
+      if (t.wagons !== undefined && t.wagons !== wagons) ctx.issues.push({ code: "custom", input: t.wagons, path: ["wagons"], message: `must match the groups' ${wagons} wagons (got ${t.wagons})` });
+      if (t.trailingMass_t !== undefined && Math.abs(t.trailingMass_t - mass) > 0.5) ctx.issues.push({ code: "custom", input: t.trailingMass_t, path: ["trailingMass_t"], message: `must match the groups' ${roundTo3(mass)} t (got ${t.trailingMass_t} t)` });
+    }
     const perWagon = (what: "trailingMass_t" | "length_m", r: { min: number; max: number }, unit: string) => {
+      const total = t[what];
       // Only when the whole-train figure is itself in range (otherwise that is the one message).
-      if (!(t[what] >= r.min && t[what] <= MAX_WAGONS * r.max) || !(Number.isInteger(t.wagons) && t.wagons >= 1 && t.wagons <= MAX_WAGONS)) return;
-      const x = t[what] / t.wagons;
+      if (t.wagons === undefined || total === undefined || !(total >= r.min && total <= MAX_WAGONS * r.max) || !(Number.isInteger(t.wagons) && t.wagons >= 1 && t.wagons <= MAX_WAGONS)) return;
+      const x = total / t.wagons;
       if (x >= r.min && x <= r.max) return;
       ctx.issues.push({
         code: "custom",
-        input: t[what],
+        input: total,
         path: [what],
         message: `must give from ${r.min} to ${r.max} ${unit} per wagon (got ${roundTo3(x)} ${unit} per wagon over ${t.wagons} wagon${t.wagons === 1 ? "" : "s"})`,
       });
@@ -288,6 +324,20 @@ export const trainSchema = z.object({
     perWagon("trailingMass_t", WAGON_MASS_T, "t");
     perWagon("length_m", WAGON_LENGTH_M, "m");
   }),
+);
+
+/**
+ * The train of a case: given whole (trailing mass, wagons, length) or as wagon groups. The wagon count and
+ * trailing mass of a grouped train are filled in from its groups here; its length needs the wagon types
+ * and is filled in when the case is resolved against the library (`length_m` may then be absent).
+ */
+export const trainSchema = z.pipe(
+  trainObject,
+  z.transform((t) => ({
+    ...t,
+    trailingMass_t: t.trailingMass_t ?? (t.groups ?? []).reduce((s, g) => s + g.mass_t, 0),
+    wagons: t.wagons ?? (t.groups ?? []).reduce((s, g) => s + g.wagons, 0),
+  })),
 );
 export type TrainFile = z.infer<typeof trainSchema>;
 

@@ -60,6 +60,7 @@ export function optionData(o: AssistanceOption): AssistanceOptionData {
     headCompressionN: o.headCompressionN,
     timeToTargetS: o.timeToTargetS,
     note: o.note,
+    effortSplit: o.effortSplit.map((g) => ({ ...g })),
   };
 }
 

@@ -221,6 +221,37 @@ describe("one story across plan, check, table and the worker (planner level: 8 c
   });
 });
 
+describe("the same story with several control groups and mixed trains (planner level: 6 cases, each with two mass searches)", () => {
+  // A unit at the rear (remote or helper, its own notch) and, half the time, the wagons as two groups of
+  // different load: the invariants of the one decision hold as they do for a train of one group.
+  it("starts ⇔ margin ≥ 1 ⇔ mass ≤ largest startable; needs assistance ⇔ mass > largest marginal", () => {
+    fc.assert(
+      fc.property(draw({ min: 8, max: 12 }, { min: 0, max: 15 }), fc.constantFrom("remote", "helper"), fc.boolean(), (d, control, mixed) => {
+        const base = caseOf(d, { couplerLimit_kN: 600 });
+        const rear = { ...base.locomotives[0]!, count: 1, position: "rear" as const, control: control as "remote" | "helper" };
+        const w = base.train.wagon;
+        const split = Math.floor(base.train.wagons / 2);
+        const perWagon = base.train.trailingMassKg / base.train.wagons;
+        const light = Math.max(5000, Math.min(perWagon, (w.tareKg ?? perWagon) * 1.0));
+        const train = mixed
+          ? { ...base.train, groups: [{ wagons: split, wagon: w, massKg: light * split }, { wagons: base.train.wagons - split, wagon: w, massKg: perWagon * (base.train.wagons - split) }] }
+          : base.train;
+        const c: StartCase = { ...base, locomotives: [...base.locomotives, rear], train: mixed ? { ...train, trailingMassKg: train.groups!.reduce((a, g) => a + g.massKg, 0) } : train };
+        const p = planStart(c, { skipVerification: true });
+        const m = c.train.trailingMassKg;
+        expect(p.verdict === "starts").toBe(p.margin >= 1);
+        expect(p.verdict === "starts").toBe(m <= p.maxStartableMassKg);
+        expect(p.verdict === "needs-assistance").toBe(m > p.largestMarginalMassKg);
+        expect(p.margin).toBe(Math.min(...p.limits.map((l) => l.margin)));
+        // Units pushing: the wheel-climb check is made, and every step names both groups' notches.
+        expect(p.limits.some((l) => l.name === "wheel-climb")).toBe(true);
+        for (const s of p.steps) expect(s.groups?.length).toBe(2);
+      }),
+      runs(6),
+    );
+  });
+});
+
 describe("stronger is never worse, in the planned start (planner level: 60 cases)", () => {
   // Trains of 8–16 wagons, couplings strong and the clear distance long so that effort decides.
   it("what starts (or is at least marginal) with a weaker set-up still does with a stronger one", () => {

@@ -37,7 +37,7 @@ describe("referenceCase", () => {
 
   it("sums the train's length with its locomotives", () => {
     const s = referenceSummary({ train: single.id, count: 2 }, builtinTrains, lib);
-    expect(s.lengthM).toBeCloseTo(single.train.length_m + 2 * lib.locomotives.get(singleLoco)!.file.length_m, 9);
+    expect(s.lengthM).toBeCloseTo(single.train.length_m! + 2 * lib.locomotives.get(singleLoco)!.file.length_m, 9);
     expect(s.locomotives).toContain("2 × ");
     expect(s.locomotives).toContain("at the head");
     expect(Number.isNaN(referenceSummary({ train: "no-such-train" }, builtinTrains, lib).lengthM)).toBe(true);

@@ -114,7 +114,7 @@ function trainFromFile(t: StartCaseFile["train"], wagonCoupling: (id: string) =>
   return {
     trailingMass_t: t.trailingMass_t,
     wagons: t.wagons,
-    length_m: t.length_m,
+    length_m: t.length_m ?? Number.NaN,
     couplerSlack_mm: t.couplerSlack_mm,
     bearing: t.bearing,
     couplerLimit_kN: t.couplerLimit_kN,

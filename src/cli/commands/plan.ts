@@ -18,7 +18,8 @@ import { InputError } from "../errors.js";
 import { quoted } from "../../profiles/text.js";
 import { library, readNotesFiles, readStartCase } from "../files.js";
 import type { Command } from "../command.js";
-import { helperSpec } from "../options.js";
+import { helperControl, helperSpec } from "../options.js";
+import type { UnitControl } from "../../core/train/types.js";
 import { applyOverrides, hasOverrides, OVERRIDE_HELP, OVERRIDE_OPTIONS, overridesFrom } from "../caseOverrides.js";
 import { renderPlan } from "../render/plan.js";
 
@@ -32,7 +33,7 @@ export const planCommand: Command = {
   name: "plan",
   summary: "start plan for one train: verdict, resistance, adhesion, steps, assistance",
   usage:
-    "taut plan CASE.json|- [--rail R] [--sand|--no-sand] [--mass T] [--grade PERMILLE] [--notes FILE]... [--location NOTE-ID] [--helper ID] [--no-assistance] [--conditions] [--json] | taut plan --demo [...]",
+    "taut plan CASE.json|- [--rail R] [--sand|--no-sand] [--mass T] [--grade PERMILLE] [--notes FILE]... [--location NOTE-ID] [--helper ID] [--helper-control remote|helper] [--no-assistance] [--conditions] [--json] | taut plan --demo [...]",
   help: [
     "Computes whether the locomotives can start the train at the location, and how.",
     "When the verdict is not \"starts\", it also searches for assistance: one or two more units of the",
@@ -54,6 +55,8 @@ export const planCommand: Command = {
     "                      the case's \"location\" may name by id; may be given more than once",
     "  --location NOTE-ID  start at this location note instead of the case's own location",
     "  --helper ID         locomotive profile the assistance options add (default: the lead unit's)",
+    "  --helper-control C  how units added mid-train or at the rear are driven: remote (own notch from the",
+    "                      head cab; default) or helper (own driver, coordinated by radio)",
     "  --no-assistance     do not search for assistance",
     "  --conditions        also give the verdict and margins for every rail condition, without and with",
     "                      sand (12 more plans: several seconds)",
@@ -64,6 +67,7 @@ export const planCommand: Command = {
     notes: { type: "string", multiple: true },
     location: { type: "string" },
     helper: { type: "string" },
+    "helper-control": { type: "string" },
     "no-assistance": { type: "boolean" },
     conditions: { type: "boolean" },
     ...OVERRIDE_OPTIONS,
@@ -73,6 +77,7 @@ export const planCommand: Command = {
     const lib = library(readNotesFiles((values.notes as string[] | undefined) ?? []));
     const location = values.location as string | undefined;
     const helper = helperSpec(lib, values.helper as string | undefined);
+    const control = helperControl(values["helper-control"] as string | undefined);
     let c: StartCase;
     let meta: PlanReport["case"];
     if (values.demo) {
@@ -102,7 +107,7 @@ export const planCommand: Command = {
     const speculation = speculateMassVerdicts(c);
     let report: PlanReport;
     try {
-      report = planReport(c, meta, { assistance: !values["no-assistance"], ...(helper ? { helper } : {}), ...(speculation ? { massVerdictAt: speculation.verdictAt } : {}) });
+      report = planReport(c, meta, { assistance: !values["no-assistance"], ...(helper ? { helper } : {}), ...(control ? { control } : {}), ...(speculation ? { massVerdictAt: speculation.verdictAt } : {}) });
     } finally {
       await speculation?.close();
     }
@@ -124,6 +129,8 @@ export function caseMeta(raw: Record<string, unknown>): PlanReport["case"] {
 export interface PlanReportOptions {
   assistance?: boolean;
   helper?: LocomotiveSpec;
+  /** How units the assistance options add mid-train or at the rear are driven (default remote). */
+  control?: UnitControl;
   /** Verdicts of the mass search found on other threads (batch/speculate.ts). */
   massVerdictAt?: MassVerdictLookup;
 }
@@ -143,6 +150,7 @@ function reportWithAssistance(c: StartCase, meta: PlanReport["case"], opts: Plan
       divideBudget: PLAN_DIVIDE_BUDGET,
       maxFullPlans: PLAN_ASSISTANCE_FULL_PLANS,
       ...(opts.helper ? { spec: opts.helper } : {}),
+      ...(opts.control ? { control: opts.control } : {}),
     });
     const ar = assistanceReport(a, PLAN_ASSISTANCE_BUDGET + PLAN_DIVIDE_BUDGET);
     rep.assistance = ar.assistance;

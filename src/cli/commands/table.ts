@@ -115,7 +115,7 @@ export const tableCommand: Command = {
         ...(built.referenceTrain !== null ? { referenceTrain: built.referenceTrain } : {}),
         wagons: built.file.train.wagons,
         wagonType: built.file.train.wagonType ?? null,
-        length_m: built.file.train.length_m,
+        length_m: built.file.train.length_m ?? Math.round(built.c.train.lengthM),
         couplerSlack_mm: built.file.train.couplerSlack_mm,
         couplerLimit_kN: built.file.train.couplerLimit_kN,
         bearing: built.file.train.bearing,

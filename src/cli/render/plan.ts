@@ -28,7 +28,7 @@ export function renderPlan(p: PlanReport): string {
   const atCeiling = p.massSearchCeiling_t !== undefined && p.maxStartableMass_t >= p.massSearchCeiling_t;
   const largest = atCeiling ? t("largestMassNoLimit", { mass: num(p.maxStartableMass_t) }) : p.maxStartableMass_t > 0 ? t("largestMassValue", { mass: num(p.maxStartableMass_t) }) : t("largestMassNone");
   const marginalTo = p.largestMarginalMass_t !== undefined && p.largestMarginalMass_t > p.maxStartableMass_t ? t("largestMarginal", { mass: num(p.largestMarginalMass_t) }) : "";
-  lines.push(t("largestMass", { mass: largest }) + marginalTo);
+  lines.push(t("largestMass", { mass: largest }) + marginalTo + (p.massSearchScales ? ` (scaling ${p.massSearchScales})` : ""));
   if (p.limits && p.limits.length > 0) {
     lines.push("");
     lines.push(t("limitsTitle"));
@@ -45,6 +45,10 @@ export function renderPlan(p: PlanReport): string {
   if (p.stretch && p.stretch.lastVehicleMoves_s !== null) {
     lines.push(t("stretch", { time: num(p.stretch.lastVehicleMoves_s, 0), travel: num(p.stretch.locoTravelToStretch_m, 1) }));
   }
+  if (p.wheelClimb) {
+    const w = p.wheelClimb;
+    lines.push(`Wheel climb: L/V ${num(w.ratio, 2)} at ${w.vehicle} under ${num(w.buff_kN)} kN of buff on a ${num(w.curveRadius_m)} m curve (allowed ${num(w.allowance, 2)}: Nadal's limit ${num(w.nadalLimit, 2)} ÷ 1.2)`);
+  }
   if (p.steps.length > 0) {
     lines.push(t("timeToTarget", { time: p.timeToTarget_s === null ? t("targetNotReached") : t("targetAfter", { time: num(p.timeToTarget_s) }), peak: num(p.peakCouplerForce_kN) }));
   }
@@ -56,7 +60,7 @@ export function renderPlan(p: PlanReport): string {
         p.steps.map((s, i) => [
           String(i + 1),
           w.phaseInline(s.phase),
-          String(s.notch),
+          s.groups ? s.groups.map((g) => `${g.name} ${g.notch}`).join(" · ") : String(s.notch),
           advance(s.advanceWhen),
           num(s.speed_kmh, 1),
           num(s.tractiveEffort_kN),
@@ -71,7 +75,10 @@ export function renderPlan(p: PlanReport): string {
     if (p.steps.some((s) => s.protectionActs)) lines.push(t("protectionNote"));
     lines.push("");
     lines.push(t("why"));
-    p.steps.forEach((s, i) => lines.push(...wrap(`${i + 1}. ${s.why}`, 100, "   ")));
+    p.steps.forEach((s, i) => {
+      lines.push(...wrap(`${i + 1}. ${s.why}`, 100, "   "));
+      for (const g of s.groups ?? []) if (g.coordination) lines.push(...wrap(`   ${g.coordination}`, 100, "   "));
+    });
   } else if (p.verdict === "needs-assistance") {
     lines.push("");
     lines.push(t("noSteps"));

@@ -7,7 +7,7 @@ import { adhesionLimitN, adhesionQuantile, standstillMedian } from "../physics/a
 import { buildConsist } from "../train/consist.js";
 import { standingForces } from "../train/standing.js";
 import { notchEffortN } from "../physics/traction.js";
-import type { LocoGroup, LocoPosition, StartCase } from "../train/types.js";
+import type { LocoGroup, LocoPosition, StartCase, UnitControl } from "../train/types.js";
 import type { LocomotiveSpec } from "../physics/types.js";
 
 /** Units of one profile added at one place. */
@@ -16,9 +16,12 @@ export interface AddedUnits {
   position: LocoPosition;
 }
 
-/** The case with the given units of `spec` added to its locomotives (units work in step: the same notch). */
-export function withAddedUnits(c: StartCase, spec: LocomotiveSpec, adds: readonly AddedUnits[]): StartCase {
-  const groups: LocoGroup[] = adds.map((a) => ({ spec, count: a.count, position: a.position }));
+/**
+ * The case with the given units of `spec` added to its locomotives: at the head in multiple with the head's
+ * units; mid-train and at the rear under `control` (default remote: their own notch, set from the head cab).
+ */
+export function withAddedUnits(c: StartCase, spec: LocomotiveSpec, adds: readonly AddedUnits[], control: UnitControl = "remote"): StartCase {
+  const groups: LocoGroup[] = adds.map((a) => ({ spec, count: a.count, position: a.position, control: a.position === "head" ? "with-head" : control }));
   return { ...c, locomotives: [...c.locomotives, ...groups] };
 }
 

@@ -1,7 +1,8 @@
 /**
  * The assistance check: when a train does not start (or only marginally), which added locomotives make it
- * start — at the head, at the rear, or mid-train after a wagon, one or two units, working in step with the
- * train's own (the same notch). Every option is judged by the one decision (decision.ts): first by the
+ * start — at the head, at the rear, or mid-train after a wagon, one or two units: at the head in multiple
+ * with the train's own (the same notch), mid-train and at the rear as remote units or a helper with their
+ * own notch (groupNotches.ts). Every option is judged by the one decision (decision.ts): first by the
  * limits known before any dynamics, then by the planned start in the longitudinal dynamics; the options
  * returned carry a full, verified plan. When no option with up to two added units works and the train needs
  * assistance, the train is divided into a practical number of parts: the largest first part that starts
@@ -15,7 +16,7 @@ import { marginalBound, plannerContext } from "../planner/context.js";
 import type { LimitCheck } from "../planner/outcome.js";
 import type { LocomotiveSpec } from "../physics/types.js";
 import type { Reason, Verdict } from "../planner/outcome.js";
-import type { StartCase } from "../train/types.js";
+import type { StartCase, UnitControl } from "../train/types.js";
 
 /** One way of adding units, and what the planner says of it. */
 export interface AssistanceOption {
@@ -40,6 +41,11 @@ export interface AssistanceOption {
   timeToTargetS: number | null;
   /** Plain words on what to watch with this option (e.g. shoving from the rear). */
   note: string;
+  /**
+   * How the effort is shared among the control groups in the planned start's running step (head first; one
+   * entry when every unit works in the head's notch).
+   */
+  effortSplit: Array<{ name: string; notch: number; share: number }>;
   /** The full plan of the option (absent for options judged only by a verdict run). */
   plan?: PlanResult;
 }
@@ -59,6 +65,8 @@ export interface AssistanceResult {
   needed: boolean;
   /** The profile the options add. */
   spec: LocomotiveSpec;
+  /** How the units added mid-train or at the rear are driven. */
+  control: UnitControl;
   /** Options that make the verdict `starts`, cheapest first (fewest units, then lowest peak coupler force). */
   options: AssistanceOption[];
   rejected: RejectedOption[];
@@ -73,6 +81,8 @@ export interface AssistanceResult {
 export interface AssistanceOptions {
   /** Profile to add; default the lead unit's. */
   spec?: LocomotiveSpec;
+  /** How units added mid-train or at the rear are driven: remote (default) or helper (units at the head work in multiple). */
+  control?: UnitControl;
   /** Most units to add (1 or 2); default 2. */
   maxUnits?: number;
   /** Most options to confirm with a full, verified plan (the options returned); default 3. */
@@ -131,6 +141,7 @@ export function candidatePlacements(c: StartCase, spec: LocomotiveSpec, units: n
 /** Search for assistance. Throws the planner's "cancelled" error when `shouldStop` says so. */
 export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): AssistanceResult {
   const spec = opts.spec ?? leadSpec(c);
+  const control = opts.control ?? "remote";
   const maxUnits = Math.max(1, Math.min(2, opts.maxUnits ?? 2));
   const budget = opts.budget ?? 16;
   const maxFull = opts.maxFullPlans ?? 3;
@@ -138,7 +149,7 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
   const planOpts = stop ? { shouldStop: stop } : {};
   let runs = 0;
   let complete = true;
-  const result: AssistanceResult = { needed: true, spec, options: [], rejected: [], divide: null, plannerRuns: 0, complete: true };
+  const result: AssistanceResult = { needed: true, spec, control, options: [], rejected: [], divide: null, plannerRuns: 0, complete: true };
 
   let base = opts.baseVerdict;
   if (base === undefined) {
@@ -150,7 +161,7 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
 
   for (let units = 1; units <= maxUnits; units++) {
     if (result.options.length > 0 && !opts.allLevels) break;
-    const candidates = candidatePlacements(c, spec, units).map((added) => candidateOf(c, spec, added, units));
+    const candidates = candidatePlacements(c, spec, units).map((added) => candidateOf(c, spec, added, units, control));
     // Screen: a start needs its quasi-static limits within before any dynamics can make it start.
     const screened: Candidate[] = [];
     for (const k of candidates) {
@@ -200,6 +211,13 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
   return { ...result, plannerRuns: runs, complete };
 }
 
+/** How added units are driven, in words following "The unit added at the rear works …". */
+const CONTROL_WORDS: Record<UnitControl, string> = {
+  "with-head": "in step with the head (same notch)",
+  remote: "as remote power (own notch, set from the head cab)",
+  helper: "as a helper (own driver; each notch change called by radio from the head)",
+};
+
 /** A verdict and its reasons from the threshold's limits of a start judged only as far as "starts". */
 function ruledOut(limits: readonly LimitCheck[]): { verdict: Verdict; reasons: Reason[] } {
   const failing = limits.filter((l) => l.level !== "within");
@@ -208,8 +226,8 @@ function ruledOut(limits: readonly LimitCheck[]): { verdict: Verdict; reasons: R
   return { verdict: over.length > 0 ? "needs-assistance" : "marginal", reasons: [...new Set(deciding.map((l) => l.reason))] };
 }
 
-function candidateOf(c: StartCase, spec: LocomotiveSpec, added: AddedUnits[], units: number): Candidate {
-  return { added, units, case: withAddedUnits(c, spec, added), staticPeakN: 0 };
+function candidateOf(c: StartCase, spec: LocomotiveSpec, added: AddedUnits[], units: number, control: UnitControl): Candidate {
+  return { added, units, case: withAddedUnits(c, spec, added, control), staticPeakN: 0 };
 }
 
 function optionOf(k: Candidate, p: PlanResult): AssistanceOption {
@@ -231,17 +249,32 @@ function optionOf(k: Candidate, p: PlanResult): AssistanceOption {
     peakCompressionAt: at,
     headCompressionN: head,
     timeToTargetS: p.timeToTargetS,
-    note: noteOf(k.added, comp.length, at, comp.length > 0 ? comp[at]! : 0),
+    note: noteOf(k.added, comp.length, at, comp.length > 0 ? comp[at]! : 0, controlOfAdded(k.case, k.added)),
+    effortSplit: effortSplitOf(p),
     plan: p,
   };
+}
+
+/** How the added units mid-train or at the rear are driven (as the option's case has them). */
+function controlOfAdded(c: StartCase, added: readonly AddedUnits[]): UnitControl {
+  const pushing = c.locomotives.slice(c.locomotives.length - added.length).find((g) => g.position !== "head");
+  return pushing?.control ?? "with-head";
+}
+
+/** The effort split of the plan's last power step: each control group's notch and share (one group: all of it). */
+function effortSplitOf(p: PlanResult): AssistanceOption["effortSplit"] {
+  const last = [...p.steps].reverse().find((s) => s.notch > 0 || (s.groups ?? []).some((g) => g.notch > 0));
+  if (!last) return [];
+  if (!last.groups) return [{ name: "all units", notch: last.notch, share: 1 }];
+  return last.groups.map((g) => ({ name: g.name, notch: g.notch, share: g.effortShare }));
 }
 
 /**
  * What to watch: pushing units put the couplings ahead of them in compression; shoving from the rear risks
  * lateral forces at the head of the train, especially with light wagons there [P: Alaska Railroad, Air Brake
- * and Train Handling Manual, 1996, §64.8]. Mid-train and rear units work in step with the head.
+ * and Train Handling Manual, 1996, §64.8].
  */
-function noteOf(added: readonly AddedUnits[], couplings: number, at: number, peakN: number): string {
+function noteOf(added: readonly AddedUnits[], couplings: number, at: number, peakN: number, control: UnitControl): string {
   const pushing = added.some((a) => a.position !== "head");
   if (!pushing) return "All power at the head: the head couplings carry the whole train's pull.";
   const where = couplings > 0 ? (at < couplings / 3 ? "near the head" : at < (2 * couplings) / 3 ? "mid-train" : "near the rear") : "";
@@ -256,7 +289,7 @@ function noteOf(added: readonly AddedUnits[], couplings: number, at: number, pea
         : `The ${units} units added ${place(added[0]!)} work`;
   const rear = added.some((a) => a.position === "rear");
   return [
-    `${who} in step with the head (same notch).`,
+    `${who} ${CONTROL_WORDS[control]}.`,
     `Peak compression ${kN} kN ${where} (coupling ${at + 1} of ${couplings}).`,
     rear ? "Shoving from the rear raises compression ahead of the pushing units: watch lateral forces on curves, especially with light wagons near the head." : "",
   ]

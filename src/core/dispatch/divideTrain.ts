@@ -6,6 +6,7 @@
  * the train ÷ that number is no answer. Found by bisection on the wagon count with the one decision.
  */
 import { planStart, plannerStarts, withTrailingMass, type PlanResult } from "../planner/index.js";
+import { headPart } from "../train/groups.js";
 import type { LocoGroup, StartCase } from "../train/types.js";
 
 export interface DividedTrain {
@@ -38,12 +39,12 @@ export interface DivideOptions {
  * mid-train ahead of the cut stay; units at the rear (or behind the cut) are left with the rest.
  */
 export function firstPart(c: StartCase, wagons: number): StartCase {
-  const share = wagons / c.train.wagons;
   const locomotives: LocoGroup[] = c.locomotives.filter((g) => g.position === "head" || (typeof g.position === "object" && g.position.afterWagon < wagons));
   return {
     ...c,
-    locomotives: locomotives.length > 0 ? locomotives : [{ ...c.locomotives[0]!, position: "head" }],
-    train: { ...c.train, wagons, trailingMassKg: c.train.trailingMassKg * share, lengthM: c.train.lengthM * share },
+    locomotives: locomotives.length > 0 ? locomotives : [{ ...c.locomotives[0]!, position: "head", control: "with-head" }],
+    // A mixed train keeps the groups (and their loads) of the wagons in this part.
+    train: headPart(c.train, wagons),
   };
 }
 

@@ -160,9 +160,19 @@ export class Run {
     this.brakesDoneS = brakesEnd(this.m, this.brakes);
   }
 
+  /** Every unit to one notch (units in multiple). */
   setNotch(notch: number): void {
     const max = this.m.notchStride - 1;
     this.s.notch.fill(notch < 0 ? 0 : notch > max ? max : Math.round(notch));
+  }
+
+  /** Each control group's units to the group's notch (`notches[g]`, group 0 the head's). */
+  setGroupNotches(notches: ArrayLike<number>): void {
+    const max = this.m.notchStride - 1;
+    for (let k = 0; k < this.m.nl; k++) {
+      const notch = notches[this.m.unitGroup[k]!] ?? 0;
+      this.s.notch[k] = notch < 0 ? 0 : notch > max ? max : Math.round(notch);
+    }
   }
 
   get notch(): number {

@@ -12,6 +12,8 @@ export type { Observation, SlipEpisode } from "./runner.js";
 export interface Controls {
   /** Notch for all powered units (they work in step), chosen at each control interval. */
   notch(obs: Observation): number;
+  /** With several control groups: each group's notch (group 0 the head's); when given, it is what is set. */
+  groupNotches?(obs: Observation): ArrayLike<number> | null;
   /** When the train brake release starts at the head, s. */
   trainBrakeReleaseS: number;
   /** When the locomotive brake is eased off, s. */
@@ -62,7 +64,12 @@ export function simulate(m: TrainModel, controls: Controls, opts: SimulateOption
   if (opts.dt !== undefined) runOpts.dt = opts.dt;
   if (opts.trackEnergy) runOpts.trackEnergy = true;
   const run = Run.start(m, { trainBrakeReleaseS: controls.trainBrakeReleaseS, locoBrakeReleaseS: controls.locoBrakeReleaseS }, runOpts);
-  run.setNotch(controls.notch(run.observe()));
+  const setControls = (obs: Observation) => {
+    const groups = controls.groupNotches?.(obs) ?? null;
+    if (groups) run.setGroupNotches(groups);
+    else run.setNotch(controls.notch(obs));
+  };
+  setControls(run.observe());
   let stoppedBy: SimResult["stoppedBy"] = "duration";
   const intervals = Math.ceil(opts.durationS / run.controlIntervalS - 1e-9);
   const progressEvery = Math.max(1, Math.floor(intervals / 50));
@@ -73,7 +80,7 @@ export function simulate(m: TrainModel, controls: Controls, opts: SimulateOption
       stoppedBy = "condition";
       break;
     }
-    run.setNotch(controls.notch(obs));
+    setControls(obs);
     if (k % progressEvery === 0) {
       opts.onProgress?.(k / intervals);
       if (opts.shouldStop?.()) {
@@ -139,15 +146,20 @@ export function resultOf(run: Run, stoppedBy: SimResult["stoppedBy"]): SimResult
   return result;
 }
 
-/** A controller that follows a fixed notch@seconds sequence. */
-export function sequenceControls(seq: ReadonlyArray<{ notch: number; atS: number }>, brakes: { trainBrakeReleaseS: number; locoBrakeReleaseS: number }): Controls {
+/**
+ * A controller that follows a fixed notch@seconds sequence; entries with `groups` set each control group's
+ * notch (group 0 the head's) from then on.
+ */
+export function sequenceControls(seq: ReadonlyArray<{ notch: number; atS: number; groups?: ArrayLike<number> }>, brakes: { trainBrakeReleaseS: number; locoBrakeReleaseS: number }): Controls {
   const sorted = [...seq].sort((a, b) => a.atS - b.atS);
+  const current = (obs: Observation) => {
+    let e: (typeof sorted)[number] | null = null;
+    for (const x of sorted) if (obs.timeS + 1e-9 >= x.atS) e = x;
+    return e;
+  };
   return {
     ...brakes,
-    notch(obs) {
-      let n = 0;
-      for (const e of sorted) if (obs.timeS + 1e-9 >= e.atS) n = e.notch;
-      return n;
-    },
+    notch: (obs) => current(obs)?.notch ?? 0,
+    groupNotches: (obs) => current(obs)?.groups ?? null,
   };
 }

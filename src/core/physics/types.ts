@@ -46,7 +46,7 @@ export interface LocomotiveSpec {
   locoBrakeHoldingN?: number;
 }
 
-/** One wagon type (all wagons of a train share it). */
+/** One wagon type (a train of one type, or one group of a mixed train). */
 export interface WagonSpec {
   id: string;
   label: string;
@@ -62,6 +62,8 @@ export interface WagonSpec {
   davisK?: number;
   /** Optional override of the breakaway resistance, N per kN of weight (‰). */
   startingResistancePermille?: number;
+  /** Mass of the empty wagon, kg, where known: a mixed train's largest-mass search scales the load above it. */
+  tareKg?: number;
 }
 
 /** A piece of track with constant gradient and curvature; chainage grows in the direction of travel. */

@@ -26,29 +26,77 @@ export interface StepRecord {
   effortN: number;
   /** What ended the step. */
   trigger: Trigger;
+  /** Each control group's notch (several groups only; null: every unit in `notch`). */
+  groupNotches: Int32Array | null;
+  /** The highest wheel-climb L/V in the step (when the check is made), with where and under what buff. */
+  wheelClimb: WheelClimbPeak | null;
+}
+
+/** The highest L/V a buff force on a curve put on a vehicle's flanging wheel. */
+export interface WheelClimbPeak {
+  ratio: number;
+  /** The coupling (0: behind the first vehicle) and the vehicle whose wheel it is (head-to-tail index). */
+  coupling: number;
+  vehicle: number;
+  forceN: number;
+  radiusM: number;
+  timeS: number;
 }
 
 export class Branch {
+  /** Group notches still to come (a helper's driver follows the head's call a little later) and when. */
+  pending: { atS: number; notches: Int32Array } | null = null;
+
   constructor(
     public run: Run,
     public steps: StepRecord[],
   ) {}
 
   clone(): Branch {
-    return new Branch(
+    const b = new Branch(
       this.run.clone(),
-      this.steps.map((s) => ({ ...s })),
+      this.steps.map((s) => ({ ...s, wheelClimb: s.wheelClimb ? { ...s.wheelClimb } : null })),
     );
+    b.pending = this.pending;
+    return b;
+  }
+
+  /**
+   * Set the group notches now, except those in `follow`, which take theirs `afterS` later (a helper's
+   * driver acting on the head's call); `notches` is what the step asks of every group.
+   */
+  setGroups(notches: Int32Array, follow: readonly boolean[], afterS: number): void {
+    const now = Int32Array.from(notches);
+    let later = false;
+    for (let g = 0; g < notches.length; g++) {
+      if (!follow[g]) continue;
+      const before = this.appliedGroupNotch(g);
+      if (before !== notches[g]) {
+        now[g] = before;
+        later = true;
+      }
+    }
+    this.run.setGroupNotches(now);
+    this.pending = later ? { atS: this.run.s.t + afterS, notches } : null;
+  }
+
+  /** The notch group g's units are in now. */
+  private appliedGroupNotch(g: number): number {
+    const m = this.run.m;
+    for (let k = 0; k < m.nl; k++) if (m.unitGroup[k] === g) return this.run.s.notch[k]!;
+    return 0;
   }
 
   get current(): StepRecord {
     return this.steps[this.steps.length - 1]!;
   }
 
-  /** Begin a new step at the run's present moment. */
-  open(phase: Phase, notch: number): void {
+  /** Begin a new step at the run's present moment; with several control groups, each group's notch. */
+  open(phase: Phase, notch: number, groupNotches: Int32Array | null = null): void {
     const s = this.run.s;
-    this.run.setNotch(notch);
+    if (groupNotches) this.run.setGroupNotches(groupNotches);
+    else this.run.setNotch(notch);
+    this.pending = null;
     this.steps.push({
       phase,
       notch,
@@ -66,13 +114,15 @@ export class Branch {
       peakCompressionN: 0,
       effortN: 0,
       trigger: "time",
+      groupNotches,
+      wheelClimb: null,
     });
   }
 
   /** Fold an observation into the current step's records. */
   note(ctx: PlannerContext, obs: Observation): void {
     const st = this.current;
-    const a = notchAdhesion(ctx, st.notch, Math.max(0, obs.leadSpeedMps));
+    const a = notchAdhesion(ctx, st.groupNotches ?? st.notch, Math.max(0, obs.leadSpeedMps));
     if (a.risk > st.maxRisk) st.maxRisk = a.risk;
     if (a.use > st.maxUse) {
       st.maxUse = a.use;
@@ -85,10 +135,36 @@ export class Branch {
     st.endTravelM = obs.leadTravelM;
     st.endSpeedMps = obs.leadSpeedMps;
     st.effortN = obs.effortTargetN;
+    if (ctx.wheelClimb.active && obs.maxCompressionN > 0) this.noteWheelClimb(ctx, st);
+  }
+
+  /** The wheel-climb L/V of every coupling in buff on a curve now; the step keeps the highest. */
+  private noteWheelClimb(ctx: PlannerContext, st: StepRecord): void {
+    const s = this.run.s;
+    const wc = ctx.wheelClimb;
+    for (let j = 0; j < s.couplerF.length; j++) {
+      const f = -s.couplerF[j]!;
+      if (f <= 0) continue;
+      const r = ctx.segRadiusM[s.seg[j]!] ?? 0;
+      if (r <= 0) continue;
+      const ratio = (f * wc.ratioPerNPerInvR[j]!) / r;
+      if (!st.wheelClimb || ratio > st.wheelClimb.ratio) st.wheelClimb = { ratio, coupling: j, vehicle: wc.vehicle[j]!, forceN: f, radiusM: r, timeS: s.t };
+    }
+  }
+
+  /** The highest wheel-climb L/V over all steps so far (null: none in buff on a curve). */
+  wheelClimbPeak(): WheelClimbPeak | null {
+    let best: WheelClimbPeak | null = null;
+    for (const st of this.steps) if (st.wheelClimb && (!best || st.wheelClimb.ratio > best.ratio)) best = st.wheelClimb;
+    return best;
   }
 
   /** Advance one control interval and record it. */
   tick(ctx: PlannerContext): Observation {
+    if (this.pending && this.run.s.t >= this.pending.atS - 1e-9) {
+      this.run.setGroupNotches(this.pending.notches);
+      this.pending = null;
+    }
     this.run.advanceInterval();
     const obs = this.run.observe();
     this.note(ctx, obs);

@@ -6,52 +6,21 @@
 import { adhesionSpeedFactor, slipRisk, standstillMedian } from "../physics/adhesion.js";
 import { locoBrakeHoldingN, trainBrakeHoldingN } from "../physics/brakes.js";
 import { buildConsist, type Consist } from "../train/consist.js";
-import { standingForces, type StandingForces } from "../train/standing.js";
-import { staticCheckOf, type StaticCheck } from "./staticCheck.js";
-import { modelFromCase, trainBrakeReleaseS, type TrainModel } from "../train/trainModel.js";
+import { standingForces } from "../train/standing.js";
+import { staticCheckOf } from "./staticCheck.js";
+import { modelFromCase, trainBrakeReleaseS } from "../train/trainModel.js";
 import { notchTargetN } from "../dynamics/runner.js";
 import type { Settings, StartCase } from "../train/types.js";
 import { minimumAccelerationMps2, needAtN } from "./need.js";
+import { WHEEL_CLIMB_ALLOWANCE, buffLateralRatio } from "../physics/wheelClimb.js";
+import { standingNotches } from "./groupNotches.js";
 
 import type { StartKind } from "./outcome.js";
+import type { PlannerContext } from "./contextShape.js";
 
 export type { StartKind } from "./outcome.js";
+export type { PlannerContext } from "./contextShape.js";
 
-export interface PlannerContext {
-  c: StartCase;
-  consist: Consist;
-  forces: StandingForces;
-  st: StaticCheck;
-  /** The dynamics model, with each unit's adhesion at the quantile the plan is made for. */
-  model: TrainModel;
-  /** Quantile of the rail condition the plan assumes (the slip-risk threshold, or the marginal bound). */
-  quantile: number;
-  sigmaLn: number;
-  /** Median standstill adhesion of each unit (sand included where fitted and used): slip risks are read against it. */
-  mu0Median: Float64Array;
-  /** Highest slip risk a notch may carry without being needed: the case's threshold. */
-  threshold: number;
-  /** Peak coupler force the plan must keep under, N. */
-  couplerAllowanceN: number;
-  /** Net force pulling the released train backwards (grade less what holds it), N; ≤ 0 when it would not roll back. */
-  rollBackPullN: number;
-  /** Net force pulling the released train forwards down a falling grade, N; ≤ 0 when it would stand. */
-  runAwayPullN: number;
-  /** What the locomotive brakes of all units hold, N. */
-  locoBrakeN: number;
-  /** What the train brake holds, fully applied, N. */
-  trainBrakeN: number;
-  startKind: StartKind;
-  /** On a falling grade: the locomotive brake alone (with 10 % in hand) holds the released train. */
-  locoBrakeHolds: boolean;
-  /** Time for the train-brake release to reach the rear and the rear brake to come off, s. */
-  releaseS: number;
-  maxNotch: number;
-  trainMassKg: number;
-  effMassKg: number;
-  /** Slowest acceleration that still reaches the target in time, m/s² (need.ts). */
-  aMinMps2: number;
-}
 
 /** Notch settling: the effort lag's time constant ×3 and never under the 2–3 s practice minimum. */
 export const MIN_NOTCH_DWELL_S = 3;
@@ -88,6 +57,7 @@ export function plannerContext(c: StartCase, quantile = c.settings.slipRiskThres
   // A train the locomotive brake cannot hold on a falling grade is held on the train brake, eased in stages.
   const model = modelFromCase(c, { adhesionQuantile: quantile, graduatedRelease: startKind === "gravity" && !locoBrakeHolds });
   const specs = model.locoSpecs;
+  const groupMaxNotch = consist.controlGroups.map((g) => Math.min(...g.units.map((k) => specs[k]!.notchPower.length)));
   return {
     c,
     consist,
@@ -99,6 +69,14 @@ export function plannerContext(c: StartCase, quantile = c.settings.slipRiskThres
     mu0Median: Float64Array.from(specs.map((s) => standstillMedian(cond, c.conditions.sand && s.sanders))),
     threshold: c.settings.slipRiskThreshold,
     couplerAllowanceN: c.train.couplerLimitN / c.settings.couplerSafetyFactor,
+    buffAllowanceN: (c.train.couplerBuffLimitN ?? c.train.couplerLimitN) / c.settings.couplerSafetyFactor,
+    wheelClimb: wheelClimbOf(c, consist),
+    segRadiusM: Float64Array.from(c.location.track.segments.map((g) => g.curveRadiusM)),
+    groupMaxNotch,
+    ladder: null,
+    standingSeg: standingSegments(c, consist),
+    scratch: new Float64Array(consist.vehicles.length),
+    scratchEffort: new Float64Array(consist.vehicles.length),
     rollBackPullN: grade - hold,
     runAwayPullN,
     locoBrakeN,
@@ -106,34 +84,73 @@ export function plannerContext(c: StartCase, quantile = c.settings.slipRiskThres
     startKind,
     locoBrakeHolds,
     releaseS: trainBrakeReleaseS(consist.lengthM),
-    maxNotch: Math.min(...specs.map((s) => s.notchPower.length)),
+    // With several control groups the search's notch numbers are levels (Σ of the groups' notches).
+    maxNotch: consist.controlGroups.length > 1 ? groupMaxNotch.reduce((s, n) => s + n, 0) : Math.min(...specs.map((s) => s.notchPower.length)),
     trainMassKg: consist.vehicles.reduce((s, v) => s + v.massKg, 0),
     effMassKg,
     aMinMps2: minimumAccelerationMps2(c.target),
   };
 }
 
+/**
+ * The wheel-climb check's figures per coupling: made when a unit stands behind the head (it pushes) or the
+ * train is mixed; the neighbour with the larger L/V per newton of buff is the one that counts.
+ */
+function wheelClimbOf(c: StartCase, consist: Consist): PlannerContext["wheelClimb"] {
+  const vs = consist.vehicles;
+  const nc = Math.max(0, vs.length - 1);
+  const ratio = new Float64Array(nc);
+  const vehicle = new Int32Array(nc);
+  const active = c.locomotives.some((g) => g.position !== "head") || c.train.groups !== undefined;
+  for (let j = 0; j < nc; j++) {
+    const a = buffLateralRatio(1, 1, vs[j]!.lengthM, vs[j]!.axles, vs[j]!.massKg);
+    const b = buffLateralRatio(1, 1, vs[j + 1]!.lengthM, vs[j + 1]!.axles, vs[j + 1]!.massKg);
+    ratio[j] = Math.max(a, b);
+    vehicle[j] = b > a ? j + 1 : j;
+  }
+  return { active, allowance: WHEEL_CLIMB_ALLOWANCE, ratioPerNPerInvR: ratio, vehicle };
+}
+
+/** The track segment under each vehicle's centre where the train stands. */
+function standingSegments(c: StartCase, consist: Consist): Int32Array {
+  const segs = c.location.track.segments;
+  return Int32Array.from(consist.vehicles, (v) => {
+    let k = 0;
+    while (k < segs.length - 1 && v.centreChainageM >= segs[k]!.startM + segs[k]!.lengthM) k++;
+    return k;
+  });
+}
+
+/** A notch as every unit's notch: with several control groups a number is a level, standing for its group notches (groupNotches.ts). */
+export type NotchSetting = number | ArrayLike<number>;
+
+/** The notch unit k works in under a setting. */
+export function unitNotch(ctx: PlannerContext, setting: NotchSetting, k: number): number {
+  if (typeof setting === "number") return ctx.model.groupCount > 1 ? standingNotches(ctx, setting)[ctx.model.unitGroup[k]!]! : setting;
+  return setting[ctx.model.unitGroup[k]!] ?? 0;
+}
+
 /** Σ effort all units ask for in a notch at a speed, N. */
-export function notchEffortAllN(ctx: PlannerContext, notch: number, speedMps: number): number {
+export function notchEffortAllN(ctx: PlannerContext, notch: NotchSetting, speedMps: number): number {
   let f = 0;
-  for (let k = 0; k < ctx.model.nl; k++) f += notchTargetN(ctx.model, k, notch, speedMps);
+  for (let k = 0; k < ctx.model.nl; k++) f += notchTargetN(ctx.model, k, unitNotch(ctx, notch, k), speedMps);
   return f;
 }
 
 /** Σ effort the rails pass in a notch at a speed on the rail the plan assumes (the protection holds the rest back), N. */
-export function notchDeliveredN(ctx: PlannerContext, notch: number, speedMps: number): number {
+export function notchDeliveredN(ctx: PlannerContext, notch: NotchSetting, speedMps: number): number {
   const m = ctx.model;
   const factor = adhesionSpeedFactor(speedMps);
   let f = 0;
-  for (let k = 0; k < m.nl; k++) f += Math.min(notchTargetN(m, k, notch, speedMps), m.adhesiveWeightN[k]! * m.mu0[k]! * factor);
+  for (let k = 0; k < m.nl; k++) f += Math.min(notchTargetN(m, k, unitNotch(ctx, notch, k), speedMps), m.adhesiveWeightN[k]! * m.mu0[k]! * factor);
   return f;
 }
 
 /** Every unit in this notch asks for at least what the rails give on the rail the plan assumes. */
-export function notchSaturated(ctx: PlannerContext, notch: number, speedMps: number): boolean {
+export function notchSaturated(ctx: PlannerContext, notch: NotchSetting, speedMps: number): boolean {
   const m = ctx.model;
   const factor = adhesionSpeedFactor(speedMps);
-  for (let k = 0; k < m.nl; k++) if (notchTargetN(m, k, notch, speedMps) < m.adhesiveWeightN[k]! * m.mu0[k]! * factor) return false;
+  for (let k = 0; k < m.nl; k++) if (notchTargetN(m, k, unitNotch(ctx, notch, k), speedMps) < m.adhesiveWeightN[k]! * m.mu0[k]! * factor) return false;
   return true;
 }
 
@@ -142,13 +159,13 @@ export function notchSaturated(ctx: PlannerContext, notch: number, speedMps: num
  * condition's spread): the chance that the rails give less than the notch asks, i.e. that the wheel-slip
  * protection acts in this step.
  */
-export function notchAdhesion(ctx: PlannerContext, notch: number, speedMps: number): { risk: number; use: number } {
+export function notchAdhesion(ctx: PlannerContext, notch: NotchSetting, speedMps: number): { risk: number; use: number } {
   const m = ctx.model;
   let risk = 0;
   let use = 0;
   const factor = adhesionSpeedFactor(speedMps);
   for (let k = 0; k < m.nl; k++) {
-    const demandMu = notchTargetN(m, k, notch, speedMps) / m.adhesiveWeightN[k]!;
+    const demandMu = notchTargetN(m, k, unitNotch(ctx, notch, k), speedMps) / m.adhesiveWeightN[k]!;
     const mu = ctx.mu0Median[k]! * factor;
     risk = Math.max(risk, slipRisk(demandMu, mu, ctx.sigmaLn));
     use = Math.max(use, demandMu / mu);

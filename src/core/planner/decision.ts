@@ -18,7 +18,11 @@
  *    and a holding notch against the pull back; on a falling grade the locomotive brake and the train brake
  *    (eased in stages) against the pull forward — with 10 % in hand. Band: without it.
  *  - coupler tension and compression: the peaks of the planned start in the full dynamics against the
- *    working limit ÷ safety factor. Band: up to the working limit.
+ *    working limit ÷ safety factor (in buff the train's buff limit, default the same). Band: up to the
+ *    working limit.
+ *  - wheel climb (when units push or the train is mixed): the highest L/V a compressed coupler on a curve
+ *    puts on a vehicle's flanging wheel, against Nadal's limit ÷ 1.2 (physics/wheelClimb.ts). Band: Nadal's
+ *    limit itself.
  *  - distance: locomotive travel until the plan is at its running notch against the distance clear ahead.
  *    Band: the stretch (every vehicle moving) within it.
  *  - time to target: the planned start reaches its target within the plan's time cap. No band. Counted when
@@ -34,6 +38,7 @@ import { HOLD_RESERVE, marginalBound, plannerContext, type PlannerContext } from
 import { ACCELERATE_MAX_S, type SearchOptions, type SearchResult } from "./search.js";
 import { memoSearchPlan } from "./evaluationMemo.js";
 import { POWER_RESERVE } from "./staticCheck.js";
+import { WHEEL_CLIMB_ALLOWANCE, WHEEL_CLIMB_MARGIN, nadalLimit } from "../physics/wheelClimb.js";
 import { LIMIT_REASON, type LimitCheck, type LimitLevel, type LimitName, type Reason, type StartKind, type Verdict } from "./outcome.js";
 
 export { LIMIT_REASON, LIMIT_WORDS, type LimitCheck, type LimitLevel, type LimitName } from "./outcome.js";
@@ -143,8 +148,10 @@ export function dynamicLimits(ctx: PlannerContext, r: SearchResult, withTarget: 
   const limit = c.train.couplerLimitN;
   const factor = c.settings.couplerSafetyFactor;
   out.push(limitCheck("coupler-tension", "N", tension, ctx.couplerAllowanceN, { demand: tension, allowance: limit, what: "the working limit" }, `peak pull ${kN(tension)} against ${kN(limit)} ÷ ${factor}`));
-  // The same working limit in buff until a train gives its own.
-  out.push(limitCheck("coupler-compression", "N", compression, ctx.couplerAllowanceN, { demand: compression, allowance: limit, what: "the working limit" }, `peak push ${kN(compression)} against ${kN(limit)} ÷ ${factor}`));
+  // The working limit in buff: the train's own, else the same as in draft.
+  const buffLimit = c.train.couplerBuffLimitN ?? limit;
+  out.push(limitCheck("coupler-compression", "N", compression, ctx.buffAllowanceN, { demand: compression, allowance: buffLimit, what: "the working limit" }, `peak push ${kN(compression)} against ${kN(buffLimit)} ÷ ${factor}`));
+  if (ctx.wheelClimb.active) out.push(wheelClimbLimit(ctx, r));
   const stretchM = r.branch.run.locoTravelToStretchM;
   if (stretchM !== null) {
     const clear = c.location.clearAheadM;
@@ -163,6 +170,28 @@ export function dynamicLimits(ctx: PlannerContext, r: SearchResult, withTarget: 
     out.push(limitCheck("time-to-target", "s", demand, ACCELERATE_MAX_S, null, reached ? `target reached ${Math.round(demand)} s after taking power` : `target not reached: ${Math.round(progress * 100)} % of it at best`));
   }
   return out;
+}
+
+/**
+ * Wheel climb under buff (physics/wheelClimb.ts): the highest L/V a compressed coupler on a curve put on a
+ * vehicle's flanging wheel during the planned start, against Nadal's limit ÷ its margin. Band: Nadal's limit.
+ */
+function wheelClimbLimit(ctx: PlannerContext, r: SearchResult): LimitCheck {
+  const peak = r.branch.wheelClimbPeak();
+  const nadal = nadalLimit();
+  const what = peak
+    ? `L/V ${peak.ratio.toFixed(2)} at ${vehicleWords(ctx, peak.vehicle)} under ${kN(peak.forceN)} of buff on a ${Math.round(peak.radiusM)} m curve, against ${WHEEL_CLIMB_ALLOWANCE.toFixed(2)} (Nadal's limit ${nadal.toFixed(2)} ÷ ${WHEEL_CLIMB_MARGIN})`
+    : "no coupling in buff on a curve";
+  const demand = peak?.ratio ?? 0;
+  return limitCheck("wheel-climb", "ratio", demand, WHEEL_CLIMB_ALLOWANCE, { demand, allowance: nadal, what: "Nadal's limit itself" }, what);
+}
+
+/** A vehicle in words: "wagon 12 (24 t)" or "unit 3 (locomotive)". */
+export function vehicleWords(ctx: PlannerContext, index: number): string {
+  const v = ctx.consist.vehicles[index];
+  if (!v) return `vehicle ${index + 1}`;
+  if (v.kind === "wagon") return `wagon ${v.wagonNumber ?? index + 1} (${Math.round(v.massKg / 1000)} t)`;
+  return `unit ${ctx.consist.locoIndices.indexOf(index) + 1} (locomotive)`;
 }
 
 // ---------------------------------------------------------------------------------------------- the decision

@@ -7,7 +7,7 @@ export type Reason = "adhesion" | "power" | "coupler" | "distance" | "brake";
 export type StartKind = "power" | "gravity";
 
 /** The limits a start is judged against (decision.ts). */
-export type LimitName = "adhesion" | "power" | "brake-holding" | "coupler-tension" | "coupler-compression" | "distance" | "time-to-target";
+export type LimitName = "adhesion" | "power" | "brake-holding" | "coupler-tension" | "coupler-compression" | "wheel-climb" | "distance" | "time-to-target";
 export type LimitLevel = "within" | "soft" | "over";
 
 /** The reason word each limit reports under (the verdict's reasons). */
@@ -17,6 +17,7 @@ export const LIMIT_REASON: Record<LimitName, Reason> = {
   "brake-holding": "brake",
   "coupler-tension": "coupler",
   "coupler-compression": "coupler",
+  "wheel-climb": "coupler",
   distance: "distance",
   "time-to-target": "power",
 };
@@ -28,6 +29,7 @@ export const LIMIT_WORDS: Record<LimitName, string> = {
   "brake-holding": "brake holding",
   "coupler-tension": "coupler tension",
   "coupler-compression": "coupler compression",
+  "wheel-climb": "wheel climb",
   distance: "distance",
   "time-to-target": "time to target",
 };
@@ -36,8 +38,8 @@ export const LIMIT_WORDS: Record<LimitName, string> = {
 export interface LimitCheck {
   name: LimitName;
   reason: Reason;
-  /** Unit of demand and allowance: force (N), distance (m) or time (s). */
-  unit: "N" | "m" | "s";
+  /** Unit of demand and allowance: force (N), distance (m), time (s) or a ratio (L/V). */
+  unit: "N" | "m" | "s" | "ratio";
   demand: number;
   allowance: number;
   /** allowance ÷ demand (capped at 99; 99 when nothing is demanded). */

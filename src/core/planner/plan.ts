@@ -12,10 +12,12 @@ import { massCeilingKg, startableMasses } from "./startableMass.js";
 import { gradeAt } from "../physics/track.js";
 import type { StartCase } from "../train/types.js";
 import type { PlannerContext } from "./context.js";
-import { brakeSchedule, type SearchResult } from "./search.js";
+import { HELPER_FOLLOW_S, brakeSchedule, type SearchResult } from "./search.js";
+import type { StepRecord } from "./branch.js";
 import { planSteps } from "./steps.js";
 import type { PlanOptions, PlanResult, PlanSeries, PlanStep } from "./types.js";
-import { goesAt, judge, quasiStaticLimits, startsAt, type Decision } from "./decision.js";
+import { goesAt, judge, quasiStaticLimits, startsAt, vehicleWords, type Decision } from "./decision.js";
+import { WHEEL_CLIMB_ALLOWANCE, nadalLimit } from "../physics/wheelClimb.js";
 import { LIMIT_WORDS, type LimitCheck } from "./outcome.js";
 import { marginalBound, plannerContext } from "./context.js";
 import { MAX_MARGIN } from "./need.js";
@@ -55,6 +57,7 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
     peakCompressionN: r.branch.steps.reduce((m, s) => Math.max(m, s.peakCompressionN), 0),
     couplerPeaksN: run.s.peakTensionN.slice(),
     couplerCompressionPeaksN: run.s.peakCompressionN.slice(),
+    wheelClimb: wheelClimbOf(ctx, r),
     timeToTargetS: r.targetReachedS === null ? null : r.targetReachedS - r.powerS,
     maxStartableMassKg: masses.startsKg,
     largestMarginalMassKg: masses.marginalKg,
@@ -87,6 +90,13 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
       maxRunOutMps: run.s.takeUp.maxRunOutMps,
     },
   };
+}
+
+/** The plan's highest wheel-climb L/V with where it was (when the check is made). */
+function wheelClimbOf(ctx: PlannerContext, r: SearchResult): PlanResult["wheelClimb"] {
+  const peak = ctx.wheelClimb.active ? r.branch.wheelClimbPeak() : null;
+  if (!peak) return null;
+  return { ratio: peak.ratio, allowance: WHEEL_CLIMB_ALLOWANCE, nadalLimit: nadalLimit(), vehicle: vehicleWords(ctx, peak.vehicle), forceN: peak.forceN, radiusM: peak.radiusM };
 }
 
 /** The smallest margin of each reason, 99 when none of its limits is in question. */
@@ -133,7 +143,8 @@ function advice(c: StartCase, d: Decision, masses: { startsKg: number; marginalK
     }
   }
   if (Number.isFinite(masses.startsKg)) {
-    if (masses.startsKg > 0) changes.push(`less load: ${t(masses.startsKg)} or less starts${masses.marginalKg > masses.startsKg ? `, ${t(masses.marginalKg)} or less is at least marginal` : ""}`);
+    const scaled = c.train.groups ? " (every wagon group's load above tare scaled in proportion)" : "";
+    if (masses.startsKg > 0) changes.push(`less load: ${t(masses.startsKg)} or less starts${masses.marginalKg > masses.startsKg ? `, ${t(masses.marginalKg)} or less is at least marginal` : ""}${scaled}`);
     else changes.push("less load will not do it: not even a lightly loaded train of these wagons starts here");
   } else changes.push("less load");
   changes.push("assistance (more units at the head, mid-train or at the rear)");
@@ -185,6 +196,28 @@ export function maxStartableMassKg(c: StartCase, shouldStop?: () => boolean): nu
 }
 
 /**
+ * The notch changes of a plan's steps as a replayable sequence: each step's notch at its start, with every
+ * control group's notch where there are several — a helper's new notch `HELPER_FOLLOW_S` after the head's,
+ * as the search ran it.
+ */
+export function notchSequence(ctx: PlannerContext, steps: ReadonlyArray<Pick<StepRecord, "notch" | "startS" | "groupNotches">>): Array<{ notch: number; atS: number; groups?: Int32Array }> {
+  const helpers = ctx.consist.controlGroups.map((g) => g.control === "helper");
+  const out: Array<{ notch: number; atS: number; groups?: Int32Array }> = [];
+  let before: Int32Array | null = null;
+  steps.forEach((st, k) => {
+    const groups = st.groupNotches;
+    if (!groups) return void out.push({ notch: st.notch, atS: st.startS });
+    if (k > 0 && before && helpers.some((h, g) => h && before![g] !== groups[g])) {
+      const first = Int32Array.from(groups, (n, g) => (helpers[g] ? before![g]! : n));
+      out.push({ notch: st.notch, atS: st.startS, groups: first });
+      out.push({ notch: st.notch, atS: st.startS + HELPER_FOLLOW_S, groups });
+    } else out.push({ notch: st.notch, atS: st.startS, groups });
+    before = groups;
+  });
+  return out;
+}
+
+/**
  * Re-run the chosen notch timing in the full model on the median rail: on a rail better than the plan
  * assumes each notch passes more of what it asks into the couplers. Reported, not judged (the verdict is
  * the decision's, on the pessimistic rail).
@@ -192,7 +225,7 @@ export function maxStartableMassKg(c: StartCase, shouldStop?: () => boolean): nu
 function verify(ctx: PlannerContext, r: SearchResult): NonNullable<PlanResult["verification"]> {
   const q = 0.5;
   const model = modelFromCase(ctx.c, { adhesionQuantile: q, graduatedRelease: ctx.startKind === "gravity" && !ctx.locoBrakeHolds });
-  const seq = r.branch.steps.map((s) => ({ notch: s.notch, atS: s.startS }));
+  const seq = notchSequence(ctx, r.branch.steps);
   // Slips and coupler peaks come with notch changes: verify through the last change and a minute after it.
   const lastChange = r.branch.steps[r.branch.steps.length - 1]!.startS;
   const end = Math.min(r.branch.run.s.t, lastChange + 60);

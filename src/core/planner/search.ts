@@ -9,6 +9,8 @@
 import { Run, type BrakeSchedule, type Observation } from "../dynamics/runner.js";
 import { stabilityTimeStep } from "../train/trainModel.js";
 import { Branch } from "./branch.js";
+import { GROUP_RATIO_LIMIT, estimateCouplers, raises, settingLevel, standingNotches, type CouplerEstimate } from "./groupNotches.js";
+import type { Phase } from "./types.js";
 import { MIN_NOTCH_DWELL_S, holdingNotch, needNowN, notchAdhesion, notchDeliveredN, notchSaturated, type PlannerContext, type StartKind } from "./context.js";
 
 /** Longest the planner waits for a stretch notch to get the last vehicle moving, s. */
@@ -62,6 +64,35 @@ export function brakeSchedule(ctx: PlannerContext): BrakeSchedule {
   return { trainBrakeReleaseS: 0, locoBrakeReleaseS: powerS };
 }
 
+/**
+ * Begin a step at notch `notch` (with several control groups: at level `notch`, the standing train's setting
+ * of that level unless `set` gives the groups' notches); otherwise every unit in that notch.
+ */
+function openStep(ctx: PlannerContext, b: Branch, phase: Phase, notch: number, set: Int32Array | null = null): void {
+  if (ctx.model.groupCount <= 1) return b.open(phase, notch);
+  const groups = set ?? standingNotches(ctx, notch);
+  const before = b.steps.length > 0 ? Int32Array.from(b.run.s.notch) : null;
+  b.open(phase, groups[0]!, groups);
+  // A helper's driver takes the new notch on the head driver's call, a little after the head.
+  const follow = ctx.consist.controlGroups.map((g) => g.control === "helper");
+  if (before && follow.some((x) => x)) {
+    b.run.s.notch.set(before);
+    b.setGroups(groups, follow, HELPER_FOLLOW_S);
+  }
+}
+
+/** The search's notch of a step: the notch, or with several control groups the level (Σ of the groups' notches). */
+function levelOf(b: Branch): number {
+  const g = b.current.groupNotches;
+  return g ? settingLevel(g) : b.current.notch;
+}
+
+/**
+ * How long after the head a helper's driver takes a new notch: the head driver's radio call and the
+ * helper driver's response [M: a few seconds; common practice is to call each change and confirm it].
+ */
+export const HELPER_FOLLOW_S = 3;
+
 /** Run the search for a case. */
 export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): SearchResult {
   const check = () => {
@@ -71,7 +102,7 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
   const powerS = ctx.releaseS + 2;
   const run = Run.start(ctx.model, brakeSchedule(ctx));
   const prep = new Branch(run, []);
-  prep.open("prepare", Math.max(0, hold));
+  openStep(ctx, prep, "prepare", Math.max(0, hold));
   const base: SearchResult = {
     branch: prep,
     powerS,
@@ -108,7 +139,7 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
   if (ctx.startKind === "gravity") {
     // No notch: gravity starts the train; power only if it then needs more to reach the target.
     const b = prep.clone();
-    b.open("accelerate", 0);
+    openStep(ctx, b, "accelerate", 0);
     const acc = accelerate(ctx, b, MIN_NOTCH_DWELL_S, prep.run.s.t, check);
     opts.onProgress?.(0.85);
     return { ...base, branch: b, powerS: prep.run.s.t, ...accelerationOutcome(acc) };
@@ -198,7 +229,7 @@ function canEverMove(ctx: PlannerContext, notch: number): boolean {
 /** Take `notch` and wait for the last vehicle to move; classify how it went. */
 function stretchWith(ctx: PlannerContext, b: Branch, notch: number): StretchOutcome {
   b.current.trigger = "time";
-  b.open("stretch", notch);
+  openStep(ctx, b, "stretch", notch);
   const start = b.run.s.t;
   const limit = ctx.c.settings.stretchSpeedMps;
   let outcome: StretchOutcome = "ok";
@@ -219,9 +250,18 @@ function stretchWith(ctx: PlannerContext, b: Branch, notch: number): StretchOutc
   return outcome;
 }
 
-/** The notch the policy wants next, or the same notch. */
-function nextNotch(ctx: PlannerContext, obs: Observation, notch: number, inStepS: number, dwell: number, capped: { hit: boolean }, seg: Int32Array): number {
-  return policyNotch(ctx, notch, Math.max(0, obs.leadSpeedMps), obs.leadTravelM, inStepS, dwell, obs.effortSettled && !obs.slipped, obs.maxTensionN, capped, seg);
+/** The notch (with several control groups: the level and the groups' notches) the policy wants next, or the same. */
+function nextNotch(ctx: PlannerContext, b: Branch, obs: Observation, inStepS: number, dwell: number, capped: { hit: boolean }, seg: Int32Array): { notch: number; set: Int32Array | null } {
+  const notch = levelOf(b);
+  const v = Math.max(0, obs.leadSpeedMps);
+  const settled = obs.effortSettled && !obs.slipped;
+  const groups = b.current.groupNotches;
+  if (groups) {
+    if (notch >= ctx.maxNotch || inStepS < dwell || !settled) return { notch, set: null };
+    const set = groupPolicy(ctx, groups, v, obs.leadTravelM, obs.maxTensionN, obs.maxCompressionN, capped, seg);
+    return set ? { notch: settingLevel(set), set } : { notch, set: null };
+  }
+  return { notch: policyNotch(ctx, notch, v, obs.leadTravelM, inStepS, dwell, settled, obs.maxTensionN, capped, seg), set: null };
 }
 
 /**
@@ -264,6 +304,55 @@ export function policyNotch(
 }
 
 /**
+ * The notch rule with several control groups: raise one group by one notch — the group whose raise keeps the
+ * couplings most evenly loaded (groupNotches.ts) — when the rails pass more, a train gravity starts needs
+ * more, and the couplers stay within their allowances: the estimate of the new setting, and the present
+ * peaks raised by what the estimate adds, in tension and in compression (wheel climb included). Null: hold.
+ */
+function groupPolicy(ctx: PlannerContext, from: Int32Array, v: number, travelM: number, tensionN: number, compressionN: number, capped: { hit: boolean }, seg: Int32Array): Int32Array | null {
+  const now = estimateCouplers(ctx, from, v, travelM, seg);
+  if (ctx.startKind === "gravity" && now.deliveredN >= needNowN(ctx, travelM, v, seg)) {
+    capped.hit = true;
+    return null;
+  }
+  // A raise may not take a coupling beyond 95 % of its allowance, nor add to one that is there already.
+  const within = (e: CouplerEstimate): boolean => {
+    const addT = e.maxTensionN - now.maxTensionN;
+    const addC = e.maxCompressionN - now.maxCompressionN;
+    return (
+      e.worstRatio <= Math.max(GROUP_RATIO_LIMIT, now.worstRatio) &&
+      (addT <= 0 || tensionN + addT <= GROUP_RATIO_LIMIT * ctx.couplerAllowanceN) &&
+      (addC <= 0 || compressionN + addC <= GROUP_RATIO_LIMIT * ctx.buffAllowanceN)
+    );
+  };
+  // Every group a notch up together (as synchronous distributed power does) while that keeps within.
+  const together = raiseAll(ctx, from);
+  if (together) {
+    const e = estimateCouplers(ctx, together, v, travelM, seg);
+    if (e.deliveredN - now.deliveredN > 1 && within(e)) return together;
+  }
+  const ups = raises(ctx, from, v, travelM, seg, false).filter((u) => u.gainN > 1);
+  if (ups.length === 0) {
+    capped.hit = true;
+    return null;
+  }
+  return ups.find((u) => within(u.estimate))?.notches ?? null;
+}
+
+/** Every group below its highest notch one notch up; null when that is every group's highest already, or only some can go. */
+function raiseAll(ctx: PlannerContext, from: Int32Array): Int32Array | null {
+  const next = Int32Array.from(from);
+  let raised = 0;
+  for (let g = 0; g < from.length; g++) {
+    if (from[g]! < ctx.groupMaxNotch[g]!) {
+      next[g]! += 1;
+      raised++;
+    }
+  }
+  return raised > 1 ? next : null;
+}
+
+/**
  * Highest slip risk a notch will carry from the present speed up to the target. While the effort is held
  * by the current limit, adhesion falls with speed and the risk rises; once the power limit takes over,
  * effort falls faster than adhesion and the risk falls. So the worst is at the present speed, where the
@@ -298,11 +387,11 @@ function buildWith(ctx: PlannerContext, b: Branch, dwell: number): { endS: numbe
   for (;;) {
     const obs = b.tick(ctx);
     if (targetReached(ctx, obs)) break;
-    const notch = b.current.notch;
-    const next = nextNotch(ctx, obs, notch, obs.timeS - b.current.startS, dwell, capped, seg);
+    const notch = levelOf(b);
+    const { notch: next, set } = nextNotch(ctx, b, obs, obs.timeS - b.current.startS, dwell, capped, seg);
     if (next !== notch) {
       b.current.trigger = next > notch ? "time" : "speed";
-      b.open("build", next);
+      openStep(ctx, b, "build", next, set);
       lastChange = obs.timeS;
     } else if ((notch >= ctx.maxNotch && obs.timeS - lastChange >= dwell) || obs.timeS - lastChange > 15) {
       break;
@@ -357,11 +446,11 @@ function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numbe
       bestAt = obs.timeS;
     } else if (ctx.c.target.kind === "speed" && obs.timeS - bestAt > 60) break;
     if (obs.timeS - powerS > ACCELERATE_MAX_S) break;
-    const notch = b.current.notch;
-    const next = nextNotch(ctx, obs, notch, obs.timeS - b.current.startS, dwell, capped, seg);
+    const notch = levelOf(b);
+    const { notch: next, set } = nextNotch(ctx, b, obs, obs.timeS - b.current.startS, dwell, capped, seg);
     if (next !== notch) {
       b.current.trigger = "speed";
-      b.open(next > notch && notch === 0 ? "build" : "accelerate", next);
+      openStep(ctx, b, next > notch && notch === 0 ? "build" : "accelerate", next, set);
     }
     if (++ticks % 200 === 0) check();
   }

@@ -9,7 +9,9 @@ import { mpsToKmh } from "../physics/units.js";
 import type { StepRecord } from "./branch.js";
 import { notchDeliveredN, notchEffortAllN, type PlannerContext } from "./context.js";
 import type { SearchResult } from "./search.js";
-import type { PlanStep } from "./types.js";
+import type { GroupStep, PlanStep } from "./types.js";
+import { groupName, groupNotchWords, settingLevel, unitDeliveredN } from "./groupNotches.js";
+import { HELPER_FOLLOW_S } from "./search.js";
 
 /**
  * Fallback notch: the highest lower notch that, given a slip has just shown adhesion to be below this
@@ -45,7 +47,8 @@ function asksBeyondRail(ctx: PlannerContext, rec: StepRecord): boolean {
   if (rec.notch <= 0) return false;
   return [rec.startSpeedMps, rec.endSpeedMps].some((v) => {
     const speed = Math.max(0, v);
-    return notchEffortAllN(ctx, rec.notch, speed) > notchDeliveredN(ctx, rec.notch, speed) * BEYOND_RAIL;
+    const setting = rec.groupNotches ?? rec.notch;
+    return notchEffortAllN(ctx, setting, speed) > notchDeliveredN(ctx, setting, speed) * BEYOND_RAIL;
   });
 }
 
@@ -74,16 +77,51 @@ export function planSteps(ctx: PlannerContext, r: SearchResult): PlanStep[] {
       protectionActs,
       peakCouplerForceN: rec.peakTensionN,
       fallbackNotch: rec.notch === 0 ? 0 : fallbackNotch(ctx, rec.notch, speed),
-      why: whyLine(ctx, r, rec, k, resistanceN) + (protectionActs ? protectionLine(ctx, rec) : ""),
+      why: whyLine(ctx, r, rec, k, resistanceN) + (protectionActs ? protectionLine(ctx, rec) : "") + groupLine(ctx, rec),
+      ...(rec.groupNotches ? { groups: groupSteps(ctx, rec, k > 0 ? recs[k - 1]!.groupNotches : null) } : {}),
     };
   });
+}
+
+/** Each control group's notch, share of the effort and (helpers) coordination in a step. */
+function groupSteps(ctx: PlannerContext, rec: StepRecord, before: Int32Array | null): GroupStep[] {
+  const notches = rec.groupNotches!;
+  const v = Math.max(0, rec.endSpeedMps);
+  const effort = new Float64Array(notches.length);
+  let total = 0;
+  for (let k = 0; k < ctx.model.nl; k++) {
+    const e = unitDeliveredN(ctx, notches, k, v);
+    effort[ctx.model.unitGroup[k]!]! += e;
+    total += e;
+  }
+  return ctx.consist.controlGroups.map((g, i) => {
+    const name = groupName(g.position, g.control, i);
+    const step: GroupStep = { name, control: g.control, notch: notches[i]!, effortShare: total > 0 ? effort[i]! / total : 0 };
+    const was = before?.[i] ?? 0;
+    if (g.control === "helper" && was !== notches[i]) step.coordination = helperCall(rec, name, was, notches[i]!, notches[0]!);
+    return step;
+  });
+}
+
+/** The words of a helper's notch change: the head acts, calls it, and the helper follows (search.ts HELPER_FOLLOW_S). */
+function helperCall(rec: StepRecord, name: string, was: number, now: number, head: number): string {
+  const sign = rec.phase === "stretch" ? ", or as soon as the head reports the train moving" : "";
+  const act = now > was ? `takes notch ${now}` : now === 0 ? "shuts off" : `eases to notch ${now}`;
+  return `The head takes notch ${head} first and calls the ${name} by radio; the ${name} ${act} about ${HELPER_FOLLOW_S} s later${sign}, and confirms.`;
+}
+
+/** With several control groups, the step's notches in words: " Notches: head 5 · rear 3 (head 52 %, rear 48 % of the effort)." */
+function groupLine(ctx: PlannerContext, rec: StepRecord): string {
+  if (!rec.groupNotches || settingLevel(rec.groupNotches) <= 0) return "";
+  const shares = groupSteps(ctx, rec, null);
+  return ` Notches ${groupNotchWords(ctx, rec.groupNotches)} (${shares.map((g) => `${g.name} ${pct(g.effortShare)}`).join(", ")} of the effort).`;
 }
 
 /** What the slip protection is expected to do in a step whose notch asks more than the rail may give. */
 function protectionLine(ctx: PlannerContext, rec: StepRecord): string {
   const v = Math.max(0, rec.startSpeedMps);
-  const asks = notchEffortAllN(ctx, rec.notch, v);
-  const gives = notchDeliveredN(ctx, rec.notch, v);
+  const asks = notchEffortAllN(ctx, rec.groupNotches ?? rec.notch, v);
+  const gives = notchDeliveredN(ctx, rec.groupNotches ?? rec.notch, v);
   const still = rec.startSpeedMps <= 0.01 ? " No wheelspin at a standstill: it burns the rail." : "";
   return ` It asks ${kN(asks)}, more than a poor rail gives (${kN(gives)}): the slip protection may act (chance ${pct(rec.maxRisk)}), holding the effort there; expect slips, hold the notch and sand.${still}`;
 }
@@ -119,7 +157,7 @@ function whyLine(ctx: PlannerContext, r: SearchResult, rec: StepRecord, k: numbe
       return `At ${km(rec.maxUseSpeedMps)} notch ${rec.notch} asks ${kN(rec.maxUseEffortN)}, ${pct(rec.maxUse)} of the median adhesion there (slip risk ${pct(rec.maxRisk)}); advance only once the current has settled${k === 2 ? ` — at least ${Math.round(r.buildDwellS ?? 3)} s per notch` : ""}; peak coupler ${kN(rec.peakTensionN)} of ${kN(allowance)} allowed.`;
     case "accelerate": {
       if (rec.notch === 0) return rollLine(ctx, rec);
-      const reason = r.adhesionCapped && rec.notch < ctx.maxNotch ? " A higher notch would pass no more on a poor rail, or is not needed." : "";
+      const reason = r.adhesionCapped && (rec.groupNotches ? settingLevel(rec.groupNotches) : rec.notch) < ctx.maxNotch ? " A higher notch would pass no more on a poor rail, or is not needed." : "";
       const to = c.target.kind === "speed" ? `to ${km(c.target.speedMps)}` : `until the train has cleared ${Math.round(c.target.distanceM)} m`;
       return `Hold notch ${rec.notch} ${to}: ${kN(rec.effortN)} against the running, grade and curve resistance accelerates the stretched train; slip risk ${pct(rec.maxRisk)}.${reason}`;
     }

@@ -4,6 +4,7 @@
  */
 import type { Caution } from "./cautions.js";
 import type { StaticCheck } from "./staticCheck.js";
+import type { UnitControl } from "../train/types.js";
 import type { LimitCheck, LimitName, Reason, StartKind, Verdict } from "./outcome.js";
 
 export type Phase = "prepare" | "stretch" | "build" | "accelerate";
@@ -53,6 +54,23 @@ export interface PlanStep {
   fallbackNotch: number;
   /** One plain line of physics saying why. */
   why: string;
+  /**
+   * With several control groups: each group's notch, head first (the step's `notch` is the head's), the
+   * share of the effort it gives, and for a helper how its driver follows the head's call.
+   */
+  groups?: GroupStep[];
+}
+
+/** One control group's part in a step. */
+export interface GroupStep {
+  /** "head", "rear", "after wagon 30", with "helper" for a helper group. */
+  name: string;
+  control: UnitControl;
+  notch: number;
+  /** Share of the train's effort this group gives at the step's end, 0..1. */
+  effortShare: number;
+  /** For a helper whose notch changes in this step: who acts first and when the helper follows. */
+  coordination?: string;
 }
 
 /**
@@ -100,6 +118,8 @@ export interface PlanResult {
   couplerPeaksN: Float64Array;
   /** Peak compression of each coupling, head to tail, N. */
   couplerCompressionPeaksN: Float64Array;
+  /** The highest wheel-climb L/V of the planned start (when the check is made and a coupling was in buff on a curve). */
+  wheelClimb: { ratio: number; allowance: number; nadalLimit: number; vehicle: string; forceN: number; radiusM: number } | null;
   /** Seconds from taking power to reaching the target; null when it is not reached. */
   timeToTargetS: number | null;
   /** Largest trailing mass (this train's wagons) that starts; NaN when not searched. */

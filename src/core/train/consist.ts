@@ -5,8 +5,9 @@
 import { couplingOfKind, type CouplingSpec } from "../physics/coupling.js";
 import { DAVIS_DEFAULTS, breakawayResistancePermille, davisCoefficients, type DavisCoefficients } from "../physics/resistance.js";
 import { GRAVITY_MPS2, M_PER_FT } from "../physics/constants.js";
-import type { LocoGroup, StartCase, TrainSpec } from "./types.js";
-import type { LocomotiveSpec } from "../physics/types.js";
+import { controlOf, type LocoGroup, type LocoPosition, type StartCase, type TrainSpec, type UnitControl } from "./types.js";
+import type { LocomotiveSpec, WagonSpec } from "../physics/types.js";
+import { placedWagons } from "./groups.js";
 
 export interface Vehicle {
   kind: "locomotive" | "wagon";
@@ -24,6 +25,20 @@ export interface Vehicle {
   loco?: LocomotiveSpec;
   /** Chainage of the vehicle's centre when standing, m. */
   centreChainageM: number;
+  /** Wagons: the number from the head (1-based) and the type. */
+  wagonNumber?: number;
+  wagon?: WagonSpec;
+}
+
+/**
+ * Units whose notch is set together: the head's (its units and every `with-head` unit) and each
+ * `remote` or `helper` entry of the case on its own.
+ */
+export interface ControlGroup {
+  control: UnitControl;
+  position: LocoPosition;
+  /** Indices into the powered units (`locoIndices`) of the units in the group. */
+  units: number[];
 }
 
 export interface Consist {
@@ -34,8 +49,12 @@ export interface Consist {
   locoIndices: number[];
   /** Overall length, m. */
   lengthM: number;
-  /** Wagon mass each, kg. */
+  /** Mean wagon mass, kg. */
   wagonMassKg: number;
+  /** Control groups; the first is the head's (its notch is the plan's notch). */
+  controlGroups: ControlGroup[];
+  /** The control group of each powered unit. */
+  unitGroup: number[];
 }
 
 /**
@@ -51,13 +70,23 @@ export function wagonRotatingFraction(massKg: number, axles: number): number {
 
 /** Place the locomotives and wagons of a case on its track, head first. */
 export function buildConsist(c: StartCase): Consist {
-  const order = vehicleOrder(c.locomotives, c.train.wagons);
-  const wagonMassKg = c.train.trailingMassKg / c.train.wagons;
-  const wagonLengthM = c.train.lengthM / c.train.wagons;
+  const order = placedOrder(c.locomotives, c.train.wagons);
+  const wagons = placedWagons(c.train);
   const vehicles: Vehicle[] = [];
+  const unitEntry: number[] = [];
   let front = c.location.frontAtM;
+  let wagonNo = 0;
   for (const item of order) {
-    const v = item === "wagon" ? makeWagon(c.train, wagonMassKg, wagonLengthM, c.conditions.temperatureC) : makeLoco(item, c.conditions.temperatureC);
+    let v: Vehicle;
+    if (item === "wagon") {
+      const w = wagons[wagonNo++]!;
+      v = makeWagon(c.train, w.wagon, w.massKg, w.lengthM, c.conditions.temperatureC);
+      v.wagonNumber = wagonNo;
+      v.wagon = w.wagon;
+    } else {
+      v = makeLoco(item.spec, c.conditions.temperatureC);
+      unitEntry.push(item.entry);
+    }
     v.index = vehicles.length;
     v.centreChainageM = front - v.lengthM / 2;
     front -= v.lengthM;
@@ -65,22 +94,50 @@ export function buildConsist(c: StartCase): Consist {
   }
   const couplings: CouplingSpec[] = [];
   for (let j = 0; j < vehicles.length - 1; j++) couplings.push(couplingOfKind(c.train.coupling, c.train.couplerSlackM));
+  const { controlGroups, unitGroup } = controlGroupsOf(c.locomotives, unitEntry);
   return {
     vehicles,
     couplings,
     locoIndices: vehicles.filter((v) => v.kind === "locomotive").map((v) => v.index),
     lengthM: c.location.frontAtM - front,
-    wagonMassKg,
+    wagonMassKg: c.train.trailingMassKg / c.train.wagons,
+    controlGroups,
+    unitGroup,
   };
+}
+
+/**
+ * The control groups of the units, given the case entry each unit (head to tail) comes from. The lead
+ * unit's entry and every `with-head` entry form the head's group, whatever their own setting: the head
+ * cab's notch is theirs. Every other entry is a group of its own, in the order the case lists them.
+ */
+function controlGroupsOf(entries: readonly LocoGroup[], unitEntry: readonly number[]): { controlGroups: ControlGroup[]; unitGroup: number[] } {
+  const lead = unitEntry[0] ?? 0;
+  const groupOfEntry: number[] = entries.map((g, e) => (e === lead || controlOf(g) === "with-head" ? 0 : -1));
+  const controlGroups: ControlGroup[] = [{ control: "with-head", position: entries[lead]?.position ?? "head", units: [] }];
+  entries.forEach((g, e) => {
+    if (groupOfEntry[e] === 0) return;
+    groupOfEntry[e] = controlGroups.length;
+    controlGroups.push({ control: controlOf(g), position: g.position, units: [] });
+  });
+  const unitGroup = unitEntry.map((e) => groupOfEntry[e]!);
+  unitGroup.forEach((g, k) => controlGroups[g]!.units.push(k));
+  return { controlGroups, unitGroup };
 }
 
 /** Head-to-tail order: a locomotive spec per powered unit, "wagon" per wagon. */
 export function vehicleOrder(groups: readonly LocoGroup[], wagons: number): Array<LocomotiveSpec | "wagon"> {
-  const head: LocomotiveSpec[] = [];
-  const rear: LocomotiveSpec[] = [];
-  const mid = new Map<number, LocomotiveSpec[]>();
-  for (const g of groups) {
-    const units: LocomotiveSpec[] = Array.from({ length: g.count }, () => g.spec);
+  return placedOrder(groups, wagons).map((x) => (x === "wagon" ? x : x.spec));
+}
+
+/** Head-to-tail order with the case entry of each unit. */
+function placedOrder(groups: readonly LocoGroup[], wagons: number): Array<{ spec: LocomotiveSpec; entry: number } | "wagon"> {
+  type Unit = { spec: LocomotiveSpec; entry: number };
+  const head: Unit[] = [];
+  const rear: Unit[] = [];
+  const mid = new Map<number, Unit[]>();
+  groups.forEach((g, entry) => {
+    const units: Unit[] = Array.from({ length: g.count }, () => ({ spec: g.spec, entry }));
     if (g.position === "head") head.push(...units);
     else if (g.position === "rear") rear.push(...units);
     else {
@@ -88,8 +145,8 @@ export function vehicleOrder(groups: readonly LocoGroup[], wagons: number): Arra
       if (!(after >= 1 && after < wagons)) throw new RangeError(`afterWagon ${after} outside 1..${wagons - 1}`);
       mid.set(after, [...(mid.get(after) ?? []), ...units]);
     }
-  }
-  const order: Array<LocomotiveSpec | "wagon"> = [...head];
+  });
+  const order: Array<Unit | "wagon"> = [...head];
   for (let w = 1; w <= wagons; w++) {
     order.push("wagon");
     order.push(...(mid.get(w) ?? []));
@@ -98,8 +155,7 @@ export function vehicleOrder(groups: readonly LocoGroup[], wagons: number): Arra
   return order;
 }
 
-function makeWagon(train: TrainSpec, massKg: number, lengthM: number, temperatureC: number): Vehicle {
-  const w = train.wagon;
+function makeWagon(train: TrainSpec, w: WagonSpec, massKg: number, lengthM: number, temperatureC: number): Vehicle {
   const davis = davisCoefficients({
     massKg,
     axles: w.axles,

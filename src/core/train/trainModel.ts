@@ -52,6 +52,9 @@ export interface TrainModel {
   locoSpecs: LocomotiveSpec[];
   /** Highest notch of each unit. */
   locoNotches: Int32Array;
+  /** Control group of each unit (0: the head's notch); `groupCount` groups in all. */
+  unitGroup: Int32Array;
+  groupCount: number;
   /** Current-limited effort per notch, N: [k·stride + notch], notch 0 = idle. */
   notchCurrentN: Float64Array;
   /** Rail power per notch, W: [k·stride + notch]. */
@@ -184,6 +187,8 @@ export function modelFromConsist(consist: Consist, slack: Int8Array, track: Trac
     locoVehicle: Int32Array.from(consist.locoIndices),
     locoSpecs: consist.locoIndices.map((i) => vs[i]!.loco!),
     locoNotches: new Int32Array(consist.locoIndices.length),
+    unitGroup: Int32Array.from(consist.unitGroup),
+    groupCount: consist.controlGroups.length,
     notchCurrentN: f(0),
     notchPowerW: f(0),
     notchStride: 0,

@@ -8,13 +8,40 @@ import type { AdhesionTable, Bearing, Conditions, CouplingKind, LocomotiveSpec, 
 export type SlackState = "bunched" | "stretched" | "from-profile";
 export type LocoPosition = "head" | "rear" | { afterWagon: number };
 
+/**
+ * How a group of units is driven: `with-head` in multiple with the head (the head's notch), `remote`
+ * (distributed power: its own notch, set from the head cab) or `helper` (its own driver, coordinated by
+ * radio or signal).
+ */
+export type UnitControl = "with-head" | "remote" | "helper";
+export const UNIT_CONTROLS: readonly UnitControl[] = ["with-head", "remote", "helper"];
+
 export interface LocoGroup {
   spec: LocomotiveSpec;
   count: number;
   position: LocoPosition;
+  /** Default: `with-head` at the head, `remote` mid-train and at the rear (`controlOf`). */
+  control?: UnitControl;
+}
+
+/** The control of a group of units, its default filled in. */
+export function controlOf(g: LocoGroup): UnitControl {
+  return g.control ?? (g.position === "head" ? "with-head" : "remote");
+}
+
+/** Wagons of one type and one load in a mixed train, in order from the head. */
+export interface WagonGroup {
+  wagons: number;
+  wagon: WagonSpec;
+  /** The group's total mass, kg. */
+  massKg: number;
 }
 
 export interface TrainSpec {
+  /**
+   * Trailing mass, kg. With `groups` it is their sum as given; a different figure (the largest-mass search,
+   * a sensitivity nudge) scales the load above tare of every group in proportion (`groupMassesKg`).
+   */
   trailingMassKg: number;
   wagons: number;
   /** Length of the trailing load (wagons only), m. */
@@ -25,8 +52,13 @@ export interface TrainSpec {
   /** Working limit of the weakest coupling, N. */
   couplerLimitN: number;
   coupling: CouplingKind;
+  /** The wagon type (with `groups`: the first group's). */
   wagon: WagonSpec;
   slackState: SlackState;
+  /** A mixed train: wagon groups in order from the head (wagons and length are then their sums). */
+  groups?: readonly WagonGroup[];
+  /** Working limit of the weakest coupling in buff (compression), N; default the working limit in draft. */
+  couplerBuffLimitN?: number;
 }
 
 export interface Location {

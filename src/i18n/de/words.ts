@@ -30,6 +30,7 @@ export const wordsDe = translation<typeof words.en>()({
   limitBrakeHolding: "Halten mit Bremse",
   limitCouplerTension: "Zugkraft in der Kupplung",
   limitCouplerCompression: "Druckkraft in der Kupplung",
+  limitWheelClimb: "Aufklettern des Rades",
   limitDistance: "Weg",
   limitTimeToTarget: "Zeit bis zum Ziel",
   railDry: "Trocken",

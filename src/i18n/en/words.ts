@@ -35,6 +35,7 @@ export const words = namespace("words", {
   limitBrakeHolding: "brake holding",
   limitCouplerTension: "coupler tension",
   limitCouplerCompression: "coupler compression",
+  limitWheelClimb: "wheel climb",
   limitDistance: "distance",
   limitTimeToTarget: "time to target",
   // Rail conditions (NAMING.md), as a heading word and inside a sentence.

@@ -30,6 +30,7 @@ export const wordsHu = translation<typeof words.en>()({
   limitBrakeHolding: "fékkel tartás",
   limitCouplerTension: "húzás a kapcsolóban",
   limitCouplerCompression: "nyomás a kapcsolóban",
+  limitWheelClimb: "kerékfelfutás",
   limitDistance: "úthossz",
   limitTimeToTarget: "idő a célig",
   railDry: "Száraz",

@@ -32,7 +32,7 @@ function answerFor(c: StartCase): CheckAnswer {
     couplings: 29,
     headCompressionN: 10_000,
     timeToTargetS: 70,
-    note: "In step.",
+    note: "In step.", effortSplit: [],
   });
   switch (c.conditions.rail) {
     case "leaves":

@@ -80,6 +80,8 @@ export function chainModel(p: ChainSpec): TrainModel {
     locoVehicle: hasLoco ? Int32Array.of(loco) : new Int32Array(0),
     locoSpecs: [],
     locoNotches: hasLoco ? Int32Array.of(8) : new Int32Array(0),
+    unitGroup: hasLoco ? Int32Array.of(0) : new Int32Array(0),
+    groupCount: 1,
     notchCurrentN: hasLoco ? notchCurrent : new Float64Array(0),
     notchPowerW: hasLoco ? notchPower : new Float64Array(0),
     notchStride: stride,
