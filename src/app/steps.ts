@@ -1,5 +1,5 @@
 /** Words for plan steps, shared by the step cards and Cab steps. */
-import type { Phase, PlanStep } from "../core/planner/types.js";
+import type { GroupStep, Phase, PlanStep } from "../core/planner/types.js";
 import type { Target } from "../core/train/types.js";
 import { formatNumber, show, type UnitSystem } from "./format.js";
 import { steps } from "../i18n/en/steps.js";
@@ -53,6 +53,19 @@ export function advanceOthers(s: PlanStep, units: UnitSystem): string[] {
 /** Notch as shown: "0" reads as idle. */
 export function notchText(n: number): string {
   return n <= 0 ? "0" : String(n);
+}
+
+/** Each control group's notch in a step, head first: "head 5 · rear 3". */
+export function groupNotchesText(groups: readonly GroupStep[]): string {
+  return groups.map((g) => `${g.name} ${notchText(g.notch)}`).join(" · ");
+}
+
+/**
+ * What a helper's driver does in a step: the step's coordination when the helper's notch changes in it,
+ * otherwise hold the notch until the head calls a change.
+ */
+export function helperLine(g: GroupStep): string {
+  return g.coordination ?? `Hold notch ${notchText(g.notch)}; the head driver calls any change by radio.`;
 }
 
 /**

@@ -93,7 +93,12 @@ export function uniformFromProfile(p: ProfileLocation, trainLengthM: number, gra
  * lacks is added, so validation names what else is missing. `note` finds a location note by id (for
  * --grade on a case that names one).
  */
-export function applyOverrides(raw: unknown, o: CaseOverrides, note: (id: string) => ProfileLocation | undefined = () => undefined): unknown {
+export function applyOverrides(
+  raw: unknown,
+  o: CaseOverrides,
+  note: (id: string) => ProfileLocation | undefined = () => undefined,
+  wagonType: (id: string) => { tare_t: number; length_m: number } | undefined = () => undefined,
+): unknown {
   if (!hasOverrides(o) || !isObject(raw)) return raw;
   const out: Record<string, unknown> = { ...raw };
   if (o.rail !== undefined || o.sand !== undefined) {
@@ -103,11 +108,14 @@ export function applyOverrides(raw: unknown, o: CaseOverrides, note: (id: string
     out.conditions = conditions;
   }
   if (o.trailingMass_t !== undefined) {
-    out.train = { ...(isObject(raw.train) ? raw.train : {}), trailingMass_t: o.trailingMass_t };
+    const train = isObject(raw.train) ? raw.train : {};
+    const groups = Array.isArray(train.groups) ? (train.groups as unknown[]).filter(isObject) : null;
+    // A mixed train: every group's load above tare scaled in proportion, as the largest-mass search does.
+    out.train = groups ? { ...train, groups: scaledGroups(groups, o.trailingMass_t, wagonType) } : { ...train, trailingMass_t: o.trailingMass_t };
   }
   if (o.gradient_permille !== undefined) {
     const loc = raw.location;
-    const lengthM = isObject(out.train) && typeof out.train.length_m === "number" ? out.train.length_m : 0;
+    const lengthM = isObject(out.train) ? trainLengthM(out.train, wagonType) : 0;
     if (typeof loc === "string") {
       const n = note(loc);
       if (!n) throw new InputError(`--grade: no location note "${loc}" to take the curve and the distance clear ahead from`);
@@ -119,6 +127,27 @@ export function applyOverrides(raw: unknown, o: CaseOverrides, note: (id: string
     }
   }
   return out;
+}
+
+/** The groups' masses scaled to `totalT`: the load above tare in proportion (below the tare, all in proportion). */
+function scaledGroups(groups: Array<Record<string, unknown>>, totalT: number, wagonType: (id: string) => { tare_t: number } | undefined): Array<Record<string, unknown>> {
+  const mass = groups.map((g) => (typeof g.mass_t === "number" ? g.mass_t : 0));
+  const tare = groups.map((g, k) => Math.min(mass[k]!, (typeof g.wagonType === "string" ? (wagonType(g.wagonType)?.tare_t ?? 0) : 0) * (typeof g.wagons === "number" ? g.wagons : 0)));
+  const given = mass.reduce((a, x) => a + x, 0);
+  const tareSum = tare.reduce((a, x) => a + x, 0);
+  const load = given - tareSum;
+  const scaled =
+    totalT >= tareSum && load > 0
+      ? mass.map((m, k) => tare[k]! + ((totalT - tareSum) / load) * (m - tare[k]!))
+      : mass.map((m) => (given > 0 ? (m * totalT) / given : 0));
+  return groups.map((g, k) => ({ ...g, mass_t: scaled[k]! }));
+}
+
+/** Length over the wagons of a train in a file: its `length_m`, or its groups' wagons × their types' lengths, m. */
+function trainLengthM(train: Record<string, unknown>, wagonType: (id: string) => { length_m: number } | undefined): number {
+  if (typeof train.length_m === "number") return train.length_m;
+  if (!Array.isArray(train.groups)) return 0;
+  return (train.groups as unknown[]).filter(isObject).reduce((a, g) => a + (typeof g.wagons === "number" ? g.wagons : 0) * (typeof g.wagonType === "string" ? (wagonType(g.wagonType)?.length_m ?? 0) : 0), 0);
 }
 
 /** The overrides in words, for the readable output: "rail wet, no sand, 1,500 t, grade 8 ‰". */

@@ -148,11 +148,19 @@ export function readStartCase(
   const kind = fileKind(raw);
   if (kind !== undefined && kind !== "taut/start-case@1") throw new InputError(`${name}: this is a ${kindText(kind)} file; a start case (taut/start-case@1) is needed here`);
   if (overrides.location !== undefined && raw && typeof raw === "object" && !Array.isArray(raw)) raw = { ...(raw as Record<string, unknown>), location: overrides.location };
-  if (overrides.case) raw = applyOverrides(raw, overrides.case, (id) => lib.locations.get(id));
+  if (overrides.case) raw = applyOverrides(raw, overrides.case, (id) => lib.locations.get(id), wagonTypeOf(lib));
   const r = parseStartCase(raw, lib);
   if (!r.ok) throw new InputError(`${name}: the start case is not valid`, r.issues);
   checkWork(r.value, `${name}: the start case is not valid`);
   return { c: r.value, raw: raw as Record<string, unknown> };
+}
+
+/** A wagon type's tare and length in file units, for the overrides of a mixed train. */
+export function wagonTypeOf(lib: Library): (id: string) => { tare_t: number; length_m: number } | undefined {
+  return (id) => {
+    const w = lib.wagons.get(id);
+    return w ? { tare_t: w.tareKg / 1000, length_m: w.lengthM } : undefined;
+  };
 }
 
 /** Read a location note file. */

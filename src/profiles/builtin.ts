@@ -18,6 +18,7 @@ import trainGoods from "../../profiles/trains/goods-1100.json" with { type: "jso
 import caseAggregate from "../../profiles/cases/demo-aggregate-ashvale.json" with { type: "json" };
 import caseOre from "../../profiles/cases/demo-ore-lantern.json" with { type: "json" };
 import caseGoods from "../../profiles/cases/demo-goods-cinderfield.json" with { type: "json" };
+import caseMixed from "../../profiles/cases/demo-mixed-ashvale.json" with { type: "json" };
 import { DEMO_CASE_ID, libraryOf, type BuiltinFiles } from "./builtinSet.js";
 import { formatIssues, type ParseResult } from "./issues.js";
 import type { Library } from "./library.js";
@@ -39,7 +40,7 @@ function must<T>(r: ParseResult<T>, what: string): T {
   return r.value;
 }
 
-const caseJson: unknown[] = [caseAggregate, caseOre, caseGoods];
+const caseJson: unknown[] = [caseAggregate, caseOre, caseGoods, caseMixed];
 
 /**
  * Every built-in file read with its schema. The app's build embeds this object as it is (src/app/

@@ -258,7 +258,7 @@ export function createPlannerClient(options: PlannerClientOptions): PlannerClien
   return {
     plan: (c, opts = {}) => request("plan", c, { skipMassSearch: opts.skipMassSearch, skipVerification: opts.skipVerification } as RequestMap["plan"]["options"], opts),
     assistance: (c, opts = {}) =>
-      request("assistance", c, { helper: opts.helper, maxUnits: opts.maxUnits, budget: opts.budget, divideBudget: opts.divideBudget, maxFullPlans: opts.maxFullPlans } as AssistanceRequestOptions, opts),
+      request("assistance", c, { helper: opts.helper, control: opts.control, maxUnits: opts.maxUnits, budget: opts.budget, divideBudget: opts.divideBudget, maxFullPlans: opts.maxFullPlans } as AssistanceRequestOptions, opts),
     conditionMargins: (c, opts = {}) => request("conditionMargins", c, { quick: opts.quick } as RequestMap["conditionMargins"]["options"], opts),
     loadTable: (c, opts = {}) => request("loadTable", c, { cells: opts.cells } as RequestMap["loadTable"]["options"], opts),
     check: (c, opts = {}) => request("check", c, { helper: opts.helper } as CheckRequestOptions, opts),

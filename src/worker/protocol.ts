@@ -73,6 +73,8 @@ export interface AssistanceAnswer {
   /** False when the case starts as it stands (nothing searched). */
   needed: boolean;
   helper: HelperData;
+  /** How the units the options add mid-train or at the rear are driven (absent in older answers: remote). */
+  control?: "remote" | "helper";
   /** Options that make the verdict `starts`, cheapest first (fewest units, then lowest peak pull). */
   options: AssistanceOptionData[];
   /** Options tried that did not make it start, and what ruled them out. */
@@ -106,6 +108,8 @@ export type PlanRequestOptions = Pick<PlanOptions, "skipMassSearch" | "skipVerif
 export interface AssistanceRequestOptions {
   /** Profile to add (default: the lead unit's). */
   helper?: LocomotiveSpec;
+  /** How units added mid-train or at the rear are driven: remote (default) or helper. */
+  control?: "remote" | "helper";
   /** Most units to add, 1 or 2 (default 2). */
   maxUnits?: number;
   /** Most planner runs for the options, and for dividing the train (the core's defaults otherwise). */
@@ -250,6 +254,7 @@ export function requestOptionIssues(req: WorkRequest): WorkerIssue[] {
   if (req.type === "assistance" || req.type === "check") {
     const h = o.helper as Partial<LocomotiveSpec> | undefined;
     if (h !== undefined && (!h || !Array.isArray(h.notchPower) || !isNum(h.adhesiveMassKg) || typeof h.id !== "string")) out.push({ path: "options.helper", message: "must be a locomotive profile" });
+    if (o.control !== undefined && o.control !== "remote" && o.control !== "helper") out.push({ path: "options.control", message: "must be remote or helper" });
   }
   if (req.type === "assistance") {
     for (const k of ["maxUnits", "budget", "divideBudget", "maxFullPlans"] as const) {

@@ -39,7 +39,7 @@ afterEach(() => vi.restoreAllMocks());
 
 describe("quick fill", () => {
   it("has one button per demo case file, and each recreates its file whole: train, place, rail and target", () => {
-    expect(caseFiles).toHaveLength(3);
+    expect(caseFiles).toHaveLength(4);
     const { harness } = renderWithApp(() => <StartPlan />);
     const buttons = [...document.querySelectorAll<HTMLButtonElement>('[data-quick="cases"] button')];
     expect(buttons.map((b) => b.dataset.case).sort()).toEqual(caseFiles.map((c) => c.id).sort());

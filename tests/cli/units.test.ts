@@ -57,6 +57,17 @@ describe("taut plan with unit groups and wagon groups", () => {
     expect(b.stderr).toMatch(/must match the groups' 2240 t/);
   });
 
+  it("--mass on a mixed train scales every group's load above tare (the empties stay at tare)", async () => {
+    const { applyOverrides } = await import("../../src/cli/caseOverrides.js");
+    const tare = { "bogie-hopper-empty": 24, "bogie-hopper-loaded": 25 } as Record<string, number>;
+    const out = applyOverrides(mixedPushed, { trailingMass_t: 2740 }, () => undefined, (id) => ({ tare_t: tare[id]!, length_m: 14 })) as typeof mixedPushed;
+    // Empties: 10 × 24 t = 240 t, no load. Loaded: 20 × 25 t tare + (2000 − 500) t of load, scaled by (2740 − 240 − 500) / 1500.
+    expect(out.train.groups[0]!.mass_t).toBeCloseTo(240, 9);
+    expect(out.train.groups[1]!.mass_t).toBeCloseTo(500 + 1500 * (2000 / 1500), 9);
+    const r = await tautWithInput(JSON.stringify(mixedPushed), "plan", "-", "--mass", "2740", "--json", "--no-assistance");
+    expect(r.code).toBe(0);
+  });
+
   it("--helper-control helper: the assistance options' rear and mid-train units are helpers", async () => {
     const r = await taut("plan", "profiles/cases/demo-ore-lantern.json", "--json", "--helper-control", "helper");
     expect(r.code).toBe(0);

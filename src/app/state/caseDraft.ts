@@ -4,7 +4,7 @@
  * line read; `draftFromFile` fills it from a case file. Pure functions, no Solid.
  */
 import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
-import type { SlackState } from "../../core/train/types.js";
+import type { SlackState, UnitControl } from "../../core/train/types.js";
 import type { StartCaseFile, TrainPresetFile } from "../../profiles/schemas.js";
 
 export type DraftPosition = "head" | "rear" | "after";
@@ -15,6 +15,15 @@ export interface DraftLoco {
   position: DraftPosition;
   /** Used when position is "after". */
   afterWagon: number;
+  /** How the group is driven; absent: the default for its position (head in multiple, others remote). */
+  control?: UnitControl;
+}
+
+/** One wagon group of a mixed train (INTERFACE.md `train.groups`): its wagons, their type, its total mass. */
+export interface DraftGroup {
+  wagons: number;
+  wagonType: string;
+  mass_t: number;
 }
 
 export interface CaseDraft {
@@ -33,6 +42,11 @@ export interface CaseDraft {
     /** A wagon type id from the library, or "" for a plain bogie wagon. */
     wagonType: string;
     slackState: SlackState;
+    /**
+     * A mixed train's wagon groups, head first; when there are any they replace the trailing mass, wagons,
+     * length and wagon type (derived from them).
+     */
+    groups?: DraftGroup[];
   };
   /** A saved note, a quick uniform entry, or the track profile a case file carried (kept as it was). */
   locationMode: "note" | "quick" | "profile";
@@ -107,6 +121,7 @@ function locoFromFile(l: StartCaseFile["locomotives"][number]): DraftLoco {
     count: l.count,
     position: typeof p === "string" ? p : "after",
     afterWagon: typeof p === "string" ? 1 : p.afterWagon,
+    ...(l.control !== undefined ? { control: l.control } : {}),
   };
 }
 
@@ -114,13 +129,14 @@ function trainFromFile(t: StartCaseFile["train"], wagonCoupling: (id: string) =>
   return {
     trailingMass_t: t.trailingMass_t,
     wagons: t.wagons,
-    length_m: t.length_m ?? Number.NaN,
+    length_m: t.length_m ?? 0,
     couplerSlack_mm: t.couplerSlack_mm,
     bearing: t.bearing,
     couplerLimit_kN: t.couplerLimit_kN,
     coupling: t.coupling ?? (t.wagonType ? wagonCoupling(t.wagonType) : undefined) ?? "knuckle",
-    wagonType: t.wagonType ?? "",
+    wagonType: t.wagonType ?? t.groups?.[0]?.wagonType ?? "",
     slackState: t.slackState,
+    ...(t.groups ? { groups: t.groups.map((g) => ({ wagons: g.wagons, wagonType: g.wagonType, mass_t: g.mass_t })) } : {}),
   };
 }
 
@@ -139,17 +155,18 @@ export function draftToFile(d: CaseDraft, settings?: CaseSettings): Record<strin
     profile: l.profile,
     count: l.count,
     position: l.position === "after" ? { afterWagon: l.afterWagon } : l.position,
+    ...(l.control ? { control: l.control } : {}),
   }));
   const t = d.train;
+  const groups = t.groups ?? [];
   out.train = {
-    trailingMass_t: t.trailingMass_t,
-    wagons: t.wagons,
-    length_m: t.length_m,
+    // A mixed train: its groups, from which the wagons, trailing mass and length follow.
+    ...(groups.length > 0 ? { groups: groups.map((g) => ({ ...g })) } : { trailingMass_t: t.trailingMass_t, wagons: t.wagons, length_m: t.length_m }),
     couplerSlack_mm: t.couplerSlack_mm,
     bearing: t.bearing,
     couplerLimit_kN: t.couplerLimit_kN,
     coupling: t.coupling,
-    ...(t.wagonType ? { wagonType: t.wagonType } : {}),
+    ...(t.wagonType && groups.length === 0 ? { wagonType: t.wagonType } : {}),
     slackState: t.slackState,
   };
   out.location =
@@ -205,7 +222,10 @@ const SHAPE = {
   target: { speed_kmh: isNumber, distance_m: isNumber },
   profile: { frontAt_m: isNumber, clearAhead_m: isNumber },
   segment: { from_m: isNumber, length_m: isNumber, gradient_permille: isNumber, curveRadius_m: isNumber },
+  group: { wagons: isNumber, wagonType: isText, mass_t: isNumber },
 } as const;
+/** A loco's control, when the stored draft has one (older drafts have none: the default). */
+const isControl: Check = (v) => v === undefined || oneOf("with-head", "remote", "helper")(v);
 
 /** The first field of `x` that breaks `shape`, as "path: what it holds", or undefined. */
 function shapeProblem(x: unknown, shape: Record<string, Check>, at: string): string | undefined {
@@ -254,6 +274,15 @@ export function storedDraft(x: unknown): { ok: true; draft: CaseDraft } | { ok: 
   for (const [k, l] of d.locomotives.entries()) {
     const p = shapeProblem(l, SHAPE.loco, `locomotives[${k}]`);
     if (p) return fail(p);
+    if (!isControl((l as { control?: unknown }).control)) return fail(`locomotives[${k}].control: not allowed here`);
+  }
+  const groups = (d.train as { groups?: unknown }).groups;
+  if (groups !== undefined) {
+    if (!Array.isArray(groups)) return fail("train.groups: not a list");
+    for (const [k, g] of groups.entries()) {
+      const q = shapeProblem(g, SHAPE.group, `train.groups[${k}]`);
+      if (q) return fail(q);
+    }
   }
   return { ok: true, draft: revive(d) as unknown as CaseDraft };
 }

@@ -43,6 +43,10 @@ export interface CaseDraftStore {
   applyPreset(p: TrainPresetFile): void;
   addLocomotive(): void;
   removeLocomotive(k: number): void;
+  /** Add a wagon group (the first turns the train into groups: its wagons, type and mass as the first group). */
+  addWagonGroup(): void;
+  /** Remove a wagon group; removing the last returns to one trailing mass, wagons and length (the groups' totals). */
+  removeWagonGroup(k: number): void;
   /** The `taut/start-case@1` object, with the safety settings. */
   caseJson: Accessor<Record<string, unknown>>;
   /** The draft checked; `pending` for the moment before the checker has loaded (nothing known yet). */
@@ -165,6 +169,34 @@ export function createCaseDraft(deps: CaseDraftDeps): CaseDraftStore {
     removeLocomotive: (k) => {
       if (draft.locomotives.length <= 1) return;
       set("locomotives", (ls) => ls.filter((_, i) => i !== k));
+    },
+    addWagonGroup: () => {
+      const t = draft.train;
+      const groups = t.groups ?? [];
+      const type = t.wagonType || [...deps.library().wagons.keys()][0] || "";
+      if (groups.length === 0) {
+        const wt = deps.library().wagons.get(type);
+        set("train", "groups", [{ wagons: t.wagons, wagonType: type, mass_t: t.trailingMass_t }]);
+        if (wt && !(t.length_m > 0)) set("train", "length_m", t.wagons * wt.lengthM);
+        return;
+      }
+      const last = groups[groups.length - 1]!;
+      set("train", "groups", [...groups, { wagons: 10, wagonType: last.wagonType, mass_t: (10 * last.mass_t) / Math.max(1, last.wagons) }]);
+    },
+    removeWagonGroup: (k) => {
+      const groups = draft.train.groups ?? [];
+      const rest = groups.filter((_, i) => i !== k);
+      if (rest.length === 0) {
+        // Back to one trailing mass: the group's figures carry over.
+        const g = groups[0];
+        if (g) {
+          const wt = deps.library().wagons.get(g.wagonType);
+          set("train", { trailingMass_t: g.mass_t, wagons: g.wagons, wagonType: g.wagonType, ...(wt ? { length_m: g.wagons * wt.lengthM } : {}) });
+        }
+        set("train", "groups", undefined);
+        return;
+      }
+      set("train", "groups", rest);
     },
     caseJson,
     checked,

@@ -16,7 +16,7 @@ import type { LocomotiveSpec } from "../../core/physics/types.js";
 import type { StartCase } from "../../core/train/types.js";
 import { InputError } from "../errors.js";
 import { quoted } from "../../profiles/text.js";
-import { library, readNotesFiles, readStartCase } from "../files.js";
+import { library, readNotesFiles, readStartCase, wagonTypeOf } from "../files.js";
 import type { Command } from "../command.js";
 import { helperControl, helperSpec } from "../options.js";
 import type { UnitControl } from "../../core/train/types.js";
@@ -82,7 +82,7 @@ export const planCommand: Command = {
     let meta: PlanReport["case"];
     if (values.demo) {
       const demo = builtinCaseJson.find((j) => (j as { id?: string }).id === DEMO_CASE_ID) as Record<string, unknown>;
-      const raw = applyOverrides(location !== undefined ? { ...demo, location } : demo, overrides, (id) => lib.locations.get(id)) as Record<string, unknown>;
+      const raw = applyOverrides(location !== undefined ? { ...demo, location } : demo, overrides, (id) => lib.locations.get(id), wagonTypeOf(lib)) as Record<string, unknown>;
       const r = parseStartCase(raw, lib);
       if (!r.ok && location !== undefined) throw new InputError(`the demo case cannot start at location ${quoted(location)}`, r.issues);
       if (!r.ok && hasOverrides(overrides)) throw new InputError("the demo case with these overrides is not valid", r.issues);

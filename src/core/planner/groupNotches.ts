@@ -1,7 +1,9 @@
 /**
  * Several control groups: the head's units (and any in multiple with them) and each remote or helper group
- * with its own notch. The planner then raises power one group-notch at a time: of the groups that can take
- * another notch, the one whose notch keeps the couplings most evenly loaded — the smallest, over every
+ * with its own notch. Moving, the planner raises every group a notch together (as synchronous distributed
+ * power does) while that keeps every coupling within its allowances; otherwise, and always while the train
+ * stands (the stretch's settings), one group-notch at a time: of the groups that can take another notch, the
+ * one that adds effort the rail passes and keeps the couplings most evenly loaded — the smallest, over every
  * coupling, of its force against its allowance (tension against the draft allowance; compression against
  * the buff allowance and, on a curve, the buff force at which the lighter vehicle's wheel would reach the
  * wheel-climb allowance). A setting's *level* is the sum of the groups' notches: level n is reached after n

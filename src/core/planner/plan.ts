@@ -57,7 +57,8 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
     peakCompressionN: r.branch.steps.reduce((m, s) => Math.max(m, s.peakCompressionN), 0),
     couplerPeaksN: run.s.peakTensionN.slice(),
     couplerCompressionPeaksN: run.s.peakCompressionN.slice(),
-    wheelClimb: wheelClimbOf(ctx, r),
+    // From the threshold's plan, as the limits are.
+    wheelClimb: d.threshold.search ? wheelClimbOf(d.threshold.ctx, d.threshold.search) : null,
     timeToTargetS: r.targetReachedS === null ? null : r.targetReachedS - r.powerS,
     maxStartableMassKg: masses.startsKg,
     largestMarginalMassKg: masses.marginalKg,

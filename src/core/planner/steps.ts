@@ -105,7 +105,7 @@ function groupSteps(ctx: PlannerContext, rec: StepRecord, before: Int32Array | n
 
 /** The words of a helper's notch change: the head acts, calls it, and the helper follows (search.ts HELPER_FOLLOW_S). */
 function helperCall(rec: StepRecord, name: string, was: number, now: number, head: number): string {
-  const sign = rec.phase === "stretch" ? ", or as soon as the head reports the train moving" : "";
+  const sign = rec.phase === "stretch" ? ", or as soon as the head reports the train moving, whichever comes first" : "";
   const act = now > was ? `takes notch ${now}` : now === 0 ? "shuts off" : `eases to notch ${now}`;
   return `The head takes notch ${head} first and calls the ${name} by radio; the ${name} ${act} about ${HELPER_FOLLOW_S} s later${sign}, and confirms.`;
 }

@@ -165,8 +165,9 @@ describe("Assistance check", () => {
     fireEvent.click(within(cards()[1]!).getByRole("button", { name: /Plan with this help/ }));
     const added = harness.state.draft.draft.locomotives.slice(before);
     expect(added).toEqual([
-      { profile: "illustrative-6axle-3000", count: 1, position: "after", afterWagon: 9 },
-      { profile: "illustrative-6axle-3000", count: 1, position: "rear", afterWagon: expect.any(Number) },
+      // Mid-train and rear units as the search added them: remote, their own notch.
+      { profile: "illustrative-6axle-3000", count: 1, position: "after", afterWagon: 9, control: "remote" },
+      { profile: "illustrative-6axle-3000", count: 1, position: "rear", afterWagon: expect.any(Number), control: "remote" },
     ]);
     expect(harness.state.nav.screen()).toBe("start-plan");
     expect(harness.state.draft.checked().ok).toBe(true);
@@ -178,5 +179,21 @@ describe("Assistance check", () => {
     harness.state.draft.set("train", "trailingMass_t", -5);
     await screen.findByText(/breaks a rule, so it cannot be checked/);
     await waitFor(() => expect(pool.calls.every((c) => c.opts.signal?.aborted)).toBe(true));
+  });
+});
+
+describe("the unit the options add", () => {
+  it("the dispatcher chooses its profile and how mid-train and rear units are driven; the search is asked again with them", async () => {
+    const pool = fakePool({ assistance: () => ok(answer()), conditionMargins: () => ok(marginRows()) });
+    renderWithApp(() => <AssistanceCheck />, { pool });
+    await waitFor(() => expect(cards()).toHaveLength(2));
+    const first = pool.calls.filter((c) => c.kind === "assistance").length;
+    const select = screen.getByLabelText("Unit to add") as HTMLSelectElement;
+    fireEvent.change(select, { target: { value: "illustrative-4axle-1100" } });
+    fireEvent.click(screen.getByRole("radio", { name: /Helper \(own driver\)/ }));
+    await waitFor(() => expect(pool.calls.filter((c) => c.kind === "assistance").length).toBeGreaterThan(first));
+    const last = pool.calls.filter((c) => c.kind === "assistance").pop()!;
+    expect((last.opts as { helper?: { id: string } }).helper?.id).toBe("illustrative-4axle-1100");
+    expect((last.opts as { control?: string }).control).toBe("helper");
   });
 });

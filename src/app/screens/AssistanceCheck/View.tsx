@@ -14,7 +14,8 @@ import { Chart } from "../../components/Chart.js";
 import { Icon } from "../../components/Icon.js";
 import { VerdictBanner, VerdictIcon } from "../../components/VerdictBanner.js";
 import { words } from "../../words.js";
-import { duration, localiseText, margin, show, type UnitSystem } from "../../format.js";
+import { duration, localiseText, margin, percentOf, show, type UnitSystem } from "../../format.js";
+import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { Cautions } from "../shared/Cautions.js";
 import { divideLine, limitWord, optionHeadline, placeWords, REASON_SHORT } from "../shared/words.js";
 import type { CheckStatus } from "./createAssistanceCheck.js";
@@ -45,6 +46,10 @@ export interface AssistanceViewProps {
   onRetry: () => void;
   onEdit: () => void;
   onTry: (o: AssistanceOptionData) => void;
+  /** The locomotive profiles an option may add, the one chosen ("" for the lead unit's), and how added units are driven. */
+  profiles?: Array<{ id: string; label: string }>;
+  added?: { profile: string; control: "remote" | "helper" };
+  onAdded?: (a: { profile: string; control: "remote" | "helper" }) => void;
 }
 
 export function AssistanceView(props: AssistanceViewProps): JSX.Element {
@@ -68,6 +73,29 @@ export function AssistanceView(props: AssistanceViewProps): JSX.Element {
           fallback={<p class="problem">The case in Start plan breaks a rule, so it cannot be checked. Fix the inputs marked there first.</p>}
         >
           {(i) => <For each={i().lines}>{(l) => <p class="dispatch-line">{l}</p>}</For>}
+        </Show>
+        <Show when={props.profiles && props.added && props.onAdded}>
+          <div class="row added-unit" data-field="added-unit">
+            <div class="field">
+              <label class="field-label" for="added-profile">
+                Unit to add
+              </label>
+              <select id="added-profile" class="select" value={props.added!.profile} onChange={(e) => props.onAdded!({ ...props.added!, profile: e.currentTarget.value })}>
+                <option value="">Same as the lead unit</option>
+                <For each={props.profiles!}>{(p) => <option value={p.id}>{p.label}</option>}</For>
+              </select>
+            </div>
+            <SegmentedButtons<"remote" | "helper">
+              name="added-control"
+              label="Mid-train and rear units driven as"
+              value={props.added!.control}
+              onChange={(v) => props.onAdded!({ ...props.added!, control: v })}
+              options={[
+                { value: "remote", label: "Remote (own notch from the head)" },
+                { value: "helper", label: "Helper (own driver)" },
+              ]}
+            />
+          </div>
         </Show>
       </section>
 
@@ -127,7 +155,9 @@ function Options(props: { answer: AssistanceAnswer; units: UnitSystem; canTry: b
         <section class="panel" aria-labelledby="options-h">
           <h2 id="options-h">Assistance options</h2>
           <p class="muted">
-            Each adds {a().helper.label}, working in step with the head unit (same notch), and is checked in the train dynamics model against the coupler limits. Cheapest first.
+            Each adds {a().helper.label}: at the head in multiple with the head unit (same notch); mid-train and at the rear{" "}
+            {a().control === "helper" ? "as a helper with its own driver, each notch change called by radio" : "as remote power with its own notch, set from the head cab"}. Each is checked in the train
+            dynamics model against the coupler and wheel-climb limits. Cheapest first.
           </p>
           <Show when={a().options.length > 0} fallback={<NothingWorks answer={a()} units={props.units} />}>
             <ol class="option-cards">
@@ -197,6 +227,12 @@ function OptionCard(props: { option: AssistanceOptionData; rank: number; units: 
           <dt>Time to the target</dt>
           <dd>{o().timeToTargetS === null ? "not reached" : duration(o().timeToTargetS!)}</dd>
         </div>
+        <Show when={(o().effortSplit ?? []).length > 1}>
+          <div>
+            <dt>Effort split</dt>
+            <dd data-testid="effort-split">{o().effortSplit.map((g) => `${g.name} ${percentOf(g.share, 0)} (notch ${g.notch})`).join(" · ")}</dd>
+          </div>
+        </Show>
       </dl>
       <p class="option-note">{localiseText(o().note, props.units)}</p>
       <div class="option-actions">

@@ -7,6 +7,7 @@
 import { createEffect, createMemo, createSignal, on, onCleanup, type Accessor } from "solid-js";
 import type { ConditionMargin } from "../../../core/dispatch/conditionMargins.js";
 import type { StartCase } from "../../../core/train/types.js";
+import type { LocomotiveSpec } from "../../../core/physics/types.js";
 import type { Outcome, PlannerCalls } from "../../../worker/client.js";
 import type { AssistanceAnswer } from "../../../worker/protocol.js";
 
@@ -28,6 +29,8 @@ export interface AssistanceCheckDeps {
   workers: Pick<PlannerCalls, "assistance" | "conditionMargins">;
   /** The validated case (core SI form), or null while the inputs break a rule. */
   startCase: Accessor<StartCase | null>;
+  /** The unit the options add (default: the lead unit's) and how units added mid-train or at the rear are driven. */
+  added?: Accessor<{ helper?: LocomotiveSpec; control?: "remote" | "helper" }>;
 }
 
 interface Finished {
@@ -86,7 +89,8 @@ export function createAssistanceCheck(deps: AssistanceCheckDeps): AssistanceChec
       else setError(`Margins per rail condition: ${failure(o)}`);
       return o.ok ? o.result : null;
     });
-    const a = deps.workers.assistance(c, { signal: ctrl.signal, onProgress: (f) => live() && setAssistProgress(f) }).then((o) => {
+    const added = deps.added?.() ?? {};
+    const a = deps.workers.assistance(c, { signal: ctrl.signal, onProgress: (f) => live() && setAssistProgress(f), ...(added.helper ? { helper: added.helper } : {}), ...(added.control ? { control: added.control } : {}) }).then((o) => {
       if (!live()) return null;
       if (o.ok) setAnswer(o.result);
       else setError(`Assistance search: ${failure(o)}`);
@@ -112,7 +116,8 @@ export function createAssistanceCheck(deps: AssistanceCheckDeps): AssistanceChec
   // The case's identity: its whole content (an equal case rebuilt elsewhere does not start the work again).
   const key = createMemo(() => {
     const c = deps.startCase();
-    return c ? JSON.stringify(c) : null;
+    const added = deps.added?.() ?? {};
+    return c ? JSON.stringify([c, added.helper?.id ?? "", added.control ?? "remote"]) : null;
   });
 
   createEffect(

@@ -1,6 +1,6 @@
 /** Assistance check (wiring): the case being edited in Start plan, checked on the planner workers; the view is View.tsx. */
 import { words } from "../../words.js";
-import { createMemo, type JSX } from "solid-js";
+import { createMemo, createSignal, type JSX } from "solid-js";
 import { unwrap } from "solid-js/store";
 import type { StartCase } from "../../../core/train/types.js";
 import type { AssistanceOptionData } from "../../../worker/protocol.js";
@@ -45,7 +45,13 @@ export default function AssistanceCheck(): JSX.Element {
     const c = app.draft.checked();
     return c.ok ? c.value : null;
   });
-  const check = createAssistanceCheck({ workers: app.pool, startCase });
+  const [added, setAdded] = createSignal<{ profile: string; control: "remote" | "helper" }>({ profile: "", control: "remote" });
+  const addedSpec = createMemo(() => {
+    const a = added();
+    const spec = a.profile ? app.locations.library().locomotives.get(a.profile)?.spec : undefined;
+    return { ...(spec ? { helper: spec } : {}), control: a.control };
+  });
+  const check = createAssistanceCheck({ workers: app.pool, startCase, added: addedSpec });
   declarePrintStatus(() => ({ complete: check.status() !== "running", waitingFor: "the assistance check", inputs: startCase() }));
   const info = createMemo(() => {
     const c = startCase();
@@ -64,6 +70,7 @@ export default function AssistanceCheck(): JSX.Element {
         count: u.count,
         position: typeof p === "string" ? p : "after",
         afterWagon: typeof p === "string" ? Math.max(1, Math.floor(app.draft.draft.train.wagons / 2)) : p.afterWagon,
+        ...(p !== "head" ? { control: a.control ?? "remote" } : {}),
       });
     }
     app.nav.go("start-plan");
@@ -86,6 +93,9 @@ export default function AssistanceCheck(): JSX.Element {
       onRetry={check.retry}
       onEdit={() => app.nav.go("start-plan")}
       onTry={tryOption}
+      profiles={[...app.locations.library().locomotives.values()].map((l) => ({ id: l.spec.id, label: l.spec.label }))}
+      added={added()}
+      onAdded={setAdded}
     />
   );
 }

@@ -2,7 +2,7 @@
  * Cab steps: one step at a time, full screen, very large type; Back and Next at the bottom; "If wheels
  * slip" one tap away on every step; the time since the step began.
  */
-import { Show, type JSX } from "solid-js";
+import { createSignal, For, Show, type JSX } from "solid-js";
 import type { PlanResult } from "../../../core/planner/types.js";
 import type { Target } from "../../../core/train/types.js";
 import { Icon } from "../../components/Icon.js";
@@ -10,7 +10,7 @@ import { VerdictIcon } from "../../components/VerdictBanner.js";
 import { words } from "../../words.js";
 import { clock, localiseText, percent, show, type UnitSystem } from "../../format.js";
 import type { WakeLockState } from "../../state/createWakeLock.js";
-import { advanceLead, advanceOthers, notchText, phaseLine, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
+import { advanceLead, advanceOthers, groupNotchesText, helperLine, notchText, phaseLine, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
 import { shell } from "../../../i18n/en/shell.js";
 import { steps } from "../../../i18n/en/steps.js";
 import { tr } from "../../i18n.js";
@@ -51,6 +51,11 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
   const steps = () => result()?.steps ?? [];
   const step = () => steps()[props.index];
   const count = () => steps().length;
+  // Whose steps: the head driver's (group 0), or a helper's driver's (the index of a helper group).
+  const [driver, setDriver] = createSignal(0);
+  const helpers = () => (steps().find((x) => x.groups)?.groups ?? []).map((g, k) => ({ name: g.name, k, helper: g.control === "helper" })).filter((g) => g.helper);
+  const who = () => (helpers().some((h) => h.k === driver()) ? driver() : 0);
+  const notchFor = (st: NonNullable<ReturnType<typeof step>>) => st.groups?.[who()]?.notch ?? st.notch;
   return (
     <div class="cab" data-step={props.index + 1}>
       <header class="cab-top">
@@ -109,12 +114,28 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
       >
         {(s) => (
           <main class="cab-main">
-            <div class="cab-notch" aria-label={t("notchIs", { notch: notchText(s().notch) })}>
-              <span class="cab-notch-label">{t("notch")}</span>
-              <span class="cab-notch-value">{notchText(s().notch)}</span>
+            <Show when={helpers().length > 0}>
+              <div class="cab-driver" role="group" aria-label="Steps for">
+                <button type="button" class="button" aria-pressed={who() === 0} onClick={() => setDriver(0)}>
+                  Head driver
+                </button>
+                <For each={helpers()}>
+                  {(h) => (
+                    <button type="button" class="button" aria-pressed={who() === h.k} onClick={() => setDriver(h.k)}>
+                      {h.name} driver
+                    </button>
+                  )}
+                </For>
+              </div>
+            </Show>
+            <div class="cab-notch" aria-label={t("notchIs", { notch: notchText(notchFor(s())) })}>
+              <span class="cab-notch-label">{who() === 0 ? t("notch") : `${t("notch")}, ${s().groups?.[who()]?.name ?? ""}`}</span>
+              <span class="cab-notch-value">{notchText(notchFor(s()))}</span>
               <span class="cab-phase-line">{phaseLine(s().phase)}</span>
+              <Show when={s().groups}>{(gs) => <span class="cab-groups" data-testid="cab-group-notches">{groupNotchesText(gs())}</span>}</Show>
             </div>
             <div class="cab-info">
+              <Show when={who() !== 0 && s().groups?.[who()]}>{(g) => <p class="cab-advance" data-testid="helper-line">{helperLine(g())}</p>}</Show>
               <p class="cab-advance">{advanceLead(s(), props.units, props.target)}</p>
               <Show when={advanceOthers(s(), props.units).length > 0}>
                 <p class="cab-others">{advanceOthers(s(), props.units).join(" · ")}</p>

@@ -1,10 +1,11 @@
-/** Start plan inputs, locomotives: groups of one profile, how many, and where in the train. */
+/** Start plan inputs, locomotives: groups of one profile, how many, where in the train and how they are driven. */
 import { For, Index, Show, type JSX } from "solid-js";
 import type { Library } from "../../../profiles/library.js";
 import { Icon } from "../../components/Icon.js";
 import { QuantityField } from "../../components/QuantityField.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import type { DraftPosition } from "../../state/caseDraft.js";
+import type { UnitControl } from "../../../core/train/types.js";
 import { issueFinder, type InputSectionProps } from "./inputSection.js";
 
 export interface LocomotivesSectionProps extends InputSectionProps {
@@ -73,6 +74,17 @@ export function LocomotivesSection(props: LocomotivesSectionProps): JSX.Element 
                 issue={issue(`locomotives[${k}].position.afterWagon`, `locomotives[${k}].position`)}
               />
             </Show>
+            <SegmentedButtons<UnitControl>
+              name={`locomotives[${k}].control`}
+              label="Driven"
+              value={loco().control ?? (loco().position === "head" ? "with-head" : "remote")}
+              onChange={(v) => s.set("locomotives", k, "control", v)}
+              options={[
+                { value: "with-head", label: "In multiple (head's notch)" },
+                { value: "remote", label: "Remote (own notch)" },
+                { value: "helper", label: "Helper (own driver)" },
+              ]}
+            />
             <Show when={d.locomotives.length > 1}>
               <button type="button" class="button subtle" onClick={() => s.removeLocomotive(k)}>
                 <Icon name="remove" /> Remove this group

@@ -1,9 +1,9 @@
 /** One numbered step of the plan: the notch large, when to advance, and the figures behind it. */
-import { Show, type JSX } from "solid-js";
+import { For, Show, type JSX } from "solid-js";
 import type { PlanStep } from "../../../core/planner/types.js";
 import type { Target } from "../../../core/train/types.js";
 import { localiseText, percentOf, show, type UnitSystem } from "../../format.js";
-import { advanceLead, advanceOthers, notchText, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
+import { advanceLead, advanceOthers, groupNotchesText, notchText, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
 import { steps } from "../../../i18n/en/steps.js";
 import { tr } from "../../i18n.js";
 
@@ -30,6 +30,7 @@ export function StepCard(props: StepCardProps): JSX.Element {
         <span class="step-number">{t("step", { number: props.index + 1 })}</span>
         <span class="notch-label">{t("notch")}</span>
         <span class="notch-value">{notchText(s().notch)}</span>
+        <Show when={s().groups}>{(gs) => <span class="notch-groups" data-testid="group-notches">{groupNotchesText(gs())}</span>}</Show>
       </div>
       <div class="step-body">
         <p class="step-phase">{phaseWord(s().phase)}</p>
@@ -82,6 +83,7 @@ export function StepCard(props: StepCardProps): JSX.Element {
           </div>
         </dl>
         <p class="step-why">{localiseText(s().why, props.units)}</p>
+        <For each={(s().groups ?? []).filter((g) => g.coordination)}>{(g) => <p class="step-coordination">{g.coordination}</p>}</For>
       </div>
     </li>
   );

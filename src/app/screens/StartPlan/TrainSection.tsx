@@ -1,5 +1,9 @@
-/** Start plan inputs, train: trailing mass, wagons, coupling, slack, bearings and the slack at the start. */
-import { For, type JSX } from "solid-js";
+/**
+ * Start plan inputs, train: trailing mass, wagons, coupling, slack, bearings and the slack at the start — or,
+ * for a mixed train, its wagon groups from the head (wagons, type and mass of each).
+ */
+import { For, Index, Show, type JSX } from "solid-js";
+import { Icon } from "../../components/Icon.js";
 import type { Library } from "../../../profiles/library.js";
 import { QuantityField } from "../../components/QuantityField.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
@@ -19,6 +23,10 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
   return (
     <section class="panel">
       <h2>Train</h2>
+      <Show
+        when={(d.train.groups ?? []).length > 0}
+        fallback={
+          <>
       <QuantityField
         name="train.trailingMass_t"
         label="Trailing mass"
@@ -65,6 +73,14 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
           <For each={[...props.library.wagons.values()]}>{(w) => <option value={w.id}>{w.label}</option>}</For>
         </select>
       </div>
+            <button type="button" class="button subtle" data-action="add-wagon-group" onClick={() => s.addWagonGroup()}>
+              <Icon name="add" /> Enter as wagon groups (mixed loads or types)
+            </button>
+          </>
+        }
+      >
+        <WagonGroups {...props} />
+      </Show>
       <SegmentedButtons
         name="train.coupling"
         label="Coupling"
@@ -122,6 +138,81 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
         ]}
       />
     </section>
+  );
+}
+
+/** A mixed train: its wagon groups from the head, each with its wagons, type and total mass; the totals below. */
+function WagonGroups(props: TrainSectionProps): JSX.Element {
+  const s = props.store;
+  const d = s.draft;
+  const issue = issueFinder(s);
+  const groups = () => d.train.groups ?? [];
+  const totals = () => {
+    let wagons = 0;
+    let mass = 0;
+    let length = 0;
+    for (const g of groups()) {
+      wagons += g.wagons;
+      mass += g.mass_t;
+      length += g.wagons * (props.library.wagons.get(g.wagonType)?.lengthM ?? Number.NaN);
+    }
+    return { wagons, mass, length };
+  };
+  return (
+    <div class="wagon-groups" data-field="train.groups">
+      <p class="field-label">Wagon groups, from the head</p>
+      <Index each={groups()}>
+        {(g, k) => (
+          <div class="loco-group" data-group={k}>
+            <div class="row">
+              <QuantityField
+                name={`train.groups[${k}].wagons`}
+                label="Wagons"
+                value={g().wagons}
+                onValue={(v) => s.set("train", "groups", k, "wagons", v)}
+                units={props.units}
+                integer
+                step={1}
+                min={1}
+                max={400}
+                issue={issue(`train.groups[${k}].wagons`)}
+              />
+              <QuantityField
+                name={`train.groups[${k}].mass_t`}
+                label="Mass of the group"
+                measure="mass"
+                fileUnit="t"
+                value={g().mass_t}
+                onValue={(v) => s.set("train", "groups", k, "mass_t", v)}
+                units={props.units}
+                step={50}
+                min={0}
+                issue={issue(`train.groups[${k}].mass_t`)}
+                hint={<>{g().wagons >= 1 && g().mass_t > 0 ? `${show("mass", (g().mass_t * 1000) / g().wagons, props.units)} per wagon` : ""}</>}
+              />
+            </div>
+            <div class="field" data-field={`train.groups[${k}].wagonType`}>
+              <label class="field-label" for={`group-type-${k}`}>
+                Wagon type
+              </label>
+              <select id={`group-type-${k}`} class="select" value={g().wagonType} onChange={(e) => s.set("train", "groups", k, "wagonType", e.currentTarget.value)}>
+                <For each={[...props.library.wagons.values()]}>{(w) => <option value={w.id}>{w.label}</option>}</For>
+              </select>
+            </div>
+            <button type="button" class="button subtle" onClick={() => s.removeWagonGroup(k)}>
+              <Icon name="remove" /> Remove this group
+            </button>
+          </div>
+        )}
+      </Index>
+      <button type="button" class="button" data-action="add-wagon-group" onClick={() => s.addWagonGroup()}>
+        <Icon name="add" /> Add a wagon group
+      </button>
+      <p class="hint" data-testid="group-totals">
+        In all: {totals().wagons} wagons, {show("mass", totals().mass * 1000, props.units)}
+        {Number.isFinite(totals().length) ? `, ${show("distance", totals().length, props.units, 0)} long` : ""}. The largest-mass figures scale every group's load above tare in proportion.
+      </p>
+    </div>
   );
 }
 
