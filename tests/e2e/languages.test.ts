@@ -19,6 +19,8 @@ import { cardHu } from "../../src/i18n/hu/card.js";
 import { card } from "../../src/i18n/en/card.js";
 import { wordsDe } from "../../src/i18n/de/words.js";
 import { wordsHu } from "../../src/i18n/hu/words.js";
+import { departuresDe } from "../../src/i18n/de/departures.js";
+import { departuresHu } from "../../src/i18n/hu/departures.js";
 
 let context: BrowserContext;
 let page: Page;
@@ -112,6 +114,7 @@ describe("Taut in three languages", () => {
         await page.setViewportSize(size);
         for (const id of SCREENS) {
           await go(id);
+          if (id === "departures") expect(await page.locator("#load-h").textContent()).toBe((lang === "hu" ? departuresHu : departuresDe).loadHeading);
           await page.screenshot({ path: join(SHOTS, `lang-${lang}-${id}-${name2}.png`) });
         }
       }

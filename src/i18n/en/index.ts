@@ -2,6 +2,7 @@
 import { card } from "./card.js";
 import { cautions } from "./cautions.js";
 import { cli } from "./cli.js";
+import { departures } from "./departures.js";
 import { dispatch } from "./dispatch.js";
 import { inputs } from "./inputs.js";
 import { plan } from "./plan.js";
@@ -10,4 +11,4 @@ import { shell } from "./shell.js";
 import { steps } from "./steps.js";
 import { words } from "./words.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures] as const;

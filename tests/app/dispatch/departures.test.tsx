@@ -10,8 +10,16 @@ import Departures from "../../../src/app/screens/Departures/index.js";
 import { CHECK_CSV_HEADER } from "../../../src/profiles/csv.js";
 import type { StartCase } from "../../../src/core/train/types.js";
 import type { CheckAnswer } from "../../../src/worker/protocol.js";
-import { renderWithApp } from "../harness.js";
+import { memoryStorage, renderWithApp } from "../harness.js";
 import { fakePool, ok } from "./fakes.js";
+import { appLang, setAppLanguage } from "../../../src/app/i18n.js";
+import { SETTINGS_KEY } from "../../../src/app/state/createSettings.js";
+import { departures } from "../../../src/i18n/en/departures.js";
+import { de } from "../../../src/i18n/de/index.js";
+import { hu } from "../../../src/i18n/hu/index.js";
+import { createTranslator } from "../../../src/i18n/translator.js";
+import { wordsDe } from "../../../src/i18n/de/words.js";
+import { wordsHu } from "../../../src/i18n/hu/words.js";
 
 const read = (p: string) => readFileSync(join(process.cwd(), "profiles", p), "utf8");
 const demoDay = JSON.parse(read("departures/demo-day.json")) as Array<Record<string, unknown>>;
@@ -228,5 +236,40 @@ describe("Departures", () => {
     expect(text).toContain("781 short tons"); // 709.2 t = 781.8 short tons, rounded down
     expect(text).toContain("1,543 short tons"); // the train's 1,400 t
     expect(text).not.toMatch(/\d t\b/);
+  });
+
+  it("reads in German and Hungarian: headings, filters, counts and verdict words from the language's catalog, the same figures", async () => {
+    for (const [lang, catalog, w, decimal] of [["de", de, wordsDe, ","], ["hu", hu, wordsHu, ","]] as const) {
+      const d = createTranslator(lang, catalog).ns(departures);
+      expect(d("loadHeading")).not.toBe(departures.en.loadHeading);
+      // The language as Settings names it (the app applies it once its catalog has loaded).
+      const storage = memoryStorage();
+      storage.setItem(SETTINGS_KEY, JSON.stringify({ language: lang }));
+      try {
+        const { unmount } = renderWithApp(() => <Departures />, { storage, pool: fakePool({ check: (c) => ok(answerFor(c)) }) });
+        await waitFor(() => expect(appLang()).toBe(lang));
+        fireEvent.change(screen.getByLabelText(d("pickLabel")), { target: { files: [dayFile()] } });
+        await waitFor(() => expect(screen.getByRole("button", { name: new RegExp(d("exportCsv")) }).hasAttribute("disabled")).toBe(false), { timeout: 15_000 });
+        expect(screen.getByRole("heading", { level: 2, name: d("loadHeading") })).toBeTruthy();
+        const heads = [...document.querySelectorAll(".departures-table thead th")].map((th) => th.textContent!.trim());
+        expect(heads).toEqual([d("colDeparture"), d("colVerdict"), d("colWhy"), d("colMargin"), d("colLargest"), d("colAssistance"), d("colOpen")]);
+        const filter = screen.getByRole("radiogroup", { name: d("show") });
+        expect([...filter.querySelectorAll("[role=radio]")].map((b) => b.textContent)).toEqual([d("all", { count: 5 }), d("filterNeedsAssistance", { count: 2 }), d("filterMarginal", { count: 2 }), d("filterStarts", { count: 1 })]);
+        const chips = document.querySelector(".summary-chips")!.textContent!;
+        expect(chips).toContain(d("needAssistance", { count: 2 }));
+        expect(chips).toContain(d("start", { count: 1 }));
+        expect(document.querySelector(".bad-rows h2")!.textContent).toBe(d("badHeading", { count: 1 }));
+        const wet = document.querySelector('tr[data-row="d-wet"]')!;
+        expect(wet.querySelector(".verdict-cell")!.textContent).toBe(w.verdictNeedsAssistance);
+        expect(wet.textContent).toContain(w.reasonAdhesion);
+        // The same margin as in English (× 0.98), with the language's decimal sign.
+        expect(wet.textContent).toContain(`× 0${decimal}98`);
+        expect(wet.textContent).toContain("460 t");
+        expect(screen.getByRole("button", { name: d("openPlanLabel", { id: "d-wet" }) })).toBeTruthy();
+        unmount();
+      } finally {
+        await setAppLanguage("en");
+      }
+    }
   });
 });

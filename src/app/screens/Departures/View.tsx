@@ -13,9 +13,14 @@ import { VerdictIcon } from "../../components/VerdictBanner.js";
 import { words } from "../../words.js";
 import { margin, show, showAtMost, type UnitSystem } from "../../format.js";
 import { Cautions } from "../shared/Cautions.js";
-import { divideLine, limitWord, optionHeadline, REASON_SHORT } from "../shared/words.js";
+import { departures } from "../../../i18n/en/departures.js";
+import { tr } from "../../i18n.js";
+import { kept, rich } from "../shared/rich.js";
+import { divideLine, limitWord, optionHeadline } from "../shared/words.js";
 import type { RunState } from "./createDeparturesRun.js";
 import type { DepartureRow, DeparturesSummary } from "./rows.js";
+
+const t = tr.ns(departures);
 
 export interface LoadedFile {
   name: string;
@@ -69,15 +74,14 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
   return (
     <div class="dispatch departures">
       <p class="advisory">
-        <Icon name="info" size={22} /> Advisory only: operating rules, local instructions and the locomotive's own instructions prevail. Decisions on assistance, dividing
-        a train or reducing the load belong to those your railway's rules name.
+        <Icon name="info" size={22} /> {t("advisory")}
       </p>
 
       <section class="panel" aria-labelledby="load-h">
-        <h2 id="load-h">Load a day's departures</h2>
+        <h2 id="load-h">{t("loadHeading")}</h2>
         <div class="file-actions">
           <button type="button" class="button primary big" disabled={props.reading} onClick={() => pick.click()}>
-            <Icon name="departures" /> Choose files…
+            <Icon name="departures" /> {t("chooseFiles")}
           </button>
           <input
             ref={pick}
@@ -85,7 +89,7 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
             type="file"
             multiple
             accept=".csv,.json,text/csv,application/json"
-            aria-label="Departures file, and the case files a CSV names"
+            aria-label={t("pickLabel")}
             tabIndex={-1}
             onChange={(e) => {
               const list = files(e);
@@ -93,19 +97,18 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
             }}
           />
           <button type="button" class="button big" disabled={props.reading} onClick={() => props.onDemo()}>
-            Demo day (illustrative)
+            {t("demoDay")}
           </button>
         </div>
         <ul class="formats">
           <li>
-            <strong>JSON:</strong> a list of start cases, each with an optional <code>id</code> — the same file <code>taut check</code> reads.
+            <strong>JSON:</strong> {rich(t("formatJson", kept("id", "command")), { id: <code>id</code>, command: <code>taut check</code> })}
           </li>
           <li>
-            <strong>CSV:</strong> columns <code>id,case,rail,sand</code>; <code>case</code> names a start-case file (or a built-in demo case by its id), <code>rail</code> and <code>sand</code> override its
-            conditions. A browser cannot open those files by their path, so <strong>pick the case files together with the CSV</strong> (select several at once): they are
-            matched by file name.
+            <strong>CSV:</strong>{" "}
+            {rich(t("formatCsv", kept("columns", "case", "rail", "sand", "pickTogether")), { columns: <code>id,case,rail,sand</code>, case: <code>case</code>, rail: <code>rail</code>, sand: <code>sand</code>, pickTogether: <strong>{t("pickTogether")}</strong> })}
           </li>
-          <li>A location may be a saved location note's id: the notes on this device are used.</li>
+          <li>{t("formatNotes")}</li>
         </ul>
       </section>
 
@@ -123,26 +126,24 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
               <div class="file-actions">
                 <Show when={running()}>
                   <button type="button" class="button" onClick={() => props.onCancel()}>
-                    <Icon name="close" /> Cancel
+                    <Icon name="close" /> {t("cancel")}
                   </button>
                 </Show>
                 <Show when={props.state === "cancelled"}>
                   <button type="button" class="button" onClick={() => props.onRestart()}>
-                    <Icon name="update" /> Check again
+                    <Icon name="update" /> {t("checkAgain")}
                   </button>
                 </Show>
                 <button type="button" class="button" disabled={props.state !== "done"} onClick={() => props.onExport()}>
-                  <Icon name="ready" /> Export CSV
+                  <Icon name="ready" /> {t("exportCsv")}
                 </button>
               </div>
             </div>
             <Show when={f().missing.length > 0}>
               <div class="problem" role="alert">
-                <p>
-                  Case files named in the CSV but not picked: <strong>{f().missing.join(", ")}</strong>. Their rows are not answered.
-                </p>
+                <p>{rich(t("missing", kept("files")), { files: <strong>{f().missing.join(", ")}</strong> })}</p>
                 <button type="button" class="button" onClick={() => more.click()}>
-                  <Icon name="add" /> Add case files…
+                  <Icon name="add" /> {t("addCases")}
                 </button>
                 <input
                   ref={more}
@@ -150,7 +151,7 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
                   type="file"
                   multiple
                   accept=".json,application/json"
-                  aria-label="Case files the CSV names"
+                  aria-label={t("addCasesLabel")}
                   tabIndex={-1}
                   onChange={(e) => {
                     const list = files(e);
@@ -160,41 +161,37 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
               </div>
             </Show>
             <Show when={f().unused.length > 0}>
-              <p class="muted">Not used (the file does not name them): {f().unused.join(", ")}.</p>
+              <p class="muted">{t("unused", { files: f().unused.join(", ") })}</p>
             </Show>
             <div aria-live="polite">
               <Show when={running()}>
                 <div class="dispatch-run-row">
-                  <div class="progress grow" role="progressbar" aria-label="Checking departures" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(props.progress * 100)}>
+                  <div class="progress grow" role="progressbar" aria-label={t("checking")} aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(props.progress * 100)}>
                     <span style={{ width: `${Math.max(4, props.progress * 100)}%` }} />
                   </div>
-                  <span>
-                    {props.summary.answered} of {props.summary.checkable} answered
-                  </span>
+                  <span>{t("answered", { answered: props.summary.answered, checkable: props.summary.checkable })}</span>
                 </div>
               </Show>
               <Show when={props.state === "cancelled"}>
-                <p>
-                  Cancelled: {props.summary.answered} of {props.summary.checkable} answered.
-                </p>
+                <p>{t("cancelled", { answered: props.summary.answered, checkable: props.summary.checkable })}</p>
               </Show>
               <p class="summary-chips">
                 <span>
-                  <VerdictIcon verdict="needs-assistance" size={22} /> {props.summary.needsAssistance} need assistance
+                  <VerdictIcon verdict="needs-assistance" size={22} /> {t("needAssistance", { count: props.summary.needsAssistance })}
                 </span>
                 <span>
-                  <VerdictIcon verdict="marginal" size={22} /> {props.summary.marginal} marginal
+                  <VerdictIcon verdict="marginal" size={22} /> {t("marginal", { count: props.summary.marginal })}
                 </span>
                 <span>
-                  <VerdictIcon verdict="starts" size={22} /> {props.summary.starts} start
+                  <VerdictIcon verdict="starts" size={22} /> {t("start", { count: props.summary.starts })}
                 </span>
                 <Show when={props.summary.bad > 0}>
-                  <span class="alert-text">{props.summary.bad} not answered</span>
+                  <span class="alert-text">{t("notAnswered", { count: props.summary.bad })}</span>
                 </Show>
               </p>
             </div>
             <Show when={props.state === "done"}>
-              <p class="muted">The CSV has the command line's columns and units (t, kN, s), rows in the file's order.</p>
+              <p class="muted">{t("csvNote")}</p>
             </Show>
           </section>
         )}
@@ -202,11 +199,11 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
 
       <Show when={props.bad.length > 0}>
         <section class="bad-rows" aria-labelledby="bad-h" role="alert">
-          <h2 id="bad-h">Rows not answered ({props.bad.length})</h2>
+          <h2 id="bad-h">{t("badHeading", { count: props.bad.length })}</h2>
           <ul>
             <For each={props.bad}>{(x) => <li>{x.error}</li>}</For>
           </ul>
-          <p>The other rows are answered as usual.</p>
+          <p>{t("badRest")}</p>
         </section>
       </Show>
 
@@ -214,29 +211,29 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
         <div class="departures-controls">
           <SegmentedButtons
             name="departures-filter"
-            label="Show"
+            label={t("show")}
             value={props.filter ?? "all"}
             onChange={(f) => props.onFilter?.(f)}
             options={[
-              { value: "all", label: `All (${props.summary.checkable})` },
-              { value: "needs-assistance", label: `Needs assistance (${props.summary.needsAssistance})` },
-              { value: "marginal", label: `Marginal (${props.summary.marginal})` },
-              { value: "starts", label: `Starts (${props.summary.starts})` },
+              { value: "all", label: t("all", { count: props.summary.checkable }) },
+              { value: "needs-assistance", label: t("filterNeedsAssistance", { count: props.summary.needsAssistance }) },
+              { value: "marginal", label: t("filterMarginal", { count: props.summary.marginal }) },
+              { value: "starts", label: t("filterStarts", { count: props.summary.starts }) },
             ]}
           />
           <SegmentedButtons
             name="departures-sort"
-            label="Order"
+            label={t("order")}
             value={props.sort ?? "risk"}
             onChange={(v) => props.onSort?.(v)}
             options={[
-              { value: "risk", label: "Most at risk first" },
-              { value: "file", label: "File order" },
+              { value: "risk", label: t("riskFirst") },
+              { value: "file", label: t("fileOrder") },
             ]}
           />
         </div>
         <Show when={props.rows.length === 0}>
-          <p class="placeholder-text">No departure has that verdict.</p>
+          <p class="placeholder-text">{t("noneWithVerdict")}</p>
         </Show>
       </Show>
 
@@ -244,23 +241,23 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
         <table class="dispatch-table departures-table">
           <caption>
             {(props.sort ?? "risk") === "risk"
-              ? "Most at risk first: needs assistance, then marginal, each by margin (smallest first), then those that start."
-              : "In the file's order."}{" "}
-            Open a train to see its full plan or its assistance options.
+              ? t("captionRisk")
+              : t("captionFile")}{" "}
+            {t("captionOpen")}
           </caption>
           <thead>
             <tr>
-              <th scope="col">Departure</th>
-              <th scope="col">Verdict</th>
-              <th scope="col">Why</th>
+              <th scope="col">{t("colDeparture")}</th>
+              <th scope="col">{t("colVerdict")}</th>
+              <th scope="col">{t("colWhy")}</th>
               <th scope="col" class="num">
-                Margin
+                {t("colMargin")}
               </th>
               <th scope="col" class="num">
-                Largest mass that starts
+                {t("colLargest")}
               </th>
-              <th scope="col">Cheapest assistance</th>
-              <th scope="col">Open</th>
+              <th scope="col">{t("colAssistance")}</th>
+              <th scope="col">{t("colOpen")}</th>
             </tr>
           </thead>
           <tbody>
@@ -278,7 +275,7 @@ function Row(props: { row: DepartureRow; units: UnitSystem; onOpen?: (row: Depar
   const x = () => props.row;
   const a = () => x().answer;
   const sub = () =>
-    [x().where, x().rail ? `${((RAIL_CONDITIONS as readonly string[]).includes(x().rail!) ? words.rail(x().rail as RailCondition) : x().rail)}${x().sand ? ", sand" : ", no sand"}` : "", x().trailingMassKg !== undefined ? show("mass", x().trailingMassKg!, props.units) : ""]
+    [x().where, x().rail ? `${((RAIL_CONDITIONS as readonly string[]).includes(x().rail!) ? words.rail(x().rail as RailCondition) : x().rail)}${x().sand ? `, ${t("sand")}` : `, ${t("noSand")}`}` : "", x().trailingMassKg !== undefined ? show("mass", x().trailingMassKg!, props.units) : ""]
       .filter((s) => s !== "")
       .join(" · ");
   const remedy = (): JSX.Element => {
@@ -288,21 +285,21 @@ function Row(props: { row: DepartureRow; units: UnitSystem; onOpen?: (row: Depar
     if (r.assistance)
       return (
         <>
-          Add {optionHeadline(r.assistance)}
+          {t("add", { option: optionHeadline(r.assistance) })}
           <span class="row-sub">{r.helper.label}</span>
         </>
       );
     if (r.divide) return divideLine(r.divide, props.units);
-    return "None found with one or two more units";
+    return t("noAssistance");
   };
   return (
     <tr classList={{ pending: !a() }} data-row={x().id} data-verdict={a()?.verdict ?? "pending"}>
-      <td data-label="Departure" class="dep">
+      <td data-label={t("colDeparture")} class="dep">
         <span class="row-id">{x().id}</span>
         <span class="row-sub">{sub()}</span>
       </td>
-      <td data-label="Verdict" class="verdict-td">
-        <Show when={a()} fallback={<span>waiting…</span>}>
+      <td data-label={t("colVerdict")} class="verdict-td">
+        <Show when={a()} fallback={<span>{t("waiting")}</span>}>
           {(r) => (
             <span class={`verdict-cell verdict-${r().verdict}`}>
               <VerdictIcon verdict={r().verdict} size={26} />
@@ -311,24 +308,24 @@ function Row(props: { row: DepartureRow; units: UnitSystem; onOpen?: (row: Depar
           )}
         </Show>
       </td>
-      <td data-label="Why" class="why">{a() ? (a()!.reasons.length > 0 ? a()!.reasons.map((r) => REASON_SHORT[r]).join(", ") : "—") : ""}</td>
-      <td data-label="Margin" data-short="margin" class="num">
+      <td data-label={t("colWhy")} class="why">{a() ? (a()!.reasons.length > 0 ? a()!.reasons.map((r) => words.reason(r)).join(", ") : "—") : ""}</td>
+      <td data-label={t("colMargin")} data-short="margin" class="num">
         {a() ? `${margin(a()!.margin)} (${limitWord(a()!.binding)})` : ""}
       </td>
-      <td data-label="Largest mass that starts" data-short="largest" class="num">
-        {a() ? (a()!.maxStartableMassKg >= 1000 ? showAtMost("mass", a()!.maxStartableMassKg, props.units) : "none") : ""}
+      <td data-label={t("colLargest")} data-short="largest" class="num">
+        {a() ? (a()!.maxStartableMassKg >= 1000 ? showAtMost("mass", a()!.maxStartableMassKg, props.units) : t("none")) : ""}
       </td>
-      <td data-label="Cheapest assistance" class="remedy">
+      <td data-label={t("colAssistance")} class="remedy">
         {remedy()}
       </td>
-      <td data-label="Open" class="open">
+      <td data-label={t("colOpen")} class="open">
         <Show when={x().file !== undefined && props.onOpen}>
           <div class="open-buttons">
-            <button type="button" class="button" aria-label={`Open ${x().id} in Start plan`} onClick={() => props.onOpen?.(x(), "plan")}>
-              <Icon name="plan" size={20} /> Plan
+            <button type="button" class="button" aria-label={t("openPlanLabel", { id: x().id })} onClick={() => props.onOpen?.(x(), "plan")}>
+              <Icon name="plan" size={20} /> {t("openPlan")}
             </button>
-            <button type="button" class="button" aria-label={`Open ${x().id} in Assistance check`} onClick={() => props.onOpen?.(x(), "assistance")}>
-              <Icon name="assist" size={20} /> Assistance
+            <button type="button" class="button" aria-label={t("openAssistanceLabel", { id: x().id })} onClick={() => props.onOpen?.(x(), "assistance")}>
+              <Icon name="assist" size={20} /> {t("openAssistance")}
             </button>
           </div>
         </Show>

@@ -15,6 +15,10 @@ import { pickedFiles, readPickedDepartures, type PickedFile } from "./readFiles.
 import { parseStartCaseFile } from "../../../profiles/parse.js";
 import { byRisk, departuresCsv, summarise, type DepartureRow } from "./rows.js";
 import { DeparturesView, type DeparturesFilter, type DeparturesSort, type LoadedFile } from "./View.js";
+import { departures } from "../../../i18n/en/departures.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(departures);
 
 /** The file and problem shown, kept with the run (per set of workers) while the app is open. */
 const screens = new WeakMap<
@@ -76,7 +80,7 @@ export default function Departures(): JSX.Element {
       setLoaded({ file: { name: r.file, kind: r.kind, missing: r.missing, unused: r.unused }, picked });
       run.start(r.departures);
     } catch (e) {
-      setProblem(`The files could not be read: ${(e as Error).message || String(e)}`);
+      setProblem(t("unreadable", { error: (e as Error).message || String(e) }));
     } finally {
       setReading(false);
     }
@@ -96,11 +100,11 @@ export default function Departures(): JSX.Element {
       onOpen={(row, where) => {
         const f = parseStartCaseFile(row.file);
         if (!f.ok) {
-          setProblem(`${row.id} cannot be opened: ${f.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
+          setProblem(t("cannotOpen", { id: row.id, issues: f.issues.map((i) => `${i.path}: ${i.message}`).join("; ") }));
           return;
         }
         // The departure becomes the case being edited: Start plan plans it, Assistance check checks it.
-        app.draft.loadCase({ ...f.value, id: f.value.id ?? row.id, label: f.value.label ? `${row.id}: ${f.value.label}` : `Departure ${row.id}` });
+        app.draft.loadCase({ ...f.value, id: f.value.id ?? row.id, label: f.value.label ? `${row.id}: ${f.value.label}` : t("departureLabel", { id: row.id }) });
         app.nav.go(where === "plan" ? "start-plan" : "assistance-check");
       }}
       bad={rows().filter((x) => x.error !== undefined)}
