@@ -21,6 +21,8 @@ import { wordsDe } from "../../src/i18n/de/words.js";
 import { wordsHu } from "../../src/i18n/hu/words.js";
 import { departuresDe } from "../../src/i18n/de/departures.js";
 import { departuresHu } from "../../src/i18n/hu/departures.js";
+import { notesDe } from "../../src/i18n/de/notes.js";
+import { notesHu } from "../../src/i18n/hu/notes.js";
 
 let context: BrowserContext;
 let page: Page;
@@ -115,6 +117,7 @@ describe("Taut in three languages", () => {
         for (const id of SCREENS) {
           await go(id);
           if (id === "departures") expect(await page.locator("#load-h").textContent()).toBe((lang === "hu" ? departuresHu : departuresDe).loadHeading);
+          if (id === "location-notes") expect(await page.locator(".notes-library .notes-row-actions button").first().textContent()).toBe((lang === "hu" ? notesHu : notesDe).newNote);
           await page.screenshot({ path: join(SHOTS, `lang-${lang}-${id}-${name2}.png`) });
         }
       }
@@ -126,9 +129,12 @@ describe("Taut in three languages", () => {
   it("prints the location card in each language with the note's name and its load table (PDF text)", async () => {
     for (const [lang, c, name] of [["en", card.en, "English"], ["hu", cardHu, "Magyar"], ["de", cardDe, "Deutsch"]] as const) {
       await go("location-notes");
-      const open = page.locator('button[aria-label^="Card of "]').first();
+      // The first note's card button (its label is in the language on screen), and the note's name beside it.
+      const item = page.locator(".notes-list .notes-item").first();
+      const open = item.locator("button.button");
       await open.waitFor({ timeout: 60_000 });
-      const note = ((await open.getAttribute("aria-label")) ?? "").replace(/^Card of /, "");
+      const note = ((await item.locator(".notes-item-name").textContent()) ?? "").trim();
+      expect(note).not.toBe("");
       await open.click();
       await page.getByRole("radio", { name }).click();
       await page.locator(".notes-card-preview .notes-loadtable").waitFor({ timeout: 120_000 });

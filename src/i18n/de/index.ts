@@ -6,9 +6,10 @@ import { settingsDe } from "./settings.js";
 import { stepsDe } from "./steps.js";
 import { planDe } from "./plan.js";
 import { inputsDe } from "./inputs.js";
+import { notesDe } from "./notes.js";
 import { departuresDe } from "./departures.js";
 import { dispatchDe } from "./dispatch.js";
 import { cautionsDe } from "./cautions.js";
 import { wordsDe } from "./words.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, departures: departuresDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, departures: departuresDe, notes: notesDe };

@@ -5,10 +5,11 @@ import { cli } from "./cli.js";
 import { departures } from "./departures.js";
 import { dispatch } from "./dispatch.js";
 import { inputs } from "./inputs.js";
+import { notes } from "./notes.js";
 import { plan } from "./plan.js";
 import { settings } from "./settings.js";
 import { shell } from "./shell.js";
 import { steps } from "./steps.js";
 import { words } from "./words.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes] as const;

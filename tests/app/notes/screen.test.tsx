@@ -11,7 +11,13 @@ import LocationNotesScreen from "../../../src/app/screens/LocationNotes/index.js
 import { DEFAULT_NOTES_DB, listNotesForPicker } from "../../../src/notes/index.js";
 import { builtinLocations } from "../../../src/profiles/builtin.js";
 import { makeNotesBundle } from "../../../src/profiles/notes.js";
-import { quickTablePool, renderWithApp } from "../harness.js";
+import { memoryStorage, quickTablePool, renderWithApp } from "../harness.js";
+import { appLang, setAppLanguage } from "../../../src/app/i18n.js";
+import { SETTINGS_KEY } from "../../../src/app/state/createSettings.js";
+import { notes } from "../../../src/i18n/en/notes.js";
+import { de } from "../../../src/i18n/de/index.js";
+import { hu } from "../../../src/i18n/hu/index.js";
+import { createTranslator } from "../../../src/i18n/translator.js";
 
 const listed = () => [...document.querySelectorAll(".notes-item-name")].map((e) => e.textContent);
 const input = (name: string) => document.querySelector(`[data-field="${name}"] input, [data-field="${name}"] textarea`) as HTMLInputElement;
@@ -21,6 +27,29 @@ describe("Location notes screen", () => {
     renderWithApp(() => <LocationNotesScreen />, { pool: quickTablePool() });
     await waitFor(() => expect(listed()).toHaveLength(builtinLocations.length), { timeout: 10_000 });
     expect(screen.getAllByText("Illustrative")).toHaveLength(builtinLocations.length);
+  });
+
+  it("shows the library in German and Hungarian: its actions, tags and each note's card button in the language's words", async () => {
+    for (const [lang, catalog] of [["de", de], ["hu", hu]] as const) {
+      const n = createTranslator(lang, catalog).ns(notes);
+      expect(n("newNote")).not.toBe(notes.en.newNote);
+      const storage = memoryStorage();
+      storage.setItem(SETTINGS_KEY, JSON.stringify({ language: lang }));
+      try {
+        const { unmount } = renderWithApp(() => <LocationNotesScreen />, { storage, pool: quickTablePool() });
+        await waitFor(() => expect(appLang()).toBe(lang));
+        await waitFor(() => expect(listed()).toHaveLength(builtinLocations.length), { timeout: 10_000 });
+        expect(screen.getByRole("button", { name: n("newNote") })).toBeTruthy();
+        expect(screen.getByRole("button", { name: n("exportAll") })).toBeTruthy();
+        expect(screen.getAllByText(n("illustrative"))).toHaveLength(builtinLocations.length);
+        const first = listed()[0]!;
+        expect(screen.getByRole("button", { name: n("cardOf", { name: first }) })).toBeTruthy();
+        expect(document.querySelector(".notes-library p[aria-live]")!.textContent).toContain(n("count", { count: builtinLocations.length }));
+        unmount();
+      } finally {
+        await setAppLanguage("en");
+      }
+    }
   });
 
   it("saves a new note, lists it, and offers it to the location pickers", async () => {

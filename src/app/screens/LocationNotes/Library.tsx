@@ -7,6 +7,10 @@ import { createMemo, createSignal, For, Show, type JSX } from "solid-js";
 import type { NoteRow, RecordProblem } from "../../../notes/records.js";
 import type { ExportReminder, PersistResult } from "../../../notes/reminder.js";
 import type { Notice } from "./createNotesLibrary.js";
+import { notes } from "../../../i18n/en/notes.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(notes);
 
 export interface LibraryProps {
   ready: boolean;
@@ -41,14 +45,14 @@ export interface LibraryProps {
 /** Notes shown at first, and how many more each "Show more" adds: a long library stays quick to draw. */
 export const LIBRARY_PAGE = 100;
 
-const ORIGIN_WORD = { demo: "demo note", mine: "yours", imported: "imported" } as const;
+const ORIGIN_WORD = { demo: () => t("originDemo"), mine: () => t("originMine"), imported: () => t("originImported") } as const;
 
 export function NoticeBox(props: { notice: Notice; onDismiss: () => void }): JSX.Element {
   const reload = () => location.reload();
   return (
     <div class="notes-notice" classList={{ problem: props.notice.kind === "problem" }} role={props.notice.kind === "problem" ? "alert" : "status"}>
       <p>
-        <strong>{props.notice.kind === "problem" ? "Not done. " : ""}</strong>
+        <strong>{props.notice.kind === "problem" ? t("notDone") : ""}</strong>
         {props.notice.text}
       </p>
       <Show when={props.notice.details && props.notice.details.length > 0}>
@@ -56,16 +60,16 @@ export function NoticeBox(props: { notice: Notice; onDismiss: () => void }): JSX
           <For each={props.notice.details!.slice(0, 12)}>{(d) => <li>{d}</li>}</For>
         </ul>
         <Show when={props.notice.details!.length > 12}>
-          <p>…and {props.notice.details!.length - 12} more.</p>
+          <p>{t("andMore", { count: props.notice.details!.length - 12 })}</p>
         </Show>
       </Show>
       <Show when={props.notice.reload}>
         <button type="button" class="button small primary" onClick={reload}>
-          Reload the page
+          {t("reload")}
         </button>
       </Show>
       <button type="button" class="button small" onClick={() => props.onDismiss()}>
-        OK
+        {t("ok")}
       </button>
     </div>
   );
@@ -87,15 +91,15 @@ export function Library(props: LibraryProps): JSX.Element {
     const r = props.reminder;
     if (!r?.due) return "";
     return r.lastExport === undefined
-      ? "Your notes have never been exported. They live only in this browser until you export a copy: keep the file somewhere safe and share it with drivers."
-      : `Your notes were last exported ${r.daysSince} days ago. Export a fresh copy so recent changes are not lost with the device.`;
+      ? t("neverExported")
+      : t("lastExported", { count: r.daysSince ?? 0 });
   };
 
   return (
     <div class="notes-library">
       <header class="notes-library-head">
-        <h2 class="visually-hidden">Library</h2>
-        <p class="notes-hint">What a driver must know to start at a place: the track under and ahead of the train, hazards, the usual rail, and the practice that works. Saved on this device.</p>
+        <h2 class="visually-hidden">{t("library")}</h2>
+        <p class="notes-hint">{t("libraryHint")}</p>
       </header>
 
       <Show when={props.failure}>
@@ -108,27 +112,27 @@ export function Library(props: LibraryProps): JSX.Element {
         <div class="notes-reminder" role="status">
           <p>{reminderText()}</p>
           <button type="button" class="button primary" disabled={props.busy} onClick={() => props.onExportAll()}>
-            Export all notes now
+            {t("exportAllNow")}
           </button>
         </div>
       </Show>
       <Show when={props.persisted === "not-granted"}>
-        <p class="notes-small">This browser has not promised to keep stored data when space runs low: export your notes regularly.</p>
+        <p class="notes-small">{t("notPersisted")}</p>
       </Show>
 
       <div class="notes-row-actions">
         <button type="button" class="button primary" onClick={() => props.onNew()}>
-          New note
+          {t("newNote")}
         </button>
         <button type="button" class="button" disabled={props.busy} onClick={() => fileInput.click()}>
-          Import notes file
+          {t("importFile")}
         </button>
         <input
           ref={fileInput}
           class="visually-hidden"
           type="file"
           accept=".json,application/json"
-          aria-label="Notes file to import"
+          aria-label={t("importFileLabel")}
           tabIndex={-1}
           onChange={(e) => {
             const f = e.currentTarget.files?.[0];
@@ -138,23 +142,23 @@ export function Library(props: LibraryProps): JSX.Element {
         />
         <Show when={props.onRailml}>
           <button type="button" class="button" disabled={props.busy} onClick={() => props.onRailml?.()}>
-            Import from railML
+            {t("importRailml")}
           </button>
         </Show>
         <button type="button" class="button" disabled={props.busy || props.rows.length === 0} onClick={() => props.onExportAll()}>
-          Export all notes
+          {t("exportAll")}
         </button>
       </div>
 
-      <Show when={props.ready} fallback={<p class="notes-hint">Opening the library…</p>}>
-        <Show when={props.rows.length > 0} fallback={<p class="notes-empty">No notes yet. Make one with "New note", or import a notes file.</p>}>
+      <Show when={props.ready} fallback={<p class="notes-hint">{t("opening")}</p>}>
+        <Show when={props.rows.length > 0} fallback={<p class="notes-empty">{t("empty")}</p>}>
           <Show when={props.rows.length > LIBRARY_PAGE}>
             <label class="notes-filter">
-              <span>Find a note</span>
+              <span>{t("find")}</span>
               <input
                 type="search"
                 value={filter()}
-                placeholder="Name, line or direction"
+                placeholder={t("findPlaceholder")}
                 onInput={(e) => {
                   setFilter(e.currentTarget.value);
                   setLimit(LIBRARY_PAGE);
@@ -163,11 +167,11 @@ export function Library(props: LibraryProps): JSX.Element {
             </label>
           </Show>
           <p class="notes-small" aria-live="polite">
-            {matching().length === props.rows.length ? `${props.rows.length} notes` : `${matching().length} of ${props.rows.length} notes match`}
-            {shown().length < matching().length ? `; the first ${shown().length} are shown` : ""}
-            {props.checking ? ". Checking the whole library…" : ""}
+            {matching().length === props.rows.length ? t("count", { count: props.rows.length }) : t("matching", { matching: matching().length, total: props.rows.length })}
+            {shown().length < matching().length ? t("firstShown", { count: shown().length }) : ""}
+            {props.checking ? t("checking") : ""}
           </p>
-          <ul class="notes-list" aria-label="Saved location notes">
+          <ul class="notes-list" aria-label={t("listLabel")}>
             <For each={shown()}>
               {(s) => (
                 <li class="notes-item">
@@ -175,17 +179,18 @@ export function Library(props: LibraryProps): JSX.Element {
                     <span class="notes-item-name">{s.name}</span>
                     <span class="notes-item-detail">
                       {[s.line, s.direction].filter(Boolean).join(" · ")}
-                      {s.line || s.direction ? " — " : ""}revised {s.revised.date} by {s.revised.initials} · {ORIGIN_WORD[s.origin]}
+                      {s.line || s.direction ? " — " : ""}
+                      {t("revised", { date: s.revised.date, initials: s.revised.initials, origin: ORIGIN_WORD[s.origin]() })}
                     </span>
                     <Show when={s.illustrative}>
-                      <span class="notes-tag">Illustrative</span>
+                      <span class="notes-tag">{t("illustrative")}</span>
                     </Show>
                     <Show when={s.flags > 0}>
-                      <span class="notes-tag notes-flag">To check: {s.flags} thing{s.flags === 1 ? "" : "s"} not carried over</span>
+                      <span class="notes-tag notes-flag">{t("toCheck", { count: s.flags })}</span>
                     </Show>
                   </button>
-                  <button type="button" class="button" aria-label={`Card of ${s.name}`} onClick={() => props.onCard(s.id)}>
-                    Card
+                  <button type="button" class="button" aria-label={t("cardOf", { name: s.name })} onClick={() => props.onCard(s.id)}>
+                    {t("card")}
                   </button>
                 </li>
               )}
@@ -193,7 +198,7 @@ export function Library(props: LibraryProps): JSX.Element {
           </ul>
           <Show when={shown().length < matching().length}>
             <button type="button" class="button" onClick={() => setLimit((n) => n + LIBRARY_PAGE)}>
-              Show {Math.min(LIBRARY_PAGE, matching().length - shown().length)} more
+              {t("showMore", { count: Math.min(LIBRARY_PAGE, matching().length - shown().length) })}
             </button>
           </Show>
         </Show>
@@ -201,11 +206,8 @@ export function Library(props: LibraryProps): JSX.Element {
 
       <Show when={props.problems.length > 0}>
         <section class="notes-damaged" aria-labelledby="notes-damaged-title">
-          <h3 id="notes-damaged-title">Damaged records ({props.problems.length})</h3>
-          <p class="notes-hint">
-            These records could not be read and are left out of the library and the pickers. The rest of the library is unaffected. Export a record before removing it: it keeps
-            everything it holds.
-          </p>
+          <h3 id="notes-damaged-title">{t("damaged", { count: props.problems.length })}</h3>
+          <p class="notes-hint">{t("damagedHint")}</p>
           <ul>
             <For each={props.problems}>
               {(p) => (
@@ -218,14 +220,14 @@ export function Library(props: LibraryProps): JSX.Element {
                   </Show>
                   <Show when={p.rescue}>
                     <button type="button" class="button small primary" onClick={() => props.onRescue(p)}>
-                      Put it right in the editor
+                      {t("rescue")}
                     </button>
                   </Show>
                   <button type="button" class="button small" onClick={() => props.onExportRaw(p)}>
-                    Export record
+                    {t("exportRecord")}
                   </button>
                   <button type="button" class="button small" onClick={() => props.onRemove(p.rawKey)}>
-                    Remove record
+                    {t("removeRecord")}
                   </button>
                 </li>
               )}
@@ -236,19 +238,19 @@ export function Library(props: LibraryProps): JSX.Element {
 
       <div class="notes-row-actions notes-quiet">
         <button type="button" class="button" onClick={() => props.onRestoreDemos()}>
-          Put back the demo notes
+          {t("restoreDemos")}
         </button>
         <Show when={props.rows.length > 0}>
           <Show
             when={confirmAll()}
             fallback={
               <button type="button" class="button danger" onClick={() => setConfirmAll(true)}>
-                Remove all notes…
+                {t("removeAllAsk")}
               </button>
             }
           >
-            <div class="notes-confirm" role="group" aria-label="Confirm removing all notes">
-              <p>Remove all {props.rows.length} notes from this device? Export them first if you may want them again.</p>
+            <div class="notes-confirm" role="group" aria-label={t("removeAllLabel")}>
+              <p>{t("removeAllQuestion", { count: props.rows.length })}</p>
               <button
                 type="button"
                 class="button danger"
@@ -257,10 +259,10 @@ export function Library(props: LibraryProps): JSX.Element {
                   props.onRemoveAll();
                 }}
               >
-                Remove all
+                {t("removeAll")}
               </button>
               <button type="button" class="button" onClick={() => setConfirmAll(false)}>
-                Keep them
+                {t("keep")}
               </button>
             </div>
           </Show>

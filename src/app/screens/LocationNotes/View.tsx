@@ -22,11 +22,13 @@ import type { RailmlImport } from "./railml/createRailmlImport.js";
 import { RailmlImportView } from "./railml/RailmlImport.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { card } from "../../../i18n/en/card.js";
+import { notes } from "../../../i18n/en/notes.js";
 import { LANGS, LANGUAGE_NAMES, type Lang } from "../../../i18n/language.js";
 import { appLang, tr } from "../../i18n.js";
 import "./notes.css";
 
 const t = tr.ns(card);
+const n = tr.ns(notes);
 
 export type Mode = "library" | "edit" | "card" | "railml";
 
@@ -174,27 +176,27 @@ export function View(props: ViewProps): JSX.Element {
                   {t("print")}
                 </button>
                 <button type="button" class="button" onClick={() => props.onEdit()}>
-                  Edit note
+                  {n("editNote")}
                 </button>
                 <Show when={props.onReview}>
                   <button type="button" class="button" onClick={() => props.onReview?.(note().id)}>
-                    Start review
+                    {n("startReview")}
                   </button>
                 </Show>
                 <button type="button" class="button" onClick={() => props.onClose()}>
-                  Back to the library
+                  {n("backToLibrary")}
                 </button>
               </div>
               <Show
                 when={cardComplete(table())}
                 fallback={
                   <p class="notes-hint notes-print-wait" id="notes-print-wait" role="status">
-                    Printing waits for the load table: it is being worked out ({Math.round(100 * props.editor.loadTableProgress())} %).
-                    <Show when={props.printedEarly}> The copy just printed is marked incomplete; print again once the load table is shown.</Show>
+                    {n("printWaits", { percent: Math.round(100 * props.editor.loadTableProgress()) })}
+                    <Show when={props.printedEarly}>{n("printedEarly")}</Show>
                   </p>
                 }
               >
-                <p class="notes-hint">One page, A4 or Letter. In the print dialog choose "Save as PDF" to make a file to share.</p>
+                <p class="notes-hint">{n("printHint")}</p>
               </Show>
               <Show when={props.onLanguage}>
                 {(choose) => (
@@ -221,8 +223,8 @@ export function View(props: ViewProps): JSX.Element {
         {(note) => (
           <div class="notes-dialog-backdrop">
             <div class="notes-dialog" role="alertdialog" aria-modal="true" aria-labelledby="notes-del-title">
-              <h2 id="notes-del-title">Remove "{note().name}"?</h2>
-              <p>It is removed from this device and from the location pickers. A copy you exported earlier is not affected.</p>
+              <h2 id="notes-del-title">{n("removeTitle", { name: note().name })}</h2>
+              <p>{n("removeText")}</p>
               <div class="notes-row-actions">
                 <button
                   type="button"
@@ -232,10 +234,10 @@ export function View(props: ViewProps): JSX.Element {
                     props.onDelete();
                   }}
                 >
-                  Remove note
+                  {n("removeNote")}
                 </button>
                 <button type="button" class="button" onClick={() => setConfirmDelete(false)}>
-                  Keep it
+                  {n("keepIt")}
                 </button>
               </div>
             </div>
