@@ -21,6 +21,13 @@ import { ProfileChart } from "./ProfileChart.js";
 import { slackSentence } from "./profileModel.js";
 import { SegmentsTable } from "./SegmentsTable.js";
 import { issueAt } from "./validate.js";
+import { hazardWord } from "./draft.js";
+import { card } from "../../../i18n/en/card.js";
+import { notes } from "../../../i18n/en/notes.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(notes);
+const c = tr.ns(card);
 
 export interface EditorProps {
   editor: NoteEditor;
@@ -36,7 +43,7 @@ export interface EditorProps {
   onExport: () => void;
 }
 
-const SEASON_LABEL: Record<Season, string> = { spring: "Spring", summer: "Summer", autumn: "Autumn", winter: "Winter" };
+const seasonLabel = (s: Season) => c(s);
 
 export function Editor(props: EditorProps): JSX.Element {
   const e = () => props.editor;
@@ -48,46 +55,46 @@ export function Editor(props: EditorProps): JSX.Element {
   const trainIssue = () => issueAt(e().issues(), "train")?.message;
   const summary = () => {
     const m = e().model();
-    if (!m) return "Enter the segments to see the profile.";
-    const t = m.train;
-    const where = t ? `The reference train stands from ${dist(t.rearM)} to ${dist(t.frontM)}. ${slackSentence(t.runs, dist)}` : (trainIssue() ?? "The train cannot be drawn until the problems below are put right.");
-    return `${where} ${dist(m.clearEndM - m.frontM)} clear ahead.`;
+    if (!m) return t("edEmptyProfile");
+    const tn = m.train;
+    const where = tn ? `${t("edStandsFrom", { rear: dist(tn.rearM), front: dist(tn.frontM) })} ${slackSentence(tn.runs, dist)}` : (trainIssue() ?? t("edCannotDraw"));
+    return `${where} ${t("edClearAhead", { distance: dist(m.clearEndM - m.frontM) })}`;
   };
   const locoOptions = () => [
-    { value: "", label: "As in the train" },
+    { value: "", label: t("edAsInTrain") },
     ...[...props.library.locomotives.values()].map((l) => ({ value: l.file.id, label: l.file.label })),
   ];
 
   return (
     <div class="notes-editor">
       <header class="notes-editor-head">
-        <h2>{isNew() ? "New location note" : `Edit: ${e().saved()?.name ?? ""}`}</h2>
+        <h2>{isNew() ? t("edNewTitle") : t("edEditTitle", { name: e().saved()?.name ?? "" })}</h2>
         <Show when={d().illustrative}>
-          <p class="notes-tag">Illustrative demo note: invented place, for trying the program.</p>
+          <p class="notes-tag">{t("edIllustrative")}</p>
         </Show>
       </header>
 
       <section class="panel notes-section" aria-labelledby="notes-place-title">
-        <h3 id="notes-place-title">Place</h3>
+        <h3 id="notes-place-title">{t("edPlace")}</h3>
         <div class="notes-grid">
-          <TextField label="Name" name="name" value={d().name} onValue={(v) => e().set("name", v)} issue={at("name")} maxLength={120} class="wide" />
-          <TextField label="Line" name="line" value={d().line} onValue={(v) => e().set("line", v)} maxLength={120} />
-          <TextField label="Direction" name="direction" value={d().direction} onValue={(v) => e().set("direction", v)} maxLength={120} />
+          <TextField label={t("edName")} name="name" value={d().name} onValue={(v) => e().set("name", v)} issue={at("name")} maxLength={120} class="wide" />
+          <TextField label={t("edLine")} name="line" value={d().line} onValue={(v) => e().set("line", v)} maxLength={120} />
+          <TextField label={t("edDirection")} name="direction" value={d().direction} onValue={(v) => e().set("direction", v)} maxLength={120} />
           <TextField
-            label="Where the train stands"
+            label={t("edStanding")}
             name="standing"
             value={d().standing}
             onValue={(v) => e().set("standing", v)}
             maxLength={400}
             class="wide"
-            hint="In your words, e.g. front at the loop exit signal, rear over the yard points."
+            hint={t("edStandingHint")}
           />
         </div>
         <div class="notes-grid">
-          <QuantityField label="Front of the train at" name="frontAt_m" value={d().frontAt_m} units={u()} measure="distance" fileUnit="m" step={{ metric: 50, us: 100 }} onValue={(v) => e().set("frontAt_m", v)} />
-          <QuantityField label="Clear ahead" name="clearAhead_m" value={d().clearAhead_m} units={u()} measure="distance" fileUnit="m" step={{ metric: 50, us: 100 }} min={0} onValue={(v) => e().set("clearAhead_m", v)} />
+          <QuantityField label={t("edFrontAt")} name="frontAt_m" value={d().frontAt_m} units={u()} measure="distance" fileUnit="m" step={{ metric: 50, us: 100 }} onValue={(v) => e().set("frontAt_m", v)} />
+          <QuantityField label={t("edClearAheadLabel")} name="clearAhead_m" value={d().clearAhead_m} units={u()} measure="distance" fileUnit="m" step={{ metric: 50, us: 100 }} min={0} onValue={(v) => e().set("clearAhead_m", v)} />
           <QuantityField
-            label="Speed limit over the start"
+            label={t("edSpeedLimit")}
             name="speedLimit_kmh"
             value={d().speedLimit_kmh}
             units={u()}
@@ -97,7 +104,7 @@ export function Editor(props: EditorProps): JSX.Element {
             min={0}
             decimals={0}
             onValue={(v) => e().set("speedLimit_kmh", v)}
-            hint="Leave empty if none applies."
+            hint={t("edSpeedLimitHint")}
           />
         </div>
         <Show when={at("frontAt_m", "clearAhead_m", "speedLimit_kmh")}>
@@ -118,7 +125,7 @@ export function Editor(props: EditorProps): JSX.Element {
       />
 
       <section class="panel notes-section" aria-labelledby="notes-profile-title">
-        <h3 id="notes-profile-title">Profile and the standing train</h3>
+        <h3 id="notes-profile-title">{t("edProfileTitle")}</h3>
         <ProfileChart model={e().model()} units={u()} palette={props.palette} summary={summary()} />
         <Show when={trainIssue()}>
           <p class="notes-issue-box" role="alert">
@@ -128,11 +135,11 @@ export function Editor(props: EditorProps): JSX.Element {
       </section>
 
       <section class="panel notes-section" aria-labelledby="notes-load-title">
-        <h3 id="notes-load-title">Load table</h3>
-        <p class="notes-hint">The largest trailing mass that starts here in each rail condition, worked out for a reference train: its wagons, length and slack, and the locomotives you choose.</p>
+        <h3 id="notes-load-title">{t("edLoadTitle")}</h3>
+        <p class="notes-hint">{t("edLoadHint")}</p>
         <div class="notes-grid">
           <SelectField
-            label="Reference train"
+            label={t("edReferenceTrain")}
             name="referenceTrain.train"
             value={d().referenceTrain.train}
             options={props.presets.map((p) => ({ value: p.id, label: p.label }))}
@@ -140,14 +147,14 @@ export function Editor(props: EditorProps): JSX.Element {
             class="wide"
           />
           <SelectField
-            label="Locomotives"
+            label={t("edLocomotives")}
             name="referenceTrain.locomotive"
             value={d().referenceTrain.locomotive ?? ""}
             options={locoOptions()}
             onValue={(v) => e().set("referenceTrain", (r) => (v ? { ...r, locomotive: v } : (({ locomotive: _drop, ...rest }) => rest)(r)))}
           />
           <QuantityField
-            label="How many at the head"
+            label={t("edHowMany")}
             name="referenceTrain.count"
             value={d().referenceTrain.count ?? props.presets.find((p) => p.id === d().referenceTrain.train)?.locomotives[0]?.count ?? 1}
             units={u()}
@@ -158,7 +165,7 @@ export function Editor(props: EditorProps): JSX.Element {
             onValue={(v) => e().set("referenceTrain", (r) => (Number.isFinite(v) ? { ...r, count: Math.round(v) } : (({ count: _drop, ...rest }) => rest)(r)))}
           />
           <QuantityField
-            label="Air temperature"
+            label={t("edTemperature")}
             name="referenceTrain.temperature_C"
             value={d().referenceTrain.temperature_C ?? DEFAULT_REFERENCE_TEMPERATURE_C}
             units={u()}
@@ -168,16 +175,16 @@ export function Editor(props: EditorProps): JSX.Element {
             onValue={(v) => e().set("referenceTrain", (r) => ({ ...r, temperature_C: v }))}
           />
         </div>
-        <p class="notes-small">{e().reference().locomotives ? `With ${e().reference().locomotives}.` : ""}</p>
+        <p class="notes-small">{e().reference().locomotives ? t("edWith", { locomotives: e().reference().locomotives! }) : ""}</p>
         <Switch>
           <Match when={!e().placed()}>
-            <p class="notes-hint">The load table appears when the profile is complete and the train fits on it.</p>
+            <p class="notes-hint">{t("edTableAppears")}</p>
           </Match>
           <Match when={e().loadTable() === undefined}>
             <p class="notes-hint" aria-live="polite">
-              Working out the load table: every figure is checked in the train dynamics model, so this takes several seconds. The rest of the screen stays usable.
+              {t("edWorking")}
             </p>
-            <div class="progress" role="progressbar" aria-label="Load table" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(e().loadTableProgress() * 100)}>
+            <div class="progress" role="progressbar" aria-label={t("edLoadTitle")} aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(e().loadTableProgress() * 100)}>
               <span style={{ width: `${Math.max(4, e().loadTableProgress() * 100)}%` }} />
             </div>
           </Match>
@@ -186,57 +193,57 @@ export function Editor(props: EditorProps): JSX.Element {
       </section>
 
       <section class="panel notes-section" aria-labelledby="notes-hazards-title">
-        <h3 id="notes-hazards-title">Hazards</h3>
+        <h3 id="notes-hazards-title">{t("edHazards")}</h3>
         <For each={d().hazards} fallback={<p class="notes-hint">None recorded.</p>}>
           {(h, k) => (
             <div class="notes-list-row">
-              <SelectField<HazardKind> label={`Hazard ${k() + 1}`} name={`hazards[${k()}].kind`} value={h.kind} options={HAZARD_KINDS.map((x) => ({ value: x.kind, label: x.label }))} onValue={(v) => e().set("hazards", k(), "kind", v)} />
-              <QuantityField label="At" name={`hazards[${k()}].at_m`} value={h.at_m} units={u()} measure="distance" fileUnit="m" onValue={(v) => e().set("hazards", k(), "at_m", v)} />
-              <TextField label="What to know" name={`hazards[${k()}].note`} value={h.note} onValue={(v) => e().set("hazards", k(), "note", v)} issue={at(`hazards[${k()}].note`)} maxLength={400} class="wide" />
-              <button type="button" class="notes-icon-button" aria-label={`Remove hazard ${k() + 1}`} onClick={() => e().set("hazards", (hs) => hs.filter((_, i) => i !== k()))}>
+              <SelectField<HazardKind> label={t("edHazardN", { n: k() + 1 })} name={`hazards[${k()}].kind`} value={h.kind} options={HAZARD_KINDS.map((x) => ({ value: x.kind, label: hazardWord(x.kind) }))} onValue={(v) => e().set("hazards", k(), "kind", v)} />
+              <QuantityField label={t("edAt")} name={`hazards[${k()}].at_m`} value={h.at_m} units={u()} measure="distance" fileUnit="m" onValue={(v) => e().set("hazards", k(), "at_m", v)} />
+              <TextField label={t("edWhatToKnow")} name={`hazards[${k()}].note`} value={h.note} onValue={(v) => e().set("hazards", k(), "note", v)} issue={at(`hazards[${k()}].note`)} maxLength={400} class="wide" />
+              <button type="button" class="notes-icon-button" aria-label={t("edRemoveHazard", { n: k() + 1 })} onClick={() => e().set("hazards", (hs) => hs.filter((_, i) => i !== k()))}>
                 ✕
               </button>
             </div>
           )}
         </For>
         <button type="button" class="button" onClick={() => e().set("hazards", d().hazards.length, { kind: "points", at_m: d().frontAt_m + 100, note: "" })}>
-          Add hazard
+          {t("edAddHazard")}
         </button>
       </section>
 
       <section class="panel notes-section" aria-labelledby="notes-seasons-title">
-        <h3 id="notes-seasons-title">Usual rail condition by season</h3>
+        <h3 id="notes-seasons-title">{t("edSeasons")}</h3>
         <For each={d().seasons} fallback={<p class="notes-hint">None recorded.</p>}>
           {(s, k) => (
             <div class="notes-list-row">
-              <SelectField<Season> label="Season" name={`seasons[${k()}].season`} value={s.season} options={SEASONS.map((x) => ({ value: x, label: SEASON_LABEL[x] }))} onValue={(v) => e().set("seasons", k(), "season", v)} />
-              <SelectField<RailWord> label="Rail" name={`seasons[${k()}].rail`} value={s.rail} options={RAIL_CONDITIONS.map((x) => ({ value: x, label: words.rail(x) }))} onValue={(v) => e().set("seasons", k(), "rail", v)} />
-              <TextField label="Note" name={`seasons[${k()}].note`} value={s.note} onValue={(v) => e().set("seasons", k(), "note", v)} maxLength={400} class="wide" />
-              <button type="button" class="notes-icon-button" aria-label={`Remove season ${k() + 1}`} onClick={() => e().set("seasons", (ss) => ss.filter((_, i) => i !== k()))}>
+              <SelectField<Season> label={t("edSeason")} name={`seasons[${k()}].season`} value={s.season} options={SEASONS.map((x) => ({ value: x, label: seasonLabel(x) }))} onValue={(v) => e().set("seasons", k(), "season", v)} />
+              <SelectField<RailWord> label={t("edRail")} name={`seasons[${k()}].rail`} value={s.rail} options={RAIL_CONDITIONS.map((x) => ({ value: x, label: words.rail(x) }))} onValue={(v) => e().set("seasons", k(), "rail", v)} />
+              <TextField label={t("edNote")} name={`seasons[${k()}].note`} value={s.note} onValue={(v) => e().set("seasons", k(), "note", v)} maxLength={400} class="wide" />
+              <button type="button" class="notes-icon-button" aria-label={t("edRemoveSeason", { n: k() + 1 })} onClick={() => e().set("seasons", (ss) => ss.filter((_, i) => i !== k()))}>
                 ✕
               </button>
             </div>
           )}
         </For>
         <button type="button" class="button" onClick={() => e().set("seasons", d().seasons.length, { season: "autumn", rail: "leaves", note: "" })}>
-          Add season
+          {t("edAddSeason")}
         </button>
       </section>
 
       <section class="panel notes-section" aria-labelledby="notes-practice-title">
-        <h3 id="notes-practice-title">Recommended practice</h3>
-        <TextField label="What works here" name="practice" value={d().practice} onValue={(v) => e().set("practice", v)} multiline rows={6} maxLength={4000} class="wide" />
+        <h3 id="notes-practice-title">{t("edPractice")}</h3>
+        <TextField label={t("edWhatWorks")} name="practice" value={d().practice} onValue={(v) => e().set("practice", v)} multiline rows={6} maxLength={4000} class="wide" />
       </section>
 
       <section class="panel notes-section" aria-labelledby="notes-rev-title">
-        <h3 id="notes-rev-title">Revision</h3>
+        <h3 id="notes-rev-title">{t("edRevision")}</h3>
         <Show when={d().revisions.length > 0}>
           <table class="notes-revisions">
             <thead>
               <tr>
-                <th scope="col">Date</th>
-                <th scope="col">By</th>
-                <th scope="col">What changed</th>
+                <th scope="col">{t("edDate")}</th>
+                <th scope="col">{t("edBy")}</th>
+                <th scope="col">{t("edWhatChanged")}</th>
               </tr>
             </thead>
             <tbody>
@@ -253,9 +260,9 @@ export function Editor(props: EditorProps): JSX.Element {
           </table>
         </Show>
         <div class="notes-grid">
-          <TextField label="Date of this revision" name="revision.date" value={d().revision.date} onValue={(v) => e().set("revision", "date", v)} issue={at("revision.date")} placeholder="YYYY-MM-DD" />
-          <TextField label="Your initials" name="revision.initials" value={d().revision.initials} onValue={(v) => e().set("revision", "initials", v)} issue={at("revision.initials")} maxLength={8} />
-          <TextField label="What changed" name="revision.change" value={d().revision.change} onValue={(v) => e().set("revision", "change", v)} issue={at("revision.change")} maxLength={400} class="wide" />
+          <TextField label={t("edRevisionDate")} name="revision.date" value={d().revision.date} onValue={(v) => e().set("revision", "date", v)} issue={at("revision.date")} placeholder="YYYY-MM-DD" />
+          <TextField label={t("edInitials")} name="revision.initials" value={d().revision.initials} onValue={(v) => e().set("revision", "initials", v)} issue={at("revision.initials")} maxLength={8} />
+          <TextField label={t("edWhatChanged")} name="revision.change" value={d().revision.change} onValue={(v) => e().set("revision", "change", v)} issue={at("revision.change")} maxLength={400} class="wide" />
         </div>
       </section>
 
@@ -264,7 +271,7 @@ export function Editor(props: EditorProps): JSX.Element {
           <div class="notes-issue-box" role="status">
             <p>
               <strong>
-                {e().errors().length} thing{e().errors().length === 1 ? "" : "s"} to put right before saving:
+                {t("edToPutRight", { count: e().errors().length })}
               </strong>
             </p>
             <ul>
@@ -274,20 +281,20 @@ export function Editor(props: EditorProps): JSX.Element {
         </Show>
         <div class="notes-row-actions">
           <button type="button" class="button primary" disabled={props.busy || e().errors().length > 0 || !e().changed()} onClick={() => props.onSave()}>
-            {e().changed() || isNew() ? "Save note" : "Saved"}
+            {e().changed() || isNew() ? t("edSave") : t("edSaved")}
           </button>
           <button type="button" class="button" onClick={() => props.onClose()}>
-            {e().changed() && !isNew() ? "Close without saving" : "Back to the library"}
+            {e().changed() && !isNew() ? t("edCloseUnsaved") : t("backToLibrary")}
           </button>
           <Show when={!isNew()}>
-            <button type="button" class="button" disabled={e().changed()} title={e().changed() ? "Save first: the card shows the saved note" : undefined} onClick={() => props.onCard()}>
-              Card / print
+            <button type="button" class="button" disabled={e().changed()} title={e().changed() ? t("edSaveFirst") : undefined} onClick={() => props.onCard()}>
+              {t("edCardPrint")}
             </button>
             <button type="button" class="button" disabled={e().changed()} onClick={() => props.onExport()}>
-              Export this note
+              {t("edExportNote")}
             </button>
             <button type="button" class="button danger" onClick={() => props.onDelete()}>
-              Remove note
+              {t("removeNote")}
             </button>
           </Show>
         </div>
