@@ -8,11 +8,15 @@ import { createStore } from "solid-js/store";
 import { latestRevision } from "../../../profiles/notes.js";
 import type { ConflictChoice, ImportConflict } from "../../../notes/merge.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
+import { notes } from "../../../i18n/en/notes.js";
+import { tr } from "../../i18n.js";
 
-const OPTIONS: ReadonlyArray<{ value: ConflictChoice; label: string }> = [
-  { value: "mine", label: "Keep mine" },
-  { value: "theirs", label: "Take theirs" },
-  { value: "both", label: "Keep both" },
+const t = tr.ns(notes);
+
+const options = (): ReadonlyArray<{ value: ConflictChoice; label: string }> => [
+  { value: "mine", label: t("cfKeepMine") },
+  { value: "theirs", label: t("cfTakeTheirs") },
+  { value: "both", label: t("cfKeepBoth") },
 ];
 
 export function ConflictDialog(props: { conflicts: readonly ImportConflict[]; onDone: (choices: Record<string, ConflictChoice> | null) => void }): JSX.Element {
@@ -24,24 +28,24 @@ export function ConflictDialog(props: { conflicts: readonly ImportConflict[]; on
   };
   const rev = (n: ImportConflict["theirs"]) => {
     const r = latestRevision(n);
-    return `revised ${r.date} by ${r.initials}: ${r.change}`;
+    return t("cfRevised", { date: r.date, initials: r.initials, change: r.change });
   };
   return (
     <div class="notes-dialog-backdrop">
       <div class="notes-dialog" role="dialog" aria-modal="true" aria-labelledby="notes-conflict-title">
         <h2 id="notes-conflict-title">
-          {props.conflicts.length === 1 ? "A note in the file differs from yours" : `${props.conflicts.length} notes in the file differ from yours`}
+          {props.conflicts.length === 1 ? t("cfTitleOne") : t("cfTitleMany", { count: props.conflicts.length })}
         </h2>
-        <p class="notes-hint">Same place, another revision. Choose for each: keep mine (ignore the file's), take theirs (replace mine), or keep both (the file's is added as a copy).</p>
+        <p class="notes-hint">{t("cfHint")}</p>
         <div class="notes-row-actions">
           <button type="button" class="button small" onClick={() => all("mine")}>
-            Keep mine for all
+            {t("cfKeepMineAll")}
           </button>
           <button type="button" class="button small" onClick={() => all("theirs")}>
-            Take theirs for all
+            {t("cfTakeTheirsAll")}
           </button>
           <button type="button" class="button small" onClick={() => all("both")}>
-            Keep both for all
+            {t("cfKeepBothAll")}
           </button>
         </div>
         <ul class="notes-conflicts">
@@ -53,31 +57,31 @@ export function ConflictDialog(props: { conflicts: readonly ImportConflict[]; on
                   when={c.mine}
                   fallback={
                     <p>
-                      <strong>On this device:</strong> a damaged record of this id that cannot be shown ({c.damaged}). Keep mine leaves it as it is (export it raw from the library first if you may want it); take theirs replaces it.
+                      <strong>{t("cfOnDevice")}</strong> {t("cfDamaged", { problem: String(c.damaged) })}
                     </p>
                   }
                 >
                   {(mine) => (
                     <p>
-                      <strong>On this device:</strong> {rev(mine())}
+                      <strong>{t("cfOnDevice")}</strong> {rev(mine())}
                     </p>
                   )}
                 </Show>
                 <p>
-                  <strong>In the file:</strong> {rev(c.theirs)}
-                  {c.mine && c.theirs.name !== c.mine.name ? ` (named "${c.theirs.name}")` : ""}
+                  <strong>{t("cfInFile")}</strong> {rev(c.theirs)}
+                  {c.mine && c.theirs.name !== c.mine.name ? t("cfNamed", { name: c.theirs.name }) : ""}
                 </p>
                 <Show when={c.sameRevision}>
-                  <p class="notes-small">Both carry the same last revision entry, yet they differ: one was changed without a new revision entry.</p>
+                  <p class="notes-small">{t("cfSameRevision")}</p>
                 </Show>
-                <SegmentedButtons label={`For ${c.mine?.name ?? c.theirs.name}`} hideLabel options={OPTIONS} value={choices[c.id] ?? ("" as ConflictChoice)} onChange={(v) => setChoices(c.id, v)} />
+                <SegmentedButtons label={t("cfFor", { name: c.mine?.name ?? c.theirs.name })} hideLabel options={options()} value={choices[c.id] ?? ("" as ConflictChoice)} onChange={(v) => setChoices(c.id, v)} />
               </li>
             )}
           </For>
         </ul>
         <Show when={tried() && missing() > 0}>
           <p class="notes-issue-box" role="alert">
-            Choose for {missing()} more note{missing() === 1 ? "" : "s"} first.
+            {t("cfChooseMore", { count: missing() })}
           </p>
         </Show>
         <div class="notes-row-actions">
@@ -89,10 +93,10 @@ export function ConflictDialog(props: { conflicts: readonly ImportConflict[]; on
               if (missing() === 0) props.onDone({ ...choices });
             }}
           >
-            Import with these choices
+            {t("cfImport")}
           </button>
           <button type="button" class="button" onClick={() => props.onDone(null)}>
-            Cancel import
+            {t("cfCancel")}
           </button>
         </div>
       </div>

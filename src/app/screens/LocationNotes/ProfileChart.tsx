@@ -11,6 +11,10 @@ import type { UnitSystem } from "../../format.js";
 import { HAZARD_KINDS } from "./draft.js";
 import type { ProfileModel } from "./profileModel.js";
 import { profilePlot } from "./profilePlot.js";
+import { notes } from "../../../i18n/en/notes.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(notes);
 
 export interface ProfileChartProps {
   model: ProfileModel | undefined;
@@ -50,7 +54,7 @@ export function ProfileChart(props: ProfileChartProps): JSX.Element {
       <div class="chart-box notes-chart-box" classList={{ empty: !plot() }} ref={box}>
         <Show when={plot()}>
           {(g) => (
-            <svg class="notes-profile" data-exaggeration={g().exaggeration} width={g().width} height={g().height} viewBox={`0 0 ${g().width} ${g().height}`} role="img" aria-label={`Profile. ${props.summary}`}>
+            <svg class="notes-profile" data-exaggeration={g().exaggeration} width={g().width} height={g().height} viewBox={`0 0 ${g().width} ${g().height}`} role="img" aria-label={t("pcLabel", { summary: props.summary })}>
               <g class="notes-profile-grid" stroke={p().grid} stroke-width="1">
                 <For each={g().yTicks}>{(t) => <line x1={g().left} x2={g().right} y1={t.at} y2={t.at} />}</For>
                 <For each={g().xTicks}>{(t) => <line x1={t.at} x2={t.at} y1={g().top} y2={g().bottom} />}</For>
@@ -130,22 +134,22 @@ export function ProfileChart(props: ProfileChartProps): JSX.Element {
       <ul class="legend notes-legend">
         <li>
           <Swatch colour={p().main} width={10} />
-          Train, couplings stretched
+          {t("pcStretched")}
         </li>
         <li>
           <Swatch colour={p().second} width={10} dash={BUNCHED_DASH} />
-          Train, couplings bunched
+          {t("pcBunched")}
         </li>
         <li>
           <Swatch colour={p().text} width={2.5} dash={CLEAR_DASH} />
-          Clear ahead
+          {t("pcClear")}
         </li>
         <Show when={(props.model?.hazards.length ?? 0) > 0}>
           <li>
             <svg class="notes-swatch" width="24" height="22" viewBox="0 0 24 22" aria-hidden="true">
               <path d="M12,1 l-11,20 h22 z" fill={p().limit} />
             </svg>
-            Hazards:{" "}
+            {t("pcHazards")}{" "}
             <For each={props.model?.hazards ?? []}>
               {(h, k) => (
                 <span class="notes-hazard-key">

@@ -8,6 +8,12 @@ import { Show, type JSX } from "solid-js";
 import type { ConflictChoice } from "../../../notes/merge.js";
 import type { SaveConflict } from "../../../notes/store.js";
 import { latestRevision } from "../../../profiles/notes.js";
+import { notes } from "../../../i18n/en/notes.js";
+import { LOCALE_TAGS } from "../../../i18n/language.js";
+import { appLang, tr } from "../../i18n.js";
+import { kept, rich } from "../shared/rich.js";
+
+const n = tr.ns(notes);
 
 export function SaveConflictDialog(props: { conflict: SaveConflict; onChoose: (choice: ConflictChoice | null) => void }): JSX.Element {
   const theirs = () => props.conflict.theirs;
@@ -15,50 +21,50 @@ export function SaveConflictDialog(props: { conflict: SaveConflict; onChoose: (c
     const t = theirs();
     if (!t) return "";
     const r = latestRevision(t.note);
-    return `last revision ${r.date} by ${r.initials}: ${r.change}; saved ${new Date(t.savedAt).toLocaleString()}`;
+    return n("scLastRevision", { date: r.date, initials: r.initials, change: r.change, savedAt: new Date(t.savedAt).toLocaleString(LOCALE_TAGS[appLang()]) });
   };
   const removed = () => !theirs() && !props.conflict.damaged;
   return (
     <div class="notes-dialog-backdrop">
       <div class="notes-dialog" role="dialog" aria-modal="true" aria-labelledby="notes-save-conflict-title">
         <h2 id="notes-save-conflict-title">
-          {removed() ? "This note was removed elsewhere while you edited it" : props.conflict.damaged ? "The stored note is damaged" : "This note was saved elsewhere while you edited it"}
+          {removed() ? n("scRemovedTitle") : props.conflict.damaged ? n("scDamagedTitle") : n("scSavedTitle")}
         </h2>
         <Show when={theirs()}>
           <p>
-            Another tab or window of Taut on this device saved <strong>{theirs()!.note.name}</strong> after you opened it ({rev()}). Saving now would lose that change.
+            {rich(n("scSavedText", kept("name", "revision")), { name: <strong>{theirs()!.note.name}</strong>, revision: rev() })}
           </p>
         </Show>
         <Show when={props.conflict.damaged}>
-          <p>The note stored under this id cannot be read ({props.conflict.damaged!.message}). Export it from the library first if you may want what it holds.</p>
+          <p>{n("scDamagedText", { problem: props.conflict.damaged!.message })}</p>
         </Show>
         <Show when={removed()}>
-          <p>Another tab or window of Taut on this device removed it after you opened it.</p>
+          <p>{n("scRemovedText")}</p>
         </Show>
         <div class="notes-row-actions">
           <button type="button" class="button primary" onClick={() => props.onChoose("mine")}>
-            {removed() ? "Save mine again" : "Keep mine"}
+            {removed() ? n("scSaveAgain") : n("cfKeepMine")}
           </button>
           <Show when={theirs()}>
             <button type="button" class="button" onClick={() => props.onChoose("theirs")}>
-              Take theirs
+              {n("cfTakeTheirs")}
             </button>
           </Show>
           <Show when={removed()}>
             <button type="button" class="button" onClick={() => props.onChoose("theirs")}>
-              Leave it removed
+              {n("scLeaveRemoved")}
             </button>
           </Show>
           <Show when={!removed()}>
             <button type="button" class="button" onClick={() => props.onChoose("both")}>
-              Keep both
+              {n("cfKeepBoth")}
             </button>
           </Show>
           <button type="button" class="button" onClick={() => props.onChoose(null)}>
-            Not now
+            {n("scNotNow")}
           </button>
         </div>
-        <p class="notes-small">Keep mine writes your edit over it; take theirs drops your edit and opens the stored note; keep both saves your edit as a copy with a new name.</p>
+        <p class="notes-small">{n("scHint")}</p>
       </div>
     </div>
   );

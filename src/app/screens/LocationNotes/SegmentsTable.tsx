@@ -8,6 +8,10 @@ import { QuantityField } from "../../components/QuantityField.js";
 import type { UnitSystem } from "../../format.js";
 import type { SegmentFile } from "../../../profiles/schemas.js";
 import type { NoteIssue } from "./validate.js";
+import { notes } from "../../../i18n/en/notes.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(notes);
 
 export interface SegmentsTableProps {
   segments: readonly SegmentFile[];
@@ -25,19 +29,19 @@ export function SegmentsTable(props: SegmentsTableProps): JSX.Element {
   const hasJoinIssue = () => rowIssues().some((i) => /\.from_m$/.test(i.path) && /Gap|overlaps/.test(i.message));
   return (
     <section class="panel notes-section" aria-labelledby="notes-seg-title">
-      <h3 id="notes-seg-title">Track under and ahead of the train</h3>
-      <p class="notes-hint">Distances grow in the direction of travel. Gradient rises in the direction of travel (negative falls). Radius 0 is straight track.</p>
+      <h3 id="notes-seg-title">{t("segTitle")}</h3>
+      <p class="notes-hint">{t("segHint")}</p>
       <div class="notes-seg-wrap">
         <table class="notes-seg">
           <thead>
             <tr>
               <th scope="col">#</th>
-              <th scope="col">Starts at</th>
-              <th scope="col">Length</th>
-              <th scope="col">Gradient</th>
-              <th scope="col">Curve radius</th>
+              <th scope="col">{t("segStartsAt")}</th>
+              <th scope="col">{t("segLength")}</th>
+              <th scope="col">{t("segGradient")}</th>
+              <th scope="col">{t("segRadius")}</th>
               <th scope="col">
-                <span class="visually-hidden">Remove</span>
+                <span class="visually-hidden">{t("segRemove")}</span>
               </th>
             </tr>
           </thead>
@@ -47,11 +51,11 @@ export function SegmentsTable(props: SegmentsTableProps): JSX.Element {
                 <tr>
                   <th scope="row">{k() + 1}</th>
                   <td classList={{ "notes-cell": true, invalid: bad(k(), "from_m") }}>
-                    <QuantityField label={`Segment ${k() + 1} starts at`} name={`segments[${k()}].from_m`} value={s.from_m} units={props.units} measure="distance" fileUnit="m" onValue={(v) => props.onChange(k(), "from_m", v)} />
+                    <QuantityField label={t("segStartsAtN", { n: k() + 1 })} name={`segments[${k()}].from_m`} value={s.from_m} units={props.units} measure="distance" fileUnit="m" onValue={(v) => props.onChange(k(), "from_m", v)} />
                   </td>
                   <td classList={{ "notes-cell": true, invalid: bad(k(), "length_m") }}>
                     <QuantityField
-                      label={`Segment ${k() + 1} length`}
+                      label={t("segLengthN", { n: k() + 1 })}
                       name={`segments[${k()}].length_m`}
                       value={s.length_m}
                       units={props.units}
@@ -64,7 +68,7 @@ export function SegmentsTable(props: SegmentsTableProps): JSX.Element {
                   </td>
                   <td classList={{ "notes-cell": true, invalid: bad(k(), "gradient_permille") }}>
                     <QuantityField
-                      label={`Segment ${k() + 1} gradient`}
+                      label={t("segGradientN", { n: k() + 1 })}
                       name={`segments[${k()}].gradient_permille`}
                       value={s.gradient_permille}
                       units={props.units}
@@ -75,10 +79,10 @@ export function SegmentsTable(props: SegmentsTableProps): JSX.Element {
                     />
                   </td>
                   <td classList={{ "notes-cell": true, invalid: bad(k(), "curveRadius_m") }}>
-                    <QuantityField label={`Segment ${k() + 1} curve radius`} name={`segments[${k()}].curveRadius_m`} value={s.curveRadius_m} units={props.units} measure="radius" fileUnit="m" onValue={(v) => props.onChange(k(), "curveRadius_m", v)} />
+                    <QuantityField label={t("segRadiusN", { n: k() + 1 })} name={`segments[${k()}].curveRadius_m`} value={s.curveRadius_m} units={props.units} measure="radius" fileUnit="m" onValue={(v) => props.onChange(k(), "curveRadius_m", v)} />
                   </td>
                   <td>
-                    <button type="button" class="notes-icon-button" aria-label={`Remove segment ${k() + 1}`} disabled={props.segments.length <= 1} onClick={() => props.onRemove(k())}>
+                    <button type="button" class="notes-icon-button" aria-label={t("segRemoveN", { n: k() + 1 })} disabled={props.segments.length <= 1} onClick={() => props.onRemove(k())}>
                       ✕
                     </button>
                   </td>
@@ -90,16 +94,16 @@ export function SegmentsTable(props: SegmentsTableProps): JSX.Element {
       </div>
       <div class="notes-row-actions">
         <button type="button" class="button" onClick={() => props.onAdd()}>
-          Add segment
+          {t("segAdd")}
         </button>
         <Show when={hasJoinIssue()}>
           <button type="button" class="button" onClick={() => props.onJoin()}>
-            Join segments
+            {t("segJoin")}
           </button>
         </Show>
       </div>
       <Show when={rowIssues().length > 0}>
-        <ul class="notes-issues" aria-label="Problems with the segments">
+        <ul class="notes-issues" aria-label={t("segProblems")}>
           <For each={rowIssues()}>{(i) => <li classList={{ warning: i.severity === "warning" }}>{i.message}</li>}</For>
         </ul>
       </Show>
