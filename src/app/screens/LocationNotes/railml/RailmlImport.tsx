@@ -16,6 +16,11 @@ import { SelectField, TextField } from "../fields.js";
 import { profileModel } from "../profileModel.js";
 import { ProfileSketch } from "../ProfileSketch.js";
 import type { FrontKind, RailmlImport } from "./createRailmlImport.js";
+import { hazardWord } from "../draft.js";
+import { notes } from "../../../../i18n/en/notes.js";
+import { tr } from "../../../i18n.js";
+
+const t = tr.ns(notes);
 
 export interface RailmlImportProps {
   imp: RailmlImport;
@@ -47,29 +52,26 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
     return { model: profileModel({ ...geometry, hazards: s.hazards }, r.ok ? r.value : undefined), issue: r.ok ? undefined : r.issues.map((i) => i.message).join("; ") };
   });
   const kinds = (): Array<{ value: FrontKind; label: string }> => [
-    ...((imp().summary()?.ocps.length ?? 0) > 0 ? [{ value: "ocp" as const, label: "Operational point" }] : []),
-    { value: "absPos", label: "Line position" },
-    { value: "pos", label: "Track and position" },
+    ...((imp().summary()?.ocps.length ?? 0) > 0 ? [{ value: "ocp" as const, label: t("rmOcp") }] : []),
+    { value: "absPos", label: t("rmAbsPos") },
+    { value: "pos", label: t("rmPos") },
   ];
 
   return (
     <section class="panel notes-section notes-railml" aria-labelledby="notes-railml-title">
-      <h2 id="notes-railml-title">Import from railML</h2>
-      <p class="notes-hint">
-        A railML 2.2 to 2.5 infrastructure file: the tracks' gradients and curves are followed through their connections and laid end to end around the
-        place where the front of the train stands. The file is read on this device; it can be tens of megabytes.
-      </p>
+      <h2 id="notes-railml-title">{t("rmTitle")}</h2>
+      <p class="notes-hint">{t("rmHint")}</p>
 
       <div class="notes-row-actions">
         <button type="button" class="button primary" disabled={imp().phase() === "reading"} onClick={() => fileInput.click()}>
-          {imp().phase() === "pick" ? "Choose railML file" : "Choose another file"}
+          {imp().phase() === "pick" ? t("rmChoose") : t("rmChooseAnother")}
         </button>
         <input
           ref={fileInput}
           class="visually-hidden"
           type="file"
           accept=".xml,.railml,.railML,application/xml,text/xml"
-          aria-label="railML file to import"
+          aria-label={t("rmFileLabel")}
           tabIndex={-1}
           onChange={(e) => {
             const f = e.currentTarget.files?.[0];
@@ -78,21 +80,21 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
           }}
         />
         <button type="button" class="button" onClick={() => props.onClose()}>
-          Back to the library
+          {t("backToLibrary")}
         </button>
       </div>
 
       <Switch>
         <Match when={imp().phase() === "reading"}>
           <p class="notes-hint" aria-live="polite">
-            Reading {imp().fileName()}…
+            {t("rmReading", { file: imp().fileName() })}
           </p>
-          <div class="progress" role="progressbar" aria-label="railML file read" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(imp().progress() * 100)}>
+          <div class="progress" role="progressbar" aria-label={t("rmReadLabel")} aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(imp().progress() * 100)}>
             <span style={{ width: `${Math.max(4, imp().progress() * 100)}%` }} />
           </div>
           <div class="notes-row-actions">
             <button type="button" class="button" onClick={() => imp().cancel()}>
-              Cancel import
+              {t("cfCancel")}
             </button>
           </div>
         </Match>
@@ -105,9 +107,8 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
           {(sum) => (
             <>
               <p class="notes-small">
-                {imp().fileName()}: railML {sum().version || "2"}, {formatNumber(sum().tracks, 0)} track(s), {formatNumber(sum().gradientChanges, 0)} gradient and{" "}
-                {formatNumber(sum().radiusChanges, 0)} radius changes
-                {sum().absPosRange ? `; line positions ${dist(sum().absPosRange!.min)} to ${dist(sum().absPosRange!.max)}` : ""}.
+                {t("rmSummary", { file: imp().fileName(), version: sum().version || "2", tracks: formatNumber(sum().tracks, 0), gradients: formatNumber(sum().gradientChanges, 0), radii: formatNumber(sum().radiusChanges, 0) })}
+                {sum().absPosRange ? t("rmLinePositions", { min: dist(sum().absPosRange!.min), max: dist(sum().absPosRange!.max) }) : ""}.
               </p>
               <Show when={sum().warnings.length > 0}>
                 <ul class="notes-small">
@@ -116,11 +117,11 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
               </Show>
 
               <div class="notes-grid">
-                <SegmentedButtons label="Where the front stands" options={kinds()} value={c().kind} onChange={(k) => imp().setChoice("kind", k)} name="railml.kind" />
+                <SegmentedButtons label={t("rmWhereFront")} options={kinds()} value={c().kind} onChange={(k) => imp().setChoice("kind", k)} name="railml.kind" />
                 <Switch>
                   <Match when={c().kind === "ocp"}>
                     <SelectField
-                      label="Operational point"
+                      label={t("rmOcp")}
                       name="railml.ocp"
                       value={c().ocp}
                       options={sum().ocps.map((o) => ({ value: o.id, label: o.label }))}
@@ -131,42 +132,42 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
                     />
                   </Match>
                   <Match when={c().kind === "absPos"}>
-                    <QuantityField label="Line position of the front (absPos)" name="railml.absPos" value={c().absPos} units={u()} measure="distance" fileUnit="m" onValue={(v) => imp().setChoice("absPos", v)} />
+                    <QuantityField label={t("rmAbsPosLabel")} name="railml.absPos" value={c().absPos} units={u()} measure="distance" fileUnit="m" onValue={(v) => imp().setChoice("absPos", v)} />
                   </Match>
                   <Match when={c().kind === "pos"}>
-                    <QuantityField label="Position along the track (pos)" name="railml.pos" value={c().pos} units={u()} measure="distance" fileUnit="m" onValue={(v) => imp().setChoice("pos", v)} />
+                    <QuantityField label={t("rmPosLabel")} name="railml.pos" value={c().pos} units={u()} measure="distance" fileUnit="m" onValue={(v) => imp().setChoice("pos", v)} />
                   </Match>
                 </Switch>
                 <TextField
-                  label={c().kind === "pos" ? "Track id" : "Track id (where a position is on several tracks)"}
+                  label={c().kind === "pos" ? t("rmTrack") : t("rmTrackSeveral")}
                   name="railml.track"
                   value={c().track}
                   onValue={(v) => imp().setChoice("track", v)}
                   maxLength={200}
                 />
                 <SegmentedButtons
-                  label="Direction of travel"
+                  label={t("rmDirection")}
                   options={[
-                    { value: "up", label: "Up (increasing pos)" },
-                    { value: "down", label: "Down (decreasing pos)" },
+                    { value: "up", label: t("rmUp") },
+                    { value: "down", label: t("rmDown") },
                   ]}
                   value={c().direction}
                   onChange={(d) => imp().setChoice("direction", d)}
                   name="railml.direction"
                 />
-                <QuantityField label="Take behind the front" name="railml.behind" value={c().behindM} units={u()} measure="distance" fileUnit="m" step={{ metric: 100, us: 300 }} min={0} onValue={(v) => imp().setChoice("behindM", v)} />
-                <QuantityField label="Take ahead of the front" name="railml.ahead" value={c().aheadM} units={u()} measure="distance" fileUnit="m" step={{ metric: 100, us: 300 }} min={0} onValue={(v) => imp().setChoice("aheadM", v)} />
-                <TextField label="Name of the note" name="railml.name" value={c().name} onValue={(v) => imp().setChoice("name", v)} maxLength={120} />
+                <QuantityField label={t("rmBehind")} name="railml.behind" value={c().behindM} units={u()} measure="distance" fileUnit="m" step={{ metric: 100, us: 300 }} min={0} onValue={(v) => imp().setChoice("behindM", v)} />
+                <QuantityField label={t("rmAhead")} name="railml.ahead" value={c().aheadM} units={u()} measure="distance" fileUnit="m" step={{ metric: 100, us: 300 }} min={0} onValue={(v) => imp().setChoice("aheadM", v)} />
+                <TextField label={t("rmName")} name="railml.name" value={c().name} onValue={(v) => imp().setChoice("name", v)} maxLength={120} />
               </div>
 
-              <Show when={imp().result()} fallback={<p class="notes-hint">Making the stretch…</p>}>
+              <Show when={imp().result()} fallback={<p class="notes-hint">{t("rmMaking")}</p>}>
                 {(r) => (
                   <Show when={stretch()} fallback={<p class="notes-issue-box" role="alert">{r().ok ? "" : (r() as { message: string }).message}</p>}>
                     {(s) => (
-                      <div class="notes-railml-preview" aria-label="The stretch from railML">
+                      <div class="notes-railml-preview" aria-label={t("rmPreviewLabel")}>
                         <p class="notes-small">
-                          {dist(s().behindM)} behind and {dist(s().aheadM)} ahead of the front, at {s().frontWords}; {s().segments.length} segment(s)
-                          {s().speedLimit_kmh !== undefined ? `; speed limit ${show("speed", s().speedLimit_kmh! / 3.6, u(), 0)}` : ""}.
+                          {t("rmStretch", { behind: dist(s().behindM), ahead: dist(s().aheadM), front: s().frontWords, count: s().segments.length })}
+                          {s().speedLimit_kmh !== undefined ? t("rmSpeedLimit", { speed: show("speed", s().speedLimit_kmh! / 3.6, u(), 0) }) : ""}.
                         </p>
                         <Show when={placed()?.model}>{(m) => <ProfileSketch model={m()} units={u()} />}</Show>
                         <Show when={placed()?.issue}>
@@ -178,13 +179,13 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
                           </ul>
                         </Show>
                         <table class="notes-railml-segs">
-                          <caption>Segments, from the rear end of the stretch</caption>
+                          <caption>{t("rmSegsCaption")}</caption>
                           <thead>
                             <tr>
-                              <th scope="col">From</th>
-                              <th scope="col">Length</th>
-                              <th scope="col">Gradient</th>
-                              <th scope="col">Curve</th>
+                              <th scope="col">{t("rmFrom")}</th>
+                              <th scope="col">{t("rmLength")}</th>
+                              <th scope="col">{t("rmGradient")}</th>
+                              <th scope="col">{t("rmCurve")}</th>
                             </tr>
                           </thead>
                           <tbody>
@@ -194,7 +195,7 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
                                   <td>{dist(g.from_m)}</td>
                                   <td>{dist(g.length_m)}</td>
                                   <td>{show("grade", g.gradient_permille / 1000, u())}</td>
-                                  <td>{g.curveRadius_m > 0 ? show("radius", g.curveRadius_m, u()) : "straight"}</td>
+                                  <td>{g.curveRadius_m > 0 ? show("radius", g.curveRadius_m, u()) : t("rmStraight")}</td>
                                 </tr>
                               )}
                             </For>
@@ -202,22 +203,22 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
                         </table>
                         <Show when={s().segments.length > 12 && !showAll()}>
                           <button type="button" class="button" onClick={() => setShowAll(true)}>
-                            Show all {s().segments.length} segments
+                            {t("rmShowAll", { count: s().segments.length })}
                           </button>
                         </Show>
                         <Show when={s().hazards.length > 0}>
-                          <p class="notes-small">Hazards offered: {s().hazards.map((h) => `${h.kind} at ${dist(h.at_m)}`).join(", ")}.</p>
+                          <p class="notes-small">{t("rmHazards", { list: s().hazards.map((h) => t("rmHazardAt", { kind: hazardWord(h.kind), at: dist(h.at_m) })).join(", ") })}</p>
                         </Show>
                         <div class="notes-row-actions">
                           <button type="button" class="button primary" disabled={props.busy || c().name.trim() === ""} onClick={() => props.onSave(s())}>
-                            Save as a new note
+                            {t("rmSave")}
                           </button>
                           <button type="button" class="button" disabled={props.busy} onClick={() => props.onEdit(s())}>
-                            Open in the editor first
+                            {t("rmEdit")}
                           </button>
                         </div>
                         <Show when={c().name.trim() === ""}>
-                          <p class="notes-hint">Give the note a name to save it.</p>
+                          <p class="notes-hint">{t("rmNeedName")}</p>
                         </Show>
                       </div>
                     )}

@@ -7,6 +7,10 @@ import { createEffect, createSignal, on, onCleanup, type Accessor } from "solid-
 import { createStore, unwrap, type SetStoreFunction } from "solid-js/store";
 import type { FrontPlace, RailmlSummary, StretchRequest, StretchResult, TravelDirection } from "../../../../profiles/railml/index.js";
 import type { RailmlImporter } from "./client.js";
+import { notes } from "../../../../i18n/en/notes.js";
+import { tr } from "../../../i18n.js";
+
+const t = tr.ns(notes);
 
 export type FrontKind = "absPos" | "ocp" | "pos";
 
@@ -52,18 +56,18 @@ export function requestOf(c: RailmlChoice): StretchRequest | string {
   let front: FrontPlace;
   const track = c.track.trim();
   if (c.kind === "ocp") {
-    if (!c.ocp) return "Choose an operational point.";
+    if (!c.ocp) return t("rmChooseOcp");
     front = track ? { kind: "ocp", ocp: c.ocp, track } : { kind: "ocp", ocp: c.ocp };
   } else if (c.kind === "pos") {
-    if (!track) return "Enter the track's id.";
-    if (!Number.isFinite(c.pos)) return "Enter the position along the track.";
+    if (!track) return t("rmEnterTrack");
+    if (!Number.isFinite(c.pos)) return t("rmEnterPos");
     front = { kind: "pos", track, pos: c.pos };
   } else {
-    if (!Number.isFinite(c.absPos)) return "Enter the line position of the front.";
+    if (!Number.isFinite(c.absPos)) return t("rmEnterAbsPos");
     front = track ? { kind: "absPos", absPos: c.absPos, track } : { kind: "absPos", absPos: c.absPos };
   }
-  if (!(c.behindM > 0)) return "Take more than 0 m behind the front.";
-  if (!(c.aheadM >= 0)) return "Take 0 m or more ahead of the front.";
+  if (!(c.behindM > 0)) return t("rmBehindMore");
+  if (!(c.aheadM >= 0)) return t("rmAheadMore");
   return { front, direction: c.direction, behindM: c.behindM, aheadM: c.aheadM };
 }
 
@@ -115,7 +119,7 @@ export function createRailmlImport(deps: { importer: () => RailmlImporter; delay
         },
         (e: Error) => {
           if (n !== reading) return;
-          setProblem(e.name === "AbortError" ? "The import was cancelled: nothing was saved." : `${e.message} Nothing was saved.`);
+          setProblem(e.name === "AbortError" ? t("rmCancelled") : t("rmNothingSaved", { problem: e.message }));
           setPhase("failed");
         },
       );
@@ -163,7 +167,7 @@ export function createRailmlImport(deps: { importer: () => RailmlImporter; delay
     cancel: () => {
       reading++;
       importer?.cancel();
-      setProblem("The import was cancelled: nothing was saved.");
+      setProblem(t("rmCancelled"));
       setPhase("failed");
     },
   };
