@@ -11,6 +11,10 @@ import { requestPersistentStorage, type ExportReminder, type PersistResult } fro
 import { rowOf, type NoteRow, type RecordProblem, type SavedNote } from "../../../notes/records.js";
 import { NotesClosedError, type NotesStore, type PutResult, type SaveBase } from "../../../notes/store.js";
 import { readNotesFile, type TextSource } from "./notesFile.js";
+import { notes } from "../../../i18n/en/notes.js";
+import { tr } from "../../i18n.js";
+
+const nt = tr.ns(notes);
 
 export interface Notice {
   kind: "done" | "problem";
@@ -112,7 +116,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       if (why) closedNotice(new NotesClosedError(why));
       return store;
     } catch (e) {
-      setFailure(`The notes library could not be opened on this device (${(e as Error).message || (e as Error).name}). Notes cannot be saved here.`);
+      setFailure(nt("nfCannotOpen", { problem: (e as Error).message || (e as Error).name }));
       setReady(true);
       return undefined;
     }
@@ -170,7 +174,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
     const outcome = await guarded((s) => s.importBundle(read.notes, ask, { validated, reviews: read.reviews }));
     if (outcome === undefined) return;
     if (outcome.status === "cancelled") {
-      setNotice({ kind: "done", text: `Import of ${fileName} cancelled; nothing was changed.` });
+      setNotice({ kind: "done", text: nt("nfImportCancelled", { file: fileName }) });
       return;
     }
     if (outcome.status === "failed") {
@@ -180,14 +184,14 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
     await afterChange();
     const sm = outcome.summary;
     const parts = [
-      sm.added.length > 0 ? `${sm.added.length} added` : "",
-      sm.repaired.length > 0 ? `${sm.repaired.length} damaged record${sm.repaired.length === 1 ? "" : "s"} replaced by the file's note` : "",
-      sm.replaced.length > 0 ? `${sm.replaced.length} replaced by the file's version` : "",
-      sm.keptMine.length > 0 ? `${sm.keptMine.length} kept as yours` : "",
-      sm.copies.length > 0 ? `${sm.copies.length} kept both (the file's as a copy)` : "",
-      sm.unchanged.length > 0 ? `${sm.unchanged.length} already the same` : "",
+      sm.added.length > 0 ? nt("nfAdded", { count: sm.added.length }) : "",
+      sm.repaired.length > 0 ? nt("nfRepaired", { count: sm.repaired.length }) : "",
+      sm.replaced.length > 0 ? nt("nfReplaced", { count: sm.replaced.length }) : "",
+      sm.keptMine.length > 0 ? nt("nfKeptMine", { count: sm.keptMine.length }) : "",
+      sm.copies.length > 0 ? nt("nfCopies", { count: sm.copies.length }) : "",
+      sm.unchanged.length > 0 ? nt("nfUnchanged", { count: sm.unchanged.length }) : "",
     ].filter(Boolean);
-    setNotice({ kind: "done", text: `Imported ${fileName}: ${parts.join(", ") || "nothing to import"}.` });
+    setNotice({ kind: "done", text: nt("nfImported", { file: fileName, parts: parts.join(", ") || nt("nfNothingToImport") }) });
   };
 
   void refresh();
@@ -215,7 +219,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
     },
     async save(note, base) {
       const s = await open();
-      if (!s) return { ok: false, issues: [{ path: "", message: failure() ?? "The notes library is not available." }] };
+      if (!s) return { ok: false, issues: [{ path: "", message: failure() ?? nt("nfUnavailable") }] };
       let r: PutResult;
       try {
         r = await s.put(note, "mine", base);
@@ -226,7 +230,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       }
       if (r.ok) {
         await afterChange();
-        setNotice({ kind: "done", text: `Saved "${r.saved.note.name}".` });
+        setNotice({ kind: "done", text: nt("nfSaved", { name: r.saved.note.name }) });
       }
       return r;
     },
@@ -235,7 +239,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       const done = await guarded((s) => s.delete(key));
       if (done === undefined) return;
       await afterChange();
-      setNotice({ kind: "done", text: `Removed "${name}".` });
+      setNotice({ kind: "done", text: nt("nfRemoved", { name }) });
     },
     async rawText(key) {
       const raw = await guarded((s) => s.rawRecord(key));
@@ -247,7 +251,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       const done = await guarded(async (s) => (await s.clear(), true));
       if (!done) return;
       await afterChange();
-      setNotice({ kind: "done", text: `Removed all ${n} notes from this device.` });
+      setNotice({ kind: "done", text: nt("nfRemovedAll", { count: n }) });
     },
     async importText(text, fileName, ask) {
       await importRead(readNotesText(text), fileName, ask, true);
@@ -266,7 +270,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       const n = await guarded((s) => s.restoreDemos());
       if (n === undefined) return;
       await afterChange();
-      setNotice({ kind: "done", text: n > 0 ? `Put back ${n} demo note${n === 1 ? "" : "s"}.` : "All demo notes are already there." });
+      setNotice({ kind: "done", text: n > 0 ? nt("nfPutBack", { count: n }) : nt("nfAllDemos") });
     },
   };
 }

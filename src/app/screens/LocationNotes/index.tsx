@@ -30,6 +30,10 @@ import { railmlNote } from "../../../profiles/railml/note.js";
 import type { Stretch } from "../../../profiles/railml/stretch.js";
 import { createRailmlImporter } from "./railml/client.js";
 import { createRailmlImport } from "./railml/createRailmlImport.js";
+import { notes } from "../../../i18n/en/notes.js";
+import { tr } from "../../i18n.js";
+
+const nt = tr.ns(notes);
 
 /** Where the editor remembers the trainer's initials between revisions. */
 export const INITIALS_KEY = "taut.notes.initials";
@@ -136,11 +140,11 @@ export function LocationNotesScreen(): JSX.Element {
       editor.restore(draft, k?.saved);
       setBase(b);
       setMode("edit");
-      lib.setNotice({ kind: "done", text: `Your unsaved edit of "${draft.name || "a new note"}" was kept: save it, or go back to the library to drop it.` });
+      lib.setNotice({ kind: "done", text: nt("nfEditKept", { name: draft.name || nt("nfNewNote") }) });
     } else {
       write(storage, NOTE_DRAFT_SET_ASIDE_KEY, kept);
       forget();
-      lib.setNotice({ kind: "problem", text: "An unsaved edit kept on this device could not be read back; it was set aside (kept, not deleted)." });
+      lib.setNotice({ kind: "problem", text: nt("nfEditUnreadable") });
     }
   }
 
@@ -165,7 +169,7 @@ export function LocationNotesScreen(): JSX.Element {
       if (c.conflict.theirs) {
         editor.load(c.conflict.theirs.note);
         setBase({ rev: c.conflict.theirs.rev });
-        lib.setNotice({ kind: "done", text: `Opened "${c.conflict.theirs.note.name}" as it was saved elsewhere; your edit was dropped.` });
+        lib.setNotice({ kind: "done", text: nt("nfOpenedTheirs", { name: c.conflict.theirs.note.name }) });
       } else {
         setMode("library");
         void lib.refresh();
@@ -183,7 +187,7 @@ export function LocationNotesScreen(): JSX.Element {
     const r = await lib.save(note, saveBase);
     if (r.ok) afterSaved(r.saved);
     else if (r.conflict) setSaveConflict({ conflict: r.conflict, note });
-    else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: "The note was not saved.", details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+    else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: nt("nfNotSaved"), details: r.issues.map((i) => `${i.path}: ${i.message}`) });
   };
 
   const rescue = (p: RecordProblem) => {
@@ -193,7 +197,7 @@ export function LocationNotesScreen(): JSX.Element {
     setMode("edit");
     lib.setNotice({
       kind: "problem",
-      text: `"${String(p.rescue.note.name ?? p.key)}" as far as it could be carried over: put right what the editor marks, then save (it replaces the damaged record).`,
+      text: nt("nfRescue", { name: String(p.rescue.note.name ?? p.key) }),
       ...(p.rescue.flags.length > 0 ? { details: p.rescue.flags } : {}),
     });
   };
@@ -216,16 +220,16 @@ export function LocationNotesScreen(): JSX.Element {
         ...(builtinTrains[0] ? { referenceTrain: { train: builtinTrains[0].id } } : {}),
       });
       if (!n.ok) {
-        lib.setNotice({ kind: "problem", text: "The stretch does not make a valid note; nothing was saved.", details: n.issues.map((i) => `${i.path}: ${i.message}`) });
+        lib.setNotice({ kind: "problem", text: nt("nfStretchInvalid"), details: n.issues.map((i) => `${i.path}: ${i.message}`) });
         return;
       }
       const r = await lib.save(n.value, "new");
       if (!r.ok) {
         if (r.conflict) setSaveConflict({ conflict: r.conflict, note: n.value as unknown as Record<string, unknown> });
-        else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: "The note was not saved.", details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+        else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: nt("nfNotSaved"), details: r.issues.map((i) => `${i.path}: ${i.message}`) });
         return;
       }
-      lib.setNotice({ kind: "done", text: `Saved "${name}" from railML.` });
+      lib.setNotice({ kind: "done", text: nt("nfSavedRailml", { name }) });
       editor.load(r.saved.note);
       setBase({ rev: r.saved.rev });
       setMode("edit");
@@ -237,14 +241,14 @@ export function LocationNotesScreen(): JSX.Element {
     editor.set({
       name: railml.choice.name.trim(),
       direction: railmlDirection(),
-      standing: `Front at ${s.frontWords} (from railML).`.slice(0, 400),
+      standing: nt("nfFrontAt", { place: s.frontWords }).slice(0, 400),
       segments: s.segments.map((g) => ({ ...g })),
       frontAt_m: s.frontAt_m,
       clearAhead_m: s.aheadM,
       speedLimit_kmh: s.speedLimit_kmh ?? Number.NaN,
       hazards: s.hazards.map((h) => ({ kind: h.kind, at_m: h.at_m, note: h.note.slice(0, 400) })),
     });
-    editor.set("revision", "change", `Imported from railML (${railml.fileName()}).`.slice(0, 400));
+    editor.set("revision", "change", nt("nfImportedRailml", { file: railml.fileName() }).slice(0, 400));
     setMode("edit");
   };
 
@@ -271,7 +275,7 @@ export function LocationNotesScreen(): JSX.Element {
     try {
       await f();
     } catch (e) {
-      lib.setNotice({ kind: "problem", text: `Something went wrong: ${(e as Error).message || String(e)}` });
+      lib.setNotice({ kind: "problem", text: nt("nfWentWrong", { problem: (e as Error).message || String(e) }) });
     } finally {
       setBusy(false);
     }
@@ -285,7 +289,7 @@ export function LocationNotesScreen(): JSX.Element {
   };
   const showNote = (s: SavedNote, then: Mode) => {
     // A note carried over from the older format with something left out says what, until it is saved again.
-    lib.setNotice(s.flags && s.flags.length > 0 ? { kind: "problem", text: "Carried over from the older notes format with something left out: check it, then save.", details: s.flags } : null);
+    lib.setNotice(s.flags && s.flags.length > 0 ? { kind: "problem", text: nt("nfOlderFormat"), details: s.flags } : null);
     editor.load(s.note);
     setBase({ rev: s.rev });
     setMode(then);
@@ -364,7 +368,7 @@ export function LocationNotesScreen(): JSX.Element {
           if (!r.ok) {
             if (r.conflict) setSaveConflict({ conflict: r.conflict, note });
             // No issues and no conflict: the library was closed under the page (its notice says so; the edit is kept).
-            else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: "The note was not saved.", details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+            else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: nt("nfNotSaved"), details: r.issues.map((i) => `${i.path}: ${i.message}`) });
             return;
           }
           afterSaved(r.saved);
