@@ -238,4 +238,9 @@ export const notesDe = translation<typeof notes.en>()({
   nfRepaired: { one: "{count} beschädigter Eintrag durch die Notiz der Datei ersetzt", other: "{count} beschädigte Einträge durch die Notiz der Datei ersetzt" },
   nfRemovedAll: { one: "Die {count} Notiz wurde von diesem Gerät entfernt.", other: "Alle {count} Notizen wurden von diesem Gerät entfernt." },
   nfPutBack: { one: "{count} Beispielnotiz wiederhergestellt.", other: "{count} Beispielnotizen wiederhergestellt." },
+  pmHeights: "Höhen ×{factor}",
+  pmHeightsNoFit: "Höhen ×{factor} (×{wanted} passte nicht)",
+  ppDistance: "Entfernung entlang der Strecke ({unit}) · {heights}",
+  ppHeight: "Höhe ({unit})",
+  psLabel: "Profilskizze: das Gleis, der stehende Zug und was voraus liegt",
 });

@@ -237,4 +237,9 @@ export const notes = namespace("notes", {
   nfRepaired: { one: "{count} damaged record replaced by the file's note", other: "{count} damaged records replaced by the file's note" },
   nfRemovedAll: { one: "Removed the {count} note from this device.", other: "Removed all {count} notes from this device." },
   nfPutBack: { one: "Put back {count} demo note.", other: "Put back {count} demo notes." },
+  pmHeights: "heights ×{factor}",
+  pmHeightsNoFit: "heights ×{factor} (×{wanted} would not fit)",
+  ppDistance: "Distance along the line ({unit}) · {heights}",
+  ppHeight: "Height ({unit})",
+  psLabel: "Profile sketch: the track, the standing train and what lies ahead",
 });

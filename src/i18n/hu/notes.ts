@@ -238,4 +238,9 @@ export const notesHu = translation<typeof notes.en>()({
   nfRepaired: { one: "{count} sérült rekord lecserélve a fájl jegyzetére", other: "{count} sérült rekord lecserélve a fájl jegyzetére" },
   nfRemovedAll: { one: "A(z) {count} jegyzet eltávolítva erről a készülékről.", other: "Mind a(z) {count} jegyzet eltávolítva erről a készülékről." },
   nfPutBack: { one: "{count} bemutató jegyzet visszaállítva.", other: "{count} bemutató jegyzet visszaállítva." },
+  pmHeights: "magasságok ×{factor}",
+  pmHeightsNoFit: "magasságok ×{factor} (×{wanted} nem férne el)",
+  ppDistance: "Távolság a vonal mentén ({unit}) · {heights}",
+  ppHeight: "Magasság ({unit})",
+  psLabel: "Profilvázlat: a pálya, az álló vonat és ami előtte van",
 });

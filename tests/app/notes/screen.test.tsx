@@ -45,6 +45,13 @@ describe("Location notes screen", () => {
         const first = listed()[0]!;
         expect(screen.getByRole("button", { name: n("cardOf", { name: first }) })).toBeTruthy();
         expect(document.querySelector(".notes-library p[aria-live]")!.textContent).toContain(n("count", { count: builtinLocations.length }));
+        // The editor: its title, its sections and its fields' labels.
+        fireEvent.click(screen.getByRole("button", { name: n("newNote") }));
+        expect(screen.getByRole("heading", { level: 2, name: n("edNewTitle") })).toBeTruthy();
+        expect(screen.getByRole("heading", { level: 3, name: n("segTitle") })).toBeTruthy();
+        expect(screen.getByLabelText(n("edInitials"))).toBeTruthy();
+        expect(screen.getByRole("button", { name: n("segAdd") })).toBeTruthy();
+        fireEvent.click(screen.getByRole("button", { name: n("backToLibrary") }));
         unmount();
       } finally {
         await setAppLanguage("en");

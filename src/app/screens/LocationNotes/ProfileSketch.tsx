@@ -6,6 +6,10 @@
 import { For, Show, type JSX } from "solid-js";
 import { formatNumber, toDisplay, unitSymbol, type UnitSystem } from "../../format.js";
 import { alongGround, exaggerationFor, exaggerationWords, type ProfileModel } from "./profileModel.js";
+import { notes } from "../../../i18n/en/notes.js";
+import { tr } from "../../i18n.js";
+
+const nt = tr.ns(notes);
 
 const W = 1000;
 const H = 300;
@@ -47,7 +51,7 @@ export function ProfileSketch(props: { model: ProfileModel; units: UnitSystem })
   };
 
   return (
-    <svg class="notes-sketch" data-exaggeration={exaggeration()} viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Profile sketch: the track, the standing train and what lies ahead" preserveAspectRatio="xMidYMid meet">
+    <svg class="notes-sketch" data-exaggeration={exaggeration()} viewBox={`0 0 ${W} ${H}`} role="img" aria-label={nt("psLabel")} preserveAspectRatio="xMidYMid meet">
       <path d={groundFill()} fill="#e9ecef" stroke="none" />
       <path d={ground()} fill="none" stroke="#222" stroke-width="2.5" />
       <line x1={PAD.left} y1={H - PAD.bottom} x2={W - PAD.right} y2={H - PAD.bottom} stroke="#555" stroke-width="1" />

@@ -12,6 +12,9 @@ import type { SegmentFile } from "../../../profiles/schemas.js";
 import type { HazardKind } from "./draft.js";
 import { card } from "../../../i18n/en/card.js";
 import { tr } from "../../i18n.js";
+import { notes } from "../../../i18n/en/notes.js";
+
+const nt = tr.ns(notes);
 
 const t = tr.ns(card);
 
@@ -62,7 +65,7 @@ export function exaggerationFor(reliefM: number, pxPerM: number, heightPx: numbe
 
 /** The drawing's words for its exaggeration. */
 export function exaggerationWords(e: number): string {
-  return e === VERTICAL_EXAGGERATION ? `heights ×${e}` : `heights ×${e} (×${VERTICAL_EXAGGERATION} would not fit)`;
+  return e === VERTICAL_EXAGGERATION ? nt("pmHeights", { factor: String(e) }) : nt("pmHeightsNoFit", { factor: String(e), wanted: String(VERTICAL_EXAGGERATION) });
 }
 
 /** The segments that can be drawn (finite, positive length), as a track profile. */

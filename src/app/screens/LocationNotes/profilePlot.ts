@@ -6,6 +6,10 @@
  */
 import { formatNumber, toDisplay, unitSymbol, type UnitSystem } from "../../format.js";
 import { alongGround, exaggerationFor, exaggerationWords, type ProfileModel, type ProfilePoint, type SlackWord } from "./profileModel.js";
+import { notes } from "../../../i18n/en/notes.js";
+import { tr } from "../../i18n.js";
+
+const nt = tr.ns(notes);
 
 export interface PlotTick {
   /** Pixel position along its axis. */
@@ -130,8 +134,8 @@ export function profilePlot(m: ProfileModel, units: UnitSystem, width: number, h
       .filter((h) => h.inside)
       .map(({ x, y, n }) => ({ x, y, n })),
     exaggeration,
-    xTitle: `Distance along the line (${unit}) · ${exaggerationWords(exaggeration)}`,
-    yTitle: `Height (${unit})`,
+    xTitle: nt("ppDistance", { unit, heights: exaggerationWords(exaggeration) }),
+    yTitle: nt("ppHeight", { unit }),
   };
 
   /** The chainage at a pixel column. */
