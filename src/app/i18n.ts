@@ -66,6 +66,24 @@ export async function loadCatalog(l: Lang): Promise<Catalog | null> {
 }
 
 let wanted: Lang = "en";
+/** The loader of the words of the screens opened later (app/laterWords.ts), once one of them has loaded. */
+let part: ((l: Lang) => Promise<Catalog | null>) | null = null;
+
+/**
+ * Words that come with a later screen: loaded now for the language on screen and with every language chosen
+ * afterwards (before it switches), so a screen never shows half in English.
+ */
+export async function addCatalogPart(load: (l: Lang) => Promise<Catalog | null>): Promise<void> {
+  if (part) return;
+  part = load;
+  const l = lang();
+  try {
+    const p = await load(l);
+    if (p && lang() === l && wanted === l) setCatalog({ ...(catalog() ?? {}), ...p });
+  } catch {
+    // Offline before the chunk was ever saved: those screens stay in English.
+  }
+}
 
 /**
  * Show the app in `l`: its catalog is loaded first, then the language switches at once (never half in one
@@ -76,6 +94,8 @@ export async function setAppLanguage(l: Lang): Promise<boolean> {
   let c: Catalog | null;
   try {
     c = await loadCatalog(l);
+    const more = c && part ? await part(l) : null;
+    if (c && more) c = { ...c, ...more };
   } catch {
     return false;
   }

@@ -6,10 +6,8 @@ import { settingsDe } from "./settings.js";
 import { stepsDe } from "./steps.js";
 import { planDe } from "./plan.js";
 import { inputsDe } from "./inputs.js";
-import { notesDe } from "./notes.js";
-import { departuresDe } from "./departures.js";
 import { dispatchDe } from "./dispatch.js";
 import { cautionsDe } from "./cautions.js";
 import { wordsDe } from "./words.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, departures: departuresDe, notes: notesDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe };

@@ -6,10 +6,8 @@ import { settingsHu } from "./settings.js";
 import { stepsHu } from "./steps.js";
 import { planHu } from "./plan.js";
 import { inputsHu } from "./inputs.js";
-import { notesHu } from "./notes.js";
-import { departuresHu } from "./departures.js";
 import { dispatchHu } from "./dispatch.js";
 import { cautionsHu } from "./cautions.js";
 import { wordsHu } from "./words.js";
 
-export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu, dispatch: dispatchHu, cautions: cautionsHu, departures: departuresHu, notes: notesHu };
+export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu, dispatch: dispatchHu, cautions: cautionsHu };

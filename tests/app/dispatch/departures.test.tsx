@@ -16,7 +16,9 @@ import { appLang, setAppLanguage } from "../../../src/app/i18n.js";
 import { SETTINGS_KEY } from "../../../src/app/state/createSettings.js";
 import { departures } from "../../../src/i18n/en/departures.js";
 import { de } from "../../../src/i18n/de/index.js";
+import { deLater } from "../../../src/i18n/de/later.js";
 import { hu } from "../../../src/i18n/hu/index.js";
+import { huLater } from "../../../src/i18n/hu/later.js";
 import { createTranslator } from "../../../src/i18n/translator.js";
 import { wordsDe } from "../../../src/i18n/de/words.js";
 import { wordsHu } from "../../../src/i18n/hu/words.js";
@@ -239,7 +241,7 @@ describe("Departures", () => {
   });
 
   it("reads in German and Hungarian: headings, filters, counts and verdict words from the language's catalog, the same figures", async () => {
-    for (const [lang, catalog, w, decimal] of [["de", de, wordsDe, ","], ["hu", hu, wordsHu, ","]] as const) {
+    for (const [lang, catalog, w, decimal] of [["de", { ...de, ...deLater }, wordsDe, ","], ["hu", { ...hu, ...huLater }, wordsHu, ","]] as const) {
       const d = createTranslator(lang, catalog).ns(departures);
       expect(d("loadHeading")).not.toBe(departures.en.loadHeading);
       // The language as Settings names it (the app applies it once its catalog has loaded).

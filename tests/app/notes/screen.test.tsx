@@ -16,7 +16,9 @@ import { appLang, setAppLanguage } from "../../../src/app/i18n.js";
 import { SETTINGS_KEY } from "../../../src/app/state/createSettings.js";
 import { notes } from "../../../src/i18n/en/notes.js";
 import { de } from "../../../src/i18n/de/index.js";
+import { deLater } from "../../../src/i18n/de/later.js";
 import { hu } from "../../../src/i18n/hu/index.js";
+import { huLater } from "../../../src/i18n/hu/later.js";
 import { createTranslator } from "../../../src/i18n/translator.js";
 
 const listed = () => [...document.querySelectorAll(".notes-item-name")].map((e) => e.textContent);
@@ -30,7 +32,7 @@ describe("Location notes screen", () => {
   });
 
   it("shows the library in German and Hungarian: its actions, tags and each note's card button in the language's words", async () => {
-    for (const [lang, catalog] of [["de", de], ["hu", hu]] as const) {
+    for (const [lang, catalog] of [["de", { ...de, ...deLater }], ["hu", { ...hu, ...huLater }]] as const) {
       const n = createTranslator(lang, catalog).ns(notes);
       expect(n("newNote")).not.toBe(notes.en.newNote);
       const storage = memoryStorage();

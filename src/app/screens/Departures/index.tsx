@@ -17,6 +17,10 @@ import { byRisk, departuresCsv, summarise, type DepartureRow } from "./rows.js";
 import { DeparturesView, type DeparturesFilter, type DeparturesSort, type LoadedFile } from "./View.js";
 import { departures } from "../../../i18n/en/departures.js";
 import { tr } from "../../i18n.js";
+import { laterWords } from "../../laterWords.js";
+
+// This screen's words in the language on screen (a chunk of their own) come before it shows.
+await laterWords;
 
 const t = tr.ns(departures);
 

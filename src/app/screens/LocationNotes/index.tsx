@@ -32,6 +32,10 @@ import { createRailmlImporter } from "./railml/client.js";
 import { createRailmlImport } from "./railml/createRailmlImport.js";
 import { notes } from "../../../i18n/en/notes.js";
 import { tr } from "../../i18n.js";
+import { laterWords } from "../../laterWords.js";
+
+// This screen's words in the language on screen (a chunk of their own) come before it shows.
+await laterWords;
 
 const nt = tr.ns(notes);
 

@@ -1,0 +1,9 @@
+/**
+ * The German words of the screens opened later (Departures, Location notes): a chunk of their own, loaded
+ * with the first of those screens, so the catalog loaded before the first plan stays small.
+ */
+import type { Catalog } from "../messages.js";
+import { departuresDe } from "./departures.js";
+import { notesDe } from "./notes.js";
+
+export const deLater: Catalog = { departures: departuresDe, notes: notesDe };

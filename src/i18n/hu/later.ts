@@ -1,0 +1,9 @@
+/**
+ * The Hungarian words of the screens opened later (Departures, Location notes): a chunk of their own, loaded
+ * with the first of those screens, so the catalog loaded before the first plan stays small.
+ */
+import type { Catalog } from "../messages.js";
+import { departuresHu } from "./departures.js";
+import { notesHu } from "./notes.js";
+
+export const huLater: Catalog = { departures: departuresHu, notes: notesHu };
