@@ -1,8 +1,7 @@
 /** `taut simulate CASE.json --sequence "1@0,2@20,4@35,8@50"` — run a given notch sequence through the dynamics model. */
-import { simulate, sequenceControls, type SimResult } from "../../core/dynamics/simulate.js";
-import { modelFromCase } from "../../core/train/trainModel.js";
+import { simulate, type SimResult } from "../../core/dynamics/simulate.js";
 import { ACCELERATE_MAX_S } from "../../core/planner/search.js";
-import { brakeSchedule, plannerContext } from "../../core/planner/index.js";
+import { sequenceRun } from "../../core/planner/index.js";
 import type { StartCase } from "../../core/train/types.js";
 import { InputError } from "../errors.js";
 import { quoted } from "../../profiles/text.js";
@@ -87,18 +86,12 @@ export function simulateCase(
   opts: { durationS?: number; releaseAtS?: number; adhesionQuantile?: number; series?: boolean; brakeReleased?: boolean },
 ): SimulateReport {
   const q = opts.adhesionQuantile ?? 0.5;
-  const firstPower = seq.find((e) => e.notch > 0)?.atS ?? 0;
-  // The brakes come off as the plan takes them off (the train brake from time 0, released in stages on a
-  // falling grade the locomotive brake cannot hold), unless told the train brake is already released.
-  const ctx = plannerContext(c);
-  const graduated = !opts.brakeReleased && ctx.startKind === "gravity" && !ctx.locoBrakeHolds;
-  const plan = brakeSchedule(ctx);
-  const model = modelFromCase(c, { adhesionQuantile: q, graduatedRelease: graduated });
-  const trainRelease = opts.brakeReleased ? -1e6 : plan.trainBrakeReleaseS;
-  // The locomotive brake holds until the first notch's effort has built up (common practice on a rising
-  // grade), and not before the plan would ease it, unless told otherwise.
-  const release = opts.releaseAtS ?? (opts.brakeReleased ? firstPower + 3 : graduated ? plan.locoBrakeReleaseS : Math.max(plan.locoBrakeReleaseS, firstPower + 3));
-  const controls = sequenceControls(seq, { trainBrakeReleaseS: trainRelease, locoBrakeReleaseS: release });
+  // The brakes come off as the plan takes them off, unless told the train brake is already released.
+  const { model, controls, locoBrakeReleaseS: release, trainBrakeReleaseS: trainRelease, graduatedRelease: graduated } = sequenceRun(c, seq, {
+    adhesionQuantile: q,
+    ...(opts.brakeReleased ? { brakeReleased: true } : {}),
+    ...(opts.releaseAtS !== undefined ? { releaseAtS: opts.releaseAtS } : {}),
+  });
   const target = c.target;
   const reached = (o: { leadSpeedMps: number; tailTravelM: number }) =>
     target.kind === "speed" ? o.leadSpeedMps >= target.speedMps : o.tailTravelM >= target.distanceM;

@@ -12,9 +12,8 @@
  * the acceleration, largely as their ratio, so the fit says when a recording cannot tell them apart
  * instead of splitting the difference.
  */
-import { modelFromCase } from "../train/trainModel.js";
-import { sequenceControls, simulate } from "../dynamics/simulate.js";
-import { brakeSchedule, plannerContext } from "../planner/index.js";
+import { simulate } from "../dynamics/simulate.js";
+import { sequenceRun } from "../planner/index.js";
 import type { StartCase } from "../train/types.js";
 import type { LocomotiveSpec } from "../physics/types.js";
 import { interpolate, startMoment, START_SPEED_MPS, type Recording } from "./recording.js";
@@ -77,13 +76,7 @@ export interface RunCurve {
  * until that long after the locomotive first moves.
  */
 export function replay(c: StartCase, seq: readonly NotchAt[], until: { untilS: number; afterStartS?: number }): RunCurve {
-  const ctx = plannerContext(c);
-  const graduated = ctx.startKind === "gravity" && !ctx.locoBrakeHolds;
-  const plan = brakeSchedule(ctx);
-  const firstPower = seq.find((e) => e.notch > 0)?.atS ?? 0;
-  const model = modelFromCase(c, { adhesionQuantile: REVIEW_ADHESION_QUANTILE, graduatedRelease: graduated });
-  const release = graduated ? plan.locoBrakeReleaseS : Math.max(plan.locoBrakeReleaseS, firstPower + 3);
-  const controls = sequenceControls(seq, { trainBrakeReleaseS: plan.trainBrakeReleaseS, locoBrakeReleaseS: release });
+  const { model, controls } = sequenceRun(c, seq, { adhesionQuantile: REVIEW_ADHESION_QUANTILE });
   let movedAt = -1;
   const after = until.afterStartS;
   const res = simulate(model, controls, {

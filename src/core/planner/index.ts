@@ -16,3 +16,4 @@ export { isCancelled, brakeSchedule } from "./search.js";
 export { marginalBound, plannerContext } from "./context.js";
 export type { PlannerContext } from "./context.js";
 export * from "./workCap.js";
+export * from "./sequenceRun.js";
