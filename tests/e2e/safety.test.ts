@@ -78,7 +78,8 @@ describe("data safety in the browser", () => {
     });
     const t0 = Date.now();
     await page.getByLabel("Notes file to import").setInputFiles(file);
-    await page.getByText(`Imported large.json: ${count} added`).waitFor({ timeout: 60_000 });
+    // The count as the page writes numbers in English: thousands grouped with a comma.
+    await page.getByText(`Imported large.json: ${count.toLocaleString("en")} added`).waitFor({ timeout: 60_000 });
     await page.getByText(/notes; the first 100 are shown/).waitFor();
     const importMs = Date.now() - t0;
     const longTasks = await page.evaluate(() => (window as unknown as { longTasks: number[] }).longTasks);
