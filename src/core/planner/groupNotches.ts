@@ -19,9 +19,9 @@
  * head.
  */
 import { adhesionSpeedFactor } from "../physics/adhesion.js";
-import { GRAVITY_MPS2 } from "../physics/constants.js";
 import { notchTargetN } from "../dynamics/runner.js";
 import type { PlannerContext } from "./contextShape.js";
+import { rigidVehicleResistanceN } from "./need.js";
 
 /** Each control group's notch, group 0 the head's. */
 export type GroupNotches = Int32Array;
@@ -46,17 +46,7 @@ export function unitDeliveredN(ctx: PlannerContext, notches: ArrayLike<number>, 
 
 /** Per-vehicle resistance of the train moving as one at `travelM` and `speedMps`, N (written into `out`). */
 function resistanceN(ctx: PlannerContext, travelM: number, v: number, seg: Int32Array, out: Float64Array): void {
-  const m = ctx.model;
-  for (let i = 0; i < m.n; i++) {
-    const ch = m.chainage0M[i]! + travelM;
-    let k = seg[i]!;
-    while (ch >= m.segEndM[k]!) k++;
-    while (ch < m.segStartM[k]!) k--;
-    seg[i] = k;
-    let r = m.davisA[i]! + (m.davisB[i]! + m.davisC[i]! * v) * v + m.massKg[i]! * (GRAVITY_MPS2 * m.segSin[k]! + m.segCurveNPerKg[k]!);
-    if (v < m.fadeSpeedMps) r += m.breakawayExcessN[i]! * (1 - v / m.fadeSpeedMps);
-    out[i] = r;
-  }
+  for (let i = 0; i < ctx.model.n; i++) out[i] = rigidVehicleResistanceN(ctx.model, i, travelM, v, seg);
 }
 
 /** The quasi-static coupler forces of the train moving as one under these group notches. */

@@ -121,14 +121,17 @@ export function pathMargin(path: NeedPath, availableN: (speedMps: number) => num
  */
 export function rigidResistanceN(m: TrainModel, travelM: number, v: number, seg: Int32Array): number {
   let r = 0;
-  for (let i = 0; i < m.n; i++) {
-    const ch = m.chainage0M[i]! + travelM;
-    let k = seg[i]!;
-    while (ch >= m.segEndM[k]!) k++;
-    while (ch < m.segStartM[k]!) k--;
-    seg[i] = k;
-    r += m.davisA[i]! + (m.davisB[i]! + m.davisC[i]! * v) * v + m.massKg[i]! * (GRAVITY_MPS2 * m.segSin[k]! + m.segCurveNPerKg[k]!);
-    if (v < m.fadeSpeedMps) r += m.breakawayExcessN[i]! * (1 - v / m.fadeSpeedMps);
-  }
+  for (let i = 0; i < m.n; i++) r += rigidVehicleResistanceN(m, i, travelM, v, seg);
   return r;
+}
+
+/** The same for vehicle `i` alone, N (its entry of `seg` updated). */
+export function rigidVehicleResistanceN(m: TrainModel, i: number, travelM: number, v: number, seg: Int32Array): number {
+  const ch = m.chainage0M[i]! + travelM;
+  let k = seg[i]!;
+  while (ch >= m.segEndM[k]!) k++;
+  while (ch < m.segStartM[k]!) k--;
+  seg[i] = k;
+  const r = m.davisA[i]! + (m.davisB[i]! + m.davisC[i]! * v) * v + m.massKg[i]! * (GRAVITY_MPS2 * m.segSin[k]! + m.segCurveNPerKg[k]!);
+  return v < m.fadeSpeedMps ? r + m.breakawayExcessN[i]! * (1 - v / m.fadeSpeedMps) : r;
 }
