@@ -8,7 +8,6 @@
  */
 import { spawn, spawnSync } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
-import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
@@ -16,21 +15,10 @@ import { chromium } from "playwright-core";
 import { builtinLocations } from "../../src/profiles/builtin.js";
 import { makeNotesBundle } from "../../src/profiles/notes.js";
 import type { LocationNoteFile } from "../../src/profiles/schemas.js";
+import { ARGS } from "../e2e/browser.js";
+import { CHROMIUM, freePort } from "../e2e/global-setup.js";
 
-const CHROMIUM = "/usr/bin/chromium";
-const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--no-first-run", "--disable-background-networking"];
 const root = fileURLToPath(new URL("../..", import.meta.url));
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = createServer();
-    s.once("error", reject);
-    s.listen(0, "127.0.0.1", () => {
-      const a = s.address();
-      s.close(() => (a && typeof a === "object" ? resolve(a.port) : reject(new Error("no port"))));
-    });
-  });
-}
 
 /** A library of `n` notes the size of a long-used one: each with hazards, seasons and a page of practice. */
 export function bulkNotes(n: number): LocationNoteFile[] {

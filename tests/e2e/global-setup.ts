@@ -31,7 +31,8 @@ function ensureChromium(): void {
   throw new Error(`Chromium is missing at ${CHROMIUM}. Install it with: apt-get update && apt-get install -y chromium (as root).`);
 }
 
-function freePort(): Promise<number> {
+/** A TCP port free on the loopback address now. */
+export function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
     const s = createServer();
     s.once("error", reject);

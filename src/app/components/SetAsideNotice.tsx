@@ -9,20 +9,10 @@ import { DRAFT_KEY, SET_ASIDE_KEY, type SetAsideDraft } from "../state/createCas
 import { read, safeLocalStorage, write } from "../state/createSettings.js";
 import { shell } from "../../i18n/en/shell.js";
 import { tr } from "../i18n.js";
+import { download } from "../download.js";
 
 const t = tr.ns(shell);
 
-/** Offer text as a file download. */
-function download(text: string, name: string): void {
-  const url = URL.createObjectURL(new Blob([text], { type: "application/json" }));
-  const a = document.createElement("a");
-  a.href = url;
-  a.download = name;
-  document.body.append(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 10_000);
-}
 
 export function SetAsideNotice(props: { aside: SetAsideDraft; onDismiss: () => void }): JSX.Element {
   return (
@@ -31,7 +21,7 @@ export function SetAsideNotice(props: { aside: SetAsideDraft; onDismiss: () => v
         <strong>{t("setAsideTitle")}</strong>
         {t("setAsideText", { reason: props.aside.reason })}
       </p>
-      <button type="button" class="button" onClick={() => download(props.aside.text, "taut-start-plan-inputs-set-aside.json")}>
+      <button type="button" class="button" onClick={() => download(props.aside.text, "taut-start-plan-inputs-set-aside.json", "application/json")}>
         {t("setAsideExport")}
       </button>
       <button type="button" class="button" onClick={() => props.onDismiss()}>

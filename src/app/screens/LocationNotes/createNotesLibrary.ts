@@ -4,6 +4,7 @@
  * Every change tells the other screens' location pickers to read the list again.
  */
 import { batch, createSignal, onCleanup, type Accessor } from "solid-js";
+import { download } from "../../download.js";
 import { readNotesText, type NotesBundleFile, type NotesFileResult } from "../../../profiles/notes.js";
 import type { FieldIssue } from "../../../profiles/issues.js";
 import type { ConflictChoice, ImportConflict } from "../../../notes/merge.js";
@@ -301,13 +302,5 @@ export function rawRecordText(raw: unknown): string {
 
 /** Offer a bundle as a file download (a JSON file named after its date). */
 export function downloadBundle(b: NotesBundleFile, name?: string): void {
-  const blob = new Blob([`${JSON.stringify(b, null, 2)}\n`], { type: "application/json" });
-  const url = URL.createObjectURL(blob);
-  const a = document.createElement("a");
-  a.href = url;
-  a.download = name ?? `taut-notes-${b.exported.slice(0, 10)}.json`;
-  document.body.append(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+  download(`${JSON.stringify(b, null, 2)}\n`, name ?? `taut-notes-${b.exported.slice(0, 10)}.json`, "application/json");
 }

@@ -5,6 +5,7 @@
  */
 import { createEffect, createMemo, createSignal, onCleanup, Show, type JSX } from "solid-js";
 import { builtinLibrary, builtinTrains } from "../../../profiles/builtin.js";
+import { download } from "../../download.js";
 import type { ConflictChoice, ImportConflict } from "../../../notes/merge.js";
 import { deviceNotesStore, onDeviceNotesClosed } from "../../../notes/index.js";
 import type { RecordProblem, SavedNote } from "../../../notes/records.js";
@@ -54,17 +55,6 @@ interface KeptEdit {
   keptAt: string;
 }
 
-/** Offer text as a file download. */
-function downloadText(text: string, name: string): void {
-  const url = URL.createObjectURL(new Blob([text], { type: "application/json" }));
-  const a = document.createElement("a");
-  a.href = url;
-  a.download = name;
-  document.body.append(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 10_000);
-}
 
 // The other screens' location pickers list the device's notes from the moment the app loads this screen.
 installNotesLocationSource();
@@ -352,7 +342,7 @@ export function LocationNotesScreen(): JSX.Element {
         onExportRaw: (p) =>
           void task(async () => {
             const text = await lib.rawText(p.rawKey);
-            if (text !== undefined) downloadText(text, `taut-damaged-record-${p.key.replace(/[^a-z0-9._-]+/gi, "_").slice(0, 60)}.json`);
+            if (text !== undefined) download(text, `taut-damaged-record-${p.key.replace(/[^a-z0-9._-]+/gi, "_").slice(0, 60)}.json`, "application/json");
           }),
         onRescue: rescue,
       }}
