@@ -5,6 +5,7 @@ import { formatNumber, show, type UnitSystem } from "./format.js";
 import { steps } from "../i18n/en/steps.js";
 import { tr } from "./i18n.js";
 import { words } from "./words.js";
+import { groupWords, helperCallWords, helperHoldWords } from "./lines.js";
 
 const t = tr.ns(steps);
 
@@ -57,7 +58,7 @@ export function notchText(n: number): string {
 
 /** Each control group's notch in a step, head first: "head 5 · rear 3". */
 export function groupNotchesText(groups: readonly GroupStep[]): string {
-  return groups.map((g) => `${g.name} ${notchText(g.notch)}`).join(" · ");
+  return groups.map((g) => `${groupWords(g.place)} ${notchText(g.notch)}`).join(" · ");
 }
 
 /**
@@ -65,7 +66,7 @@ export function groupNotchesText(groups: readonly GroupStep[]): string {
  * otherwise hold the notch until the head calls a change.
  */
 export function helperLine(g: GroupStep): string {
-  return g.coordination ?? `Hold notch ${notchText(g.notch)}; the head driver calls any change by radio.`;
+  return g.coordination ? helperCallWords(g.coordination) : helperHoldWords(notchText(g.notch));
 }
 
 /**

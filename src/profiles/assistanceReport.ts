@@ -7,6 +7,8 @@ import type { AddedUnits } from "../core/dispatch/assistPlacement.js";
 import type { ConditionMargin } from "../core/dispatch/conditionMargins.js";
 import type { DividedTrain } from "../core/dispatch/divideTrain.js";
 import type { LoadTableRow } from "../core/dispatch/loadTable.js";
+import { assistanceNoteText, splitName } from "../i18n/renderLines.js";
+import { ENGLISH, ENGLISH_SI, lineReport } from "./lineReport.js";
 import { r, type AssistanceReport, type AssistanceSearchReport, type ConditionMarginReport, type DivideReport } from "./report.js";
 
 const kN = (n: number): number => r(n / 1000, 1);
@@ -43,8 +45,9 @@ export function optionReport(o: AssistanceOption, profile: string): AssistanceRe
     }),
     peakCompressionAt: { coupling: o.peakCompressionAt + 1, of: couplings },
     headCompression_kN: kN(o.headCompressionN),
-    note: o.note,
-    effortSplit: o.effortSplit.map((g) => ({ name: g.name, notch: g.notch, share: r(g.share, 3) })),
+    note: assistanceNoteText(ENGLISH, ENGLISH_SI, o.note),
+    noteCode: lineReport(o.note),
+    effortSplit: o.effortSplit.map((g) => ({ name: splitName(ENGLISH, g.place), place: g.place, notch: g.notch, share: r(g.share, 3) })),
   };
 }
 

@@ -4,8 +4,10 @@
  */
 import { caseCautions, STANDARD_CAUTIONS, type Caution } from "../core/planner/cautions.js";
 import { cautionText } from "../i18n/render.js";
-import { createTranslator } from "../i18n/translator.js";
-import type { PlanResult, PlanStep } from "../core/planner/types.js";
+import { adviceText, bandWhatText, groupName, helperCallText, limitWhatText, slipGuidanceText, stepWhyText, vehicleText } from "../i18n/renderLines.js";
+import { ENGLISH, ENGLISH_SI, lineReport } from "./lineReport.js";
+import type { GroupPlace } from "../core/planner/lines.js";
+import type { PlanResult, PlanStep, SlipGuidance } from "../core/planner/types.js";
 import type { StaticCheck } from "../core/planner/staticCheck.js";
 import type { LimitCheck, LimitName, Reason, StartKind, Verdict } from "../core/planner/outcome.js";
 import type { StartCase } from "../core/train/types.js";
@@ -29,8 +31,10 @@ export interface StepReport {
   peakCouplerForce_kN: number;
   fallbackNotch: number;
   why: string;
-  /** With several control groups: each group's notch (head first; `notch` is the head's), its share of the effort, and how a helper follows. */
-  groups?: Array<{ name: string; control: "with-head" | "remote" | "helper"; notch: number; effortShare: number; coordination?: string }>;
+  /** The why line as codes with figures (src/core/planner/lines.ts StepWhy, figures named with report units). */
+  whyCode?: unknown;
+  /** With several control groups: each group's notch (head first; `notch` is the head's), its share of the effort, and how a helper follows (`place`, `coordinationCode`: the same as codes). */
+  groups?: Array<{ name: string; place?: GroupPlace; control: "with-head" | "remote" | "helper"; notch: number; effortShare: number; coordination?: string; coordinationCode?: unknown }>;
 }
 
 /** One limit of the decision: demand against allowance, with units in the names. */
@@ -44,8 +48,10 @@ export interface LimitReport {
   demand: number;
   allowance: number;
   /** Exceeding the allowance is marginal while the band's allowance covers its demand; absent when the limit has no band. */
-  band?: { demand: number; allowance: number; what: string };
+  band?: { demand: number; allowance: number; what: string; whatCode?: unknown };
   what: string;
+  /** `what` as a code with its figures (src/core/planner/limitLines.ts, figures named with report units). */
+  whatCode?: unknown;
 }
 
 export interface AssistanceReport {
@@ -69,8 +75,10 @@ export interface AssistanceReport {
   headCompression_kN?: number;
   /** What to watch with this option. */
   note?: string;
+  /** `note` as a code with its figures (src/core/dispatch/assistance.ts AssistanceNote, report units). */
+  noteCode?: unknown;
   /** Each control group's notch and share of the effort in the option's running step. */
-  effortSplit?: Array<{ name: string; notch: number; share: number }>;
+  effortSplit?: Array<{ name: string; place?: GroupPlace | "all"; notch: number; share: number }>;
 }
 
 /** Dividing the train: the largest first part that starts with the train's own locomotives. */
@@ -120,6 +128,8 @@ export interface PlanReport {
   planAdhesionQuantile?: number;
   /** Why the verdict is what it is and what would change it (empty when it starts). */
   advice?: string[];
+  /** `advice` as codes with their figures (src/core/planner/lines.ts AdviceLine, report units). */
+  adviceCodes?: unknown[];
   resistance_kN: { starting: number; grade: number; curve: number; running: number; total: number };
   adhesion: {
     mu: number;
@@ -150,10 +160,12 @@ export interface PlanReport {
   cautionCodes: CautionReport[];
   /** What to do if the wheels slip (`driver`, in order), why (`protection`: what the locomotive does) and if the train stalls. */
   ifWheelsSlip?: { driver: string[]; protection: string[]; stall: string[] };
+  /** The same card as codes (src/core/planner/lines.ts). */
+  ifWheelsSlipCodes?: SlipGuidance;
   /** With wagon groups: what the largest-mass search scales. */
   massSearchScales?: string;
   /** The highest wheel-climb L/V of the planned start (when units push or the train is mixed, and a coupling was in buff on a curve). */
-  wheelClimb?: { ratio: number; allowance: number; nadalLimit: number; vehicle: string; buff_kN: number; curveRadius_m: number };
+  wheelClimb?: { ratio: number; allowance: number; nadalLimit: number; vehicle: string; vehicleCode?: unknown; buff_kN: number; curveRadius_m: number };
   /** The stretch as the dynamics run showed it. */
   stretch?: { lastVehicleMoves_s: number | null; locoTravelToStretch_m: number | null; maxRunOut_kmh: number };
   /** Which input moves the margin most, largest first. */
@@ -174,8 +186,9 @@ export function limitReport(l: LimitCheck): LimitReport {
     unit: l.unit === "N" ? "kN" : l.unit,
     demand: val(l.demand),
     allowance: val(l.allowance),
-    ...(l.band ? { band: { demand: val(l.band.demand), allowance: val(l.band.allowance), what: l.band.what } } : {}),
-    what: l.what,
+    ...(l.band ? { band: { demand: val(l.band.demand), allowance: val(l.band.allowance), what: bandWhatText(ENGLISH, l.band.what), whatCode: l.band.what } } : {}),
+    what: limitWhatText(ENGLISH, ENGLISH_SI, l.what),
+    whatCode: lineReport(l.what),
   };
 }
 
@@ -248,8 +261,20 @@ export function stepReport(s: PlanStep): StepReport {
     protectionActs: s.protectionActs,
     peakCouplerForce_kN: kN(s.peakCouplerForceN, 0),
     fallbackNotch: s.fallbackNotch,
-    why: s.why,
-    ...(s.groups ? { groups: s.groups.map((g) => ({ name: g.name, control: g.control, notch: g.notch, effortShare: r(g.effortShare, 3), ...(g.coordination ? { coordination: g.coordination } : {}) })) } : {}),
+    why: stepWhyText(ENGLISH, ENGLISH_SI, s.why),
+    whyCode: lineReport(s.why),
+    ...(s.groups
+      ? {
+          groups: s.groups.map((g) => ({
+            name: groupName(ENGLISH, g.place),
+            place: g.place,
+            control: g.control,
+            notch: g.notch,
+            effortShare: r(g.effortShare, 3),
+            ...(g.coordination ? { coordination: helperCallText(ENGLISH, g.coordination), coordinationCode: lineReport(g.coordination) } : {}),
+          })),
+        }
+      : {}),
   };
 }
 
@@ -260,8 +285,6 @@ export interface CautionReport {
   standstill?: boolean;
   hold_s?: number;
 }
-
-const ENGLISH = createTranslator("en", null);
 
 export function cautionReport(c: Caution): CautionReport {
   if (c.code === "protection-acts") return { code: c.code, steps: c.steps, standstill: c.standstill };
@@ -292,7 +315,8 @@ export function planReport(c: StartCase, p: PlanResult, meta: PlanReport["case"]
   rep.limits = p.limits.map(limitReport);
   rep.startKind = p.startKind;
   rep.planAdhesionQuantile = r(p.planQuantile, 3);
-  rep.advice = p.advice;
+  rep.advice = p.advice.map((a) => adviceText(ENGLISH, ENGLISH_SI, a));
+  rep.adviceCodes = p.advice.map(lineReport);
   if (Number.isFinite(p.largestMarginalMassKg)) rep.largestMarginalMass_t = Math.floor(p.largestMarginalMassKg / 1000);
   rep.massSearchCeiling_t = Math.floor(p.massSearchCeilingKg / 1000);
   if (c.train.groups) rep.massSearchScales = "the load above tare of every wagon group, in proportion";
@@ -300,12 +324,13 @@ export function planReport(c: StartCase, p: PlanResult, meta: PlanReport["case"]
   rep.peakCouplerForce_kN = kN(p.peakCouplerForceN);
   if (p.wheelClimb) {
     const w = p.wheelClimb;
-    rep.wheelClimb = { ratio: r(w.ratio, 3), allowance: r(w.allowance, 3), nadalLimit: r(w.nadalLimit, 3), vehicle: w.vehicle, buff_kN: kN(w.forceN), curveRadius_m: r(w.radiusM, 0) };
+    rep.wheelClimb = { ratio: r(w.ratio, 3), allowance: r(w.allowance, 3), nadalLimit: r(w.nadalLimit, 3), vehicle: vehicleText(ENGLISH, ENGLISH_SI, w.vehicle), vehicleCode: lineReport(w.vehicle), buff_kN: kN(w.forceN), curveRadius_m: r(w.radiusM, 0) };
   }
   rep.timeToTarget_s = p.timeToTargetS === null ? null : r(p.timeToTargetS, 0);
   rep.cautions = cautionsInEnglish(p.cautions);
   rep.cautionCodes = p.cautions.map(cautionReport);
-  rep.ifWheelsSlip = p.slipGuidance;
+  rep.ifWheelsSlip = slipGuidanceText(ENGLISH, p.slipGuidance);
+  rep.ifWheelsSlipCodes = p.slipGuidance;
   rep.stretch = {
     lastVehicleMoves_s: p.stretch.lastVehicleMovesS === null ? null : r(p.stretch.lastVehicleMovesS, 1),
     locoTravelToStretch_m: p.stretch.locoTravelToStretchM === null ? null : r(p.stretch.locoTravelToStretchM, 2),

@@ -4,7 +4,7 @@
  * currently returns. These are view inputs, not expected planner output.
  */
 import { planStart } from "../../src/core/planner/index.js";
-import type { PlanResult, PlanStep } from "../../src/core/planner/types.js";
+import type { PlanResult, PlanStep, SlipGuidance } from "../../src/core/planner/types.js";
 import type { StartCase } from "../../src/core/train/types.js";
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
@@ -30,13 +30,14 @@ export function step(p: Partial<PlanStep> & Pick<PlanStep, "notch">): PlanStep {
     protectionActs: false,
     peakCouplerForceN: 0,
     fallbackNotch: Math.max(0, p.notch - 1),
-    why: `Why line for notch ${p.notch}.`,
+    // A why line as the core gives it: codes with figures (src/core/planner/lines.ts).
+    why: { line: { code: "stretch", notch: p.notch, effortN: p.tractiveEffortN ?? 0, resistanceN: 100_000, stretchTravelM: 8, peakN: 150_000, allowanceN: 708_000, fastOverMps: null }, protection: null, groups: null },
     ...p,
   };
 }
 
 export const FIXTURE_STEPS: PlanStep[] = [
-  step({ phase: "prepare", notch: 0, advanceWhen: { afterS: 60, movedM: 0, speedMps: 0, primary: "time" }, why: "Release the train brake while holding on the locomotive brake." }),
+  step({ phase: "prepare", notch: 0, advanceWhen: { afterS: 60, movedM: 0, speedMps: 0, primary: "time" }, why: { line: { code: "prepare-brakes-off", lengthM: 414, releaseS: 38, sand: false }, protection: null, groups: null } }),
   step({ phase: "stretch", notch: 1, advanceWhen: { afterS: 12, movedM: 8, speedMps: 0, primary: "moved" }, speedMps: 0.4, tractiveEffortN: 45_600, slipRisk: 0.0002, fallbackNotch: 1 }),
   step({ phase: "build", notch: 3, advanceWhen: { afterS: 6, movedM: 0, speedMps: 5 / 3.6, primary: "speed" }, speedMps: 5 / 3.6, tractiveEffortN: 144_400, slipRisk: 0.04, fallbackNotch: 2 }),
   // Over the working limit ÷ 1.2 of the demo's couplings.
@@ -44,10 +45,10 @@ export const FIXTURE_STEPS: PlanStep[] = [
   step({ phase: "accelerate", notch: 8, advanceWhen: { afterS: 40, movedM: 0, speedMps: 20 / 3.6, primary: "target" }, speedMps: 20 / 3.6, tractiveEffortN: 200_000, slipRisk: 0.08, fallbackNotch: 6 }),
 ];
 
-export const FIXTURE_GUIDANCE = {
-  driver: ["Hold the notch and sand.", "Drop one notch if it keeps slipping."],
-  protection: ["Sands the rails.", "Cuts excitation in proportion to the slip."],
-  stall: ["Secure the train.", "Start again from the prepare step."],
+export const FIXTURE_GUIDANCE: SlipGuidance = {
+  driver: ["hold-notch", "sand-now", "drop-fallback"],
+  protection: ["sands-itself", "cuts-power"],
+  stall: ["grade-secure", "grade-restart"],
 };
 
 export function fixturePlan(over: Partial<PlanResult> = {}): PlanResult {

@@ -144,9 +144,9 @@ describe("Cab steps", () => {
       // What you do comes before what the locomotive does.
       const titles = [...dialog.querySelectorAll(".slip-list h3")].map((h) => h.textContent);
       expect(titles).toEqual(["What you do, in order", "Why you hold: what the locomotive does", "If the train stalls"]);
-      expect(dialog.textContent).toContain("Hold the notch and sand.");
-      expect(dialog.textContent).toContain("Secure the train.");
-      expect(dialog.textContent).toContain("Sands the rails.");
+      expect(dialog.textContent).toContain("Hold the notch while the protection acts");
+      expect(dialog.textContent).toContain("secure the train before anything else");
+      expect(dialog.textContent).toContain("It sands the rails by itself");
       fireEvent.click(screen.getByRole("button", { name: /Close/ }));
       expect(screen.queryByRole("dialog")).toBeNull();
       if (i < FIXTURE_STEPS.length - 1) fireEvent.click(screen.getByRole("button", { name: /Next/ }));

@@ -72,13 +72,13 @@ function groupedPlan(): PlanResult {
   const steps: PlanStep[] = FIXTURE_STEPS.map((s, k) => ({
     ...s,
     groups: [
-      { name: "head", control: "with-head", notch: s.notch, effortShare: 0.6 },
+      { place: { at: "head", helper: false }, control: "with-head", notch: s.notch, effortShare: 0.6 },
       {
-        name: "rear helper",
+        place: { at: "rear", helper: true },
         control: "helper",
         notch: Math.max(0, s.notch - 1),
         effortShare: 0.4,
-        ...(k === 2 ? { coordination: "The head takes notch 3 first and calls the rear helper by radio; the rear helper takes notch 2 about 3 s later, and confirms." } : {}),
+        ...(k === 2 ? { coordination: { headNotch: 3, place: { at: "rear", helper: true }, act: "take", notch: 2, followS: 3, stretch: false } } : {}),
       },
     ],
   }));

@@ -3,6 +3,7 @@
  * the mid-train split point, the divided train, the budget and cancellation.
  */
 import { describe, expect, it } from "vitest";
+import { EN, groupName, noteEn } from "../tools/english.js";
 import {
   candidatePlacements,
   divideTrain,
@@ -135,9 +136,9 @@ describe("5000 t on 20 ‰ with 850 kN couplings", () => {
     if (o.added.some((a) => a.position === "rear")) {
       expect(o.peakCompressionN).toBeGreaterThan(50_000);
       expect(o.peakCompressionAt).toBeGreaterThan((2 * plan.couplerCompressionPeaksN.length) / 3);
-      expect(o.note).toMatch(/Shoving from the rear/);
-      expect(o.note).toMatch(/remote power/);
-      expect(o.effortSplit.map((g) => g.name)).toContain("rear");
+      expect(noteEn(o.note)).toMatch(/Shoving from the rear/);
+      expect(noteEn(o.note)).toMatch(/remote power/);
+      expect(o.effortSplit.map((g) => (g.place === "all" ? "all" : groupName(EN, g.place)))).toContain("rear");
     }
   });
 });

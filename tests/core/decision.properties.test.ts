@@ -161,7 +161,7 @@ describe("the verdict's arithmetic (cheap: 5,000 cases)", () => {
     });
     fc.assert(
       fc.property(fc.array(limitArb, { minLength: 1, maxLength: 7 }), (ls) => {
-        const checks = ls.map((l) => limitCheck("adhesion", "N", l.demand, l.allowance, l.band ? { ...l.band, what: "" } : null, ""));
+        const checks = ls.map((l) => limitCheck("adhesion", "N", l.demand, l.allowance, l.band ? { ...l.band, what: { code: "no-reserve" } } : null, { code: "gravity" }));
         for (const c of checks) {
           expect(c.level === "within").toBe(c.margin >= 1);
           if (c.level === "soft") expect(c.band!.allowance).toBeGreaterThanOrEqual(c.band!.demand);

@@ -3,6 +3,7 @@
  * (PRACTICE.md "Starting", "Wheel slip", "Slack and forces").
  */
 import { describe, expect, it } from "vitest";
+import { slipEn, whyEn } from "../tools/english.js";
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { planStart, type PlanResult } from "../../src/core/planner/index.js";
@@ -84,7 +85,7 @@ describe("every plan, re-run in the full dynamics, honours the coupler allowance
     // protection is expected to act.
     for (const s of p.steps) {
       if (s.slipRisk > p.planQuantile + 0.03) expect(s.protectionActs).toBe(true);
-      if (s.protectionActs) expect(s.why).toMatch(/slip protection/);
+      if (s.protectionActs) expect(whyEn(s.why)).toMatch(/slip protection/);
     }
   });
 });
@@ -119,7 +120,7 @@ describe("the stretch", () => {
     const prepare = p.steps[0]!;
     expect(prepare.phase).toBe("prepare");
     expect(prepare.notch).toBeGreaterThan(0);
-    expect(prepare.why).toMatch(/holds/);
+    expect(whyEn(prepare.why)).toMatch(/holds/);
     // Never rolls back more than gear and slack play.
     expect(Math.min(...p.series.locoTravelM)).toBeGreaterThan(-0.5);
   });
@@ -204,11 +205,11 @@ describe("steps a driver can follow", () => {
     for (const s of p.steps) {
       expect(["time", "moved", "speed", "target"]).toContain(s.advanceWhen.primary);
       expect(s.fallbackNotch).toBeLessThanOrEqual(s.notch);
-      expect(s.why).toMatch(/\d/);
-      expect(s.why.length).toBeLessThan(400);
+      expect(whyEn(s.why)).toMatch(/\d/);
+      expect(whyEn(s.why).length).toBeLessThan(400);
     }
     expect(p.steps[p.steps.length - 1]!.advanceWhen.primary).toBe("target");
     expect(p.slipGuidance.driver.length).toBeGreaterThan(2);
-    expect(p.slipGuidance.stall.join(" ")).toMatch(/secure|brake/i);
+    expect(slipEn(p.slipGuidance).stall.join(" ")).toMatch(/secure|brake/i);
   });
 });

@@ -5,6 +5,7 @@
  * PHYSICS.md §5) or from the issue's own cases; none is copied from the program's output.
  */
 import { describe, expect, it } from "vitest";
+import { EN, groupName, limitWhatEn } from "../tools/english.js";
 import {
   DEFAULT_SETTINGS,
   GRAVITY_MPS2,
@@ -87,7 +88,7 @@ describe("5,200 t on 20 ‰: units at the rear or mid-train with their own notch
       expect(p.verdict).toBe("starts");
       expect(p.peakCouplerForceN).toBeLessThanOrEqual(allowance850);
       // Each step names both groups' notches, head first.
-      for (const s of p.steps) expect(s.groups!.map((g) => g.name)).toEqual(["head", typeof rear.position === "string" ? ("control" in rear ? "rear helper" : "rear") : "after wagon 26"]);
+      for (const s of p.steps) expect(s.groups!.map((g) => groupName(EN, g.place))).toEqual(["head", typeof rear.position === "string" ? ("control" in rear ? "rear helper" : "rear") : "after wagon 26"]);
       const res = replay(c, p);
       expect(res.peakTensionN).toBeLessThanOrEqual(allowance850 * 1.02);
       if ("control" in rear) expect(p.steps.some((s) => s.groups!.some((g) => g.coordination !== undefined))).toBe(true);
@@ -191,7 +192,7 @@ describe("wheel climb under buff", () => {
     const wc = p.limits.find((l) => l.name === "wheel-climb")!;
     expect(wc.level).not.toBe("within");
     expect(p.verdict).not.toBe("starts");
-    expect(wc.what).toMatch(/L\/V \d\.\d\d at wagon \d+ \(24 t\)/);
+    expect(limitWhatEn(wc.what)).toMatch(/L\/V \d\.\d\d at wagon \d+ \(24 t\)/);
     // The figure from the buff it names: F × 14 m / (2 × 150 m) ÷ (24 t × g / 8).
     const w = p.wheelClimb!;
     expect(w.ratio).toBeCloseTo(((w.forceN * 14) / 300) / ((24_000 * GRAVITY_MPS2) / 8), 6);

@@ -7,7 +7,12 @@
  * never tell the driver to hold and to drop in the same breath.
  */
 import { describe, expect, it } from "vitest";
-import { slipGuidance, slipHeadline } from "../../src/core/planner/slip.js";
+import { slipGuidance as slipCodes, slipHeadline as headlineCodes } from "../../src/core/planner/slip.js";
+import { headlineEn, slipEn } from "../tools/english.js";
+
+// The card and headline come from the core as codes; the checks read their English words (src/i18n/en/guidance.ts).
+const slipGuidance = (x: Parameters<typeof slipCodes>[0]) => slipEn(slipCodes(x));
+const slipHeadline = (notch: number, fallback: number, sanders?: boolean) => headlineEn(headlineCodes(notch, fallback, sanders));
 
 const base = { sand: false, sanders: true, risingGrade: true, pointsAhead: true };
 

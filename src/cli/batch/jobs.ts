@@ -3,6 +3,8 @@
  * verdict and the cheapest assistance) and finding the largest startable mass of one case. Jobs and results
  * are plain data (they cross a thread boundary by structured clone); results are already in output units.
  */
+import { adviceText } from "../../i18n/renderLines.js";
+import { ENGLISH, ENGLISH_SI } from "../../profiles/lineReport.js";
 import { searchAssistance } from "../../core/dispatch/assistance.js";
 import { goesAt, planStart, startableMasses, startsAt } from "../../core/planner/index.js";
 import { withEvaluationMemo } from "../../core/planner/evaluationMemo.js";
@@ -141,7 +143,7 @@ function checkJob(job: Extract<Job, { kind: "check" }>): CheckOutcome {
     assistance,
     divide,
     searchCapped,
-    advice: p.advice,
+    advice: p.advice.map((a) => adviceText(ENGLISH, ENGLISH_SI, a)),
     ...(masses ? { masses } : {}),
     elapsedMs: checkMs,
   };

@@ -5,6 +5,9 @@ import { wrap } from "./wrap.js";
 import { cli } from "../../i18n/en/cli.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
 import { cliTr, cliWords } from "../lang.js";
+import { lineOf } from "../../profiles/lineReport.js";
+import { assistanceNoteText, siQuantities } from "../../i18n/renderLines.js";
+import type { AssistanceNote } from "../../core/dispatch/assistance.js";
 
 /** The verdict as the printout's headline shows it: "STARTS", "NEEDS ASSISTANCE". */
 export function verdictWord(v: PlanReport["verdict"]): string {
@@ -70,7 +73,8 @@ export function renderAssistance(p: PlanReport): string[] {
         .join("\n"),
     );
     p.assistance.forEach((a, i) => {
-      if (a.note) lines.push(...wrap(`  ${i + 1}. ${a.note}`, 100, "     "));
+      const note = a.noteCode ? assistanceNoteText(cliTr(), siQuantities(cliTr()), lineOf<AssistanceNote>(a.noteCode)) : a.note;
+      if (note) lines.push(...wrap(`  ${i + 1}. ${note}`, 100, "     "));
     });
   } else {
     lines.push(s ? t("noOptionOf", { profile: s.profile }) : t("noOption"));

@@ -9,12 +9,20 @@ import { renderAssistance, renderConditions, verdictWord } from "./assistance.js
 import { wrap } from "./wrap.js";
 import { describeOverrides } from "../caseOverrides.js";
 import { printable } from "../../profiles/text.js";
+import { lineOf } from "../../profiles/lineReport.js";
+import { adviceText, groupName, helperCallText, limitWhatText, siQuantities, slipGuidanceText, stepWhyText, vehicleText } from "../../i18n/renderLines.js";
+import { reasons } from "../../i18n/en/reasons.js";
+import type { AdviceLine, GroupPlace, HelperCall, LimitWhat, StepWhy, VehicleRef } from "../../core/planner/lines.js";
 
 export { wrap };
 
 export function renderPlan(p: PlanReport): string {
   const t = cliTr().ns(cli);
   const w = cliWords();
+  const rs = cliTr().ns(reasons);
+  // The planner's lines in this run's language, from the codes the report carries beside its English text.
+  const q = siQuantities(cliTr());
+  const group = (g: { name: string; place?: GroupPlace }) => (g.place ? groupName(cliTr(), g.place) : g.name);
   const lines: string[] = [];
   if (p.case.label) lines.push(printable(p.case.label));
   if (p.case.overrides && Object.keys(p.case.overrides).length > 0) lines.push(t("changedFromCase", { what: describeOverrides(p.case.overrides) }));
@@ -28,14 +36,14 @@ export function renderPlan(p: PlanReport): string {
   const atCeiling = p.massSearchCeiling_t !== undefined && p.maxStartableMass_t >= p.massSearchCeiling_t;
   const largest = atCeiling ? t("largestMassNoLimit", { mass: num(p.maxStartableMass_t) }) : p.maxStartableMass_t > 0 ? t("largestMassValue", { mass: num(p.maxStartableMass_t) }) : t("largestMassNone");
   const marginalTo = p.largestMarginalMass_t !== undefined && p.largestMarginalMass_t > p.maxStartableMass_t ? t("largestMarginal", { mass: num(p.largestMarginalMass_t) }) : "";
-  lines.push(t("largestMass", { mass: largest }) + marginalTo + (p.massSearchScales ? ` (scaling ${p.massSearchScales})` : ""));
+  lines.push(t("largestMass", { mass: largest }) + marginalTo + (p.massSearchScales ? rs("scalingLoads") : ""));
   if (p.limits && p.limits.length > 0) {
     lines.push("");
     lines.push(t("limitsTitle"));
     lines.push(
       textTable(
         [t("colLimit"), t("colMargin"), "", t("colWhat")],
-        p.limits.map((l) => [w.limit(l.name), num(l.margin, 2), l.level === "within" ? t("levelOk") : l.level === "soft" ? t("levelMarginal") : t("levelOver"), l.what]),
+        p.limits.map((l) => [w.limit(l.name), num(l.margin, 2), l.level === "within" ? t("levelOk") : l.level === "soft" ? t("levelMarginal") : t("levelOver"), l.whatCode ? limitWhatText(cliTr(), q, lineOf<LimitWhat>(l.whatCode)) : l.what]),
       )
         .split("\n")
         .map((x) => `  ${x}`)
@@ -47,7 +55,8 @@ export function renderPlan(p: PlanReport): string {
   }
   if (p.wheelClimb) {
     const w = p.wheelClimb;
-    lines.push(`Wheel climb: L/V ${num(w.ratio, 2)} at ${w.vehicle} under ${num(w.buff_kN)} kN of buff on a ${num(w.curveRadius_m)} m curve (allowed ${num(w.allowance, 2)}: Nadal's limit ${num(w.nadalLimit, 2)} ÷ 1.2)`);
+    const vehicle = w.vehicleCode ? vehicleText(cliTr(), q, lineOf<VehicleRef>(w.vehicleCode)) : w.vehicle;
+    lines.push(rs("wheelClimbLine", { ratio: num(w.ratio, 2), vehicle, force: `${num(w.buff_kN)} kN`, radius: `${num(w.curveRadius_m)} m`, allowance: num(w.allowance, 2), nadal: num(w.nadalLimit, 2) }));
   }
   if (p.steps.length > 0) {
     lines.push(t("timeToTarget", { time: p.timeToTarget_s === null ? t("targetNotReached") : t("targetAfter", { time: num(p.timeToTarget_s) }), peak: num(p.peakCouplerForce_kN) }));
@@ -60,7 +69,7 @@ export function renderPlan(p: PlanReport): string {
         p.steps.map((s, i) => [
           String(i + 1),
           w.phaseInline(s.phase),
-          s.groups ? s.groups.map((g) => `${g.name} ${g.notch}`).join(" · ") : String(s.notch),
+          s.groups ? s.groups.map((g) => `${group(g)} ${g.notch}`).join(" · ") : String(s.notch),
           advance(s.advanceWhen),
           num(s.speed_kmh, 1),
           num(s.tractiveEffort_kN),
@@ -76,8 +85,8 @@ export function renderPlan(p: PlanReport): string {
     lines.push("");
     lines.push(t("why"));
     p.steps.forEach((s, i) => {
-      lines.push(...wrap(`${i + 1}. ${s.why}`, 100, "   "));
-      for (const g of s.groups ?? []) if (g.coordination) lines.push(...wrap(`   ${g.coordination}`, 100, "   "));
+      lines.push(...wrap(`${i + 1}. ${s.whyCode ? stepWhyText(cliTr(), q, lineOf<StepWhy>(s.whyCode)) : s.why}`, 100, "   "));
+      for (const g of s.groups ?? []) if (g.coordination) lines.push(...wrap(`   ${g.coordinationCode ? helperCallText(cliTr(), lineOf<HelperCall>(g.coordinationCode)) : g.coordination}`, 100, "   "));
     });
   } else if (p.verdict === "needs-assistance") {
     lines.push("");
@@ -85,18 +94,20 @@ export function renderPlan(p: PlanReport): string {
   }
   if (p.advice && p.advice.length > 0) {
     lines.push("");
-    for (const a of p.advice) lines.push(...wrap(a, 100, "  "));
+    const advice = p.adviceCodes ? p.adviceCodes.map((a) => adviceText(cliTr(), q, lineOf<AdviceLine>(a))) : p.advice;
+    for (const a of advice) lines.push(...wrap(a, 100, "  "));
   }
   if (p.ifWheelsSlip && p.steps.some((s) => s.notch > 0)) {
     lines.push("");
     lines.push(t("slipTitle"));
     lines.push(...wrap(t("slipHold"), 100, "  "));
     lines.push(t("slipDriver"));
-    p.ifWheelsSlip.driver.forEach((t, i) => lines.push(...wrap(`  ${i + 1}. ${t}`, 100, "     ")));
+    const card = p.ifWheelsSlipCodes ? slipGuidanceText(cliTr(), p.ifWheelsSlipCodes) : p.ifWheelsSlip;
+    card.driver.forEach((t, i) => lines.push(...wrap(`  ${i + 1}. ${t}`, 100, "     ")));
     lines.push(t("slipProtection"));
-    for (const t of p.ifWheelsSlip.protection) lines.push(...wrap(`  - ${t}`, 100, "    "));
+    for (const t of card.protection) lines.push(...wrap(`  - ${t}`, 100, "    "));
     lines.push(t("slipStall"));
-    for (const t of p.ifWheelsSlip.stall) lines.push(...wrap(`  - ${t}`, 100, "    "));
+    for (const t of card.stall) lines.push(...wrap(`  - ${t}`, 100, "    "));
   }
   lines.push(...renderAssistance(p));
   lines.push(...renderConditions(p.byCondition ?? []));

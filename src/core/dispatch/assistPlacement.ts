@@ -93,8 +93,3 @@ export function proportionalSplitWagon(c: StartCase, spec: LocomotiveSpec, count
   }
   return best;
 }
-
-/** A readable place: "head", "rear" or "after wagon N". */
-export function positionWords(p: LocoPosition): string {
-  return typeof p === "string" ? p : `after wagon ${p.afterWagon}`;
-}

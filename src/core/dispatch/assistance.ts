@@ -8,7 +8,7 @@
  * assistance, the train is divided into a practical number of parts: the largest first part that starts
  * (common practice: "doubling", PRACTICE.md, Alaska Railroad manual p. 64-18 [P]).
  */
-import { middleWagon, positionWords, proportionalSplitWagon, withAddedUnits, leadSpec, type AddedUnits } from "./assistPlacement.js";
+import { middleWagon, proportionalSplitWagon, withAddedUnits, leadSpec, type AddedUnits } from "./assistPlacement.js";
 import { divideTrain, type DividedTrain } from "./divideTrain.js";
 import { judge, planStart, quasiStaticLimits, type PlanResult } from "../planner/index.js";
 import { staticCheck } from "../planner/staticCheck.js";
@@ -17,6 +17,7 @@ import type { LimitCheck } from "../planner/outcome.js";
 import type { LocomotiveSpec } from "../physics/types.js";
 import type { Reason, Verdict } from "../planner/outcome.js";
 import type { StartCase, UnitControl } from "../train/types.js";
+import type { GroupPlace } from "../planner/lines.js";
 
 /** One way of adding units, and what the planner says of it. */
 export interface AssistanceOption {
@@ -39,13 +40,13 @@ export interface AssistanceOption {
   headCompressionN: number;
   /** Seconds from taking power to the target; null when not reached. */
   timeToTargetS: number | null;
-  /** Plain words on what to watch with this option (e.g. shoving from the rear). */
-  note: string;
+  /** What to watch with this option (e.g. shoving from the rear), as a code with its figures (words in src/i18n). */
+  note: AssistanceNote;
   /**
    * How the effort is shared among the control groups in the planned start's running step (head first; one
    * entry when every unit works in the head's notch).
    */
-  effortSplit: Array<{ name: string; notch: number; share: number }>;
+  effortSplit: Array<{ place: GroupPlace | "all"; notch: number; share: number }>;
   /** The full plan of the option (absent for options judged only by a verdict run). */
   plan?: PlanResult;
 }
@@ -211,13 +212,6 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
   return { ...result, plannerRuns: runs, complete };
 }
 
-/** How added units are driven, in words following "The unit added at the rear works …". */
-const CONTROL_WORDS: Record<UnitControl, string> = {
-  "with-head": "in step with the head (same notch)",
-  remote: "as remote power (own notch, set from the head cab)",
-  helper: "as a helper (own driver; each notch change called by radio from the head)",
-};
-
 /** A verdict and its reasons from the threshold's limits of a start judged only as far as "starts". */
 function ruledOut(limits: readonly LimitCheck[]): { verdict: Verdict; reasons: Reason[] } {
   const failing = limits.filter((l) => l.level !== "within");
@@ -265,34 +259,38 @@ function controlOfAdded(c: StartCase, added: readonly AddedUnits[]): UnitControl
 function effortSplitOf(p: PlanResult): AssistanceOption["effortSplit"] {
   const last = [...p.steps].reverse().find((s) => s.notch > 0 || (s.groups ?? []).some((g) => g.notch > 0));
   if (!last) return [];
-  if (!last.groups) return [{ name: "all units", notch: last.notch, share: 1 }];
-  return last.groups.map((g) => ({ name: g.name, notch: g.notch, share: g.effortShare }));
+  if (!last.groups) return [{ place: "all", notch: last.notch, share: 1 }];
+  return last.groups.map((g) => ({ place: g.place, notch: g.notch, share: g.effortShare }));
 }
+
+/**
+ * What to watch with an option: all power at the head (the head couplings carry the whole pull), or units
+ * pushing — how they are driven, the peak compression and where, and when shoving from the rear, lateral
+ * forces on curves with light wagons near the head.
+ */
+export type AssistanceNote =
+  | { code: "all-at-head" }
+  | {
+      code: "pushing";
+      added: AddedUnits[];
+      control: UnitControl;
+      /** Third of the train where the peak compression is (null without couplings). */
+      where: "head" | "mid" | "rear" | null;
+      peakN: number;
+      /** The coupling of the peak, from 1, of `couplings`. */
+      coupling: number;
+      couplings: number;
+      rear: boolean;
+    };
 
 /**
  * What to watch: pushing units put the couplings ahead of them in compression; shoving from the rear risks
  * lateral forces at the head of the train, especially with light wagons there [P: Alaska Railroad, Air Brake
  * and Train Handling Manual, 1996, §64.8].
  */
-function noteOf(added: readonly AddedUnits[], couplings: number, at: number, peakN: number, control: UnitControl): string {
+function noteOf(added: readonly AddedUnits[], couplings: number, at: number, peakN: number, control: UnitControl): AssistanceNote {
   const pushing = added.some((a) => a.position !== "head");
-  if (!pushing) return "All power at the head: the head couplings carry the whole train's pull.";
-  const where = couplings > 0 ? (at < couplings / 3 ? "near the head" : at < (2 * couplings) / 3 ? "mid-train" : "near the rear") : "";
-  const kN = Math.round(peakN / 1000);
-  const place = (a: AddedUnits) => (typeof a.position === "string" ? `at the ${a.position}` : positionWords(a.position));
-  const units = added.reduce((s, a) => s + a.count, 0);
-  const who =
-    added.length > 1
-      ? `The units added (${added.map((a) => `${a.count} ${place(a)}`).join(", ")}) work`
-      : units === 1
-        ? `The unit added ${place(added[0]!)} works`
-        : `The ${units} units added ${place(added[0]!)} work`;
-  const rear = added.some((a) => a.position === "rear");
-  return [
-    `${who} ${CONTROL_WORDS[control]}.`,
-    `Peak compression ${kN} kN ${where} (coupling ${at + 1} of ${couplings}).`,
-    rear ? "Shoving from the rear raises compression ahead of the pushing units: watch lateral forces on curves, especially with light wagons near the head." : "",
-  ]
-    .filter((s) => s.length > 0)
-    .join(" ");
+  if (!pushing) return { code: "all-at-head" };
+  const where = couplings > 0 ? (at < couplings / 3 ? "head" : at < (2 * couplings) / 3 ? "mid" : "rear") : null;
+  return { code: "pushing", added: added.map((a) => ({ ...a })), control, where, peakN, coupling: at + 1, couplings, rear: added.some((a) => a.position === "rear") };
 }

@@ -39,6 +39,7 @@ import { ACCELERATE_MAX_S, type SearchOptions, type SearchResult } from "./searc
 import { memoSearchPlan } from "./evaluationMemo.js";
 import { POWER_RESERVE } from "./staticCheck.js";
 import { WHEEL_CLIMB_ALLOWANCE, WHEEL_CLIMB_MARGIN, nadalLimit } from "../physics/wheelClimb.js";
+import type { BandWhat, LimitWhat, VehicleRef } from "./limitLines.js";
 import { LIMIT_REASON, type LimitCheck, type LimitLevel, type LimitName, type Reason, type StartKind, type Verdict } from "./outcome.js";
 
 export { LIMIT_REASON, LIMIT_WORDS, type LimitCheck, type LimitLevel, type LimitName } from "./outcome.js";
@@ -47,7 +48,7 @@ import type { StartCase } from "../train/types.js";
 const ratio = (allowance: number, demand: number): number => (demand <= 0 ? MAX_MARGIN : Math.min(MAX_MARGIN, allowance / demand));
 
 /** A limit check: margin and level follow from demand, allowance and band, nothing else. */
-export function limitCheck(name: LimitName, unit: LimitCheck["unit"], demand: number, allowance: number, band: LimitCheck["band"], what: string): LimitCheck {
+export function limitCheck(name: LimitName, unit: LimitCheck["unit"], demand: number, allowance: number, band: LimitCheck["band"], what: LimitWhat): LimitCheck {
   const margin = ratio(allowance, demand);
   const level: LimitLevel = margin >= 1 ? "within" : band !== null && band.allowance >= band.demand ? "soft" : "over";
   return { name, reason: LIMIT_REASON[name], unit, demand, allowance, margin, level, band, what };
@@ -75,9 +76,6 @@ export interface QuasiStatic {
   tractionWithin: boolean;
 }
 
-const kN = (n: number): string => `${Math.round(n / 1000)} kN`;
-const kmh = (mps: number): string => `${(mps * 3.6).toFixed(1)} km/h`;
-
 /** The quasi-static limits, the rail taken at `ctx.quantile` and its band at `boundQ`. */
 export function quasiStaticLimits(ctx: PlannerContext, boundQ: number): QuasiStatic {
   const m = ctx.model;
@@ -86,19 +84,20 @@ export function quasiStaticLimits(ctx: PlannerContext, boundQ: number): QuasiSta
   const adhesion = pathMargin(path, (v) => railEffortN(m, m.mu0, v));
   const adhesionAtBound = pathMargin(path, (v) => railEffortN(m, muBound, v));
   const power = pathMargin(path, (v) => motorEffortN(m, v));
-  const gravity = "no effort needed: gravity alone takes the train to its target";
-  const where = (p: PathMargin, what: string) => (p.needed ? `${what}: ${kN(p.availableN)} against ${kN(p.needN)} needed at ${kmh(p.speedMps)} after ${Math.round(p.travelM)} m` : gravity);
+  // No effort needed where gravity alone takes the train to its target; else where along the path the margin is least.
+  const gravity: LimitWhat = { code: "gravity" };
+  const at = (p: PathMargin) => ({ availableN: p.availableN, needN: p.needN, speedMps: p.speedMps, travelM: p.travelM });
+  const rail: BandWhat = { code: "rail-quantile", quantile: boundQ };
   const limits: LimitCheck[] = [
-    limitCheck("adhesion", "N", adhesion.needN, adhesion.availableN, { demand: adhesionAtBound.needN, allowance: adhesionAtBound.availableN, what: `the rail at its ${pct(boundQ)} quantile` }, where(adhesion, `rail at its ${pct(ctx.quantile)} quantile`)),
-    limitCheck("power", "N", power.needN, power.availableN / POWER_RESERVE, { demand: power.needN, allowance: power.availableN, what: "no reserve" }, power.needed ? `${where(power, "full notch")} (10 % kept in hand)` : gravity),
+    limitCheck("adhesion", "N", adhesion.needN, adhesion.availableN, { demand: adhesionAtBound.needN, allowance: adhesionAtBound.availableN, what: rail }, adhesion.needed ? { code: "adhesion-path", quantile: ctx.quantile, ...at(adhesion) } : gravity),
+    // Power keeps 10 % in hand.
+    limitCheck("power", "N", power.needN, power.availableN / POWER_RESERVE, { demand: power.needN, allowance: power.availableN, what: { code: "no-reserve" } }, power.needed ? { code: "power-path", ...at(power) } : gravity),
   ];
   const hold = brakeHolding(ctx, muBound);
   if (hold) limits.push(hold);
   const tractionWithin = limits[0]!.level === "within" && limits[1]!.level === "within";
   return { limits, path, adhesion, adhesionAtBound, power, tractionWithin };
 }
-
-const pct = (q: number): string => `${Math.round(q * 100)} %`;
 
 /**
  * What holds the train while its brake releases. Rising grade: the locomotive brake and the strongest notch
@@ -116,8 +115,8 @@ function brakeHolding(ctx: PlannerContext, muBound: Float64Array): LimitCheck | 
       "N",
       ctx.rollBackPullN,
       atQ / HOLD_RESERVE,
-      { demand: ctx.rollBackPullN, allowance: atBound, what: "no reserve, the rail at the marginal bound" },
-      `rising grade: locomotive brake ${kN(ctx.locoBrakeN)} and power ${kN(atQ - ctx.locoBrakeN)} hold against ${kN(ctx.rollBackPullN)} pulling back (10 % kept in hand)`,
+      { demand: ctx.rollBackPullN, allowance: atBound, what: { code: "no-reserve-bound" } },
+      { code: "hold-rising", locoBrakeN: ctx.locoBrakeN, powerN: atQ - ctx.locoBrakeN, pullN: ctx.rollBackPullN },
     );
   }
   if (ctx.runAwayPullN > 0) {
@@ -130,8 +129,8 @@ function brakeHolding(ctx: PlannerContext, muBound: Float64Array): LimitCheck | 
       "N",
       pull,
       holds / HOLD_RESERVE,
-      { demand: pull, allowance: holds, what: "no reserve" },
-      `falling grade: train brake ${kN(ctx.trainBrakeN)} and locomotive brake ${kN(ctx.locoBrakeN)} hold against ${kN(pull)} pulling forward (10 % kept in hand)`,
+      { demand: pull, allowance: holds, what: { code: "no-reserve" } },
+      { code: "hold-falling", trainBrakeN: ctx.trainBrakeN, locoBrakeN: ctx.locoBrakeN, pullN: pull },
     );
   }
   return null;
@@ -147,10 +146,10 @@ export function dynamicLimits(ctx: PlannerContext, r: SearchResult, withTarget: 
   const compression = r.branch.steps.reduce((x, s) => Math.max(x, s.peakCompressionN), 0);
   const limit = c.train.couplerLimitN;
   const factor = c.settings.couplerSafetyFactor;
-  out.push(limitCheck("coupler-tension", "N", tension, ctx.couplerAllowanceN, { demand: tension, allowance: limit, what: "the working limit" }, `peak pull ${kN(tension)} against ${kN(limit)} ÷ ${factor}`));
+  out.push(limitCheck("coupler-tension", "N", tension, ctx.couplerAllowanceN, { demand: tension, allowance: limit, what: { code: "working-limit" } }, { code: "coupler-tension", peakN: tension, limitN: limit, factor }));
   // The working limit in buff: the train's own, else the same as in draft.
   const buffLimit = c.train.couplerBuffLimitN ?? limit;
-  out.push(limitCheck("coupler-compression", "N", compression, ctx.buffAllowanceN, { demand: compression, allowance: buffLimit, what: "the working limit" }, `peak push ${kN(compression)} against ${kN(buffLimit)} ÷ ${factor}`));
+  out.push(limitCheck("coupler-compression", "N", compression, ctx.buffAllowanceN, { demand: compression, allowance: buffLimit, what: { code: "working-limit" } }, { code: "coupler-compression", peakN: compression, limitN: buffLimit, factor }));
   if (ctx.wheelClimb.active) out.push(wheelClimbLimit(ctx, r));
   const stretchM = r.branch.run.locoTravelToStretchM;
   if (stretchM !== null) {
@@ -158,7 +157,7 @@ export function dynamicLimits(ctx: PlannerContext, r: SearchResult, withTarget: 
     const built = r.startKind === "power" ? (r.buildEndTravelM ?? stretchM) : stretchM;
     const demand = Math.max(built, c.target.kind === "distance" ? c.target.distanceM : 0);
     out.push(
-      limitCheck("distance", "m", demand, clear, { demand: stretchM, allowance: clear, what: "the stretch within the clear distance" }, `${Math.round(demand)} m of travel to ${r.startKind === "power" ? "the running notch" : "the whole train moving"}${c.target.kind === "distance" ? " or the target" : ""}, ${Math.round(clear)} m clear ahead`),
+      limitCheck("distance", "m", demand, clear, { demand: stretchM, allowance: clear, what: { code: "stretch-within-clear" } }, { code: "distance", travelM: demand, power: r.startKind === "power", orTarget: c.target.kind === "distance", clearM: clear }),
     );
   }
   if (withTarget) {
@@ -167,7 +166,7 @@ export function dynamicLimits(ctx: PlannerContext, r: SearchResult, withTarget: 
     const progress = t.kind === "speed" ? r.bestSpeedMps / t.speedMps : r.bestTailTravelM / t.distanceM;
     // Not reached: the margin is the share of the target reached (below 1); reached: time cap ÷ time taken.
     const demand = reached ? Math.max(1e-6, r.targetReachedS! - r.powerS) : ACCELERATE_MAX_S / Math.max(1e-6, Math.min(0.999, progress));
-    out.push(limitCheck("time-to-target", "s", demand, ACCELERATE_MAX_S, null, reached ? `target reached ${Math.round(demand)} s after taking power` : `target not reached: ${Math.round(progress * 100)} % of it at best`));
+    out.push(limitCheck("time-to-target", "s", demand, ACCELERATE_MAX_S, null, reached ? { code: "target-reached", afterS: demand } : { code: "target-not-reached", share: progress }));
   }
   return out;
 }
@@ -179,19 +178,19 @@ export function dynamicLimits(ctx: PlannerContext, r: SearchResult, withTarget: 
 function wheelClimbLimit(ctx: PlannerContext, r: SearchResult): LimitCheck {
   const peak = r.branch.wheelClimbPeak();
   const nadal = nadalLimit();
-  const what = peak
-    ? `L/V ${peak.ratio.toFixed(2)} at ${vehicleWords(ctx, peak.vehicle)} under ${kN(peak.forceN)} of buff on a ${Math.round(peak.radiusM)} m curve, against ${WHEEL_CLIMB_ALLOWANCE.toFixed(2)} (Nadal's limit ${nadal.toFixed(2)} ÷ ${WHEEL_CLIMB_MARGIN})`
-    : "no coupling in buff on a curve";
+  const what: LimitWhat = peak
+    ? { code: "wheel-climb", ratio: peak.ratio, vehicle: vehicleRef(ctx, peak.vehicle), forceN: peak.forceN, radiusM: peak.radiusM, allowance: WHEEL_CLIMB_ALLOWANCE, nadal, nadalMargin: WHEEL_CLIMB_MARGIN }
+    : { code: "wheel-climb-none" };
   const demand = peak?.ratio ?? 0;
-  return limitCheck("wheel-climb", "ratio", demand, WHEEL_CLIMB_ALLOWANCE, { demand, allowance: nadal, what: "Nadal's limit itself" }, what);
+  return limitCheck("wheel-climb", "ratio", demand, WHEEL_CLIMB_ALLOWANCE, { demand, allowance: nadal, what: { code: "nadal-itself" } }, what);
 }
 
-/** A vehicle in words: "wagon 12 (24 t)" or "unit 3 (locomotive)". */
-export function vehicleWords(ctx: PlannerContext, index: number): string {
+/** A vehicle of the consist by its index: a wagon with its number and mass, or a locomotive unit by its number. */
+export function vehicleRef(ctx: PlannerContext, index: number): VehicleRef {
   const v = ctx.consist.vehicles[index];
-  if (!v) return `vehicle ${index + 1}`;
-  if (v.kind === "wagon") return `wagon ${v.wagonNumber ?? index + 1} (${Math.round(v.massKg / 1000)} t)`;
-  return `unit ${ctx.consist.locoIndices.indexOf(index) + 1} (locomotive)`;
+  if (!v) return { kind: "vehicle", number: index + 1 };
+  if (v.kind === "wagon") return { kind: "wagon", number: v.wagonNumber ?? index + 1, massKg: v.massKg };
+  return { kind: "unit", number: ctx.consist.locoIndices.indexOf(index) + 1 };
 }
 
 // ---------------------------------------------------------------------------------------------- the decision

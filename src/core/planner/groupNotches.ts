@@ -18,6 +18,7 @@
  * of the train nearest it, and the head coupling carries about half the pull it would with all power at the
  * head.
  */
+import type { GroupPlace } from "./lines.js";
 import { adhesionSpeedFactor } from "../physics/adhesion.js";
 import { notchTargetN } from "../dynamics/runner.js";
 import type { PlannerContext } from "./contextShape.js";
@@ -208,13 +209,8 @@ export function standingNotches(ctx: PlannerContext, level: number): GroupNotche
   return ladder[Math.max(0, Math.min(ladder.length - 1, level))]!;
 }
 
-/** The control groups' notches in words, head first: "head 5 · rear 3". */
-export function groupNotchWords(ctx: PlannerContext, notches: ArrayLike<number>): string {
-  return ctx.consist.controlGroups.map((g, k) => `${groupName(g.position, g.control, k)} ${notches[k] ?? 0}`).join(" · ");
-}
-
-/** A control group's name: "head", "rear", "mid-train (after wagon 30)", with "helper" for a helper. */
-export function groupName(position: PlannerContext["consist"]["controlGroups"][number]["position"], control: string, k: number): string {
-  const place = k === 0 ? "head" : typeof position === "string" ? position : `after wagon ${position.afterWagon}`;
-  return control === "helper" ? `${place} helper` : place;
+/** A control group's place: the head (the first group), the rear or after a wagon, and whether it is a helper. */
+export function groupPlace(position: PlannerContext["consist"]["controlGroups"][number]["position"], control: string, k: number): GroupPlace {
+  const at: GroupPlace["at"] = k === 0 ? "head" : typeof position === "string" ? position : { afterWagon: position.afterWagon };
+  return { at, helper: control === "helper" };
 }

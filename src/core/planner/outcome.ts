@@ -1,4 +1,5 @@
 /** The words of an answer: whether a train starts, which limits decide it, and how it is started. */
+import type { BandWhat, LimitWhat } from "./limitLines.js";
 
 export type Verdict = "starts" | "marginal" | "needs-assistance";
 /** The reason a limit reports under: adhesion, power (and time to target), coupler, distance, brake (holding). */
@@ -47,7 +48,7 @@ export interface LimitCheck {
   /** "within" ⇔ margin ≥ 1; "soft" when exceeded but inside its band; "over" otherwise. */
   level: LimitLevel;
   /** The band within which exceeding the allowance is marginal: soft ⇔ band.allowance ≥ band.demand. */
-  band: { demand: number; allowance: number; what: string } | null;
-  /** Where or what, in a few words. */
-  what: string;
+  band: { demand: number; allowance: number; what: BandWhat } | null;
+  /** Where or what, as a code with its figures (lines.ts). */
+  what: LimitWhat;
 }

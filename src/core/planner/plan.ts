@@ -16,9 +16,10 @@ import { HELPER_FOLLOW_S, brakeSchedule, type SearchResult } from "./search.js";
 import type { StepRecord } from "./branch.js";
 import { planSteps } from "./steps.js";
 import type { PlanOptions, PlanResult, PlanSeries, PlanStep } from "./types.js";
-import { goesAt, judge, quasiStaticLimits, startsAt, vehicleWords, type Decision } from "./decision.js";
+import { goesAt, judge, quasiStaticLimits, startsAt, vehicleRef, type Decision } from "./decision.js";
 import { WHEEL_CLIMB_ALLOWANCE, nadalLimit } from "../physics/wheelClimb.js";
-import { LIMIT_WORDS, type LimitCheck } from "./outcome.js";
+import type { LimitCheck } from "./outcome.js";
+import type { AdviceLine, ChangeLine } from "./lines.js";
 import { marginalBound, plannerContext } from "./context.js";
 import { MAX_MARGIN } from "./need.js";
 import type { Reason } from "./outcome.js";
@@ -97,7 +98,7 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
 function wheelClimbOf(ctx: PlannerContext, r: SearchResult): PlanResult["wheelClimb"] {
   const peak = ctx.wheelClimb.active ? r.branch.wheelClimbPeak() : null;
   if (!peak) return null;
-  return { ratio: peak.ratio, allowance: WHEEL_CLIMB_ALLOWANCE, nadalLimit: nadalLimit(), vehicle: vehicleWords(ctx, peak.vehicle), forceN: peak.forceN, radiusM: peak.radiusM };
+  return { ratio: peak.ratio, allowance: WHEEL_CLIMB_ALLOWANCE, nadalLimit: nadalLimit(), vehicle: vehicleRef(ctx, peak.vehicle), forceN: peak.forceN, radiusM: peak.radiusM };
 }
 
 /** The smallest margin of each reason, 99 when none of its limits is in question. */
@@ -107,28 +108,23 @@ export function reasonMargins(limits: readonly LimitCheck[]): PlanResult["margin
   return m;
 }
 
-const t = (kg: number): string => `${Math.floor(kg / 1000)} t`;
-const pct = (q: number): string => `${Math.round(q * 100)} %`;
-
 /**
  * Why the verdict is what it is, and — unless it starts — what would change it: sand, another rail, less
  * load, assistance. Sand and the rail are judged on the quasi-static limits (no plan needed for them).
  */
-function advice(c: StartCase, d: Decision, masses: { startsKg: number; marginalKg: number }): string[] {
+function advice(c: StartCase, d: Decision, masses: { startsKg: number; marginalKg: number }): AdviceLine[] {
   if (d.verdict === "starts") return [];
-  const out: string[] = [];
+  const out: AdviceLine[] = [];
   const b = d.limits.find((l) => l.name === d.binding)!;
-  out.push(`Limited by ${LIMIT_WORDS[b.name]} (margin ${b.margin.toFixed(2)}): ${b.what}.`);
+  out.push({ code: "limited-by", limit: b.name, margin: b.margin, what: b.what });
   if (d.verdict === "marginal") {
+    // Exceeded within its band: brief the start carefully.
     const soft = d.limits.filter((l) => l.level === "soft");
-    if (soft.length > 0) out.push(`Exceeded within its band: ${soft.map((l) => `${LIMIT_WORDS[l.name]} (marginal up to ${l.band!.what})`).join("; ")}. Brief the start carefully.`);
-    if (d.relaxed) {
-      out.push(
-        `The plan shown assumes the rail gives at least its ${pct(d.shown.ctx.quantile)} quantile: about one start in ${Math.max(2, Math.round(1 / d.shown.ctx.quantile))} the rail gives less, the slip protection keeps acting and the train may stall. Have help arranged.`,
-      );
-    }
+    if (soft.length > 0) out.push({ code: "within-band", limits: soft.map((l) => ({ limit: l.name, band: l.band!.what })) });
+    // A plan on a better rail than the threshold's: about one start in 1/q the rail gives less and the train may stall.
+    if (d.relaxed) out.push({ code: "relaxed", quantile: d.shown.ctx.quantile, oneIn: Math.max(2, Math.round(1 / d.shown.ctx.quantile)) });
   }
-  const changes: string[] = [];
+  const changes: ChangeLine[] = [];
   const spec = d.threshold.ctx.model.locoSpecs;
   const bound = marginalBound(c.settings);
   const qsMargin = (x: StartCase): number => Math.min(...quasiStaticLimits(plannerContext(x), bound).limits.map((l) => l.margin));
@@ -136,20 +132,20 @@ function advice(c: StartCase, d: Decision, masses: { startsKg: number; marginalK
   if (traction) {
     if (!c.conditions.sand && spec.some((s) => s.sanders)) {
       const m = qsMargin({ ...c, conditions: { ...c.conditions, sand: true } });
-      changes.push(`sand (adhesion and power margin with sand ${m.toFixed(2)})`);
+      changes.push({ code: "sand", margin: m });
     }
     if (c.conditions.rail !== "dry") {
       const m = qsMargin({ ...c, conditions: { ...c.conditions, rail: "dry" } });
-      changes.push(`a better rail (dry${c.conditions.sand ? " with sand" : ""}: margin ${m.toFixed(2)})`);
+      changes.push({ code: "better-rail", sand: c.conditions.sand, margin: m });
     }
   }
   if (Number.isFinite(masses.startsKg)) {
-    const scaled = c.train.groups ? " (every wagon group's load above tare scaled in proportion)" : "";
-    if (masses.startsKg > 0) changes.push(`less load: ${t(masses.startsKg)} or less starts${masses.marginalKg > masses.startsKg ? `, ${t(masses.marginalKg)} or less is at least marginal` : ""}${scaled}`);
-    else changes.push("less load will not do it: not even a lightly loaded train of these wagons starts here");
-  } else changes.push("less load");
-  changes.push("assistance (more units at the head, mid-train or at the rear)");
-  out.push(`What would change it: ${changes.join("; ")}.`);
+    // A mixed train's load above tare is scaled in every wagon group in proportion.
+    if (masses.startsKg > 0) changes.push({ code: "less-load", startsKg: masses.startsKg, marginalKg: masses.marginalKg > masses.startsKg ? masses.marginalKg : null, scaled: Boolean(c.train.groups) });
+    else changes.push({ code: "less-load-none" });
+  } else changes.push({ code: "less-load-unsearched" });
+  changes.push({ code: "assistance" });
+  out.push({ code: "changes", changes });
   return out;
 }
 

@@ -6,6 +6,7 @@
  * (`slipHeadline`) says the same thing in one line, so the card never tells the driver two things at once.
  */
 import type { SlipGuidance } from "./types.js";
+import type { SlipDriverLine, SlipHeadline, SlipProtectionLine, SlipStallLine } from "./lines.js";
 
 export interface SlipContext {
   sand: boolean;
@@ -17,50 +18,31 @@ export interface SlipContext {
 
 export function slipGuidance(ctx: SlipContext): SlipGuidance {
   // What you do, in order (PRACTICE.md: hold the notch and sand on electronically controlled units; reduce
-  // the throttle on continued slip; a lower notch sometimes pulls better; never advance while the current rises).
-  const driver = [
-    "Hold the notch while the protection acts: do not notch up, and do not shut off for a single slip.",
-    ctx.sanders ? (ctx.sand ? "Keep sanding." : "Sand now.") : "No sanders on this locomotive: be ready to ease off sooner.",
-    "If the slip keeps returning, drop to this step's fallback notch: a lower notch that grips often pulls better than a higher one that keeps slipping.",
-    "Wait for the slip to stop and the current to settle before advancing again — then one notch at a time, more slowly than planned.",
-    "Never let the wheels spin at a standstill: it burns the rail and the wheels. Shut off and start again.",
-  ];
-  if (ctx.pointsAhead) driver.push("Stop sanding before points and crossings; sand can insulate track circuits.");
-  // Why you hold: the protection is already reducing power (builder's manual [S], PRACTICE.md).
-  const protection = [
-    ctx.sanders ? "It sands the rails by itself on locomotives so fitted." : "This locomotive has no sanders: its protection can only reduce power.",
-    "It cuts power (excitation) sharply, by more the harder the wheels slip — the ammeter drops and the slipping axle slows to the train's speed.",
-    "It then reapplies power quickly, levelling off near where the slip began; a slip that keeps returning is cut again each time — which is when you drop a notch.",
-  ];
-  const stall = ctx.risingGrade
-    ? [
-        "If the train stops on the grade: apply the train brake and the locomotive brake and secure the train before anything else.",
-        "Suspect a brake that has not released along the train; check the rear brake-pipe pressure or air flow.",
-        "Restart from the prepare step: holding notch on the locomotive brake, release the train brake, add power as it releases, ease off the locomotive brake.",
-        "Do not bunch the slack to get a run at it on a rising grade: the rear can roll back and part the train.",
-        "If it still will not start, ask for assistance or consider dividing the train, as your rules require.",
-      ]
-    : [
-        "If the train stops: shut off, apply the brakes and let the current fall.",
-        "Suspect a brake that has not released along the train.",
-        "Restart from the prepare step and take the slack out at the lowest notch that moves the train.",
-        "If it still will not start, ask for assistance or consider dividing the train, as your rules require.",
-      ];
+  // the throttle on continued slip; a lower notch sometimes pulls better; never advance while the current rises):
+  // hold the notch while the protection acts; sand (or, without sanders, be ready to ease off sooner); drop to
+  // the fallback notch if the slip keeps returning; wait for the current to settle; never spin at a standstill.
+  const driver: SlipDriverLine[] = ["hold-notch", ctx.sanders ? (ctx.sand ? "keep-sanding" : "sand-now") : "no-sanders-ease", "drop-fallback", "wait-settle", "no-spin"];
+  // No sand over points and crossings (track circuits).
+  if (ctx.pointsAhead) driver.push("stop-sanding-points");
+  // Why you hold: the protection is already reducing power (builder's manual [S], PRACTICE.md): it sands by
+  // itself where fitted, cuts power sharply, then reapplies it near where the slip began.
+  const protection: SlipProtectionLine[] = [ctx.sanders ? "sands-itself" : "no-sanders-only-power", "cuts-power", "reapplies"];
+  // A stall: secure the train first (on a rising grade with both brakes), suspect a brake not released, restart
+  // from the prepare step; never bunch the slack on a rising grade; then assistance or dividing, as the rules require.
+  const stall: SlipStallLine[] = ctx.risingGrade
+    ? ["grade-secure", "grade-suspect-brake", "grade-restart", "grade-no-bunching", "ask-assistance"]
+    : ["level-shut-off", "level-suspect-brake", "level-restart", "ask-assistance"];
   return { driver, protection, stall };
 }
 
 /**
  * One line for a step: hold the step's notch while the protection acts, and only if the slip keeps
- * returning, drop to its fallback notch. The same words on the app's card and in the command line.
+ * returning, drop to its fallback notch (or shut off when there is none lower). The same words on the app's
+ * card and in the command line (src/i18n/renderLines.ts).
  */
-export function slipHeadline(notch: number, fallbackNotch: number, sanders = true): { hold: string; then: string } {
-  const sand = sanders ? ", and sand" : "";
-  if (notch <= 0) {
-    return { hold: "No power in this step.", then: `If the wheels slip when you take power, hold that notch while the protection acts${sand}.` };
-  }
-  const hold = `Hold notch ${notch} while the protection acts${sand}.`;
-  if (fallbackNotch >= notch || fallbackNotch <= 0) {
-    return { hold, then: `Still slipping in notch ${notch}: shut off, let the current fall, and start again.` };
-  }
-  return { hold, then: `Still slipping: drop to notch ${fallbackNotch}.` };
+export function slipHeadline(notch: number, fallbackNotch: number, sanders = true): SlipHeadline {
+  if (notch <= 0) return { hold: { code: "no-power" }, then: { code: "take-power", sand: sanders } };
+  const hold = { code: "hold", notch, sand: sanders } as const;
+  if (fallbackNotch >= notch || fallbackNotch <= 0) return { hold, then: { code: "shut-off", notch } };
+  return { hold, then: { code: "drop", notch: fallbackNotch } };
 }

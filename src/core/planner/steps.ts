@@ -5,12 +5,12 @@
  */
 import { adhesionSpeedFactor, slipRiskAfterSlip } from "../physics/adhesion.js";
 import { notchTargetN } from "../dynamics/runner.js";
-import { mpsToKmh } from "../physics/units.js";
 import type { StepRecord } from "./branch.js";
 import { notchDeliveredN, notchEffortAllN, type PlannerContext } from "./context.js";
 import type { SearchResult } from "./search.js";
 import type { GroupStep, PlanStep } from "./types.js";
-import { groupName, groupNotchWords, settingLevel, unitDeliveredN } from "./groupNotches.js";
+import { groupPlace, settingLevel, unitDeliveredN } from "./groupNotches.js";
+import { targetRef, type GroupShare, type HelperCall, type ProtectionLine, type StepWhy, type WhyLine } from "./lines.js";
 import { HELPER_FOLLOW_S } from "./search.js";
 
 /**
@@ -33,11 +33,6 @@ export function fallbackNotch(ctx: PlannerContext, notch: number, speedMps: numb
   }
   return 1;
 }
-
-const kN = (n: number): string => `${Math.round(n / 1000)} kN`;
-/** A fraction as whole percent; one above zero that would read 0 reads "< 1 %" (it is not nil). */
-const pct = (x: number): string => (x > 0 && x < 0.005 ? "< 1 %" : `${Math.round(x * 100)} %`);
-const km = (mps: number): string => `${mpsToKmh(mps).toFixed(1)} km/h`;
 
 /** Asking this much more than the rail gives counts as asking more (below it the two are the same figure) [D]. */
 const BEYOND_RAIL = 1.01;
@@ -77,7 +72,7 @@ export function planSteps(ctx: PlannerContext, r: SearchResult): PlanStep[] {
       protectionActs,
       peakCouplerForceN: rec.peakTensionN,
       fallbackNotch: rec.notch === 0 ? 0 : fallbackNotch(ctx, rec.notch, speed),
-      why: whyLine(ctx, r, rec, k, resistanceN) + (protectionActs ? protectionLine(ctx, rec) : "") + groupLine(ctx, rec),
+      why: { line: whyLine(ctx, r, rec, k, resistanceN), protection: protectionActs ? protectionLine(ctx, rec) : null, groups: groupShares(ctx, rec) } satisfies StepWhy,
       ...(rec.groupNotches ? { groups: groupSteps(ctx, rec, k > 0 ? recs[k - 1]!.groupNotches : null) } : {}),
     };
   });
@@ -95,86 +90,88 @@ function groupSteps(ctx: PlannerContext, rec: StepRecord, before: Int32Array | n
     total += e;
   }
   return ctx.consist.controlGroups.map((g, i) => {
-    const name = groupName(g.position, g.control, i);
-    const step: GroupStep = { name, control: g.control, notch: notches[i]!, effortShare: total > 0 ? effort[i]! / total : 0 };
+    const place = groupPlace(g.position, g.control, i);
+    const step: GroupStep = { place, control: g.control, notch: notches[i]!, effortShare: total > 0 ? effort[i]! / total : 0 };
     const was = before?.[i] ?? 0;
-    if (g.control === "helper" && was !== notches[i]) step.coordination = helperCall(rec, name, was, notches[i]!, notches[0]!);
+    if (g.control === "helper" && was !== notches[i]) step.coordination = helperCall(rec, step.place, was, notches[i]!, notches[0]!);
     return step;
   });
 }
 
-/** The words of a helper's notch change: the head acts, calls it, and the helper follows (search.ts HELPER_FOLLOW_S). */
-function helperCall(rec: StepRecord, name: string, was: number, now: number, head: number): string {
-  const sign = rec.phase === "stretch" ? ", or as soon as the head reports the train moving, whichever comes first" : "";
-  const act = now > was ? `takes notch ${now}` : now === 0 ? "shuts off" : `eases to notch ${now}`;
-  return `The head takes notch ${head} first and calls the ${name} by radio; the ${name} ${act} about ${HELPER_FOLLOW_S} s later${sign}, and confirms.`;
+/** A helper's notch change: the head acts, calls it, and the helper follows (search.ts HELPER_FOLLOW_S). */
+function helperCall(rec: StepRecord, place: GroupStep["place"], was: number, now: number, head: number): HelperCall {
+  return { headNotch: head, place, act: now > was ? "take" : now === 0 ? "shut-off" : "ease", notch: now, followS: HELPER_FOLLOW_S, stretch: rec.phase === "stretch" };
 }
 
-/** With several control groups, the step's notches in words: " Notches: head 5 · rear 3 (head 52 %, rear 48 % of the effort)." */
-function groupLine(ctx: PlannerContext, rec: StepRecord): string {
-  if (!rec.groupNotches || settingLevel(rec.groupNotches) <= 0) return "";
-  const shares = groupSteps(ctx, rec, null);
-  return ` Notches ${groupNotchWords(ctx, rec.groupNotches)} (${shares.map((g) => `${g.name} ${pct(g.effortShare)}`).join(", ")} of the effort).`;
+/** With several control groups, each group's notch and share of the effort in the step (null with one group or no power). */
+function groupShares(ctx: PlannerContext, rec: StepRecord): GroupShare[] | null {
+  if (!rec.groupNotches || settingLevel(rec.groupNotches) <= 0) return null;
+  return groupSteps(ctx, rec, null).map((g) => ({ place: g.place, notch: g.notch, share: g.effortShare }));
 }
 
 /** What the slip protection is expected to do in a step whose notch asks more than the rail may give. */
-function protectionLine(ctx: PlannerContext, rec: StepRecord): string {
+function protectionLine(ctx: PlannerContext, rec: StepRecord): ProtectionLine {
   const v = Math.max(0, rec.startSpeedMps);
-  const asks = notchEffortAllN(ctx, rec.groupNotches ?? rec.notch, v);
-  const gives = notchDeliveredN(ctx, rec.groupNotches ?? rec.notch, v);
-  const still = rec.startSpeedMps <= 0.01 ? " No wheelspin at a standstill: it burns the rail." : "";
-  return ` It asks ${kN(asks)}, more than a poor rail gives (${kN(gives)}): the slip protection may act (chance ${pct(rec.maxRisk)}), holding the effort there; expect slips, hold the notch and sand.${still}`;
+  return {
+    asksN: notchEffortAllN(ctx, rec.groupNotches ?? rec.notch, v),
+    givesN: notchDeliveredN(ctx, rec.groupNotches ?? rec.notch, v),
+    risk: rec.maxRisk,
+    standstill: rec.startSpeedMps <= 0.01,
+  };
 }
 
-function whyLine(ctx: PlannerContext, r: SearchResult, rec: StepRecord, k: number, resistanceN: number): string {
+function whyLine(ctx: PlannerContext, r: SearchResult, rec: StepRecord, k: number, resistanceN: number): WhyLine {
   const c = ctx.c;
-  const allowance = ctx.couplerAllowanceN;
+  const allowanceN = ctx.couplerAllowanceN;
   switch (rec.phase) {
     case "prepare": {
-      const release = `the train brake releases along ${Math.round(ctx.consist.lengthM)} m in about ${Math.round(ctx.releaseS)} s`;
-      const sand = c.conditions.sand && ctx.model.locoSpecs.some((s) => s.sanders) ? "; sand before the wheels turn" : "";
+      // The train brake releases along the train's length in about `releaseS`; sand before the wheels turn.
+      const lengthM = ctx.consist.lengthM;
+      const releaseS = ctx.releaseS;
+      const sand = c.conditions.sand && ctx.model.locoSpecs.some((s) => s.sanders);
       if (rec.notch > 0) {
-        return `Grade pulls the train back with ${kN(ctx.rollBackPullN)} more than its brakes-off resistance holds: notch ${rec.notch} (${kN(notchDeliveredN(ctx, rec.notch, 0))}) with the locomotive brake (${kN(ctx.locoBrakeN)}) holds it while ${release}${sand}.`;
+        return { code: "prepare-hold-back", pullN: ctx.rollBackPullN, notch: rec.notch, notchN: notchDeliveredN(ctx, rec.notch, 0), locoBrakeN: ctx.locoBrakeN, lengthM, releaseS, sand };
       }
       if (ctx.startKind === "gravity") {
-        if (ctx.locoBrakeHolds) {
-          return `On this falling grade the released train pulls forward with ${kN(ctx.runAwayPullN)}; the locomotive brake holds up to ${kN(ctx.locoBrakeN)}, enough: keep it applied while ${release}. No power is needed: easing the locomotive brake off starts the train.`;
-        }
-        const share = Math.max(0, Math.min(100, Math.round((100 * ctx.runAwayPullN) / Math.max(1, ctx.trainBrakeN))));
-        return `On this falling grade the released train pulls forward with ${kN(ctx.runAwayPullN)}; the locomotive brake holds only ${kN(ctx.locoBrakeN)} of it, so it cannot hold the train. Keep the train brake applied and release it in stages where the brake allows it (graduated release): the train starts once about ${share} % of the train brake's ${kN(ctx.trainBrakeN)} is left. No power is needed.`;
+        if (ctx.locoBrakeHolds) return { code: "prepare-gravity-loco-brake", pullN: ctx.runAwayPullN, locoBrakeN: ctx.locoBrakeN, lengthM, releaseS };
+        // The train starts once about this share of the train brake is left (graduated release).
+        const sharePercent = Math.max(0, Math.min(100, Math.round((100 * ctx.runAwayPullN) / Math.max(1, ctx.trainBrakeN))));
+        return { code: "prepare-gravity-train-brake", pullN: ctx.runAwayPullN, locoBrakeN: ctx.locoBrakeN, sharePercent, trainBrakeN: ctx.trainBrakeN };
       }
-      return `No power on a standing train until its brakes are off: the locomotive brake holds while ${release}${sand}.`;
+      return { code: "prepare-brakes-off", lengthM, releaseS, sand };
     }
     case "stretch": {
       const moved = r.branch.run.locoTravelToStretchM;
-      const travel = moved !== null ? `the last vehicle moves after about ${Math.max(0, moved).toFixed(1)} m of locomotive travel` : "the slack comes out wagon by wagon";
-      const tooFast = r.stretch?.outcome === "fast" ? ` The locomotive runs faster than ${km(c.settings.stretchSpeedMps)} here even in the lowest notch that moves the train: check it with the locomotive brake.` : "";
-      return `Notch ${rec.notch} gives ${kN(rec.effortN)} against ${kN(resistanceN)} to start the whole train at once: wagons break away one by one at walking pace and ${travel}; peak coupler ${kN(rec.peakTensionN)} of ${kN(allowance)} allowed.${tooFast}`;
+      return {
+        code: "stretch",
+        notch: rec.notch,
+        effortN: rec.effortN,
+        resistanceN,
+        stretchTravelM: moved !== null ? Math.max(0, moved) : null,
+        peakN: rec.peakTensionN,
+        allowanceN,
+        fastOverMps: r.stretch?.outcome === "fast" ? c.settings.stretchSpeedMps : null,
+      };
     }
     case "build":
       if (rec.notch === 0) return rollLine(ctx, rec);
       // The adhesion figure with its basis: the notch's effort at the speed where it uses the most adhesion.
-      return `At ${km(rec.maxUseSpeedMps)} notch ${rec.notch} asks ${kN(rec.maxUseEffortN)}, ${pct(rec.maxUse)} of the median adhesion there (slip risk ${pct(rec.maxRisk)}); advance only once the current has settled${k === 2 ? ` — at least ${Math.round(r.buildDwellS ?? 3)} s per notch` : ""}; peak coupler ${kN(rec.peakTensionN)} of ${kN(allowance)} allowed.`;
+      return { code: "build", atMps: rec.maxUseSpeedMps, notch: rec.notch, asksN: rec.maxUseEffortN, use: rec.maxUse, risk: rec.maxRisk, dwellS: k === 2 ? (r.buildDwellS ?? 3) : null, peakN: rec.peakTensionN, allowanceN };
     case "accelerate": {
       if (rec.notch === 0) return rollLine(ctx, rec);
-      const reason = r.adhesionCapped && (rec.groupNotches ? settingLevel(rec.groupNotches) : rec.notch) < ctx.maxNotch ? " A higher notch would pass no more on a poor rail, or is not needed." : "";
-      const to = c.target.kind === "speed" ? `to ${km(c.target.speedMps)}` : `until the train has cleared ${Math.round(c.target.distanceM)} m`;
-      return `Hold notch ${rec.notch} ${to}: ${kN(rec.effortN)} against the running, grade and curve resistance accelerates the stretched train; slip risk ${pct(rec.maxRisk)}.${reason}`;
+      const higherNoMore = r.adhesionCapped && (rec.groupNotches ? settingLevel(rec.groupNotches) : rec.notch) < ctx.maxNotch;
+      return { code: "accelerate", notch: rec.notch, target: targetRef(c.target), effortN: rec.effortN, risk: rec.maxRisk, higherNoMore };
     }
   }
 }
 
 /** A step without power on a falling grade: gravity accelerates the train, the brakes control it. */
-function rollLine(ctx: PlannerContext, rec: StepRecord): string {
+function rollLine(ctx: PlannerContext, rec: StepRecord): WhyLine {
   const c = ctx.c;
   const duration = Math.max(1e-9, rec.endS - rec.startS);
-  const accel = Math.max(0, rec.endSpeedMps - Math.max(0, rec.startSpeedMps)) / duration;
-  const to = c.target.kind === "speed" ? `${km(c.target.speedMps)}` : `the ${Math.round(c.target.distanceM)} m target`;
-  const travel = rec.endTravelM;
-  const within = travel <= c.location.clearAheadM ? `within the ${Math.round(c.location.clearAheadM)} m clear ahead` : `beyond the ${Math.round(c.location.clearAheadM)} m clear ahead: have it under control before then`;
-  const control = `control the speed with the train brake${ctx.locoBrakeHolds ? "" : " (eased in stages)"} and the locomotive brake`;
-  if (rec.trigger !== "target") {
-    return `No power yet: gravity accelerates the train at about ${accel.toFixed(2)} m/s² to ${km(rec.endSpeedMps)} after about ${Math.round(travel)} m; ${control}. Beyond that it needs power to reach ${to}.`;
-  }
-  return `No power: gravity accelerates the train at about ${accel.toFixed(2)} m/s²; ${control}. It reaches ${to} after about ${Math.round(travel)} m of travel, ${within}; then hold the speed on the brakes.`;
+  const accelMps2 = Math.max(0, rec.endSpeedMps - Math.max(0, rec.startSpeedMps)) / duration;
+  // The speed is controlled with the train brake (eased in stages where the locomotive brake cannot hold) and the locomotive brake.
+  const staged = !ctx.locoBrakeHolds;
+  if (rec.trigger !== "target") return { code: "roll-then-power", accelMps2, toMps: rec.endSpeedMps, travelM: rec.endTravelM, staged, target: targetRef(c.target) };
+  return { code: "roll-to-target", accelMps2, staged, target: targetRef(c.target), travelM: rec.endTravelM, clearM: c.location.clearAheadM };
 }

@@ -3,6 +3,7 @@
  * it for display in the chosen units.
  */
 import type { Caution } from "./cautions.js";
+import type { AdviceLine, GroupPlace, HelperCall, SlipDriverLine, SlipProtectionLine, SlipStallLine, StepWhy, VehicleRef } from "./lines.js";
 import type { StaticCheck } from "./staticCheck.js";
 import type { UnitControl } from "../train/types.js";
 import type { LimitCheck, LimitName, Reason, StartKind, Verdict } from "./outcome.js";
@@ -52,8 +53,8 @@ export interface PlanStep {
   peakCouplerForceN: number;
   /** Notch to drop to if the wheels slip in this step. */
   fallbackNotch: number;
-  /** One plain line of physics saying why. */
-  why: string;
+  /** One plain line of physics saying why, as codes with figures (lines.ts; the words are in src/i18n). */
+  why: StepWhy;
   /**
    * With several control groups: each group's notch, head first (the step's `notch` is the head's), the
    * share of the effort it gives, and for a helper how its driver follows the head's call.
@@ -63,14 +64,14 @@ export interface PlanStep {
 
 /** One control group's part in a step. */
 export interface GroupStep {
-  /** "head", "rear", "after wagon 30", with "helper" for a helper group. */
-  name: string;
+  /** Where the group is (the head, the rear, after a wagon) and whether it is a helper. */
+  place: GroupPlace;
   control: UnitControl;
   notch: number;
   /** Share of the train's effort this group gives at the step's end, 0..1. */
   effortShare: number;
   /** For a helper whose notch changes in this step: who acts first and when the helper follows. */
-  coordination?: string;
+  coordination?: HelperCall;
 }
 
 /**
@@ -78,9 +79,9 @@ export interface GroupStep {
  * reason for holding the notch); what to do on a stall.
  */
 export interface SlipGuidance {
-  driver: string[];
-  protection: string[];
-  stall: string[];
+  driver: SlipDriverLine[];
+  protection: SlipProtectionLine[];
+  stall: SlipStallLine[];
 }
 
 /** Time series of the verifying dynamics run, decimated for charts. */
@@ -108,8 +109,8 @@ export interface PlanResult {
   startKind: StartKind;
   /** Quantile of the rail condition the shown plan assumes (the threshold, or the marginal bound). */
   planQuantile: number;
-  /** Why the verdict is what it is and what would change it, in plain lines (empty when it starts). */
-  advice: string[];
+  /** Why the verdict is what it is and what would change it, as codes with figures (empty when it starts). */
+  advice: AdviceLine[];
   static: StaticCheck;
   steps: PlanStep[];
   peakCouplerForceN: number;
@@ -119,7 +120,7 @@ export interface PlanResult {
   /** Peak compression of each coupling, head to tail, N. */
   couplerCompressionPeaksN: Float64Array;
   /** The highest wheel-climb L/V of the planned start (when the check is made and a coupling was in buff on a curve). */
-  wheelClimb: { ratio: number; allowance: number; nadalLimit: number; vehicle: string; forceN: number; radiusM: number } | null;
+  wheelClimb: { ratio: number; allowance: number; nadalLimit: number; vehicle: VehicleRef; forceN: number; radiusM: number } | null;
   /** Seconds from taking power to reaching the target; null when it is not reached. */
   timeToTargetS: number | null;
   /** Largest trailing mass (this train's wagons) that starts; NaN when not searched. */

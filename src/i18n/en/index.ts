@@ -11,5 +11,7 @@ import { settings } from "./settings.js";
 import { shell } from "./shell.js";
 import { steps } from "./steps.js";
 import { words } from "./words.js";
+import { reasons } from "./reasons.js";
+import { guidance } from "./guidance.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance] as const;

@@ -21,7 +21,7 @@ const rear: AssistanceOptionData = {
   couplings: 29,
   headCompressionN: 40_000,
   timeToTargetS: 93,
-  note: "The unit added at the rear works in step with the head (same notch). Peak compression 188 kN near the rear (coupling 26 of 29).", effortSplit: [],
+  note: { code: "pushing", added: [{ count: 1, position: "rear" }], control: "with-head", where: "rear", peakN: 188_000, coupling: 26, couplings: 29, rear: true }, effortSplit: [],
 };
 const split: AssistanceOptionData = {
   ...rear,
@@ -33,7 +33,7 @@ const split: AssistanceOptionData = {
   margin: 2.1,
   peakCouplerForceN: 301_000,
   timeToTargetS: 70,
-  note: "Both work in step.", effortSplit: [],
+  note: { code: "all-at-head" }, effortSplit: [],
 };
 
 function answer(p: Partial<AssistanceAnswer> = {}): AssistanceAnswer {

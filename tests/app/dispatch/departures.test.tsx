@@ -42,7 +42,7 @@ function answerFor(c: StartCase): CheckAnswer {
     couplings: 29,
     headCompressionN: 10_000,
     timeToTargetS: 70,
-    note: "In step.", effortSplit: [],
+    note: { code: "all-at-head" as const }, effortSplit: [],
   });
   switch (c.conditions.rail) {
     case "leaves":

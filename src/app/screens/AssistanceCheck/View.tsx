@@ -14,7 +14,8 @@ import { Chart } from "../../components/Chart.js";
 import { Icon } from "../../components/Icon.js";
 import { VerdictBanner, VerdictIcon } from "../../components/VerdictBanner.js";
 import { words } from "../../words.js";
-import { duration, localiseText, margin, percentOf, show, type UnitSystem } from "../../format.js";
+import { duration, margin, percentOf, show, type UnitSystem } from "../../format.js";
+import { assistanceNoteWords, splitWords } from "../../lines.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { Cautions } from "../shared/Cautions.js";
 import { divideLine, limitWord, optionHeadline, placeWords, REASON_SHORT } from "../shared/words.js";
@@ -230,11 +231,11 @@ function OptionCard(props: { option: AssistanceOptionData; rank: number; units: 
         <Show when={(o().effortSplit ?? []).length > 1}>
           <div>
             <dt>Effort split</dt>
-            <dd data-testid="effort-split">{o().effortSplit.map((g) => `${g.name} ${percentOf(g.share, 0)} (notch ${g.notch})`).join(" · ")}</dd>
+            <dd data-testid="effort-split">{o().effortSplit.map((g) => `${splitWords(g.place)} ${percentOf(g.share, 0)} (notch ${g.notch})`).join(" · ")}</dd>
           </div>
         </Show>
       </dl>
-      <p class="option-note">{localiseText(o().note, props.units)}</p>
+      <p class="option-note">{assistanceNoteWords(o().note, props.units)}</p>
       <div class="option-actions">
         <button type="button" class="button" disabled={!props.canTry} onClick={() => props.onTry(o())}>
           <Icon name="add" /> Plan with this help

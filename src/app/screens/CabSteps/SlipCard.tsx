@@ -12,6 +12,7 @@ import { localiseText, type UnitSystem } from "../../format.js";
 import { notchText } from "../../steps.js";
 import { steps } from "../../../i18n/en/steps.js";
 import { tr } from "../../i18n.js";
+import { slipCardWords, slipHeadlineWords } from "../../lines.js";
 
 const t = tr.ns(steps);
 
@@ -36,6 +37,7 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
   });
   onCleanup(() => document.removeEventListener("keydown", onKey));
   const g = () => props.guidance;
+  const words = () => slipCardWords(g());
   const empty = () => g().protection.length + g().driver.length + g().stall.length === 0;
   return (
     <div class="slip-card" role="dialog" aria-modal="true" aria-labelledby="slip-h">
@@ -49,7 +51,7 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
       </div>
       <Show when={props.step}>
         {(s) => {
-          const h = () => slipHeadline(s().notch, s().fallbackNotch, props.sanders ?? true);
+          const h = () => slipHeadlineWords(slipHeadline(s().notch, s().fallbackNotch, props.sanders ?? true));
           const drops = () => s().notch > 0 && s().fallbackNotch > 0 && s().fallbackNotch < s().notch;
           return (
             <div class="slip-now">
@@ -73,9 +75,9 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
         }}
       </Show>
       <div class="slip-lists">
-        <SlipList title={t("slipDriver")} items={g().driver} units={props.units} lead />
-        <SlipList title={t("slipProtection")} items={g().protection} units={props.units} bullets />
-        <SlipList title={t("slipStall")} items={g().stall} units={props.units} />
+        <SlipList title={t("slipDriver")} items={words().driver} units={props.units} lead />
+        <SlipList title={t("slipProtection")} items={words().protection} units={props.units} bullets />
+        <SlipList title={t("slipStall")} items={words().stall} units={props.units} />
       </div>
       <Show when={empty()}>
         <p class="placeholder-text">{t("slipNone")}</p>

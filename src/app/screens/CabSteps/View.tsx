@@ -8,7 +8,8 @@ import type { Target } from "../../../core/train/types.js";
 import { Icon } from "../../components/Icon.js";
 import { VerdictIcon } from "../../components/VerdictBanner.js";
 import { words } from "../../words.js";
-import { clock, localiseText, percent, show, type UnitSystem } from "../../format.js";
+import { clock, percent, show, type UnitSystem } from "../../format.js";
+import { groupWords, whyText } from "../../lines.js";
 import type { WakeLockState } from "../../state/createWakeLock.js";
 import { advanceLead, advanceOthers, groupNotchesText, helperLine, notchText, phaseLine, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
 import { shell } from "../../../i18n/en/shell.js";
@@ -53,7 +54,7 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
   const count = () => steps().length;
   // Whose steps: the head driver's (group 0), or a helper's driver's (the index of a helper group).
   const [driver, setDriver] = createSignal(0);
-  const helpers = () => (steps().find((x) => x.groups)?.groups ?? []).map((g, k) => ({ name: g.name, k, helper: g.control === "helper" })).filter((g) => g.helper);
+  const helpers = () => (steps().find((x) => x.groups)?.groups ?? []).map((g, k) => ({ name: groupWords(g.place), k, helper: g.control === "helper" })).filter((g) => g.helper);
   const who = () => (helpers().some((h) => h.k === driver()) ? driver() : 0);
   const notchFor = (st: NonNullable<ReturnType<typeof step>>) => st.groups?.[who()]?.notch ?? st.notch;
   return (
@@ -129,7 +130,7 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
               </div>
             </Show>
             <div class="cab-notch" aria-label={t("notchIs", { notch: notchText(notchFor(s())) })}>
-              <span class="cab-notch-label">{who() === 0 ? t("notch") : `${t("notch")}, ${s().groups?.[who()]?.name ?? ""}`}</span>
+              <span class="cab-notch-label">{who() === 0 ? t("notch") : `${t("notch")}, ${s().groups?.[who()] ? groupWords(s().groups![who()]!.place) : ""}`}</span>
               <span class="cab-notch-value">{notchText(notchFor(s()))}</span>
               <span class="cab-phase-line">{phaseLine(s().phase)}</span>
               <Show when={s().groups}>{(gs) => <span class="cab-groups" data-testid="cab-group-notches">{groupNotchesText(gs())}</span>}</Show>
@@ -154,7 +155,7 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
                   <dd>{stillSlipping(s())}</dd>
                 </div>
               </dl>
-              <p class="cab-why">{localiseText(s().why, props.units)}</p>
+              <p class="cab-why">{whyText(s().why, props.units)}</p>
               <p class="cab-clock" aria-label={t("timeInStep", { time: clock(props.stepSeconds) })}>
                 <Icon name="clock" size={32} /> <span>{clock(props.stepSeconds)}</span>
                 <span class="cab-small">{t("inThisStep")}</span>

@@ -19,6 +19,7 @@ import { VerdictBanner, VerdictIcon } from "../../components/VerdictBanner.js";
 import { words } from "../../words.js";
 import { issueLine } from "../../fields.js";
 import type { FieldIssue } from "../../../profiles/issues.js";
+import { adviceWords } from "../../lines.js";
 import { duration, localiseText, margin, percent, percentOf, show, showAtMost, showForce, type UnitSystem } from "../../format.js";
 import type { RunStatus } from "../../state/createPlanRun.js";
 import { StepCard } from "./StepCard.js";
@@ -190,7 +191,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
             </Show>
             <Show when={res().advice.length > 0}>
               <ul class="reasons advice" data-advice>
-                <For each={res().advice}>{(a) => <li>{localiseText(a, props.units)}</li>}</For>
+                <For each={res().advice}>{(a) => <li>{adviceWords(a, props.units)}</li>}</For>
               </ul>
             </Show>
 

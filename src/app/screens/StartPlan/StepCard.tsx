@@ -2,7 +2,8 @@
 import { For, Show, type JSX } from "solid-js";
 import type { PlanStep } from "../../../core/planner/types.js";
 import type { Target } from "../../../core/train/types.js";
-import { localiseText, percentOf, show, type UnitSystem } from "../../format.js";
+import { percentOf, show, type UnitSystem } from "../../format.js";
+import { helperCallWords, whyText } from "../../lines.js";
 import { advanceLead, advanceOthers, groupNotchesText, notchText, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
 import { steps } from "../../../i18n/en/steps.js";
 import { tr } from "../../i18n.js";
@@ -82,8 +83,8 @@ export function StepCard(props: StepCardProps): JSX.Element {
             </dd>
           </div>
         </dl>
-        <p class="step-why">{localiseText(s().why, props.units)}</p>
-        <For each={(s().groups ?? []).filter((g) => g.coordination)}>{(g) => <p class="step-coordination">{g.coordination}</p>}</For>
+        <p class="step-why">{whyText(s().why, props.units)}</p>
+        <For each={(s().groups ?? []).filter((g) => g.coordination)}>{(g) => <p class="step-coordination">{helperCallWords(g.coordination!)}</p>}</For>
       </div>
     </li>
   );
