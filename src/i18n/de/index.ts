@@ -9,5 +9,7 @@ import { inputsDe } from "./inputs.js";
 import { dispatchDe } from "./dispatch.js";
 import { cautionsDe } from "./cautions.js";
 import { wordsDe } from "./words.js";
+import { reasonsDe } from "./reasons.js";
+import { guidanceDe } from "./guidance.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe };

@@ -9,5 +9,7 @@ import { inputsHu } from "./inputs.js";
 import { dispatchHu } from "./dispatch.js";
 import { cautionsHu } from "./cautions.js";
 import { wordsHu } from "./words.js";
+import { reasonsHu } from "./reasons.js";
+import { guidanceHu } from "./guidance.js";
 
-export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu, dispatch: dispatchHu, cautions: cautionsHu };
+export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu, dispatch: dispatchHu, cautions: cautionsHu, reasons: reasonsHu, guidance: guidanceHu };
