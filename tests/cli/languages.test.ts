@@ -18,7 +18,7 @@ function figures(text: string): number[] {
   return [...text.matchAll(/\d+(?:[.,]\d+)?/g)].map((m) => Number(m[0].replace(",", ".")));
 }
 
-/** The printout down to the "Why:" lines (whose sentences come from the planner in English until it is language-free). */
+/** The printout down to the "Why:" lines (the planner's own lines, from there on, are checked line by line in languagesLines.test.ts). */
 const head = (text: string) => text.split(/\n(?:Why|Miért|Warum):\n/)[0]!;
 
 describe("taut in Hungarian and German", () => {
