@@ -1,12 +1,12 @@
 /**
- * The planner's lines (why, advice, a helper's call, the slip card, an assistance option's note) in the
- * language on screen and the user's units: the shared renderer (src/i18n/renderLines.ts) with the app's
- * translator and figures.
+ * The planner's lines (why, advice, a helper's call) in the language on screen and the user's units: the
+ * shared renderer (src/i18n/renderLines.ts) with the app's translator and figures. The slip card's and an
+ * assistance option's words are rendered by their screens (CabSteps/SlipCard.tsx, AssistanceCheck), so
+ * they load with them, not before the first plan.
  */
-import type { AssistanceNote } from "../core/dispatch/assistance.js";
-import type { AdviceLine, GroupPlace, HelperCall, SlipHeadline, StepWhy } from "../core/planner/lines.js";
-import type { SlipGuidance } from "../core/planner/types.js";
-import { adviceText, assistanceNoteText, groupName, helperCallText, helperHoldText, slipGuidanceText, slipHeadlineText, splitName, stepWhyText, type Quantities } from "../i18n/renderLines.js";
+import type { AdviceLine, GroupPlace, HelperCall, StepWhy } from "../core/planner/lines.js";
+import { createSignal } from "solid-js";
+import { groupName, helperCallText, helperHoldText, splitName, stepWhyText, type Quantities } from "../i18n/renderLines.js";
 import { show, showAtMost, type UnitSystem } from "./format.js";
 import { tr } from "./i18n.js";
 
@@ -22,11 +22,25 @@ export function appQuantities(units: UnitSystem): Quantities {
 }
 
 export const whyText = (w: StepWhy, units: UnitSystem): string => stepWhyText(tr, appQuantities(units), w);
-export const adviceWords = (a: AdviceLine, units: UnitSystem): string => adviceText(tr, appQuantities(units), a);
+
+/** The advice's renderer and words: loaded the first time a plan has advice (a plan that starts has none). */
+const [adviceRenderer, setAdviceRenderer] = createSignal<typeof import("../i18n/renderAdvice.js") | null>(null);
+let adviceLoading = false;
+
+/** A line of advice in the language on screen (empty for the moment its words take to load). */
+export function adviceWords(a: AdviceLine, units: UnitSystem): string {
+  const r = adviceRenderer();
+  if (r) return r.adviceText(tr, appQuantities(units), a);
+  if (!adviceLoading) {
+    adviceLoading = true;
+    void import("../i18n/renderAdvice.js").then(
+      (m) => setAdviceRenderer(() => m),
+      () => (adviceLoading = false),
+    );
+  }
+  return "";
+}
 export const helperCallWords = (c: HelperCall): string => helperCallText(tr, c);
 export const helperHoldWords = (notch: string): string => helperHoldText(tr, notch);
 export const groupWords = (p: GroupPlace): string => groupName(tr, p);
 export const splitWords = (p: GroupPlace | "all"): string => splitName(tr, p);
-export const slipCardWords = (g: SlipGuidance): { driver: string[]; protection: string[]; stall: string[] } => slipGuidanceText(tr, g);
-export const slipHeadlineWords = (h: SlipHeadline): { hold: string; then: string } => slipHeadlineText(tr, h);
-export const assistanceNoteWords = (n: AssistanceNote, units: UnitSystem): string => assistanceNoteText(tr, appQuantities(units), n);

@@ -1,17 +1,13 @@
 /**
- * The planner's lines in words (src/core/planner/lines.ts): a step's why line, a helper's call, the limits'
- * descriptions, the advice, the "If wheels slip" card and its headline, an assistance option's note. One
+ * The planner's lines in words (src/core/planner/lines.ts): a step's why line, a helper's call (the limits'
+ * descriptions and the advice are in renderAdvice.ts, the If wheels slip card in renderSlip.ts, an
+ * assistance option's note in renderAssistNote.ts — apart, so their words load with what shows them). One
  * renderer for the app, the command line and the English text of reports; figures with units go through
  * `Quantities` (SI here; the app passes its own units), so the same line reads in metric or US units.
  */
-import type { AssistanceNote } from "../core/dispatch/assistance.js";
-import type { AddedUnits } from "../core/dispatch/assistPlacement.js";
-import type { AdviceLine, BandWhat, ChangeLine, GroupPlace, HelperCall, LimitWhat, SlipHeadline, StepWhy, TargetRef, VehicleRef, WhyLine } from "../core/planner/lines.js";
-import type { SlipGuidance } from "../core/planner/types.js";
-import { guidance } from "./en/guidance.js";
+import type { GroupPlace, HelperCall, StepWhy, TargetRef, WhyLine } from "../core/planner/lines.js";
 import { reasons } from "./en/reasons.js";
 import type { Translator } from "./translator.js";
-import { wordsOf } from "./words.js";
 
 /** Figures with their units, as the reader's units write them. */
 export interface Quantities {
@@ -39,16 +35,16 @@ export function siQuantities(tr: Translator): Quantities {
 }
 
 /** A fraction as whole percent ("< 1 %" above zero where it would read 0 when `belowOne`). */
-function percent(tr: Translator, x: number, belowOne = false): string {
+export function percent(tr: Translator, x: number, belowOne = false): string {
   const t = tr.ns(reasons);
   return belowOne && x > 0 && x < 0.005 ? t("percentBelowOne") : t("percent", { value: tr.num(Math.round(x * 100), 0) });
 }
 
 /** `x` to `d` decimals, rounded as toFixed rounds it (the digits the English text always had). */
-const fixed = (tr: Translator, x: number, d: number) => tr.num(Number(x.toFixed(d)), d);
+export const fixed = (tr: Translator, x: number, d: number) => tr.num(Number(x.toFixed(d)), d);
 /** A figure with the decimals it has (a factor such as 1.2). */
-const asGiven = (tr: Translator, x: number) => tr.num(x, Number.isInteger(x) ? 0 : Math.min(6, String(x).split(".")[1]?.length ?? 0));
-const whole = (tr: Translator, x: number) => tr.num(Math.round(x), 0);
+export const asGiven = (tr: Translator, x: number) => tr.num(x, Number.isInteger(x) ? 0 : Math.min(6, String(x).split(".")[1]?.length ?? 0));
+export const whole = (tr: Translator, x: number) => tr.num(Math.round(x), 0);
 
 /** A control group's name: "head", "rear", "after wagon 30", "rear helper". */
 export function groupName(tr: Translator, p: GroupPlace): string {
@@ -60,13 +56,6 @@ export function groupName(tr: Translator, p: GroupPlace): string {
 /** An effort split's name: a group's, or "all units". */
 export function splitName(tr: Translator, p: GroupPlace | "all"): string {
   return p === "all" ? tr.ns(reasons)("allUnits") : groupName(tr, p);
-}
-
-/** A vehicle: "wagon 12 (24 t)", "unit 3 (locomotive)". */
-export function vehicleText(tr: Translator, q: Quantities, v: VehicleRef): string {
-  const t = tr.ns(reasons);
-  if (v.kind === "wagon") return t("vehicleWagon", { number: String(v.number), mass: q.mass(v.massKg) });
-  return v.kind === "unit" ? t("vehicleUnit", { number: String(v.number) }) : t("vehicleOther", { number: String(v.number) });
 }
 
 function targetWords(tr: Translator, q: Quantities, tg: TargetRef, roll: boolean): string {
@@ -142,7 +131,7 @@ export function stepWhyText(tr: Translator, q: Quantities, w: StepWhy): string {
 
 /** A helper's call: the head takes its notch and calls the helper, who follows a few seconds later. */
 export function helperCallText(tr: Translator, c: HelperCall): string {
-  const t = tr.ns(guidance);
+  const t = tr.ns(reasons);
   const name = groupName(tr, c.place);
   const act = c.act === "take" ? t("actTake", { notch: String(c.notch) }) : c.act === "shut-off" ? t("actShutOff") : t("actEase", { notch: String(c.notch) });
   return t(c.stretch ? "helperCallStretch" : "helperCall", { head: String(c.headNotch), name, act, seconds: asGiven(tr, c.followS) });
@@ -150,141 +139,5 @@ export function helperCallText(tr: Translator, c: HelperCall): string {
 
 /** A helper's standing order in a step where its notch does not change. */
 export function helperHoldText(tr: Translator, notch: string): string {
-  return tr.ns(guidance)("helperHold", { notch });
-}
-
-/** What a limit checked. */
-export function limitWhatText(tr: Translator, q: Quantities, w: LimitWhat): string {
-  const t = tr.ns(reasons);
-  const f = q.force;
-  switch (w.code) {
-    case "gravity":
-      return t("whatGravity");
-    case "adhesion-path":
-      return t("whatAdhesion", { quantile: percent(tr, w.quantile), available: f(w.availableN), need: f(w.needN), speed: q.speed(w.speedMps), travel: q.length(w.travelM) });
-    case "power-path":
-      return t("whatPower", { available: f(w.availableN), need: f(w.needN), speed: q.speed(w.speedMps), travel: q.length(w.travelM) });
-    case "hold-rising":
-      return t("whatHoldRising", { locoBrake: f(w.locoBrakeN), power: f(w.powerN), pull: f(w.pullN) });
-    case "hold-falling":
-      return t("whatHoldFalling", { trainBrake: f(w.trainBrakeN), locoBrake: f(w.locoBrakeN), pull: f(w.pullN) });
-    case "coupler-tension":
-      return t("whatCouplerTension", { peak: f(w.peakN), limit: f(w.limitN), factor: asGiven(tr, w.factor) });
-    case "coupler-compression":
-      return t("whatCouplerCompression", { peak: f(w.peakN), limit: f(w.limitN), factor: asGiven(tr, w.factor) });
-    case "wheel-climb":
-      return t("whatWheelClimb", {
-        ratio: fixed(tr, w.ratio, 2),
-        vehicle: vehicleText(tr, q, w.vehicle),
-        force: f(w.forceN),
-        radius: q.length(w.radiusM),
-        allowance: fixed(tr, w.allowance, 2),
-        nadal: fixed(tr, w.nadal, 2),
-        margin: asGiven(tr, w.nadalMargin),
-      });
-    case "wheel-climb-none":
-      return t("whatWheelClimbNone");
-    case "distance": {
-      const key = w.power ? (w.orTarget ? "whatDistancePowerOrTarget" : "whatDistancePower") : w.orTarget ? "whatDistanceGravityOrTarget" : "whatDistanceGravity";
-      return t(key, { travel: q.length(w.travelM), clear: q.length(w.clearM) });
-    }
-    case "target-reached":
-      return t("whatTargetReached", { seconds: whole(tr, w.afterS) });
-    case "target-not-reached":
-      return t("whatTargetNotReached", { share: percent(tr, w.share) });
-  }
-}
-
-/** The band within which a limit exceeded is marginal. */
-export function bandWhatText(tr: Translator, b: BandWhat): string {
-  const t = tr.ns(reasons);
-  switch (b.code) {
-    case "rail-quantile":
-      return t("bandRail", { quantile: percent(tr, b.quantile) });
-    case "no-reserve":
-      return t("bandNoReserve");
-    case "no-reserve-bound":
-      return t("bandNoReserveBound");
-    case "working-limit":
-      return t("bandWorkingLimit");
-    case "stretch-within-clear":
-      return t("bandStretch");
-    case "nadal-itself":
-      return t("bandNadal");
-  }
-}
-
-function changeText(tr: Translator, q: Quantities, c: ChangeLine): string {
-  const t = tr.ns(reasons);
-  switch (c.code) {
-    case "sand":
-      return t("changeSand", { margin: fixed(tr, c.margin, 2) });
-    case "better-rail":
-      return t(c.sand ? "changeBetterRailSand" : "changeBetterRail", { margin: fixed(tr, c.margin, 2) });
-    case "less-load":
-      return t("changeLessLoad", {
-        starts: q.massAtMost(c.startsKg),
-        marginal: c.marginalKg !== null ? t("lessLoadMarginal", { mass: q.massAtMost(c.marginalKg) }) : "",
-        scaled: c.scaled ? t("lessLoadScaled") : "",
-      });
-    case "less-load-none":
-      return t("changeLessLoadNone");
-    case "less-load-unsearched":
-      return t("changeLessLoadUnsearched");
-    case "assistance":
-      return t("changeAssistance");
-  }
-}
-
-/** A line of advice. */
-export function adviceText(tr: Translator, q: Quantities, a: AdviceLine): string {
-  const t = tr.ns(reasons);
-  const w = wordsOf(tr);
-  switch (a.code) {
-    case "limited-by":
-      return t("adviceLimitedBy", { limit: w.limit(a.limit), margin: fixed(tr, a.margin, 2), what: limitWhatText(tr, q, a.what) });
-    case "within-band":
-      return t("adviceWithinBand", { list: a.limits.map((l) => t("bandItem", { limit: w.limit(l.limit), band: bandWhatText(tr, l.band) })).join("; ") });
-    case "relaxed":
-      return t("adviceRelaxed", { quantile: percent(tr, a.quantile), oneIn: String(a.oneIn) });
-    case "changes":
-      return t("adviceChanges", { list: a.changes.map((c) => changeText(tr, q, c)).join("; ") });
-  }
-}
-
-const pascal = (code: string) => code.replace(/(^|-)([a-z])/g, (_m, _d: string, c: string) => c.toUpperCase());
-
-/** The "If wheels slip" card in words: what the driver does, what the protection does, what to do on a stall. */
-export function slipGuidanceText(tr: Translator, g: SlipGuidance): { driver: string[]; protection: string[]; stall: string[] } {
-  const t = tr.ns(guidance) as (key: string) => string;
-  return {
-    driver: g.driver.map((c) => t(`driver${pascal(c)}`)),
-    protection: g.protection.map((c) => t(`protection${pascal(c)}`)),
-    stall: g.stall.map((c) => t(`stall${pascal(c)}`)),
-  };
-}
-
-/** The headline for a step: hold, then what next if the slip keeps returning. */
-export function slipHeadlineText(tr: Translator, h: SlipHeadline): { hold: string; then: string } {
-  const t = tr.ns(guidance);
-  const hold = h.hold.code === "no-power" ? t("headNoPower") : t(h.hold.sand ? "headHoldSand" : "headHold", { notch: String(h.hold.notch) });
-  const then = h.then.code === "take-power" ? t(h.then.sand ? "headTakePowerSand" : "headTakePower") : t(h.then.code === "shut-off" ? "headShutOff" : "headDrop", { notch: String(h.then.notch) });
-  return { hold, then };
-}
-
-/** An assistance option's note: how the added units are driven, the peak compression, shoving from the rear. */
-export function assistanceNoteText(tr: Translator, q: Quantities, n: AssistanceNote): string {
-  const t = tr.ns(reasons);
-  if (n.code === "all-at-head") return t("noteAllAtHead");
-  const place = (a: AddedUnits) => (a.position === "head" ? t("atHead") : a.position === "rear" ? t("atRear") : t("atAfterWagon", { wagon: String(a.position.afterWagon) }));
-  const control = t(n.control === "with-head" ? "controlWithHead" : n.control === "remote" ? "controlRemote" : "controlHelper");
-  const units = n.added.reduce((s, a) => s + a.count, 0);
-  const who =
-    n.added.length > 1
-      ? t("noteUnitsMany", { list: n.added.map((a) => t("noteCountAt", { count: String(a.count), place: place(a) })).join(", "), control })
-      : units === 1
-        ? t("noteUnitOne", { place: place(n.added[0]!), control })
-        : t("noteUnitsSame", { count: String(units), place: place(n.added[0]!), control });
-  const where = n.where === null ? "" : t(n.where === "head" ? "nearHead" : n.where === "mid" ? "midTrain" : "nearRear");
-  return [who, t("notePeak", { peak: q.force(n.peakN), where, coupling: String(n.coupling), couplings: String(n.couplings) }), n.rear ? t("noteShoving") : ""].filter((s) => s.length > 0).join(" ");
+  return tr.ns(reasons)("helperHold", { notch });
 }

@@ -7,7 +7,8 @@ import type { AddedUnits } from "../core/dispatch/assistPlacement.js";
 import type { ConditionMargin } from "../core/dispatch/conditionMargins.js";
 import type { DividedTrain } from "../core/dispatch/divideTrain.js";
 import type { LoadTableRow } from "../core/dispatch/loadTable.js";
-import { assistanceNoteText, splitName } from "../i18n/renderLines.js";
+import { splitName } from "../i18n/renderLines.js";
+import { assistanceNoteText } from "../i18n/renderAssistNote.js";
 import { ENGLISH, ENGLISH_SI, lineReport } from "./lineReport.js";
 import { r, type AssistanceReport, type AssistanceSearchReport, type ConditionMarginReport, type DivideReport } from "./report.js";
 

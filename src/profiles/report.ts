@@ -4,7 +4,9 @@
  */
 import { caseCautions, STANDARD_CAUTIONS, type Caution } from "../core/planner/cautions.js";
 import { cautionText } from "../i18n/render.js";
-import { adviceText, bandWhatText, groupName, helperCallText, limitWhatText, slipGuidanceText, stepWhyText, vehicleText } from "../i18n/renderLines.js";
+import { groupName, helperCallText, stepWhyText } from "../i18n/renderLines.js";
+import { adviceText, bandWhatText, limitWhatText, vehicleText } from "../i18n/renderAdvice.js";
+import { slipGuidanceText } from "../i18n/renderSlip.js";
 import { ENGLISH, ENGLISH_SI, lineReport } from "./lineReport.js";
 import type { GroupPlace } from "../core/planner/lines.js";
 import type { PlanResult, PlanStep, SlipGuidance } from "../core/planner/types.js";

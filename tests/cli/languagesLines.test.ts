@@ -89,8 +89,8 @@ describe("the planner's lines on the command line", () => {
   it("the If wheels slip card in each language", async () => {
     const { en, hu, de } = await plan("--demo");
     expect(en).toContain(guidance.en.driverHoldNotch.slice(0, 40));
-    expect(hu).toContain(guidanceHu.driverHoldNotch.slice(0, 40));
-    expect(de).toContain(guidanceDe.driverHoldNotch.slice(0, 40));
+    expect(hu).toContain((guidanceHu.driverHoldNotch as string).slice(0, 40));
+    expect(de).toContain((guidanceDe.driverHoldNotch as string).slice(0, 40));
     for (const t of [hu, de]) expect(t).not.toContain(guidance.en.driverHoldNotch.slice(0, 30));
   });
 

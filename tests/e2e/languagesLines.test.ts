@@ -73,19 +73,19 @@ describe("the planner's lines on screen in three languages", () => {
       await page.screenshot({ path: join(SHOTS, `lines-${lang}-start-plan.png`) });
       // Cab steps: the slip card of the first step, in the language on screen.
       await go("cab-steps");
-      await page.getByRole("button", { name: st.ifWheelsSlip }).click();
-      const dialog = page.getByRole("dialog", { name: st.ifWheelsSlip });
+      await page.getByRole("button", { name: st.ifWheelsSlip as string }).click();
+      const dialog = page.getByRole("dialog", { name: st.ifWheelsSlip as string });
       await dialog.waitFor();
       const notch = ((await page.locator(".cab-notch-value").textContent()) ?? "").trim();
       const hold = ((await dialog.locator(".slip-hold").textContent()) ?? "").trim();
-      expect(hold, lang).toMatch(notch === "0" ? new RegExp(g.headNoPower) : new RegExp(`${notch}\\b`));
+      expect(hold, lang).toMatch(notch === "0" ? new RegExp(g.headNoPower as string) : new RegExp(`${notch}\\b`));
       expect(hold, lang).not.toMatch(/Hold notch|No power/);
       const text = (await dialog.textContent()) ?? "";
       expect(text, lang).toContain(g.driverHoldNotch as string);
       expect(text, lang).toContain(g.protectionCutsPower as string);
       expect(text, lang).not.toContain(guidance.en.driverHoldNotch);
       await page.screenshot({ path: join(SHOTS, `lines-${lang}-slip-card.png`) });
-      await dialog.getByRole("button", { name: st.close }).first().click();
+      await dialog.getByRole("button", { name: st.close as string }).first().click();
       await dialog.waitFor({ state: "detached" });
     }
     await go("settings");

@@ -11,18 +11,10 @@ import type { AssistanceNote } from "../../src/core/dispatch/assistance.js";
 import type { AdviceLine, BandWhat, ChangeLine, HelperCall, LimitWhat, SlipDriverLine, SlipHeadline, SlipProtectionLine, SlipStallLine, StepWhy, WhyLine } from "../../src/core/planner/lines.js";
 import { de } from "../../src/i18n/de/index.js";
 import { hu } from "../../src/i18n/hu/index.js";
-import {
-  adviceText,
-  assistanceNoteText,
-  bandWhatText,
-  helperCallText,
-  limitWhatText,
-  siQuantities,
-  slipGuidanceText,
-  slipHeadlineText,
-  stepWhyText,
-  whyLineText,
-} from "../../src/i18n/renderLines.js";
+import { helperCallText, siQuantities, stepWhyText, whyLineText } from "../../src/i18n/renderLines.js";
+import { adviceText, bandWhatText, limitWhatText } from "../../src/i18n/renderAdvice.js";
+import { slipGuidanceText, slipHeadlineText } from "../../src/i18n/renderSlip.js";
+import { assistanceNoteText } from "../../src/i18n/renderAssistNote.js";
 import { createTranslator, type Translator } from "../../src/i18n/translator.js";
 
 type ByCode<T extends { code: string }> = { [K in T["code"]]: Extract<T, { code: K }> };

@@ -2,7 +2,10 @@
 import type { AssistanceNote } from "../../src/core/dispatch/assistance.js";
 import type { AdviceLine, LimitWhat, SlipHeadline, StepWhy } from "../../src/core/planner/lines.js";
 import type { SlipGuidance } from "../../src/core/planner/types.js";
-import { adviceText, assistanceNoteText, groupName, limitWhatText, siQuantities, slipGuidanceText, slipHeadlineText, stepWhyText } from "../../src/i18n/renderLines.js";
+import { groupName, siQuantities, stepWhyText } from "../../src/i18n/renderLines.js";
+import { adviceText, limitWhatText } from "../../src/i18n/renderAdvice.js";
+import { slipGuidanceText, slipHeadlineText } from "../../src/i18n/renderSlip.js";
+import { assistanceNoteText } from "../../src/i18n/renderAssistNote.js";
 import { createTranslator } from "../../src/i18n/translator.js";
 
 export const EN = createTranslator("en", null);

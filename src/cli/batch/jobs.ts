@@ -3,7 +3,7 @@
  * verdict and the cheapest assistance) and finding the largest startable mass of one case. Jobs and results
  * are plain data (they cross a thread boundary by structured clone); results are already in output units.
  */
-import { adviceText } from "../../i18n/renderLines.js";
+import { adviceText } from "../../i18n/renderAdvice.js";
 import { ENGLISH, ENGLISH_SI } from "../../profiles/lineReport.js";
 import { searchAssistance } from "../../core/dispatch/assistance.js";
 import { goesAt, planStart, startableMasses, startsAt } from "../../core/planner/index.js";

@@ -6,7 +6,8 @@ import { cli } from "../../i18n/en/cli.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
 import { cliTr, cliWords } from "../lang.js";
 import { lineOf } from "../../profiles/lineReport.js";
-import { assistanceNoteText, siQuantities } from "../../i18n/renderLines.js";
+import { siQuantities } from "../../i18n/renderLines.js";
+import { assistanceNoteText } from "../../i18n/renderAssistNote.js";
 import type { AssistanceNote } from "../../core/dispatch/assistance.js";
 
 /** The verdict as the printout's headline shows it: "STARTS", "NEEDS ASSISTANCE". */

@@ -10,8 +10,10 @@ import { wrap } from "./wrap.js";
 import { describeOverrides } from "../caseOverrides.js";
 import { printable } from "../../profiles/text.js";
 import { lineOf } from "../../profiles/lineReport.js";
-import { adviceText, groupName, helperCallText, limitWhatText, siQuantities, slipGuidanceText, stepWhyText, vehicleText } from "../../i18n/renderLines.js";
-import { reasons } from "../../i18n/en/reasons.js";
+import { groupName, helperCallText, siQuantities, stepWhyText } from "../../i18n/renderLines.js";
+import { adviceText, limitWhatText, vehicleText } from "../../i18n/renderAdvice.js";
+import { slipGuidanceText } from "../../i18n/renderSlip.js";
+import { advice as adviceWords } from "../../i18n/en/advice.js";
 import type { AdviceLine, GroupPlace, HelperCall, LimitWhat, StepWhy, VehicleRef } from "../../core/planner/lines.js";
 
 export { wrap };
@@ -19,7 +21,7 @@ export { wrap };
 export function renderPlan(p: PlanReport): string {
   const t = cliTr().ns(cli);
   const w = cliWords();
-  const rs = cliTr().ns(reasons);
+  const rs = cliTr().ns(adviceWords);
   // The planner's lines in this run's language, from the codes the report carries beside its English text.
   const q = siQuantities(cliTr());
   const group = (g: { name: string; place?: GroupPlace }) => (g.place ? groupName(cliTr(), g.place) : g.name);

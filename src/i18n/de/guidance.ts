@@ -30,10 +30,4 @@ export const guidanceDe = translation<typeof guidance.en>()({
   headTakePowerSand: "Schleudern die Räder beim Aufschalten, diese Fahrstufe halten, während der Schutz eingreift, und sanden.",
   headShutOff: "Schleudert weiter in Fahrstufe {notch}: abschalten, Strom abfallen lassen und neu anfahren.",
   headDrop: "Schleudert weiter: zurück auf Fahrstufe {notch}.",
-  helperCall: "Die Spitze schaltet zuerst auf Fahrstufe {head} und ruft die {name} per Funk; die {name} {act} etwa {seconds} s später und bestätigt.",
-  helperCallStretch: "Die Spitze schaltet zuerst auf Fahrstufe {head} und ruft die {name} per Funk; die {name} {act} etwa {seconds} s später, oder sobald die Spitze meldet, dass der Zug rollt, je nachdem, was zuerst eintritt, und bestätigt.",
-  actTake: "schaltet auf Fahrstufe {notch}",
-  actShutOff: "schaltet ab",
-  actEase: "schaltet zurück auf Fahrstufe {notch}",
-  helperHold: "Fahrstufe {notch} halten; jeden Wechsel sagt der Triebfahrzeugführer an der Spitze per Funk an.",
 });

@@ -11,5 +11,7 @@ import { cautionsDe } from "./cautions.js";
 import { wordsDe } from "./words.js";
 import { reasonsDe } from "./reasons.js";
 import { guidanceDe } from "./guidance.js";
+import { assistNotesDe } from "./assistNotes.js";
+import { adviceDe } from "./advice.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe };

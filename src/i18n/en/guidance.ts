@@ -36,11 +36,4 @@ export const guidance = namespace("guidance", {
   headTakePowerSand: "If the wheels slip when you take power, hold that notch while the protection acts, and sand.",
   headShutOff: "Still slipping in notch {notch}: shut off, let the current fall, and start again.",
   headDrop: "Still slipping: drop to notch {notch}.",
-  // A helper's notch change, and a helper's standing order.
-  helperCall: "The head takes notch {head} first and calls the {name} by radio; the {name} {act} about {seconds} s later, and confirms.",
-  helperCallStretch: "The head takes notch {head} first and calls the {name} by radio; the {name} {act} about {seconds} s later, or as soon as the head reports the train moving, whichever comes first, and confirms.",
-  actTake: "takes notch {notch}",
-  actShutOff: "shuts off",
-  actEase: "eases to notch {notch}",
-  helperHold: "Hold notch {notch}; the head driver calls any change by radio.",
 });

@@ -13,5 +13,7 @@ import { steps } from "./steps.js";
 import { words } from "./words.js";
 import { reasons } from "./reasons.js";
 import { guidance } from "./guidance.js";
+import { assistNotes } from "./assistNotes.js";
+import { advice } from "./advice.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice] as const;

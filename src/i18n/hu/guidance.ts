@@ -30,10 +30,4 @@ export const guidanceHu = translation<typeof guidance.en>()({
   headTakePowerSand: "Ha a kerekek a vonóerő felvételekor perdülnek, tartsa azt a fokozatot, amíg a védelem dolgozik, és homokoljon.",
   headShutOff: "Ha a(z) {notch}. fokozatban tovább perdül: kapcsoljon ki, hagyja leesni az áramot, és induljon újra.",
   headDrop: "Ha tovább perdül: vissza a(z) {notch}. fokozatra.",
-  helperCall: "Az elöl levő mozdony előbb a(z) {head}. fokozatra kapcsol, és rádión hívja ezt: {name}; az kb. {seconds} s múlva {act}, és visszaigazolja.",
-  helperCallStretch: "Az elöl levő mozdony előbb a(z) {head}. fokozatra kapcsol, és rádión hívja ezt: {name}; az kb. {seconds} s múlva {act} — vagy amint az elöl levő jelenti, hogy a vonat mozog, ha az előbb van —, és visszaigazolja.",
-  actTake: "a(z) {notch}. fokozatra kapcsol",
-  actShutOff: "kikapcsol",
-  actEase: "visszakapcsol a(z) {notch}. fokozatra",
-  helperHold: "Tartsa a(z) {notch}. fokozatot; minden változást az elöl levő mozdonyvezető jelez rádión.",
 });

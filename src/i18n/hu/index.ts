@@ -11,5 +11,7 @@ import { cautionsHu } from "./cautions.js";
 import { wordsHu } from "./words.js";
 import { reasonsHu } from "./reasons.js";
 import { guidanceHu } from "./guidance.js";
+import { assistNotesHu } from "./assistNotes.js";
+import { adviceHu } from "./advice.js";
 
-export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu, dispatch: dispatchHu, cautions: cautionsHu, reasons: reasonsHu, guidance: guidanceHu };
+export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu, dispatch: dispatchHu, cautions: cautionsHu, reasons: reasonsHu, guidance: guidanceHu, assistNotes: assistNotesHu, advice: adviceHu };

@@ -15,7 +15,9 @@ import { Icon } from "../../components/Icon.js";
 import { VerdictBanner, VerdictIcon } from "../../components/VerdictBanner.js";
 import { words } from "../../words.js";
 import { duration, margin, percentOf, show, type UnitSystem } from "../../format.js";
-import { assistanceNoteWords, splitWords } from "../../lines.js";
+import { appQuantities, splitWords } from "../../lines.js";
+import { assistanceNoteText } from "../../../i18n/renderAssistNote.js";
+import { tr } from "../../i18n.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { Cautions } from "../shared/Cautions.js";
 import { divideLine, limitWord, optionHeadline, placeWords, REASON_SHORT } from "../shared/words.js";
@@ -235,7 +237,7 @@ function OptionCard(props: { option: AssistanceOptionData; rank: number; units: 
           </div>
         </Show>
       </dl>
-      <p class="option-note">{assistanceNoteWords(o().note, props.units)}</p>
+      <p class="option-note">{assistanceNoteText(tr, appQuantities(props.units), o().note)}</p>
       <div class="option-actions">
         <button type="button" class="button" disabled={!props.canTry} onClick={() => props.onTry(o())}>
           <Icon name="add" /> Plan with this help

@@ -12,7 +12,7 @@ import { localiseText, type UnitSystem } from "../../format.js";
 import { notchText } from "../../steps.js";
 import { steps } from "../../../i18n/en/steps.js";
 import { tr } from "../../i18n.js";
-import { slipCardWords, slipHeadlineWords } from "../../lines.js";
+import { slipGuidanceText, slipHeadlineText } from "../../../i18n/renderSlip.js";
 
 const t = tr.ns(steps);
 
@@ -37,7 +37,7 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
   });
   onCleanup(() => document.removeEventListener("keydown", onKey));
   const g = () => props.guidance;
-  const words = () => slipCardWords(g());
+  const words = () => slipGuidanceText(tr, g());
   const empty = () => g().protection.length + g().driver.length + g().stall.length === 0;
   return (
     <div class="slip-card" role="dialog" aria-modal="true" aria-labelledby="slip-h">
@@ -51,7 +51,7 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
       </div>
       <Show when={props.step}>
         {(s) => {
-          const h = () => slipHeadlineWords(slipHeadline(s().notch, s().fallbackNotch, props.sanders ?? true));
+          const h = () => slipHeadlineText(tr, slipHeadline(s().notch, s().fallbackNotch, props.sanders ?? true));
           const drops = () => s().notch > 0 && s().fallbackNotch > 0 && s().fallbackNotch < s().notch;
           return (
             <div class="slip-now">
