@@ -325,7 +325,7 @@ export function evaluate(m: TrainModel, s: DynamicsState, dt: number, kickH = 0)
  * Hysteretic gear force at deflection e (magnitude, m): the previous force moved along the steep
  * change-over line, then held between the unloading and loading curves (PHYSICS.md §4).
  */
-function gearForce(prevF: number, prevE: number, e: number, travel: number, rated: number, lin: number, preload: number, unloadRatio: number, kTransition: number): number {
+export function gearForce(prevF: number, prevE: number, e: number, travel: number, rated: number, lin: number, preload: number, unloadRatio: number, kTransition: number): number {
   let xi = e / travel;
   if (xi > 1) xi = 1;
   let load = rated * xi * (lin + (1 - lin) * xi);
@@ -337,7 +337,7 @@ function gearForce(prevF: number, prevE: number, e: number, travel: number, rate
 }
 
 /** Traction: effort follows the notch with a lag, limited by adhesion; the slip protection holds it at what the rails give. */
-function updateTraction(m: TrainModel, s: DynamicsState, dt: number): void {
+export function updateTraction(m: TrainModel, s: DynamicsState, dt: number): void {
   if (m.nl === 0) return;
   if (dt !== s.lagDt) {
     s.lagDt = dt;

@@ -6,6 +6,7 @@
 import { adhesionSpeedFactor, slipRisk } from "../physics/adhesion.js";
 import { applyBrakes, createState, evaluate, step, type DynamicsState } from "./dynamics.js";
 import { CONTROL_INTERVAL_S, integratorSteps, stepDividing, type TrainModel } from "../train/trainModel.js";
+import { SETTLE_AFTER_CHANGE_S, SWAY_WINDOW_S, maySettle, measureSway, mustUnsettle, settle, settledStep, unsettle, type Settled } from "./settled.js";
 
 /** What a controller (a driver, or the planner's policy) can observe. */
 export interface Observation {
@@ -107,8 +108,19 @@ export class Run {
   private intervals = 0;
   /** Step to change to once the run-out has passed (0: none pending). */
   private rollingStepS: number;
-  /** Steps actually integrated (quiescent intervals are skipped in one evaluation). */
+  /** Steps actually integrated (quiescent intervals are skipped in one evaluation; a settled interval is one). */
   steps = 0;
+  /** Run the train as one mass whenever it has settled (settled.ts); off unless asked for. */
+  private settleWhenSteady = false;
+  /** The settled train while it runs as one (null: the full chain). */
+  private settled: Settled | null = null;
+  /** The notches of the last interval and when they last changed, s. */
+  private notchSeen: Int32Array;
+  private notchChangedS = -Infinity;
+  /** Each coupling's quasi-static force and the sway about it measured since `swayFromS`, N. */
+  private meanScratch: Float64Array;
+  private sway: Float64Array;
+  private swayFromS = Infinity;
 
   constructor(
     readonly m: TrainModel,
@@ -131,6 +143,9 @@ export class Run {
     this.waiting = Int32Array.from({ length: m.n }, (_, i) => i);
     this.waitingCount = m.n;
     this.lastSlipCount = new Int32Array(m.nl);
+    this.notchSeen = new Int32Array(m.nl);
+    this.meanScratch = new Float64Array(Math.max(0, m.n - 1));
+    this.sway = new Float64Array(Math.max(0, m.n - 1));
     this.openEpisode = Array.from({ length: m.nl }, () => null);
     this.series = emptySeries(256);
     applyBrakes(m, s, brakes.trainBrakeReleaseS, brakes.locoBrakeReleaseS);
@@ -152,6 +167,19 @@ export class Run {
     this.stepsPerInterval = Math.ceil(this.controlIntervalS / dtS - 1e-9);
     this.dt = this.controlIntervalS / this.stepsPerInterval;
     if (this.rollingStepS <= this.dt) this.rollingStepS = 0;
+  }
+
+  /**
+   * From now on run the train as one mass whenever it has settled after the last notch change, and as the
+   * full chain whenever it has not (settled.ts). Not with the energy ledger (the one mass keeps none).
+   */
+  runAsOneWhenSettled(): void {
+    if (!this.s.energy) this.settleWhenSteady = true;
+  }
+
+  /** The train runs as one mass now. */
+  get runningAsOne(): boolean {
+    return this.settled !== null;
   }
 
   /** Change when the locomotive brake comes off (it must not be in the past). */
@@ -184,7 +212,12 @@ export class Run {
     const m = this.m;
     const s = this.s;
     const steps = this.stepsPerInterval;
-    if (this.quiescent()) {
+    this.followNotches();
+    if (this.settled) {
+      settledStep(m, s, this.settled, this.lead, this.controlIntervalS);
+      this.afterStep();
+      this.steps++;
+    } else if (this.quiescent()) {
       // Everything stands and is held: only brakes and the effort lag change. One evaluation over the
       // interval finds the moment (to within the interval) when something breaks away.
       const span = this.controlIntervalS;
@@ -209,6 +242,45 @@ export class Run {
       this.setStep(this.rollingStepS);
       this.rollingStepS = 0;
     }
+    if (this.settleWhenSteady && !this.settled && this.mayRunAsOne()) this.measureOrSettle();
+  }
+
+  /** Note a notch change; the settled train goes back to the chain for it (and when slow or near a slack). */
+  private followNotches(): void {
+    const s = this.s;
+    for (let k = 0; k < this.m.nl; k++) {
+      if (s.notch[k] !== this.notchSeen[k]) {
+        this.notchSeen.set(s.notch);
+        this.notchChangedS = s.t;
+        this.swayFromS = Infinity;
+        break;
+      }
+    }
+    if (this.settled && mustUnsettle(this.m, s, this.settled, this.lead)) {
+      unsettle(this.m, s, this.settled, this.lead);
+      this.settled = null;
+    }
+  }
+
+  /**
+   * Measure the chain's sway about its quasi-static forces over a window; at the window's end run the
+   * train as one if that hides no peak (settled.ts), else measure a fresh window.
+   */
+  private measureOrSettle(): void {
+    const s = this.s;
+    if (s.t < this.swayFromS) {
+      this.swayFromS = s.t;
+      this.sway.fill(0);
+    }
+    measureSway(this.m, s, this.meanScratch, this.sway);
+    if (s.t - this.swayFromS < SWAY_WINDOW_S) return;
+    if (maySettle(this.m, s, this.lead, this.meanScratch, this.sway)) this.settled = settle(this.m, s, this.lead, this.meanScratch, this.sway);
+    this.swayFromS = Infinity;
+  }
+
+  /** Every vehicle moving, the brakes off, and the last notch change long enough ago for its surge to pass. */
+  private mayRunAsOne(): boolean {
+    return this.startedCount === this.m.n && this.s.t > this.brakesDoneS && this.s.t - this.notchChangedS >= SETTLE_AFTER_CHANGE_S;
   }
 
   /** Nothing moves, nothing accelerates, the effort is not changing. */
@@ -335,6 +407,9 @@ export class Run {
     r.waiting = this.waiting.slice();
     r.episodes = this.episodes.map((e) => ({ ...e }));
     r.lastSlipCount = this.lastSlipCount.slice();
+    r.notchSeen = this.notchSeen.slice();
+    r.sway = this.sway.slice();
+    r.meanScratch = this.meanScratch.slice();
     r.openEpisode = this.openEpisode.map((e) => (e ? (r.episodes[this.episodes.indexOf(e)] ?? null) : null));
     r.series = copySeries(this.series);
     return r;

@@ -30,6 +30,8 @@ export interface SimulateOptions {
   stopWhen?: (obs: Observation) => boolean;
   onProgress?: (fraction: number) => void;
   shouldStop?: () => boolean;
+  /** Run the train as one mass while it is settled, after `fromS` (settled.ts). */
+  runAsOneWhenSettled?: { fromS: number };
 }
 
 /** The decimated time series of a run. */
@@ -73,7 +75,9 @@ export function simulate(m: TrainModel, controls: Controls, opts: SimulateOption
   let stoppedBy: SimResult["stoppedBy"] = "duration";
   const intervals = Math.ceil(opts.durationS / run.controlIntervalS - 1e-9);
   const progressEvery = Math.max(1, Math.floor(intervals / 50));
+  const settleFromS = opts.runAsOneWhenSettled?.fromS ?? Infinity;
   for (let k = 1; k <= intervals; k++) {
+    if (run.s.t >= settleFromS - 1e-9) run.runAsOneWhenSettled();
     run.advanceInterval();
     const obs = run.observe();
     if (opts.stopWhen?.(obs)) {

@@ -12,7 +12,7 @@ import { massCeilingKg, startableMasses } from "./startableMass.js";
 import { gradeAt } from "../physics/track.js";
 import type { StartCase } from "../train/types.js";
 import type { PlannerContext } from "./context.js";
-import { HELPER_FOLLOW_S, brakeSchedule, type SearchResult } from "./search.js";
+import { HELPER_FOLLOW_S, brakeSchedule, runsAsOneWhenSettled, type SearchResult } from "./search.js";
 import type { StepRecord } from "./branch.js";
 import { planSteps } from "./steps.js";
 import type { PlanOptions, PlanResult, PlanSeries, PlanStep } from "./types.js";
@@ -226,7 +226,9 @@ function verify(ctx: PlannerContext, r: SearchResult): NonNullable<PlanResult["v
   // Slips and coupler peaks come with notch changes: verify through the last change and a minute after it.
   const lastChange = r.branch.steps[r.branch.steps.length - 1]!.startS;
   const end = Math.min(r.branch.run.s.t, lastChange + 60);
-  const res = simulate(model, sequenceControls(seq, brakeSchedule(ctx)), { durationS: end });
+  // The same model as the plan's own run: the settled train as one mass after the build-up.
+  const fromS = r.buildEndS ?? r.powerS;
+  const res = simulate(model, sequenceControls(seq, brakeSchedule(ctx)), { durationS: end, ...(runsAsOneWhenSettled() ? { runAsOneWhenSettled: { fromS } } : {}) });
   return {
     adhesionQuantile: q,
     slipped: res.slipEpisodes.length > 0,

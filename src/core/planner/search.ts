@@ -93,6 +93,24 @@ function levelOf(b: Branch): number {
  */
 export const HELPER_FOLLOW_S = 3;
 
+/**
+ * The run after the build-up: once the surge of each notch change has passed and the train's relative
+ * motion has died down it runs as one mass (dynamics/settled.ts), back to the full chain for every notch
+ * change. On by default, for the plan and every search alike; off only to compare with the full chain
+ * throughout (tests/core/settled.test.ts, the benchmark).
+ */
+let settleInAccelerate = true;
+
+/** Run the plans after this with the settled train as one mass (true, the default) or the full chain throughout. */
+export function setRunAsOneWhenSettled(on: boolean): void {
+  settleInAccelerate = on;
+}
+
+/** Whether plans run the settled train as one mass. */
+export function runsAsOneWhenSettled(): boolean {
+  return settleInAccelerate;
+}
+
 /** Run the search for a case. */
 export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): SearchResult {
   const check = () => {
@@ -411,6 +429,8 @@ function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numbe
   // Stretched and rolling, no coupling goes in or out of its slack any more: the stability-limited step
   // is enough (the accuracy limit is for slack engagement).
   if (ctx.startKind === "power") b.run.setStep(Math.max(b.run.dt, stabilityTimeStep(ctx.model)));
+  // Once the surge of each notch change has passed, the train runs as one mass (dynamics/settled.ts).
+  if (settleInAccelerate) b.run.runAsOneWhenSettled();
   const capped = { hit: false };
   const seg = new Int32Array(ctx.model.n);
   let reachedS: number | null = null;

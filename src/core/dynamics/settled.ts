@@ -1,0 +1,254 @@
+/**
+ * The settled train: once a stretched, rolling train's relative motion has died down, every vehicle moves
+ * with one speed and each coupling carries the quasi-static force T_j = Σ_{i≤j} (F_i − R_i − m_i·g·sin θ_i −
+ * m_i(1+γ_i)·a), a the whole train's acceleration (PHYSICS.md §5 with the vehicles' accelerations equal).
+ * Then one Newton's law for the whole train per control interval replaces the chain's hundreds of stiff
+ * steps, and the couplings' forces (their peaks, the wheel-climb check's buff) follow from the prefix sums.
+ *
+ * It is left for the full chain at once when anything could start a surge or a run-in: a notch change, the
+ * speed falling low, a coupling's force nearing zero (it would go into its slack). On the way back every
+ * coupling is given the deflection its gear needs for that force (the hysteresis followed from where the
+ * chain left it), so the chain carries on from the settled state without a spurious jolt.
+ */
+import { GRAVITY_MPS2 } from "../physics/constants.js";
+import { PRELOAD_RAMP_M } from "../physics/coupling.js";
+import { evaluate, gearForce, updateTraction, type DynamicsState } from "./dynamics.js";
+import type { TrainModel } from "../train/trainModel.js";
+
+/** Slowest speed at which the train may run as one, m/s: below it vehicles may stop and stick again. */
+export const SETTLED_MIN_SPEED_MPS = 1;
+/** Time after a notch change before the chain's remaining sway is measured: the surge's first passes, s. */
+export const SETTLE_AFTER_CHANGE_S = 4;
+/** Time the remaining sway is measured over before the train may run as one: two periods of a 150-wagon train's slowest mode, s. */
+export const SWAY_WINDOW_S = 10;
+/** The sway measured at the control intervals is taken this much larger (its crests fall between them), and never under 1 kN. */
+export const SWAY_ALLOWANCE = 1.1;
+export const SWAY_FLOOR_N = 1000;
+/** A coupling whose force, its sway included, may come within this of zero is near its slack: the full chain is needed, N. */
+export const SETTLED_COUPLING_MIN_N = 2000;
+
+/** The settled train's own state beside the chain's. */
+export interface Settled {
+  /** x_i − x_lead when the train settled, m. */
+  offsetM: Float64Array;
+  /** The notches it settled in: any change sends it back to the chain. */
+  notch: Int32Array;
+  /** Engaged side of each coupling when it settled (+1 draft, −1 buff). */
+  side: Int8Array;
+  /** The sway each coupling's force showed about its quasi-static force before it settled, N. */
+  swayN: Float64Array;
+  /** Each coupling's quasi-static force now (its force as reported adds the sway on its engaged side), N. */
+  meanN: Float64Array;
+  /** The sway on top of the quasi-static force could set a new peak, or a coupling nears its slack. */
+  leave: boolean;
+}
+
+/**
+ * The chain's quasi-static coupler forces into `out` (n − 1): F_j = F_{j−1} + net_j − m_j(1+γ_j)·a with a the
+ * whole train's acceleration, from the chain's own net external forces (every vehicle moving, so each
+ * vehicle's acceleration is exactly (F_{j−1} − F_j + net_j) / m_j(1+γ_j)).
+ */
+export function quasiStaticForces(m: TrainModel, s: DynamicsState, out: Float64Array): void {
+  const n = m.n;
+  let effMass = 0;
+  let momentum = 0;
+  for (let i = 0; i < n; i++) {
+    effMass += m.effMassKg[i]!;
+    momentum += m.effMassKg[i]! * s.acc[i]!;
+  }
+  const a = momentum / effMass;
+  let fq = 0;
+  let fPrev = 0;
+  for (let j = 0; j < n - 1; j++) {
+    const f = s.couplerF[j]!;
+    fq += s.acc[j]! * m.effMassKg[j]! - fPrev + f - m.effMassKg[j]! * a;
+    fPrev = f;
+    out[j] = fq;
+  }
+}
+
+/** Widen each coupling's measured sway by the chain's present departure from its quasi-static force. */
+export function measureSway(m: TrainModel, s: DynamicsState, mean: Float64Array, sway: Float64Array): void {
+  quasiStaticForces(m, s, mean);
+  for (let j = 0; j < m.n - 1; j++) {
+    const d = Math.abs(s.couplerF[j]! - mean[j]!);
+    if (d > sway[j]!) sway[j] = d;
+  }
+}
+
+/**
+ * May the train run as one now? Moving well above a crawl, every coupling engaged on the side of its
+ * quasi-static force and, with the sway measured, far enough from its slack, and no coupling's quasi-static
+ * force plus its sway beyond the peak it has already reached (so running as one hides no peak).
+ */
+export function maySettle(m: TrainModel, s: DynamicsState, lead: number, mean: Float64Array, sway: Float64Array): boolean {
+  if (s.v[lead]! < SETTLED_MIN_SPEED_MPS * 1.5) return false;
+  for (let i = 0; i < m.n; i++) if (s.v[i]! <= 0) return false;
+  quasiStaticForces(m, s, mean);
+  for (let j = 0; j < m.n - 1; j++) {
+    const side = s.engaged[j]!;
+    const f = side * mean[j]!;
+    const w = Math.max(SWAY_FLOOR_N, SWAY_ALLOWANCE * sway[j]!);
+    if (side === 0 || f - w < SETTLED_COUPLING_MIN_N) return false;
+    if (f + w > (side > 0 ? s.peakTensionN[j]! : s.peakCompressionN[j]!)) return false;
+  }
+  return true;
+}
+
+/** Begin running the train as one: the vehicles' places behind the lead kept as they are now. */
+export function settle(m: TrainModel, s: DynamicsState, lead: number, mean: Float64Array, measuredSway: Float64Array): Settled {
+  const n = m.n;
+  const offsetM = new Float64Array(n);
+  let effMass = 0;
+  let momentum = 0;
+  for (let i = 0; i < n; i++) {
+    offsetM[i] = s.x[i]! - s.x[lead]!;
+    effMass += m.effMassKg[i]!;
+    momentum += m.effMassKg[i]! * s.v[i]!;
+  }
+  // The train's speed is its momentum's: the vehicles' small spread averaged out.
+  s.v.fill(momentum / effMass);
+  const swayN = Float64Array.from(measuredSway, (w) => Math.max(SWAY_FLOOR_N, SWAY_ALLOWANCE * w));
+  return { offsetM, notch: s.notch.slice(), side: Int8Array.from(s.engaged), swayN, meanN: mean.slice(), leave: false };
+}
+
+/** The settled train must go back to the chain: a notch changed, it is slow, or its forces could matter. */
+export function mustUnsettle(m: TrainModel, s: DynamicsState, st: Settled, lead: number): boolean {
+  if (st.leave || s.v[lead]! < SETTLED_MIN_SPEED_MPS) return true;
+  for (let k = 0; k < m.nl; k++) if (s.notch[k] !== st.notch[k]) return true;
+  return false;
+}
+
+/**
+ * Advance the settled train by dt (kick–drift–kick on the one mass); the state's positions, speeds,
+ * accelerations, efforts and coupler forces updated as the chain would have them (each coupling's force its
+ * quasi-static force with the measured sway added on its engaged side: the crest the chain would reach).
+ */
+export function settledStep(m: TrainModel, s: DynamicsState, st: Settled, lead: number, dt: number): void {
+  const h = 0.5 * dt;
+  const n = m.n;
+  let v = s.v[lead]! + s.acc[lead]! * h;
+  const xLead = s.x[lead]! + v * dt;
+  s.t += dt;
+  const x = s.x;
+  const off = st.offsetM;
+  for (let i = 0; i < n; i++) x[i] = xLead + off[i]!;
+  s.v.fill(v);
+  updateTraction(m, s, dt);
+  const a = settledForces(m, s, st, v);
+  v += a * h;
+  s.v.fill(v);
+}
+
+/** The external forces at speed v, the train's acceleration and the coupler forces; returns the acceleration. */
+function settledForces(m: TrainModel, s: DynamicsState, st: Settled, v: number): number {
+  const n = m.n;
+  const x = s.x;
+  const seg = s.seg;
+  const net = s.acc; // each vehicle's net external force until the acceleration is known
+  const g = GRAVITY_MPS2;
+  const fade = m.fadeSpeedMps;
+  let total = 0;
+  let effMass = 0;
+  for (let i = 0; i < n; i++) {
+    const ch = m.chainage0M[i]! + x[i]!;
+    let k = seg[i]!;
+    while (ch >= m.segEndM[k]!) k++;
+    while (ch < m.segStartM[k]!) k--;
+    seg[i] = k;
+    const mass = m.massKg[i]!;
+    let res = m.davisA[i]! + (m.davisB[i]! + m.davisC[i]! * v) * v + mass * m.segCurveNPerKg[k]!;
+    if (v < fade) res += m.breakawayExcessN[i]! * (1 - v / fade);
+    const f = s.tractionN[i]! - mass * g * m.segSin[k]! - res - s.brakeN[i]!;
+    net[i] = f;
+    total += f;
+    effMass += m.effMassKg[i]!;
+  }
+  const a = total / effMass;
+  const F = s.couplerF;
+  const mean = st.meanN;
+  let maxT = s.intervalMaxTensionN;
+  let maxC = s.intervalMaxCompressionN;
+  let fq = 0;
+  for (let j = 0; j < n - 1; j++) {
+    fq += net[j]! - m.effMassKg[j]! * a;
+    mean[j] = fq;
+    const side = st.side[j]!;
+    const w = st.swayN[j]!;
+    const crest = side * fq + w;
+    if (side * fq - w < SETTLED_COUPLING_MIN_N) st.leave = true;
+    if (side > 0) {
+      F[j] = crest;
+      if (crest > maxT) maxT = crest;
+      if (crest > s.peakTensionN[j]!) {
+        st.leave = true;
+        s.peakTensionN[j] = crest;
+        s.peakTensionT[j] = s.t;
+      }
+    } else {
+      F[j] = -crest;
+      if (crest > maxC) maxC = crest;
+      if (crest > s.peakCompressionN[j]!) {
+        st.leave = true;
+        s.peakCompressionN[j] = crest;
+        s.peakCompressionT[j] = s.t;
+      }
+    }
+  }
+  s.intervalMaxTensionN = maxT;
+  s.intervalMaxCompressionN = maxC;
+  s.acc.fill(a);
+  return a;
+}
+
+/**
+ * Back to the chain: each coupling given the deflection at which its gear, followed from where the chain
+ * left it, carries the present quasi-static force; the vehicles placed accordingly behind the lead, all at
+ * the train's speed; the chain's forces and accelerations evaluated there.
+ */
+export function unsettle(m: TrainModel, s: DynamicsState, st: Settled, lead: number): void {
+  const n = m.n;
+  const x = s.x;
+  // Extension of each coupling for its force; then the places from the head, shifted to keep the lead's.
+  const xLead = x[lead]!;
+  x[0] = 0;
+  for (let j = 0; j < n - 1; j++) {
+    const side = st.side[j]!;
+    const e = deflectionFor(m, s, j, side * st.meanN[j]!, side > 0);
+    const ext = side * (m.halfSlackM[j]! + e);
+    x[j + 1] = x[j]! + m.ext0M[j]! - ext;
+  }
+  const shift = xLead - x[lead]!;
+  for (let i = 0; i < n; i++) x[i]! += shift;
+  evaluate(m, s, 0);
+}
+
+/** The gear deflection at which coupling j carries `forceN` on its side (draft or buff), the hysteresis followed from its last state; sets that state. */
+function deflectionFor(m: TrainModel, s: DynamicsState, j: number, forceN: number, draft: boolean): number {
+  const travel = draft ? m.draftTravelM[j]! : m.buffTravelM[j]!;
+  const rated = draft ? m.draftRatedN[j]! : m.buffRatedN[j]!;
+  const lin = draft ? m.draftLinear[j]! : m.buffLinear[j]!;
+  const preload = draft ? m.draftPreloadN[j]! : m.buffPreloadN[j]!;
+  const prevF = s.gearF[j]!;
+  const prevE = s.gearDefl[j]!;
+  const unload = m.unloadRatio[j]!;
+  const kT = m.transitionK[j]!;
+  const endK = m.endStopK[j]!;
+  const force = (e: number) => {
+    const gf = gearForce(prevF, prevE, e, travel, rated, lin, preload, unload, kT);
+    return e > travel ? gf + endK * (e - travel) : gf;
+  };
+  let lo = 0;
+  let hi = Math.max(prevE, PRELOAD_RAMP_M, travel);
+  while (force(hi) < forceN) hi *= 2;
+  // The force is non-decreasing in the deflection: bisect to well below a micrometre.
+  for (let it = 0; it < 60 && hi - lo > 1e-9; it++) {
+    const mid = 0.5 * (lo + hi);
+    if (force(mid) < forceN) lo = mid;
+    else hi = mid;
+  }
+  const e = hi;
+  s.gearF[j] = gearForce(prevF, prevE, e, travel, rated, lin, preload, unload, kT);
+  s.gearDefl[j] = e;
+  return e;
+}
