@@ -19,7 +19,7 @@ import type { TrainModel } from "../train/trainModel.js";
 export const SETTLED_MIN_SPEED_MPS = 1;
 /** Time after a notch change before the chain's remaining sway is measured: the surge's first passes, s. */
 export const SETTLE_AFTER_CHANGE_S = 4;
-/** Time the remaining sway is measured over before the train may run as one: two periods of a 150-wagon train's slowest mode, s. */
+/** Time the remaining sway is measured over before the train may run as one (a 150-wagon train's slowest mode swings in about 8 s), s. */
 export const SWAY_WINDOW_S = 10;
 /** The sway measured at the control intervals is taken this much larger (its crests fall between them), and never under 1 kN. */
 export const SWAY_ALLOWANCE = 1.1;
