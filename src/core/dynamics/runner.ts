@@ -408,6 +408,7 @@ export class Run {
     r.episodes = this.episodes.map((e) => ({ ...e }));
     r.lastSlipCount = this.lastSlipCount.slice();
     r.notchSeen = this.notchSeen.slice();
+    r.settled = this.settled ? { ...this.settled, meanN: this.settled.meanN.slice() } : null;
     r.sway = this.sway.slice();
     r.meanScratch = this.meanScratch.slice();
     r.openEpisode = this.openEpisode.map((e) => (e ? (r.episodes[this.episodes.indexOf(e)] ?? null) : null));
