@@ -14,7 +14,9 @@
  */
 import { afterEach, describe, expect, it } from "vitest";
 import { judge, type StartCase } from "../../src/core/index.js";
-import { setRunAsOneWhenSettled } from "../../src/core/planner/search.js";
+import { brakeSchedule, setRunAsOneWhenSettled } from "../../src/core/planner/search.js";
+import { notchSequence } from "../../src/core/planner/plan.js";
+import { continueRun, sequenceControls, simulate } from "../../src/core/dynamics/simulate.js";
 import { Run } from "../../src/core/dynamics/runner.js";
 import { modelFromCase } from "../../src/core/train/trainModel.js";
 import { GRAVITY_MPS2 } from "../../src/core/physics/constants.js";
@@ -109,5 +111,32 @@ describe("the settled train as one mass agrees with the full chain", () => {
       heads.push(behind);
     }
     expect(Math.max(...sways)).toBeLessThanOrEqual(0.1 * Math.max(...heads));
+  });
+});
+
+describe("the verifying re-run shares the plan's preparing", () => {
+  it("starting where the plan's preparing ended gives exactly the re-run from standing", () => {
+    // The reference is the re-run made from standing on the median rail (what the plan's verification was
+    // before it shared the preparing); with the brakes released and no slip, the better rail changes nothing.
+    const c = longTrainCase();
+    const d = judge(c);
+    const r = d.shown.search!;
+    const ctx = d.shown.ctx;
+    const median = modelFromCase(c, { adhesionQuantile: 0.5 });
+    const seq = notchSequence(ctx, r.branch.steps);
+    const controls = sequenceControls(seq, brakeSchedule(ctx));
+    const opts = { durationS: r.branch.steps[2]!.startS + 30 };
+    const fresh = simulate(median, controls, opts);
+    const prepared = r.prepared.cloneOnBetterRail(median);
+    expect(prepared).not.toBeNull();
+    const shared = continueRun(prepared!, controls, opts);
+    expect(shared.final).toEqual(fresh.final);
+    expect(shared.peakTensionN).toBe(fresh.peakTensionN);
+    expect(shared.peakCompressionN).toBe(fresh.peakCompressionN);
+    expect(Array.from(shared.couplerPeakTensionN)).toEqual(Array.from(fresh.couplerPeakTensionN));
+    expect(shared.slipEpisodes).toEqual(fresh.slipEpisodes);
+    expect(Array.from(shared.series.leadSpeedMps)).toEqual(Array.from(fresh.series.leadSpeedMps));
+    // A worse rail than the plan's is no such rail: no sharing.
+    expect(r.prepared.cloneOnBetterRail(modelFromCase(c, { adhesionQuantile: 0.01 }))).toBeNull();
   });
 });

@@ -398,6 +398,20 @@ export class Run {
     return worst;
   }
 
+  /**
+   * A deep copy that goes on with model `m`, which must be this run's model on another rail (only the
+   * units' adhesion differs). Its state so far is exactly what `m` would have given when the wheel-slip
+   * protection never acted in this run and `m`'s rail gives every unit at least as much: the adhesion limit
+   * is the one place the rail enters the dynamics. Null otherwise.
+   */
+  cloneOnBetterRail(m: TrainModel): Run | null {
+    if (m.n !== this.m.n || m.nl !== this.m.nl) return null;
+    for (let k = 0; k < m.nl; k++) if (this.s.slipCount[k]! > 0 || !(m.mu0[k]! >= this.m.mu0[k]!)) return null;
+    const r = this.clone();
+    (r as { m: TrainModel }).m = m;
+    return r;
+  }
+
   /** A deep copy that can be advanced independently. */
   clone(): Run {
     const r = Object.create(Run.prototype) as Run;

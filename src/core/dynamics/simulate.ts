@@ -66,6 +66,14 @@ export function simulate(m: TrainModel, controls: Controls, opts: SimulateOption
   if (opts.dt !== undefined) runOpts.dt = opts.dt;
   if (opts.trackEnergy) runOpts.trackEnergy = true;
   const run = Run.start(m, { trainBrakeReleaseS: controls.trainBrakeReleaseS, locoBrakeReleaseS: controls.locoBrakeReleaseS }, runOpts);
+  return continueRun(run, controls, opts);
+}
+
+/**
+ * Carry a run on through the controls until the duration (counted from the run's start), the stop
+ * condition or cancellation: `simulate` from a run already advanced the way the controls would have.
+ */
+export function continueRun(run: Run, controls: Controls, opts: SimulateOptions): SimResult {
   const setControls = (obs: Observation) => {
     const groups = controls.groupNotches?.(obs) ?? null;
     if (groups) run.setGroupNotches(groups);
@@ -76,7 +84,7 @@ export function simulate(m: TrainModel, controls: Controls, opts: SimulateOption
   const intervals = Math.ceil(opts.durationS / run.controlIntervalS - 1e-9);
   const progressEvery = Math.max(1, Math.floor(intervals / 50));
   const settleFromS = opts.runAsOneWhenSettled?.fromS ?? Infinity;
-  for (let k = 1; k <= intervals; k++) {
+  for (let k = Math.round(run.s.t / run.controlIntervalS) + 1; k <= intervals; k++) {
     if (run.s.t >= settleFromS - 1e-9) run.runAsOneWhenSettled();
     run.advanceInterval();
     const obs = run.observe();

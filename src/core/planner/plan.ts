@@ -5,7 +5,7 @@
  */
 import { caseCautions, STANDARD_CAUTIONS, type Caution } from "./cautions.js";
 import { modelFromCase } from "../train/trainModel.js";
-import { sequenceControls, simulate } from "../dynamics/simulate.js";
+import { continueRun, sequenceControls, simulate } from "../dynamics/simulate.js";
 import { sensitivity } from "./sensitivity.js";
 import { slipGuidance } from "./slip.js";
 import { massCeilingKg, startableMasses } from "./startableMass.js";
@@ -228,7 +228,12 @@ function verify(ctx: PlannerContext, r: SearchResult): NonNullable<PlanResult["v
   const end = Math.min(r.branch.run.s.t, lastChange + 60);
   // The same model as the plan's own run: the settled train as one mass after the build-up.
   const fromS = r.buildEndS ?? r.powerS;
-  const res = simulate(model, sequenceControls(seq, brakeSchedule(ctx)), { durationS: end, ...(runsAsOneWhenSettled() ? { runAsOneWhenSettled: { fromS } } : {}) });
+  const opts = { durationS: end, ...(runsAsOneWhenSettled() ? { runAsOneWhenSettled: { fromS } } : {}) };
+  // The preparing (brakes released, no power yet) is the plan's own when the slip protection never acted
+  // in it: the better rail changes nothing there, so the re-run starts where the plan's preparing ended.
+  const prepared = r.prepared.cloneOnBetterRail(model);
+  const controls = sequenceControls(seq, brakeSchedule(ctx));
+  const res = prepared ? continueRun(prepared, controls, opts) : simulate(model, controls, opts);
   return {
     adhesionQuantile: q,
     slipped: res.slipEpisodes.length > 0,

@@ -47,6 +47,8 @@ export interface SearchResult {
   /** A notch-up was held back because the rails would give no more or the train needed no more. */
   adhesionCapped: boolean;
   failure: null | "cannot-hold" | "cannot-start";
+  /** The run at the end of the preparing (brakes released, no power taken yet), for re-runs that share it. */
+  prepared: Run;
 }
 
 export interface SearchOptions {
@@ -138,6 +140,7 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
     stalled: false,
     adhesionCapped: false,
     failure: null,
+    prepared: run,
   };
   if (hold < 0) return { ...base, failure: "cannot-hold" };
 
