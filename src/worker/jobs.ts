@@ -150,7 +150,9 @@ export function runCheck(c: StartCase, o: CheckRequestOptions = {}, onProgress?:
 }
 
 function checkOf(c: StartCase, o: CheckRequestOptions, onProgress?: Progress): CheckAnswer {
-  const p = planStart(c, { skipMassSearch: true, onProgress: part(onProgress, 0, 0.3) });
+  // Nothing the check shows comes from the verifying re-run or the sensitivity table: neither is made (as in
+  // `taut check`), for the departure, its assistance option or its divided train.
+  const p = planStart(c, { skipMassSearch: true, skipVerification: true, skipSensitivity: true, onProgress: part(onProgress, 0, 0.3) });
   let a: AssistanceResult | null = null;
   if (p.verdict !== "starts") {
     a = searchAssistance(c, {
@@ -158,6 +160,7 @@ function checkOf(c: StartCase, o: CheckRequestOptions, onProgress?: Progress): C
       budget: CHECK_ASSISTANCE_BUDGET,
       divideBudget: CHECK_DIVIDE_BUDGET,
       maxFullPlans: 1,
+      reportedOnly: true,
       onProgress: part(onProgress, 0.3, 0.6),
       ...(o.helper ? { spec: o.helper } : {}),
     });

@@ -12,7 +12,8 @@ import { describe, expect, it } from "vitest";
 import { judge, largestStartableMassKg, massCeilingKg, startableMasses, type StartCase } from "../../src/core/index.js";
 import { searchAssistance } from "../../src/core/dispatch/assistance.js";
 import { withEvaluationMemo } from "../../src/core/planner/evaluationMemo.js";
-import { runJob, type CheckOutcome, type MassOutcome } from "../../src/cli/batch/jobs.js";
+import { CHECK_ASSISTANCE_BUDGET, CHECK_DIVIDE_BUDGET, runJob, type CheckOutcome, type MassOutcome } from "../../src/cli/batch/jobs.js";
+import { assistanceReport } from "../../src/profiles/assistanceReport.js";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { allDifferentDepartures } from "../bench/departures.js";
@@ -85,5 +86,37 @@ describe("plans shared within one piece of work change no answer", () => {
       runs: a.plannerRuns,
     });
     expect(summary(shared)).toEqual(summary(plain));
+  });
+});
+
+describe("the departures check's assistance against the full search (seeded departures)", () => {
+  // The check plans its option and its divided train without the verifying re-run and the sensitivity table
+  // it never reports, and shares plans with the mass search: the option it reports must be the one the full
+  // search (every plan complete, nothing shared) puts first, with the same figures, and the same divided train.
+  const cases = smallDepartures(14, 20)
+    .filter((c) => judge(c).verdict !== "starts")
+    .slice(0, 3);
+
+  const seen = { options: 0, divided: 0 };
+
+  it("draws departures that need help", () => {
+    expect(cases.length).toBe(3);
+  });
+
+  for (const [k, c] of cases.entries()) {
+    it(`departure ${k + 1}: the same cheapest option and divided train`, () => {
+      const full = searchAssistance(c, { budget: CHECK_ASSISTANCE_BUDGET, divideBudget: CHECK_DIVIDE_BUDGET, maxFullPlans: 1 });
+      const ref = assistanceReport(full, CHECK_ASSISTANCE_BUDGET + CHECK_DIVIDE_BUDGET);
+      const job = runJob({ kind: "check", case: c, masses: true }) as CheckOutcome;
+      expect(job.assistance).toEqual(ref.assistance[0] ?? null);
+      expect(job.divide).toEqual(ref.divide);
+      expect(job.searchCapped).toBe(!full.complete);
+      if (job.assistance) seen.options++;
+      if (job.divide) seen.divided++;
+    });
+  }
+
+  it("compared at least one option that works", () => {
+    expect(seen.options).toBeGreaterThan(0);
   });
 });

@@ -112,8 +112,9 @@ function massJob(c: StartCase, own?: Verdict, startsOnly?: boolean): MassOutcome
 function checkJob(job: Extract<Job, { kind: "check" }>): CheckOutcome {
   const t0 = performance.now();
   const c = job.case;
-  // The check reports no verification run (the plan's re-run on the median rail): not made.
-  const p = planStart(c, { skipMassSearch: true, skipVerification: true });
+  // The check reports no verification run (the plan's re-run on the median rail) and no sensitivity table:
+  // not made, here nor for the assistance option and the divided train's first part.
+  const p = planStart(c, { skipMassSearch: true, skipVerification: true, skipSensitivity: true });
   let assistance: AssistanceReport | null = null;
   let divide: DivideReport | null = null;
   let searchCapped = false;
@@ -123,6 +124,7 @@ function checkJob(job: Extract<Job, { kind: "check" }>): CheckOutcome {
       budget: CHECK_ASSISTANCE_BUDGET,
       divideBudget: CHECK_DIVIDE_BUDGET,
       maxFullPlans: 1,
+      reportedOnly: true,
       ...(job.helper ? { spec: job.helper } : {}),
     });
     const rep = assistanceReport(a, CHECK_ASSISTANCE_BUDGET + CHECK_DIVIDE_BUDGET);

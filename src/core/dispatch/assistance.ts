@@ -98,6 +98,12 @@ export interface AssistanceOptions {
   baseVerdict?: Verdict;
   /** Search for a divided train when no option works and the train needs assistance; default true. */
   divide?: boolean;
+  /**
+   * Plans of the options (and of the divided train's first part) without what the departures check never
+   * reports: the verifying re-run on the median rail and the sensitivity table. The verdicts, margins,
+   * coupler forces and times are the same (they come from the decision's plan, not from those).
+   */
+  reportedOnly?: boolean;
   shouldStop?: () => boolean;
   onProgress?: (fraction: number) => void;
 }
@@ -194,7 +200,7 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
         complete = false;
         break;
       }
-      const p = planStart(k.case, { ...planOpts, skipMassSearch: true });
+      const p = planStart(k.case, { ...planOpts, skipMassSearch: true, ...(opts.reportedOnly ? { skipVerification: true, skipSensitivity: true } : {}) });
       runs++;
       if (p.verdict === "starts") {
         result.options.push(optionOf(k, p));
@@ -205,7 +211,7 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
   result.options.sort((a, b) => a.units - b.units || a.peakCouplerForceN - b.peakCouplerForceN);
 
   if (result.options.length === 0 && opts.divide !== false && base === "needs-assistance") {
-    result.divide = divideTrain(c, { budget: opts.divideBudget ?? 8, ...(stop ? { shouldStop: stop } : {}) });
+    result.divide = divideTrain(c, { budget: opts.divideBudget ?? 8, ...(opts.reportedOnly ? { reportedOnly: true } : {}), ...(stop ? { shouldStop: stop } : {}) });
     runs += result.divide.plannerRuns;
   }
   opts.onProgress?.(1);

@@ -31,6 +31,11 @@ export interface DividedTrain {
 export interface DivideOptions {
   /** Most planner runs; default 10. */
   budget?: number;
+  /**
+   * The part's plan without what the departures check never reports (the verifying re-run on the median rail
+   * and the sensitivity table): its verdict, coupler force and time are the same.
+   */
+  reportedOnly?: boolean;
   shouldStop?: () => boolean;
 }
 
@@ -87,7 +92,7 @@ export function divideTrain(c: StartCase, opts: DivideOptions = {}): DividedTrai
   // Confirm with a full, verified plan (the same decision: it starts). When the budget runs out first, the
   // part stands on its verdict alone (plan null).
   if (best >= 1 && runs < budget) {
-    plan = planStart(firstPart(c, best), { skipMassSearch: true, ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}) });
+    plan = planStart(firstPart(c, best), { skipMassSearch: true, ...(opts.reportedOnly ? { skipVerification: true, skipSensitivity: true } : {}), ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}) });
     runs++;
   }
   const part = best >= 1 ? firstPart(c, best) : null;

@@ -286,15 +286,40 @@ export function startsAt(c: StartCase, shouldStop?: () => boolean): boolean {
 
 /** Exactly `judge(c).verdict !== "needs-assistance"`, with no more work than that needs. */
 export function goesAt(c: StartCase, shouldStop?: () => boolean): boolean {
+  return goesJudgement(c, shouldStop).holds;
+}
+
+/**
+ * The smallest margin of an evaluation against being "over" (a limit with a band: against its band's
+ * allowance, or its own margin when that is larger), so the score is ≥ 1 about when none is over (and a plan that misses its target scores below 1). A guide for the
+ * mass search (guidedBracket.ts), never a verdict.
+ */
+function notOverScore(e: Evaluation): number {
+  let s = Infinity;
+  for (const l of e.limits) s = Math.min(s, l.band ? Math.max(l.margin, ratio(l.band.allowance, l.band.demand)) : l.margin);
+  if (e.search && e.search.targetReachedS === null) s = Math.min(s, 0.99);
+  return s === Infinity ? MAX_MARGIN : s;
+}
+
+/**
+ * `goesAt`'s verdict with a score for the mass search to follow: the best "not over" margin of the plans it
+ * made (guidedBracket.ts). The verdict is exactly `goesAt`'s, from the same plans; the score adds none.
+ */
+export function goesJudgement(c: StartCase, shouldStop?: () => boolean): { holds: boolean; score: number } {
   const opts: SearchOptions = shouldStop ? { shouldStop } : {};
   const boundQ = marginalBound(c.settings);
   const pre = quasiStatic(c, c.settings.slipRiskThreshold, boundQ);
-  if (!noneOver(pre.qs.limits)) return false;
+  if (!noneOver(pre.qs.limits)) return { holds: false, score: notOverScore(pre) };
   // Traction not within on the threshold's rail: it cannot start, so it goes when either plan keeps within
   // its bands — the marginal bound's first, which settles it alone when it does (no threshold's plan needed).
   if (!allWithin(pre.qs.limits)) {
     const goes = (e: Evaluation) => noneOver(e.limits) && e.search!.targetReachedS !== null;
-    return goes(withPlan(quasiStatic(c, boundQ, boundQ), opts)) || goes(withPlan(pre, opts));
+    const atBound = withPlan(quasiStatic(c, boundQ, boundQ), opts);
+    if (goes(atBound)) return { holds: true, score: notOverScore(atBound) };
+    const atThr = withPlan(pre, opts);
+    return { holds: goes(atThr), score: Math.max(notOverScore(atBound), notOverScore(atThr)) };
   }
-  return judge(c, { depth: "marginal", ...opts }).verdict !== "needs-assistance";
+  const d = judge(c, { depth: "marginal", ...opts });
+  const score = d.verdict === "starts" ? d.margin : Math.max(notOverScore(d.threshold), d.bound ? notOverScore(d.bound) : 0);
+  return { holds: d.verdict !== "needs-assistance", score };
 }

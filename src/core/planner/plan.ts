@@ -84,7 +84,7 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
       maxTensionN: series.maxTensionN,
     } satisfies PlanSeries,
     verification,
-    sensitivity: sensitivity(c),
+    sensitivity: opts.skipSensitivity ? [] : sensitivity(c),
     stretch: {
       // Eased off in stages, a train gravity starts is moving before the preparing ends: 0 s then.
       lastVehicleMovesS: run.lastVehicleMovesS === null ? null : Math.max(0, run.lastVehicleMovesS - r.powerS),

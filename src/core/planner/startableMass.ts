@@ -6,7 +6,8 @@
  */
 import type { StartCase } from "../train/types.js";
 import type { Verdict } from "./outcome.js";
-import { goesAt, quasiStaticLimits, startsAt } from "./decision.js";
+import { goesJudgement, judge, quasiStaticLimits } from "./decision.js";
+import { guidedLargestMass, type MassJudgement } from "./guidedBracket.js";
 import { marginalBound, plannerContext } from "./context.js";
 import { withEvaluationMemo } from "./evaluationMemo.js";
 
@@ -127,7 +128,8 @@ const TOLERANCE_KG = 2000;
  * before any dynamics, so when a plan at its lower end holds, that one plan settles the answer (the
  * dynamics only verify it); when it fails, the search goes on below it with plans.
  */
-function largestMass(c: StartCase, ok: (m: number) => boolean, ownOk: boolean, atLeastKg: number, probe: Bracket): number {
+function largestMass(c: StartCase, at: (m: number) => MassJudgement, ownOk: boolean, atLeastKg: number, probe: Bracket): number {
+  const ok = (m: number): boolean => at(m).holds;
   const probeKg = probe.lo;
   const own = c.train.trailingMassKg;
   const floorKg = floorKgOf(c);
@@ -164,19 +166,18 @@ function largestMass(c: StartCase, ok: (m: number) => boolean, ownOk: boolean, a
     hi = ceiling;
     failing = true;
   }
-  // No failing mass known yet: double until one fails (each probe above the quasi-static limit is cheap).
-  while (!failing) {
-    const next = Math.min(ceiling, lo * 2);
-    if (next <= lo) return lo;
-    if (ok(next)) {
-      lo = next;
-      if (next >= ceiling) return lo;
-    } else {
-      hi = next;
-      failing = true;
-    }
-  }
-  return bisect(lo, hi, ok, RELATIVE_TOLERANCE, TOLERANCE_KG).lo;
+  // The rest follows the margin (guidedBracket.ts): from what holds (and what fails, when known) to the
+  // mass where the smallest margin crosses 1, each end settled by the verdict.
+  return guidedLargestMass(at, {
+    floorKg,
+    ceilingKg: ceiling,
+    relativeTolerance: RELATIVE_TOLERANCE,
+    toleranceKg: TOLERANCE_KG,
+    minToleranceKg: MIN_TOLERANCE_KG,
+    holdsKg: lo,
+    failsKg: failing ? hi : null,
+    startKg: lo,
+  }).lo;
 }
 
 /**
@@ -184,14 +185,34 @@ function largestMass(c: StartCase, ok: (m: number) => boolean, ownOk: boolean, a
  * mass just above it where they do not (so neither does the decision: it needs them within, or none over).
  */
 function quasiStaticMassKg(c: StartCase, need: "within" | "not-over"): Bracket {
+  const key = `${need}|${JSON.stringify(c)}`;
+  const known = quasiStaticCache.get(key);
+  if (known) return known;
   const bound = marginalBound(c.settings);
-  const holds = (m: number): boolean => {
-    const x = withTrailingMass(c, m);
-    const ls = quasiStaticLimits(plannerContext(x), bound).limits;
-    return need === "within" ? ls.every((l) => l.level === "within") : ls.every((l) => l.level !== "over");
+  // Each limit's score: its margin ("within"), or against its band where it has one ("not over"); the
+  // verdict is from the levels themselves.
+  const at = (m: number): MassJudgement => {
+    const ls = quasiStaticLimits(plannerContext(withTrailingMass(c, m)), bound).limits;
+    const holds = need === "within" ? ls.every((l) => l.level === "within") : ls.every((l) => l.level !== "over");
+    let score = Infinity;
+    for (const l of ls) score = Math.min(score, need === "not-over" && l.band ? Math.max(l.margin, l.band.allowance / Math.max(1e-9, l.band.demand)) : l.margin);
+    return { holds, score };
   };
-  return startableBracketKg(c, (x) => holds(x.train.trailingMassKg), { relativeTolerance: 0.002, toleranceKg: 200 });
+  const b = guidedLargestMass(at, {
+    floorKg: floorKgOf(c),
+    ceilingKg: 5e7,
+    relativeTolerance: 0.002,
+    toleranceKg: 200,
+    minToleranceKg: MIN_TOLERANCE_KG,
+    startKg: c.train.trailingMassKg,
+  });
+  if (quasiStaticCache.size >= 8) quasiStaticCache.delete(quasiStaticCache.keys().next().value!);
+  quasiStaticCache.set(key, b);
+  return b;
 }
+
+/** The last few quasi-static brackets (a plan's mass search and the probes speculated for it ask the same). */
+const quasiStaticCache = new Map<string, Bracket>();
 
 export interface StartableMasses {
   /** Largest trailing mass that starts, kg (0: none). */
@@ -241,14 +262,23 @@ export function startableMasses(c: StartCase, opts: StartableMassOptions = {}): 
 function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses {
   const stop = opts.shouldStop;
   const known = opts.verdictAt;
-  const starts = (m: number) => known?.("starts", m) ?? startsAt(withTrailingMass(c, m), stop);
-  const goes = (m: number) => known?.("goes", m) ?? goesAt(withTrailingMass(c, m), stop);
+  // Each judgement gives the verdict (exactly startsAt's / goesAt's) and the margin the search follows.
+  const startsJ = (m: number): MassJudgement => {
+    const v = known?.("starts", m);
+    if (v !== undefined) return { holds: v, score: Number.NaN };
+    const d = judge(withTrailingMass(c, m), { depth: "starts", ...(stop ? { shouldStop: stop } : {}) });
+    return { holds: d.verdict === "starts", score: d.margin };
+  };
+  const goesJ = (m: number): MassJudgement => {
+    const v = known?.("goes", m);
+    return v !== undefined ? { holds: v, score: Number.NaN } : goesJudgement(withTrailingMass(c, m), stop);
+  };
   const own = opts.own;
-  const ownStarts = own !== undefined ? own === "starts" : starts(c.train.trailingMassKg);
-  const startsKg = largestMass(c, starts, ownStarts, 0, quasiStaticMassKg(c, "within"));
+  const ownStarts = own !== undefined ? own === "starts" : startsJ(c.train.trailingMassKg).holds;
+  const startsKg = largestMass(c, startsJ, ownStarts, 0, quasiStaticMassKg(c, "within"));
   const ceilingKg = massCeilingKg(c);
   if (opts.startsOnly) return { startsKg, marginalKg: Number.NaN, ceilingKg };
-  const ownGoes = ownStarts || (own !== undefined ? own !== "needs-assistance" : goes(c.train.trailingMassKg));
-  const marginalKg = largestMass(c, goes, ownGoes, startsKg, quasiStaticMassKg(c, "not-over"));
+  const ownGoes = ownStarts || (own !== undefined ? own !== "needs-assistance" : goesJ(c.train.trailingMassKg).holds);
+  const marginalKg = largestMass(c, goesJ, ownGoes, startsKg, quasiStaticMassKg(c, "not-over"));
   return { startsKg, marginalKg: Math.max(startsKg, marginalKg), ceilingKg };
 }

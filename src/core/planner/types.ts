@@ -159,6 +159,8 @@ export interface PlanOptions {
   skipMassSearch?: boolean;
   /** Skip the verifying re-run on the median rail. */
   skipVerification?: boolean;
+  /** Skip the sensitivity table (an empty one is returned): for callers that never show it (the departures check). */
+  skipSensitivity?: boolean;
   /** Verdicts of the mass search already found elsewhere (startableMass.ts, `StartableMassOptions.verdictAt`). */
   massVerdictAt?: (need: "starts" | "goes", massKg: number) => boolean | undefined;
 }
