@@ -153,6 +153,10 @@ function checkOf(c: StartCase, o: CheckRequestOptions, onProgress?: Progress): C
   // Nothing the check shows comes from the verifying re-run or the sensitivity table: neither is made (as in
   // `taut check`), for the departure, its assistance option or its divided train.
   const p = planStart(c, { skipMassSearch: true, skipVerification: true, skipSensitivity: true, onProgress: part(onProgress, 0, 0.3) });
+  // The same search as the plan's, bracketed by this departure's own verdict; before the assistance, whose
+  // dividing asks whether a lightly loaded train starts — the mass search has settled that (as in `taut check`).
+  const masses = startableMasses(c, { own: p.verdict });
+  onProgress?.(0.6);
   let a: AssistanceResult | null = null;
   if (p.verdict !== "starts") {
     a = searchAssistance(c, {
@@ -161,13 +165,11 @@ function checkOf(c: StartCase, o: CheckRequestOptions, onProgress?: Progress): C
       divideBudget: CHECK_DIVIDE_BUDGET,
       maxFullPlans: 1,
       reportedOnly: true,
-      onProgress: part(onProgress, 0.3, 0.6),
+      lightestStarts: masses.startsKg > 0,
+      onProgress: part(onProgress, 0.6, 1),
       ...(o.helper ? { spec: o.helper } : {}),
     });
   }
-  onProgress?.(0.6);
-  // The same search as the plan's, bracketed by this departure's own verdict.
-  const masses = startableMasses(c, { own: p.verdict });
   const cheapest = a?.options[0];
   return {
     ...planSummary(p),

@@ -115,6 +115,11 @@ function checkJob(job: Extract<Job, { kind: "check" }>): CheckOutcome {
   // The check reports no verification run (the plan's re-run on the median rail) and no sensitivity table:
   // not made, here nor for the assistance option and the divided train's first part.
   const p = planStart(c, { skipMassSearch: true, skipVerification: true, skipSensitivity: true });
+  const planMs = performance.now() - t0;
+  // The masses before the assistance: their search settles whether a lightly loaded train starts, which
+  // dividing the train asks first (divideTrain.ts) — answered once, and the two can never disagree.
+  const masses = job.masses ? massJob(c, p.verdict) : undefined;
+  const t1 = performance.now();
   let assistance: AssistanceReport | null = null;
   let divide: DivideReport | null = null;
   let searchCapped = false;
@@ -125,6 +130,7 @@ function checkJob(job: Extract<Job, { kind: "check" }>): CheckOutcome {
       divideBudget: CHECK_DIVIDE_BUDGET,
       maxFullPlans: 1,
       reportedOnly: true,
+      ...(masses ? { lightestStarts: masses.maxStartableMassKg > 0 } : {}),
       ...(job.helper ? { spec: job.helper } : {}),
     });
     const rep = assistanceReport(a, CHECK_ASSISTANCE_BUDGET + CHECK_DIVIDE_BUDGET);
@@ -132,8 +138,7 @@ function checkJob(job: Extract<Job, { kind: "check" }>): CheckOutcome {
     divide = rep.divide;
     searchCapped = !a.complete;
   }
-  const checkMs = performance.now() - t0;
-  const masses = job.masses ? massJob(c, p.verdict) : undefined;
+  const checkMs = planMs + (performance.now() - t1);
   return {
     kind: "check",
     verdict: p.verdict,

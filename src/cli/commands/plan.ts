@@ -149,6 +149,8 @@ function reportWithAssistance(c: StartCase, meta: PlanReport["case"], opts: Plan
       budget: PLAN_ASSISTANCE_BUDGET,
       divideBudget: PLAN_DIVIDE_BUDGET,
       maxFullPlans: PLAN_ASSISTANCE_FULL_PLANS,
+      // The plan's mass search has settled whether a lightly loaded train starts (dividing asks it first).
+      ...(Number.isFinite(p.maxStartableMassKg) ? { lightestStarts: p.maxStartableMassKg > 0 } : {}),
       ...(opts.helper ? { spec: opts.helper } : {}),
       ...(opts.control ? { control: opts.control } : {}),
     });

@@ -104,6 +104,8 @@ export interface AssistanceOptions {
    * coupler forces and times are the same (they come from the decision's plan, not from those).
    */
   reportedOnly?: boolean;
+  /** Whether the lightly loaded train starts, when a mass search already knows (divideTrain.ts). */
+  lightestStarts?: boolean;
   shouldStop?: () => boolean;
   onProgress?: (fraction: number) => void;
 }
@@ -211,7 +213,7 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
   result.options.sort((a, b) => a.units - b.units || a.peakCouplerForceN - b.peakCouplerForceN);
 
   if (result.options.length === 0 && opts.divide !== false && base === "needs-assistance") {
-    result.divide = divideTrain(c, { budget: opts.divideBudget ?? 8, ...(opts.reportedOnly ? { reportedOnly: true } : {}), ...(stop ? { shouldStop: stop } : {}) });
+    result.divide = divideTrain(c, { budget: opts.divideBudget ?? 8, ...(opts.reportedOnly ? { reportedOnly: true } : {}), ...(opts.lightestStarts !== undefined ? { lightestStarts: opts.lightestStarts } : {}), ...(stop ? { shouldStop: stop } : {}) });
     runs += result.divide.plannerRuns;
   }
   opts.onProgress?.(1);

@@ -36,6 +36,13 @@ export interface DivideOptions {
    * and the sensitivity table): its verdict, coupler force and time are the same.
    */
   reportedOnly?: boolean;
+  /**
+   * Whether the lightly loaded train (the mass search's floor) starts, when the caller's mass search already
+   * knows (its largest startable mass is above none): dividing then offers nothing exactly when that search
+   * says "none", without planning the floor again. Counted as a run all the same, so the budget reaches as
+   * far as without it.
+   */
+  lightestStarts?: boolean;
   shouldStop?: () => boolean;
 }
 
@@ -75,7 +82,7 @@ export function divideTrain(c: StartCase, opts: DivideOptions = {}): DividedTrai
   // loaded train of these wagons starts (the mass search's floor, 1 t a wagon), nothing is offered.
   const lightest = (): boolean => {
     runs++;
-    return plannerStarts(withTrailingMass(c, total * 1000), opts.shouldStop);
+    return opts.lightestStarts ?? plannerStarts(withTrailingMass(c, total * 1000), opts.shouldStop);
   };
   // Bisection over [least, total − 1]: the smallest practical part is tried first (if it fails, nothing will).
   if (total >= 2 && least < total && lightest() && starts(least)) {
