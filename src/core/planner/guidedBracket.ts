@@ -39,83 +39,97 @@ export interface GuidedSearch {
   startKg: number;
 }
 
-/** Judgements the margin may guide before the search falls back to halving. */
-const MAX_GUIDED = 10;
-/** How far inside the bracket a guided mass must fall (a share of its width): the rest is for halving. */
-const INSIDE = 0.02;
+/** Guided judgements while only one end is known (up or down to the prediction). */
+const MAX_OUTWARD = 6;
+/** Guided judgements once both ends are known; any that fails to halve the bracket ends the guiding. */
+const MAX_INWARD = 3;
 
 export function guidedLargestMass(at: (massKg: number) => MassJudgement, s: GuidedSearch): MassBracket {
   const width = (lo: number) => Math.min(s.toleranceKg, Math.max(s.minToleranceKg, s.relativeTolerance * lo));
-  let lo = s.holdsKg && s.holdsKg > 0 ? s.holdsKg : null;
-  let hi = s.failsKg ?? null;
-  // The last two judgements (mass, 1 ÷ score) for the straight line.
-  const seen: Array<{ m: number; inv: number }> = [];
-  const judge = (m: number): boolean => {
+  let lo: number | null = s.holdsKg && s.holdsKg > 0 ? s.holdsKg : null;
+  let hi: number | null = s.failsKg ?? null;
+  // 1 ÷ score of every mass judged (the straight line's points).
+  const inv = new Map<number, number>();
+  let last: number[] = [];
+  const judge = (m: number): void => {
     const j = at(m);
-    if (j.score > 0 && Number.isFinite(j.score)) seen.push({ m, inv: 1 / j.score });
-    if (seen.length > 2) seen.shift();
+    if (j.score > 0 && Number.isFinite(j.score)) {
+      inv.set(m, 1 / j.score);
+      last = [...last.slice(-1), m];
+    }
     if (j.holds) lo = lo === null ? m : Math.max(lo, m);
     else hi = hi === null ? m : Math.min(hi, m);
-    return j.holds;
   };
   if (lo === null && hi === null) judge(Math.min(s.ceilingKg, Math.max(s.floorKg, s.startKg)));
-  let guided = 0;
-  // Guided judgements in a row that did not halve the bracket: after two, one halving step.
-  let misses = 0;
-  let spanBefore = Infinity;
+  let outward = 0;
+  let inward = 0;
+  let guiding = true;
   for (;;) {
     if (lo !== null && hi !== null && hi - lo <= width(lo)) return { lo, hi };
     if (lo !== null && lo >= s.ceilingKg) return { lo: s.ceilingKg, hi: null };
     if (hi !== null && hi <= s.floorKg) return { lo: 0, hi };
-    const prediction = predict(seen);
     let next: number;
     if (lo !== null && hi !== null) {
       const span = hi - lo;
-      if (span > 0.5 * spanBefore) misses++;
-      else misses = 0;
-      if (prediction === null || guided >= MAX_GUIDED || misses >= 2) {
-        next = 0.5 * (lo + hi);
-        misses = 0;
-      } else {
-        // Just beside the prediction, on the side of the end that has further to move.
-        const w = width(lo);
+      const w = width(lo);
+      // The line through the bracket's ends when their scores agree with their verdicts (the holding end
+      // scores ≥ 1, the failing one below), else through the last two judgements.
+      const a = inv.get(lo);
+      const b = inv.get(hi);
+      const prediction = a !== undefined && b !== undefined && a <= 1 && b > 1 ? crossing(lo, a, hi, b) : lineCrossing(last, inv);
+      if (guiding && inward < MAX_INWARD && prediction !== null) {
+        inward++;
         const p = Math.min(hi, Math.max(lo, prediction));
-        next = p - lo > hi - p ? p - 0.4 * w : p + 0.4 * w;
-        next = Math.min(hi - INSIDE * span, Math.max(lo + INSIDE * span, next));
-        guided++;
+        // Close the bracket from the prediction: just past it on the side of the end that has further to move
+        // (a good prediction then leaves a bracket narrower than the tolerance after one more judgement).
+        next = p - lo > hi - p ? p - 0.45 * w : p + 0.45 * w;
+        const inside = Math.min(0.05 * w, 0.02 * span);
+        next = Math.min(hi - inside, Math.max(lo + inside, next));
+        judge(next);
+        // A guided judgement that did not halve the bracket: the margin is not a straight line here (a limit
+        // that jumps, a margin at its cap): halve from now on.
+        if (hi - lo > 0.5 * span) guiding = false;
+        continue;
       }
-      spanBefore = span;
+      next = 0.5 * (lo + hi);
     } else if (hi === null) {
-      // Everything tried holds: up to the prediction (at least 2 % more, at most fourfold).
+      // Everything tried holds: just above the prediction (at least 2 % more, at most fourfold).
       const from = lo!;
-      // Just above the prediction, so that a good one gives the failing end at once.
-      const p = prediction === null ? null : prediction + 0.4 * width(prediction);
-      next = guided++ < MAX_GUIDED ? Math.max(from * 1.02, Math.min(from * 4, p ?? from * 2)) : from * 2;
+      const p = lineCrossing(last, inv);
+      const aim = p === null ? null : p + 0.45 * width(p);
+      next = outward++ < MAX_OUTWARD ? Math.max(from * 1.02, Math.min(from * 4, aim ?? from * 2)) : from * 2;
       next = Math.min(s.ceilingKg, next);
     } else {
-      // Everything tried fails: down to the prediction (at least 2 % less, at most to a quarter).
+      // Everything tried fails: just below the prediction (at least 2 % less, at most to a quarter).
       const from = hi;
-      // Just below the prediction, so that a good one gives the holding end at once.
-      const p = prediction === null ? null : prediction - 0.4 * width(prediction);
-      next = guided++ < MAX_GUIDED ? Math.min(from / 1.02, Math.max(from / 4, p ?? from / 2)) : from / 2;
+      const p = lineCrossing(last, inv);
+      const aim = p === null ? null : p - 0.45 * width(p);
+      next = outward++ < MAX_OUTWARD ? Math.min(from / 1.02, Math.max(from / 4, aim ?? from / 2)) : from / 2;
       next = Math.max(s.floorKg, next);
     }
     judge(next);
   }
 }
 
-/** Where the line through the last two judgements (1 ÷ score against mass) reaches 1; from one, proportion. */
-function predict(seen: ReadonlyArray<{ m: number; inv: number }>): number | null {
-  if (seen.length === 0) return null;
-  const b = seen[seen.length - 1]!;
-  if (seen.length === 1 || seen[0]!.m === b.m || seen[0]!.inv === b.inv) {
-    // One point: a demand in proportion to the mass.
-    const p = b.m / b.inv;
-    return Number.isFinite(p) && p > 0 ? p : null;
-  }
-  const a = seen[0]!;
-  const slope = (b.inv - a.inv) / (b.m - a.m);
+/** Where the straight line through (m1, v1) and (m2, v2) reaches 1; null when it does not rise. */
+function crossing(m1: number, v1: number, m2: number, v2: number): number | null {
+  if (m1 === m2 || !(v2 !== v1)) return null;
+  const slope = (v2 - v1) / (m2 - m1);
   if (!(slope > 0)) return null;
-  const p = b.m + (1 - b.inv) / slope;
+  const p = m2 + (1 - v2) / slope;
+  return Number.isFinite(p) && p > 0 ? p : null;
+}
+
+/** The crossing of the line through the last two judgements; from one, a demand in proportion to the mass. */
+function lineCrossing(last: readonly number[], inv: ReadonlyMap<number, number>): number | null {
+  if (last.length === 0) return null;
+  const m2 = last[last.length - 1]!;
+  const v2 = inv.get(m2)!;
+  if (last.length === 2) {
+    const m1 = last[0]!;
+    const p = crossing(m1, inv.get(m1)!, m2, v2);
+    if (p !== null) return p;
+  }
+  const p = m2 / v2;
   return Number.isFinite(p) && p > 0 ? p : null;
 }
