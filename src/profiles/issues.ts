@@ -2,12 +2,22 @@
  * Validation results as data: every problem names the field (a dotted path) and the rule broken,
  * in words a driver or a script author can act on. Used by the CLI (exit 2) and the app (shown at the field).
  */
+import { englishField, type FieldCoded, type GotValue } from "./issueText.js";
 import { printable, quoted } from "./text.js";
 
-export interface FieldIssue {
+/**
+ * A problem at a field. `message` is in English; a coded issue (most from the schemas and the case's
+ * resolution) also carries its code and figures, from which other languages render it (issueText.ts).
+ */
+export interface FieldIssue extends Partial<FieldCoded> {
   /** Dotted path of the field, e.g. "train.trailingMass_t" or "locomotives[0].profile"; "" for the whole file. */
   path: string;
   message: string;
+}
+
+/** A coded issue at `path`, its English message written from the code. */
+export function coded(path: string, c: FieldCoded): FieldIssue {
+  return { path, message: englishField(c), ...c };
 }
 
 export type ParseResult<T> = { ok: true; value: T } | { ok: false; issues: FieldIssue[] };
@@ -59,6 +69,8 @@ export interface RawIssue {
   errors?: ReadonlyArray<ReadonlyArray<RawIssue>>;
   format?: string;
   divisor?: number;
+  /** A rule of ours (schemas.ts `rule`): its code and figures. */
+  params?: { code?: FieldCoded["code"]; figures?: FieldCoded["figures"] };
 }
 
 /** Turn zod issues into field issues with specific messages. */
@@ -70,7 +82,8 @@ export function fromZodIssues(raw: ReadonlyArray<RawIssue>, base: ReadonlyArray<
       out.push(...fromZodIssues(bestBranch(issue.errors), path));
       continue;
     }
-    out.push({ path: pathToString(path), message: describe(issue) });
+    const d = describe(issue);
+    out.push(d.code ? coded(pathToString(path), d) : { path: pathToString(path), message: d.message });
   }
   return out;
 }
@@ -90,72 +103,75 @@ function bestBranch(branches: ReadonlyArray<ReadonlyArray<RawIssue>>): ReadonlyA
   return best;
 }
 
-function shown(v: unknown): string {
-  if (v === undefined) return "nothing";
+/** The value given, as a message quotes it. */
+function gotOf(v: unknown): GotValue {
+  if (v === undefined) return { word: "nothing" };
   if (typeof v === "string") return quoted(v, 40);
   // A number beyond what a double holds (1e400 in a file reads as infinity) is said in words.
-  if (typeof v === "number" && (v === Infinity || v === -Infinity)) return `a number too ${v > 0 ? "large" : "far below zero"} to hold`;
-  if (typeof v === "number" || typeof v === "boolean" || v === null) return String(v);
-  if (Array.isArray(v)) return "a list";
-  return "an object";
+  if (typeof v === "number" && (v === Infinity || v === -Infinity)) return { word: v > 0 ? "tooLarge" : "tooSmall" };
+  if (typeof v === "number") return Number.isNaN(v) ? "NaN" : v;
+  if (typeof v === "boolean" || v === null) return String(v);
+  if (Array.isArray(v)) return { word: "list" };
+  return { word: "object" };
 }
 
-function describe(i: RawIssue): string {
-  const got = "input" in i ? ` (got ${shown(i.input)})` : "";
+type Described = FieldCoded | { code?: undefined; message: string };
+
+function describe(i: RawIssue): Described {
+  const got = "input" in i ? { got: gotOf(i.input) } : {};
+  const n = (x: number | bigint | undefined) => Number(x);
   switch (i.code) {
     case "invalid_type":
-      if ("input" in i && i.input === undefined) return `is required (${article(i.expected)})`;
-      return `must be ${article(i.expected)}${got}`;
+      if ("input" in i && i.input === undefined) return { code: "required", figures: { expected: i.expected ?? "" } };
+      return { code: "mustBe", figures: { expected: i.expected ?? "" }, ...got };
     case "too_small":
-      if (custom(i)) return `${i.message}${got}`;
-      if (i.origin === "array") return `must have at least ${String(i.minimum)} item${i.minimum === 1 ? "" : "s"}`;
-      if (i.origin === "string") return i.minimum === 1 ? "must not be empty" : `must be at least ${String(i.minimum)} characters`;
-      return `must be ${i.inclusive ? "at least" : "greater than"} ${String(i.minimum)}${got}`;
+      if (ours(i)) return { ...ours(i)!, ...got };
+      if (custom(i)) return { message: `${i.message}${gotText(i)}` };
+      if (i.origin === "array") return { code: "minItems", figures: { count: n(i.minimum) } };
+      if (i.origin === "string") return i.minimum === 1 ? { code: "notEmpty" } : { code: "minChars", figures: { min: n(i.minimum) } };
+      return { code: i.inclusive ? "atLeast" : "greaterThan", figures: { min: n(i.minimum) }, ...got };
     case "too_big":
-      if (custom(i)) return `${i.message}${got}`;
-      if (i.origin === "array") return `must have at most ${String(i.maximum)} items`;
-      if (i.origin === "string") return `must be at most ${String(i.maximum)} characters`;
-      return `must be ${i.inclusive ? "at most" : "less than"} ${String(i.maximum)}${got}`;
+      if (ours(i)) return { ...ours(i)!, ...got };
+      if (custom(i)) return { message: `${i.message}${gotText(i)}` };
+      if (i.origin === "array") return { code: "maxItems", figures: { max: n(i.maximum) } };
+      if (i.origin === "string") return { code: "maxChars", figures: { max: n(i.maximum) } };
+      return { code: i.inclusive ? "atMost" : "lessThan", figures: { max: n(i.maximum) }, ...got };
     case "invalid_value":
-      if (i.values && i.values.length === 1) return `must be ${JSON.stringify(i.values[0])}${got}`;
-      return `must be one of ${(i.values ?? []).map((v) => JSON.stringify(v)).join(", ")}${got}`;
+      if (i.values && i.values.length === 1) return { code: "oneValue", figures: { value: JSON.stringify(i.values[0]) }, ...got };
+      return { code: "oneOf", figures: { values: (i.values ?? []).map((v) => JSON.stringify(v)).join(", ") }, ...got };
     case "not_multiple_of":
-      return `must be a whole multiple of ${String(i.divisor)}${got}`;
+      return { code: "multipleOf", figures: { divisor: n(i.divisor) }, ...got };
     case "invalid_format":
-      if (custom(i)) return `${i.message}${got}`;
-      if (i.format === "regex") return `is not in the expected form${got}`;
-      return `must be ${article(i.format)}${got}`;
+      if (ours(i)) return { ...ours(i)!, ...got };
+      if (custom(i)) return { message: `${i.message}${gotText(i)}` };
+      if (i.format === "regex") return { code: "badForm", ...got };
+      return { code: "mustBe", figures: { expected: i.format ?? "" }, ...got };
     case "unrecognized_keys":
-      return `has unknown field${(i.keys ?? []).length === 1 ? "" : "s"} ${(i.keys ?? []).join(", ")}`;
-    default:
+      return { code: "unknownFields", figures: { count: (i.keys ?? []).length, keys: (i.keys ?? []).join(", ") } };
+    default: {
       // Our own rules ("must be from 5 to 150 t") say what is wrong; the value given is added when they do not quote it.
-      if (custom(i)) return i.message.includes("(got ") || !(typeof i.input === "number" || typeof i.input === "string") ? i.message : `${i.message}${got}`;
-      return i.message && i.message !== "Invalid input" ? i.message : `is not valid${got}`;
+      const o = ours(i);
+      if (o) {
+        const english = englishField(o);
+        return english.startsWith("must") && !english.includes("(got ") && (typeof i.input === "number" || typeof i.input === "string") ? { ...o, ...got } : o;
+      }
+      if (custom(i)) return { message: i.message.includes("(got ") || !(typeof i.input === "number" || typeof i.input === "string") ? i.message : `${i.message}${gotText(i)}` };
+      return i.message && i.message !== "Invalid input" ? { message: i.message } : { code: "notValid", ...got };
+    }
   }
 }
 
-/** A message written for the rule in schemas.ts (they all start "must"), not zod's default. */
+/** A rule of ours (schemas.ts `rule`): its code and figures. */
+function ours(i: RawIssue): FieldCoded | undefined {
+  return i.params?.code ? { code: i.params.code, ...(i.params.figures ? { figures: i.params.figures } : {}) } : undefined;
+}
+
+/** The value given in English, for a message written without a code. */
+function gotText(i: RawIssue): string {
+  return "input" in i ? ` ${englishField({ code: "notValid", got: gotOf(i.input) }).slice("is not valid ".length)}` : "";
+}
+
+/** A message written for a rule in schemas.ts without a code (they all start "must"), not zod's default. */
 function custom(i: RawIssue): boolean {
   return typeof i.message === "string" && i.message.startsWith("must");
-}
-
-function article(expected: string | undefined): string {
-  switch (expected) {
-    case "number":
-      return "a number";
-    case "int":
-      return "a whole number";
-    case "string":
-      return "text";
-    case "boolean":
-      return "true or false";
-    case "array":
-      return "a list";
-    case "datetime":
-      return "a date and time";
-    case "object":
-      return "an object";
-    default:
-      return expected ?? "a value";
-  }
 }

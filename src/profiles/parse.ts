@@ -11,7 +11,7 @@ import { uniformTrack } from "../core/physics/track.js";
 import { genericWagon, locationFromNote, locomotiveFromFile } from "./convert.js";
 import { jsonSyntaxProblem } from "./jsonSyntax.js";
 import { quoted } from "./text.js";
-import { fail, fromZodIssues, ok, type FieldIssue, type ParseResult, type RawIssue } from "./issues.js";
+import { coded, fail, fromZodIssues, ok, type FieldIssue, type ParseResult, type RawIssue } from "./issues.js";
 import type { Library } from "./library.js";
 import {
   locationNoteSchema,
@@ -45,7 +45,7 @@ export function parseJsonText(text: string): ParseResult<unknown> {
   try {
     return ok(JSON.parse(body) as unknown);
   } catch {
-    if (body.trim() === "") return fail([{ path: "", message: "is not valid JSON: the file is empty" }]);
+    if (body.trim() === "") return fail([coded("", { code: "jsonEmpty" })]);
     const p = jsonSyntaxProblem(body);
     return fail([{ path: "", message: p ? `is not valid JSON: ${p.what} (line ${p.line}, column ${p.column})` : "is not valid JSON" }]);
   }
@@ -85,14 +85,14 @@ export function resolveStartCase(f: StartCaseFile, lib: Library): ParseResult<St
     if (typeof entry.profile === "string") {
       const found = lib.locomotives.get(entry.profile);
       if (!found) {
-        issues.push({ path: `locomotives[${k}].profile`, message: `names no known locomotive profile ("${entry.profile}"; known: ${[...lib.locomotives.keys()].join(", ")})` });
+        issues.push(coded(`locomotives[${k}].profile`, { code: "unknownLocomotive", figures: { id: entry.profile, known: [...lib.locomotives.keys()].join(", ") } }));
         return;
       }
       spec = found.spec;
     } else spec = locomotiveFromFile(entry.profile);
     const position: LocoPosition = entry.position;
     if (typeof position === "object" && position.afterWagon >= f.train.wagons) {
-      issues.push({ path: `locomotives[${k}].position.afterWagon`, message: `must be less than the number of wagons (${f.train.wagons}) (got ${position.afterWagon})` });
+      issues.push(coded(`locomotives[${k}].position.afterWagon`, { code: "afterWagon", figures: { wagons: f.train.wagons, value: position.afterWagon } }));
     }
     groups.push({ spec, count: entry.count, position, ...(entry.control !== undefined ? { control: entry.control } : {}) });
   });
@@ -100,7 +100,7 @@ export function resolveStartCase(f: StartCaseFile, lib: Library): ParseResult<St
   const wagonGroups: WagonGroup[] = [];
   (f.train.groups ?? []).forEach((g, k) => {
     const w = lib.wagons.get(g.wagonType);
-    if (!w) issues.push({ path: `train.groups[${k}].wagonType`, message: `names no known wagon type ("${g.wagonType}"; known: ${[...lib.wagons.keys()].join(", ")})` });
+    if (!w) issues.push(coded(`train.groups[${k}].wagonType`, { code: "unknownWagonType", figures: { id: g.wagonType, known: [...lib.wagons.keys()].join(", ") } }));
     else wagonGroups.push({ wagons: g.wagons, wagon: w, massKg: tonnesToKg(g.mass_t) });
   });
   const totals = f.train.groups ? groupTotals(wagonGroups) : null;
@@ -108,7 +108,7 @@ export function resolveStartCase(f: StartCaseFile, lib: Library): ParseResult<St
   let wagon: WagonSpec = wagonGroups[0]?.wagon ?? genericWagon(f.train.coupling ?? "knuckle", lengthM / f.train.wagons);
   if (f.train.wagonType !== undefined && !f.train.groups) {
     const w = lib.wagons.get(f.train.wagonType);
-    if (!w) issues.push({ path: "train.wagonType", message: `names no known wagon type ("${f.train.wagonType}"; known: ${[...lib.wagons.keys()].join(", ")})` });
+    if (!w) issues.push(coded("train.wagonType", { code: "unknownWagonType", figures: { id: f.train.wagonType, known: [...lib.wagons.keys()].join(", ") } }));
     else wagon = { ...w, lengthM: lengthM / f.train.wagons };
   }
 
@@ -116,7 +116,8 @@ export function resolveStartCase(f: StartCaseFile, lib: Library): ParseResult<St
   let location: StartCase["location"] | undefined;
   if (typeof f.location === "string") {
     locNote = lib.locations.get(f.location);
-    if (!locNote) issues.push({ path: "location", message: `names no known location note ("${f.location}"; known: ${[...lib.locations.keys()].join(", ") || "none"})` });
+    const known = [...lib.locations.keys()].join(", ");
+    if (!locNote) issues.push(coded("location", known ? { code: "unknownLocation", figures: { id: f.location, known } } : { code: "unknownLocationNone", figures: { id: f.location } }));
     else location = locationFromNote(locNote);
   } else if ("segments" in f.location) {
     locNote = f.location;
@@ -168,10 +169,10 @@ function trainFitIssue(c: StartCase, note: Pick<LocationNoteFile, "segments" | "
   const rear = note.frontAt_m - lengthM;
   const end = last.from_m + last.length_m;
   if (rear < first.from_m - 1e-6) {
-    return { path: "location.frontAt_m", message: `puts the rear of the ${Math.round(lengthM)} m train at ${Math.round(rear)} m, before the profile starts (${first.from_m} m)` };
+    return coded("location.frontAt_m", { code: "rearBeforeProfile", figures: { length: Math.round(lengthM), rear: Math.round(rear), start: first.from_m, unit: "m" } });
   }
   if (note.frontAt_m > end + 1e-6) {
-    return { path: "location.frontAt_m", message: `is beyond the end of the profile (${end} m)` };
+    return coded("location.frontAt_m", { code: "beyondProfile", figures: { end, unit: "m" } });
   }
   return undefined;
 }

@@ -10,16 +10,22 @@
  */
 import * as z from "zod/mini";
 import { RAIL_CONDITIONS } from "../core/physics/types.js";
+import type { FieldCode } from "../i18n/en/fields.js";
+import { englishField, type FieldFigures } from "./issueText.js";
+
+/** A rule's message: its code and figures (rendered per language) with the English words they make. */
+const rule = (code: FieldCode, figures?: FieldFigures) => ({ message: englishField({ code, ...(figures ? { figures } : {}) }), params: { code, ...(figures ? { figures } : {}) } });
 
 const fraction = () => z.number().check(z.gt(0), z.lte(1));
 
 /** A number from `min` to `max` (both allowed); the message gives the range and its unit. */
 export const within = (min: number, max: number, unit = "") =>
-  z.number().check(z.refine((x) => x >= min && x <= max, { message: `must be from ${min} to ${max}${unit ? ` ${unit}` : ""}` }));
+  z.number().check(z.refine((x) => x >= min && x <= max, unit ? rule("rangeIn", { min, max, unit }) : rule("range", { min, max })));
 
 /** What an id may hold, in words (the same rule for every kind of file). */
-export const ID_RULE = "must be lower-case letters, digits, hyphens, dots or underscores, starting with a letter or digit";
-const id = () => z.string().check(z.minLength(1), z.maxLength(80), z.regex(/^[a-z0-9][a-z0-9._-]*$/, { message: ID_RULE }));
+export const ID_RULE = englishField({ code: "idForm" });
+const ID_FORM = /^[a-z0-9][a-z0-9._-]*$/;
+const id = () => z.string().check(z.minLength(1), z.maxLength(80), z.refine((s) => ID_FORM.test(s), rule("idForm")));
 const text = (max = 200) => z.string().check(z.minLength(1), z.maxLength(max));
 
 /** Chainages and distances along the line: within 1000 km of the profile's origin (common practice: a line's kilometre posts). */
@@ -47,7 +53,7 @@ export const railConditionSchema = z.enum(RAIL_CONDITIONS);
 /** Curve radius: 0 for straight track, otherwise at least 80 m. */
 const curveRadius = () =>
   // No upper bound: a larger radius only comes nearer straight track, which is harmless.
-  z.number().check(z.refine((r) => r === 0 || r >= 80, { message: "must be 0 (straight) or at least 80 m" }));
+  z.number().check(z.refine((r) => r === 0 || r >= 80, rule("straightOrRadius", { min: 80, unit: "m" })));
 
 /** Gradient within what adhesion railways operate: ±60 ‰. */
 const gradient = () => within(-60, 60, "‰");
@@ -56,8 +62,8 @@ const gradient = () => within(-60, 60, "‰");
 const notchFractions = () =>
   z.array(fraction()).check(
     z.minLength(1),
-    z.refine((a) => a.every((x, i) => i === 0 || x >= a[i - 1]!), { message: "must not decrease from one notch to the next" }),
-    z.refine((a) => a[a.length - 1] === 1, { message: "must end with 1 (full notch)" }),
+    z.refine((a) => a.every((x, i) => i === 0 || x >= a[i - 1]!), rule("notchOrder")),
+    z.refine((a) => a[a.length - 1] === 1, rule("notchEnd")),
   );
 
 export const locomotiveFileSchema = z
@@ -88,13 +94,10 @@ export const locomotiveFileSchema = z
     locomotiveBrakeHolding_kN: z.optional(within(1, 2000, "kN")),
   })
   .check(
-    z.refine((l) => l.adhesiveMass_t <= l.mass_t, { message: "must not exceed mass_t", path: ["adhesiveMass_t"] }),
-    z.refine((l) => l.notchPower.length === l.notches, { message: "must have one entry per notch", path: ["notchPower"] }),
-    z.refine((l) => l.notchStartingEffort.length === l.notches, { message: "must have one entry per notch", path: ["notchStartingEffort"] }),
-    z.refine((l) => l.continuousTractiveEffort_kN <= l.startingTractiveEffort_kN, {
-      message: "must not exceed startingTractiveEffort_kN",
-      path: ["continuousTractiveEffort_kN"],
-    }),
+    z.refine((l) => l.adhesiveMass_t <= l.mass_t, { ...rule("notExceed", { field: "mass_t" }), path: ["adhesiveMass_t"] }),
+    z.refine((l) => l.notchPower.length === l.notches, { ...rule("perNotch"), path: ["notchPower"] }),
+    z.refine((l) => l.notchStartingEffort.length === l.notches, { ...rule("perNotch"), path: ["notchStartingEffort"] }),
+    z.refine((l) => l.continuousTractiveEffort_kN <= l.startingTractiveEffort_kN, { ...rule("notExceed", { field: "startingTractiveEffort_kN" }), path: ["continuousTractiveEffort_kN"] }),
   );
 export type LocomotiveFile = z.infer<typeof locomotiveFileSchema>;
 
@@ -116,7 +119,7 @@ export const wagonFileSchema = z.object({
   davisB: z.optional(within(0, 0.5)),
   davisK: z.optional(within(0, 0.025)),
   startingResistance_permille: z.optional(within(0, 30, "‰")),
-}).check(z.refine((w) => w.tare_t <= w.maxGross_t, { message: "must not exceed maxGross_t", path: ["tare_t"] }));
+}).check(z.refine((w) => w.tare_t <= w.maxGross_t, { ...rule("notExceed", { field: "maxGross_t" }), path: ["tare_t"] }));
 export type WagonFile = z.infer<typeof wagonFileSchema>;
 
 // ---------------------------------------------------------------- rail conditions
@@ -127,7 +130,7 @@ const conditionEntry = z
     sigmaLn: z.number().check(z.gt(0), z.lte(2)),
     source: text(400),
   })
-  .check(z.refine((c) => c.sanded >= c.median, { message: "sand must not lower adhesion", path: ["sanded"] }));
+  .check(z.refine((c) => c.sanded >= c.median, { ...rule("sandLowers"), path: ["sanded"] }));
 
 export const railConditionsFileSchema = z.object({
   schema: z.literal("taut/rail-conditions@1"),
@@ -170,12 +173,8 @@ const contiguousSegments = () =>
         const end = prev.from_m + prev.length_m;
         const gap = segs[k]!.from_m - end;
         if (Math.abs(gap) > 1e-6) {
-          ctx.issues.push({
-            code: "custom",
-            input: segs[k]!.from_m,
-            path: [k, "from_m"],
-            message: gap > 0 ? `leaves a gap of ${round(gap)} m after the previous segment (which ends at ${round(end)} m)` : `overlaps the previous segment by ${round(-gap)} m (it ends at ${round(end)} m)`,
-          });
+          const r = gap > 0 ? rule("segmentGap", { gap: round(gap), end: round(end), unit: "m" }) : rule("segmentOverlap", { overlap: round(-gap), end: round(end), unit: "m" });
+          ctx.issues.push({ code: "custom", input: segs[k]!.from_m, path: [k, "from_m"], ...r });
         }
       }
     }),
@@ -208,7 +207,7 @@ export const seasonSchema = z.object({
 });
 
 export const revisionSchema = z.object({
-  date: z.string().check(z.regex(/^\d{4}-\d{2}-\d{2}$/, { message: "must be a date as YYYY-MM-DD" })),
+  date: z.string().check(z.refine((d) => /^\d{4}-\d{2}-\d{2}$/.test(d), rule("dateForm"))),
   initials: z.string().check(z.minLength(1), z.maxLength(8)),
   change: z.string().check(z.minLength(1), z.maxLength(400)),
 });
@@ -272,7 +271,7 @@ export const wagonGroupSchema = z
       if (!(Number.isInteger(g.wagons) && g.wagons >= 1 && g.wagons <= MAX_WAGONS) || !(g.mass_t >= WAGON_MASS_T.min)) return;
       const x = g.mass_t / g.wagons;
       if (x >= WAGON_MASS_T.min && x <= WAGON_MASS_T.max) return;
-      ctx.issues.push({ code: "custom", input: g.mass_t, path: ["mass_t"], message: `must give from ${WAGON_MASS_T.min} to ${WAGON_MASS_T.max} t per wagon (got ${roundTo3(x)} t per wagon over ${g.wagons} wagon${g.wagons === 1 ? "" : "s"})` });
+      ctx.issues.push({ code: "custom", input: g.mass_t, path: ["mass_t"], ...rule("perWagon", { min: WAGON_MASS_T.min, max: WAGON_MASS_T.max, unit: "t", value: roundTo3(x), count: g.wagons }) });
     }),
   );
 export type WagonGroupFile = z.infer<typeof wagonGroupSchema>;
@@ -299,14 +298,14 @@ const trainObject = z.object({
   z.superRefine((t, ctx) => {
     if (t.groups === undefined) {
       for (const what of ["trailingMass_t", "wagons", "length_m"] as const) {
-        if (t[what] === undefined) ctx.issues.push({ code: "custom", input: t, path: [what], message: "is needed (or give the train as wagon groups)" });
+        if (t[what] === undefined) ctx.issues.push({ code: "custom", input: t, path: [what], ...rule("trainNeeded") });
       }
     } else {
       const wagons = t.groups.reduce((s, g) => s + g.wagons, 0);
       const mass = t.groups.reduce((s, g) => s + g.mass_t, 0);
-      if (wagons > MAX_WAGONS) ctx.issues.push({ code: "custom", input: t.groups, path: ["groups"], message: `must hold at most ${MAX_WAGONS} wagons (got ${wagons})` });
-      if (t.wagons !== undefined && t.wagons !== wagons) ctx.issues.push({ code: "custom", input: t.wagons, path: ["wagons"], message: `must match the groups' ${wagons} wagons (got ${t.wagons})` });
-      if (t.trailingMass_t !== undefined && Math.abs(t.trailingMass_t - mass) > 0.5) ctx.issues.push({ code: "custom", input: t.trailingMass_t, path: ["trailingMass_t"], message: `must match the groups' ${roundTo3(mass)} t (got ${t.trailingMass_t} t)` });
+      if (wagons > MAX_WAGONS) ctx.issues.push({ code: "custom", input: t.groups, path: ["groups"], ...rule("groupsMaxWagons", { max: MAX_WAGONS, wagons }) });
+      if (t.wagons !== undefined && t.wagons !== wagons) ctx.issues.push({ code: "custom", input: t.wagons, path: ["wagons"], ...rule("groupsWagons", { wagons, value: t.wagons }) });
+      if (t.trailingMass_t !== undefined && Math.abs(t.trailingMass_t - mass) > 0.5) ctx.issues.push({ code: "custom", input: t.trailingMass_t, path: ["trailingMass_t"], ...rule("groupsMass", { mass: roundTo3(mass), value: t.trailingMass_t, unit: "t" }) });
     }
     const perWagon = (what: "trailingMass_t" | "length_m", r: { min: number; max: number }, unit: string) => {
       const total = t[what];
@@ -318,7 +317,7 @@ const trainObject = z.object({
         code: "custom",
         input: total,
         path: [what],
-        message: `must give from ${r.min} to ${r.max} ${unit} per wagon (got ${roundTo3(x)} ${unit} per wagon over ${t.wagons} wagon${t.wagons === 1 ? "" : "s"})`,
+        ...rule("perWagon", { min: r.min, max: r.max, unit, value: roundTo3(x), count: t.wagons }),
       });
     };
     perWagon("trailingMass_t", WAGON_MASS_T, "t");

@@ -37,7 +37,7 @@ describe("reading a notes file", () => {
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(r.message).toBe('The bundle holds 2 notes; note 2 ("Second (test)") is not valid, so none was imported.');
-    expect(r.issues).toEqual([{ path: "notes[1].segments[0].curveRadius_m", message: "must be 0 (straight) or at least 80 m (got 40)" }]);
+    expect(r.issues.map(({ path, message, code }) => ({ path, message, code }))).toEqual([{ path: "notes[1].segments[0].curveRadius_m", message: "must be 0 (straight) or at least 80 m (got 40)", code: "straightOrRadius" }]);
   });
 
   it("names the schema of a foreign file and of a file with none", () => {

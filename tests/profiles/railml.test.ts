@@ -356,7 +356,7 @@ describe("the note", () => {
     const s = stretchOf(tight, { front: { kind: "absPos", absPos: 11_600 }, direction: "up", behindM: 1200, aheadM: 900 });
     const n = railmlNote(s, meta);
     expect(n.ok).toBe(false);
-    expect(!n.ok && n.issues[0]).toEqual({ path: expect.stringMatching(/^segments\[\d+\]\.curveRadius_m$/), message: expect.stringContaining("must be 0 (straight) or at least 80 m") });
+    expect(!n.ok && n.issues[0]).toMatchObject({ path: expect.stringMatching(/^segments\[\d+\]\.curveRadius_m$/), message: expect.stringContaining("must be 0 (straight) or at least 80 m"), code: "straightOrRadius" });
   });
 
   it("plans exactly as the same profile typed by hand", () => {
