@@ -1,45 +1,55 @@
 /**
- * The input fields of a start case: label, measure and file unit by field path, and how a validation
- * issue is put into the user's units ("must be at most 200 mm" reads "must be at most 7.87 in").
+ * The input fields of a start case: label, measure and file unit by field path, and how an issue written
+ * as text (without a code) is put into the user's units ("must be at most 200 mm" reads "must be at most
+ * 7.87 in"). Coded issues are rendered in the language on screen by fieldWords.ts, loaded with the
+ * draft's checker; this module carries no words, so the first load stays small.
  */
+import type { fields } from "../i18n/en/fields.js";
 import type { FieldIssue } from "../profiles/issues.js";
 import { decimalsOf, formatNumber, localiseText, toDisplay, unitSymbol, type MeasureKey, type UnitSystem } from "./format.js";
 
+/** An issue as the app shows it: its message in the user's language and units, with its field's name. */
+export interface LocalIssue extends FieldIssue {
+  /** The field's name in the language on screen. */
+  label?: string;
+}
+
 export interface FieldDef {
-  label: string;
+  /** The field's name: a key of the fields catalog. */
+  label: keyof typeof fields.en & `label${string}`;
   measure?: MeasureKey;
   /** Unit of the value in the file (a unit id of the core's table). */
   fileUnit?: string;
 }
 
 const FIELDS: Record<string, FieldDef> = {
-  "locomotives": { label: "Locomotives" },
-  "locomotives[].profile": { label: "Locomotive profile" },
-  "locomotives[].count": { label: "Number of locomotives" },
-  "locomotives[].position": { label: "Position" },
-  "locomotives[].position.afterWagon": { label: "After wagon" },
-  "train.trailingMass_t": { label: "Trailing mass", measure: "mass", fileUnit: "t" },
-  "train.wagons": { label: "Wagons" },
-  "train.length_m": { label: "Train length", measure: "distance", fileUnit: "m" },
-  "train.couplerSlack_mm": { label: "Free slack per coupling", measure: "slack", fileUnit: "mm" },
-  "train.couplerLimit_kN": { label: "Coupler working limit", measure: "force", fileUnit: "kN" },
-  "train.bearing": { label: "Bearings" },
-  "train.coupling": { label: "Coupling" },
-  "train.wagonType": { label: "Wagon type" },
-  "train.slackState": { label: "Slack at the start" },
-  "location": { label: "Location" },
-  "location.frontAt_m": { label: "Location" },
-  "location.gradient_permille": { label: "Gradient", measure: "grade", fileUnit: "permille" },
-  "location.curveRadius_m": { label: "Curve radius", measure: "radius", fileUnit: "m" },
-  "location.clearAhead_m": { label: "Clear ahead", measure: "distance", fileUnit: "m" },
-  "conditions.rail": { label: "Rail condition" },
-  "conditions.sand": { label: "Sand" },
-  "conditions.temperature_C": { label: "Temperature", measure: "temperature", fileUnit: "C" },
-  "target.speed_kmh": { label: "Target speed", measure: "speed", fileUnit: "kmh" },
-  "target.distance_m": { label: "Target distance", measure: "distance", fileUnit: "m" },
-  "settings.couplerSafetyFactor": { label: "Coupler safety factor (Settings)" },
-  "settings.slipRiskThreshold": { label: "Slip-risk threshold (Settings)" },
-  "settings.marginalSlipRisk": { label: "Marginal slip-risk bound (Settings)" },
+  "locomotives": { label: "labelLocomotives" },
+  "locomotives[].profile": { label: "labelProfile" },
+  "locomotives[].count": { label: "labelCount" },
+  "locomotives[].position": { label: "labelPosition" },
+  "locomotives[].position.afterWagon": { label: "labelAfterWagon" },
+  "train.trailingMass_t": { label: "labelTrailingMass", measure: "mass", fileUnit: "t" },
+  "train.wagons": { label: "labelWagons" },
+  "train.length_m": { label: "labelLength", measure: "distance", fileUnit: "m" },
+  "train.couplerSlack_mm": { label: "labelSlack", measure: "slack", fileUnit: "mm" },
+  "train.couplerLimit_kN": { label: "labelCouplerLimit", measure: "force", fileUnit: "kN" },
+  "train.bearing": { label: "labelBearing" },
+  "train.coupling": { label: "labelCoupling" },
+  "train.wagonType": { label: "labelWagonType" },
+  "train.slackState": { label: "labelSlackState" },
+  "location": { label: "labelLocation" },
+  "location.frontAt_m": { label: "labelLocation" },
+  "location.gradient_permille": { label: "labelGradient", measure: "grade", fileUnit: "permille" },
+  "location.curveRadius_m": { label: "labelCurveRadius", measure: "radius", fileUnit: "m" },
+  "location.clearAhead_m": { label: "labelClearAhead", measure: "distance", fileUnit: "m" },
+  "conditions.rail": { label: "labelRail" },
+  "conditions.sand": { label: "labelSand" },
+  "conditions.temperature_C": { label: "labelTemperature", measure: "temperature", fileUnit: "C" },
+  "target.speed_kmh": { label: "labelTargetSpeed", measure: "speed", fileUnit: "kmh" },
+  "target.distance_m": { label: "labelTargetDistance", measure: "distance", fileUnit: "m" },
+  "settings.couplerSafetyFactor": { label: "labelSafetyFactor" },
+  "settings.slipRiskThreshold": { label: "labelSlipRisk" },
+  "settings.marginalSlipRisk": { label: "labelMarginalSlipRisk" },
 };
 
 /** The field an issue path belongs to (list indices do not matter). */
@@ -56,10 +66,10 @@ const RANGE = new RegExp(`\\bfrom ${NUM} to ${NUM}(?: (?:mm|m|kN|t|km/h|‰|°C)
 const PER_WAGON = new RegExp(`\\(got ${NUM} (?:t|m) per wagon`, "g");
 
 /**
- * The issue as the user should read it: bounds and the value given in the display units of the field,
- * and "must be a number" for text that is not one.
+ * An issue written as text (no code) as the user should read it: bounds and the value given in the display
+ * units of the field, and "must be a number" for text that is not one.
  */
-export function localiseIssue(issue: FieldIssue, system: UnitSystem): FieldIssue {
+export function legacyLocaliseIssue(issue: FieldIssue, system: UnitSystem): FieldIssue {
   if (/\(got NaN\)|got null\)|must be a number \(got/.test(issue.message) || /is required \(a number\)/.test(issue.message)) {
     return { ...issue, message: "must be a number" };
   }
@@ -84,9 +94,7 @@ export function localiseIssue(issue: FieldIssue, system: UnitSystem): FieldIssue
   return { ...issue, message };
 }
 
-/** "Label: message" for a list of issues away from their fields. */
-export function issueLine(issue: FieldIssue): string {
-  const f = fieldOf(issue.path);
-  const where = f ? f.label : issue.path || "The case";
-  return `${where} ${issue.message}`;
+/** "Label message" for a list of issues away from their fields (the label localiseIssue gave, else the path). */
+export function issueLine(issue: LocalIssue): string {
+  return `${issue.label ?? (issue.path || "–")} ${issue.message}`;
 }

@@ -66,16 +66,25 @@ export async function loadCatalog(l: Lang): Promise<Catalog | null> {
 }
 
 let wanted: Lang = "en";
-/** The loader of the words of the screens opened later (app/laterWords.ts), once one of them has loaded. */
-let part: ((l: Lang) => Promise<Catalog | null>) | null = null;
+/**
+ * The loaders of words that come later (app/laterWords.ts with the screens opened later, app/fieldWords.ts
+ * with the draft's checker), each once its module has loaded.
+ */
+const parts: ((l: Lang) => Promise<Catalog | null>)[] = [];
+
+/** The words of every part added so far in `l`, as one catalog (null when none has any). */
+async function partsIn(l: Lang): Promise<Catalog | null> {
+  const got = await Promise.all(parts.map((p) => p(l)));
+  return got.some((c) => c) ? Object.assign({}, ...got.filter((c) => c)) : null;
+}
 
 /**
- * Words that come with a later screen: loaded now for the language on screen and with every language chosen
- * afterwards (before it switches), so a screen never shows half in English.
+ * Words that come with a later screen or module: loaded now for the language on screen and with every
+ * language chosen afterwards (before it switches), so a screen never shows half in English.
  */
 export async function addCatalogPart(load: (l: Lang) => Promise<Catalog | null>): Promise<void> {
-  if (part) return;
-  part = load;
+  if (parts.includes(load)) return;
+  parts.push(load);
   const l = lang();
   try {
     const p = await load(l);
@@ -94,7 +103,7 @@ export async function setAppLanguage(l: Lang): Promise<boolean> {
   let c: Catalog | null;
   try {
     c = await loadCatalog(l);
-    const more = c && part ? await part(l) : null;
+    const more = c && parts.length > 0 ? await partsIn(l) : null;
     if (c && more) c = { ...c, ...more };
   } catch {
     return false;

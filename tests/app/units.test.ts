@@ -3,7 +3,9 @@
  * 1 short ton = 907.18474 kg, 1 mph = 0.44704 m/s, 1 lbf = 4.4482216152605 N, 1 ft = 0.3048 m).
  */
 import { describe, expect, it } from "vitest";
-import { localiseIssue } from "../../src/app/fields.js";
+import { fieldWords, localiseIssue } from "../../src/app/fieldWords.js";
+import { setAppLanguage } from "../../src/app/i18n.js";
+import type { FieldIssue } from "../../src/profiles/issues.js";
 import { formatNumber, fromDisplay, localiseText, parseNumber, percent, show, toDisplay, unitSymbol } from "../../src/app/format.js";
 
 describe("display units both ways", () => {
@@ -107,6 +109,30 @@ describe("rules broken, in the user's units", () => {
   it("says 'must be a number' for text that is not one, and leaves fields without units alone", () => {
     expect(localiseIssue({ path: "train.trailingMass_t", message: "must be a number (got NaN)" }, "us").message).toBe("must be a number");
     const w = { path: "train.wagons", message: "must be at most 400 (got 500)" };
-    expect(localiseIssue(w, "us")).toEqual(w);
+    expect(localiseIssue(w, "us")).toEqual({ ...w, label: "Wagons" });
+  });
+});
+
+describe("coded rules broken, in the language on screen and the user's units", () => {
+  // As the schema gives it for a trailing mass of 2 t (tests/i18n/fields.test.ts checks the schema's side).
+  const mass: FieldIssue = { path: "train.trailingMass_t", message: "must be from 5 to 60000 t (got 2)", code: "rangeIn", figures: { min: 5, max: 60000, unit: "t" }, got: 2 };
+  const gap: FieldIssue = { path: "location.segments[1].from_m", message: "", code: "segmentGap", figures: { gap: 20, end: 500, unit: "m" }, got: 520 };
+
+  it("English reads as before; German and Hungarian with their words, decimal comma and grouping", async () => {
+    await fieldWords;
+    try {
+      expect(localiseIssue(mass, "metric")).toMatchObject({ message: "must be from 5 to 60,000 t (got 2 t)", label: "Trailing mass" });
+      // 1 short ton = 907.18474 kg (NIST SP 811, appendix B.8): 5 t = 5.51, 60 000 t = 66 138.7 short tons.
+      expect(localiseIssue(mass, "us").message).toBe("must be from 5.51 to 66,139 short tons (got 2 short tons)");
+      expect(await setAppLanguage("de")).toBe(true);
+      expect(localiseIssue(mass, "us")).toMatchObject({ message: "muss zwischen 5,51 und 66.139 short tons liegen (angegeben: 2 short tons)", label: "Anhängelast" });
+      // 20 m = 65.6 ft, 500 m = 1640 ft (1 ft = 0.3048 m exactly).
+      expect(localiseIssue(gap, "us").message).toBe("lässt eine Lücke von 66 ft nach dem vorigen Abschnitt (der bei 1.640 ft endet) (angegeben: 1.706 ft)");
+      expect(await setAppLanguage("hu")).toBe(true);
+      expect(localiseIssue(mass, "metric")).toMatchObject({ message: "5 és 60\u00a0000 t között kell legyen (megadva: 2 t)", label: "Vontatott tömeg" });
+      expect(localiseIssue({ path: "train.trailingMass_t", message: "", code: "mustBe", figures: { expected: "number" }, got: "NaN" }, "us").message).toBe("szám kell legyen");
+    } finally {
+      await setAppLanguage("en");
+    }
   });
 });

@@ -8,9 +8,9 @@ import { createStore, reconcile, unwrap, type SetStoreFunction } from "solid-js/
 import type { StartCase } from "../../core/train/types.js";
 import { builtinCases, DEMO_CASE_ID } from "../../profiles/builtin.js";
 import type { FieldIssue, ParseResult } from "../../profiles/issues.js";
+import type { LocalIssue } from "../fields.js";
 import type { Library } from "../../profiles/library.js";
 import type { StartCaseFile, TrainPresetFile } from "../../profiles/schemas.js";
-import { localiseIssue } from "../fields.js";
 import type { AppSettings } from "./createSettings.js";
 import { read, safeLocalStorage, write } from "./createSettings.js";
 import { applyPreset, draftFromFile, draftToFile, storedDraft, type CaseDraft, type DraftLoco } from "./caseDraft.js";
@@ -52,7 +52,7 @@ export interface CaseDraftStore {
   /** The draft checked; `pending` for the moment before the checker has loaded (nothing known yet). */
   checked: Accessor<DraftCheck>;
   /** Every issue, in the user's units. */
-  issues: Accessor<FieldIssue[]>;
+  issues: Accessor<LocalIssue[]>;
   /** The first issue at one of these field paths (e.g. "train.trailingMass_t"). */
   issueAt(...paths: string[]): FieldIssue | undefined;
   /** The stored inputs set aside at launch because they could not be used (the demo opened instead). */
@@ -141,9 +141,9 @@ export function createCaseDraft(deps: CaseDraftDeps): CaseDraftStore {
   const [checker, setChecker] = createSignal(loadedDraftChecker());
   if (!checker()) void loadDraftChecker().then((f) => setChecker(() => f));
   const checked = createMemo((): DraftCheck => {
-    const validate = checker();
+    const loaded = checker();
     const json = caseJson();
-    if (validate) return validate(json, unwrap(draft), deps.library());
+    if (loaded) return loaded.validate(json, unwrap(draft), deps.library());
     // Before the checker has loaded: the case checked at build time when the draft is that case.
     const pre = deps.prechecked;
     return pre && JSON.stringify(json) === pre.caseJson ? { ok: true, value: pre.value } : PENDING;
@@ -151,7 +151,8 @@ export function createCaseDraft(deps: CaseDraftDeps): CaseDraftStore {
   const issues = createMemo(() => {
     const c = checked();
     const units = deps.settings().units;
-    return c.ok ? [] : c.issues.map((i) => localiseIssue(i, units));
+    const localise = checker()?.localise;
+    return c.ok || !localise ? [] : c.issues.map((i) => localise(i, units));
   });
 
   return {

@@ -73,6 +73,34 @@ export const fields = namespace("fields", {
   jsonEmpty: "is not valid JSON: the file is empty",
   // A list of issues cut short.
   andMore: "…and {count} more",
+  // The fields of a start case as a list of issues names them (app/fields.ts).
+  labelLocomotives: "Locomotives",
+  labelProfile: "Locomotive profile",
+  labelCount: "Number of locomotives",
+  labelPosition: "Position",
+  labelAfterWagon: "After wagon",
+  labelTrailingMass: "Trailing mass",
+  labelWagons: "Wagons",
+  labelLength: "Train length",
+  labelSlack: "Free slack per coupling",
+  labelCouplerLimit: "Coupler working limit",
+  labelBearing: "Bearings",
+  labelCoupling: "Coupling",
+  labelWagonType: "Wagon type",
+  labelSlackState: "Slack at the start",
+  labelLocation: "Location",
+  labelGradient: "Gradient",
+  labelCurveRadius: "Curve radius",
+  labelClearAhead: "Clear ahead",
+  labelRail: "Rail condition",
+  labelSand: "Sand",
+  labelTemperature: "Temperature",
+  labelTargetSpeed: "Target speed",
+  labelTargetDistance: "Target distance",
+  labelSafetyFactor: "Coupler safety factor (Settings)",
+  labelSlipRisk: "Slip-risk threshold (Settings)",
+  labelMarginalSlipRisk: "Marginal slip-risk bound (Settings)",
+  labelTheCase: "The case",
   // The command line's headline over a file's issues.
   notValidFile: "{name}: not a valid file",
   caseNotValid: "{name}: the start case is not valid",
@@ -82,5 +110,5 @@ export const fields = namespace("fields", {
 /** A field message's code: a key of the rules above. */
 export type FieldCode = Exclude<
   keyof typeof fields.en,
-  `expect${string}` | `got${string}` | "got" | "andMore" | "notValidFile" | "caseNotValid" | "noteNotValid"
+  `expect${string}` | `got${string}` | `label${string}` | "got" | "andMore" | "notValidFile" | "caseNotValid" | "noteNotValid"
 >;

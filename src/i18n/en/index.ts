@@ -4,6 +4,7 @@ import { cautions } from "./cautions.js";
 import { cli } from "./cli.js";
 import { departures } from "./departures.js";
 import { dispatch } from "./dispatch.js";
+import { fields } from "./fields.js";
 import { inputs } from "./inputs.js";
 import { notes } from "./notes.js";
 import { plan } from "./plan.js";
@@ -16,4 +17,4 @@ import { guidance } from "./guidance.js";
 import { assistNotes } from "./assistNotes.js";
 import { advice } from "./advice.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields] as const;

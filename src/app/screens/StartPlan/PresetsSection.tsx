@@ -12,6 +12,7 @@ import { Icon } from "../../components/Icon.js";
 import { download } from "../../download.js";
 import type { CaseSettings } from "../../state/caseDraft.js";
 import type { CaseDraftStore } from "../../state/createCaseDraft.js";
+import { loadDraftChecker, type DraftChecker } from "../../state/draftChecker.js";
 import { caseFileName, caseFileText } from "./caseFile.js";
 
 import { inputs } from "../../../i18n/en/inputs.js";
@@ -29,7 +30,7 @@ export interface PresetsSectionProps {
   settings?: CaseSettings;
 }
 
-type Opened = { kind: "ok"; name: string; notes: string[] } | { kind: "bad"; message: string; issues: FieldIssue[] } | null;
+type Opened = { kind: "ok"; name: string; notes: string[] } | { kind: "bad"; message: string; issues: FieldIssue[]; localise: DraftChecker["localise"] } | null;
 
 /** Quick fill: the demo cases and the presets; open and save a case file; the case's label once one is loaded. */
 export function PresetsSection(props: PresetsSectionProps): JSX.Element {
@@ -44,7 +45,9 @@ export function PresetsSection(props: PresetsSectionProps): JSX.Element {
     const { readCaseFile } = await import("./openCaseFile.js");
     const r = props.library ? readCaseFile(file.name, text, props.library, settings) : { ok: false as const, message: "no library", issues: [] };
     if (!r.ok) {
-      setOpened({ kind: "bad", message: r.message, issues: r.issues });
+      // The issues in the words of the language on screen, their figures in the file's own (metric) units.
+      const { localise } = await loadDraftChecker();
+      setOpened({ kind: "bad", message: r.message, issues: r.issues, localise });
       return;
     }
     s.loadCase(r.file);
@@ -114,7 +117,7 @@ export function PresetsSection(props: PresetsSectionProps): JSX.Element {
           v.kind === "bad" ? (
             <div class="problem" role="alert">
               <p>{t("nothingChanged", { message: v.message })}</p>
-              <ErrorList issues={v.issues} title={t("fileBreaks")} />
+              <ErrorList issues={v.issues.map((i) => v.localise(i, "metric"))} title={t("fileBreaks")} />
             </div>
           ) : (
             <div class="opened-case" role="status">
