@@ -1,5 +1,7 @@
 /** Errors the command line reports without a stack trace, with their exit codes. */
-import { formatIssues, type FieldIssue } from "../profiles/issues.js";
+import { issueMessage } from "../profiles/issueText.js";
+import { formatIssues, MAX_LISTED_ISSUES, type FieldIssue } from "../profiles/issues.js";
+import { cliFieldWords, cliTr } from "./lang.js";
 
 export const EXIT_OK = 0;
 export const EXIT_INTERNAL = 1;
@@ -14,8 +16,17 @@ export class InputError extends Error {
     super(message);
   }
   describe(): string {
-    return this.issues.length > 0 ? `${this.message}\n${indent(formatIssues(this.issues))}` : this.message;
+    return this.issues.length > 0 ? `${this.message}\n${indent(issueLines(this.issues))}` : this.message;
   }
+}
+
+/** The issues in this run's language (English: formatIssues' own lines, byte for byte). */
+function issueLines(issues: readonly FieldIssue[]): string {
+  const tr = cliTr();
+  if (tr.lang === "en") return formatIssues(issues);
+  const shown = issues.slice(0, MAX_LISTED_ISSUES).map((i) => ({ path: i.path, message: issueMessage(tr, i) }));
+  const more = issues.length - MAX_LISTED_ISSUES;
+  return formatIssues(shown) + (more > 0 ? `\n${cliFieldWords()("andMore", { count: more })}` : "");
 }
 
 function indent(s: string): string {

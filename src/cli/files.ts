@@ -12,6 +12,7 @@ import { printable } from "../profiles/text.js";
 import { planWorkProblem } from "../core/planner/workCap.js";
 import type { StartCase } from "../core/train/types.js";
 import { InputError } from "./errors.js";
+import { cliFieldWords } from "./lang.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { readNotesText } from "../profiles/notes.js";
 import { applyOverrides, type CaseOverrides } from "./caseOverrides.js";
@@ -116,7 +117,7 @@ export function readText(path: string): string {
 /** Read and parse a JSON file. */
 export function readJson(path: string): unknown {
   const r = parseJsonText(readText(path));
-  if (!r.ok) throw new InputError(`${pathText(path)}: not a valid file`, r.issues);
+  if (!r.ok) throw new InputError(cliFieldWords()("notValidFile", { name: pathText(path) }), r.issues);
   return r.value;
 }
 
@@ -128,7 +129,7 @@ export function library(extraNotes: LocationNoteFile[] = []): Library {
 /** Read and parse JSON text from a named source (a file, or standard input). */
 export function parseJsonFrom(name: string, text: string): unknown {
   const r = parseJsonText(text);
-  if (!r.ok) throw new InputError(`${name}: not a valid file`, r.issues);
+  if (!r.ok) throw new InputError(cliFieldWords()("notValidFile", { name }), r.issues);
   return r.value;
 }
 
@@ -150,8 +151,8 @@ export function readStartCase(
   if (overrides.location !== undefined && raw && typeof raw === "object" && !Array.isArray(raw)) raw = { ...(raw as Record<string, unknown>), location: overrides.location };
   if (overrides.case) raw = applyOverrides(raw, overrides.case, (id) => lib.locations.get(id), wagonTypeOf(lib));
   const r = parseStartCase(raw, lib);
-  if (!r.ok) throw new InputError(`${name}: the start case is not valid`, r.issues);
-  checkWork(r.value, `${name}: the start case is not valid`);
+  if (!r.ok) throw new InputError(cliFieldWords()("caseNotValid", { name }), r.issues);
+  checkWork(r.value, cliFieldWords()("caseNotValid", { name }));
   return { c: r.value, raw: raw as Record<string, unknown> };
 }
 
@@ -167,7 +168,7 @@ export function wagonTypeOf(lib: Library): (id: string) => { tare_t: number; len
 export function readLocationNote(path: string): LocationNoteFile {
   const raw = readJson(path);
   const r = parseLocationNote(raw);
-  if (!r.ok) throw new InputError(`${pathText(path)}: the location note is not valid`, r.issues);
+  if (!r.ok) throw new InputError(cliFieldWords()("noteNotValid", { name: pathText(path) }), r.issues);
   return r.value;
 }
 

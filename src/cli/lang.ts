@@ -6,13 +6,16 @@
 import { cliDe } from "../i18n/de/cli.js";
 import { de } from "../i18n/de/index.js";
 import { cliHu } from "../i18n/hu/cli.js";
+import { fieldsDe } from "../i18n/de/fields.js";
+import { fields } from "../i18n/en/fields.js";
+import { fieldsHu } from "../i18n/hu/fields.js";
 import { hu } from "../i18n/hu/index.js";
 import { langFromEnvironment, isLang, type Lang } from "../i18n/language.js";
 import type { Catalog } from "../i18n/messages.js";
-import { createTranslator, type Translator } from "../i18n/translator.js";
+import { createTranslator, type MessageFn, type Translator } from "../i18n/translator.js";
 import { wordsOf } from "../i18n/words.js";
 
-const CATALOGS: Readonly<Record<Lang, Catalog | null>> = { en: null, hu: { ...hu, cli: cliHu }, de: { ...de, cli: cliDe } };
+const CATALOGS: Readonly<Record<Lang, Catalog | null>> = { en: null, hu: { ...hu, cli: cliHu, fields: fieldsHu }, de: { ...de, cli: cliDe, fields: fieldsDe } };
 
 let current: Translator = createTranslator("en", null);
 
@@ -23,6 +26,11 @@ export function setCliLanguage(l: Lang): void {
 /** The translator of this run. */
 export function cliTr(): Translator {
   return current;
+}
+
+/** The field messages and the headlines over them in this run's language. */
+export function cliFieldWords(): MessageFn<typeof fields.en> {
+  return current.ns(fields);
 }
 
 /** The words for a plan's codes in this run's language. */

@@ -44,6 +44,7 @@ export function renderField(t: FieldsFn, num: (x: number) => string, c: FieldCod
   const params: Record<string, string | number> = {};
   for (const [k, v] of Object.entries(c.figures ?? {})) {
     if (k === "count") params[k] = v;
+    else if (k === "problem") params[k] = (t as (k: string, p: Record<string, string>) => string)(String(v), { open: "{", close: "}" });
     else if (k === "expected") params[k] = typeof v === "string" && EXPECTED[v] ? t(EXPECTED[v] as never) : String(v);
     else params[k] = typeof v === "number" ? num(v) : v;
   }

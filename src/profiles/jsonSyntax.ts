@@ -6,12 +6,16 @@
  * overflow the call stack.
  */
 
+/** What breaks the grammar: a key of the fields catalog (i18n/en/fields.ts), its words in every language. */
+export type JsonProblem = keyof typeof fields.en & `syntax${string}`;
+
 export interface JsonSyntaxProblem {
   /** 1-based line and column (in UTF-16 code units) of the first character that breaks the grammar. */
   line: number;
   column: number;
-  what: string;
+  what: JsonProblem;
 }
+import type { fields } from "../i18n/en/fields.js";
 
 const NUMBER = /-?(?:0|[1-9]\d*)(?:\.\d+)?(?:[eE][+-]?\d+)?/y;
 const HEX4 = /[0-9a-fA-F]{4}/y;
@@ -31,13 +35,13 @@ export function jsonSyntaxProblem(text: string): JsonSyntaxProblem | undefined {
   return { line, column: at.offset - lineStart + 1, what: at.what };
 }
 
-function scan(s: string): { offset: number; what: string } | undefined {
+function scan(s: string): { offset: number; what: JsonProblem } | undefined {
   const n = s.length;
   const stack: number[] = []; // 123 "{" or 91 "["
   let i = 0;
   type State = "value" | "firstValue" | "after" | "key" | "firstKey";
   let st: State = "value";
-  const fail = (what: string, offset = i) => ({ offset, what });
+  const fail = (what: JsonProblem, offset = i) => ({ offset, what });
   const skipSpace = () => {
     while (i < n) {
       const c = s.charCodeAt(i);
@@ -45,9 +49,9 @@ function scan(s: string): { offset: number; what: string } | undefined {
       i++;
     }
   };
-  const ends = () => (stack.length === 0 ? "the text ends where a value should be" : `the text ends inside ${stack[stack.length - 1] === 123 ? "an object ({…})" : "a list ([…])"}: it may have been cut short`);
+  const ends = (): JsonProblem => (stack.length === 0 ? "syntaxEndsEarly" : stack[stack.length - 1] === 123 ? "syntaxEndsInObject" : "syntaxEndsInList");
   /** A string from the quote at i; undefined when it is well formed (i then just past it). */
-  const string = (): { offset: number; what: string } | undefined => {
+  const string = (): { offset: number; what: JsonProblem } | undefined => {
     const start = i;
     i++;
     while (i < n) {
@@ -60,16 +64,16 @@ function scan(s: string): { offset: number; what: string } | undefined {
         const e = s[i + 1];
         if (e === "u") {
           HEX4.lastIndex = i + 2;
-          if (!HEX4.test(s)) return fail("a \\u escape in a string needs four hex digits");
+          if (!HEX4.test(s)) return fail("syntaxHexEscape");
           i += 6;
         } else if (e !== undefined && '"\\/bfnrt'.includes(e)) i += 2;
-        else return fail("a backslash in a string starts no known escape (\\\" \\\\ \\/ \\b \\f \\n \\r \\t \\u)");
+        else return fail("syntaxBadEscape");
         continue;
       }
-      if (c < 32) return fail("a control character inside a string (a line break must be written \\n)");
+      if (c < 32) return fail("syntaxControl");
       i++;
     }
-    return fail("a string is not closed (no closing \")", start);
+    return fail("syntaxOpenString", start);
   };
   for (;;) {
     skipSpace();
@@ -102,7 +106,7 @@ function scan(s: string): { offset: number; what: string } | undefined {
       }
       if (c === 45 || (c >= 48 && c <= 57)) {
         NUMBER.lastIndex = i;
-        if (!NUMBER.test(s)) return fail("a number is not written as JSON writes numbers");
+        if (!NUMBER.test(s)) return fail("syntaxNumber");
         i = NUMBER.lastIndex;
         st = "after";
         continue;
@@ -113,11 +117,11 @@ function scan(s: string): { offset: number; what: string } | undefined {
         st = "after";
         continue;
       }
-      if (c === 93 && st === "value" && stack[stack.length - 1] === 91) return fail("a comma before a closing ] is not allowed in JSON");
-      return fail(c === 39 ? "text in single quotes: JSON strings take double quotes" : "a value should start here (an object, a list, text in double quotes, a number, true, false or null)");
+      if (c === 93 && st === "value" && stack[stack.length - 1] === 91) return fail("syntaxCommaList");
+      return fail(c === 39 ? "syntaxSingleQuotes" : "syntaxValueHere");
     }
     if (st === "after") {
-      if (stack.length === 0) return i < n ? fail("more text follows the end of the JSON value") : undefined;
+      if (stack.length === 0) return i < n ? fail("syntaxMoreText") : undefined;
       if (i >= n) return fail(ends());
       const top = stack[stack.length - 1]!;
       const c = s.charCodeAt(i);
@@ -131,7 +135,7 @@ function scan(s: string): { offset: number; what: string } | undefined {
         i++;
         continue;
       }
-      return fail(top === 123 ? "a comma or a closing } should come here" : "a comma or a closing ] should come here");
+      return fail(top === 123 ? "syntaxCommaObject" : "syntaxCommaOrBracket");
     }
     // "key" or "firstKey"
     if (i >= n) return fail(ends());
@@ -142,11 +146,11 @@ function scan(s: string): { offset: number; what: string } | undefined {
       st = "after";
       continue;
     }
-    if (c !== 34) return fail(st === "key" && c === 125 ? "a comma before a closing } is not allowed in JSON" : "a field name in double quotes should come here");
+    if (c !== 34) return fail(st === "key" && c === 125 ? "syntaxCommaBrace" : "syntaxFieldName");
     const e = string();
     if (e) return e;
     skipSpace();
-    if (s.charCodeAt(i) !== 58) return fail(i >= n ? ends() : "a colon (:) should follow the field name");
+    if (s.charCodeAt(i) !== 58) return fail(i >= n ? ends() : "syntaxColon");
     i++;
     st = "value";
   }

@@ -47,7 +47,7 @@ export function parseJsonText(text: string): ParseResult<unknown> {
   } catch {
     if (body.trim() === "") return fail([coded("", { code: "jsonEmpty" })]);
     const p = jsonSyntaxProblem(body);
-    return fail([{ path: "", message: p ? `is not valid JSON: ${p.what} (line ${p.line}, column ${p.column})` : "is not valid JSON" }]);
+    return fail([coded("", p ? { code: "jsonSyntax", figures: { problem: p.what, line: p.line, column: p.column } } : { code: "jsonInvalid" })]);
   }
 }
 

@@ -76,7 +76,7 @@ describe("field messages as codes", () => {
     for (const i of issues.filter((x) => x.code)) {
       for (const tr of [hu, de]) {
         const m = issueMessage(tr, i);
-        expect(m, `${tr.lang} ${i.code}`).not.toMatch(/[{}]/);
+        expect(m, `${tr.lang} ${i.code}`).not.toMatch(/\{[A-Za-z]+\}/);
         expect(m, `${tr.lang} ${i.code}`).not.toBe(i.message);
         // The figures a message quotes are the English ones (word order may move them; ids may hold digits).
         if (!/known/.test(i.code!)) expect(numbers(m), `${tr.lang} ${i.code}: ${m}`).toEqual(numbers(i.message));

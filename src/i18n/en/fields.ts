@@ -71,6 +71,27 @@ export const fields = namespace("fields", {
   rearBeforeProfile: "puts the rear of the {length} {unit} train at {rear} {unit}, before the profile starts ({start} {unit})",
   beyondProfile: "is beyond the end of the profile ({end} {unit})",
   jsonEmpty: "is not valid JSON: the file is empty",
+  jsonSyntax: "is not valid JSON: {problem} (line {line}, column {column})",
+  jsonInvalid: "is not valid JSON",
+  // Where JSON text breaks the grammar ({problem} above; profiles/jsonSyntax.ts); {open} and {close} are an
+  // object's braces, given as figures so a catalog holds no brace but its placeholders'.
+  syntaxHexEscape: "a \\u escape in a string needs four hex digits",
+  syntaxBadEscape: "a backslash in a string starts no known escape (\\\" \\\\ \\/ \\b \\f \\n \\r \\t \\u)",
+  syntaxControl: "a control character inside a string (a line break must be written \\n)",
+  syntaxOpenString: 'a string is not closed (no closing ")',
+  syntaxNumber: "a number is not written as JSON writes numbers",
+  syntaxCommaList: "a comma before a closing ] is not allowed in JSON",
+  syntaxSingleQuotes: "text in single quotes: JSON strings take double quotes",
+  syntaxValueHere: "a value should start here (an object, a list, text in double quotes, a number, true, false or null)",
+  syntaxMoreText: "more text follows the end of the JSON value",
+  syntaxCommaObject: "a comma or a closing {close} should come here",
+  syntaxCommaOrBracket: "a comma or a closing ] should come here",
+  syntaxCommaBrace: "a comma before a closing {close} is not allowed in JSON",
+  syntaxFieldName: "a field name in double quotes should come here",
+  syntaxColon: "a colon (:) should follow the field name",
+  syntaxEndsEarly: "the text ends where a value should be",
+  syntaxEndsInObject: "the text ends inside an object ({open}…{close}): it may have been cut short",
+  syntaxEndsInList: "the text ends inside a list ([…]): it may have been cut short",
   // A list of issues cut short.
   andMore: "…and {count} more",
   // The fields of a start case as a list of issues names them (app/fields.ts).
@@ -110,5 +131,5 @@ export const fields = namespace("fields", {
 /** A field message's code: a key of the rules above. */
 export type FieldCode = Exclude<
   keyof typeof fields.en,
-  `expect${string}` | `got${string}` | `label${string}` | "got" | "andMore" | "notValidFile" | "caseNotValid" | "noteNotValid"
+  `expect${string}` | `got${string}` | `label${string}` | "got" | `syntax${string}` | "andMore" | "notValidFile" | "caseNotValid" | "noteNotValid"
 >;
