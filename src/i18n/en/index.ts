@@ -6,6 +6,7 @@ import { departures } from "./departures.js";
 import { dispatch } from "./dispatch.js";
 import { fields } from "./fields.js";
 import { inputs } from "./inputs.js";
+import { noteChecks } from "./noteChecks.js";
 import { notes } from "./notes.js";
 import { plan } from "./plan.js";
 import { settings } from "./settings.js";
@@ -17,4 +18,4 @@ import { guidance } from "./guidance.js";
 import { assistNotes } from "./assistNotes.js";
 import { advice } from "./advice.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks] as const;

@@ -26,7 +26,8 @@ export interface SegmentsTableProps {
 export function SegmentsTable(props: SegmentsTableProps): JSX.Element {
   const bad = (k: number, field: keyof SegmentFile) => props.issues.some((i) => i.severity === "error" && i.path === `segments[${k}].${field}`);
   const rowIssues = () => props.issues.filter((i) => i.path.startsWith("segments"));
-  const hasJoinIssue = () => rowIssues().some((i) => /\.from_m$/.test(i.path) && /Gap|overlaps/.test(i.message));
+  // By the checks' codes, whatever the language on screen.
+  const hasJoinIssue = () => rowIssues().some((i) => i.code === "segGap" || i.code === "segOverlap");
   return (
     <section class="panel notes-section" aria-labelledby="notes-seg-title">
       <h3 id="notes-seg-title">{t("segTitle")}</h3>

@@ -34,9 +34,11 @@ import { createRailmlImport } from "./railml/createRailmlImport.js";
 import { notes } from "../../../i18n/en/notes.js";
 import { tr } from "../../i18n.js";
 import { laterWords } from "../../laterWords.js";
+import { fieldWords } from "../../fieldWords.js";
 
-// This screen's words in the language on screen (a chunk of their own) come before it shows.
-await laterWords;
+// This screen's words in the language on screen (a chunk of their own) come before it shows, and the
+// field words its editor's last check (the schema) speaks in.
+await Promise.all([laterWords, fieldWords]);
 
 const nt = tr.ns(notes);
 
