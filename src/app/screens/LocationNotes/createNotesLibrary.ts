@@ -14,6 +14,7 @@ import { NotesClosedError, type NotesStore, type PutResult, type SaveBase } from
 import { readNotesFile, type TextSource } from "./notesFile.js";
 import { notes } from "../../../i18n/en/notes.js";
 import { tr } from "../../i18n.js";
+import { localiseIssue } from "../../fieldWords.js";
 
 const nt = tr.ns(notes);
 
@@ -73,7 +74,12 @@ export interface NotesLibraryDeps {
   onClosed?: (f: (reason: "upgrade" | "terminated") => void) => () => void;
 }
 
-const issueLines = (issues: readonly FieldIssue[]) => issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message));
+/** A refused file's issues in the language on screen, their figures in the file's own (metric) units. */
+const issueLines = (issues: readonly FieldIssue[]) =>
+  issues.map((i) => {
+    const m = localiseIssue(i, "metric").message;
+    return i.path ? `${i.path}: ${m}` : m;
+  });
 
 export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
   const [ready, setReady] = createSignal(false);
