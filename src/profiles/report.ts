@@ -145,6 +145,8 @@ export interface PlanReport {
   steps: StepReport[];
   peakCouplerForce_kN: number;
   timeToTarget_s: number | null;
+  /** The train's own trailing mass, to 0.1 t (beside the largest masses: starts ⇔ it is at most `maxStartableMass_t`). */
+  trailingMass_t?: number;
   maxStartableMass_t: number;
   /** Largest trailing mass that is at least marginal. */
   largestMarginalMass_t?: number;
@@ -240,6 +242,7 @@ export function staticReport(c: StartCase, s: StaticCheck, maxStartableMassKg: n
     steps: [],
     peakCouplerForce_kN: kN(s.peakTensionN),
     timeToTarget_s: null,
+    trailingMass_t: r(c.train.trailingMassKg / 1000, 1),
     maxStartableMass_t: Number.isFinite(maxStartableMassKg) ? Math.floor(maxStartableMassKg / 1000) : 0,
     assistance: [],
     cautions: cautionsInEnglish([...STANDARD_CAUTIONS, ...caseCautions(c, s.resistance.totalN)]),

@@ -114,13 +114,23 @@ describe("figures with their basis, as the command line rounds them", () => {
     const { figure } = rendered();
     const needed = /needed (\d+) kN/.exec(cli)![1];
     const rails = /→ (\d+) kN/.exec(cli)![1];
-    const mass = /Largest trailing mass that starts here: (\d+) t/.exec(cli)![1];
+    const mass = /starts up to (\d+) t/.exec(cli)![1];
     const peak = /peak coupler force (\d+) kN/.exec(cli)![1];
     expect(figure(/needed to start/).firstChild!.textContent).toBe(`${needed} kN`);
     expect(figure(/^Rails give/).firstChild!.textContent).toBe(`${rails} kN`);
     expect(figure(/^Largest trailing mass/).textContent).toBe(`${Number(mass).toLocaleString("en-GB")} t`);
     expect(mass).toBe("1466");
     expect(figure(/^Peak coupler force/).firstChild!.textContent).toBe(`${peak} kN`);
+  });
+
+  it("the verdict shows the train's own mass beside the largest masses, as `taut plan` prints them", () => {
+    rendered();
+    const [, train, starts] = /this train (\d+) t · starts up to (\d+) t/.exec(cli)!;
+    // The demo's 1,400 t from its case file; the largest startable mass as set above, rounded down.
+    expect(train).toBe("1400");
+    expect(starts).toBe("1466");
+    const line = document.querySelector("[data-masses]")!.textContent!;
+    expect(line).toBe(`This train ${Number(train).toLocaleString("en-GB")} t · starts up to ${Number(starts).toLocaleString("en-GB")} t`);
   });
 
   it("the coupler figure names its allowance and the limit it comes from", () => {

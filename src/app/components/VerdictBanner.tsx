@@ -46,6 +46,8 @@ export interface VerdictBannerProps {
   reasons: readonly Reason[];
   /** A line under the word (e.g. the margin). */
   detail?: string;
+  /** The train's own mass beside the largest masses ("This train 1,400 t · starts up to 2,063 t · …"). */
+  masses?: string;
   /** The plan is for earlier inputs. */
   stale?: boolean;
   compact?: boolean;
@@ -67,6 +69,11 @@ export function VerdictBanner(props: VerdictBannerProps): JSX.Element {
         </Show>
         <Show when={props.detail}>
           <p class="verdict-detail">{props.detail}</p>
+        </Show>
+        <Show when={props.masses}>
+          <p class="verdict-masses" data-masses>
+            {props.masses}
+          </p>
         </Show>
         <Show when={props.reasons.length > 0}>
           <p class="verdict-reasons">

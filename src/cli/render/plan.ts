@@ -38,7 +38,9 @@ export function renderPlan(p: PlanReport): string {
   const atCeiling = p.massSearchCeiling_t !== undefined && p.maxStartableMass_t >= p.massSearchCeiling_t;
   const largest = atCeiling ? t("largestMassNoLimit", { mass: num(p.maxStartableMass_t) }) : p.maxStartableMass_t > 0 ? t("largestMassValue", { mass: num(p.maxStartableMass_t) }) : t("largestMassNone");
   const marginalTo = p.largestMarginalMass_t !== undefined && p.largestMarginalMass_t > p.maxStartableMass_t ? t("largestMarginal", { mass: num(p.largestMarginalMass_t) }) : "";
-  lines.push(t("largestMass", { mass: largest }) + marginalTo + (p.massSearchScales ? rs("scalingLoads") : ""));
+  // The train's own trailing mass beside the largest masses: starts ⇔ it is at most the largest startable.
+  const train = num(p.trailingMass_t, Number.isInteger(p.trailingMass_t) ? 0 : 1);
+  lines.push(t("massesLine", { train, largest, marginal: marginalTo }) + (p.massSearchScales ? rs("scalingLoads") : ""));
   if (p.limits && p.limits.length > 0) {
     lines.push("");
     lines.push(t("limitsTitle"));

@@ -39,7 +39,7 @@ export type WhyLine =
   | { code: "stretch"; notch: number; effortN: number; resistanceN: number; stretchTravelM: number | null; peakN: number; allowanceN: number; fastOverMps: number | null }
   /** Notching up: the notch's effort at the speed of its highest adhesion use; `dwellS` for the first build step. */
   | { code: "build"; atMps: number; notch: number; asksN: number; use: number; risk: number; dwellS: number | null; peakN: number; allowanceN: number }
-  /** The running notch held to the target; `higherNoMore`: a higher notch would pass no more on a poor rail. */
+  /** The running notch held to the target; `higherNoMore`: a higher notch would ask more than a poor rail gives, or is not needed. */
   | { code: "accelerate"; notch: number; target: TargetRef; effortN: number; risk: number; higherNoMore: boolean }
   /** No power yet on a falling grade, power needed later to reach the target. */
   | { code: "roll-then-power"; accelMps2: number; toMps: number; travelM: number; staged: boolean; target: TargetRef }

@@ -61,6 +61,7 @@ export function planStart(c: StartCase, opts: PlanOptions = {}): PlanResult {
     // From the threshold's plan, as the limits are.
     wheelClimb: d.threshold.search ? wheelClimbOf(d.threshold.ctx, d.threshold.search) : null,
     timeToTargetS: r.targetReachedS === null ? null : r.targetReachedS - r.powerS,
+    trailingMassKg: c.train.trailingMassKg,
     maxStartableMassKg: masses.startsKg,
     largestMarginalMassKg: masses.marginalKg,
     massSearchCeilingKg: masses.ceilingKg,

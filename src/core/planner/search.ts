@@ -9,9 +9,10 @@
 import { Run, type BrakeSchedule, type Observation } from "../dynamics/runner.js";
 import { stabilityTimeStep } from "../train/trainModel.js";
 import { Branch } from "./branch.js";
+import { rigidResistanceN } from "./need.js";
 import { GROUP_RATIO_LIMIT, estimateCouplers, raises, settingLevel, standingNotches, type CouplerEstimate } from "./groupNotches.js";
 import type { Phase } from "./types.js";
-import { MIN_NOTCH_DWELL_S, holdingNotch, needNowN, notchAdhesion, notchDeliveredN, notchSaturated, type PlannerContext, type StartKind } from "./context.js";
+import { MIN_NOTCH_DWELL_S, holdingNotch, needNowN, notchAdhesion, notchDeliveredN, notchSaturated, unitNotch, type NotchSetting, type PlannerContext, type StartKind } from "./context.js";
 
 /** Longest the planner waits for a stretch notch to get the last vehicle moving, s. */
 export const STRETCH_MAX_S = 90;
@@ -287,10 +288,12 @@ function nextNotch(ctx: PlannerContext, b: Branch, obs: Observation, inStepS: nu
 
 /**
  * The planner's notch rule. Advance one notch only after the dwell, with the current settled, when the rails
- * pass more in the next notch (on the rail the plan assumes) and the extra effort keeps the head coupling
- * within its allowance. A notch is never dropped for slipping the protection copes with (the driver drops
- * one only when it cannot: the If wheels slip card). A train that gravity starts gets no notch until it
- * needs one to keep the slowest acceleration that still reaches its target.
+ * pass more in the next notch (on the rail the plan assumes), that notch asks no more than that rail gives
+ * from here to the target — or the present one falls short of the start (`fallsShort`) — and the extra
+ * effort keeps the head coupling within its allowance. So a plan holds the highest notch within the rail,
+ * notching up as speed lets. A notch is never dropped for slipping the protection copes with (the driver
+ * drops one only when it cannot: the If wheels slip card). A train that gravity starts gets no notch until
+ * it needs one to keep the slowest acceleration that still reaches its target.
  */
 export function policyNotch(
   ctx: PlannerContext,
@@ -312,9 +315,17 @@ export function policyNotch(
     capped.hit = true;
     return notch;
   }
-  // A power start takes what the rails give (the protection holds any excess there): more effort never
-  // makes a start slower or a heavier train quicker. A train gravity starts takes power only when it needs it.
+  // A train gravity starts takes power only when it needs it.
   if (ctx.startKind === "gravity" && now >= needNowN(ctx, travelM, v, seg)) {
+    capped.hit = true;
+    return notch;
+  }
+  // Within the rail the plan assumes: the next notch only when what it asks stays within what the rail at
+  // the plan's quantile gives, from here to the target (the adhesion limit's rail, so a plan that starts asks
+  // no step its verdict did not count on). Beyond it only when the present notch falls behind what the start
+  // needs at the pace the adhesion limit counts on: no notch within keeps it on its way there, and the slip
+  // protection holds the notch at what the rail gives — the effort that limit's allowance is made of.
+  if (ctx.startKind === "power" && notchRiskAhead(ctx, up, v) > ctx.quantile && !fallsShort(ctx, notch, up, now, v, travelM, seg)) {
     capped.hit = true;
     return notch;
   }
@@ -322,6 +333,27 @@ export function policyNotch(
   const leadShare = 1 - (ctx.consist.vehicles[ctx.model.locoVehicle[0] ?? 0]?.massKg ?? 0) / ctx.trainMassKg;
   if (tensionN + gain * leadShare > 0.95 * ctx.couplerAllowanceN) return notch;
   return up;
+}
+
+/** The least progress the accelerate phase waits for before it calls the target out of reach: 0.05 m/s a minute. */
+const PROGRESS_MPS2 = 0.05 / 60;
+
+/**
+ * The present notch falls short of the start: it is behind what the start needs now (the pace the adhesion
+ * limit counts on), and it cannot carry the train on to the speed from which the next notch stays within the
+ * rail the plan assumes — somewhere on the way it no longer accelerates the train at the least progress the
+ * plan waits for (resistance, breakaway fading at a crawl included, taken where the train is now). Then no
+ * notch within keeps the start on its way.
+ */
+function fallsShort(ctx: PlannerContext, notch: NotchSetting, up: NotchSetting, nowN: number, v: number, travelM: number, seg: Int32Array): boolean {
+  if (nowN >= needNowN(ctx, travelM, v, seg)) return false;
+  const top = targetSpeedMps(ctx);
+  const leastN = ctx.effMassKg * PROGRESS_MPS2;
+  for (let s = v; s <= top; s += 0.05) {
+    if (notchDeliveredN(ctx, notch, s) - rigidResistanceN(ctx.model, travelM, s, seg) < leastN) return true;
+    if (notchRiskAhead(ctx, up, s) <= ctx.quantile) return false;
+  }
+  return true;
 }
 
 /**
@@ -346,18 +378,27 @@ function groupPolicy(ctx: PlannerContext, from: Int32Array, v: number, travelM: 
       (addC <= 0 || compressionN + addC <= GROUP_RATIO_LIMIT * ctx.buffAllowanceN)
     );
   };
+  // A power start raises a group only while the new setting asks within the rail the plan assumes, up to
+  // the target, or when the present one falls short of the start (as policyNotch).
+  const railAllows = (set: Int32Array): boolean =>
+    ctx.startKind !== "power" || notchRiskAhead(ctx, set, v) <= ctx.quantile || fallsShort(ctx, from, set, now.deliveredN, v, travelM, seg);
   // Every group a notch up together (as synchronous distributed power does) while that keeps within.
   const together = raiseAll(ctx, from);
   if (together) {
     const e = estimateCouplers(ctx, together, v, travelM, seg);
-    if (e.deliveredN - now.deliveredN > 1 && within(e)) return together;
+    if (e.deliveredN - now.deliveredN > 1 && within(e) && railAllows(together)) return together;
   }
   const ups = raises(ctx, from, v, travelM, seg, false).filter((u) => u.gainN > 1);
   if (ups.length === 0) {
     capped.hit = true;
     return null;
   }
-  return ups.find((u) => within(u.estimate))?.notches ?? null;
+  const allowed = ups.filter((u) => railAllows(u.notches));
+  if (allowed.length === 0) {
+    capped.hit = true;
+    return null;
+  }
+  return allowed.find((u) => within(u.estimate))?.notches ?? null;
 }
 
 /** Every group below its highest notch one notch up; null when that is every group's highest already, or only some can go. */
@@ -379,13 +420,15 @@ function raiseAll(ctx: PlannerContext, from: Int32Array): Int32Array | null {
  * effort falls faster than adhesion and the risk falls. So the worst is at the present speed, where the
  * power limit takes over, or at the target.
  */
-export function notchRiskAhead(ctx: PlannerContext, notch: number, v: number): number {
+export function notchRiskAhead(ctx: PlannerContext, notch: NotchSetting, v: number): number {
   const m = ctx.model;
   const top = Math.max(v, targetSpeedMps(ctx));
   let worst = notchAdhesion(ctx, notch, v).risk;
   worst = Math.max(worst, notchAdhesion(ctx, notch, top).risk);
   for (let k = 0; k < m.nl; k++) {
-    const idx = k * m.notchStride + Math.min(notch, m.notchStride - 1);
+    const n = unitNotch(ctx, notch, k);
+    if (n <= 0) continue;
+    const idx = k * m.notchStride + Math.min(n, m.notchStride - 1);
     const corner = m.notchPowerW[idx]! / m.notchCurrentN[idx]!;
     if (corner > v && corner < top) worst = Math.max(worst, notchAdhesion(ctx, notch, corner).risk);
   }

@@ -34,17 +34,13 @@ export function fallbackNotch(ctx: PlannerContext, notch: number, speedMps: numb
   return 1;
 }
 
-/** Asking this much more than the rail gives counts as asking more (below it the two are the same figure) [D]. */
-const BEYOND_RAIL = 1.01;
-
-/** The notch asks for more than the rail the plan assumes passes, at the step's start or end speed. */
+/**
+ * The notch asks, somewhere in the step, for more than the rail the plan assumes passes: its slip risk there
+ * is above the plan's quantile (the risk is the chance the rail gives less than the notch asks, and the rail
+ * at quantile q gives less with chance q), so the slip protection is expected to act.
+ */
 function asksBeyondRail(ctx: PlannerContext, rec: StepRecord): boolean {
-  if (rec.notch <= 0) return false;
-  return [rec.startSpeedMps, rec.endSpeedMps].some((v) => {
-    const speed = Math.max(0, v);
-    const setting = rec.groupNotches ?? rec.notch;
-    return notchEffortAllN(ctx, setting, speed) > notchDeliveredN(ctx, setting, speed) * BEYOND_RAIL;
-  });
+  return rec.notch > 0 && rec.maxRisk > ctx.quantile + 1e-9;
 }
 
 /** Turn the chosen branch into plan steps. */
@@ -111,7 +107,8 @@ function groupShares(ctx: PlannerContext, rec: StepRecord): GroupShare[] | null 
 
 /** What the slip protection is expected to do in a step whose notch asks more than the rail may give. */
 function protectionLine(ctx: PlannerContext, rec: StepRecord): ProtectionLine {
-  const v = Math.max(0, rec.startSpeedMps);
+  // Where the step asks the most of the rail (its slip risk is taken there).
+  const v = Math.max(0, rec.maxUseSpeedMps);
   return {
     asksN: notchEffortAllN(ctx, rec.groupNotches ?? rec.notch, v),
     givesN: notchDeliveredN(ctx, rec.groupNotches ?? rec.notch, v),

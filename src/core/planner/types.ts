@@ -124,6 +124,8 @@ export interface PlanResult {
   /** Seconds from taking power to reaching the target; null when it is not reached. */
   timeToTargetS: number | null;
   /** Largest trailing mass (this train's wagons) that starts; NaN when not searched. */
+  /** The train's own trailing mass, kg (beside the largest masses: starts ⇔ trailing ≤ largest startable). */
+  trailingMassKg: number;
   maxStartableMassKg: number;
   /** Largest trailing mass that is at least marginal; NaN when not searched. */
   largestMarginalMassKg: number;

@@ -21,7 +21,7 @@ export const reasonsDe = translation<typeof reasons.en>()({
   whyBuild: "Bei {speed} verlangt Fahrstufe {notch} {effort}, {use} des mittleren Kraftschlusses dort (Schleuderrisiko {risk}); erst weiterschalten, wenn der Strom sich beruhigt hat{dwell}; höchste Kupplungskraft {peak} von zulässigen {allowance}.",
   toSpeed: "bis {speed}",
   untilCleared: "bis der Zug {distance} zurückgelegt hat",
-  higherNoMore: " Eine höhere Fahrstufe brächte auf schlechter Schiene nicht mehr oder wird nicht gebraucht.",
+  higherNoMore: " Eine höhere Fahrstufe verlangte mehr, als schlechte Schiene hergibt, oder wird nicht gebraucht.",
   whyAccelerate: "Fahrstufe {notch} halten {to}: {effort} gegen Lauf-, Neigungs- und Bogenwiderstand beschleunigen den gestreckten Zug; Schleuderrisiko {risk}.{higher}",
   rollControl: "die Geschwindigkeit mit Zugbremse und Lokbremse regeln",
   rollControlStaged: "die Geschwindigkeit mit der (stufenweise gelösten) Zugbremse und der Lokbremse regeln",

@@ -26,7 +26,7 @@ export const reasons = namespace("reasons", {
   whyBuild: "At {speed} notch {notch} asks {effort}, {use} of the median adhesion there (slip risk {risk}); advance only once the current has settled{dwell}; peak coupler {peak} of {allowance} allowed.",
   toSpeed: "to {speed}",
   untilCleared: "until the train has cleared {distance}",
-  higherNoMore: " A higher notch would pass no more on a poor rail, or is not needed.",
+  higherNoMore: " A higher notch would ask more than a poor rail gives, or is not needed.",
   whyAccelerate: "Hold notch {notch} {to}: {effort} against the running, grade and curve resistance accelerates the stretched train; slip risk {risk}.{higher}",
   rollControl: "control the speed with the train brake and the locomotive brake",
   rollControlStaged: "control the speed with the train brake (eased in stages) and the locomotive brake",

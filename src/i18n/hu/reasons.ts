@@ -21,7 +21,7 @@ export const reasonsHu = translation<typeof reasons.en>()({
   whyBuild: "{speed} sebességnél a(z) {notch}. fokozat {effort} vonóerőt kér, az ott várható közepes tapadás {use} részét (perdülési kockázat {risk}); csak akkor kapcsoljon tovább, ha az áram beállt{dwell}; a legnagyobb kapcsolóerő {peak} a megengedett {allowance} mellett.",
   toSpeed: "{speed} sebességig",
   untilCleared: "amíg a vonat {distance} utat meg nem tett",
-  higherNoMore: " Magasabb fokozat rossz sínen sem adna többet, vagy nincs rá szükség.",
+  higherNoMore: " Magasabb fokozat többet kérne, mint amit rossz sín ad, vagy nincs rá szükség.",
   whyAccelerate: "Tartsa a(z) {notch}. fokozatot {to}: {effort} vonóerő a menet-, emelkedési és ívellenállással szemben gyorsítja a kifeszített vonatot; perdülési kockázat {risk}.{higher}",
   rollControl: "a sebességet a vonatfékkel és a mozdonyfékkel szabályozza",
   rollControlStaged: "a sebességet a (fokozatosan oldott) vonatfékkel és a mozdonyfékkel szabályozza",

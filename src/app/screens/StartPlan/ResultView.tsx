@@ -23,6 +23,7 @@ import { adviceWords } from "../../lines.js";
 import { duration, localiseText, margin, percent, percentOf, show, showAtMost, showForce, type UnitSystem } from "../../format.js";
 import type { RunStatus } from "../../state/createPlanRun.js";
 import { StepCard } from "./StepCard.js";
+import { massesLine } from "./masses.js";
 import { cautionWords } from "../../cautions.js";
 import { plan } from "../../../i18n/en/plan.js";
 import { appNumber, tr } from "../../i18n.js";
@@ -182,6 +183,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
                 reasons={res().reasons}
                 stale={!props.current}
                 detail={t("detail", { margin: margin(res().margin), limit: bindingLimit(res()) }) + (res().startKind === "gravity" ? t("gravity") : "")}
+                masses={massesLine(res(), props.units, props.massPending === true)}
               />
             </div>
             <Show when={res().reasons.length > 0}>
