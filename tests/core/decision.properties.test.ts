@@ -283,6 +283,16 @@ describe("stronger is never worse, in the planned start (planner level: 60 cases
  */
 const STRETCH_STEP_S = 6;
 
+/**
+ * Steps of the shown plan whose notch asks more than the rail its plan assumes gives (README "How Taut decides",
+ * Steps): a plan takes one only where no notch within keeps the start at its pace, and the slip protection then
+ * holds it at what the rail gives — more than the notch below gave. A heavier train falls behind that pace
+ * sooner and takes such a step earlier, so it may reach its target sooner than a lighter one that held the
+ * notch within for longer (seen: 254 t in 88 s, 216 t in 159 s, two 1800 kW units on frost). Plans that keep
+ * within the rail ask the same efforts at the same speeds whatever the mass: those pairs are compared.
+ */
+const beyondSteps = (d: ReturnType<typeof judge>): number => d.shown.search!.branch.steps.filter((s) => s.notch > 0 && s.maxRisk > d.shown.ctx.quantile + 1e-9).length;
+
 describe("time to target within a verdict band (planner level: 40 cases)", () => {
   it("never shortens as the mass grows (beyond one stretch notch)", () => {
     let compared = 0;
@@ -294,7 +304,7 @@ describe("time to target within a verdict band (planner level: 40 cases)", () =>
         const heavy = judge(withTrailingMass(c, c.train.trailingMassKg * k));
         const time = (x: typeof light) => (x.shown.search!.targetReachedS === null ? null : x.shown.search!.targetReachedS - x.shown.search!.powerS);
         const [tl, th] = [time(light), time(heavy)];
-        if (light.verdict === heavy.verdict && light.verdict !== "needs-assistance" && tl !== null && th !== null) {
+        if (light.verdict === heavy.verdict && light.verdict !== "needs-assistance" && tl !== null && th !== null && beyondSteps(heavy) === 0 && beyondSteps(light) === 0) {
           compared++;
           worstDrop = Math.max(worstDrop, tl - th);
           expect(th).toBeGreaterThanOrEqual(tl - STRETCH_STEP_S);
