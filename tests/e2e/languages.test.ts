@@ -23,6 +23,10 @@ import { departuresDe } from "../../src/i18n/de/departures.js";
 import { departuresHu } from "../../src/i18n/hu/departures.js";
 import { notesDe } from "../../src/i18n/de/notes.js";
 import { notesHu } from "../../src/i18n/hu/notes.js";
+import { trainDe } from "../../src/i18n/de/train.js";
+import { assistDe } from "../../src/i18n/de/assist.js";
+import { assistHu } from "../../src/i18n/hu/assist.js";
+import { trainHu } from "../../src/i18n/hu/train.js";
 
 let context: BrowserContext;
 let page: Page;
@@ -101,6 +105,12 @@ describe("Taut in three languages", () => {
     await page.goto(base);
     await go("start-plan");
     expect(await page.locator("a.tab").allTextContents()).toEqual(expect.arrayContaining([...TITLES.en]));
+    // A mixed train with a helper at the rear, so the wagon-groups form, a second locomotive group and Cab
+    // steps' choice of driver are on screen in every language below (the draft is kept over reloads).
+    await page.locator('[data-action="add-wagon-group"]').first().click();
+    await page.locator(".panel", { has: page.locator('[data-field="locomotives[0].profile"]') }).locator("button.button:not(.subtle)").last().click();
+    await page.locator('[data-field="locomotives[1].control"] [role=radio]').nth(2).click();
+    await page.waitForSelector(".verdict:not(.stale)", { timeout: 60_000 });
     for (const [lang, name] of [["hu", "Magyar"], ["de", "Deutsch"]] as const) {
       await go("settings");
       await page.getByRole("radio", { name }).click();
@@ -116,6 +126,18 @@ describe("Taut in three languages", () => {
         await page.setViewportSize(size);
         for (const id of SCREENS) {
           await go(id);
+          const tw = lang === "hu" ? trainHu : trainDe;
+          if (id === "start-plan") {
+            expect(await page.locator('[data-field="train.groups"] > .field-label').textContent()).toBe(tw.wagonGroups);
+            expect(await page.locator('[data-field="locomotives[1].control"] [role=radio]').nth(2).textContent()).toContain(tw.helper);
+            expect(await page.locator('[data-field="locomotives[1].position"] [role=radio]').nth(2).textContent()).toContain(tw.rear);
+          }
+          if (id === "assistance-check") {
+            const ta = lang === "hu" ? assistHu : assistDe;
+            expect(await page.locator("#margins-h").textContent()).toBe(ta.margins);
+            expect(await page.locator('[data-field="added-unit"] .field-label').first().textContent()).toBe(ta.unitToAdd);
+          }
+          if (id === "cab-steps") expect(await page.locator(".cab-driver button").first().textContent()).toBe(tw.headDriver);
           if (id === "departures") expect(await page.locator("#load-h").textContent()).toBe((lang === "hu" ? departuresHu : departuresDe).loadHeading);
           if (id === "location-notes") expect(await page.locator(".notes-library .notes-row-actions button").first().textContent()).toBe((lang === "hu" ? notesHu : notesDe).newNote);
           await page.screenshot({ path: join(SHOTS, `lang-${lang}-${id}-${name2}.png`) });

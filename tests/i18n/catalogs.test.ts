@@ -11,15 +11,17 @@ import { de } from "../../src/i18n/de/index.js";
 import { deLater } from "../../src/i18n/de/later.js";
 import { fieldsDe } from "../../src/i18n/de/fields.js";
 import { fieldsHu } from "../../src/i18n/hu/fields.js";
+import { deChecks } from "../../src/i18n/de/checks.js";
 import { NAMESPACES } from "../../src/i18n/en/index.js";
 import { words } from "../../src/i18n/en/words.js";
 import { cliHu } from "../../src/i18n/hu/cli.js";
 import { hu } from "../../src/i18n/hu/index.js";
 import { huLater } from "../../src/i18n/hu/later.js";
+import { huChecks } from "../../src/i18n/hu/checks.js";
 import { fill, namespace, placeholdersOf, translation, type Catalog, type Message } from "../../src/i18n/messages.js";
 import { createTranslator } from "../../src/i18n/translator.js";
 
-const CATALOGS: Record<"hu" | "de", Catalog> = { hu: { ...hu, ...huLater, cli: cliHu, fields: fieldsHu }, de: { ...de, ...deLater, cli: cliDe, fields: fieldsDe } };
+const CATALOGS: Record<"hu" | "de", Catalog> = { hu: { ...hu, ...huLater, ...huChecks, cli: cliHu, fields: fieldsHu }, de: { ...de, ...deLater, ...deChecks, cli: cliDe, fields: fieldsDe } };
 const shape = (m: Message) => (typeof m === "string" ? "text" : "plural");
 const texts = (m: Message) => (typeof m === "string" ? [m] : [m.one, m.other]);
 

@@ -13,5 +13,6 @@ import { reasonsDe } from "./reasons.js";
 import { guidanceDe } from "./guidance.js";
 import { assistNotesDe } from "./assistNotes.js";
 import { adviceDe } from "./advice.js";
+import { trainDe } from "./train.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe, train: trainDe };

@@ -1,4 +1,5 @@
 /** Every English namespace: the one list the catalog checks walk (tests/i18n) — add a new namespace here. */
+import { assist } from "./assist.js";
 import { card } from "./card.js";
 import { cautions } from "./cautions.js";
 import { cli } from "./cli.js";
@@ -12,10 +13,11 @@ import { plan } from "./plan.js";
 import { settings } from "./settings.js";
 import { shell } from "./shell.js";
 import { steps } from "./steps.js";
+import { train } from "./train.js";
 import { words } from "./words.js";
 import { reasons } from "./reasons.js";
 import { guidance } from "./guidance.js";
 import { assistNotes } from "./assistNotes.js";
 import { advice } from "./advice.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist] as const;

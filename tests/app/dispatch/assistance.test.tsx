@@ -103,7 +103,7 @@ describe("Assistance check", () => {
     });
     renderWithApp(() => <AssistanceCheck />, { pool: fakePool({ assistance: () => ok(none), conditionMargins: () => ok(marginRows()) }) });
     await screen.findByText(/No option with one or two more units makes this train start/);
-    expect(screen.getByText(/1 placements tried; ruled out by coupler \(1\)/)).toBeTruthy();
+    expect(screen.getByText(/1 placement tried; ruled out by coupler \(1\)/)).toBeTruthy();
     expect(document.querySelector(".divide-line")!.textContent).toBe(
       "Divide the train: take the first 8 wagons (293 t), then the remaining 22 wagons (807 t) — about 4 trips. Hardly practical: think of other locomotives, or another time or place.",
     );

@@ -20,10 +20,13 @@ import { assistanceNoteText } from "../../../i18n/renderAssistNote.js";
 import { tr } from "../../i18n.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { Cautions } from "../shared/Cautions.js";
-import { divideLine, limitWord, optionHeadline, placeWords, REASON_SHORT } from "../shared/words.js";
+import { divideLine, limitWord, optionHeadline, placeWords } from "../shared/words.js";
 import type { CheckStatus } from "./createAssistanceCheck.js";
 import { marginChart, MARGIN_AXIS_TOP } from "./marginChart.js";
 import { RailSandTable } from "../shared/RailSandTable.js";
+import { assist } from "../../../i18n/en/assist.js";
+
+const t = tr.ns(assist);
 
 export interface CaseInfo {
   /** The case's name, or a made-up one. */
@@ -60,20 +63,19 @@ export function AssistanceView(props: AssistanceViewProps): JSX.Element {
   return (
     <div class="dispatch assistance-check">
       <p class="advisory">
-        <Icon name="info" size={22} /> Advisory only: operating rules, local instructions and the locomotive's own instructions prevail. Decisions on assistance belong to
-        those your railway's rules name.
+        <Icon name="info" size={22} /> {t("advisory")}
       </p>
 
       <section class="panel dispatch-case" aria-labelledby="case-h">
         <div class="panel-head">
-          <h2 id="case-h">{props.info ? `Train: ${props.info.title}` : "Train"}</h2>
+          <h2 id="case-h">{props.info ? t("trainTitle", { title: props.info.title }) : t("train")}</h2>
           <button type="button" class="button" onClick={() => props.onEdit()}>
-            <Icon name="plan" /> Edit in Start plan
+            <Icon name="plan" /> {t("editInStartPlan")}
           </button>
         </div>
         <Show
           when={props.info}
-          fallback={<p class="problem">The case in Start plan breaks a rule, so it cannot be checked. Fix the inputs marked there first.</p>}
+          fallback={<p class="problem">{t("invalid")}</p>}
         >
           {(i) => <For each={i().lines}>{(l) => <p class="dispatch-line">{l}</p>}</For>}
         </Show>
@@ -81,21 +83,21 @@ export function AssistanceView(props: AssistanceViewProps): JSX.Element {
           <div class="row added-unit" data-field="added-unit">
             <div class="field">
               <label class="field-label" for="added-profile">
-                Unit to add
+                {t("unitToAdd")}
               </label>
               <select id="added-profile" class="select" value={props.added!.profile} onChange={(e) => props.onAdded!({ ...props.added!, profile: e.currentTarget.value })}>
-                <option value="">Same as the lead unit</option>
+                <option value="">{t("sameAsLead")}</option>
                 <For each={props.profiles!}>{(p) => <option value={p.id}>{p.label}</option>}</For>
               </select>
             </div>
             <SegmentedButtons<"remote" | "helper">
               name="added-control"
-              label="Mid-train and rear units driven as"
+              label={t("addedDriven")}
               value={props.added!.control}
               onChange={(v) => props.onAdded!({ ...props.added!, control: v })}
               options={[
-                { value: "remote", label: "Remote (own notch from the head)" },
-                { value: "helper", label: "Helper (own driver)" },
+                { value: "remote", label: t("addedRemote") },
+                { value: "helper", label: t("addedHelper") },
               ]}
             />
           </div>
@@ -106,20 +108,20 @@ export function AssistanceView(props: AssistanceViewProps): JSX.Element {
         <div class="dispatch-run" aria-live="polite">
           <Show when={running()}>
             <div class="dispatch-run-row">
-              <div class="progress grow" role="progressbar" aria-label="Checking" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(props.progress * 100)}>
+              <div class="progress grow" role="progressbar" aria-label={t("checking")} aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(props.progress * 100)}>
                 <span style={{ width: `${Math.max(4, props.progress * 100)}%` }} />
               </div>
               <button type="button" class="button" onClick={() => props.onCancel()}>
-                <Icon name="close" /> Cancel
+                <Icon name="close" /> {t("cancel")}
               </button>
             </div>
-            <p class="muted">Every option and every rail condition is planned in the train dynamics model: this takes several seconds.</p>
+            <p class="muted">{t("takesSeconds")}</p>
           </Show>
           <Show when={props.status === "cancelled" || props.status === "failed"}>
             <div class="dispatch-run-row">
-              <p class="grow">{props.status === "cancelled" ? "Check cancelled." : `The check could not finish. ${props.error ?? ""}`}</p>
+              <p class="grow">{props.status === "cancelled" ? t("cancelled") : t("failed", { error: props.error ?? "" })}</p>
               <button type="button" class="button primary" onClick={() => props.onRetry()}>
-                <Icon name="update" /> Check again
+                <Icon name="update" /> {t("checkAgain")}
               </button>
             </div>
           </Show>
@@ -128,7 +130,7 @@ export function AssistanceView(props: AssistanceViewProps): JSX.Element {
 
       <div class="dispatch-columns">
         <div class="dispatch-col">
-          <Show when={props.answer} fallback={<Show when={running()}><p class="placeholder-text">Looking for assistance…</p></Show>}>
+          <Show when={props.answer} fallback={<Show when={running()}><p class="placeholder-text">{t("looking")}</p></Show>}>
             {(a) => <Options answer={a()} units={props.units} canTry={props.canTry} onTry={props.onTry} />}
           </Show>
         </div>
@@ -147,7 +149,7 @@ function Options(props: { answer: AssistanceAnswer; units: UnitSystem; canTry: b
   return (
     <>
       <Show when={a().needed}>
-        <VerdictBanner verdict={a().base.verdict} reasons={a().base.reasons} detail={`As it stands: margin ${margin(a().base.margin)} (${limitWord(a().base.binding)})`} compact />
+        <VerdictBanner verdict={a().base.verdict} reasons={a().base.reasons} detail={t("asItStands", { margin: margin(a().base.margin), limit: limitWord(a().base.binding) })} compact />
       </Show>
       <Show when={a().needed && a().base.reasons.length > 0}>
         <ul class="reasons">
@@ -156,19 +158,15 @@ function Options(props: { answer: AssistanceAnswer; units: UnitSystem; canTry: b
       </Show>
       <Show when={a().needed} fallback={<StartsAlready answer={a()} units={props.units} />}>
         <section class="panel" aria-labelledby="options-h">
-          <h2 id="options-h">Assistance options</h2>
-          <p class="muted">
-            Each adds {a().helper.label}: at the head in multiple with the head unit (same notch); mid-train and at the rear{" "}
-            {a().control === "helper" ? "as a helper with its own driver, each notch change called by radio" : "as remote power with its own notch, set from the head cab"}. Each is checked in the train
-            dynamics model against the coupler and wheel-climb limits. Cheapest first.
-          </p>
+          <h2 id="options-h">{t("options")}</h2>
+          <p class="muted">{t(a().control === "helper" ? "optionsHelper" : "optionsRemote", { unit: a().helper.label })}</p>
           <Show when={a().options.length > 0} fallback={<NothingWorks answer={a()} units={props.units} />}>
             <ol class="option-cards">
               <For each={a().options}>{(o, k) => <OptionCard option={o} rank={k() + 1} units={props.units} canTry={props.canTry} onTry={props.onTry} />}</For>
             </ol>
           </Show>
           <Show when={!a().complete}>
-            <p class="muted">The search reached its cap of planner runs before every placement was judged; more options may exist.</p>
+            <p class="muted">{t("capReached")}</p>
           </Show>
         </section>
       </Show>
@@ -181,12 +179,15 @@ function StartsAlready(props: { answer: AssistanceAnswer; units: UnitSystem }): 
   return (
     <section class="panel starts-already" aria-labelledby="starts-h">
       <h2 id="starts-h">
-        <VerdictIcon verdict="starts" size={32} /> Starts already: no assistance needed
+        <VerdictIcon verdict="starts" size={32} /> {t("startsAlready")}
       </h2>
       <p>
-        With its own locomotives this train is expected to start here in these conditions (margin {margin(b().margin)} ({limitWord(b().binding)}), peak coupler force{" "}
-        {show("force", b().peakCouplerForceN, props.units)}
-        {b().timeToTargetS !== null ? `, target reached after ${duration(b().timeToTargetS!)}` : ""}). The margins per rail condition show how much worse the rail can get before it no longer does.
+        {t("startsAlreadyLine", {
+          margin: margin(b().margin),
+          limit: limitWord(b().binding),
+          force: show("force", b().peakCouplerForceN, props.units),
+          target: b().timeToTargetS !== null ? t("targetAfter", { time: duration(b().timeToTargetS!) }) : "",
+        })}
       </p>
     </section>
   );
@@ -203,46 +204,47 @@ function OptionCard(props: { option: AssistanceOptionData; rank: number; units: 
         </span>
         <div class="option-what">
           <h3>
-            <span class="visually-hidden">Option {props.rank}: </span>Add {optionHeadline(o())}
+            <span class="visually-hidden">{t("optionNumber", { number: props.rank })}</span>
+            {t("add", { what: optionHeadline(o()) })}
           </h3>
           <p class="option-verdict">
             <VerdictIcon verdict={o().verdict} size={28} />
             <span>{words.verdict(o().verdict)}</span>
-            <span class="muted">with this help, margin {margin(o().margin)}</span>
+            <span class="muted">{t("withThisHelp", { margin: margin(o().margin) })}</span>
           </p>
         </div>
       </div>
       <dl class="figures option-figures">
         <div>
-          <dt>Peak pull</dt>
+          <dt>{t("peakPull")}</dt>
           <dd>{f(o().peakCouplerForceN)}</dd>
         </div>
         <div>
-          <dt>Peak push</dt>
+          <dt>{t("peakPush")}</dt>
           <dd>
             {f(o().peakCompressionN)}
             <Show when={o().couplings > 0 && o().peakCompressionN > 0}>
-              <span class="muted"> at coupling {o().peakCompressionAt + 1} of {o().couplings}</span>
+              <span class="muted">{t("atCoupling", { number: o().peakCompressionAt + 1, of: o().couplings })}</span>
             </Show>
           </dd>
         </div>
         <div>
-          <dt>Time to the target</dt>
-          <dd>{o().timeToTargetS === null ? "not reached" : duration(o().timeToTargetS!)}</dd>
+          <dt>{t("timeToTarget")}</dt>
+          <dd>{o().timeToTargetS === null ? t("notReached") : duration(o().timeToTargetS!)}</dd>
         </div>
         <Show when={(o().effortSplit ?? []).length > 1}>
           <div>
-            <dt>Effort split</dt>
-            <dd data-testid="effort-split">{o().effortSplit.map((g) => `${splitWords(g.place)} ${percentOf(g.share, 0)} (notch ${g.notch})`).join(" · ")}</dd>
+            <dt>{t("effortSplit")}</dt>
+            <dd data-testid="effort-split">{o().effortSplit.map((g) => t("effortPart", { name: splitWords(g.place), share: percentOf(g.share, 0), notch: g.notch })).join(" · ")}</dd>
           </div>
         </Show>
       </dl>
       <p class="option-note">{assistanceNoteText(tr, appQuantities(props.units), o().note)}</p>
       <div class="option-actions">
         <button type="button" class="button" disabled={!props.canTry} onClick={() => props.onTry(o())}>
-          <Icon name="add" /> Plan with this help
+          <Icon name="add" /> {t("planWithHelp")}
         </button>
-        <span class="muted">Adds the {o().units === 1 ? "unit" : "units"} to the case in Start plan ({o().added.map((x) => `${x.count} ${placeWords(x.position)}`).join(", ")}).</span>
+        <span class="muted">{t("addsUnits", { count: o().units, where: o().added.map((x) => `${tr.num(x.count, 0)} ${placeWords(x.position)}`).join(", ") })}</span>
       </div>
     </li>
   );
@@ -254,7 +256,7 @@ function NothingWorks(props: { answer: AssistanceAnswer; units: UnitSystem }): J
   const groups = () => {
     const m = new Map<string, number>();
     for (const x of a().rejected) {
-      const key = x.reasons.length > 0 ? x.reasons.map((r) => REASON_SHORT[r]).join(" and ") : words.verdictInline(x.verdict);
+      const key = x.reasons.length > 0 ? x.reasons.map((r) => words.reason(r)).reduce((a, b) => t("and", { a, b })) : words.verdictInline(x.verdict);
       m.set(key, (m.get(key) ?? 0) + 1);
     }
     return [...m.entries()];
@@ -262,30 +264,28 @@ function NothingWorks(props: { answer: AssistanceAnswer; units: UnitSystem }): J
   return (
     <div class="nothing-works">
       <p class="nothing-title">
-        <VerdictIcon verdict="needs-assistance" size={28} /> No option with one or two more units makes this train start.
+        <VerdictIcon verdict="needs-assistance" size={28} /> {t("nothing")}
       </p>
       <Show when={groups().length > 0}>
-        <p class="muted">
-          {a().rejected.length} placements tried; ruled out by {groups().map(([why, n]) => `${why} (${n})`).join(", ")}.
-        </p>
+        <p class="muted">{t("ruledOut", { count: a().rejected.length, why: groups().map(([why, n]) => t("ruledOutBy", { why, n })).join(", ") })}</p>
       </Show>
       <Show
         when={a().divide}
-        fallback={<p>Not even a short first part of this train is expected to start here with its own locomotives: consider other locomotives, or another time or place.</p>}
+        fallback={<p>{t("notEvenShort")}</p>}
       >
         {(d) => (
           <div class="divide-card">
-            <h3>Otherwise: divide the train</h3>
+            <h3>{t("divideHeading")}</h3>
             <p class="divide-line">{divideLine(d(), props.units)}</p>
             <Show when={d().verdict}>
               {(v) => (
                 <p>
-                  The first part: <VerdictIcon verdict={v()} size={22} /> {words.verdictInline(v())}
-                  {d().peakCouplerForceN !== null ? `, peak coupler force ${show("force", d().peakCouplerForceN!, props.units)}` : ""}.
+                  {t("firstPart")} <VerdictIcon verdict={v()} size={22} /> {words.verdictInline(v())}
+                  {d().peakCouplerForceN !== null ? t("firstPartForce", { force: show("force", d().peakCouplerForceN!, props.units) }) : ""}.
                 </p>
               )}
             </Show>
-            <p class="muted">The rest has to stand clear on other track meanwhile; the trip count is a guide only.</p>
+            <p class="muted">{t("standClear")}</p>
           </div>
         )}
       </Show>
@@ -307,29 +307,29 @@ function MarginsPanel(props: { rows: ConditionMargin[] | null; info: CaseInfo | 
         </span>
         <span class="margin-verdict">
           {words.verdict(r.verdict)}
-          {r.verdict !== "starts" ? ` (${REASON_SHORT[r.limitedBy]})` : ""}
+          {r.verdict !== "starts" ? ` (${words.reason(r.limitedBy)})` : ""}
         </span>
         <Show when={isCurrent(rail, sand)}>
-          <span class="visually-hidden"> (this train's conditions)</span>
+          <span class="visually-hidden">{t("thisTrainsConditions")}</span>
         </Show>
       </td>
     );
   };
   return (
     <section class="panel" aria-labelledby="margins-h">
-      <h2 id="margins-h">Margins per rail condition</h2>
-      <Show when={props.rows} fallback={<p class="placeholder-text">{props.running ? "Planning the start in every rail condition…" : "–"}</p>}>
+      <h2 id="margins-h">{t("margins")}</h2>
+      <Show when={props.rows} fallback={<p class="placeholder-text">{props.running ? t("planningAll") : "–"}</p>}>
         {(rows) => (
           <>
             <Chart
-              title="Smallest margin by rail condition"
-              caption={`Available ÷ needed, without and with sand; below × 1 the need is larger than what is available. Bars stop at × ${MARGIN_AXIS_TOP}.`}
+              title={t("chartTitle")}
+              caption={t("chartCaption", { top: MARGIN_AXIS_TOP })}
               spec={marginChart(rows())}
               palette={props.palette}
-              empty="No margins to show."
+              empty={t("chartEmpty")}
               height={260}
             />
-            <RailSandTable class="dispatch-table margins-table" caption="Verdict and smallest margin; what limits first in brackets. The outlined cell is this train's forecast." cell={cell} />
+            <RailSandTable class="dispatch-table margins-table" caption={t("tableCaption")} cell={cell} />
           </>
         )}
       </Show>

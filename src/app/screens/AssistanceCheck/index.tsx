@@ -13,25 +13,37 @@ import "../shared/dispatch.css";
 import { placeWords } from "../shared/words.js";
 import { createAssistanceCheck } from "./createAssistanceCheck.js";
 import { AssistanceView, type CaseInfo } from "./View.js";
+import { assist } from "../../../i18n/en/assist.js";
+import { tr } from "../../i18n.js";
+import { checkWords } from "../../checkWords.js";
+
+// The screen's Hungarian and German words come in a chunk of their own, before the screen shows.
+await checkWords;
+
+const t = tr.ns(assist);
 
 /** The case in a few lines: locomotives, train, place, rail. */
 export function caseInfo(c: StartCase, d: CaseDraft, placeName: string | undefined, units: UnitSystem, edited = false): CaseInfo {
-  const locos = c.locomotives.map((g) => `${g.count} × ${g.spec.label} ${placeWords(g.position)}`).join("; ");
+  const locos = c.locomotives.map((g) => t("locoGroup", { n: g.count, label: g.spec.label, place: placeWords(g.position) })).join("; ");
   const q = d.quick;
   const place =
     d.locationMode === "note"
       ? (placeName ?? d.noteId)
       : d.locationMode === "profile" && d.profile
-        ? `the case file's track profile (${d.profile.segments.length} segments, clear ahead ${show("distance", d.profile.clearAhead_m, units)})`
-        : `quick entry — gradient ${show("grade", q.gradient_permille / 1000, units)}${q.curveRadius_m > 0 ? `, curve ${show("radius", q.curveRadius_m, units)}` : ", straight"}, clear ahead ${show("distance", q.clearAhead_m, units)}`;
+        ? t("placeProfile", { count: d.profile.segments.length, distance: show("distance", d.profile.clearAhead_m, units) })
+        : t("placeQuick", {
+            grade: show("grade", q.gradient_permille / 1000, units),
+            curve: q.curveRadius_m > 0 ? t("curve", { radius: show("radius", q.curveRadius_m, units) }) : t("straight"),
+            distance: show("distance", q.clearAhead_m, units),
+          });
   return {
     // A case changed since it was loaded no longer matches its name's words (a "dry afternoon" on wet rail).
-    title: d.label ? `${d.label}${edited ? " — edited" : ""}` : "the case in Start plan",
+    title: d.label ? (edited ? t("edited", { label: d.label }) : d.label) : t("untitled"),
     lines: [
-      `Locomotives: ${locos}`,
-      `Train: ${show("mass", c.train.trailingMassKg, units)} in ${c.train.wagons} wagons, ${show("distance", c.train.lengthM, units)}`,
-      `Place: ${place}`,
-      `Rail: ${words.rail(c.conditions.rail)}, ${c.conditions.sand ? "with sand" : "without sand"}, ${show("temperature", c.conditions.temperatureC, units)}`,
+      t("lineLocos", { locos }),
+      t("lineTrain", { mass: show("mass", c.train.trailingMassKg, units), count: c.train.wagons, length: show("distance", c.train.lengthM, units) }),
+      t("linePlace", { place }),
+      t("lineRail", { rail: words.rail(c.conditions.rail), sand: c.conditions.sand ? t("withSand") : t("withoutSand"), temperature: show("temperature", c.conditions.temperatureC, units) }),
     ],
     rail: c.conditions.rail,
     sand: c.conditions.sand,
@@ -52,7 +64,7 @@ export default function AssistanceCheck(): JSX.Element {
     return { ...(spec ? { helper: spec } : {}), control: a.control };
   });
   const check = createAssistanceCheck({ workers: app.pool, startCase, added: addedSpec });
-  declarePrintStatus(() => ({ complete: check.status() !== "running", waitingFor: "the assistance check", inputs: startCase() }));
+  declarePrintStatus(() => ({ complete: check.status() !== "running", waitingFor: t("waitingFor"), inputs: startCase() }));
   const info = createMemo(() => {
     const c = startCase();
     if (!c) return null;

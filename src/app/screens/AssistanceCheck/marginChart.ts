@@ -8,6 +8,10 @@ import type { ConditionMargin } from "../../../core/dispatch/conditionMargins.js
 import { RAIL_CONDITIONS } from "../../../core/physics/types.js";
 import type { ChartSpec } from "../../charts/spec.js";
 import { barChart } from "../shared/bars.js";
+import { assist } from "../../../i18n/en/assist.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(assist);
 
 export const MARGIN_AXIS_TOP = 3;
 
@@ -17,12 +21,12 @@ export function marginChart(rows: readonly ConditionMargin[]): ChartSpec | null 
   return barChart({
     categories: RAIL_CONDITIONS.map((r) => words.rail(r)),
     groups: [
-      { id: "no-sand", label: "Without sand", role: "second", dashed: true, values: RAIL_CONDITIONS.map((r) => value(r, false)) },
-      { id: "sand", label: "With sand", role: "main", values: RAIL_CONDITIONS.map((r) => value(r, true)) },
+      { id: "no-sand", label: t("chartWithoutSand"), role: "second", dashed: true, values: RAIL_CONDITIONS.map((r) => value(r, false)) },
+      { id: "sand", label: t("chartWithSand"), role: "main", values: RAIL_CONDITIONS.map((r) => value(r, true)) },
     ],
-    lines: [{ id: "one", label: "× 1: as much needed as available", y: 1, role: "limit", dashed: true }],
-    xTitle: "Rail condition",
-    yTitle: "Margin (×)",
+    lines: [{ id: "one", label: t("chartOne"), y: 1, role: "limit", dashed: true }],
+    xTitle: t("chartRail"),
+    yTitle: t("chartMargin"),
     yCap: MARGIN_AXIS_TOP,
   });
 }

@@ -14,6 +14,7 @@ import type { WakeLockState } from "../../state/createWakeLock.js";
 import { advanceLead, advanceOthers, groupNotchesText, helperLine, notchText, phaseLine, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
 import { shell } from "../../../i18n/en/shell.js";
 import { steps } from "../../../i18n/en/steps.js";
+import { train } from "../../../i18n/en/train.js";
 import { tr } from "../../i18n.js";
 import { SlipCard } from "./SlipCard.js";
 
@@ -39,6 +40,7 @@ export interface CabStepsViewProps {
 }
 
 const t = tr.ns(steps);
+const tt = tr.ns(train);
 
 const WAKE_TEXT: Record<WakeLockState, () => string> = {
   on: () => t("wakeOn"),
@@ -116,21 +118,21 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
         {(s) => (
           <main class="cab-main">
             <Show when={helpers().length > 0}>
-              <div class="cab-driver" role="group" aria-label="Steps for">
+              <div class="cab-driver" role="group" aria-label={tt("stepsFor")}>
                 <button type="button" class="button" aria-pressed={who() === 0} onClick={() => setDriver(0)}>
-                  Head driver
+                  {tt("headDriver")}
                 </button>
                 <For each={helpers()}>
                   {(h) => (
                     <button type="button" class="button" aria-pressed={who() === h.k} onClick={() => setDriver(h.k)}>
-                      {h.name} driver
+                      {tt("groupDriver", { name: h.name })}
                     </button>
                   )}
                 </For>
               </div>
             </Show>
             <div class="cab-notch" aria-label={t("notchIs", { notch: notchText(notchFor(s())) })}>
-              <span class="cab-notch-label">{who() === 0 ? t("notch") : `${t("notch")}, ${s().groups?.[who()] ? groupWords(s().groups![who()]!.place) : ""}`}</span>
+              <span class="cab-notch-label">{who() === 0 ? t("notch") : tt("notchOfGroup", { name: s().groups?.[who()] ? groupWords(s().groups![who()]!.place) : "" })}</span>
               <span class="cab-notch-value">{notchText(notchFor(s()))}</span>
               <span class="cab-phase-line">{phaseLine(s().phase)}</span>
               <Show when={s().groups}>{(gs) => <span class="cab-groups" data-testid="cab-group-notches">{groupNotchesText(gs())}</span>}</Show>

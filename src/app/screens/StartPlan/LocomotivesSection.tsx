@@ -7,6 +7,10 @@ import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import type { DraftPosition } from "../../state/caseDraft.js";
 import type { UnitControl } from "../../../core/train/types.js";
 import { issueFinder, type InputSectionProps } from "./inputSection.js";
+import { train } from "../../../i18n/en/train.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(train);
 
 export interface LocomotivesSectionProps extends InputSectionProps {
   library: Library;
@@ -19,27 +23,27 @@ export function LocomotivesSection(props: LocomotivesSectionProps): JSX.Element 
   const issue = issueFinder(s);
   return (
     <section class="panel">
-      <h2>Locomotives</h2>
+      <h2>{t("locomotives")}</h2>
       <Index each={d.locomotives}>
         {(loco, k) => (
           <div class="loco-group">
             <div class="field" data-field={`locomotives[${k}].profile`}>
               <label class="field-label" for={`loco-${k}`}>
-                Locomotive profile
+                {t("locoProfile")}
               </label>
               <select id={`loco-${k}`} class="select" value={loco().profile} onChange={(e) => s.set("locomotives", k, "profile", e.currentTarget.value)}>
                 <For each={[...props.library.locomotives.values()]}>{(l) => <option value={l.spec.id}>{l.spec.label}</option>}</For>
               </select>
               <Show when={issue(`locomotives[${k}].profile`)}>
                 <p class="field-issue" role="alert">
-                  Locomotive profile {issue(`locomotives[${k}].profile`)}
+                  {t("locoProfileIssue", { issue: issue(`locomotives[${k}].profile`) ?? "" })}
                 </p>
               </Show>
             </div>
             <div class="row">
               <QuantityField
                 name={`locomotives[${k}].count`}
-                label="How many"
+                label={t("howMany")}
                 value={loco().count}
                 onValue={(v) => s.set("locomotives", k, "count", v)}
                 units={props.units}
@@ -51,20 +55,20 @@ export function LocomotivesSection(props: LocomotivesSectionProps): JSX.Element 
               />
               <SegmentedButtons<DraftPosition>
                 name={`locomotives[${k}].position`}
-                label="Position"
+                label={t("position")}
                 value={loco().position}
                 onChange={(v) => s.set("locomotives", k, "position", v)}
                 options={[
-                  { value: "head", label: "Head" },
-                  { value: "after", label: "Mid-train" },
-                  { value: "rear", label: "Rear" },
+                  { value: "head", label: t("head") },
+                  { value: "after", label: t("midTrain") },
+                  { value: "rear", label: t("rear") },
                 ]}
               />
             </div>
             <Show when={loco().position === "after"}>
               <QuantityField
                 name={`locomotives[${k}].position.afterWagon`}
-                label="After wagon"
+                label={t("afterWagon")}
                 value={loco().afterWagon}
                 onValue={(v) => s.set("locomotives", k, "afterWagon", v)}
                 units={props.units}
@@ -76,18 +80,18 @@ export function LocomotivesSection(props: LocomotivesSectionProps): JSX.Element 
             </Show>
             <SegmentedButtons<UnitControl>
               name={`locomotives[${k}].control`}
-              label="Driven"
+              label={t("driven")}
               value={loco().control ?? (loco().position === "head" ? "with-head" : "remote")}
               onChange={(v) => s.set("locomotives", k, "control", v)}
               options={[
-                { value: "with-head", label: "In multiple (head's notch)" },
-                { value: "remote", label: "Remote (own notch)" },
-                { value: "helper", label: "Helper (own driver)" },
+                { value: "with-head", label: t("inMultiple") },
+                { value: "remote", label: t("remote") },
+                { value: "helper", label: t("helper") },
               ]}
             />
             <Show when={d.locomotives.length > 1}>
               <button type="button" class="button subtle" onClick={() => s.removeLocomotive(k)}>
-                <Icon name="remove" /> Remove this group
+                <Icon name="remove" /> {t("removeGroup")}
               </button>
             </Show>
           </div>
@@ -95,7 +99,7 @@ export function LocomotivesSection(props: LocomotivesSectionProps): JSX.Element 
       </Index>
       <Show when={d.locomotives.length < 8}>
         <button type="button" class="button" onClick={() => s.addLocomotive()}>
-          <Icon name="add" /> Add locomotives (head, mid-train or rear)
+          <Icon name="add" /> {t("addLocomotives")}
         </button>
       </Show>
     </section>

@@ -10,6 +10,10 @@ import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { show, type UnitSystem } from "../../format.js";
 import { COUPLING_DEFAULTS } from "../../state/caseDraft.js";
 import { issueFinder, type InputSectionProps } from "./inputSection.js";
+import { train } from "../../../i18n/en/train.js";
+import { tr } from "../../i18n.js";
+
+const t = tr.ns(train);
 
 export interface TrainSectionProps extends InputSectionProps {
   library: Library;
@@ -22,14 +26,14 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
   const issue = issueFinder(s);
   return (
     <section class="panel">
-      <h2>Train</h2>
+      <h2>{t("train")}</h2>
       <Show
         when={(d.train.groups ?? []).length > 0}
         fallback={
           <>
       <QuantityField
         name="train.trailingMass_t"
-        label="Trailing mass"
+        label={t("trailingMass")}
         measure="mass"
         fileUnit="t"
         value={d.train.trailingMass_t}
@@ -42,7 +46,7 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
       <div class="row">
         <QuantityField
           name="train.wagons"
-          label="Wagons"
+          label={t("wagons")}
           value={d.train.wagons}
           onValue={(v) => s.set("train", "wagons", v)}
           units={props.units}
@@ -54,7 +58,7 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
         />
         <QuantityField
           name="train.length_m"
-          label="Length of the wagons"
+          label={t("lengthOfWagons")}
           measure="distance"
           fileUnit="m"
           value={d.train.length_m}
@@ -66,15 +70,15 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
       </div>
       <div class="field" data-field="train.wagonType">
         <label class="field-label" for="wagon-type">
-          Wagon type
+          {t("wagonType")}
         </label>
         <select id="wagon-type" class="select" value={d.train.wagonType} onChange={(e) => s.set("train", "wagonType", e.currentTarget.value)}>
-          <option value="">Plain bogie wagon</option>
+          <option value="">{t("plainBogie")}</option>
           <For each={[...props.library.wagons.values()]}>{(w) => <option value={w.id}>{w.label}</option>}</For>
         </select>
       </div>
             <button type="button" class="button subtle" data-action="add-wagon-group" onClick={() => s.addWagonGroup()}>
-              <Icon name="add" /> Enter as wagon groups (mixed loads or types)
+              <Icon name="add" /> {t("enterGroups")}
             </button>
           </>
         }
@@ -83,18 +87,18 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
       </Show>
       <SegmentedButtons
         name="train.coupling"
-        label="Coupling"
+        label={t("coupling")}
         value={d.train.coupling}
         onChange={(v) => s.set("train", "coupling", v)}
         options={[
-          { value: "knuckle", label: "Knuckle" },
-          { value: "screw", label: "Screw and buffers" },
+          { value: "knuckle", label: t("knuckle") },
+          { value: "screw", label: t("screw") },
         ]}
       />
       <div class="row">
         <QuantityField
           name="train.couplerSlack_mm"
-          label="Free slack per coupling"
+          label={t("freeSlack")}
           measure="slack"
           fileUnit="mm"
           value={d.train.couplerSlack_mm}
@@ -106,35 +110,35 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
         />
         <QuantityField
           name="train.couplerLimit_kN"
-          label="Coupler working limit"
+          label={t("couplerLimit")}
           measure="force"
           fileUnit="kN"
           value={d.train.couplerLimit_kN}
           onValue={(v) => s.set("train", "couplerLimit_kN", v)}
           units={props.units}
           issue={issue("train.couplerLimit_kN")}
-          hint={<>Typical: {show("force", COUPLING_DEFAULTS[d.train.coupling].couplerLimit_kN * 1000, props.units)} for this coupling.</>}
+          hint={<>{t("typical", { force: show("force", COUPLING_DEFAULTS[d.train.coupling].couplerLimit_kN * 1000, props.units) })}</>}
         />
       </div>
       <SegmentedButtons
         name="train.bearing"
-        label="Bearings"
+        label={t("bearings")}
         value={d.train.bearing}
         onChange={(v) => s.set("train", "bearing", v)}
         options={[
-          { value: "roller", label: "Roller" },
-          { value: "plain", label: "Plain" },
+          { value: "roller", label: t("roller") },
+          { value: "plain", label: t("plain") },
         ]}
       />
       <SegmentedButtons
         name="train.slackState"
-        label="Slack at the start"
+        label={t("slackAtStart")}
         value={d.train.slackState}
         onChange={(v) => s.set("train", "slackState", v)}
         options={[
-          { value: "from-profile", label: "From the track" },
-          { value: "bunched", label: "Bunched" },
-          { value: "stretched", label: "Stretched" },
+          { value: "from-profile", label: t("fromTrack") },
+          { value: "bunched", label: t("bunched") },
+          { value: "stretched", label: t("stretched") },
         ]}
       />
     </section>
@@ -160,14 +164,14 @@ function WagonGroups(props: TrainSectionProps): JSX.Element {
   };
   return (
     <div class="wagon-groups" data-field="train.groups">
-      <p class="field-label">Wagon groups, from the head</p>
+      <p class="field-label">{t("wagonGroups")}</p>
       <Index each={groups()}>
         {(g, k) => (
           <div class="loco-group" data-group={k}>
             <div class="row">
               <QuantityField
                 name={`train.groups[${k}].wagons`}
-                label="Wagons"
+                label={t("wagons")}
                 value={g().wagons}
                 onValue={(v) => s.set("train", "groups", k, "wagons", v)}
                 units={props.units}
@@ -179,7 +183,7 @@ function WagonGroups(props: TrainSectionProps): JSX.Element {
               />
               <QuantityField
                 name={`train.groups[${k}].mass_t`}
-                label="Mass of the group"
+                label={t("groupMass")}
                 measure="mass"
                 fileUnit="t"
                 value={g().mass_t}
@@ -188,29 +192,30 @@ function WagonGroups(props: TrainSectionProps): JSX.Element {
                 step={50}
                 min={0}
                 issue={issue(`train.groups[${k}].mass_t`)}
-                hint={<>{g().wagons >= 1 && g().mass_t > 0 ? `${show("mass", (g().mass_t * 1000) / g().wagons, props.units)} per wagon` : ""}</>}
+                hint={<>{g().wagons >= 1 && g().mass_t > 0 ? t("perWagon", { value: show("mass", (g().mass_t * 1000) / g().wagons, props.units) }) : ""}</>}
               />
             </div>
             <div class="field" data-field={`train.groups[${k}].wagonType`}>
               <label class="field-label" for={`group-type-${k}`}>
-                Wagon type
+                {t("wagonType")}
               </label>
               <select id={`group-type-${k}`} class="select" value={g().wagonType} onChange={(e) => s.set("train", "groups", k, "wagonType", e.currentTarget.value)}>
                 <For each={[...props.library.wagons.values()]}>{(w) => <option value={w.id}>{w.label}</option>}</For>
               </select>
             </div>
             <button type="button" class="button subtle" onClick={() => s.removeWagonGroup(k)}>
-              <Icon name="remove" /> Remove this group
+              <Icon name="remove" /> {t("removeGroup")}
             </button>
           </div>
         )}
       </Index>
       <button type="button" class="button" data-action="add-wagon-group" onClick={() => s.addWagonGroup()}>
-        <Icon name="add" /> Add a wagon group
+        <Icon name="add" /> {t("addWagonGroup")}
       </button>
       <p class="hint" data-testid="group-totals">
-        In all: {totals().wagons} wagons, {show("mass", totals().mass * 1000, props.units)}
-        {Number.isFinite(totals().length) ? `, ${show("distance", totals().length, props.units, 0)} long` : ""}. The largest-mass figures scale every group's load above tare in proportion.
+        {t("totals", { count: totals().wagons, mass: show("mass", totals().mass * 1000, props.units) })}
+        {Number.isFinite(totals().length) ? t("totalsLength", { length: show("distance", totals().length, props.units, 0) }) : ""}
+        {t("totalsNote")}
       </p>
     </div>
   );
@@ -218,5 +223,5 @@ function WagonGroups(props: TrainSectionProps): JSX.Element {
 
 function perWagon(lengthM: number, wagons: number, units: UnitSystem): string {
   if (!(lengthM > 0) || !(wagons >= 1)) return "";
-  return `${show("distance", lengthM / wagons, units, 1)} per wagon`;
+  return t("perWagon", { value: show("distance", lengthM / wagons, units, 1) });
 }

@@ -3,7 +3,7 @@
  * added units go, an assistance option and a divided train in a line. Pure; figures in the user's units.
  */
 import type { LocoPosition } from "../../../core/train/types.js";
-import type { LimitName, Reason } from "../../../core/planner/outcome.js";
+import type { LimitName } from "../../../core/planner/outcome.js";
 import { words } from "../../words.js";
 import type { AssistanceOptionData, DivideData } from "../../../worker/protocol.js";
 import { show, type UnitSystem } from "../../format.js";
@@ -11,8 +11,6 @@ import { dispatch } from "../../../i18n/en/dispatch.js";
 import { tr } from "../../i18n.js";
 
 const t = tr.ns(dispatch);
-
-export const REASON_SHORT: Record<Reason, string> = { adhesion: "adhesion", power: "power", coupler: "coupler", distance: "distance", brake: "brake" };
 
 /** The binding limit in words, for beside a margin: "(adhesion)", "(coupler tension)". */
 export function limitWord(binding: LimitName | undefined): string {
