@@ -4,18 +4,20 @@
  * printout through `cliTr()`. Only text is translated: JSON and CSV are the same in every language.
  */
 import { cliDe } from "../i18n/de/cli.js";
+import { deChecks } from "../i18n/de/checks.js";
 import { de } from "../i18n/de/index.js";
 import { cliHu } from "../i18n/hu/cli.js";
 import { fieldsDe } from "../i18n/de/fields.js";
 import { fields } from "../i18n/en/fields.js";
 import { fieldsHu } from "../i18n/hu/fields.js";
+import { huChecks } from "../i18n/hu/checks.js";
 import { hu } from "../i18n/hu/index.js";
 import { langFromEnvironment, isLang, type Lang } from "../i18n/language.js";
 import type { Catalog } from "../i18n/messages.js";
 import { createTranslator, type MessageFn, type Translator } from "../i18n/translator.js";
 import { wordsOf } from "../i18n/words.js";
 
-const CATALOGS: Readonly<Record<Lang, Catalog | null>> = { en: null, hu: { ...hu, cli: cliHu, fields: fieldsHu }, de: { ...de, cli: cliDe, fields: fieldsDe } };
+const CATALOGS: Readonly<Record<Lang, Catalog | null>> = { en: null, hu: { ...hu, ...huChecks, cli: cliHu, fields: fieldsHu }, de: { ...de, ...deChecks, cli: cliDe, fields: fieldsDe } };
 
 let current: Translator = createTranslator("en", null);
 

@@ -2,8 +2,8 @@
  * Recorded starts from files, for the Start review: GPX 1.1 tracks and the plain CSV log
  * (`time_s,speed_kmh[,notch][,current_A][,distance_m]`, header required). The readers turn a file into the
  * core's Recording (src/core/dispatch/recording.ts) or refuse it with a RecordingFileError whose message
- * names the line or point; nothing is changed by a refused file. The words for the user are here, in
- * RECORDING_WORDS and `problemText`, and nowhere else.
+ * names the line or point; nothing is changed by a refused file. What the readers say is here, as data, in
+ * RECORDING_WORDS and `problemLine`; the words themselves are the `review` namespace of src/i18n (en/review.ts).
  *
  * GPX is read with saxes (already the railML reader's parser: strict, non-validating, never fetches or
  * expands entities). Read: every `trk` / `trkseg` / `trkpt` in order (several segments are one recording;
@@ -23,17 +23,27 @@ import {
   type RecordingProblem,
   type RecordingSample,
 } from "../core/dispatch/recording.js";
+import { fig, reviewText, type ReviewText } from "../i18n/reviewText.js";
+import { createTranslator, type Translator } from "../i18n/translator.js";
 import { parseCsv } from "./csv.js";
 
-/** A recording file that cannot be read or cannot be a start; the message is for the user. */
+/** A recording file that cannot be read or cannot be a start; the message (English) and its sentences as data (`texts`) are for the user. */
 export class RecordingFileError extends Error {
   override name = "RecordingFileError";
+  readonly texts: readonly ReviewText[];
+  constructor(texts: ReviewText | readonly ReviewText[]) {
+    const list = Array.isArray(texts) ? (texts as readonly ReviewText[]) : [texts as ReviewText];
+    super(list.map((t) => reviewText(ENGLISH, t)).join("\n"));
+    this.texts = list;
+  }
 }
 
 export interface ReadRecording {
   recording: Recording;
-  /** What was read and what was left out, one line each. */
+  /** What was read and what was left out, one line each (English, as the JSON carries them). */
   notices: string[];
+  /** The same as data, for a printout in another language. */
+  noticeTexts: ReviewText[];
   kind: "gpx" | "csv";
 }
 
@@ -45,47 +55,59 @@ const NUMBER = /^\s*[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?\s*$/;
 /** xsd:dateTime: date, time, optional fraction, optional zone (Z or ±hh:mm). */
 const DATE_TIME = /^\s*(-?\d{4,})-(\d{2})-(\d{2})T(\d{2}):(\d{2}):(\d{2})(\.\d+)?(Z|[+-]\d{2}:\d{2})?\s*$/;
 
-export const RECORDING_WORDS = {
-  csvHeader: 'The first line must be the header "time_s,speed_kmh" (optionally with notch, current_A, distance_m, in any order).',
-  csvUnknownColumn: (line: number, name: string) => `line ${line}: column "${name}" is not one the review reads (time_s, speed_kmh, notch, current_A, distance_m).`,
-  csvMissing: (line: number, name: string) => `line ${line}: ${name} is missing.`,
-  csvNotNumber: (line: number, name: string, raw: string) => `line ${line}: ${name} must be a number (got "${raw.slice(0, 40)}").`,
-  csvNotch: (line: number, raw: string) => `line ${line}: notch must be a whole number from 0 (got "${raw.slice(0, 40)}").`,
-  csvPartial: (name: string) => `The column ${name} is filled on some lines and empty on others: fill it on every line or leave it out.`,
-  csvQuote: (detail: string) => `The file is not readable CSV: ${detail}.`,
-  gpxNotXml: (line: number, column: number, detail: string) => `The file is not well-formed XML (line ${line}, column ${column}): ${detail}`,
-  gpxRoot: (name: string) => `This is not a GPX file: its root element is <${name}>, not <gpx>.`,
-  gpxEntities: "The file declares its own XML entities; a GPX track has none, and such a file is not read.",
-  gpxNoPoints: "The GPX file holds no track points (trk / trkseg / trkpt).",
-  gpxLatLon: (point: number, line: number) => `point ${point} (line ${line}): lat and lon must be numbers in range (lat −90…90, lon −180…180).`,
-  gpxTime: (point: number, line: number, raw: string) => `point ${point} (line ${line}): the time "${raw.slice(0, 40)}" is not an ISO date and time (e.g. 2026-11-03T05:40:00Z).`,
-  gpxNoTime: (point: number, line: number) => `point ${point} (line ${line}) has no time and was left out.`,
-  gpxSpeed: (point: number, line: number, raw: string) => `point ${point} (line ${line}): the speed "${raw.slice(0, 40)}" is not a number of m/s.`,
-  gpxSpeedUsed: "The speed logged with the points (GPX speed, m/s) was used; the distance comes from the positions.",
-  gpxSpeedDerived: "The speed comes from the positions, smoothed over ±5 s.",
-  tooBig: "The file is too large to be one recorded start.",
-  tooMany: `The file holds more than ${MAX_SAMPLES} samples: more than one recorded start.`,
-  empty: "The file is empty.",
-  unknownKind: "The recording must be a GPX track (.gpx) or a CSV log (.csv).",
-} as const;
+const ENGLISH = createTranslator("en", null);
+const clip = (raw: string) => raw.slice(0, 40);
 
-/** A problem that makes the samples unusable as a start, for the user. */
-export function problemText(p: RecordingProblem): string {
+/** What the readers say, as data (rendered in the language chosen by `reviewText`; the `review` namespace of src/i18n). */
+export const RECORDING_WORDS = {
+  csvHeader: { key: "csvHeader" },
+  csvUnknownColumn: (line: number, name: string): ReviewText => ({ key: "csvUnknownColumn", params: { line, name } }),
+  csvMissing: (line: number, name: string): ReviewText => ({ key: "csvMissing", params: { line, name } }),
+  csvNotNumber: (line: number, name: string, raw: string): ReviewText => ({ key: "csvNotNumber", params: { line, name, raw: clip(raw) } }),
+  csvNotch: (line: number, raw: string): ReviewText => ({ key: "csvNotch", params: { line, raw: clip(raw) } }),
+  csvPartial: (name: string): ReviewText => ({ key: "csvPartial", params: { name } }),
+  csvQuote: (detail: string): ReviewText => ({ key: "csvQuote", params: { detail } }),
+  gpxNotXml: (line: number, column: number, detail: string): ReviewText => ({ key: "gpxNotXml", params: { line, column, detail } }),
+  gpxRoot: (name: string): ReviewText => ({ key: "gpxRoot", params: { name } }),
+  gpxEntities: { key: "gpxEntities" },
+  gpxNoPoints: { key: "gpxNoPoints" },
+  gpxLatLon: (point: number, line: number): ReviewText => ({ key: "gpxLatLon", params: { point, line } }),
+  gpxTime: (point: number, line: number, raw: string): ReviewText => ({ key: "gpxTime", params: { point, line, raw: clip(raw) } }),
+  gpxNoTime: (point: number, line: number): ReviewText => ({ key: "gpxNoTime", params: { point, line } }),
+  gpxSpeed: (point: number, line: number, raw: string): ReviewText => ({ key: "gpxSpeed", params: { point, line, raw: clip(raw) } }),
+  gpxSpeedUsed: { key: "gpxSpeedUsed" },
+  gpxSpeedDerived: { key: "gpxSpeedDerived" },
+  tooBig: { key: "tooBig" },
+  tooMany: { key: "tooMany", params: { max: String(MAX_SAMPLES) } },
+  empty: { key: "empty" },
+  unknownKind: { key: "unknownKind" },
+} as const satisfies Record<string, ReviewText | ((...args: never[]) => ReviewText)>;
+
+/** A problem that makes the samples unusable as a start, as data. */
+export function problemLine(p: RecordingProblem): ReviewText {
   switch (p.kind) {
     case "too-few":
-      return `The recording holds ${p.count} sample${p.count === 1 ? "" : "s"}: too few to be a start (at least 10).`;
+      return { key: "tooFew", params: { count: p.count } };
     case "out-of-order":
-      return `${p.at}: the time is not later than at ${p.previousAt}; the samples must be in time order.`;
+      return { key: "outOfOrder", params: { at: p.at, previousAt: p.previousAt } };
     case "gap":
-      return `${p.at}: ${p.gapS.toFixed(1)} s after ${p.previousAt}, a gap longer than ${MAX_GAP_S} s; the recording must be continuous through the start.`;
+      return { key: "gap", params: { at: p.at, gap: fig(p.gapS, 1), previousAt: p.previousAt, max: MAX_GAP_S } };
     case "no-movement":
-      return `The train does not start in this recording: the speed never stays above 2 km/h for 5 s (highest ${(p.maxSpeedMps * 3.6).toFixed(1)} km/h).`;
+      return { key: "noMovement", params: { speed: fig(p.maxSpeedMps * 3.6, 1) } };
     case "reversing":
-      return `${p.at}: the train has run ${p.backM.toFixed(0)} m back (more than ${REVERSE_M} m); a reversing movement is not a start.`;
+      return { key: "reversing", params: { at: p.at, back: fig(p.backM, 0), max: REVERSE_M } };
     case "negative-speed":
-      return `${p.at}: the speed is negative (reversing); a start runs forward only.`;
+      return { key: "negativeSpeed", params: { at: p.at } };
   }
 }
+
+/** A problem that makes the samples unusable as a start, for the user (English unless a translator is given). */
+export function problemText(p: RecordingProblem, tr: Translator = ENGLISH): string {
+  return reviewText(tr, problemLine(p));
+}
+
+/** Notices in English (the JSON's) and as data. */
+const noticesOf = (texts: ReviewText[]) => ({ notices: texts.map((t) => reviewText(ENGLISH, t)), noticeTexts: texts });
 
 /** Read a recording by its file name's ending (.gpx or .csv), checked as a start. */
 export function readRecording(name: string, text: string): ReadRecording {
@@ -95,7 +117,7 @@ export function readRecording(name: string, text: string): ReadRecording {
   const r = lower.endsWith(".gpx") ? readGpx(text) : lower.endsWith(".csv") ? readCsvLog(text) : null;
   if (!r) throw new RecordingFileError(RECORDING_WORDS.unknownKind);
   const problems = recordingProblems(r.recording);
-  if (problems.length > 0) throw new RecordingFileError(problems.map(problemText).join("\n"));
+  if (problems.length > 0) throw new RecordingFileError(problems.map(problemLine));
   return r;
 }
 
@@ -171,6 +193,7 @@ export function readCsvLog(text: string): ReadRecording {
     kind: "csv",
     recording: { samples, notchLogged: samples.length > 0 && samples.every((s) => s.notch !== undefined), currentLogged: samples.length > 0 && samples.every((s) => s.currentA !== undefined) },
     notices: [],
+    noticeTexts: [],
   };
 }
 
@@ -210,7 +233,7 @@ const EARTH_M = 6_371_008.8;
 export function readGpx(text: string): ReadRecording {
   const parser = new SaxesParser({ xmlns: false, position: true });
   const points: GpxPoint[] = [];
-  const notices: string[] = [];
+  const notices: ReviewText[] = [];
   const path: string[] = [];
   let root: string | null = null;
   let pointNo = 0;
@@ -283,7 +306,7 @@ export function readGpx(text: string): ReadRecording {
   // Lay the points on a local plane (equirectangular about the first point: metres east and north; over
   // the few kilometres of a start the error is far below the fixes' own).
   const p0 = points[0];
-  if (!p0) return { kind: "gpx", recording: { samples: [], notchLogged: false, currentLogged: false }, notices };
+  if (!p0) return { kind: "gpx", recording: { samples: [], notchLogged: false, currentLogged: false }, ...noticesOf(notices) };
   const k = Math.PI / 180;
   const east = points.map((p) => (p.lon - p0.lon) * k * EARTH_M * Math.cos(p0.lat * k));
   const north = points.map((p) => (p.lat - p0.lat) * k * EARTH_M);
@@ -309,9 +332,9 @@ export function readGpx(text: string): ReadRecording {
       for (let i = 0; i < points.length; i++) {
         const along = (east[i]! * east[far]! + north[i]! * north[far]!) / len;
         most = Math.max(most, along);
-        if (most - along > REVERSE_M) throw new RecordingFileError(problemText({ kind: "reversing", at: at(points[i]!), backM: most - along }));
+        if (most - along > REVERSE_M) throw new RecordingFileError(problemLine({ kind: "reversing", at: at(points[i]!), backM: most - along }));
       }
     }
   }
-  return { kind: "gpx", recording: { samples, notchLogged: false, currentLogged: false }, notices };
+  return { kind: "gpx", recording: { samples, notchLogged: false, currentLogged: false }, ...noticesOf(notices) };
 }

@@ -4,11 +4,9 @@
  * review place, live here.
  */
 import type { FactorEstimate, StartReviewResult } from "../core/dispatch/index.js";
-import { LIMIT_WORDS } from "../core/planner/outcome.js";
+import { fig, reviewText, type ReviewText } from "../i18n/reviewText.js";
+import { createTranslator } from "../i18n/translator.js";
 import type { ReadRecording } from "./recording.js";
-import { fixedText } from "./numbers.js";
-
-const num = (x: number | null | undefined, decimals = 0): string => (x === null || x === undefined || !Number.isFinite(x) ? "—" : fixedText(x, decimals));
 
 export interface FactorJson {
   value: number;
@@ -43,7 +41,6 @@ const r1 = (x: number) => Math.round(x * 10) / 10;
 const r3 = (x: number) => Math.round(x * 1000) / 1000;
 const orNull = (x: number | null, f: (x: number) => number) => (x === null ? null : f(x));
 const factor = (e: FactorEstimate): FactorJson => ({ value: r3(e.value), low: r3(e.low), high: r3(e.high) });
-const pct = (f: number) => `${Math.abs(Math.round((f - 1) * 100))} %`;
 
 /** Express a review with units in names. */
 export function reviewReport(r: StartReviewResult, read: ReadRecording, series: boolean): ReviewReport {
@@ -74,48 +71,66 @@ export function reviewReport(r: StartReviewResult, read: ReadRecording, series: 
   return report;
 }
 
-export const VERDICT_WORDS: Record<string, string> = { starts: "starts", marginal: "marginal", "needs-assistance": "needs assistance" };
+const ENGLISH = createTranslator("en", null);
 
-/** What the review says, one sentence each (the text output and the JSON `summary`). */
+/** What the review says, one sentence each, in English (the JSON `summary`). */
 export function reviewSummary(r: StartReviewResult): string[] {
-  const out: string[] = [];
+  return reviewLines(r).map((l) => reviewText(ENGLISH, l));
+}
+
+/** What the review says, one sentence each, as data (rendered in any language by `reviewText`). */
+export function reviewLines(r: StartReviewResult): ReviewText[] {
+  const out: ReviewText[] = [];
   const m = r.massFit.estimates.massFactor!;
-  const interval = (e: FactorEstimate) => `${num(e.low, 2)}–${num(e.high, 2)}`;
-  out.push(`The train behaved as if ${pct(m.value)} ${m.value >= 1 ? "heavier" : "lighter"} than planned: mass factor ${num(m.value, 2)} (95 % interval ${interval(m)}), with the units' effort as specified.`);
+  const pct = (f: number) => Math.abs(Math.round((f - 1) * 100));
+  out.push({ key: m.value >= 1 ? "heavier" : "lighter", params: { pct: pct(m.value), value: fig(m.value, 2), low: fig(m.low, 2), high: fig(m.high, 2) } });
   if (r.effortFit) {
     const e = r.effortFit.estimates.effortFactor!;
-    out.push(`With the train's mass as planned, the units gave ${num(e.value * 100, 0)} % of their effort: effort factor ${num(e.value, 2)} (${interval(e)}).`);
+    out.push({ key: "effort", params: { pct: fig(e.value * 100, 0), value: fig(e.value, 2), low: fig(e.low, 2), high: fig(e.high, 2) } });
     if (r.jointFit) {
       const jm = r.jointFit.estimates.massFactor!;
       const je = r.jointFit.estimates.effortFactor!;
-      out.push(`The recording separates the two: together, mass factor ${num(jm.value, 2)} (${interval(jm)}) and effort factor ${num(je.value, 2)} (${interval(je)}).`);
+      out.push({ key: "joint", params: { mass: fig(jm.value, 2), massLow: fig(jm.low, 2), massHigh: fig(jm.high, 2), effort: fig(je.value, 2), effortLow: fig(je.low, 2), effortHigh: fig(je.high, 2) } });
     } else {
-      out.push(`The recording cannot tell a heavier train from weaker units (they move the speed curve alike; correlation ${num(r.correlation ?? 1, 2)}): either explanation fits, and Taut does not choose between them.`);
+      out.push({ key: "notSeparable", params: { correlation: fig(r.correlation ?? 1, 2) } });
     }
   } else {
-    out.push("No notch was logged, so the driver is taken to have followed the plan's notches; the units' effort cannot be fitted.");
+    out.push({ key: "noNotch" });
   }
   const p = r.planned;
   const a = r.actual;
   if (p.timeToTargetS !== null && a.timeToTargetS !== null) {
-    out.push(`From the moment of start to the target: ${num(a.timeToTargetS, 0)} s and ${num(a.distanceToTargetM!, 0)} m recorded, ${num(p.timeToTargetS, 0)} s and ${num(p.distanceToTargetM!, 0)} m planned${r.tookLonger ? " — it took longer than planned" : ""}.`);
-  } else if (a.timeToTargetS === null) out.push("The recording does not reach the case's target.");
-  else out.push(`The recording reaches the target ${num(a.timeToTargetS, 0)} s after the moment of start; the plan does not reach it.`);
+    out.push({
+      key: r.tookLonger ? "toTargetLonger" : "toTarget",
+      params: { actualS: fig(a.timeToTargetS, 0), actualM: fig(a.distanceToTargetM!, 0), plannedS: fig(p.timeToTargetS, 0), plannedM: fig(p.distanceToTargetM!, 0) },
+    });
+  } else if (a.timeToTargetS === null) out.push({ key: "noTarget" });
+  else out.push({ key: "planNoTarget", params: { s: fig(a.timeToTargetS, 0) } });
   if (p.stretchS !== null && a.stretchS !== null && p.stretchS < 0.5 && a.stretchS < 0.5) {
-    out.push("The slack was out before the speed reached 2 km/h, in the plan and in the recording.");
+    out.push({ key: "slackOut" });
   } else if (p.stretchS !== null && a.stretchS !== null) {
-    out.push(`The locomotive covered the plan's travel to the stretched train in ${num(a.stretchS, 0)} s (planned ${num(p.stretchS, 0)} s)${r.stretchTookLonger ? ": the stretch took longer than planned" : ""}.`);
+    out.push({ key: r.stretchTookLonger ? "stretchLonger" : "stretch", params: { actual: fig(a.stretchS, 0), planned: fig(p.stretchS, 0) } });
   }
   for (const s of r.slips) {
-    out.push(`Slip at ${num(s.startS, 0)}–${num(s.endS, 0)} s in notch ${s.notch} (${num(s.speedMps * 3.6, 1)} km/h): the current fell from ${Math.round(s.currentBeforeA)} A to ${Math.round(s.currentLowestA)} A while the notch held. The rail gave less than the adhesion the notch asked, ${num(s.adhesionDemand, 2)}.`);
+    out.push({
+      key: "slip",
+      params: {
+        start: fig(s.startS, 0),
+        end: fig(s.endS, 0),
+        notch: s.notch,
+        speed: fig(s.speedMps * 3.6, 1),
+        before: Math.round(s.currentBeforeA),
+        lowest: Math.round(s.currentLowestA),
+        demand: fig(s.adhesionDemand, 2),
+      },
+    });
   }
   const re = r.replanned;
-  const used = r.jointFit ? "both fitted factors" : `the mass factor ${num(r.applied.massFactor, 2)}`;
+  const used: ReviewText = r.jointFit ? { key: "usedBoth" } : { key: "usedMass", params: { value: fig(r.applied.massFactor, 2) } };
   out.push(
     re.changed
-      ? `Re-planned with ${used}, the verdict changes: ${VERDICT_WORDS[r.plan.verdict]} → ${VERDICT_WORDS[re.verdict]} (margin ${num(re.margin, 2)}, ${LIMIT_WORDS[re.binding]}).`
-      : `Re-planned with ${used}, the verdict stays ${VERDICT_WORDS[re.verdict]} (margin ${num(re.margin, 2)}, ${LIMIT_WORDS[re.binding]}).`,
+      ? { key: "changes", params: { used: { text: used }, from: { verdict: r.plan.verdict }, to: { verdict: re.verdict }, margin: fig(re.margin, 2), limit: { limit: re.binding } } }
+      : { key: "stays", params: { used: { text: used }, verdict: { verdict: re.verdict }, margin: fig(re.margin, 2), limit: { limit: re.binding } } },
   );
   return out;
 }
-

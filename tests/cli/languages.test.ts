@@ -2,7 +2,8 @@
  * The command line in three languages: `LANG=hu_HU.UTF-8 taut plan --demo` and `--lang de` print the plan
  * in Hungarian and German with the same figures as English (a decimal comma instead of a point); `--json`
  * and CSV are the same bytes in every language; `--lang` beats the environment, and a language Taut does
- * not speak is a usage error (exit 2).
+ * not speak is a usage error (exit 2). `taut review` likewise: its sentences and the recording's notices and
+ * refusals translated, the same figures, the same JSON.
  */
 import { describe, expect, it } from "vitest";
 import { cli } from "../../src/i18n/en/cli.js";
@@ -12,6 +13,15 @@ import { taut, tautWithEnv } from "../tools/cli.js";
 import { cautions } from "../../src/i18n/en/cautions.js";
 import { cautionsDe } from "../../src/i18n/de/cautions.js";
 import { cautionsHu } from "../../src/i18n/hu/cautions.js";
+import { review } from "../../src/i18n/en/review.js";
+import { reviewDe } from "../../src/i18n/de/review.js";
+import { reviewHu } from "../../src/i18n/hu/review.js";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+
+const repo = fileURLToPath(new URL("../../", import.meta.url));
 
 /** The figures of a printout, as numbers, in order (a decimal comma read as a point). */
 function figures(text: string): number[] {
@@ -78,4 +88,45 @@ describe("taut in Hungarian and German", () => {
     const help = await tautWithEnv({ LANG: "de_DE.UTF-8" }, "--help");
     expect(help.stdout).toContain(cliDe.commandsTitle);
   });
+
+  it("taut review prints its sentences in Hungarian and German with the same figures as English; its JSON is the same", async () => {
+    const args = ["review", `${repo}profiles/cases/demo-aggregate-ashvale.json`, `${repo}profiles/recordings/demo-aggregate-ashvale-heavier.gpx`];
+    const en = await tautWithEnv({ LANG: "C" }, ...args);
+    const hu = await tautWithEnv({ LANG: "hu_HU.UTF-8" }, ...args);
+    const de = await taut(...args, "--lang", "de");
+    for (const r of [en, hu, de]) expect(r.code, r.stderr).toBe(0);
+    // The first words of the mass-factor sentence and of the notice on the speed, in each language.
+    const start = (x: string, n = 5) => x.split(" ").slice(0, n).join(" ");
+    const heavier = { en: review.en.heavier, hu: reviewHu.heavier as string, de: reviewDe.heavier as string };
+    expect(en.stdout).toContain(start(heavier.en));
+    expect(hu.stdout).toContain(start(heavier.hu));
+    expect(de.stdout).toContain(start(heavier.de));
+    expect(hu.stdout).toContain(reviewHu.gpxSpeedDerived as string);
+    expect(de.stdout).toContain(reviewDe.gpxSpeedDerived as string);
+    expect(hu.stdout).not.toContain("The train behaved");
+    expect(de.stdout).not.toContain("The train behaved");
+    // A decimal comma: the mass factor "1,13".
+    expect(de.stdout).toMatch(/\b1,\d\d\b/);
+    const sorted = (t: string) => figures(t).sort((a, b) => a - b);
+    expect(sorted(hu.stdout)).toEqual(sorted(en.stdout));
+    expect(sorted(de.stdout)).toEqual(sorted(en.stdout));
+    const json = await Promise.all([taut(...args, "--json"), taut(...args, "--json", "--lang", "hu"), tautWithEnv({ LC_ALL: "de_DE.UTF-8" }, ...args, "--json")]);
+    expect(json[1].stdout).toBe(json[0].stdout);
+    expect(json[2].stdout).toBe(json[0].stdout);
+  }, 120_000);
+
+  it("taut review refuses a recording in the language chosen", async () => {
+    const dir = mkdtempSync(join(tmpdir(), "taut-review-lang-"));
+    try {
+      writeFileSync(join(dir, "few.csv"), "time_s,speed_kmh\n0,0\n1,2\n");
+      const args = ["review", `${repo}profiles/cases/demo-aggregate-ashvale.json`, join(dir, "few.csv")];
+      const [en, hu, de] = await Promise.all([taut(...args), taut(...args, "--lang", "hu"), taut(...args, "--lang", "de")]);
+      for (const r of [en, hu, de]) expect(r.code).toBe(2);
+      expect(en.stderr).toContain("The recording holds 2 samples: too few");
+      expect(hu.stderr).toContain((reviewHu.tooFew as { other: string }).other.replace("{count}", "2"));
+      expect(de.stderr).toContain((reviewDe.tooFew as { other: string }).other.replace("{count}", "2"));
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 120_000);
 });

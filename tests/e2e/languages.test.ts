@@ -26,6 +26,11 @@ import { notesHu } from "../../src/i18n/hu/notes.js";
 import { trainDe } from "../../src/i18n/de/train.js";
 import { assistDe } from "../../src/i18n/de/assist.js";
 import { assistHu } from "../../src/i18n/hu/assist.js";
+import { reviewDe } from "../../src/i18n/de/review.js";
+import { reviewHu } from "../../src/i18n/hu/review.js";
+import { notes } from "../../src/i18n/en/notes.js";
+import { pseudoText } from "../../src/i18n/pseudo.js";
+import { fileURLToPath } from "node:url";
 import { trainHu } from "../../src/i18n/hu/train.js";
 
 let context: BrowserContext;
@@ -34,7 +39,9 @@ let profile: string;
 let problems: string[] = [];
 const base = inject("baseURL");
 
-const SCREENS = ["start-plan", "cab-steps", "assistance-check", "departures", "load-table", "location-notes", "settings"] as const;
+const SCREENS = ["start-plan", "cab-steps", "assistance-check", "departures", "load-table", "location-notes", "start-review", "settings"] as const;
+/** A recorded start of the demo (illustrative), for Start review to show what it says. */
+const RECORDING = fileURLToPath(new URL("../../profiles/recordings/demo-aggregate-ashvale-heavier.gpx", import.meta.url));
 const TITLES = {
   en: [shell.en.screenStartPlan, shell.en.screenSettings],
   hu: [shellHu.screenStartPlan, shellHu.screenSettings],
@@ -66,6 +73,37 @@ async function overflowing(label: string): Promise<string[]> {
     return out;
   });
   return found.map((f) => `${label}: ${f}`);
+}
+
+/**
+ * Start review, reached from the first note's card (its button is `button`, the words of the language on
+ * screen), with the demo recording reviewed, and kept with the note when `keep`.
+ */
+async function openReview(button: string, keep = false): Promise<void> {
+  await go("location-notes");
+  await page.locator(".notes-list .notes-item").first().locator("button.button").click({ timeout: 60_000 });
+  await page.locator(".notes-card-view button", { hasText: button }).click();
+  await page.locator("#review-h").waitFor({ timeout: 30_000 });
+  await page.locator(".review-screen input[type=file]").setInputFiles(RECORDING);
+  await page.locator(".review-result li").first().waitFor({ timeout: 120_000 });
+  if (keep) {
+    await page.locator(".review-form button.primary").click();
+    await page.locator(".review-list li").first().waitFor({ timeout: 30_000 });
+  }
+  await page.waitForTimeout(300);
+}
+
+/** Start plan's inputs on screen (in portrait they are a pane behind a tab). */
+async function showInputs(): Promise<void> {
+  if (await page.locator("#tab-inputs").isVisible()) await page.locator("#tab-inputs").click();
+  await page.locator("#pane-inputs").waitFor({ state: "visible" });
+}
+
+/** A screenshot of the whole of Start plan's inputs pane (locomotives, train, wagon groups), then back to the plan. */
+async function inputsShot(file: string): Promise<void> {
+  await showInputs();
+  await page.locator("#pane-inputs").screenshot({ path: join(SHOTS, file) });
+  if (await page.locator("#tab-plan").isVisible()) await page.locator("#tab-plan").click();
 }
 
 /** All text of a PDF, page by page (pdfjs-dist, legacy build for Node). */
@@ -125,7 +163,17 @@ describe("Taut in three languages", () => {
       for (const [size, name2] of [[LANDSCAPE, "landscape"], [PORTRAIT, "portrait"]] as const) {
         await page.setViewportSize(size);
         for (const id of SCREENS) {
-          await go(id);
+          if (id === "start-review") await openReview((lang === "hu" ? notesHu : notesDe).startReview as string, lang === "hu" && name2 === "landscape");
+          else await go(id);
+          if (id === "start-review") {
+            const tv = lang === "hu" ? reviewHu : reviewDe;
+            expect(await page.locator("#review-h").textContent()).toMatch(new RegExp(`^${tv.title}: `));
+            expect(await page.locator(".review-result h3").first().textContent()).toBe(tv.shows);
+            const said = (await page.locator(".review-result li").first().textContent()) ?? "";
+            const opening = (m: unknown) => (m as string).split(" ").slice(0, 4).join(" ");
+            expect([opening(tv.heavier), opening(tv.lighter)]).toContain(said.split(" ").slice(0, 4).join(" "));
+            expect(await page.locator(".review-list li button").first().textContent()).toBe(tv.remove);
+          }
           const tw = lang === "hu" ? trainHu : trainDe;
           if (id === "start-plan") {
             expect(await page.locator('[data-field="train.groups"] > .field-label').textContent()).toBe(tw.wagonGroups);
@@ -141,6 +189,7 @@ describe("Taut in three languages", () => {
           if (id === "departures") expect(await page.locator("#load-h").textContent()).toBe((lang === "hu" ? departuresHu : departuresDe).loadHeading);
           if (id === "location-notes") expect(await page.locator(".notes-library .notes-row-actions button").first().textContent()).toBe((lang === "hu" ? notesHu : notesDe).newNote);
           await page.screenshot({ path: join(SHOTS, `lang-${lang}-${id}-${name2}.png`) });
+          if (id === "start-plan") await inputsShot(`lang-${lang}-start-plan-inputs-${name2}.png`);
         }
       }
       await page.setViewportSize(LANDSCAPE);
@@ -185,9 +234,16 @@ describe("Taut in three languages", () => {
     for (const [size, name] of [[LANDSCAPE, "landscape"], [PORTRAIT, "portrait"]] as const) {
       await page.setViewportSize(size);
       for (const id of SCREENS) {
-        await go(id);
+        if (id === "start-review") await openReview(pseudoText(notes.en.startReview));
+        else await go(id);
         found.push(...(await overflowing(`${id} ${name}`)));
         await page.screenshot({ path: join(SHOTS, `lang-pseudo-${id}-${name}.png`) });
+        if (id === "start-plan") {
+          // In portrait the inputs are a pane of their own: measure them there too.
+          await showInputs();
+          found.push(...(await overflowing(`${id} inputs ${name}`)));
+          await inputsShot(`lang-pseudo-start-plan-inputs-${name}.png`);
+        }
       }
     }
     await page.evaluate(() => localStorage.removeItem("taut.pseudo"));

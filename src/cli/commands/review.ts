@@ -1,7 +1,8 @@
 /** `taut review CASE.json RECORDING.gpx|.csv [--json]` — a recorded start held against its plan (Start review). */
 import { reviewStart, RecordingRejected, type StartReviewResult } from "../../core/dispatch/index.js";
 import { readRecording, RecordingFileError, problemText, type ReadRecording } from "../../profiles/recording.js";
-import { reviewReport, type ReviewReport } from "../../profiles/reviewReport.js";
+import { reviewLines, reviewReport, type ReviewReport } from "../../profiles/reviewReport.js";
+import { reviewText, type ReviewText } from "../../i18n/reviewText.js";
 import { cli } from "../../i18n/en/cli.js";
 import { cliTr, cliWords } from "../lang.js";
 import type { Verdict } from "../../core/planner/outcome.js";
@@ -11,15 +12,17 @@ import type { Command } from "../command.js";
 import { num } from "../table.js";
 import { wrap } from "../render/wrap.js";
 
-export function renderReview(rep: ReviewReport): string {
-  const t = cliTr().ns(cli);
+/** The review as text in this run's language: the report's figures, the review's sentences and the recording's notices as data. */
+export function renderReview(rep: ReviewReport, lines: readonly ReviewText[], notices: readonly ReviewText[]): string {
+  const tr = cliTr();
+  const t = tr.ns(cli);
   const r = rep.recording;
   return [
     t("reviewRecording", { kind: r.kind.toUpperCase(), samples: r.samples, duration: num(r.duration_s, 0) }) + (r.notchLogged ? t("reviewNotchLogged") : "") + (r.currentLogged ? t("reviewCurrentLogged") : ""),
-    ...r.notices.map((n) => `  ${n}`),
+    ...notices.map((n) => `  ${reviewText(tr, n)}`),
     t("reviewPlanned", { verdict: cliWords().verdictInline(rep.planned.verdict as Verdict) }),
     "",
-    ...rep.summary.flatMap((s) => wrap(s, 100, "  ")),
+    ...lines.flatMap((l) => wrap(reviewText(tr, l), 100, "  ")),
     "",
     t("reviewFit", { samples: rep.fit.samples, rms: num(rep.fit.rms_kmh, 2), runs: rep.fit.runs }),
     t("reviewEvidence"),
@@ -54,18 +57,18 @@ export const reviewCommand: Command = {
     try {
       read = readRecording(recPath, readText(recPath));
     } catch (e) {
-      if (e instanceof RecordingFileError) throw new InputError(`${pathText(recPath)}: ${e.message}`);
+      if (e instanceof RecordingFileError) throw new InputError(`${pathText(recPath)}: ${e.texts.map((x) => reviewText(cliTr(), x)).join("\n")}`);
       throw e;
     }
     let r: StartReviewResult;
     try {
       r = reviewStart(c, read.recording);
     } catch (e) {
-      if (e instanceof RecordingRejected) throw new InputError(`${pathText(recPath)}: ${e.problems.map(problemText).join("\n")}`);
+      if (e instanceof RecordingRejected) throw new InputError(`${pathText(recPath)}: ${e.problems.map((p) => problemText(p, cliTr())).join("\n")}`);
       throw e;
     }
     const report = reviewReport(r, read, values.series === true);
-    io.out(values.json ? JSON.stringify(report, null, 2) : renderReview(report));
+    io.out(values.json ? JSON.stringify(report, null, 2) : renderReview(report, reviewLines(r), read.noticeTexts));
     return 0;
   },
 };

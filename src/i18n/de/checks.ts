@@ -4,5 +4,6 @@
  */
 import type { Catalog } from "../messages.js";
 import { assistDe } from "./assist.js";
+import { reviewDe } from "./review.js";
 
-export const deChecks: Catalog = { assist: assistDe };
+export const deChecks: Catalog = { assist: assistDe, review: reviewDe };

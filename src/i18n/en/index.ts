@@ -10,6 +10,7 @@ import { inputs } from "./inputs.js";
 import { noteChecks } from "./noteChecks.js";
 import { notes } from "./notes.js";
 import { plan } from "./plan.js";
+import { review } from "./review.js";
 import { settings } from "./settings.js";
 import { shell } from "./shell.js";
 import { steps } from "./steps.js";
@@ -20,4 +21,4 @@ import { guidance } from "./guidance.js";
 import { assistNotes } from "./assistNotes.js";
 import { advice } from "./advice.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review] as const;

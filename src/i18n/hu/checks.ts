@@ -4,5 +4,6 @@
  */
 import type { Catalog } from "../messages.js";
 import { assistHu } from "./assist.js";
+import { reviewHu } from "./review.js";
 
-export const huChecks: Catalog = { assist: assistHu };
+export const huChecks: Catalog = { assist: assistHu, review: reviewHu };

@@ -15,6 +15,20 @@ import { reviewTarget } from "../../state/reviewTarget.js";
 import { builtinTrains } from "../../../profiles/builtin.js";
 import { computeNoteLoadTable } from "../LocationNotes/loadTableRunner.js";
 import { StartReviewView, type KeepForm, type ObservedTable } from "./View.js";
+import { review } from "../../../i18n/en/review.js";
+import { reviewText, type ReviewText } from "../../../i18n/reviewText.js";
+import { tr } from "../../i18n.js";
+import { words } from "../../words.js";
+import { checkWords } from "../../checkWords.js";
+
+// The screen's Hungarian and German words come in a chunk of their own, before the screen shows.
+await checkWords;
+
+const t = tr.ns(review);
+
+/** A problem to show: a refused recording (its file's name and the reasons, as data), or a message as it came. */
+type Problem = { fileName: string; texts: ReviewText[] } | { message: string };
+const problemWords = (p: Problem) => ("message" in p ? p.message : `${p.fileName}: ${p.texts.map((x) => reviewText(tr, x)).join("\n")}`);
 
 const today = () => new Date().toISOString().slice(0, 10);
 
@@ -38,16 +52,16 @@ export default function StartReview(): JSX.Element {
     return { ...c.value, location: locationFromNote(n) };
   });
   const [busy, setBusy] = createSignal(false);
-  const [problem, setProblem] = createSignal<string | null>(null);
-  const [result, setResult] = createSignal<{ report: ReviewReport; findings: ReviewFindings } | null>(null);
+  const [problem, setProblem] = createSignal<Problem | null>(null);
+  const [result, setResult] = createSignal<{ report: ReviewReport; lines: ReviewText[]; findings: ReviewFindings } | null>(null);
   const [kept, setKept] = createSignal(false);
   const [form, setForm] = createSignal<KeepForm>({ date: today(), rail: "dry", train: "", initials: "" });
 
   const blocked = () => {
-    if (!noteId()) return "Open a location note and choose Start review there.";
-    if (note.loading) return "Reading the note…";
-    if (!note()) return "The note is not in the library any more.";
-    if (!startCase()) return "Set up the train, locomotives and conditions in Start plan first: the review plans that start at this note's location.";
+    if (!noteId()) return t("noNote");
+    if (note.loading) return t("readingNote");
+    if (!note()) return t("noteGone");
+    if (!startCase()) return t("noCase");
     return null;
   };
 
@@ -62,11 +76,11 @@ export default function StartReview(): JSX.Element {
       .text()
       .then((text) => reviewInWorker(c, file.name, text))
       .then((out) => {
-        if (!out.ok) return setProblem(out.message);
+        if (!out.ok) return setProblem({ fileName: out.fileName, texts: out.texts });
         setResult(out);
-        setForm((f) => ({ ...f, rail: c.conditions.rail, train: f.train || `${Math.round(c.train.trailingMassKg / 1000)} t, ${c.train.wagons} wagons` }));
+        setForm((f) => ({ ...f, rail: c.conditions.rail, train: f.train || t("trainDefault", { mass: Math.round(c.train.trailingMassKg / 1000), count: c.train.wagons }) }));
       })
-      .catch((e: unknown) => setProblem(`${file.name}: the review failed (${(e as Error).message || String(e)}).`))
+      .catch((e: unknown) => setProblem({ fileName: file.name, texts: [{ key: "failed", params: { error: (e as Error).message || String(e) } }] }))
       .finally(() => setBusy(false));
   };
 
@@ -80,7 +94,7 @@ export default function StartReview(): JSX.Element {
       location: id,
       date: f.date,
       rail: f.rail,
-      train: f.train.trim() || "train not named",
+      train: f.train.trim() || t("trainNotNamed"),
       ...(f.initials.trim() ? { initials: f.initials.trim() } : {}),
       ...res.findings,
     };
@@ -91,7 +105,7 @@ export default function StartReview(): JSX.Element {
         if (out.ok) {
           setKept(true);
           setVersion((v) => v + 1);
-        } else setProblem(out.message);
+        } else setProblem({ message: out.message });
       })
       .finally(() => setBusy(false));
   };
@@ -111,7 +125,7 @@ export default function StartReview(): JSX.Element {
         const t = (kg: number) => (kg > 0 ? Math.floor(kg / 1000) : null);
         setTable({ working: false, rows: out.rows.map((r) => ({ rail: r.rail, sand: r.sand, modelT: t(r.maxTrailingMassKg), observedT: t(r.maxTrailingMassKg / o.median) })) });
       },
-      (e: unknown) => setTable({ working: false, why: `The load table could not be worked out (${(e as Error).message || String(e)}).` }),
+      (e: unknown) => setTable({ working: false, why: t("tableFailed", { error: (e as Error).message || String(e) }) }),
     );
   };
 
@@ -122,11 +136,17 @@ export default function StartReview(): JSX.Element {
       blocked={blocked()}
       caseText={(() => {
         const c = startCase();
-        return c ? `The start case from Start plan (${Math.round(c.train.trailingMassKg / 1000)} t, ${c.train.wagons} wagons, ${c.conditions.rail} rail${c.conditions.sand ? ", sand" : ""}), placed at this note's location.` : "";
+        return c
+          ? t("caseText", { mass: Math.round(c.train.trailingMassKg / 1000), count: c.train.wagons, rail: words.railInline(c.conditions.rail), sand: c.conditions.sand ? t("caseSand") : "" })
+          : "";
       })()}
       busy={busy()}
-      problem={problem()}
+      problem={(() => {
+        const p = problem();
+        return p ? problemWords(p) : null;
+      })()}
       report={result()?.report ?? null}
+      lines={(result()?.lines ?? []).map((l) => reviewText(tr, l))}
       form={form()}
       kept={kept()}
       reviews={reviews() ?? []}

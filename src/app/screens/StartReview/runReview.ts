@@ -6,13 +6,18 @@
 import { reviewStart, RecordingRejected, type StartReviewResult } from "../../../core/dispatch/index.js";
 import type { StartCase } from "../../../core/train/types.js";
 import type { StartReviewFile } from "../../../profiles/notes.js";
-import { problemText, readRecording, RecordingFileError } from "../../../profiles/recording.js";
-import { reviewReport, type ReviewReport } from "../../../profiles/reviewReport.js";
+import { problemLine, readRecording, RecordingFileError } from "../../../profiles/recording.js";
+import { reviewLines, reviewReport, type ReviewReport } from "../../../profiles/reviewReport.js";
+import type { ReviewText } from "../../../i18n/reviewText.js";
 
 /** The fields of a kept review that come from the review itself. */
 export type ReviewFindings = Pick<StartReviewFile, "massFactor" | "effortFactor" | "separable" | "plannedVerdict" | "replannedVerdict" | "thumbnail">;
 
-export type ReviewOutcome = { ok: true; report: ReviewReport; findings: ReviewFindings } | { ok: false; message: string };
+/**
+ * The review (its report, and what it says and what the reader noticed as data, for the page to render in
+ * the language on screen), or why the recording was refused (as data, after the file's name).
+ */
+export type ReviewOutcome = { ok: true; report: ReviewReport; lines: ReviewText[]; notices: ReviewText[]; findings: ReviewFindings } | { ok: false; fileName: string; texts: ReviewText[] };
 
 /** About forty points of the recorded speed from the moment of start, for the note's thumbnail. */
 export function thumbnail(r: StartReviewResult): StartReviewFile["thumbnail"] {
@@ -29,6 +34,8 @@ export function runReview(c: StartCase, fileName: string, text: string): ReviewO
     return {
       ok: true,
       report: reviewReport(r, read, true),
+      lines: reviewLines(r),
+      notices: read.noticeTexts,
       findings: {
         massFactor: r.massFit.estimates.massFactor!,
         ...(r.effortFit ? { effortFactor: r.effortFit.estimates.effortFactor! } : {}),
@@ -39,8 +46,8 @@ export function runReview(c: StartCase, fileName: string, text: string): ReviewO
       },
     };
   } catch (e) {
-    if (e instanceof RecordingFileError) return { ok: false, message: `${fileName}: ${e.message}` };
-    if (e instanceof RecordingRejected) return { ok: false, message: `${fileName}: ${e.problems.map(problemText).join("\n")}` };
-    return { ok: false, message: `${fileName}: the review failed (${(e as Error).message || String(e)}).` };
+    if (e instanceof RecordingFileError) return { ok: false, fileName, texts: [...e.texts] };
+    if (e instanceof RecordingRejected) return { ok: false, fileName, texts: e.problems.map(problemLine) };
+    return { ok: false, fileName, texts: [{ key: "failed", params: { error: (e as Error).message || String(e) } }] };
   }
 }
