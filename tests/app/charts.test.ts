@@ -7,6 +7,14 @@ import { niceCeil } from "../../src/app/charts/spec.js";
 import { GRAVITY_MPS2 } from "../../src/core/physics/constants.js";
 import { normalQuantile } from "../../src/core/physics/normal.js";
 import { demoCase, fixturePlan } from "./fixtures.js";
+import { Ticks } from "chart.js";
+import { toChartConfig } from "../../src/app/components/Chart.js";
+import { PALETTES } from "../../src/app/charts/palette.js";
+import { setAppLanguage } from "../../src/app/i18n.js";
+import { chartDe } from "../../src/i18n/de/chart.js";
+import { chartHu } from "../../src/i18n/hu/chart.js";
+import { wordsDe } from "../../src/i18n/de/words.js";
+import { formatNumberIn } from "../../src/i18n/numbers.js";
 
 describe("tractive effort against speed", () => {
   const c = demoCase();
@@ -84,5 +92,53 @@ describe("plan charts", () => {
     expect(k.series[0]!.points[0]).toEqual({ x: 1, y: 200 });
     expect(k.series.find((x) => x.id === "working")!.points[0]!.y).toBeCloseTo(850 / 1.2, 9);
     expect(k.series.find((x) => x.id === "limit")!.points[1]).toEqual({ x: 30, y: 850 });
+  });
+});
+
+describe("charts in Hungarian and German", () => {
+  it("name their series and axes in the language on screen", async () => {
+    try {
+      await setAppLanguage("de");
+      const p = fixturePlan();
+      const s = speedNotchChart(p, "metric")!;
+      expect(s.y2!.title).toBe(chartDe.notch);
+      expect(s.x.title).toBe(chartDe.timeFromPower);
+      expect(s.legend.map((l) => l.label)).toEqual([(chartDe.speed as string).replace("{unit}", "km/h"), chartDe.notchRight]);
+      const e = effortChart(demoCase(), "metric", 400_000);
+      expect(e.y.title).toBe((chartDe.effort as string).replace("{unit}", "kN"));
+      // The rail conditions in German, inside the legend's words.
+      expect(e.legend.some((l) => l.label.startsWith(wordsDe.railInlineDry as string))).toBe(true);
+      expect(e.legend.at(-1)!.label).toBe(chartDe.neededLegend);
+      // A safety factor as set (1.25, not rounded), with a decimal comma.
+      expect(couplerChart(p, 850_000, 1.25, "metric")!.series.find((x) => x.id === "working")!.label).toBe((chartDe.allowedShort as string).replace("{factor}", "1,25").replace("{unit}", "kN"));
+      await setAppLanguage("hu");
+      expect(speedNotchChart(p, "metric")!.y2!.title).toBe(chartHu.notch);
+    } finally {
+      await setAppLanguage("en");
+    }
+  });
+
+  it("write their tick numbers as the language does: a decimal comma in hu and de (chart.js's tick formatter with the chart's locale; CLDR through Intl)", () => {
+    const spec = speedNotchChart(fixturePlan(), "metric")!;
+    const ticks = [0, 2.5, 5, 7.5].map((value) => ({ value }));
+    const big = [0, 5000, 10000, 15000].map((value) => ({ value }));
+    const tick = (lang: "en" | "hu" | "de", value: number, all: Array<{ value: number }>) => {
+      const config = toChartConfig(spec, PALETTES.day, lang);
+      const scale = { chart: { options: config.options }, options: { ticks: {} } };
+      return (Ticks.formatters.numeric as (this: unknown, v: number, i: number, t: Array<{ value: number }>) => string).call(scale, value, 1, all);
+    };
+    expect(tick("en", 2.5, ticks)).toBe("2.5");
+    expect(tick("de", 2.5, ticks)).toBe("2,5");
+    expect(tick("hu", 2.5, ticks)).toBe("2,5");
+    // Thousands as CLDR groups them: en 15,000; de 15.000; hu 15 000 (no-break space, from five digits).
+    expect(tick("en", 15000, big)).toBe("15,000");
+    expect(tick("de", 15000, big)).toBe("15.000");
+    expect(tick("hu", 15000, big)).toBe("15\u00a0000");
+    expect(tick("hu", 5000, big)).toBe("5000");
+    // The same as the app writes its own figures.
+    for (const lang of ["en", "hu", "de"] as const) {
+      expect(tick(lang, 2.5, ticks)).toBe(formatNumberIn(lang, 2.5, 1, { grouping: true }));
+      expect(tick(lang, 15000, big)).toBe(formatNumberIn(lang, 15000, 0, { grouping: true }));
+    }
   });
 });

@@ -5,6 +5,13 @@
 import type { PlanResult } from "../../core/planner/types.js";
 import { show, toDisplay, unitSymbol, type UnitSystem } from "../format.js";
 import { maxOf, niceCeil, type ChartSpec, type Point } from "./spec.js";
+import { chart } from "../../i18n/en/chart.js";
+import { tr } from "../i18n.js";
+
+const t = tr.ns(chart);
+
+/** A setting as written (1.25 stays 1.25), in the language on screen. */
+const settingText = (x: number) => tr.num(x, Math.min(3, (String(x).split(".")[1] ?? "").length));
 
 export function couplerChart(r: PlanResult, limitN: number, safetyFactor: number, units: UnitSystem): ChartSpec | null {
   const peaks = r.couplerPeaksN;
@@ -20,16 +27,16 @@ export function couplerChart(r: PlanResult, limitN: number, safetyFactor: number
   const top = niceCeil(Math.max(f(limitN), maxOf(pts.map((p) => p.y))) * 1.1);
   return {
     series: [
-      { id: "peak", label: `Peak tension (${unit})`, points: pts, role: "main", fill: "origin" },
-      { id: "working", label: `Allowed: limit ÷ ${safetyFactor} (${unit})`, points: flat(f(limitN / safetyFactor)), role: "working", dashed: true },
-      { id: "limit", label: `Working limit (${unit})`, points: flat(f(limitN)), role: "limit" },
+      { id: "peak", label: t("peakTension", { unit }), points: pts, role: "main", fill: "origin" },
+      { id: "working", label: t("allowedShort", { factor: settingText(safetyFactor), unit }), points: flat(f(limitN / safetyFactor)), role: "working", dashed: true },
+      { id: "limit", label: t("workingLimit", { unit }), points: flat(f(limitN)), role: "limit" },
     ],
-    x: { title: "Coupling, from the head (1) to the tail", min: 1, max: last },
-    y: { title: `Force (${unit})`, min: 0, max: top },
+    x: { title: t("couplingAxis"), min: 1, max: last },
+    y: { title: t("force", { unit }), min: 0, max: top },
     legend: [
-      { label: "Peak tension in each coupling", role: "main" },
-      { label: `Allowed: ${show("force", limitN / safetyFactor, units)} (limit ÷ safety factor ${safetyFactor}), what the plan keeps to`, role: "working", dashed: true },
-      { label: `Coupler working limit: ${show("force", limitN, units)}`, role: "limit" },
+      { label: t("peakEach"), role: "main" },
+      { label: t("allowedLong", { force: show("force", limitN / safetyFactor, units), factor: settingText(safetyFactor) }), role: "working", dashed: true },
+      { label: t("limitLong", { force: show("force", limitN, units) }), role: "limit" },
     ],
   };
 }

@@ -11,6 +11,11 @@ import type { StartCase } from "../../core/train/types.js";
 import { percent, toDisplay, unitSymbol, type UnitSystem } from "../format.js";
 import { RAIL_MARKER } from "./palette.js";
 import { niceCeil, type ChartSpec, type LegendEntry, type LineSeries, type Point } from "./spec.js";
+import { chart } from "../../i18n/en/chart.js";
+import { tr } from "../i18n.js";
+
+const t = tr.ns(chart);
+import { words } from "../words.js";
 
 /** A plan step on the chart: where its adhesion use was highest (speed, and the effort its notch asks there). */
 export interface StepMark {
@@ -48,8 +53,6 @@ export function totalAdhesionN(c: StartCase, rail: RailCondition, speedMps: numb
   }, 0);
 }
 
-export const RAIL_WORD: Record<RailCondition, string> = { dry: "dry", damp: "damp", wet: "wet", frost: "frost", leaves: "leaves", greasy: "greasy" };
-
 export function effortChart(c: StartCase, units: UnitSystem, requiredN?: number, steps: readonly StepMark[] = []): ChartSpec {
   const vMax = speedRangeMps(c);
   const speeds = Array.from({ length: SAMPLES }, (_, i) => (vMax * i) / (SAMPLES - 1));
@@ -64,10 +67,10 @@ export function effortChart(c: StartCase, units: UnitSystem, requiredN?: number,
     const low: Point[] = speeds.map((v) => ({ x: x(v), y: f(totalAdhesionN(c, rail, v, p)) }));
     const high: Point[] = speeds.map((v) => ({ x: x(v), y: f(totalAdhesionN(c, rail, v, 0.5)) }));
     const marks = high.map((_, i) => i).filter((i) => (i + k) % MARK_EVERY === 0);
-    series.push({ id: `band-${rail}-low`, label: `${RAIL_WORD[rail]}: slip risk ${percent(p, 0)}`, points: low, role: "band", tone: k, tones: conditions.length, strong, rail });
+    series.push({ id: `band-${rail}-low`, label: t("bandLow", { rail: words.railInline(rail), risk: percent(p, 0) }), points: low, role: "band", tone: k, tones: conditions.length, strong, rail });
     series.push({
       id: `band-${rail}-high`,
-      label: `${RAIL_WORD[rail]}: slip risk 50 %`,
+      label: t("bandHigh", { rail: words.railInline(rail) }),
       points: high,
       role: "band",
       tone: k,
@@ -82,7 +85,7 @@ export function effortChart(c: StartCase, units: UnitSystem, requiredN?: number,
   for (let n = 1; n <= notches; n++) {
     series.push({
       id: `notch-${n}`,
-      label: `Notch ${n}`,
+      label: t("notchN", { n }),
       points: speeds.map((v) => ({ x: x(v), y: f(totalNotchEffortN(c, n, v)) })),
       role: "notch",
       tone: n - 1,
@@ -92,18 +95,18 @@ export function effortChart(c: StartCase, units: UnitSystem, requiredN?: number,
   }
   for (const st of steps) {
     if (!(st.effortN > 0) || st.speedMps > vMax) continue;
-    series.push({ id: `step-${st.number}`, label: `Step ${st.number}`, points: [{ x: x(st.speedMps), y: f(st.effortN) }], role: "step", marker: "circle", noLine: true, endLabel: `S${st.number}` });
+    series.push({ id: `step-${st.number}`, label: t("stepN", { n: st.number }), points: [{ x: x(st.speedMps), y: f(st.effortN) }], role: "step", marker: "circle", noLine: true, endLabel: t("stepMark", { n: st.number }) });
   }
   const fullAtRest = totalNotchEffortN(c, notches, 0);
   if (requiredN !== undefined && Number.isFinite(requiredN) && requiredN > 0) {
-    series.push({ id: "need", label: "Needed to start", points: [{ x: 0, y: f(requiredN) }, { x: x(vMax), y: f(requiredN) }], role: "need", dashed: true });
+    series.push({ id: "need", label: t("needed"), points: [{ x: 0, y: f(requiredN) }, { x: x(vMax), y: f(requiredN) }], role: "need", dashed: true });
   }
   const top = niceCeil(f(Math.max(fullAtRest, requiredN ?? 0) * 1.2));
   const unit = unitSymbol("force", units);
   const legend: LegendEntry[] = [
-    { label: `Notches 1–${notches}, numbered at the right`, role: "notch", tone: notches - 1, tones: notches },
+    { label: t("notchesLegend", { n: notches }), role: "notch", tone: notches - 1, tones: notches },
     ...conditions.map((rail, k) => ({
-      label: `${RAIL_WORD[rail]}${c.conditions.sand ? " with sand" : ""}${rail === c.conditions.rail ? " (chosen)" : ""}`,
+      label: t("band", { rail: words.railInline(rail), sand: c.conditions.sand ? t("withSand") : "", chosen: rail === c.conditions.rail ? t("chosen") : "" }),
       role: "band" as const,
       tone: k,
       tones: conditions.length,
@@ -112,13 +115,13 @@ export function effortChart(c: StartCase, units: UnitSystem, requiredN?: number,
     })),
   ];
   if (steps.some((st) => st.effortN > 0 && st.speedMps <= vMax)) {
-    legend.push({ label: "S1, S2…: each plan step where it uses the most adhesion (its card's figure)", role: "step", marker: "circle" });
+    legend.push({ label: t("stepsLegend"), role: "step", marker: "circle" });
   }
-  if (requiredN !== undefined && requiredN > 0) legend.push({ label: "Tractive effort needed to start", role: "need", dashed: true });
+  if (requiredN !== undefined && requiredN > 0) legend.push({ label: t("neededLegend"), role: "need", dashed: true });
   return {
     series,
-    x: { title: `Speed (${unitSymbol("speed", units)})`, min: 0, max: x(vMax) },
-    y: { title: `Tractive effort (${unit})`, min: 0, max: top },
+    x: { title: t("speed", { unit: unitSymbol("speed", units) }), min: 0, max: x(vMax) },
+    y: { title: t("effort", { unit }), min: 0, max: top },
     legend,
   };
 }

@@ -2,6 +2,10 @@
 import type { PlanResult } from "../../core/planner/types.js";
 import { toDisplay, unitSymbol, type UnitSystem } from "../format.js";
 import { maxOf, niceCeil, type ChartSpec, type Point } from "./spec.js";
+import { chart } from "../../i18n/en/chart.js";
+import { tr } from "../i18n.js";
+
+const t = tr.ns(chart);
 
 export function speedNotchChart(r: PlanResult, units: UnitSystem): ChartSpec | null {
   const s = r.series;
@@ -17,15 +21,15 @@ export function speedNotchChart(r: PlanResult, units: UnitSystem): ChartSpec | n
   const topNotch = Math.max(1, maxOf(s.notch));
   return {
     series: [
-      { id: "speed", label: `Speed (${unitSymbol("speed", units)})`, points: speed, role: "main", axis: "y" },
-      { id: "notch", label: "Notch", points: notch, role: "second", axis: "y2", stepped: true },
+      { id: "speed", label: t("speed", { unit: unitSymbol("speed", units) }), points: speed, role: "main", axis: "y" },
+      { id: "notch", label: t("notch"), points: notch, role: "second", axis: "y2", stepped: true },
     ],
-    x: { title: "Time from taking power (s)", min: 0, max: Math.ceil(s.timeS[n - 1]! / 10) * 10 },
-    y: { title: `Speed (${unitSymbol("speed", units)})`, min: 0, max: niceCeil(Math.max(1, maxOf(speed.map((p) => p.y)) * 1.1)) },
-    y2: { title: "Notch", min: 0, max: topNotch, stepSize: 1 },
+    x: { title: t("timeFromPower"), min: 0, max: Math.ceil(s.timeS[n - 1]! / 10) * 10 },
+    y: { title: t("speed", { unit: unitSymbol("speed", units) }), min: 0, max: niceCeil(Math.max(1, maxOf(speed.map((p) => p.y)) * 1.1)) },
+    y2: { title: t("notch"), min: 0, max: topNotch, stepSize: 1 },
     legend: [
-      { label: `Speed (${unitSymbol("speed", units)})`, role: "main" },
-      { label: "Notch (right scale)", role: "second" },
+      { label: t("speed", { unit: unitSymbol("speed", units) }), role: "main" },
+      { label: t("notchRight"), role: "second" },
     ],
   };
 }

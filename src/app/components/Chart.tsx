@@ -13,13 +13,18 @@ import { colourOf, withAlpha, type ChartPalette } from "../charts/palette.js";
 import type { ChartSpec, LegendEntry } from "../charts/spec.js";
 import { shell } from "../../i18n/en/shell.js";
 import { tr } from "../i18n.js";
+import { LOCALE_TAGS, type Lang } from "../../i18n/language.js";
 
 const t = tr.ns(shell);
 
 type LineConfig = ChartConfiguration<"line", Array<{ x: number; y: number }>>;
 
-/** The chart.js configuration for a spec: plain data (it crosses to the chart worker), no animation, no pointer events. */
-export function toChartConfig(spec: ChartSpec, p: ChartPalette): LineConfig {
+/**
+ * The chart.js configuration for a spec: plain data (it crosses to the chart worker), no animation, no
+ * pointer events. The tick numbers are written in `lang` (chart.js formats them with Intl for `locale`:
+ * a decimal comma in Hungarian and German), in the chart worker, after the verdict is on screen.
+ */
+export function toChartConfig(spec: ChartSpec, p: ChartPalette, lang: Lang = tr.lang): LineConfig {
   const datasets: Array<ChartDataset<"line", Array<{ x: number; y: number }>>> = spec.series.map((s) => {
     const colour = colourOf(p, s.role, s.tone, s.tones, s.rail);
     const band = s.role === "band";
@@ -78,6 +83,7 @@ export function toChartConfig(spec: ChartSpec, p: ChartPalette): LineConfig {
     data: { datasets },
     options: {
       animation: false,
+      locale: LOCALE_TAGS[lang],
       responsive: true,
       maintainAspectRatio: false,
       parsing: false,
@@ -191,7 +197,7 @@ function ChartCanvas(props: { spec: ChartSpec; palette: ChartPalette; height: nu
   const [wanted, setWanted] = createSignal(typeof IntersectionObserver === "undefined");
   const [drawn, setDrawn] = createSignal(false);
   const [unsupported, setUnsupported] = createSignal(false);
-  const keyOf = () => `${props.palette.text}|${JSON.stringify(props.spec)}`;
+  const keyOf = () => `${props.palette.text}|${tr.lang}|${JSON.stringify(props.spec)}`;
 
   onMount(() => {
     if (typeof IntersectionObserver !== "undefined") {
@@ -233,7 +239,7 @@ function ChartCanvas(props: { spec: ChartSpec; palette: ChartPalette; height: nu
 
   createEffect(
     on(
-      () => [props.spec, props.palette] as const,
+      () => [props.spec, props.palette, tr.lang] as const,
       () => {
         if (!drawer) return;
         const key = keyOf();

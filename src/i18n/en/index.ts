@@ -1,6 +1,7 @@
 /** Every English namespace: the one list the catalog checks walk (tests/i18n) — add a new namespace here. */
 import { assist } from "./assist.js";
 import { card } from "./card.js";
+import { chart } from "./chart.js";
 import { cautions } from "./cautions.js";
 import { cli } from "./cli.js";
 import { departures } from "./departures.js";
@@ -21,4 +22,4 @@ import { guidance } from "./guidance.js";
 import { assistNotes } from "./assistNotes.js";
 import { advice } from "./advice.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart] as const;
