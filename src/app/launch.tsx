@@ -21,6 +21,7 @@ import { createAppState } from "./createAppState.js";
 import { decodeExact, decodePlan } from "./planCodec.js";
 import type { StartCase } from "../core/train/types.js";
 import { preloadScreens, SCREENS } from "./screens/registry.js";
+import { preloadWagonGroups } from "./screens/StartPlan/TrainSection.js";
 import { registerSW } from "./sw/register.js";
 import { resolveLanguage, setAppLanguage } from "./i18n.js";
 
@@ -65,7 +66,7 @@ export async function launch(firstWorker: Worker): Promise<void> {
           if (!fromBuild) performance.mark("taut:first-live-plan", { detail: { workerMs } });
           // After this frame is painted.
           setTimeout(verdictPainted, 0);
-          if (!fromBuild) whenIdle(() => void preloadScreens(SCREENS));
+          if (!fromBuild) whenIdle(() => void Promise.allSettled([preloadScreens(SCREENS), preloadWagonGroups()]));
         }),
     }),
   );

@@ -3,7 +3,7 @@
  * the train's wagon groups through the case file and storage; step cards show every group's notch; Cab steps
  * can be shown for the head driver or for a helper's driver.
  */
-import { fireEvent, render, screen } from "@solidjs/testing-library";
+import { fireEvent, render, screen, waitFor } from "@solidjs/testing-library";
 import { describe, expect, it } from "vitest";
 import { CabStepsView } from "../../src/app/screens/CabSteps/View.js";
 import { ResultView } from "../../src/app/screens/StartPlan/ResultView.js";
@@ -124,13 +124,15 @@ describe("group notches in the steps", () => {
 });
 
 describe("entering wagon groups in the train section", () => {
-  it("turns the train into groups, takes a second group, and the case carries them (then removing both returns to one mass)", () => {
+  it("turns the train into groups, takes a second group, and the case carries them (then removing both returns to one mass)", async () => {
     const { harness } = renderWithApp(() => <StartPlan />);
     const before = harness.state.draft.draft.train;
     fireEvent.click(document.querySelector('[data-action="add-wagon-group"]')!);
     expect(harness.state.draft.draft.train.groups).toEqual([{ wagons: before.wagons, wagonType: before.wagonType || "bogie-hopper-loaded", mass_t: before.trailingMass_t }]);
+    // The wagon-groups form is a chunk of its own: wait for it before its second group.
+    await waitFor(() => expect(document.querySelector('.wagon-groups [data-action="add-wagon-group"]')).not.toBeNull());
     fireEvent.click(document.querySelector('[data-action="add-wagon-group"]')!);
-    const mass = screen.getAllByLabelText(/^Mass of the group/, { selector: "input" })[1] as HTMLInputElement;
+    const mass = (await screen.findAllByLabelText(/^Mass of the group/, { selector: "input" }))[1] as HTMLInputElement;
     fireEvent.input(mass, { target: { value: "300" } });
     const json = harness.state.draft.caseJson() as { train: { groups: Array<{ wagons: number; mass_t: number }> } };
     expect(json.train.groups).toHaveLength(2);

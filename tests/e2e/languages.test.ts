@@ -32,6 +32,10 @@ import { notes } from "../../src/i18n/en/notes.js";
 import { pseudoText } from "../../src/i18n/pseudo.js";
 import { fileURLToPath } from "node:url";
 import { trainHu } from "../../src/i18n/hu/train.js";
+import { groupsDe } from "../../src/i18n/de/groups.js";
+import { groupsHu } from "../../src/i18n/hu/groups.js";
+import { cabDe } from "../../src/i18n/de/cab.js";
+import { cabHu } from "../../src/i18n/hu/cab.js";
 
 let context: BrowserContext;
 let page: Page;
@@ -99,10 +103,11 @@ async function showInputs(): Promise<void> {
   await page.locator("#pane-inputs").waitFor({ state: "visible" });
 }
 
-/** A screenshot of the whole of Start plan's inputs pane (locomotives, train, wagon groups), then back to the plan. */
+/** Screenshots of Start plan's locomotives and train sections (with the wagon groups), then back to the plan. */
 async function inputsShot(file: string): Promise<void> {
   await showInputs();
-  await page.locator("#pane-inputs").screenshot({ path: join(SHOTS, file) });
+  await page.locator('#pane-inputs .panel:has([data-field="locomotives[0].profile"])').screenshot({ path: join(SHOTS, file.replace("inputs", "locomotives")) });
+  await page.locator('#pane-inputs .panel:has([data-field="train.coupling"])').screenshot({ path: join(SHOTS, file.replace("inputs", "train")) });
   if (await page.locator("#tab-plan").isVisible()) await page.locator("#tab-plan").click();
 }
 
@@ -176,7 +181,7 @@ describe("Taut in three languages", () => {
           }
           const tw = lang === "hu" ? trainHu : trainDe;
           if (id === "start-plan") {
-            expect(await page.locator('[data-field="train.groups"] > .field-label').textContent()).toBe(tw.wagonGroups);
+            expect(await page.locator('[data-field="train.groups"] > .field-label').textContent()).toBe((lang === "hu" ? groupsHu : groupsDe).wagonGroups);
             expect(await page.locator('[data-field="locomotives[1].control"] [role=radio]').nth(2).textContent()).toContain(tw.helper);
             expect(await page.locator('[data-field="locomotives[1].position"] [role=radio]').nth(2).textContent()).toContain(tw.rear);
           }
@@ -185,7 +190,7 @@ describe("Taut in three languages", () => {
             expect(await page.locator("#margins-h").textContent()).toBe(ta.margins);
             expect(await page.locator('[data-field="added-unit"] .field-label').first().textContent()).toBe(ta.unitToAdd);
           }
-          if (id === "cab-steps") expect(await page.locator(".cab-driver button").first().textContent()).toBe(tw.headDriver);
+          if (id === "cab-steps") expect(await page.locator(".cab-driver button").first().textContent()).toBe((lang === "hu" ? cabHu : cabDe).headDriver);
           if (id === "departures") expect(await page.locator("#load-h").textContent()).toBe((lang === "hu" ? departuresHu : departuresDe).loadHeading);
           if (id === "location-notes") expect(await page.locator(".notes-library .notes-row-actions button").first().textContent()).toBe((lang === "hu" ? notesHu : notesDe).newNote);
           await page.screenshot({ path: join(SHOTS, `lang-${lang}-${id}-${name2}.png`) });

@@ -14,6 +14,8 @@ import { guidanceDe } from "./guidance.js";
 import { assistNotesDe } from "./assistNotes.js";
 import { adviceDe } from "./advice.js";
 import { trainDe } from "./train.js";
+import { groupsDe } from "./groups.js";
+import { cabDe } from "./cab.js";
 import { chartDe } from "./chart.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe, train: trainDe, chart: chartDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe, train: trainDe, chart: chartDe, groups: groupsDe, cab: cabDe };

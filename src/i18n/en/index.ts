@@ -16,10 +16,12 @@ import { settings } from "./settings.js";
 import { shell } from "./shell.js";
 import { steps } from "./steps.js";
 import { train } from "./train.js";
+import { groups } from "./groups.js";
+import { cab } from "./cab.js";
 import { words } from "./words.js";
 import { reasons } from "./reasons.js";
 import { guidance } from "./guidance.js";
 import { assistNotes } from "./assistNotes.js";
 import { advice } from "./advice.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab] as const;

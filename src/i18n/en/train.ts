@@ -1,4 +1,4 @@
-/** Start plan's locomotives and train sections (and the wagon groups of a mixed train); Cab steps' choice of driver. */
+/** Start plan's locomotives and train sections (each locomotive group's control; a helper's line on the step cards). */
 import { namespace } from "../messages.js";
 
 export const train = namespace("train", {
@@ -38,15 +38,5 @@ export const train = namespace("train", {
   fromTrack: "From the track",
   bunched: "Bunched",
   stretched: "Stretched",
-  wagonGroups: "Wagon groups, from the head",
-  groupMass: "Mass of the group",
-  addWagonGroup: "Add a wagon group",
-  totals: { one: "In all: {count} wagon, {mass}", other: "In all: {count} wagons, {mass}" },
-  totalsLength: ", {length} long",
-  totalsNote: ". The largest-mass figures scale every group's load above tare in proportion.",
-  // Cab steps, with a helper's driver.
-  stepsFor: "Steps for",
-  headDriver: "Head driver",
-  groupDriver: "{name} driver",
-  notchOfGroup: "Notch, {name}",
+  loadingGroups: "Loading the wagon groups…",
 });

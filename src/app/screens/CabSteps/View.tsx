@@ -14,7 +14,7 @@ import type { WakeLockState } from "../../state/createWakeLock.js";
 import { advanceLead, advanceOthers, groupNotchesText, helperLine, notchText, phaseLine, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
 import { shell } from "../../../i18n/en/shell.js";
 import { steps } from "../../../i18n/en/steps.js";
-import { train } from "../../../i18n/en/train.js";
+import { cab } from "../../../i18n/en/cab.js";
 import { tr } from "../../i18n.js";
 import { SlipCard } from "./SlipCard.js";
 
@@ -40,7 +40,7 @@ export interface CabStepsViewProps {
 }
 
 const t = tr.ns(steps);
-const tt = tr.ns(train);
+const tt = tr.ns(cab);
 
 const WAKE_TEXT: Record<WakeLockState, () => string> = {
   on: () => t("wakeOn"),

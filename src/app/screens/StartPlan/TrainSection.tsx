@@ -2,7 +2,7 @@
  * Start plan inputs, train: trailing mass, wagons, coupling, slack, bearings and the slack at the start — or,
  * for a mixed train, its wagon groups from the head (wagons, type and mass of each).
  */
-import { For, Index, Show, type JSX } from "solid-js";
+import { For, lazy, Show, Suspense, type JSX } from "solid-js";
 import { Icon } from "../../components/Icon.js";
 import type { Library } from "../../../profiles/library.js";
 import { QuantityField } from "../../components/QuantityField.js";
@@ -14,6 +14,14 @@ import { train } from "../../../i18n/en/train.js";
 import { tr } from "../../i18n.js";
 
 const t = tr.ns(train);
+
+/**
+ * The wagon-groups form of a mixed train, a chunk of its own: the first plan's screen shows one trailing
+ * mass, so the form loads when a train is entered as groups (or when the page is idle after the first plan,
+ * `preloadWagonGroups`), keeping it out of the JavaScript loaded before the first verdict.
+ */
+const WagonGroups = lazy(() => import("./WagonGroups.js"));
+export const preloadWagonGroups = (): Promise<unknown> => WagonGroups.preload();
 
 export interface TrainSectionProps extends InputSectionProps {
   library: Library;
@@ -83,7 +91,9 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
           </>
         }
       >
-        <WagonGroups {...props} />
+        <Suspense fallback={<p class="placeholder-text">{t("loadingGroups")}</p>}>
+          <WagonGroups {...props} />
+        </Suspense>
       </Show>
       <SegmentedButtons
         name="train.coupling"
@@ -142,82 +152,6 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
         ]}
       />
     </section>
-  );
-}
-
-/** A mixed train: its wagon groups from the head, each with its wagons, type and total mass; the totals below. */
-function WagonGroups(props: TrainSectionProps): JSX.Element {
-  const s = props.store;
-  const d = s.draft;
-  const issue = issueFinder(s);
-  const groups = () => d.train.groups ?? [];
-  const totals = () => {
-    let wagons = 0;
-    let mass = 0;
-    let length = 0;
-    for (const g of groups()) {
-      wagons += g.wagons;
-      mass += g.mass_t;
-      length += g.wagons * (props.library.wagons.get(g.wagonType)?.lengthM ?? Number.NaN);
-    }
-    return { wagons, mass, length };
-  };
-  return (
-    <div class="wagon-groups" data-field="train.groups">
-      <p class="field-label">{t("wagonGroups")}</p>
-      <Index each={groups()}>
-        {(g, k) => (
-          <div class="loco-group" data-group={k}>
-            <div class="row">
-              <QuantityField
-                name={`train.groups[${k}].wagons`}
-                label={t("wagons")}
-                value={g().wagons}
-                onValue={(v) => s.set("train", "groups", k, "wagons", v)}
-                units={props.units}
-                integer
-                step={1}
-                min={1}
-                max={400}
-                issue={issue(`train.groups[${k}].wagons`)}
-              />
-              <QuantityField
-                name={`train.groups[${k}].mass_t`}
-                label={t("groupMass")}
-                measure="mass"
-                fileUnit="t"
-                value={g().mass_t}
-                onValue={(v) => s.set("train", "groups", k, "mass_t", v)}
-                units={props.units}
-                step={50}
-                min={0}
-                issue={issue(`train.groups[${k}].mass_t`)}
-                hint={<>{g().wagons >= 1 && g().mass_t > 0 ? t("perWagon", { value: show("mass", (g().mass_t * 1000) / g().wagons, props.units) }) : ""}</>}
-              />
-            </div>
-            <div class="field" data-field={`train.groups[${k}].wagonType`}>
-              <label class="field-label" for={`group-type-${k}`}>
-                {t("wagonType")}
-              </label>
-              <select id={`group-type-${k}`} class="select" value={g().wagonType} onChange={(e) => s.set("train", "groups", k, "wagonType", e.currentTarget.value)}>
-                <For each={[...props.library.wagons.values()]}>{(w) => <option value={w.id}>{w.label}</option>}</For>
-              </select>
-            </div>
-            <button type="button" class="button subtle" onClick={() => s.removeWagonGroup(k)}>
-              <Icon name="remove" /> {t("removeGroup")}
-            </button>
-          </div>
-        )}
-      </Index>
-      <button type="button" class="button" data-action="add-wagon-group" onClick={() => s.addWagonGroup()}>
-        <Icon name="add" /> {t("addWagonGroup")}
-      </button>
-      <p class="hint" data-testid="group-totals">
-        {t("totals", { count: totals().wagons, mass: show("mass", totals().mass * 1000, props.units) })}
-        {Number.isFinite(totals().length) ? t("totalsLength", { length: show("distance", totals().length, props.units, 0) }) : ""}
-        {t("totalsNote")}
-      </p>
-    </div>
   );
 }
 
