@@ -130,9 +130,9 @@ describe("entering wagon groups in the train section", () => {
     fireEvent.click(document.querySelector('[data-action="add-wagon-group"]')!);
     expect(harness.state.draft.draft.train.groups).toEqual([{ wagons: before.wagons, wagonType: before.wagonType || "bogie-hopper-loaded", mass_t: before.trailingMass_t }]);
     // The wagon-groups form is a chunk of its own: wait for it before its second group.
-    await waitFor(() => expect(document.querySelector('.wagon-groups [data-action="add-wagon-group"]')).not.toBeNull());
+    await waitFor(() => expect(document.querySelector('.wagon-groups [data-action="add-wagon-group"]')).not.toBeNull(), { timeout: 20_000 });
     fireEvent.click(document.querySelector('[data-action="add-wagon-group"]')!);
-    const mass = (await screen.findAllByLabelText(/^Mass of the group/, { selector: "input" }))[1] as HTMLInputElement;
+    const mass = (await screen.findAllByLabelText(/^Mass of the group/, { selector: "input" }, { timeout: 20_000 }))[1] as HTMLInputElement;
     fireEvent.input(mass, { target: { value: "300" } });
     const json = harness.state.draft.caseJson() as { train: { groups: Array<{ wagons: number; mass_t: number }> } };
     expect(json.train.groups).toHaveLength(2);
@@ -142,5 +142,5 @@ describe("entering wagon groups in the train section", () => {
     for (let k = 0; k < 2; k++) fireEvent.click(screen.getAllByRole("button", { name: /Remove this group/ }).filter((b) => b.closest(".wagon-groups"))[0]!);
     expect(harness.state.draft.draft.train.groups).toBeUndefined();
     expect(harness.state.draft.draft.train.trailingMass_t).toBe(300);
-  });
+  }, 60_000);
 });
