@@ -14,23 +14,7 @@ import { searchAssistance } from "../../src/core/dispatch/assistance.js";
 import { withEvaluationMemo } from "../../src/core/planner/evaluationMemo.js";
 import { CHECK_ASSISTANCE_BUDGET, CHECK_DIVIDE_BUDGET, runJob, type CheckOutcome, type MassOutcome } from "../../src/cli/batch/jobs.js";
 import { assistanceReport } from "../../src/profiles/assistanceReport.js";
-import { builtinLibrary } from "../../src/profiles/builtin.js";
-import { parseStartCase } from "../../src/profiles/parse.js";
-import { allDifferentDepartures } from "../bench/departures.js";
-
-const lib = builtinLibrary();
-
-/** The first `n` seeded departures of at most `maxWagons` wagons, as start cases. */
-function smallDepartures(n: number, maxWagons: number): StartCase[] {
-  const out: StartCase[] = [];
-  for (const d of allDifferentDepartures(200, 20261202)) {
-    const r = parseStartCase(d, lib);
-    if (!r.ok) throw new Error(`generated departure ${String(d.id)} does not parse`);
-    if (r.value.train.wagons <= maxWagons) out.push(r.value);
-    if (out.length >= n) break;
-  }
-  return out;
-}
+import { seededDepartures } from "../tools/departures.js";
 
 /** The reference: a plain search over the full decision's verdict, to 0.25 %. */
 function referenceMassKg(c: StartCase, holds: (v: ReturnType<typeof judge>["verdict"]) => boolean): number {
@@ -44,7 +28,7 @@ function expectWithinOnePercent(fast: number, reference: number, what: string): 
 }
 
 describe("fast mass search against the full search (seeded departures)", () => {
-  const cases = smallDepartures(5, 20);
+  const cases = seededDepartures(5, 20);
 
   it("draws departures with every verdict", () => {
     expect(new Set(cases.map((c) => judge(c).verdict)).size).toBe(3);
@@ -74,7 +58,7 @@ describe("fast mass search against the full search (seeded departures)", () => {
 
 describe("plans shared within one piece of work change no answer", () => {
   it("the assistance search finds the same options and rejections with and without the memo", () => {
-    const c = smallDepartures(12, 20).find((x) => judge(x).verdict !== "starts");
+    const c = seededDepartures(12, 20).find((x) => judge(x).verdict !== "starts");
     expect(c, "a small departure that does not start").toBeDefined();
     const opts = { budget: 12, divideBudget: 6, maxFullPlans: 1 };
     const plain = searchAssistance(c!, opts);
@@ -93,7 +77,7 @@ describe("the departures check's assistance against the full search (seeded depa
   // The check plans its option and its divided train without the verifying re-run and the sensitivity table
   // it never reports, and shares plans with the mass search: the option it reports must be the one the full
   // search (every plan complete, nothing shared) puts first, with the same figures, and the same divided train.
-  const cases = smallDepartures(14, 20)
+  const cases = seededDepartures(14, 20)
     .filter((c) => judge(c).verdict !== "starts")
     .slice(0, 3);
 

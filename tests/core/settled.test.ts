@@ -20,24 +20,8 @@ import { continueRun, sequenceControls, simulate } from "../../src/core/dynamics
 import { Run } from "../../src/core/dynamics/runner.js";
 import { modelFromCase } from "../../src/core/train/trainModel.js";
 import { GRAVITY_MPS2 } from "../../src/core/physics/constants.js";
-import { builtinLibrary } from "../../src/profiles/builtin.js";
-import { parseStartCase } from "../../src/profiles/parse.js";
-import { allDifferentDepartures } from "../bench/departures.js";
+import { seededDepartures } from "../tools/departures.js";
 import { longTrainCase } from "../bench/dynamics.js";
-
-const lib = builtinLibrary();
-
-/** The first `n` seeded departures of at most `maxWagons` wagons, as start cases. */
-function departures(n: number, maxWagons: number): StartCase[] {
-  const out: StartCase[] = [];
-  for (const d of allDifferentDepartures(200, 20261202)) {
-    const r = parseStartCase(d, lib);
-    if (!r.ok) throw new Error(`generated departure ${String(d.id)} does not parse`);
-    if (r.value.train.wagons <= maxWagons) out.push(r.value);
-    if (out.length >= n) break;
-  }
-  return out;
-}
 
 const rel = (x: number, ref: number): number => (x === ref ? 0 : Math.abs(x - ref) / Math.max(Math.abs(ref), 1e-9));
 
@@ -55,7 +39,7 @@ afterEach(() => setRunAsOneWhenSettled(true));
 describe("the settled train as one mass agrees with the full chain", () => {
   it("on seeded departures: verdicts, margins, time and distance to target, coupler peaks", () => {
     let engaged = 0;
-    for (const c of departures(8, 70)) {
+    for (const c of seededDepartures(8, 70)) {
       const full = decide(c, false);
       const one = decide(c, true);
       const id = `${c.train.wagons} wagons, ${c.conditions.rail}`;
