@@ -35,7 +35,7 @@
  */
 import { MAX_MARGIN, motorEffortN, needPath, pathMargin, railEffortN, rigidResistanceN, unitMuAt, type NeedPath, type PathMargin } from "./need.js";
 import { HOLD_RESERVE, marginalBound, plannerContext, type PlannerContext } from "./context.js";
-import { ACCELERATE_MAX_S, type SearchOptions, type SearchResult } from "./search.js";
+import { ACCELERATE_MAX_S, type PlanSoFar, type SearchOptions, type SearchResult } from "./search.js";
 import { memoSearchPlan } from "./evaluationMemo.js";
 import { POWER_RESERVE } from "./staticCheck.js";
 import { WHEEL_CLIMB_ALLOWANCE, WHEEL_CLIMB_MARGIN, nadalLimit } from "../physics/wheelClimb.js";
@@ -226,8 +226,42 @@ export interface Decision {
 /** How far `judge` needs to go: only whether it starts, whether it is at least marginal, or everything. */
 export type JudgeDepth = "starts" | "marginal" | "full";
 
-export interface JudgeOptions extends SearchOptions {
+export interface JudgeOptions extends Omit<SearchOptions, "stopWhenFailed"> {
   depth?: JudgeDepth;
+  /**
+   * Verdict only: each plan stops as soon as it has failed — at depth "starts" a limit not within, at depth
+   * "marginal" a limit over its band — instead of running to the target (`failedSoFar`). The verdict is the
+   * full plans' exactly; the limits' figures of a plan that stopped are those at the stop (a failing limit's
+   * margin is then no smaller than the full plan's, and still below 1). Ignored at depth "full".
+   */
+  stopWhenFailed?: boolean;
+}
+
+/** How a verdict-only plan fails: a limit not within (for "starts") or over its band (for "at least marginal"). */
+export type FailLevel = "within" | "over";
+
+/**
+ * Whether the plan made so far has already failed at `level`, whatever the rest of it does: the coupler peaks
+ * and the wheel-climb L/V only grow along a plan; the travel to the stretch is final once the last vehicle
+ * moves, and a power start's travel to the running notch once the build is over. (The time to the target is
+ * settled only at the end, so it never stops a plan early.)
+ */
+export function failedSoFar(ctx: PlannerContext, level: FailLevel): (p: PlanSoFar) => boolean {
+  const fails = (l: LimitCheck) => (level === "within" ? l.level !== "within" : l.level === "over");
+  return (p) => {
+    const partial = { branch: p.branch, startKind: p.startKind, buildEndTravelM: p.buildEndTravelM } as SearchResult;
+    for (const l of dynamicLimits(ctx, partial, false)) {
+      // The distance limit's own figure waits for the build (power start); its band, the stretch, is final already.
+      if (l.name === "distance" && level === "within" && p.startKind === "power" && !p.buildDone) continue;
+      if (fails(l)) return true;
+    }
+    return false;
+  };
+}
+
+/** The search options of one plan of `judge`: stop at `level` when the evaluation is verdict-only. */
+function planOptions(ctx: PlannerContext, base: SearchOptions, level: FailLevel | null): SearchOptions {
+  return level === null ? base : { ...base, stopWhenFailed: { key: level, failed: failedSoFar(ctx, level) } };
 }
 
 /** The quasi-static part of an evaluation on the rail at quantile `q` (its band at `boundQ`). */
@@ -262,31 +296,35 @@ export function judge(c: StartCase, opts: JudgeOptions = {}): Decision {
   const thrQ = c.settings.slipRiskThreshold;
   const boundQ = marginalBound(c.settings);
   const search: SearchOptions = { ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}), ...(opts.onProgress ? { onProgress: opts.onProgress } : {}) };
+  // Verdict only: at depth "starts" a plan fails once a limit is not within; at "marginal" once one is over
+  // its band (the threshold's plan then can neither start nor be the marginal plan, so the verdict is kept).
+  const level: FailLevel | null = !opts.stopWhenFailed || depth === "full" ? null : depth === "starts" ? "within" : "over";
   const pre = quasiStatic(c, thrQ, boundQ);
   const qsOver = !noneOver(pre.qs.limits);
   if (qsOver && depth !== "full") return decision("needs-assistance", pre, pre, null);
   if (depth === "starts" && !allWithin(pre.qs.limits)) return decision("needs-assistance", pre, pre, null);
-  const thr = withPlan(pre, search);
+  const thr = withPlan(pre, planOptions(pre.ctx, search, level));
   if (qsOver) return decision("needs-assistance", thr, thr, null);
   if (allWithin(thr.limits)) return decision("starts", thr, thr, null);
   if (depth === "starts") return decision("needs-assistance", thr, thr, null);
   // Marginal: a plan on the rail at the marginal bound keeps every limit within its band, or the threshold's
   // does. The bound's plan is shown when it works, so that every marginal plan assumes the same rail (and a
   // heavier train's is never the quicker for assuming a better one).
-  const bound = withPlan(quasiStatic(c, boundQ, boundQ), search);
+  const boundPre = quasiStatic(c, boundQ, boundQ);
+  const bound = withPlan(boundPre, planOptions(boundPre.ctx, search, level));
   if (noneOver(bound.limits) && bound.search!.targetReachedS !== null) return decision("marginal", thr, bound, bound);
   if (noneOver(thr.limits) && thr.search!.targetReachedS !== null) return decision("marginal", thr, thr, bound);
   return decision("needs-assistance", thr, thr, bound);
 }
 
-/** Exactly `judge(c).verdict === "starts"`, with no more work than that needs. */
-export function startsAt(c: StartCase, shouldStop?: () => boolean): boolean {
-  return judge(c, { depth: "starts", ...(shouldStop ? { shouldStop } : {}) }).verdict === "starts";
+/** Exactly `judge(c).verdict === "starts"`, with no more work than that needs (a plan stops once it fails). */
+export function startsAt(c: StartCase, shouldStop?: () => boolean, opts: { stopWhenFailed?: boolean } = {}): boolean {
+  return judge(c, { depth: "starts", stopWhenFailed: opts.stopWhenFailed ?? true, ...(shouldStop ? { shouldStop } : {}) }).verdict === "starts";
 }
 
-/** Exactly `judge(c).verdict !== "needs-assistance"`, with no more work than that needs. */
-export function goesAt(c: StartCase, shouldStop?: () => boolean): boolean {
-  return goesJudgement(c, shouldStop).holds;
+/** Exactly `judge(c).verdict !== "needs-assistance"`, with no more work than that needs (a plan stops once it fails). */
+export function goesAt(c: StartCase, shouldStop?: () => boolean, opts: { stopWhenFailed?: boolean } = {}): boolean {
+  return goesJudgement(c, shouldStop, { stopWhenFailed: opts.stopWhenFailed ?? true }).holds;
 }
 
 /**
@@ -303,10 +341,13 @@ function notOverScore(e: Evaluation): number {
 
 /**
  * `goesAt`'s verdict with a score for the mass search to follow: the best "not over" margin of the plans it
- * made (guidedBracket.ts). The verdict is exactly `goesAt`'s, from the same plans; the score adds none.
+ * made (guidedBracket.ts). The verdict is exactly `goesAt`'s, from the same plans; the score adds none. With
+ * `stopWhenFailed` each plan stops once a limit is over its band: the verdict is the same, and the score of a
+ * plan that stopped is taken at the stop (no smaller than the full plan's, still below 1).
  */
-export function goesJudgement(c: StartCase, shouldStop?: () => boolean): { holds: boolean; score: number } {
+export function goesJudgement(c: StartCase, shouldStop?: () => boolean, verdictOnly: { stopWhenFailed?: boolean } = {}): { holds: boolean; score: number } {
   const opts: SearchOptions = shouldStop ? { shouldStop } : {};
+  const level: FailLevel | null = verdictOnly.stopWhenFailed ? "over" : null;
   const boundQ = marginalBound(c.settings);
   const pre = quasiStatic(c, c.settings.slipRiskThreshold, boundQ);
   if (!noneOver(pre.qs.limits)) return { holds: false, score: notOverScore(pre) };
@@ -314,12 +355,13 @@ export function goesJudgement(c: StartCase, shouldStop?: () => boolean): { holds
   // its bands — the marginal bound's first, which settles it alone when it does (no threshold's plan needed).
   if (!allWithin(pre.qs.limits)) {
     const goes = (e: Evaluation) => noneOver(e.limits) && e.search!.targetReachedS !== null;
-    const atBound = withPlan(quasiStatic(c, boundQ, boundQ), opts);
+    const boundPre = quasiStatic(c, boundQ, boundQ);
+    const atBound = withPlan(boundPre, planOptions(boundPre.ctx, opts, level));
     if (goes(atBound)) return { holds: true, score: notOverScore(atBound) };
-    const atThr = withPlan(pre, opts);
+    const atThr = withPlan(pre, planOptions(pre.ctx, opts, level));
     return { holds: goes(atThr), score: Math.max(notOverScore(atBound), notOverScore(atThr)) };
   }
-  const d = judge(c, { depth: "marginal", ...opts });
+  const d = judge(c, { depth: "marginal", ...(shouldStop ? { shouldStop } : {}), ...(verdictOnly.stopWhenFailed ? { stopWhenFailed: true } : {}) });
   const score = d.verdict === "starts" ? d.margin : Math.max(notOverScore(d.threshold), d.bound ? notOverScore(d.bound) : 0);
   return { holds: d.verdict !== "needs-assistance", score };
 }

@@ -30,19 +30,24 @@ export function withEvaluationMemo<T>(work: () => T): T {
   }
 }
 
-/** The plan of a context: from the memo when the same case on the same rail was planned in this work. */
+/**
+ * The plan of a context: from the memo when the same case on the same rail was planned in this work. A
+ * verdict-only plan (`stopWhenFailed`) is kept under its check's key and answers only that check; a whole plan
+ * answers every request (a verdict-only one that never stopped is a whole plan).
+ */
 export function memoSearchPlan(ctx: PlannerContext, opts: SearchOptions = {}): SearchResult {
   const memo = active;
   if (!memo) return searchPlan(ctx, opts);
   const key = `${ctx.quantile}|${JSON.stringify(ctx.c)}`;
-  const known = memo.get(key);
+  const stopKey = opts.stopWhenFailed ? `${opts.stopWhenFailed.key}|${key}` : null;
+  const known = memo.get(key) ?? (stopKey !== null ? memo.get(stopKey) : undefined);
   if (known) {
     hits++;
     return known;
   }
   const r = searchPlan(ctx, opts);
   if (memo.size >= MAX_ENTRIES) memo.delete(memo.keys().next().value!);
-  memo.set(key, r);
+  memo.set(r.stoppedEarly && stopKey !== null ? stopKey : key, r);
   return r;
 }
 

@@ -50,11 +50,27 @@ export interface SearchResult {
   failure: null | "cannot-hold" | "cannot-start";
   /** The run at the end of the preparing (brakes released, no power taken yet), for re-runs that share it. */
   prepared: Run;
+  /** The search stopped once the plan had failed (`SearchOptions.stopWhenFailed`): its figures are those at the stop. */
+  stoppedEarly: boolean;
+}
+
+/** The plan's own line so far, for a verdict-only evaluation's check (`SearchOptions.stopWhenFailed`). */
+export interface PlanSoFar {
+  branch: Branch;
+  startKind: StartKind;
+  /** The build is over (a power start's travel to the running notch is known). */
+  buildDone: boolean;
+  buildEndTravelM: number | null;
 }
 
 export interface SearchOptions {
   shouldStop?: () => boolean;
   onProgress?: (fraction: number) => void;
+  /**
+   * A verdict-only evaluation (decision.ts): stop as soon as the plan's own line (the stretch chosen, the build
+   * kept, each interval of the accelerate phase) has failed at `level`; `key` names the check for the memo.
+   */
+  stopWhenFailed?: { key: string; failed: (p: PlanSoFar) => boolean };
 }
 
 class Cancelled extends Error {}
@@ -142,7 +158,9 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
     adhesionCapped: false,
     failure: null,
     prepared: run,
+    stoppedEarly: false,
   };
+  const failed = opts.stopWhenFailed?.failed;
   if (hold < 0) return { ...base, failure: "cannot-hold" };
 
   // Prepare: release the train brake with the locomotive brake (and a holding notch on a rising grade) on;
@@ -162,9 +180,9 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
     // No notch: gravity starts the train; power only if it then needs more to reach the target.
     const b = prep.clone();
     openStep(ctx, b, "accelerate", 0);
-    const acc = accelerate(ctx, b, MIN_NOTCH_DWELL_S, prep.run.s.t, check);
+    const acc = accelerate(ctx, b, MIN_NOTCH_DWELL_S, prep.run.s.t, check, failed && (() => failed({ branch: b, startKind: ctx.startKind, buildDone: true, buildEndTravelM: null })));
     opts.onProgress?.(0.85);
-    return { ...base, branch: b, powerS: prep.run.s.t, ...accelerationOutcome(acc) };
+    return { ...base, branch: b, powerS: prep.run.s.t, ...accelerationOutcome(acc), stoppedEarly: acc.stoppedEarly };
   }
 
   // Stretch: the lowest notch that gets every vehicle moving with the locomotive slow and couplers easy.
@@ -191,6 +209,7 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
   opts.onProgress?.(0.45);
   if (!chosen) return { ...base, stretch: { notch: 0, outcome: "weak", tried }, failure: "cannot-start" };
   const stretch = { notch: chosen.notch, outcome: chosen.outcome, tried };
+  if (failed?.({ branch: chosen.branch, startKind: ctx.startKind, buildDone: false, buildEndTravelM: null })) return { ...base, branch: chosen.branch, stretch, stoppedEarly: true };
 
   // Build: the shortest pace between notches that keeps the couplers within their allowance.
   let built: { branch: Branch; dwell: number; endS: number; endTravelM: number; capped: boolean } | null = null;
@@ -204,22 +223,15 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
   opts.onProgress?.(0.65);
   const b = built!.branch;
   const withinAllowance = b.peakTensionN() <= ctx.couplerAllowanceN;
+  const builtPart = { ...base, branch: b, stretch, buildDwellS: built!.dwell, buildWithinAllowance: withinAllowance, buildEndS: built!.endS, buildEndTravelM: built!.endTravelM };
+  const soFar: PlanSoFar = { branch: b, startKind: ctx.startKind, buildDone: true, buildEndTravelM: built!.endTravelM };
+  if (failed?.(soFar)) return { ...builtPart, adhesionCapped: built!.capped, stoppedEarly: true };
 
   // Accelerate: hold the notch the policy settles on (adjusting as speed changes) to the target.
-  const acc = accelerate(ctx, b, built!.dwell, powerS, check);
+  const acc = accelerate(ctx, b, built!.dwell, powerS, check, failed && (() => failed(soFar)));
   opts.onProgress?.(0.85);
   const out = accelerationOutcome(acc);
-  return {
-    ...base,
-    branch: b,
-    stretch,
-    buildDwellS: built!.dwell,
-    buildWithinAllowance: withinAllowance,
-    buildEndS: built!.endS,
-    buildEndTravelM: built!.endTravelM,
-    ...out,
-    adhesionCapped: built!.capped || out.adhesionCapped,
-  };
+  return { ...builtPart, ...out, adhesionCapped: built!.capped || out.adhesionCapped, stoppedEarly: acc.stoppedEarly };
 }
 
 function accelerationOutcome(acc: ReturnType<typeof accelerate>) {
@@ -470,8 +482,8 @@ function targetReached(ctx: PlannerContext, obs: Observation): boolean {
   return t.kind === "speed" ? obs.leadSpeedMps >= t.speedMps : obs.tailTravelM >= t.distanceM;
 }
 
-/** Carry on with the same policy until the target, a stall or the time limit. */
-function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: number, check: () => void) {
+/** Carry on with the same policy until the target, a stall or the time limit (or, when given, `failed` holds). */
+function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: number, check: () => void, failed?: () => boolean) {
   // Stretched and rolling, no coupling goes in or out of its slack any more: the stability-limited step
   // is enough (the accuracy limit is for slack engagement).
   if (ctx.startKind === "power") b.run.setStep(Math.max(b.run.dt, stabilityTimeStep(ctx.model)));
@@ -487,6 +499,7 @@ function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numbe
   let best = Math.max(0, b.run.s.v[b.run.lead]!);
   let bestAt = b.run.s.t;
   let bestTail = b.run.s.x[b.run.m.n - 1]!;
+  let stoppedEarly = false;
   // The step current at the end of the build is the one held to accelerate.
   b.current.phase = b.current.phase === "stretch" ? "stretch" : "accelerate";
   for (;;) {
@@ -512,6 +525,10 @@ function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numbe
       bestAt = obs.timeS;
     } else if (ctx.c.target.kind === "speed" && obs.timeS - bestAt > 60) break;
     if (obs.timeS - powerS > ACCELERATE_MAX_S) break;
+    if (failed?.()) {
+      stoppedEarly = true;
+      break;
+    }
     const notch = levelOf(b);
     const { notch: next, set } = nextNotch(ctx, b, obs, obs.timeS - b.current.startS, dwell, capped, seg);
     if (next !== notch) {
@@ -521,5 +538,5 @@ function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numbe
     if (++ticks % 200 === 0) check();
   }
   if (b.current.phase === "stretch" && reachedS !== null) b.current.trigger = "target";
-  return { reachedS, travelM, stalled, capped: capped.hit, bestSpeedMps: best, bestTailTravelM: bestTail };
+  return { reachedS, travelM, stalled, capped: capped.hit, bestSpeedMps: best, bestTailTravelM: bestTail, stoppedEarly };
 }
