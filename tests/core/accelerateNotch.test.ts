@@ -153,7 +153,63 @@ function accelerationBefore(p: ReturnType<typeof planStart>, t: number): number 
   return timeS[j]! > timeS[i]! ? (speedMps[j]! - speedMps[i]!) / (timeS[j]! - timeS[i]!) : 0;
 }
 
-describe("every plan's steps stay within its rail but where none within will do (planner level: 40 small trains)", () => {
+/** The light train fast-check found (a random seed, before the step's figures were taken up to the target). */
+const lightTrain: Draw = {
+  loco: "illustrative-6axle-1800",
+  count: 1,
+  wagonType: "bogie-hopper-loaded",
+  wagons: 7,
+  load: 0,
+  grade: 0,
+  rail: "wet",
+  sand: true,
+  targetKmh: 8,
+};
+
+describe("a light train at the limit of its notch: one 6-axle 1,800 kW unit, 7 empty bogie hoppers (168 t), level, wet rail sanded, 8 km/h", () => {
+  const c = caseOf(lightTrain);
+  const spec = c.locomotives[0]!.spec;
+  // Wet rail sanded: median 0.26, σ(ln μ) 0.18 [M: profiles/conditions]; the threshold 10 % (the settings' default).
+  const [median, sigma, q] = [0.26, 0.18, 0.1];
+  const rail = (kmh: number) => railN(spec, median, sigma, q, kmh);
+  const target = 8;
+  const p = planStart(c, { skipMassSearch: true, skipVerification: true });
+  const last = p.steps[p.steps.length - 1]!;
+
+  it("by hand: notch 4 asks 190 kN, within the rail at its 10 % quantile up to 8.09 km/h — the target and no further [D]", () => {
+    // 0.85 × 0.26·e^(0.18·(−1.2816)) × 120 t × g = 206.5 kN at rest; × μ(8)/μ(0) = 0.3052/0.3315 → 190.16 kN.
+    expect(rail(0) / 1000).toBeCloseTo(206.5, 1);
+    expect(rail(target) / 1000).toBeCloseTo(190.16, 2);
+    // Notch 4: 0.5 × 380 = 190 kN up to its power corner 3.6 × 1500 × 0.36 / 190 = 10.2 km/h.
+    expect(notchN(spec, 4, target) / 1000).toBeCloseTo(190, 6);
+    expect(notchN(spec, 4, target)).toBeLessThan(rail(target));
+    // Just beyond the target the rail gives less than notch 4 asks (at 8.1 km/h 190.0 kN, at 8.3 km/h 189.6 kN).
+    expect(notchN(spec, 4, 8.3)).toBeGreaterThan(rail(8.3));
+    // Notch 5 asks 0.62 × 380 = 235.6 kN: beyond the rail all the way.
+    expect(notchN(spec, 5, target)).toBeGreaterThan(rail(0));
+    // Notch 4's slip risk at the target: 9.92 %, within the 10 % quantile.
+    expect(riskOf(spec, median, sigma, notchN(spec, 4, target), target)).toBeCloseTo(0.0992, 4);
+  });
+
+  it("the plan holds notch 4 to the target, unmarked, its slip risk the one at the target — not at the overshoot of the last 0.2 s", () => {
+    expect(p.verdict).toBe("starts");
+    expect(last.notch).toBe(4);
+    expect(last.advanceWhen.primary).toBe("target");
+    // The train gains 0.4 m/s² here: the control interval in which it passes 8 km/h ends near 8.3 km/h,
+    // beyond where notch 4 is within the rail. The plan ends at the target, and so do the step's figures.
+    expect(last.adhesionUseAt.speedMps * 3.6).toBeLessThanOrEqual(target + 1e-9);
+    expect(last.slipRisk).toBeCloseTo(riskOf(spec, median, sigma, notchN(spec, 4, target), target), 4);
+    expect(last.speedMps * 3.6).toBeCloseTo(target, 6);
+    expect(last.tractiveEffortN / 1000).toBeCloseTo(190, 3);
+    for (const s of p.steps) {
+      expect(s.slipRisk).toBeLessThanOrEqual(q);
+      expect(s.protectionActs).toBe(false);
+      expect(s.why.protection).toBeNull();
+    }
+  });
+});
+
+describe("every plan's steps stay within its rail but where none within will do (planner level: small trains on random seeds)", () => {
   // Trains of 6–10 wagons (a plan costs 0.05–0.2 s): every locomotive and wagon profile, every rail condition.
   it("the notch held to the target is the highest within; a step above the quantile is marked, taken only when the notch below fell behind, and one notch beyond at most", () => {
     let plans = 0;
@@ -214,12 +270,11 @@ describe("every plan's steps stay within its rail but where none within will do 
           }
         },
       ),
-      // Seed fixed so every run checks the same trains. Known defect, left open: with another seed fast-check
-      // found a light train (one 6-axle 1,800 kW unit, 7 bogie hoppers drawn at load 0, level, wet rail with sand, target
-      // 8 km/h) whose plan takes a notch above the quantile while it still gains speed well (0.40 m/s² against
-      // the 0.0056 m/s² the rule allows) — the planner must not notch beyond the rail there.
-      { numRuns: Math.max(40, deep), seed: 20261202 },
+      // Random seeds (fast-check prints the seed of a failure). The light train above is run first: its step
+      // read 10.2 % at the overshoot past the target while the train gained 0.40 m/s² (the rule allows a step
+      // beyond the rail only below 0.0056 m/s²); PROPERTY_RUNS=2000 for a deeper hunt.
+      { numRuns: Math.max(100, deep), examples: [[lightTrain]] },
     );
-    expect(plans).toBeGreaterThan(8);
+    expect(plans).toBeGreaterThan(20);
   });
 });

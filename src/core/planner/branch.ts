@@ -3,7 +3,7 @@
  * cloned to try alternatives (stretch notches, build pacing) from a shared starting point.
  */
 import type { Observation, Run } from "../dynamics/runner.js";
-import { notchAdhesion, type PlannerContext } from "./context.js";
+import { notchAdhesion, notchEffortAllN, type PlannerContext } from "./context.js";
 import type { Phase, Trigger } from "./types.js";
 
 export interface StepRecord {
@@ -122,12 +122,20 @@ export class Branch {
   /** Fold an observation into the current step's records. */
   note(ctx: PlannerContext, obs: Observation): void {
     const st = this.current;
-    const a = notchAdhesion(ctx, st.groupNotches ?? st.notch, Math.max(0, obs.leadSpeedMps));
+    // The plan ends at its target speed; the control interval in which the train passes it carries a light
+    // train some way beyond (0.2 s at 0.4 m/s² is 0.3 km/h). The step's adhesion figures are taken up to
+    // the target, where the plan's own rule judged the notch (search.ts notchRiskAhead): a notch that asks
+    // more with speed would otherwise read above the plan's quantile only for that overshoot.
+    const v = Math.max(0, obs.leadSpeedMps);
+    const top = ctx.c.target.kind === "speed" ? ctx.c.target.speedMps : Infinity;
+    const at = v < top ? v : top;
+    const notch = st.groupNotches ?? st.notch;
+    const a = notchAdhesion(ctx, notch, at);
     if (a.risk > st.maxRisk) st.maxRisk = a.risk;
     if (a.use > st.maxUse) {
       st.maxUse = a.use;
-      st.maxUseSpeedMps = Math.max(0, obs.leadSpeedMps);
-      st.maxUseEffortN = obs.effortTargetN;
+      st.maxUseSpeedMps = at;
+      st.maxUseEffortN = at === v ? obs.effortTargetN : notchEffortAllN(ctx, notch, at);
     }
     if (obs.maxTensionN > st.peakTensionN) st.peakTensionN = obs.maxTensionN;
     if (obs.maxCompressionN > st.peakCompressionN) st.peakCompressionN = obs.maxCompressionN;

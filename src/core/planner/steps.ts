@@ -53,7 +53,7 @@ export function planSteps(ctx: PlannerContext, r: SearchResult): PlanStep[] {
     if ((rec.phase === "build" || rec.phase === "accelerate") && rec.notch > 0) rec.phase = k === lastPower && r.targetReachedS !== null ? "accelerate" : "build";
     const duration = rec.endS - rec.startS;
     const moved = rec.endTravelM - rec.startTravelM;
-    const speed = Math.max(0, rec.endSpeedMps);
+    const speed = endSpeedMps(ctx, rec);
     const protectionActs = asksBeyondRail(ctx, rec);
     return {
       phase: rec.phase,
@@ -61,7 +61,7 @@ export function planSteps(ctx: PlannerContext, r: SearchResult): PlanStep[] {
       advanceWhen: { afterS: duration, movedM: Math.max(0, moved), speedMps: speed, primary: rec.trigger },
       startS: rec.startS,
       speedMps: speed,
-      tractiveEffortN: rec.effortN,
+      tractiveEffortN: endEffortN(ctx, rec),
       adhesionUse: rec.maxUse,
       adhesionUseAt: { speedMps: rec.maxUseSpeedMps, tractiveEffortN: rec.maxUseEffortN },
       slipRisk: rec.maxRisk,
@@ -74,10 +74,28 @@ export function planSteps(ctx: PlannerContext, r: SearchResult): PlanStep[] {
   });
 }
 
+/**
+ * The speed a step ends at: where the run left it, but a step that ends at the plan's target speed ends at
+ * that speed — the control interval in which the train passes the target carries a light train beyond it
+ * (0.2 s at 0.4 m/s² is 0.3 km/h), and the plan is over at the target (branch.ts takes the step's adhesion
+ * figures up to it too).
+ */
+function endSpeedMps(ctx: PlannerContext, rec: StepRecord): number {
+  const v = Math.max(0, rec.endSpeedMps);
+  const t = ctx.c.target;
+  return rec.trigger === "target" && t.kind === "speed" && v > t.speedMps ? t.speedMps : v;
+}
+
+/** The effort the step's notch asks at the speed it ends at (endSpeedMps), N. */
+function endEffortN(ctx: PlannerContext, rec: StepRecord): number {
+  const v = endSpeedMps(ctx, rec);
+  return v < rec.endSpeedMps ? notchEffortAllN(ctx, rec.groupNotches ?? rec.notch, v) : rec.effortN;
+}
+
 /** Each control group's notch, share of the effort and (helpers) coordination in a step. */
 function groupSteps(ctx: PlannerContext, rec: StepRecord, before: Int32Array | null): GroupStep[] {
   const notches = rec.groupNotches!;
-  const v = Math.max(0, rec.endSpeedMps);
+  const v = endSpeedMps(ctx, rec);
   const effort = new Float64Array(notches.length);
   let total = 0;
   for (let k = 0; k < ctx.model.nl; k++) {
@@ -142,7 +160,7 @@ function whyLine(ctx: PlannerContext, r: SearchResult, rec: StepRecord, k: numbe
       return {
         code: "stretch",
         notch: rec.notch,
-        effortN: rec.effortN,
+        effortN: endEffortN(ctx, rec),
         resistanceN,
         stretchTravelM: moved !== null ? Math.max(0, moved) : null,
         peakN: rec.peakTensionN,
@@ -157,7 +175,7 @@ function whyLine(ctx: PlannerContext, r: SearchResult, rec: StepRecord, k: numbe
     case "accelerate": {
       if (rec.notch === 0) return rollLine(ctx, rec);
       const higherNoMore = r.adhesionCapped && (rec.groupNotches ? settingLevel(rec.groupNotches) : rec.notch) < ctx.maxNotch;
-      return { code: "accelerate", notch: rec.notch, target: targetRef(c.target), effortN: rec.effortN, risk: rec.maxRisk, higherNoMore };
+      return { code: "accelerate", notch: rec.notch, target: targetRef(c.target), effortN: endEffortN(ctx, rec), risk: rec.maxRisk, higherNoMore };
     }
   }
 }
