@@ -289,13 +289,15 @@ function nextNotch(ctx: PlannerContext, b: Branch, obs: Observation, inStepS: nu
   const notch = levelOf(b);
   const v = Math.max(0, obs.leadSpeedMps);
   const settled = obs.effortSettled && !obs.slipped;
+  // Time since power was taken (searchPlan's powerS): how far along the pace the adhesion limit counts on.
+  const sincePowerS = Math.max(0, obs.timeS - (ctx.releaseS + 2));
   const groups = b.current.groupNotches;
   if (groups) {
     if (notch >= ctx.maxNotch || inStepS < dwell || !settled) return { notch, set: null };
-    const set = groupPolicy(ctx, groups, v, obs.leadTravelM, obs.maxTensionN, obs.maxCompressionN, capped, seg);
+    const set = groupPolicy(ctx, groups, v, obs.leadTravelM, obs.maxTensionN, obs.maxCompressionN, capped, seg, sincePowerS);
     return set ? { notch: settingLevel(set), set } : { notch, set: null };
   }
-  return { notch: policyNotch(ctx, notch, v, obs.leadTravelM, inStepS, dwell, settled, obs.maxTensionN, capped, seg), set: null };
+  return { notch: policyNotch(ctx, notch, v, obs.leadTravelM, inStepS, dwell, settled, obs.maxTensionN, capped, seg, sincePowerS), set: null };
 }
 
 /**
@@ -318,6 +320,7 @@ export function policyNotch(
   tensionN: number,
   capped: { hit: boolean },
   seg: Int32Array,
+  sincePowerS = 0,
 ): number {
   if (notch >= ctx.maxNotch || inStepS < dwell || !settled) return notch;
   const up = notch + 1;
@@ -337,7 +340,7 @@ export function policyNotch(
   // no step its verdict did not count on). Beyond it only when the present notch falls behind what the start
   // needs at the pace the adhesion limit counts on: no notch within keeps it on its way there, and the slip
   // protection holds the notch at what the rail gives — the effort that limit's allowance is made of.
-  if (ctx.startKind === "power" && notchRiskAhead(ctx, up, v) > ctx.quantile && !fallsShort(ctx, notch, up, now, v, travelM, seg)) {
+  if (ctx.startKind === "power" && notchRiskAhead(ctx, up, v) > ctx.quantile && !fallsShort(ctx, notch, up, now, v, travelM, seg, sincePowerS)) {
     capped.hit = true;
     return notch;
   }
@@ -351,21 +354,32 @@ export function policyNotch(
 const PROGRESS_MPS2 = 0.05 / 60;
 
 /**
- * The present notch falls short of the start: it is behind what the start needs now (the pace the adhesion
- * limit counts on), and it cannot carry the train on to the speed from which the next notch stays within the
- * rail the plan assumes — somewhere on the way it no longer accelerates the train at the least progress the
- * plan waits for (resistance, breakaway fading at a crawl included, taken where the train is now). Then no
- * notch within keeps the start on its way.
+ * The present notch falls short of the start: it is behind what the start needs now (the effort that keeps
+ * the pace the adhesion limit counts on: the target in ten minutes from rest), and holding it does not keep
+ * the start on that pace — it would reach the speed from which the next notch stays within the rail the plan
+ * assumes (or the target) later than the slowest acceptable start does (at speed s after s ÷ a_min from
+ * taking power), or somewhere on the way it would hardly gain speed at all (resistance, breakaway fading at
+ * a crawl included, taken where the train is now). Then no notch within keeps the start on its way, and the
+ * slip protection, holding the next notch at what the rail gives, is what the adhesion limit counts on.
+ * A train well ahead of that pace may hold a notch that has fallen behind it for a while: it is still on the
+ * start the verdict judged.
  */
-function fallsShort(ctx: PlannerContext, notch: NotchSetting, up: NotchSetting, nowN: number, v: number, travelM: number, seg: Int32Array): boolean {
+function fallsShort(ctx: PlannerContext, notch: NotchSetting, up: NotchSetting, nowN: number, v: number, travelM: number, seg: Int32Array, sincePowerS: number): boolean {
   if (nowN >= needNowN(ctx, travelM, v, seg)) return false;
   const top = targetSpeedMps(ctx);
-  const leastN = ctx.effMassKg * PROGRESS_MPS2;
-  for (let s = v; s <= top; s += 0.05) {
-    if (notchDeliveredN(ctx, notch, s) - rigidResistanceN(ctx.model, travelM, s, seg) < leastN) return true;
-    if (notchRiskAhead(ctx, up, s) <= ctx.quantile) return false;
+  // Twice the progress the accelerate phase waits for: the one-mass estimate here must not hold a notch that
+  // the full dynamics, with its sway, then finds creeping below that progress (a plan given up short of the target).
+  const leastN = 2 * ctx.effMassKg * PROGRESS_MPS2;
+  let s = v;
+  let timeS = 0;
+  while (s < top && notchRiskAhead(ctx, up, s) > ctx.quantile) {
+    const ds = Math.min(0.05, top - s);
+    const surplusN = notchDeliveredN(ctx, notch, s) - rigidResistanceN(ctx.model, travelM, s, seg);
+    if (surplusN < leastN) return true;
+    timeS += (ds * ctx.effMassKg) / surplusN;
+    s += ds;
   }
-  return true;
+  return (sincePowerS + timeS) * ctx.aMinMps2 > s + 1e-9;
 }
 
 /**
@@ -374,7 +388,7 @@ function fallsShort(ctx: PlannerContext, notch: NotchSetting, up: NotchSetting, 
  * more, and the couplers stay within their allowances: the estimate of the new setting, and the present
  * peaks raised by what the estimate adds, in tension and in compression (wheel climb included). Null: hold.
  */
-function groupPolicy(ctx: PlannerContext, from: Int32Array, v: number, travelM: number, tensionN: number, compressionN: number, capped: { hit: boolean }, seg: Int32Array): Int32Array | null {
+function groupPolicy(ctx: PlannerContext, from: Int32Array, v: number, travelM: number, tensionN: number, compressionN: number, capped: { hit: boolean }, seg: Int32Array, sincePowerS: number): Int32Array | null {
   const now = estimateCouplers(ctx, from, v, travelM, seg);
   if (ctx.startKind === "gravity" && now.deliveredN >= needNowN(ctx, travelM, v, seg)) {
     capped.hit = true;
@@ -393,7 +407,7 @@ function groupPolicy(ctx: PlannerContext, from: Int32Array, v: number, travelM: 
   // A power start raises a group only while the new setting asks within the rail the plan assumes, up to
   // the target, or when the present one falls short of the start (as policyNotch).
   const railAllows = (set: Int32Array): boolean =>
-    ctx.startKind !== "power" || notchRiskAhead(ctx, set, v) <= ctx.quantile || fallsShort(ctx, from, set, now.deliveredN, v, travelM, seg);
+    ctx.startKind !== "power" || notchRiskAhead(ctx, set, v) <= ctx.quantile || fallsShort(ctx, from, set, now.deliveredN, v, travelM, seg, sincePowerS);
   // Every group a notch up together (as synchronous distributed power does) while that keeps within.
   const together = raiseAll(ctx, from);
   if (together) {
