@@ -2,6 +2,18 @@
 import { issueMessage } from "../profiles/issueText.js";
 import { formatIssues, MAX_LISTED_ISSUES, type FieldIssue } from "../profiles/issues.js";
 import { cliFieldWords, cliTr } from "./lang.js";
+import { cliErrors } from "../i18n/en/cliErrors.js";
+import type { MessageFn } from "../i18n/translator.js";
+
+/** The command line's error words in this run's language. */
+export function errorWords(): MessageFn<typeof cliErrors.en> {
+  return cliTr().ns(cliErrors);
+}
+
+/** "usage:" before a usage line in an error, in this run's language. */
+export function usageWord(): string {
+  return errorWords()("usage");
+}
 
 export const EXIT_OK = 0;
 export const EXIT_INTERNAL = 1;
@@ -34,4 +46,18 @@ function indent(s: string): string {
     .split("\n")
     .map((l) => `  ${l}`)
     .join("\n");
+}
+
+/**
+ * An option-parsing error (node:util parseArgs) in this run's language: English as Node words it (as it
+ * always printed); the others from its code, naming the option.
+ */
+export function parseErrorText(e: Error & { code?: string }, english: string): string {
+  if (cliTr().lang === "en") return english;
+  const option = /'(-[^' ]+)/.exec(e.message)?.[1];
+  if (option === undefined) return english;
+  const t = errorWords();
+  if (e.code === "ERR_PARSE_ARGS_UNKNOWN_OPTION") return t("unknownOption", { option });
+  if (e.code === "ERR_PARSE_ARGS_INVALID_OPTION_VALUE") return /does not take an argument/.test(e.message) ? t("optionTakesNoValue", { option }) : t("optionNeedsValue", { option });
+  return english;
 }

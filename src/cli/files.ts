@@ -11,7 +11,7 @@ import { withLocations, type Library } from "../profiles/library.js";
 import { printable } from "../profiles/text.js";
 import { planWorkProblem } from "../core/planner/workCap.js";
 import type { StartCase } from "../core/train/types.js";
-import { InputError } from "./errors.js";
+import { errorWords, InputError } from "./errors.js";
 import { cliFieldWords } from "./lang.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { readNotesText } from "../profiles/notes.js";
@@ -22,11 +22,12 @@ export const MAX_INPUT_BYTES = 256 * 1024 * 1024;
 
 /** What a file that is not a regular file is, in words. */
 function kindOfFile(st: ReturnType<typeof fstatSync>): string {
-  if (st.isDirectory()) return "a folder";
-  if (st.isFIFO()) return "a named pipe";
-  if (st.isCharacterDevice() || st.isBlockDevice()) return "a device";
-  if (st.isSocket()) return "a socket";
-  return "not a regular file";
+  const t = errorWords();
+  if (st.isDirectory()) return t("kindFolder");
+  if (st.isFIFO()) return t("kindPipe");
+  if (st.isCharacterDevice() || st.isBlockDevice()) return t("kindDevice");
+  if (st.isSocket()) return t("kindSocket");
+  return t("kindOther");
 }
 
 /**
@@ -34,42 +35,44 @@ function kindOfFile(st: ReturnType<typeof fstatSync>): string {
  * without blocking and checked on the open handle, so a named pipe is refused, not waited on, and nothing
  * can swap the file between the check and the read. The caller closes the descriptor.
  */
-export function openRegularFile(path: string): { ok: true; fd: number; size: number } | { ok: false; why: string } {
+export function openRegularFile(path: string): { ok: true; fd: number; size: number } | { ok: false; why: string; notAFile?: true } {
+  const t = errorWords();
   let fd: number;
   try {
     fd = openSync(path, constants.O_RDONLY | (constants.O_NONBLOCK ?? 0));
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    if (code === "ENOENT" || code === "ENOTDIR") return { ok: false, why: "no such file" };
-    if (code === "EACCES" || code === "EPERM") return { ok: false, why: "cannot be read (no permission)" };
-    return { ok: false, why: `cannot be read (${code ?? "error"})` };
+    if (code === "ENOENT" || code === "ENOTDIR") return { ok: false, why: t("noSuchFile") };
+    if (code === "EACCES" || code === "EPERM") return { ok: false, why: t("noPermission") };
+    return { ok: false, why: t("cannotRead", { code: code ?? "error" }) };
   }
   try {
     const st = fstatSync(fd);
     if (!st.isFile()) {
       closeSync(fd);
-      return { ok: false, why: `is ${kindOfFile(st)}, not a file` };
+      return { ok: false, why: t("notAFile", { kind: kindOfFile(st) }), notAFile: true };
     }
     return { ok: true, fd, size: st.size };
   } catch (e) {
     closeSync(fd);
-    return { ok: false, why: `cannot be read (${(e as NodeJS.ErrnoException).code ?? "error"})` };
+    return { ok: false, why: t("cannotRead", { code: (e as NodeJS.ErrnoException).code ?? "error" }) };
   }
 }
 
 /** A regular file's text, or why it cannot be read (in words that never quote the file). */
 export function readRegularFile(path: string): { ok: true; text: string } | { ok: false; why: string } {
+  const t = errorWords();
   const opened = openRegularFile(path);
-  if (!opened.ok) return { ok: false, why: opened.why.endsWith("not a file") ? `${opened.why}: give a JSON or CSV file` : opened.why };
+  if (!opened.ok) return { ok: false, why: opened.notAFile ? t("giveJsonOrCsv", { why: opened.why }) : opened.why };
   const fd = opened.fd;
   try {
-    if (opened.size > MAX_INPUT_BYTES) return { ok: false, why: `is ${Math.round(opened.size / 1048576)} MB, more than the ${MAX_INPUT_BYTES / 1048576} MB a file may have` };
+    if (opened.size > MAX_INPUT_BYTES) return { ok: false, why: t("tooLarge", { size: String(Math.round(opened.size / 1048576)), max: String(MAX_INPUT_BYTES / 1048576) }) };
     const bytes = readFileSync(fd);
-    if (bytes.length > MAX_INPUT_BYTES) return { ok: false, why: `holds more than the ${MAX_INPUT_BYTES / 1048576} MB a file may have` };
+    if (bytes.length > MAX_INPUT_BYTES) return { ok: false, why: t("holdsMore", { max: String(MAX_INPUT_BYTES / 1048576) }) };
     return { ok: true, text: bytes.toString("utf8") };
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    return { ok: false, why: code === "EISDIR" ? "is a folder, not a file" : `cannot be read (${code ?? "error"})` };
+    return { ok: false, why: code === "EISDIR" ? t("isFolder") : t("cannotRead", { code: code ?? "error" }) };
   } finally {
     closeSync(fd);
   }
@@ -86,7 +89,7 @@ export function pathText(path: string): string {
  */
 export function readStandardInput(): string {
   const st = fstatSync(0);
-  if ((st.isCharacterDevice() || st.isBlockDevice()) && !isatty(0)) throw new InputError("standard input: is a device, not a file");
+  if ((st.isCharacterDevice() || st.isBlockDevice()) && !isatty(0)) throw new InputError(errorWords()("stdinDevice"));
   const chunks: Buffer[] = [];
   let total = 0;
   const buf = Buffer.alloc(1 << 16);
@@ -97,11 +100,11 @@ export function readStandardInput(): string {
     } catch (e) {
       if ((e as NodeJS.ErrnoException).code === "EAGAIN") continue;
       if ((e as NodeJS.ErrnoException).code === "EOF") break;
-      throw new InputError(`standard input: cannot be read (${(e as NodeJS.ErrnoException).code ?? "error"})`);
+      throw new InputError(errorWords()("stdinCannotRead", { code: (e as NodeJS.ErrnoException).code ?? "error" }));
     }
     if (n === 0) break;
     total += n;
-    if (total > MAX_INPUT_BYTES) throw new InputError(`standard input: holds more than the ${MAX_INPUT_BYTES / 1048576} MB a file may have`);
+    if (total > MAX_INPUT_BYTES) throw new InputError(errorWords()("stdinTooLarge", { max: String(MAX_INPUT_BYTES / 1048576) }));
     chunks.push(Buffer.from(buf.subarray(0, n)));
   }
   return Buffer.concat(chunks).toString("utf8");
@@ -144,10 +147,10 @@ export function readStartCase(
   overrides: { location?: string; case?: CaseOverrides } = {},
   text?: string,
 ): { c: StartCase; raw: Record<string, unknown> } {
-  const name = path === "-" ? "standard input" : pathText(path);
+  const name = path === "-" ? errorWords()("standardInput") : pathText(path);
   let raw = text !== undefined ? parseJsonFrom(name, text) : readJson(path);
   const kind = fileKind(raw);
-  if (kind !== undefined && kind !== "taut/start-case@1") throw new InputError(`${name}: this is a ${kindText(kind)} file; a start case (taut/start-case@1) is needed here`);
+  if (kind !== undefined && kind !== "taut/start-case@1") throw new InputError(errorWords()("notStartCase", { name, kind: kindText(kind) }));
   if (overrides.location !== undefined && raw && typeof raw === "object" && !Array.isArray(raw)) raw = { ...(raw as Record<string, unknown>), location: overrides.location };
   if (overrides.case) raw = applyOverrides(raw, overrides.case, (id) => lib.locations.get(id), wagonTypeOf(lib));
   const r = parseStartCase(raw, lib);
@@ -184,7 +187,7 @@ export function readNotesFiles(paths: readonly string[]): LocationNoteFile[] {
     if (!r.ok) throw new InputError(`${pathText(path)}: ${r.message.replace(/ Nothing was changed\.$/, "")}`, r.issues);
     for (const n of r.notes) {
       const earlier = from.get(n.id);
-      if (earlier !== undefined) throw new InputError(`${pathText(path)}: the location note "${n.id}" is also in ${pathText(earlier)}; give each note once`);
+      if (earlier !== undefined) throw new InputError(errorWords()("noteTwice", { file: pathText(path), id: `"${n.id}"`, earlier: pathText(earlier) }));
       from.set(n.id, path);
       notes.push(n);
     }

@@ -7,6 +7,8 @@ import { cliDe } from "../i18n/de/cli.js";
 import { deChecks } from "../i18n/de/checks.js";
 import { de } from "../i18n/de/index.js";
 import { cliHu } from "../i18n/hu/cli.js";
+import { huCliCommands } from "../i18n/hu/cliCommands.js";
+import { deCliCommands } from "../i18n/de/cliCommands.js";
 import { fieldsDe } from "../i18n/de/fields.js";
 import { fields } from "../i18n/en/fields.js";
 import { fieldsHu } from "../i18n/hu/fields.js";
@@ -17,7 +19,11 @@ import type { Catalog } from "../i18n/messages.js";
 import { createTranslator, type MessageFn, type Translator } from "../i18n/translator.js";
 import { wordsOf } from "../i18n/words.js";
 
-const CATALOGS: Readonly<Record<Lang, Catalog | null>> = { en: null, hu: { ...hu, ...huChecks, cli: cliHu, fields: fieldsHu }, de: { ...de, ...deChecks, cli: cliDe, fields: fieldsDe } };
+const CATALOGS: Readonly<Record<Lang, Catalog | null>> = {
+  en: null,
+  hu: { ...hu, ...huChecks, ...huCliCommands, cli: cliHu, fields: fieldsHu },
+  de: { ...de, ...deChecks, ...deCliCommands, cli: cliDe, fields: fieldsDe },
+};
 
 let current: Translator = createTranslator("en", null);
 

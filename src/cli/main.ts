@@ -5,7 +5,8 @@
 import { readFileSync } from "node:fs";
 import { parseArgs } from "node:util";
 import type { Command, Output } from "./command.js";
-import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "./errors.js";
+import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError, parseErrorText, usageWord } from "./errors.js";
+import { helpText, summaryText } from "./help.js";
 import { printable, quoted, terminalSafe } from "../profiles/text.js";
 import { readStandardInput } from "./files.js";
 import { planCommand } from "./commands/plan.js";
@@ -38,7 +39,7 @@ function topHelp(): string {
     t("usage"),
     "",
     t("commandsTitle"),
-    ...COMMANDS.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`),
+    ...COMMANDS.map((c) => `  ${c.name.padEnd(width)}  ${summaryText(c)}`),
     "",
     t("topHelpMore"),
     t("topHelpLang"),
@@ -99,10 +100,10 @@ export async function main(argv: string[], rawIo: Output = stdio, env: Readonly<
     try {
       parsed = parseArgs({ args: rest, options: { ...cmd.options, ...LANG_OPTION, help: { type: "boolean", short: "h" } }, allowPositionals: true, strict: true });
     } catch (e) {
-      throw new InputError(`${printable((e as Error).message.replace(/\. To specify a positional.*$/s, ""))}\n  usage: ${cmd.usage}`);
+      throw new InputError(`${printable(parseErrorText(e as Error, (e as Error).message.replace(/\. To specify a positional.*$/s, "")))}\n  ${usageWord()} ${cmd.usage}`);
     }
     if (parsed.values.help) {
-      io.out(`${t("usageOf", { usage: cmd.usage })}\n\n${cmd.help}\n  --lang en|hu|de     ${t("topHelpLang").replace(/^--lang en\|hu\|de /, "")}`);
+      io.out(`${t("usageOf", { usage: cmd.usage })}\n\n${helpText(cmd)}\n  --lang en|hu|de     ${t("topHelpLang").replace(/^--lang en\|hu\|de /, "")}`);
       return EXIT_OK;
     }
     return await cmd.run(parsed as { values: Record<string, unknown>; positionals: string[] }, io);

@@ -5,14 +5,15 @@ import type { Library } from "../profiles/library.js";
 import type { CheckProgress } from "./batch/checkDepartures.js";
 import { defaultPoolSize } from "./batch/pool.js";
 import type { Output } from "./command.js";
-import { InputError } from "./errors.js";
+import { errorWords, InputError } from "./errors.js";
 import { quoted } from "../profiles/text.js";
+import { cliTr } from "./lang.js";
 
 /** The locomotive profile named by --helper, or undefined for the lead unit's. */
 export function helperSpec(lib: Library, id: string | undefined): LocomotiveSpec | undefined {
   if (id === undefined) return undefined;
   const found = lib.locomotives.get(id);
-  if (!found) throw new InputError(`--helper: no locomotive profile ${quoted(id)} (known: ${[...lib.locomotives.keys()].join(", ")})`);
+  if (!found) throw new InputError(errorWords()("helperUnknown", { id: quoted(id), list: [...lib.locomotives.keys()].join(", ") }));
   return found.spec;
 }
 
@@ -20,14 +21,14 @@ export function helperSpec(lib: Library, id: string | undefined): LocomotiveSpec
 export function helperControl(v: string | undefined): UnitControl | undefined {
   if (v === undefined) return undefined;
   if (v === "remote" || v === "helper") return v;
-  throw new InputError(`--helper-control: must be remote or helper (got ${quoted(v)})`);
+  throw new InputError(errorWords()("helperControl", { value: quoted(v) }));
 }
 
 /** --jobs N: a whole number from 1 to 64; default the available cores. */
 export function jobsOption(v: string | undefined): number {
   if (v === undefined) return defaultPoolSize();
   const n = Number(v);
-  if (!Number.isInteger(n) || n < 1 || n > 64) throw new InputError(`--jobs: must be a whole number from 1 to 64 (got ${quoted(v)})`);
+  if (!Number.isInteger(n) || n < 1 || n > 64) throw new InputError(errorWords()("jobs", { value: quoted(v) }));
   return n;
 }
 
@@ -43,6 +44,7 @@ export function progressReporter(io: Output, what: string): (p: CheckProgress) =
     if (done === total && total === 0) return;
     lastTenth = tenth;
     lastAt = now;
-    io.err(`taut: ${done}/${total} ${what} (${Math.round((100 * done) / total)}%), ${((now - t0) / 1000).toFixed(1)} s`);
+    // The figures as the language writes them (a decimal comma in hu and de); English as it always printed.
+    io.err(`taut: ${errorWords()("progress", { done: String(done), total: String(total), what, percent: String(Math.round((100 * done) / total)), time: cliTr().num((now - t0) / 1000, 1) })}`);
   };
 }

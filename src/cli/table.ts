@@ -27,3 +27,9 @@ export function pct(x: number, decimals = 0): string {
 }
 
 export { toCsv as csv } from "../profiles/csv.js";
+
+/** A number as given (as many decimals as JavaScript writes), with this run's decimal sign: 39.6 → "39,6" in German. */
+export function asGiven(x: number): string {
+  const sign = cliTr().num(0.5, 1).charAt(1);
+  return String(x).replace(".", sign);
+}

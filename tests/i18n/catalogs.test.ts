@@ -18,10 +18,15 @@ import { cliHu } from "../../src/i18n/hu/cli.js";
 import { hu } from "../../src/i18n/hu/index.js";
 import { huLater } from "../../src/i18n/hu/later.js";
 import { huChecks } from "../../src/i18n/hu/checks.js";
+import { huCliCommands } from "../../src/i18n/hu/cliCommands.js";
+import { deCliCommands } from "../../src/i18n/de/cliCommands.js";
 import { fill, namespace, placeholdersOf, translation, type Catalog, type Message } from "../../src/i18n/messages.js";
 import { createTranslator } from "../../src/i18n/translator.js";
 
-const CATALOGS: Record<"hu" | "de", Catalog> = { hu: { ...hu, ...huLater, ...huChecks, cli: cliHu, fields: fieldsHu }, de: { ...de, ...deLater, ...deChecks, cli: cliDe, fields: fieldsDe } };
+const CATALOGS: Record<"hu" | "de", Catalog> = {
+  hu: { ...hu, ...huLater, ...huChecks, ...huCliCommands, cli: cliHu, fields: fieldsHu },
+  de: { ...de, ...deLater, ...deChecks, ...deCliCommands, cli: cliDe, fields: fieldsDe },
+};
 const shape = (m: Message) => (typeof m === "string" ? "text" : "plural");
 const texts = (m: Message) => (typeof m === "string" ? [m] : [m.one, m.other]);
 

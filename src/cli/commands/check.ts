@@ -1,7 +1,7 @@
 /** `taut check DEPARTURES.csv|json` — a day's departures checked at once, in parallel worker threads. */
 import { STANDARD_CAUTIONS } from "../../core/planner/cautions.js";
 import { cautionsInEnglish } from "../../profiles/report.js";
-import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError } from "../errors.js";
+import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, errorWords, InputError } from "../errors.js";
 import { library, readNotesFiles } from "../files.js";
 import type { Command } from "../command.js";
 import { checkDepartures } from "../batch/checkDepartures.js";
@@ -83,7 +83,7 @@ export const checkCommand: Command = {
     const deps = shard ? shardOf(all, shard) : all;
     const t0 = performance.now();
     const pool = new JobPool(jobs);
-    const progress = values.quiet ? undefined : progressReporter(io, "departures answered");
+    const progress = values.quiet ? undefined : progressReporter(io, errorWords()("progressDepartures"));
     let result;
     try {
       result = await checkDepartures(deps, pool, { ...(helper ? { helper } : {}), ...(progress ? { onProgress: progress } : {}) });

@@ -10,8 +10,14 @@ import { basename } from "node:path";
 import { builtinTrains } from "../../profiles/builtin.js";
 import { createRailmlReader, noteIdFrom, RailmlError, railmlNote, railmlStretch, stretchWords, type FrontPlace, type RailmlModel } from "../../profiles/railml/index.js";
 import type { Command } from "../command.js";
-import { InputError } from "../errors.js";
-import { num, textTable } from "../table.js";
+import { errorWords, InputError, usageWord } from "../errors.js";
+import { asGiven, num, textTable } from "../table.js";
+import { cliNotes } from "../../i18n/en/cliNotes.js";
+import { cliTr } from "../lang.js";
+import type { Stretch } from "../../profiles/railml/index.js";
+
+/** The words of `taut notes` in this run's language. */
+const words = () => cliTr().ns(cliNotes);
 
 export const RAILML_DEFAULTS = { behindM: 1500, aheadM: 1000 } as const;
 
@@ -60,13 +66,14 @@ export const notesCommand: Command = {
   },
   async run({ values, positionals }, io) {
     const [sub, file, ...extra] = positionals;
-    if (sub !== "from-railml") throw new InputError(`${sub === undefined ? "a subcommand is needed" : `unknown subcommand "${sub}"`}: taut notes from-railml …\n  usage: ${USAGE}`);
-    if (!file) throw new InputError(`a railML file is needed\n  usage: ${USAGE}`);
-    if (extra.length > 0) throw new InputError(`one railML file at a time (got ${extra.length + 1})`);
+    const t = words();
+    if (sub !== "from-railml") throw new InputError(`${sub === undefined ? t("subcommandNeeded") : t("subcommandUnknown", { name: `"${sub}"` })}: taut notes from-railml …\n  ${usageWord()} ${USAGE}`);
+    if (!file) throw new InputError(`${t("fileNeeded")}\n  ${usageWord()} ${USAGE}`);
+    if (extra.length > 0) throw new InputError(t("oneFile", { count: String(extra.length + 1) }));
     const direction = values.direction;
-    if (direction !== "up" && direction !== "down") throw new InputError(`--direction: up or down is needed${direction === undefined ? "" : ` (got "${String(direction)}")`}`);
+    if (direction !== "up" && direction !== "down") throw new InputError(direction === undefined ? t("directionNeeded") : t("directionGot", { value: `"${String(direction)}"` }));
     const at = values.at as string | undefined;
-    if (at === undefined || at.trim() === "") throw new InputError("--at: where the front of the train stands is needed (a line position in metres, or an operational point)");
+    if (at === undefined || at.trim() === "") throw new InputError(t("atNeeded"));
     const track = values.track as string | undefined;
     const front = frontPlace(at, track);
     const behindM = metres(values.behind as string | undefined, "--behind", RAILML_DEFAULTS.behindM, false);
@@ -87,13 +94,13 @@ export const notesCommand: Command = {
       hazards: values["no-hazards"] !== true,
       ...(builtinTrains[0] ? { referenceTrain: { train: builtinTrains[0].id } } : {}),
     });
-    if (!n.ok) throw new InputError(`${file}: the stretch does not make a valid location note`, n.issues);
+    if (!n.ok) throw new InputError(t("notValidNote", { file }), n.issues);
     const text = `${JSON.stringify(n.value, null, 2)}\n`;
     if (values.out) {
       try {
         writeFileSync(values.out as string, text);
       } catch (e) {
-        throw new InputError(`--out: ${values.out as string} cannot be written (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`);
+        throw new InputError(t("cannotWrite", { file: values.out as string, code: (e as NodeJS.ErrnoException).code ?? (e as Error).message }));
       }
     }
     for (const w of [...model.warnings, ...s.notes]) io.err(`taut notes: ${w}`);
@@ -104,17 +111,18 @@ export const notesCommand: Command = {
     io.out(
       [
         `${n.value.name}`,
-        `From ${basename(file)} (railML ${model.version || "2"}): ${stretchWords(s)}`,
+        t("from", { file: basename(file), version: model.version || "2", stretch: cliTr().lang === "en" ? stretchWords(s) : stretchText(s) }),
         "",
         textTable(
-          ["from m", "length m", "gradient ‰", "radius m"],
-          s.segments.map((g) => [num(g.from_m, 1), num(g.length_m, 1), num(g.gradient_permille, 2), g.curveRadius_m === 0 ? "straight" : num(g.curveRadius_m, 0)]),
+          [t("colFrom"), t("colLength"), t("colGradient"), t("colRadius")],
+          s.segments.map((g) => [num(g.from_m, 1), num(g.length_m, 1), num(g.gradient_permille, 2), g.curveRadius_m === 0 ? t("straight") : num(g.curveRadius_m, 0)]),
         ),
         "",
-        `Front at ${num(s.frontAt_m, 1)} m; ${num(s.aheadM, 1)} m ahead${s.speedLimit_kmh !== undefined ? `; speed limit ${s.speedLimit_kmh} km/h` : ""}.`,
-        ...(n.value.hazards.length > 0 ? ["Hazards:", ...n.value.hazards.map((h) => `  ${num(h.at_m ?? Number.NaN, 1)} m  ${h.note ?? h.kind}`)] : []),
+        t("frontAt", { front: num(s.frontAt_m, 1), ahead: num(s.aheadM, 1), limit: s.speedLimit_kmh !== undefined ? t("speedLimit", { speed: asGiven(s.speedLimit_kmh) }) : "" }),
+        // A hazard's note is the note's own text (written into the file, as the app writes it), shown as it is.
+        ...(n.value.hazards.length > 0 ? [t("hazards"), ...n.value.hazards.map((h) => `  ${num(h.at_m ?? Number.NaN, 1)} m  ${h.note ?? h.kind}`)] : []),
         "",
-        values.out ? `Written to ${values.out as string}.` : "Add --json to print the note, or --out FILE to write it.",
+        values.out ? t("written", { file: values.out as string }) : t("howToKeep"),
       ].join("\n"),
     );
     return 0;
@@ -131,8 +139,27 @@ export function frontPlace(at: string, track: string | undefined): FrontPlace {
 function metres(v: string | undefined, option: string, fallback: number, zeroOk: boolean): number {
   if (v === undefined) return fallback;
   const x = Number(v);
-  if (!Number.isFinite(x) || x < 0 || (!zeroOk && x === 0) || x > 100_000) throw new InputError(`${option}: metres from ${zeroOk ? 0 : "more than 0"} to 100000 are needed (got "${v}")`);
+  if (!Number.isFinite(x) || x < 0 || (!zeroOk && x === 0) || x > 100_000) throw new InputError(words()(zeroOk ? "metresFromZero" : "metresAboveZero", { option, value: `"${v}"` }));
   return x;
+}
+
+/**
+ * The stretch in words, in this run's language, from its data (the railML reader's own `stretchWords` is
+ * English; the English printout keeps it byte for byte).
+ */
+export function stretchText(s: Stretch): string {
+  const t = words();
+  const f = s.front;
+  const track = `"${f.trackName ?? f.track}"${f.trackName !== undefined ? ` (${f.track})` : ""}`;
+  const place = f.absPos !== undefined ? t("frontTrackAbs", { track, pos: asGiven(f.pos), absPos: asGiven(f.absPos) }) : t("frontTrack", { track, pos: asGiven(f.pos) });
+  const names = [...new Set(s.tracks.map((x) => x.name ?? x.id))];
+  return t("stretch", {
+    behind: asGiven(s.behindM),
+    ahead: asGiven(s.aheadM),
+    front: f.ocp !== undefined ? t("frontOcp", { ocp: `"${f.ocp}"`, place }) : place,
+    tracks: t("tracks", { count: names.length }),
+    names: names.join(", "),
+  });
 }
 
 function defaultName(front: FrontPlace, track: string | undefined): string {
@@ -158,7 +185,7 @@ export async function readRailmlFile(path: string): Promise<RailmlModel> {
   } catch (e) {
     if (e instanceof RailmlError) throw new InputError(`${pathText(path)}: ${e.message}`);
     const code = (e as NodeJS.ErrnoException).code;
-    if (code) throw new InputError(`${pathText(path)}: cannot be read (${code})`);
+    if (code) throw new InputError(`${pathText(path)}: ${errorWords()("cannotRead", { code })}`);
     throw e;
   }
 }

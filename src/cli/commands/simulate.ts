@@ -7,8 +7,16 @@ import { InputError } from "../errors.js";
 import { quoted } from "../../profiles/text.js";
 import { library, readStartCase } from "../files.js";
 import type { Command } from "../command.js";
-import { num, textTable } from "../table.js";
+import { asGiven, num, textTable } from "../table.js";
+import { cli } from "../../i18n/en/cli.js";
+import { usageWord } from "../errors.js";
 import { wrap } from "../render/wrap.js";
+import { cliSimulate } from "../../i18n/en/cliSimulate.js";
+import { createTranslator, type Translator } from "../../i18n/translator.js";
+import { cliTr } from "../lang.js";
+
+/** The words of `taut simulate` in this run's language. */
+const words = () => cliTr().ns(cliSimulate);
 
 /** Longest run when the target is not reached: the plan's own time cap, s. */
 const MAX_DURATION_S = ACCELERATE_MAX_S;
@@ -31,17 +39,17 @@ export function parseSequence(text: string, maxNotch: number): SequenceEntry[] {
     .split(",")
     .map((p) => p.trim())
     .filter((p) => p.length > 0);
-  if (entries.length === 0) throw new InputError('--sequence: give at least one notch@seconds, e.g. "1@0,2@20,4@35"');
+  if (entries.length === 0) throw new InputError(words()("sequenceEmpty"));
   const out = entries.map((p, k) => {
     const m = /^(\d+)\s*@\s*(\d+(?:\.\d+)?)$/.exec(p);
-    if (!m) throw new InputError(`--sequence: entry ${k + 1} (${quoted(p)}) must be notch@seconds, e.g. 4@35`);
+    if (!m) throw new InputError(words()("sequenceEntry_", { entry: k + 1, text: quoted(p) }));
     const notch = Number(m[1]);
     const atS = Number(m[2]);
-    if (notch > maxNotch) throw new InputError(`--sequence: entry ${k + 1} asks for notch ${notch}; the locomotive has ${maxNotch}`);
+    if (notch > maxNotch) throw new InputError(words()("sequenceNotch", { entry: k + 1, notch, max: maxNotch }));
     return { notch, atS };
   });
   for (let k = 1; k < out.length; k++) {
-    if (out[k]!.atS < out[k - 1]!.atS) throw new InputError(`--sequence: entry ${k + 1} (${entries[k]}) is earlier than the one before it`);
+    if (out[k]!.atS < out[k - 1]!.atS) throw new InputError(words()("sequenceEarlier", { entry: k + 1, text: entries[k]! }));
   }
   return out;
 }
@@ -150,7 +158,8 @@ export function simulateCase(
     trainBrakeRelease_s: opts.brakeReleased ? null : trainRelease,
     graduatedRelease: graduated,
   };
-  report.warnings = simulationWarnings(report);
+  // The JSON's warnings are in English whatever the language (JSON is language-neutral); the printout renders its own.
+  report.warnings = simulationWarnings(report, ENGLISH);
   if (opts.series) {
     const s = res.series;
     report.series = {
@@ -164,51 +173,81 @@ export function simulateCase(
   return report;
 }
 
+const ENGLISH = createTranslator("en", null);
+
 /**
  * Wheel slip is the first thing to say about a run: a sequence that reaches its target only while the
  * protection cuts power again and again is not one to drive (spinning burns the rail; PRACTICE.md).
  */
-export function simulationWarnings(r: Pick<SimulateReport, "slipEvents" | "slipTime_s" | "targetReached" | "lastVehicleMoves_s">): string[] {
+export function simulationWarnings(
+  r: Pick<SimulateReport, "slipEvents" | "slipTime_s" | "targetReached" | "lastVehicleMoves_s">,
+  tr: Translator = cliTr(),
+): string[] {
+  const t = tr.ns(cliSimulate);
+  const n = (x: number, d: number) => (Number.isFinite(x) ? tr.num(x, d) : "—");
   const out: string[] = [];
   if (r.slipEvents.length > 0) {
-    const cuts = r.slipEvents.reduce((n, e) => n + e.cuts, 0);
+    const cuts = r.slipEvents.reduce((k, e) => k + e.cuts, 0);
     const first = Math.min(...r.slipEvents.map((e) => e.start_s));
     out.push(
-      `The wheels slipped for ${num(r.slipTime_s, 1)} s in all (${r.slipEvents.length} episode${r.slipEvents.length === 1 ? "" : "s"} from ${num(first, 1)} s, ${cuts} power cut${cuts === 1 ? "" : "s"}): this sequence asks more than the rails give${r.targetReached ? "; the target was reached only while the protection cut power" : ""}. Use lower notches or later steps.`,
+      t("slipped", {
+        time: n(r.slipTime_s, 1),
+        episodes: t("episodes", { count: r.slipEvents.length }),
+        first: n(first, 1),
+        cuts: t("powerCuts", { count: cuts }),
+        reached: r.targetReached ? t("reachedWhileCut") : "",
+      }),
     );
   }
-  if (r.lastVehicleMoves_s === null) out.push("The train did not start: the last vehicle never moved.");
+  if (r.lastVehicleMoves_s === null) out.push(t("didNotStart"));
   return out;
 }
 
-const STOP_WORDS: Record<StopReason, string> = {
-  target: "the target was reached",
-  duration: "the asked duration ran out",
-  cap: `the target was not reached within ${MAX_DURATION_S} s`,
-  stall: `the train stalled (it stood still for ${STALL_S} s after moving)`,
-  slips: `the wheels were held slipping at a standstill for ${SPIN_S} s (this burns the rail)`,
-};
-
 export function renderSimulation(r: SimulateReport): string {
+  const tr = cliTr();
+  const t = tr.ns(cliSimulate);
+  const warnings = simulationWarnings(r, tr);
+  const prefix = t("warning", { text: "" });
+  const stopWords: Record<StopReason, string> = {
+    target: t("stopTarget"),
+    duration: t("stopDuration"),
+    cap: t("stopCap", { cap: asGiven(MAX_DURATION_S) }),
+    stall: t("stopStall", { stall: asGiven(STALL_S) }),
+    slips: t("stopSlips", { spin: asGiven(SPIN_S) }),
+  };
   const lines = [
-    ...r.warnings.flatMap((w) => wrap(`WARNING: ${w}`, 100, "         ")),
-    ...(r.warnings.length > 0 ? [""] : []),
-    `Sequence: ${r.sequence.map((e) => `notch ${e.notch} at ${e.atS} s`).join(", ")}; locomotive brake off at ${r.locoBrakeRelease_s} s`,
-    `Adhesion assumed: ${r.adhesionQuantile === 0.5 ? "median" : `the ${Math.round(r.adhesionQuantile * 100)} % quantile`}`,
-    `Last vehicle moves: ${r.lastVehicleMoves_s === null ? "never (the train did not start)" : `${num(r.lastVehicleMoves_s, 1)} s, after ${num(r.locoTravelToStretch_m, 2)} m of locomotive travel`}`,
-    `Peak coupler force: ${num(r.peakCouplerForce_kN)} kN at coupling ${r.peakAt.coupling + 1} (${num(r.peakAt.time_s, 1)} s); peak compression ${num(r.peakCompression_kN)} kN`,
-    `Fastest take-up: run-out ${num(r.maxRunOut_kmh, 2)} km/h, run-in ${num(r.maxRunIn_kmh, 2)} km/h`,
-    `Wheel slip: ${r.slipEvents.length === 0 ? "none" : `${num(r.slipTime_s, 1)} s in all — ${r.slipEvents.map((e) => `unit ${e.unit + 1} ${num(e.start_s, 1)}–${num(e.end_s, 1)} s (${e.cuts} cuts)`).join("; ")}`}`,
-    `Train brake: ${r.trainBrakeRelease_s === null ? "already released" : `released from ${num(r.trainBrakeRelease_s, 0)} s${r.graduatedRelease ? ", in stages (graduated release)" : ""}`}`,
-    `End: ${num(r.final.time_s, 1)} s, ${num(r.final.speed_kmh, 1)} km/h, ${num(r.final.distance_m, 1)} m — stopped because ${STOP_WORDS[r.stoppedBy]}${r.targetReached ? (r.slipEvents.length > 0 ? " (target reached, with the wheels slipping: see the warning above)" : r.stoppedBy !== "target" ? " (target reached)" : "") : ""}`,
+    ...warnings.flatMap((w) => wrap(`${prefix}${w}`, 100, " ".repeat(prefix.length))),
+    ...(warnings.length > 0 ? [""] : []),
+    t("sequence", { list: r.sequence.map((e) => t("sequenceEntry", { notch: String(e.notch), time: asGiven(e.atS) })).join(", "), time: asGiven(r.locoBrakeRelease_s) }),
+    t("adhesion", { what: r.adhesionQuantile === 0.5 ? t("median") : t("quantile", { percent: String(Math.round(r.adhesionQuantile * 100)) }) }),
+    t("lastMoves", { what: r.lastVehicleMoves_s === null ? t("neverMoved") : t("movedAfter", { time: num(r.lastVehicleMoves_s, 1), travel: num(r.locoTravelToStretch_m, 2) }) }),
+    t("peak", { force: num(r.peakCouplerForce_kN), coupling: String(r.peakAt.coupling + 1), time: num(r.peakAt.time_s, 1), compression: num(r.peakCompression_kN) }),
+    t("takeUp", { runOut: num(r.maxRunOut_kmh, 2), runIn: num(r.maxRunIn_kmh, 2) }),
+    t("slip", {
+      what:
+        r.slipEvents.length === 0
+          ? t("slipNone")
+          : t("slipAll", {
+              time: num(r.slipTime_s, 1),
+              list: r.slipEvents.map((e) => t("slipEpisode", { unit: String(e.unit + 1), from: num(e.start_s, 1), to: num(e.end_s, 1), count: e.cuts })).join("; "),
+            }),
+    }),
+    t("trainBrake", { what: r.trainBrakeRelease_s === null ? t("alreadyReleased") : `${t("releasedFrom", { time: num(r.trainBrakeRelease_s, 0) })}${r.graduatedRelease ? t("inStages") : ""}` }),
+    t("end", {
+      time: num(r.final.time_s, 1),
+      speed: num(r.final.speed_kmh, 1),
+      distance: num(r.final.distance_m, 1),
+      why: stopWords[r.stoppedBy],
+      note: r.targetReached ? (r.slipEvents.length > 0 ? t("reachedSlipping") : r.stoppedBy !== "target" ? t("reached") : "") : "",
+    }),
     "",
-    "Peak force along the train (every tenth coupling):",
+    t("peaksTitle"),
     textTable(
-      ["coupling", "peak kN"],
+      [t("colCoupling"), t("colPeak")],
       r.couplerPeaks_kN.map((f, j) => [String(j + 1), num(f)]).filter((_, j) => j % 10 === 0 || j === r.couplerPeaks_kN.length - 1),
     ),
     "",
-    "Advisory only: operating rules, local instructions and the locomotive's own instructions prevail.",
+    tr.ns(cli)("reviewAdvisory"),
   ];
   return lines.join("\n");
 }
@@ -248,8 +287,8 @@ export const simulateCommand: Command = {
   },
   run({ values, positionals }, io) {
     const path = positionals[0];
-    if (!path) throw new InputError("a start-case file is needed\n  usage: taut simulate CASE.json --sequence \"1@0,4@20\"");
-    if (typeof values.sequence !== "string") throw new InputError('--sequence is required, e.g. --sequence "1@0,2@20,4@35,8@50"');
+    if (!path) throw new InputError(`${words()("caseNeeded")}\n  ${usageWord()} taut simulate CASE.json --sequence "1@0,4@20"`);
+    if (typeof values.sequence !== "string") throw new InputError(words()("sequenceRequired"));
     const { c } = readStartCase(path, library());
     const maxNotch = Math.min(...c.locomotives.map((g) => g.spec.notchPower.length));
     const seq = parseSequence(values.sequence, maxNotch);
@@ -258,7 +297,7 @@ export const simulateCommand: Command = {
     if (values["release-at"] !== undefined) opts.releaseAtS = positiveNumber("--release-at", values["release-at"], 3600, true);
     if (values["adhesion-quantile"] !== undefined) {
       const q = Number(values["adhesion-quantile"]);
-      if (!(q > 0 && q < 1)) throw new InputError(`--adhesion-quantile must be between 0 and 1 (got ${quoted(String(values["adhesion-quantile"]))})`);
+      if (!(q > 0 && q < 1)) throw new InputError(words()("quantileRange", { value: quoted(String(values["adhesion-quantile"])) }));
       opts.adhesionQuantile = q;
     }
     const report = simulateCase(c, seq, opts);
@@ -270,7 +309,7 @@ export const simulateCommand: Command = {
 function positiveNumber(name: string, raw: unknown, max: number, allowZero = false): number {
   const x = Number(raw);
   if (!Number.isFinite(x) || x < 0 || (!allowZero && x === 0) || x > max) {
-    throw new InputError(`${name} must be a number of seconds ${allowZero ? "from 0" : "above 0"} up to ${max} (got ${quoted(String(raw))})`);
+    throw new InputError(words()(allowZero ? "secondsFromZero" : "secondsAboveZero", { option: name, max: String(max), value: quoted(String(raw)) }));
   }
   return x;
 }

@@ -10,7 +10,7 @@ import { builtinTrains } from "../../profiles/builtin.js";
 import type { Library } from "../../profiles/library.js";
 import { parseStartCaseFile, resolveStartCase } from "../../profiles/parse.js";
 import type { LocationNoteFile, StartCaseFile } from "../../profiles/schemas.js";
-import { InputError } from "../errors.js";
+import { errorWords, InputError } from "../errors.js";
 import { printable, quoted } from "../../profiles/text.js";
 import { checkWork, library, readNotesFiles } from "../files.js";
 import type { Command } from "../command.js";
@@ -88,7 +88,7 @@ export const tableCommand: Command = {
     const jobs = jobsOption(values.jobs as string | undefined);
     const t0 = performance.now();
     const pool = new JobPool(jobs);
-    const report = values.quiet ? () => undefined : progressReporter(io, "rows of the load table");
+    const report = values.quiet ? () => undefined : progressReporter(io, errorWords()("progressTableRows"));
     const cells = loadTableCells();
     let done = 0;
     let rows: LoadTableRow[];

@@ -23,5 +23,9 @@ import { reasons } from "./reasons.js";
 import { guidance } from "./guidance.js";
 import { assistNotes } from "./assistNotes.js";
 import { advice } from "./advice.js";
+import { cliSimulate } from "./cliSimulate.js";
+import { cliNotes } from "./cliNotes.js";
+import { cliHelp } from "./cliHelp.js";
+import { cliErrors } from "./cliErrors.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors] as const;

@@ -62,6 +62,8 @@ export interface Stretch {
   tracks: Array<{ id: string; name?: string; fromPos: number; toPos: number }>;
   /** Where the front is, in words ("track T1 at pos 420 m, absPos 12 420 m"). */
   frontWords: string;
+  /** Where the front is, as data (for words in another language): the track, pos and absPos, m, and the operational point named. */
+  front: { track: string; trackName?: string; pos: number; absPos?: number; ocp?: string };
   /** What was assumed or left out, in words. */
   notes: string[];
 }
@@ -109,7 +111,7 @@ function onlyMain(tracks: RailmlTrack[]): RailmlTrack | undefined {
   return main.length === 1 ? main[0] : undefined;
 }
 
-function findFront(m: RailmlModel, f: FrontPlace): { ok: true; track: RailmlTrack; pos: number; words: string } | { ok: false; message: string } {
+function findFront(m: RailmlModel, f: FrontPlace): { ok: true; track: RailmlTrack; pos: number; words: string; ocp?: string } | { ok: false; message: string } {
   const byId = (id: string) => m.tracks.find((t) => t.id === id);
   const withAbs = (t: RailmlTrack, pos: number) => {
     const a = absPosAt(t, pos);
@@ -162,7 +164,7 @@ function findFront(m: RailmlModel, f: FrontPlace): { ok: true; track: RailmlTrac
     place = places.find((p) => p.t === main)!;
   }
   const name = ocps[0]!.name ?? ocps[0]!.code ?? ocps[0]!.id;
-  return { ok: true, track: place.t, pos: place.pos, words: `operational point "${name}", ${withAbs(place.t, place.pos)}` };
+  return { ok: true, track: place.t, pos: place.pos, words: `operational point "${name}", ${withAbs(place.t, place.pos)}`, ocp: name };
 }
 
 /**
@@ -442,9 +444,16 @@ export function railmlStretch(m: RailmlModel, req: StretchRequest): StretchResul
       hazards: nearest,
       tracks: trackList(pieces),
       frontWords: front.words,
+      front: frontData(front.track, front.pos, front.ocp),
       notes,
     },
   };
+}
+
+/** Where the front stands, as data: the words of frontWords without the words. */
+function frontData(t: RailmlTrack, pos: number, ocp: string | undefined): Stretch["front"] {
+  const a = absPosAt(t, pos);
+  return { track: t.id, ...(t.name !== undefined ? { trackName: t.name } : {}), pos: round3(pos), ...(a !== undefined ? { absPos: round3(a) } : {}), ...(ocp !== undefined ? { ocp } : {}) };
 }
 
 /** The tracks walked, one entry for consecutive pieces of one track. */

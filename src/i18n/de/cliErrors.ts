@@ -1,0 +1,35 @@
+/** German: the command line's errors about options and files (see en/cliErrors.ts). */
+import type { cliErrors } from "../en/cliErrors.js";
+import { translation } from "../messages.js";
+
+export const cliErrorsDe = translation<typeof cliErrors.en>()({
+  usage: "Aufruf:",
+  unknownOption: "Unbekannte Option {option}",
+  optionNeedsValue: "Option {option} braucht einen Wert (ein Wert mit Bindestrich am Anfang: {option}=-WERT)",
+  optionTakesNoValue: "Option {option} nimmt keinen Wert",
+  helperUnknown: "--helper: kein Lokprofil {id} (bekannt: {list})",
+  helperControl: "--helper-control: muss remote oder helper sein (erhalten: {value})",
+  jobs: "--jobs: muss eine ganze Zahl von 1 bis 64 sein (erhalten: {value})",
+  progress: "{done}/{total} {what} ({percent} %), {time} s",
+  progressDepartures: "Abfahrten beantwortet",
+  progressTableRows: "Zeilen der Lasttafel",
+  noSuchFile: "keine solche Datei",
+  noPermission: "nicht lesbar (keine Berechtigung)",
+  cannotRead: "nicht lesbar ({code})",
+  notAFile: "ist {kind}, keine Datei",
+  giveJsonOrCsv: "{why}: eine JSON- oder CSV-Datei angeben",
+  tooLarge: "hat {size} MB, mehr als die {max} MB, die eine Datei haben darf",
+  holdsMore: "enthält mehr als die {max} MB, die eine Datei haben darf",
+  isFolder: "ist ein Ordner, keine Datei",
+  kindFolder: "ein Ordner",
+  kindPipe: "eine benannte Pipe",
+  kindDevice: "ein Gerät",
+  kindSocket: "ein Socket",
+  kindOther: "keine gewöhnliche Datei",
+  standardInput: "Standardeingabe",
+  notStartCase: "{name}: dies ist eine Datei vom Typ {kind}; hier wird ein Anfahrfall (taut/start-case@1) gebraucht",
+  noteTwice: "{file}: die Ortsnotiz {id} steht auch in {earlier}; jede Notiz nur einmal angeben",
+  stdinDevice: "Standardeingabe: ist ein Gerät, keine Datei",
+  stdinCannotRead: "Standardeingabe: nicht lesbar ({code})",
+  stdinTooLarge: "Standardeingabe: enthält mehr als die {max} MB, die eine Datei haben darf",
+});

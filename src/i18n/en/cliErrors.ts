@@ -1,0 +1,35 @@
+/** The command line's errors about options and files (src/cli/errors.ts, options.ts, files.ts, main.ts). */
+import { namespace } from "../messages.js";
+
+export const cliErrors = namespace("cliErrors", {
+  usage: "usage:",
+  // Option parsing (English prints Node's own words, as it always did; these are the source of the others).
+  unknownOption: "Unknown option {option}",
+  optionNeedsValue: "Option {option} needs a value (a value starting with a dash: {option}=-VALUE)",
+  optionTakesNoValue: "Option {option} takes no value",
+  helperUnknown: "--helper: no locomotive profile {id} (known: {list})",
+  helperControl: "--helper-control: must be remote or helper (got {value})",
+  jobs: "--jobs: must be a whole number from 1 to 64 (got {value})",
+  progress: "{done}/{total} {what} ({percent}%), {time} s",
+  progressDepartures: "departures answered",
+  progressTableRows: "rows of the load table",
+  noSuchFile: "no such file",
+  noPermission: "cannot be read (no permission)",
+  cannotRead: "cannot be read ({code})",
+  notAFile: "is {kind}, not a file",
+  giveJsonOrCsv: "{why}: give a JSON or CSV file",
+  tooLarge: "is {size} MB, more than the {max} MB a file may have",
+  holdsMore: "holds more than the {max} MB a file may have",
+  isFolder: "is a folder, not a file",
+  kindFolder: "a folder",
+  kindPipe: "a named pipe",
+  kindDevice: "a device",
+  kindSocket: "a socket",
+  kindOther: "not a regular file",
+  standardInput: "standard input",
+  notStartCase: "{name}: this is a {kind} file; a start case (taut/start-case@1) is needed here",
+  noteTwice: "{file}: the location note {id} is also in {earlier}; give each note once",
+  stdinDevice: "standard input: is a device, not a file",
+  stdinCannotRead: "standard input: cannot be read ({code})",
+  stdinTooLarge: "standard input: holds more than the {max} MB a file may have",
+});

@@ -1,0 +1,35 @@
+/** Hungarian: the command line's errors about options and files (see en/cliErrors.ts). */
+import type { cliErrors } from "../en/cliErrors.js";
+import { translation } from "../messages.js";
+
+export const cliErrorsHu = translation<typeof cliErrors.en>()({
+  usage: "használat:",
+  unknownOption: "Ismeretlen kapcsoló: {option}",
+  optionNeedsValue: "A(z) {option} kapcsolónak érték kell (kötőjellel kezdődő érték: {option}=-ÉRTÉK)",
+  optionTakesNoValue: "A(z) {option} kapcsoló nem kap értéket",
+  helperUnknown: "--helper: nincs {id} mozdonyprofil (ismertek: {list})",
+  helperControl: "--helper-control: remote vagy helper lehet (kapott érték: {value})",
+  jobs: "--jobs: 1 és 64 közötti egész szám lehet (kapott érték: {value})",
+  progress: "{done}/{total} {what} ({percent}%), {time} s",
+  progressDepartures: "indulás megválaszolva",
+  progressTableRows: "sor a terhelési táblázatból",
+  noSuchFile: "nincs ilyen fájl",
+  noPermission: "nem olvasható (nincs jogosultság)",
+  cannotRead: "nem olvasható ({code})",
+  notAFile: "{kind}, nem fájl",
+  giveJsonOrCsv: "{why}: JSON- vagy CSV-fájlt adjon meg",
+  tooLarge: "{size} MB, több a fájlonként megengedett {max} MB-nál",
+  holdsMore: "több a fájlonként megengedett {max} MB-nál",
+  isFolder: "mappa, nem fájl",
+  kindFolder: "mappa",
+  kindPipe: "névvel ellátott cső (named pipe)",
+  kindDevice: "eszköz",
+  kindSocket: "socket",
+  kindOther: "nem szabályos fájl",
+  standardInput: "szabványos bemenet",
+  notStartCase: "{name}: ez {kind} fájl; itt indítási eset (taut/start-case@1) kell",
+  noteTwice: "{file}: a(z) {id} helyszíni jegyzet ebben is szerepel: {earlier}; minden jegyzetet egyszer adjon meg",
+  stdinDevice: "szabványos bemenet: eszköz, nem fájl",
+  stdinCannotRead: "szabványos bemenet: nem olvasható ({code})",
+  stdinTooLarge: "szabványos bemenet: több a fájlonként megengedett {max} MB-nál",
+});
