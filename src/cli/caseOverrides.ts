@@ -5,7 +5,7 @@
  * out of range gets the same message, with the field's path, as it would in the file.
  */
 import { RAIL_CONDITIONS } from "../core/physics/types.js";
-import { InputError } from "./errors.js";
+import { errorWords, InputError } from "./errors.js";
 
 export interface CaseOverrides {
   rail?: string;
@@ -34,11 +34,11 @@ export const OVERRIDE_HELP = [
   "                      profile's sharpest curve under the train and its distance clear ahead",
 ];
 
-function numberOption(name: string, v: unknown, what: string): number | undefined {
+function numberOption(v: unknown, what: "massNeeded" | "gradeNeeded"): number | undefined {
   if (v === undefined) return undefined;
   const text = String(v).trim();
   const n = text === "" ? Number.NaN : Number(text);
-  if (!Number.isFinite(n)) throw new InputError(`--${name}: ${what} is needed (got "${String(v)}")`);
+  if (!Number.isFinite(n)) throw new InputError(errorWords()(what, { value: `"${String(v)}"` }));
   return n;
 }
 
@@ -47,15 +47,15 @@ export function overridesFrom(values: Record<string, unknown>): CaseOverrides {
   const o: CaseOverrides = {};
   if (values.rail !== undefined) {
     const rail = String(values.rail);
-    if (!(RAIL_CONDITIONS as readonly string[]).includes(rail)) throw new InputError(`--rail: must be one of ${RAIL_CONDITIONS.join(", ")} (got "${rail}")`);
+    if (!(RAIL_CONDITIONS as readonly string[]).includes(rail)) throw new InputError(errorWords()("railValue", { list: RAIL_CONDITIONS.join(", "), value: `"${rail}"` }));
     o.rail = rail;
   }
-  if (values.sand && values["no-sand"]) throw new InputError("--sand and --no-sand: give one of them");
+  if (values.sand && values["no-sand"]) throw new InputError(errorWords()("sandBoth"));
   if (values.sand) o.sand = true;
   if (values["no-sand"]) o.sand = false;
-  const mass = numberOption("mass", values.mass, "a trailing mass in tonnes");
+  const mass = numberOption(values.mass, "massNeeded");
   if (mass !== undefined) o.trailingMass_t = mass;
-  const grade = numberOption("grade", values.grade, "a gradient in per mille");
+  const grade = numberOption(values.grade, "gradeNeeded");
   if (grade !== undefined) o.gradient_permille = grade;
   return o;
 }
@@ -118,7 +118,7 @@ export function applyOverrides(
     const lengthM = isObject(out.train) ? trainLengthM(out.train, wagonType) : 0;
     if (typeof loc === "string") {
       const n = note(loc);
-      if (!n) throw new InputError(`--grade: no location note "${loc}" to take the curve and the distance clear ahead from`);
+      if (!n) throw new InputError(errorWords()("gradeNoNote", { id: `"${loc}"` }));
       out.location = uniformFromProfile(n, lengthM, o.gradient_permille);
     } else if (isObject(loc) && Array.isArray(loc.segments)) {
       out.location = uniformFromProfile(loc as unknown as ProfileLocation, lengthM, o.gradient_permille);

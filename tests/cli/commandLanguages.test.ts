@@ -201,6 +201,23 @@ describe("errors about options and files in the language", () => {
     const r3 = await tautWithEnv({ LANG: "de_CH.UTF-8" }, "check", `${repo}profiles/departures/demo-day.csv`, "--jobs", "0");
     expect(r3.code).toBe(2);
     expect(englishIn(r3.stderr)).toEqual([]);
+    // The overrides, the load table's and the batch check's options.
+    for (const args of [
+      ["plan", "--demo", "--rail", "ice"],
+      ["plan", "--demo", "--sand", "--no-sand"],
+      ["table", "cinderfield-yard", "--count", "9", "--loco", "illustrative-4axle-1100"],
+      ["table", "cinderfield-yard", "--json", "--csv"],
+      ["check", `${repo}profiles/departures/demo-day.csv`, "--sort", "x"],
+      ["check"],
+    ]) {
+      for (const lang of ["hu", "de"]) {
+        const r = await taut(...args, "--lang", lang);
+        expect(r.code, args.join(" ")).toBe(2);
+        const first = r.stderr.split("\n")[0]!.replace(/^taut \w+: /, "");
+        expect(englishIn(first), `${lang}: ${first}`).toEqual([]);
+        expect(first, lang).not.toBe((await taut(...args)).stderr.split("\n")[0]!.replace(/^taut \w+: /, ""));
+      }
+    }
     // English as it always was.
     expect((await taut("plan", "--demo", "--frob")).stderr.split("\n")[0]).toBe("taut plan: Unknown option '--frob'");
   });

@@ -1,7 +1,7 @@
 /** `taut check DEPARTURES.csv|json` — a day's departures checked at once, in parallel worker threads. */
 import { STANDARD_CAUTIONS } from "../../core/planner/cautions.js";
 import { cautionsInEnglish } from "../../profiles/report.js";
-import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, errorWords, InputError } from "../errors.js";
+import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, errorWords, InputError, usageWord } from "../errors.js";
 import { library, readNotesFiles } from "../files.js";
 import type { Command } from "../command.js";
 import { checkDepartures } from "../batch/checkDepartures.js";
@@ -12,6 +12,7 @@ import { defaultPoolSize, JobPool } from "../batch/pool.js";
 import { checkCsv, renderCheck, summarise } from "../render/check.js";
 import { helperSpec, jobsOption, progressReporter } from "../options.js";
 import { sortByRisk } from "../../profiles/riskOrder.js";
+import { asGiven } from "../table.js";
 
 export const checkCommand: Command = {
   name: "check",
@@ -70,11 +71,11 @@ export const checkCommand: Command = {
   },
   async run({ values, positionals }, io) {
     const path = positionals[0];
-    if (!path) throw new InputError(`a departures file is needed\n  usage: ${checkCommand.usage}`);
-    if (positionals.length > 1) throw new InputError(`one departures file at a time (got ${positionals.length})`);
-    if (values.json && values.csv) throw new InputError("--json and --csv: choose one");
+    if (!path) throw new InputError(`${errorWords()("departuresNeeded")}\n  ${usageWord()} ${checkCommand.usage}`);
+    if (positionals.length > 1) throw new InputError(errorWords()("oneDepartures", { count: String(positionals.length) }));
+    if (values.json && values.csv) throw new InputError(errorWords()("jsonOrCsv"));
     const sort = (values.sort as string | undefined) ?? "file";
-    if (sort !== "file" && sort !== "risk") throw new InputError(`--sort: must be file or risk (got "${sort}")`);
+    if (sort !== "file" && sort !== "risk") throw new InputError(errorWords()("sortValue", { value: `"${sort}"` }));
     const jobs = jobsOption(values.jobs as string | undefined);
     const shard = values.shard === undefined ? null : parseShard(values.shard as string);
     const lib = library(readNotesFiles((values.notes as string[] | undefined) ?? []));
@@ -110,7 +111,7 @@ export const checkCommand: Command = {
     if (values.json) io.out(JSON.stringify({ schema: "taut/departures-check@1", file: path, order: sort, departures: rows, summary, cautions: cautionsInEnglish(STANDARD_CAUTIONS) }, null, 2));
     else if (values.csv) io.out(checkCsv(rows));
     else io.out(renderCheck(rows, STANDARD_CAUTIONS));
-    if (!values.quiet) io.err(`taut check: ${shard ? `shard ${shard.k}/${shard.n}, ` : ""}${rows.length} departures${shard ? ` of ${all.length}` : ""} in ${summary.elapsed_s} s (${jobs} worker${jobs === 1 ? "" : "s"}; ${stats.checks} distinct checks, ${stats.massSearches} mass searches)`);
+    if (!values.quiet) io.err(`taut check: ${errorWords()("checkDone", { shard: shard ? errorWords()("checkShard", { k: String(shard.k), n: String(shard.n) }) : "", rows: String(rows.length), of: shard ? errorWords()("checkOf", { all: String(all.length) }) : "", time: asGiven(summary.elapsed_s), count: jobs, checks: String(stats.checks), searches: String(stats.massSearches) })}`);
     if (summary.internalErrors > 0) return EXIT_INTERNAL;
     return summary.badRows > 0 ? EXIT_BAD_INPUT : EXIT_OK;
   },

@@ -14,7 +14,7 @@ import { planReport as reportOf, type PlanReport } from "../../profiles/report.j
 import { assistanceReport, conditionMarginReport } from "../../profiles/assistanceReport.js";
 import type { LocomotiveSpec } from "../../core/physics/types.js";
 import type { StartCase } from "../../core/train/types.js";
-import { InputError } from "../errors.js";
+import { errorWords, InputError, usageWord } from "../errors.js";
 import { quoted } from "../../profiles/text.js";
 import { library, readNotesFiles, readStartCase, wagonTypeOf } from "../files.js";
 import type { Command } from "../command.js";
@@ -84,18 +84,18 @@ export const planCommand: Command = {
       const demo = builtinCaseJson.find((j) => (j as { id?: string }).id === DEMO_CASE_ID) as Record<string, unknown>;
       const raw = applyOverrides(location !== undefined ? { ...demo, location } : demo, overrides, (id) => lib.locations.get(id), wagonTypeOf(lib)) as Record<string, unknown>;
       const r = parseStartCase(raw, lib);
-      if (!r.ok && location !== undefined) throw new InputError(`the demo case cannot start at location ${quoted(location)}`, r.issues);
-      if (!r.ok && hasOverrides(overrides)) throw new InputError("the demo case with these overrides is not valid", r.issues);
+      if (!r.ok && location !== undefined) throw new InputError(errorWords()("demoAtLocation", { location: quoted(location) }), r.issues);
+      if (!r.ok && hasOverrides(overrides)) throw new InputError(errorWords()("demoOverrides"), r.issues);
       if (!r.ok) throw new Error("built-in demo case does not resolve");
       c = r.value;
       meta = caseMeta(raw);
     } else {
       const path = positionals[0];
-      if (!path) throw new InputError("a start-case file is needed (or - for standard input, or --demo)\n  usage: taut plan CASE.json|- [--json]");
-      if (positionals.length > 1) throw new InputError(`one start-case file at a time (got ${positionals.length})`);
+      if (!path) throw new InputError(`${errorWords()("planCaseNeeded")}\n  ${usageWord()} taut plan CASE.json|- [--json]`);
+      if (positionals.length > 1) throw new InputError(errorWords()("oneCase", { count: String(positionals.length) }));
       let text: string | undefined;
       if (path === "-") {
-        if (!io.stdin) throw new InputError("-: there is no standard input to read the case from");
+        if (!io.stdin) throw new InputError(errorWords()("noStdin"));
         text = io.stdin();
       }
       const read = readStartCase(path, lib, { ...(location !== undefined ? { location } : {}), case: overrides }, text);

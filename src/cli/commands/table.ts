@@ -10,13 +10,13 @@ import { builtinTrains } from "../../profiles/builtin.js";
 import type { Library } from "../../profiles/library.js";
 import { parseStartCaseFile, resolveStartCase } from "../../profiles/parse.js";
 import type { LocationNoteFile, StartCaseFile } from "../../profiles/schemas.js";
-import { errorWords, InputError } from "../errors.js";
+import { errorWords, InputError, usageWord } from "../errors.js";
 import { printable, quoted } from "../../profiles/text.js";
 import { checkWork, library, readNotesFiles } from "../files.js";
 import type { Command } from "../command.js";
 import { JobPool } from "../batch/pool.js";
 import type { MassOutcome } from "../batch/jobs.js";
-import { csv, num, textTable } from "../table.js";
+import { asGiven, csv, num, textTable } from "../table.js";
 import { cli } from "../../i18n/en/cli.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
 import { cliTr, cliWords } from "../lang.js";
@@ -79,9 +79,9 @@ export const tableCommand: Command = {
   },
   async run({ values, positionals }, io) {
     const where = positionals[0];
-    if (!where) throw new InputError(`a location note file is needed\n  usage: ${tableCommand.usage}`);
-    if (positionals.length > 1) throw new InputError(`one location at a time (got ${positionals.length})`);
-    if (values.json && values.csv) throw new InputError("--json and --csv: choose one");
+    if (!where) throw new InputError(`${errorWords()("tableNoteNeeded")}\n  ${usageWord()} ${tableCommand.usage}`);
+    if (positionals.length > 1) throw new InputError(errorWords()("oneLocation", { count: String(positionals.length) }));
+    if (values.json && values.csv) throw new InputError(errorWords()("jsonOrCsv"));
     const lib = library();
     const note = pickNote(where, values.note as string | undefined, lib);
     const built = tableCase(note, values, lib);
@@ -130,7 +130,7 @@ export const tableCommand: Command = {
     if (values.json) io.out(JSON.stringify(table, null, 2));
     else if (values.csv) io.out(csv(["rail", "sand", "maxTrailingMass_t"], out.map((r) => [r.rail, r.sand, r.maxTrailingMass_t])));
     else io.out(renderTable(table));
-    if (!values.quiet) io.err(`taut table: ${cells.length} rows in ${elapsedS} s (${jobs} worker${jobs === 1 ? "" : "s"})`);
+    if (!values.quiet) io.err(`taut table: ${errorWords()("tableDone", { rows: String(cells.length), time: asGiven(elapsedS), count: jobs })}`);
     return 0;
   },
 };
@@ -141,20 +141,21 @@ function pickNote(where: string, id: string | undefined, lib: Library): Location
   const notes = readNotesFiles([where]);
   if (id !== undefined) {
     const n = notes.find((x) => x.id === id);
-    if (!n) throw new InputError(`--note: no note ${quoted(id)} in ${printable(where)} (it holds: ${notes.map((x) => x.id).join(", ")})`);
+    if (!n) throw new InputError(errorWords()("noNote", { id: quoted(id), file: printable(where), list: notes.map((x) => x.id).join(", ") }));
     return n;
   }
-  if (notes.length !== 1) throw new InputError(`${printable(where)} holds ${notes.length} notes: choose one with --note ID (${notes.map((x) => x.id).join(", ")})`);
+  if (notes.length !== 1) throw new InputError(errorWords()("chooseNote", { file: printable(where), count: String(notes.length), list: notes.map((x) => x.id).join(", ") }));
   return notes[0]!;
 }
 
 type Values = Record<string, unknown>;
 
-function numberOption(values: Values, name: string, check: (n: number) => boolean, rule: string): number | undefined {
+/** `rule`: what the option must be, in this run's language (read only when the value breaks it). */
+function numberOption(values: Values, name: string, check: (n: number) => boolean, rule: () => string): number | undefined {
   const v = values[name];
   if (v === undefined) return undefined;
   const n = Number(v);
-  if (!Number.isFinite(n) || !check(n)) throw new InputError(`--${name}: must be ${rule} (got ${quoted(String(v))})`);
+  if (!Number.isFinite(n) || !check(n)) throw new InputError(errorWords()("mustBe", { name, rule: rule(), value: quoted(String(v)) }));
   return n;
 }
 
@@ -165,15 +166,15 @@ export function tableCase(
   lib: Library,
 ): { c: StartCase; file: StartCaseFile; source: "referenceTrain" | "defaultReferenceTrain" | "options"; referenceTrain: string | null; capacityT: number | null } {
   let referenceTrain: string | null = null;
-  const count = numberOption(values, "count", (n) => Number.isInteger(n) && n >= 1 && n <= 8, "a whole number from 1 to 8");
-  const wagons = numberOption(values, "wagons", (n) => Number.isInteger(n) && n >= 1 && n <= 400, "a whole number from 1 to 400");
-  const slack = numberOption(values, "slack", (n) => n >= 0 && n <= 200, "from 0 to 200 mm");
-  const limit = numberOption(values, "limit", (n) => n >= 100 && n <= 5000, "from 100 to 5000 kN");
-  const temperature = numberOption(values, "temperature", (n) => n >= -60 && n <= 60, "from -60 to 60 °C");
-  const targetKmh = numberOption(values, "target-kmh", (n) => n > 0 && n <= 200, "greater than 0 and at most 200 km/h");
+  const count = numberOption(values, "count", (n) => Number.isInteger(n) && n >= 1 && n <= 8, () => errorWords()("ruleWhole", { min: "1", max: "8" }));
+  const wagons = numberOption(values, "wagons", (n) => Number.isInteger(n) && n >= 1 && n <= 400, () => errorWords()("ruleWhole", { min: "1", max: "400" }));
+  const slack = numberOption(values, "slack", (n) => n >= 0 && n <= 200, () => errorWords()("ruleRange", { min: "0", max: "200", unit: "mm" }));
+  const limit = numberOption(values, "limit", (n) => n >= 100 && n <= 5000, () => errorWords()("ruleRange", { min: "100", max: "5000", unit: "kN" }));
+  const temperature = numberOption(values, "temperature", (n) => n >= -60 && n <= 60, () => errorWords()("ruleRange", { min: "-60", max: "60", unit: "°C" }));
+  const targetKmh = numberOption(values, "target-kmh", (n) => n > 0 && n <= 200, () => errorWords()("ruleAbove", { max: "200", unit: "km/h" }));
   const loco = values.loco as string | undefined;
   const wagonTypeId = values["wagon-type"] as string | undefined;
-  if (loco !== undefined && !lib.locomotives.has(loco)) throw new InputError(`--loco: no locomotive profile ${quoted(loco)} (known: ${[...lib.locomotives.keys()].join(", ")})`);
+  if (loco !== undefined && !lib.locomotives.has(loco)) throw new InputError(errorWords()("locoUnknown", { id: quoted(loco), list: [...lib.locomotives.keys()].join(", ") }));
   const trainOptions = wagons !== undefined || wagonTypeId !== undefined || slack !== undefined || limit !== undefined;
   const cap = (kmh: number) => Math.min(kmh, note.speedLimit_kmh ?? kmh);
   let file: StartCaseFile;
@@ -182,15 +183,15 @@ export function tableCase(
     // One reference train per note, the same as the app's card (src/profiles/referenceTrain.ts).
     const ref = { ...referenceOf(note, builtinTrains), ...(loco !== undefined ? { locomotive: loco } : {}), ...(count !== undefined ? { count } : {}), ...(temperature !== undefined ? { temperature_C: temperature } : {}) };
     const r = referenceCaseFile(note, builtinTrains, ref);
-    if (!r.ok) throw new InputError(`${note.id}: the reference train cannot be used`, r.issues);
+    if (!r.ok) throw new InputError(errorWords()("refTrainUnusable", { id: note.id }), r.issues);
     file = targetKmh !== undefined ? { ...r.value, target: { speed_kmh: cap(targetKmh) } } : r.value;
     source = note.referenceTrain ? "referenceTrain" : "defaultReferenceTrain";
     referenceTrain = ref.train;
   } else {
-    if (loco === undefined) throw new InputError(`--loco ID is needed with the train options --wagons, --wagon-type, --slack and --limit (known profiles: ${[...lib.locomotives.keys()].join(", ")})`);
+    if (loco === undefined) throw new InputError(errorWords()("locoNeeded", { list: [...lib.locomotives.keys()].join(", ") }));
     const typeId = wagonTypeId ?? TABLE_DEFAULTS.wagonType;
     const w = lib.wagons.get(typeId);
-    if (!w) throw new InputError(`--wagon-type: no wagon type ${quoted(typeId)} (known: ${[...lib.wagons.keys()].join(", ")})`);
+    if (!w) throw new InputError(errorWords()("wagonTypeUnknown", { id: quoted(typeId), list: [...lib.wagons.keys()].join(", ") }));
     const n = wagons ?? TABLE_DEFAULTS.wagons;
     file = {
       schema: "taut/start-case@1",
@@ -213,9 +214,9 @@ export function tableCase(
   }
   // The file the options make is checked as any start case is: every field within its range.
   const valid = parseStartCaseFile(file);
-  if (!valid.ok) throw new InputError(`the train for the table is not valid`, valid.issues);
+  if (!valid.ok) throw new InputError(errorWords()("tableTrainInvalid"), valid.issues);
   const r = resolveStartCase(valid.value, lib);
-  if (!r.ok) throw new InputError(`the train for the table does not fit "${note.id}"`, r.issues);
+  if (!r.ok) throw new InputError(errorWords()("tableTrainMisfit", { id: `"${note.id}"` }), r.issues);
   checkWork(r.value, `the train for the table is not valid`);
   const wt = file.train.wagonType !== undefined ? lib.wagons.get(file.train.wagonType) : undefined;
   return { c: r.value, file, source, referenceTrain, capacityT: wt ? Math.round((file.train.wagons * wt.maxGrossKg) / 1000) : null };
@@ -247,7 +248,7 @@ function renderTable(t: TableReport): string {
       length: num(tr.length_m),
       slack: num(tr.couplerSlack_mm),
       limit: num(tr.couplerLimit_kN),
-      bearing: tr.bearing,
+      bearing: tr.bearing === "roller" ? errorWords()("bearingRoller") : tr.bearing === "plain" ? errorWords()("bearingPlain") : tr.bearing,
       temperature: num(tr.temperature_C),
       target: num(tr.target_kmh),
     }) + source,
