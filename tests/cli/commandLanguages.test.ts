@@ -119,6 +119,11 @@ describe("taut notes in Hungarian and German", () => {
     expect(englishIn(de.stdout), de.stdout).toEqual([]);
     expect(figures(hu.stdout)).toEqual(figures(en.stdout));
     expect(figures(de.stdout)).toEqual(figures(en.stdout));
+    // What the reader and the stretch say on stderr (here the speed limit ahead), in the language too.
+    expect(en.stderr).toContain("Speed limit: 40 km/h");
+    expect(englishIn(hu.stderr), hu.stderr).toEqual([]);
+    expect(englishIn(de.stderr), de.stderr).toEqual([]);
+    expect(figures(de.stderr)).toEqual(figures(en.stderr));
     expect(hu.stdout).toContain(cliNotesHu.straight as string);
     expect(de.stdout).toContain(`${cliNotesDe.hazards === "" ? "" : "Zugspitze bei 1000,0 m; 1000,0 m voraus; zulässige Geschwindigkeit 40 km/h."}`);
     const json = await Promise.all([taut(...args, "--json"), taut(...args, "--json", "--lang", "hu"), taut(...args, "--json", "--lang", "de")]);
@@ -146,7 +151,16 @@ describe("taut notes in Hungarian and German", () => {
     }
   });
 
-  it("its errors in the language", async () => {
+  it("its errors in the language, the railML reader's refusals too", async () => {
+    for (const at of ["99999", "Nowhere"]) {
+      const en = await taut("notes", "from-railml", line, "--at", at, "--direction", "up");
+      const hu = await taut("notes", "from-railml", line, "--at", at, "--direction", "up", "--lang", "hu");
+      expect(hu.code).toBe(2);
+      expect(englishIn(hu.stderr), hu.stderr).toEqual([]);
+      expect(figures(hu.stderr)).toEqual(figures(en.stderr));
+    }
+    const notXml = await taut("notes", "from-railml", demo, "--at", "1", "--direction", "up", "--lang", "de");
+    expect(notXml.stderr).toMatch(/: Die Datei ist kein wohlgeformtes XML \(/);
     const de = await taut("notes", "from-railml", line, "--at", "7200", "--direction", "east", "--lang", "de");
     expect(de.code).toBe(2);
     expect(de.stderr).toBe('taut notes: --direction: up oder down wird gebraucht (erhalten: "east")');

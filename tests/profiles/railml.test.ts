@@ -228,7 +228,7 @@ describe("choosing where the front stands", () => {
     const main: TestTrack = { ...oneTrack, id: "M" };
     const loop: TestTrack = { id: "L", endPos: 1000, beginAbs: 11_000, endAbs: 12_000 };
     const ambiguous = railmlStretch(readRailmlText(railmlFile({ tracks: [main, loop] })), { front: { kind: "absPos", absPos: 11_600 }, direction: "up", behindM: 500, aheadM: 100 });
-    expect(ambiguous).toEqual({ ok: false, message: "The line position 11600 m is on 2 tracks (M, L): choose one of them." });
+    expect(ambiguous).toMatchObject({ ok: false, message: "The line position 11600 m is on 2 tracks (M, L): choose one of them." });
     const typed = railmlStretch(readRailmlText(railmlFile({ tracks: [{ ...main, type: "mainTrack" }, loop] })), { front: { kind: "absPos", absPos: 11_600 }, direction: "up", behindM: 500, aheadM: 100 });
     expect(typed.ok && typed.value.tracks[0]!.id).toBe("M");
     const chosen = railmlStretch(readRailmlText(railmlFile({ tracks: [main, loop] })), { front: { kind: "absPos", absPos: 11_600, track: "L" }, direction: "up", behindM: 500, aheadM: 100 });
@@ -238,9 +238,9 @@ describe("choosing where the front stands", () => {
   it("says what is wrong with a front that is not on the line", () => {
     const m = readRailmlText(railmlFile({ tracks: [oneTrack] }));
     const ask = (front: StretchRequest["front"]) => railmlStretch(m, { front, direction: "up", behindM: 500, aheadM: 100 });
-    expect(ask({ kind: "absPos", absPos: 20_000 })).toEqual({ ok: false, message: "No track covers the line position 20000 m (absPos)." });
-    expect(ask({ kind: "pos", track: "X", pos: 1 })).toEqual({ ok: false, message: 'There is no track "X" in the file.' });
-    expect(ask({ kind: "ocp", ocp: "Nowhere" })).toEqual({ ok: false, message: 'There is no operational point "Nowhere" in the file.' });
+    expect(ask({ kind: "absPos", absPos: 20_000 })).toMatchObject({ ok: false, message: "No track covers the line position 20000 m (absPos)." });
+    expect(ask({ kind: "pos", track: "X", pos: 1 })).toMatchObject({ ok: false, message: 'There is no track "X" in the file.' });
+    expect(ask({ kind: "ocp", ocp: "Nowhere" })).toMatchObject({ ok: false, message: 'There is no operational point "Nowhere" in the file.' });
     expect(ask({ kind: "pos", track: "T1", pos: 0 })).toMatchObject({ ok: false, message: expect.stringContaining("no track behind the front") });
   });
 });

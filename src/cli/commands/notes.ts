@@ -8,13 +8,14 @@ import { createReadStream, writeFileSync } from "node:fs";
 import { openRegularFile, pathText } from "../files.js";
 import { basename } from "node:path";
 import { builtinTrains } from "../../profiles/builtin.js";
-import { createRailmlReader, noteIdFrom, RailmlError, railmlNote, railmlStretch, stretchWords, type FrontPlace, type RailmlModel } from "../../profiles/railml/index.js";
+import { createRailmlReader, noteIdFrom, RailmlError, railmlNote, railmlStretch, type FrontPlace, type RailmlModel } from "../../profiles/railml/index.js";
 import type { Command } from "../command.js";
 import { errorWords, InputError, usageWord } from "../errors.js";
 import { asGiven, num, textTable } from "../table.js";
 import { cliNotes } from "../../i18n/en/cliNotes.js";
 import { cliTr } from "../lang.js";
 import type { Stretch } from "../../profiles/railml/index.js";
+import { railmlWords } from "../../profiles/railml/text.js";
 
 /** The words of `taut notes` in this run's language. */
 const words = () => cliTr().ns(cliNotes);
@@ -81,7 +82,7 @@ export const notesCommand: Command = {
 
     const model = await readRailmlFile(file);
     const r = railmlStretch(model, { front, direction, behindM, aheadM });
-    if (!r.ok) throw new InputError(`${file}: ${r.message}`);
+    if (!r.ok) throw new InputError(`${file}: ${r.text ? railmlWords(cliTr(), r.text) : r.message}`);
     const s = r.value;
     const name = (values.name as string | undefined) ?? defaultName(front, s.tracks[0]?.id);
     const n = railmlNote(s, {
@@ -103,7 +104,7 @@ export const notesCommand: Command = {
         throw new InputError(t("cannotWrite", { file: values.out as string, code: (e as NodeJS.ErrnoException).code ?? (e as Error).message }));
       }
     }
-    for (const w of [...model.warnings, ...s.notes]) io.err(`taut notes: ${w}`);
+    for (const w of [...model.warningTexts, ...s.noteTexts]) io.err(`taut notes: ${railmlWords(cliTr(), w)}`);
     if (values.json) {
       io.out(text);
       return 0;
@@ -111,7 +112,7 @@ export const notesCommand: Command = {
     io.out(
       [
         `${n.value.name}`,
-        t("from", { file: basename(file), version: model.version || "2", stretch: cliTr().lang === "en" ? stretchWords(s) : stretchText(s) }),
+        t("from", { file: basename(file), version: model.version || "2", stretch: stretchText(s) }),
         "",
         textTable(
           [t("colFrom"), t("colLength"), t("colGradient"), t("colRadius")],
@@ -149,14 +150,11 @@ function metres(v: string | undefined, option: string, fallback: number, zeroOk:
  */
 export function stretchText(s: Stretch): string {
   const t = words();
-  const f = s.front;
-  const track = `"${f.trackName ?? f.track}"${f.trackName !== undefined ? ` (${f.track})` : ""}`;
-  const place = f.absPos !== undefined ? t("frontTrackAbs", { track, pos: asGiven(f.pos), absPos: asGiven(f.absPos) }) : t("frontTrack", { track, pos: asGiven(f.pos) });
   const names = [...new Set(s.tracks.map((x) => x.name ?? x.id))];
   return t("stretch", {
     behind: asGiven(s.behindM),
     ahead: asGiven(s.aheadM),
-    front: f.ocp !== undefined ? t("frontOcp", { ocp: `"${f.ocp}"`, place }) : place,
+    front: railmlWords(cliTr(), s.frontText),
     tracks: t("tracks", { count: names.length }),
     names: names.join(", "),
   });
@@ -183,7 +181,7 @@ export async function readRailmlFile(path: string): Promise<RailmlModel> {
     for await (const chunk of createReadStream(path, { fd: opened.fd, encoding: "utf8", highWaterMark: 1 << 20 })) reader.write(chunk as string);
     return reader.close();
   } catch (e) {
-    if (e instanceof RailmlError) throw new InputError(`${pathText(path)}: ${e.message}`);
+    if (e instanceof RailmlError) throw new InputError(`${pathText(path)}: ${railmlWords(cliTr(), e.text)}`);
     const code = (e as NodeJS.ErrnoException).code;
     if (code) throw new InputError(`${pathText(path)}: ${errorWords()("cannotRead", { code })}`);
     throw e;

@@ -27,5 +27,6 @@ import { cliSimulate } from "./cliSimulate.js";
 import { cliNotes } from "./cliNotes.js";
 import { cliHelp } from "./cliHelp.js";
 import { cliErrors } from "./cliErrors.js";
+import { railmlText } from "./railmlText.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors, railmlText] as const;

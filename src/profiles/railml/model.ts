@@ -8,6 +8,7 @@
  * Element and attribute names are railML's own (see README "railML import" for the versions and
  * elements read, and tests/profiles/railml.test.ts for the public sources each one was checked against).
  */
+import type { RailmlText } from "./text.js";
 
 /**
  * The direction an element applies in, from railML's `dir`: "up" towards increasing `pos` of its track,
@@ -81,6 +82,8 @@ export interface RailmlModel {
   ocps: RailmlOcp[];
   /** Things read but not used, in words (e.g. "2 tracks have no absPos"). */
   warnings: string[];
+  /** The same as data, for words in another language (railml/text.ts). */
+  warningTexts: RailmlText[];
 }
 
 /** What a model holds, for a picker: where positions can be chosen. */

@@ -13,11 +13,18 @@
  * holding `tracks`. railML 3.x files and anything else get a message saying what the file is.
  */
 import { SaxesParser, type SaxesTagNS } from "saxes";
+import { railmlEnglish, say, type RailmlText } from "./text.js";
 import type { PlacedThing, RailmlDir, RailmlModel, RailmlOcp, RailmlThingKind, RailmlTrack, TrackEndInfo } from "./model.js";
 
 /** A file that cannot be read as railML infrastructure; the message is for the user. */
 export class RailmlError extends Error {
   override name = "RailmlError";
+  /** The same as data, for words in another language. */
+  readonly text: RailmlText;
+  constructor(text: RailmlText) {
+    super(railmlEnglish(text));
+    this.text = text;
+  }
 }
 
 /** railML 2.x namespaces: a year, over http or https. */
@@ -58,7 +65,7 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
   const maxChars = limits.maxChars ?? MAX_RAILML_CHARS;
   const maxElements = limits.maxElements ?? MAX_RAILML_ELEMENTS;
   const parser = new SaxesParser({ xmlns: true, position: true });
-  const model: RailmlModel = { version: "", namespace: "", tracks: [], ocps: [], warnings: [] };
+  const model: RailmlModel = { version: "", namespace: "", tracks: [], ocps: [], warnings: [], warningTexts: [] };
   /** Local names of the open railML elements; "#other" for elements of another namespace. */
   const stack: string[] = [];
   let railmlNs: string | undefined;
@@ -70,9 +77,12 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
   let noDir = 0;
   let failure: RailmlError | undefined;
 
-  const where = () => `line ${parser.line}`;
-  const fail = (message: string): never => {
-    throw new RailmlError(message);
+  const fail = (text: RailmlText): never => {
+    throw new RailmlError(text);
+  };
+  const warn = (text: RailmlText) => {
+    model.warnings.push(railmlEnglish(text));
+    model.warningTexts.push(text);
   };
 
   const attr = (tag: SaxesTagNS, name: string): string | undefined => {
@@ -81,19 +91,19 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
   };
   const label = (tag: SaxesTagNS) => {
     const id = attr(tag, "id");
-    return id ? `<${tag.local} id="${id}">` : `<${tag.local}> (${where()})`;
+    return id ? say("elementId", { tag: tag.local, id }) : say("elementAtLine", { tag: tag.local, line: String(parser.line) });
   };
   const num = (tag: SaxesTagNS, name: string): number | undefined => {
     const v = attr(tag, name);
     if (v === undefined) return undefined;
-    if (!NUMBER.test(v)) fail(`${label(tag)}: ${name}="${v}" is not a number.`);
+    if (!NUMBER.test(v)) fail(say("notNumber", { element: label(tag), name, value: v }));
     const x = Number(v);
-    if (!Number.isFinite(x)) fail(`${label(tag)}: ${name}="${v}" is not a finite number.`);
+    if (!Number.isFinite(x)) fail(say("notFinite", { element: label(tag), name, value: v }));
     return x;
   };
   const needNum = (tag: SaxesTagNS, name: string): number => {
     const x = num(tag, name);
-    if (x === undefined) fail(`${label(tag)} has no ${name}.`);
+    if (x === undefined) fail(say("noAttribute", { element: label(tag), name }));
     return x!;
   };
   const dir = (tag: SaxesTagNS): RailmlDir => {
@@ -105,20 +115,18 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
 
   const openRoot = (tag: SaxesTagNS) => {
     if (tag.local !== "railml" && tag.local !== "railML") {
-      fail(`This is not a railML file: its root element is <${tag.name}>${tag.uri ? ` in the namespace ${tag.uri}` : ""}.`);
+      fail(say("notRailml", { tag: tag.name, ns: tag.uri ? say("inNamespace", { uri: tag.uri }) : "" }));
     }
     const version = attr(tag, "version") ?? "";
     if (RAILML3_NS.test(tag.uri) || /^3(\.|$)/.test(version)) {
-      fail(
-        `This is a railML 3 file${version ? ` (version ${version})` : ""}. Taut reads the infrastructure of railML 2.2 to 2.5 (tracks with gradientChanges and radiusChanges); export the line as railML 2 to import it.`,
-      );
+      fail(say("railml3", { version: version ? say("versionNamed", { version }) : "" }));
     }
     if (!RAILML2_NS.test(tag.uri)) {
-      if (tag.uri !== "") fail(`This is not a railML 2 file: the root element <${tag.name}> is in the namespace "${tag.uri}", not railML's.`);
-      model.warnings.push("The file names no railML namespace; it was read as railML 2.");
+      if (tag.uri !== "") fail(say("notRailml2", { tag: tag.name, uri: tag.uri }));
+      warn(say("noNamespace"));
     }
-    if (version !== "" && !/^2\.[0-9]+$/.test(version)) model.warnings.push(`The file says it is railML version "${version}"; it was read as railML 2.`);
-    if (/^2\.[01]$/.test(version)) model.warnings.push(`railML ${version} is older than 2.2; elements were read by their 2.2 names.`);
+    if (version !== "" && !/^2\.[0-9]+$/.test(version)) warn(say("otherVersion", { version }));
+    if (/^2\.[01]$/.test(version)) warn(say("olderVersion", { version }));
     railmlNs = tag.uri;
     model.version = version;
     model.namespace = tag.uri;
@@ -127,7 +135,7 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
   const parent = (k = 1) => stack[stack.length - k];
 
   const open = (tag: SaxesTagNS) => {
-    if (++elements > maxElements) fail(`The file has more than ${maxElements} elements: too large to read.`);
+    if (++elements > maxElements) fail(say("tooManyElements", { max: String(maxElements) }));
     if (stack.length === 0) {
       openRoot(tag);
       stack.push(tag.local);
@@ -210,15 +218,15 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
   };
 
   parser.on("doctype", (doctype) => {
-    if (/<!ENTITY/i.test(doctype)) fail("The file's document type declares XML entities. Taut does not expand or fetch entities (they can hide huge or outside content), so it does not read this file.");
+    if (/<!ENTITY/i.test(doctype)) fail(say("entities"));
   });
   parser.on("xmldecl", (decl) => {
-    if (decl.encoding && !/^utf-?8$/i.test(decl.encoding)) model.warnings.push(`The file says its encoding is ${decl.encoding}; it was read as UTF-8, so names with accents may read wrongly.`);
+    if (decl.encoding && !/^utf-?8$/i.test(decl.encoding)) warn(say("encoding", { encoding: decl.encoding }));
   });
   parser.on("opentag", open);
   parser.on("closetag", close);
   parser.on("error", (e) => {
-    throw new RailmlError(`The file is not well-formed XML (${e.message.replace(/^.*?:\d+:\d+:\s*/, "")} at line ${parser.line}).`);
+    throw new RailmlError(say("notWellFormed", { detail: e.message.replace(/^.*?:\d+:\d+:\s*/, ""), line: String(parser.line) }));
   });
 
   const guard = (f: () => void) => {
@@ -226,7 +234,7 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
     try {
       f();
     } catch (e) {
-      failure = e instanceof RailmlError ? e : new RailmlError(`The file could not be read: ${(e as Error).message}`);
+      failure = e instanceof RailmlError ? e : new RailmlError(say("couldNotRead", { detail: (e as Error).message }));
       throw failure;
     }
   };
@@ -235,7 +243,7 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
     write(chunk) {
       guard(() => {
         chars += chunk.length;
-        if (chars > maxChars) fail(`The file is larger than ${Math.max(1, Math.round(maxChars / 1024 / 1024))} MB: too large to read.`);
+        if (chars > maxChars) fail(say("tooLarge", { max: String(Math.max(1, Math.round(maxChars / 1024 / 1024))) }));
         parser.write(chunk);
       });
     },
@@ -243,15 +251,15 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
       guard(() => {
         parser.close();
       });
-      if (!railmlNs && model.namespace === "" && stack.length === 0 && elements === 0) throw new RailmlError("The file is empty.");
-      if (!sawInfrastructure) throw new RailmlError("This railML file has no infrastructure (it may hold only timetables or rolling stock): there are no tracks to import.");
-      if (model.tracks.length === 0) throw new RailmlError("This railML file's infrastructure has no tracks.");
+      if (!railmlNs && model.namespace === "" && stack.length === 0 && elements === 0) throw new RailmlError(say("empty"));
+      if (!sawInfrastructure) throw new RailmlError(say("noInfrastructure"));
+      if (model.tracks.length === 0) throw new RailmlError(say("noTracks"));
       if (model.tracks.every((t) => t.gradients.length === 0 && t.radii.length === 0)) {
-        model.warnings.push("No track in the file has gradientChanges or radiusChanges: the profile would be level and straight.");
+        warn(say("noProfile"));
       }
-      if (noDir > 0) model.warnings.push(`${noDir} gradient, radius or speed change(s) have no dir; they were taken as given towards increasing pos.`);
+      if (noDir > 0) warn(say("noDir", { count: String(noDir) }));
       const noAbs = model.tracks.filter((t) => t.begin?.absPos === undefined || t.end?.absPos === undefined).length;
-      if (noAbs > 0) model.warnings.push(`${noAbs} of ${model.tracks.length} track(s) give no absPos at both ends: positions on them are chosen by track and pos.`);
+      if (noAbs > 0) warn(say("noAbs", { count: String(noAbs), all: String(model.tracks.length) }));
       return model;
     },
   };

@@ -18,6 +18,7 @@
  * - A curve's side does not change its resistance, so a radius's sign is dropped; 0 is straight.
  */
 import type { SegmentFile } from "../schemas.js";
+import { given, railmlEnglish, say, type RailmlText } from "./text.js";
 import type { PlacedThing, PlacedValue, RailmlModel, RailmlThingKind, RailmlTrack } from "./model.js";
 
 export type TravelDirection = "up" | "down";
@@ -62,13 +63,16 @@ export interface Stretch {
   tracks: Array<{ id: string; name?: string; fromPos: number; toPos: number }>;
   /** Where the front is, in words ("track T1 at pos 420 m, absPos 12 420 m"). */
   frontWords: string;
-  /** Where the front is, as data (for words in another language): the track, pos and absPos, m, and the operational point named. */
-  front: { track: string; trackName?: string; pos: number; absPos?: number; ocp?: string };
+  /** The same as data, for words in another language (railml/text.ts). */
+  frontText: RailmlText;
   /** What was assumed or left out, in words. */
   notes: string[];
+  /** The same as data, for words in another language (railml/text.ts). */
+  noteTexts: RailmlText[];
 }
 
-export type StretchResult = { ok: true; value: Stretch } | { ok: false; message: string };
+/** A failure's `text` is its message as data (absent where a caller words a failure of its own). */
+export type StretchResult = { ok: true; value: Stretch } | { ok: false; message: string; text?: RailmlText };
 
 /** Most hazards offered from one stretch. */
 const MAX_HAZARDS = 40;
@@ -103,7 +107,10 @@ function posAtAbs(t: RailmlTrack, absPos: number): number | undefined {
   return b.pos + f * (e.pos - b.pos);
 }
 
-const trackWords = (t: RailmlTrack) => `track "${t.name ?? t.id}"${t.name ? ` (${t.id})` : ""}`;
+/** A track as the texts name it after the word "track": its name and id, or its id. */
+const trackName = (t: RailmlTrack) => `"${t.name ?? t.id}"${t.name ? ` (${t.id})` : ""}`;
+/** A failure with its text. */
+const failed = (text: RailmlText): { ok: false; message: string; text: RailmlText } => ({ ok: false, message: railmlEnglish(text), text });
 
 /** Of several tracks, the one main track; undefined when that does not single one out. */
 function onlyMain(tracks: RailmlTrack[]): RailmlTrack | undefined {
@@ -111,31 +118,33 @@ function onlyMain(tracks: RailmlTrack[]): RailmlTrack | undefined {
   return main.length === 1 ? main[0] : undefined;
 }
 
-function findFront(m: RailmlModel, f: FrontPlace): { ok: true; track: RailmlTrack; pos: number; words: string; ocp?: string } | { ok: false; message: string } {
+function findFront(
+  m: RailmlModel,
+  f: FrontPlace,
+): { ok: true; track: RailmlTrack; pos: number; words: string; text: RailmlText; ocp?: string } | { ok: false; message: string; text: RailmlText } {
   const byId = (id: string) => m.tracks.find((t) => t.id === id);
-  const withAbs = (t: RailmlTrack, pos: number) => {
+  const placeText = (t: RailmlTrack, pos: number): RailmlText => {
     const a = absPosAt(t, pos);
-    return `${trackWords(t)} at pos ${round3(pos)} m${a !== undefined ? `, absPos ${round3(a)} m` : ""}`;
+    return a !== undefined ? say("frontTrackAbs", { track: trackName(t), pos: given(round3(pos)), absPos: given(round3(a)) }) : say("frontTrack", { track: trackName(t), pos: given(round3(pos)) });
+  };
+  const found = (t: RailmlTrack, pos: number, ocp?: string) => {
+    const text = ocp !== undefined ? say("frontOcp", { ocp, place: placeText(t, pos) }) : placeText(t, pos);
+    return { ok: true as const, track: t, pos, words: railmlEnglish(text), text, ...(ocp !== undefined ? { ocp } : {}) };
   };
   if (f.kind === "pos") {
     const t = byId(f.track);
-    if (!t) return { ok: false, message: `There is no track "${f.track}" in the file.` };
-    if (f.pos < lo(t) - EPS || f.pos > hi(t) + EPS) return { ok: false, message: `pos ${f.pos} m is outside ${trackWords(t)}, which runs from ${lo(t)} to ${hi(t)} m.` };
-    return { ok: true, track: t, pos: f.pos, words: withAbs(t, f.pos) };
+    if (!t) return failed(say("noTrack", { track: f.track }));
+    if (f.pos < lo(t) - EPS || f.pos > hi(t) + EPS) return failed(say("posOutside", { pos: given(f.pos), track: trackName(t), from: given(lo(t)), to: given(hi(t)) }));
+    return found(t, f.pos);
   }
   if (f.kind === "absPos") {
     const candidates = (f.track ? [byId(f.track)].filter((t): t is RailmlTrack => t !== undefined) : m.tracks)
       .map((t) => ({ t, pos: posAtAbs(t, f.absPos) }))
       .filter((c): c is { t: RailmlTrack; pos: number } => c.pos !== undefined);
-    if (f.track && !byId(f.track)) return { ok: false, message: `There is no track "${f.track}" in the file.` };
+    if (f.track && !byId(f.track)) return failed(say("noTrack", { track: f.track }));
     if (candidates.length === 0) {
       const anyAbs = m.tracks.some((t) => t.begin?.absPos !== undefined && t.end?.absPos !== undefined);
-      return {
-        ok: false,
-        message: anyAbs
-          ? `No track${f.track ? ` "${f.track}"` : ""} covers the line position ${f.absPos} m (absPos).`
-          : "The file gives no absPos at the tracks' ends, so a line position cannot be found: choose a track and a pos on it, or an operational point.",
-      };
+      return failed(anyAbs ? say("noTrackCovers", { which: f.track ? ` "${f.track}"` : "", absPos: given(f.absPos) }) : say("noAbsPos"));
     }
     // Where two tracks meet, the position is on both: take the one the position is inside, else the first.
     const inside = candidates.filter((c) => c.pos > lo(c.t) + EPS && c.pos < hi(c.t) - EPS);
@@ -143,35 +152,35 @@ function findFront(m: RailmlModel, f: FrontPlace): { ok: true; track: RailmlTrac
     if (distinct.length > 1) {
       const main = onlyMain(distinct.map((c) => c.t));
       if (!main) {
-        return { ok: false, message: `The line position ${f.absPos} m is on ${distinct.length} tracks (${distinct.map((c) => c.t.id).join(", ")}): choose one of them.` };
+        return failed(say("absPosOnSeveral", { absPos: given(f.absPos), count: String(distinct.length), list: distinct.map((c) => c.t.id).join(", ") }));
       }
       const c = distinct.find((x) => x.t === main)!;
-      return { ok: true, track: c.t, pos: c.pos, words: withAbs(c.t, c.pos) };
+      return found(c.t, c.pos);
     }
     const c = distinct[0]!;
-    return { ok: true, track: c.t, pos: c.pos, words: withAbs(c.t, c.pos) };
+    return found(c.t, c.pos);
   }
   const key = f.ocp.trim().toLowerCase();
   const ocps = m.ocps.filter((o) => [o.id, o.name, o.code].some((x) => x !== undefined && x.toLowerCase() === key));
-  if (ocps.length === 0) return { ok: false, message: `There is no operational point "${f.ocp}" in the file.` };
+  if (ocps.length === 0) return failed(say("noOcp", { ocp: f.ocp }));
   const ids = new Set(ocps.map((o) => o.id));
   const places = m.tracks.flatMap((t) => t.crossSections.filter((c) => ids.has(c.ocpRef) && (!f.track || t.id === f.track)).map((c) => ({ t, pos: c.pos })));
-  if (places.length === 0) return { ok: false, message: `The operational point "${f.ocp}" is not placed on any track${f.track ? ` "${f.track}"` : ""} (no crossSection refers to it).` };
+  if (places.length === 0) return failed(say("ocpNotPlaced", { ocp: f.ocp, which: f.track ? ` "${f.track}"` : "" }));
   let place = places[0]!;
   if (places.length > 1) {
     const main = onlyMain(places.map((p) => p.t));
-    if (!main) return { ok: false, message: `The operational point "${f.ocp}" is on ${places.length} tracks (${places.map((p) => p.t.id).join(", ")}): choose one of them.` };
+    if (!main) return failed(say("ocpOnSeveral", { ocp: f.ocp, count: String(places.length), list: places.map((p) => p.t.id).join(", ") }));
     place = places.find((p) => p.t === main)!;
   }
   const name = ocps[0]!.name ?? ocps[0]!.code ?? ocps[0]!.id;
-  return { ok: true, track: place.t, pos: place.pos, words: `operational point "${name}", ${withAbs(place.t, place.pos)}`, ocp: name };
+  return found(place.t, place.pos, name);
 }
 
 /**
  * Walk from (track, pos) in `sense` (+1 towards increasing pos) for `lengthM`, crossing to the next track
  * through the connection at each end. Returns the pieces walked and why the walk stopped short, if it did.
  */
-function walk(m: RailmlModel, start: RailmlTrack, pos: number, sense: 1 | -1, lengthM: number): { pieces: Piece[]; short?: string } {
+function walk(m: RailmlModel, start: RailmlTrack, pos: number, sense: 1 | -1, lengthM: number): { pieces: Piece[]; short?: RailmlText } {
   const connections = new Map<string, { track: RailmlTrack; at: "begin" | "end" }>();
   for (const t of m.tracks) {
     if (t.begin?.connection) connections.set(t.begin.connection.id, { track: t, at: "begin" });
@@ -195,10 +204,10 @@ function walk(m: RailmlModel, start: RailmlTrack, pos: number, sense: 1 | -1, le
     if (left <= EPS) return { pieces };
     seen.add(`${track.id}:${s}`);
     const conn = exitEnd?.connection;
-    const why = () => {
+    const why = (): RailmlText => {
       const end = exitEnd === track.end ? "trackEnd" : "trackBegin";
-      if (!conn) return `${trackWords(track)} ends (${end}${exitEnd?.closed ? `: ${exitEnd.closed}` : ""}) ${round3(lengthM - left)} m from the front`;
-      return `the connection at the ${end} of ${trackWords(track)} leads to no track's end ("${conn.ref}"; a connection to points is not followed)`;
+      if (!conn) return say("trackEnds", { track: trackName(track), end, closed: exitEnd?.closed ? `: ${exitEnd.closed}` : "", distance: given(round3(lengthM - left)) });
+      return say("connectionNowhere", { end, track: trackName(track), ref: conn.ref });
     };
     if (!conn) return { pieces, short: why() };
     const next = connections.get(conn.ref);
@@ -208,7 +217,7 @@ function walk(m: RailmlModel, start: RailmlTrack, pos: number, sense: 1 | -1, le
     const nEndsUp = (nt.end?.pos ?? 0) >= (nt.begin?.pos ?? 0);
     const enterBegin = next.at === "begin";
     const ns: 1 | -1 = enterBegin === nEndsUp ? 1 : -1;
-    if (seen.has(`${nt.id}:${ns}`)) return { pieces, short: `the tracks' connections form a loop at ${trackWords(nt)}` };
+    if (seen.has(`${nt.id}:${ns}`)) return { pieces, short: say("loop", { track: trackName(nt) }) };
     track = nt;
     at = (enterBegin ? nt.begin?.pos : nt.end?.pos) ?? 0;
     s = ns;
@@ -395,7 +404,7 @@ function hazardsAlong(pieces: readonly Piece[], startAt: number): StretchHazard[
 /** The stretch a note describes: see the module comment. */
 export function railmlStretch(m: RailmlModel, req: StretchRequest): StretchResult {
   if (!(req.behindM > 0) || !(req.aheadM >= 0) || !Number.isFinite(req.behindM) || !Number.isFinite(req.aheadM)) {
-    return { ok: false, message: "Give how far behind the front to take (more than 0 m) and how far ahead (0 m or more)." };
+    return failed(say("giveBehindAhead"));
   }
   const front = findFront(m, req.front);
   if (!front.ok) return front;
@@ -408,29 +417,30 @@ export function railmlStretch(m: RailmlModel, req: StretchRequest): StretchResul
   const aheadM = ahead.pieces.reduce((s, p) => s + Math.abs(p.toPos - p.fromPos), 0);
   const pieces = [...behind, ...ahead.pieces];
   const total = behindM + aheadM;
-  if (total <= EPS) return { ok: false, message: `There is no track to take around ${front.words}.` };
-  if (behindM <= EPS) return { ok: false, message: `There is no track behind the front at ${front.words} in the direction "${req.direction}": the train would not stand on the line.` };
+  if (total <= EPS) return failed(say("nothingAround", { front: front.text }));
+  if (behindM <= EPS) return failed(say("nothingBehind", { front: front.text, direction: req.direction }));
 
-  const notes: string[] = [];
-  if (behindWalk.short && behindM < req.behindM - EPS) notes.push(`Only ${round3(behindM)} m behind the front could be taken: ${behindWalk.short}.`);
-  if (ahead.short && aheadM < req.aheadM - EPS) notes.push(`Only ${round3(aheadM)} m ahead of the front could be taken: ${ahead.short}.`);
+  const noteTexts: RailmlText[] = [];
+  const note = (t: RailmlText) => noteTexts.push(t);
+  if (behindWalk.short && behindM < req.behindM - EPS) note(say("onlyBehind", { length: given(round3(behindM)), why: behindWalk.short }));
+  if (ahead.short && aheadM < req.aheadM - EPS) note(say("onlyAhead", { length: given(round3(aheadM)), why: ahead.short }));
 
   const g = filled(along(pieces, (t) => t.gradients, true));
   const r = filled(along(pieces, (t) => t.radii, false));
-  if (g.none) notes.push("No gradientChange applies to this stretch: it is taken as level.");
-  else if (g.backFilledM > EPS) notes.push(`The first ${round3(g.backFilledM)} m have no gradientChange before them: the first gradient found is taken back to the start.`);
-  if (r.none) notes.push("No radiusChange applies to this stretch: it is taken as straight.");
-  else if (r.backFilledM > EPS) notes.push(`The first ${round3(r.backFilledM)} m have no radiusChange before them: the first radius found is taken back to the start.`);
+  if (g.none) note(say("noGradient"));
+  else if (g.backFilledM > EPS) note(say("gradientBackFilled", { length: given(round3(g.backFilledM)) }));
+  if (r.none) note(say("noRadius"));
+  else if (r.backFilledM > EPS) note(say("radiusBackFilled", { length: given(round3(r.backFilledM)) }));
 
   const segments = toSegments(g.values, r.values, round3(total));
   const frontAt = round3(behindM);
 
   // The speed limit: the lowest vMax in force from the front to the end of the stretch ahead.
   const speedAhead = lowestAhead(along(pieces, (t) => t.speeds, false), frontAt, total);
-  if (speedAhead !== undefined) notes.push(`Speed limit: ${speedAhead} km/h, the lowest vMax in force from the front to the end of the stretch.`);
+  if (speedAhead !== undefined) note(say("speedLimit", { speed: given(speedAhead) }));
 
   const hazards = hazardsAlong(pieces, 0);
-  if (hazards.length > MAX_HAZARDS) notes.push(`${hazards.length} signals, points and other places are in the stretch; the ${MAX_HAZARDS} nearest the front are offered as hazards.`);
+  if (hazards.length > MAX_HAZARDS) note(say("manyHazards", { count: String(hazards.length), max: String(MAX_HAZARDS) }));
   const nearest = [...hazards].sort((x, y) => Math.abs(x.at_m - frontAt) - Math.abs(y.at_m - frontAt)).slice(0, MAX_HAZARDS).sort((x, y) => x.at_m - y.at_m);
 
   return {
@@ -444,16 +454,11 @@ export function railmlStretch(m: RailmlModel, req: StretchRequest): StretchResul
       hazards: nearest,
       tracks: trackList(pieces),
       frontWords: front.words,
-      front: frontData(front.track, front.pos, front.ocp),
-      notes,
+      frontText: front.text,
+      notes: noteTexts.map(railmlEnglish),
+      noteTexts,
     },
   };
-}
-
-/** Where the front stands, as data: the words of frontWords without the words. */
-function frontData(t: RailmlTrack, pos: number, ocp: string | undefined): Stretch["front"] {
-  const a = absPosAt(t, pos);
-  return { track: t.id, ...(t.name !== undefined ? { trackName: t.name } : {}), pos: round3(pos), ...(a !== undefined ? { absPos: round3(a) } : {}), ...(ocp !== undefined ? { ocp } : {}) };
 }
 
 /** The tracks walked, one entry for consecutive pieces of one track. */
