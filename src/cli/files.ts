@@ -5,13 +5,14 @@
  */
 import { closeSync, constants, fstatSync, openSync, readFileSync, readSync } from "node:fs";
 import { isatty } from "node:tty";
+import { errorWords } from "./errors.js";
 import { builtinLibrary } from "../profiles/builtin.js";
 import { fileKind, kindText, parseJsonText, parseLocationNote, parseStartCase } from "../profiles/parse.js";
 import { withLocations, type Library } from "../profiles/library.js";
 import { printable } from "../profiles/text.js";
 import { planWorkProblem } from "../core/planner/workCap.js";
 import type { StartCase } from "../core/train/types.js";
-import { errorWords, InputError } from "./errors.js";
+import { InputError } from "./errors.js";
 import { cliFieldWords } from "./lang.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { readNotesText } from "../profiles/notes.js";

@@ -183,7 +183,7 @@ export function tableCase(
     // One reference train per note, the same as the app's card (src/profiles/referenceTrain.ts).
     const ref = { ...referenceOf(note, builtinTrains), ...(loco !== undefined ? { locomotive: loco } : {}), ...(count !== undefined ? { count } : {}), ...(temperature !== undefined ? { temperature_C: temperature } : {}) };
     const r = referenceCaseFile(note, builtinTrains, ref);
-    if (!r.ok) throw new InputError(errorWords()("refTrainUnusable", { id: note.id }), r.issues);
+    if (!r.ok) throw new InputError(`${note.id}: the reference train cannot be used`, r.issues);
     file = targetKmh !== undefined ? { ...r.value, target: { speed_kmh: cap(targetKmh) } } : r.value;
     source = note.referenceTrain ? "referenceTrain" : "defaultReferenceTrain";
     referenceTrain = ref.train;

@@ -48,7 +48,6 @@ export const cliErrorsDe = translation<typeof cliErrors.en>()({
   ruleRange: "von {min} bis {max} {unit}",
   ruleAbove: "größer als 0 und höchstens {max} {unit}",
   locoUnknown: "--loco: kein Lokprofil {id} (bekannt: {list})",
-  refTrainUnusable: "{id}: der Referenzzug ist nicht verwendbar",
   locoNeeded: "--loco ID wird mit den Zugoptionen --wagons, --wagon-type, --slack und --limit gebraucht (bekannte Profile: {list})",
   wagonTypeUnknown: "--wagon-type: keine Wagenbauart {id} (bekannt: {list})",
   tableTrainInvalid: "der Zug für die Tafel ist nicht gültig",

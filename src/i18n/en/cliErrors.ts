@@ -49,7 +49,6 @@ export const cliErrors = namespace("cliErrors", {
   ruleRange: "from {min} to {max} {unit}",
   ruleAbove: "greater than 0 and at most {max} {unit}",
   locoUnknown: "--loco: no locomotive profile {id} (known: {list})",
-  refTrainUnusable: "{id}: the reference train cannot be used",
   locoNeeded: "--loco ID is needed with the train options --wagons, --wagon-type, --slack and --limit (known profiles: {list})",
   wagonTypeUnknown: "--wagon-type: no wagon type {id} (known: {list})",
   tableTrainInvalid: "the train for the table is not valid",

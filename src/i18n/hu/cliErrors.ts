@@ -48,7 +48,6 @@ export const cliErrorsHu = translation<typeof cliErrors.en>()({
   ruleRange: "{min} és {max} {unit} közötti",
   ruleAbove: "0-nál nagyobb, legfeljebb {max} {unit}",
   locoUnknown: "--loco: nincs {id} mozdonyprofil (ismertek: {list})",
-  refTrainUnusable: "{id}: a mintavonat nem használható",
   locoNeeded: "a --wagons, --wagon-type, --slack és --limit vonatkapcsolók mellé --loco ID kell (ismert profilok: {list})",
   wagonTypeUnknown: "--wagon-type: nincs {id} kocsitípus (ismertek: {list})",
   tableTrainInvalid: "a táblázat vonata nem érvényes",
