@@ -107,7 +107,9 @@ export const planCommand: Command = {
     const speculation = speculateMassVerdicts(c);
     let report: PlanReport;
     try {
-      report = planReport(c, meta, { assistance: !values["no-assistance"], ...(helper ? { helper } : {}), ...(control ? { control } : {}), ...(speculation ? { massVerdictAt: speculation.verdictAt } : {}) });
+      // The printout shows neither the verifying re-run nor the sensitivity table (the JSON has both): not computed for it.
+      const printed = !values.json;
+      report = planReport(c, meta, { assistance: !values["no-assistance"], printed, ...(helper ? { helper } : {}), ...(control ? { control } : {}), ...(speculation ? { massVerdictAt: speculation.verdictAt } : {}) });
     } finally {
       await speculation?.close();
     }
@@ -133,6 +135,11 @@ export interface PlanReportOptions {
   control?: UnitControl;
   /** Verdicts of the mass search found on other threads (batch/speculate.ts). */
   massVerdictAt?: MassVerdictLookup;
+  /**
+   * For the printout only: skip what it does not show — the verifying re-run on the median rail and the
+   * sensitivity table (the report then has none; every printed figure is the same).
+   */
+  printed?: boolean;
 }
 
 export function planReport(c: StartCase, meta: PlanReport["case"], opts: PlanReportOptions = {}): PlanReport {
@@ -141,7 +148,7 @@ export function planReport(c: StartCase, meta: PlanReport["case"], opts: PlanRep
 }
 
 function reportWithAssistance(c: StartCase, meta: PlanReport["case"], opts: PlanReportOptions): PlanReport {
-  const p = planStart(c, opts.massVerdictAt ? { massVerdictAt: opts.massVerdictAt } : {});
+  const p = planStart(c, { ...(opts.massVerdictAt ? { massVerdictAt: opts.massVerdictAt } : {}), ...(opts.printed ? { skipVerification: true, skipSensitivity: true } : {}) });
   const rep = reportOf(c, p, meta);
   if (opts.assistance !== false && p.verdict !== "starts") {
     const a = searchAssistance(c, {
