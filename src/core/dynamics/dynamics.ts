@@ -59,8 +59,7 @@ export interface DynamicsState {
   restless: Uint8Array;
   /** `restless` describes the state (false after an evaluation of every vehicle, which does not keep it). */
   restlessValid: boolean;
-  /** Vehicles evaluated this evaluation (scratch), and runs of them as [first, last] pairs. */
-  active: Uint8Array;
+  /** Runs of the vehicles evaluated at the last evaluation as [first, last] pairs (scratch). */
   runs: Int32Array;
   /** The interval maxima were reset (`observe`) and the couplings not evaluated since are not in them yet. */
   intervalMaxStale: boolean;
@@ -141,7 +140,6 @@ export function createState(m: TrainModel, opts: { trackEnergy?: boolean } = {})
     energy: null,
     restless: new Uint8Array(n),
     restlessValid: false,
-    active: new Uint8Array(n),
     runs: new Int32Array(2 * n + 2),
     intervalMaxStale: false,
   };
@@ -249,29 +247,28 @@ export function stepActive(m: TrainModel, s: DynamicsState, dt: number): void {
   const x = s.x;
   const v = s.v;
   const acc = s.acc;
-  for (let i = 0; i < n; i++) {
-    if (restless[i] === 0) continue;
-    let vi = v[i]!;
-    const ai = acc[i]!;
-    if (ai !== 0) {
-      const vn = vi + ai * h;
-      vi = (vi > 0 && vn < 0) || (vi < 0 && vn > 0) ? 0 : vn;
-      v[i] = vi;
-    }
-    x[i]! += vi * dt;
-  }
-  s.t += dt;
-  // Which vehicles to evaluate, as runs of neighbours.
-  const active = s.active;
   const runs = s.runs;
   for (let k = 0; k < m.nl; k++) restless[m.locoVehicle[k]!] = 1;
+  // One pass: the first half-kick and drift of the restless vehicles, and which vehicles to evaluate (the
+  // restless and their neighbours) as runs.
   let count = 0;
   let nRuns = 0;
   let open = false;
+  let before = 0;
+  let here = restless[0]!;
   for (let i = 0; i < n; i++) {
-    const a = restless[i]! | (i > 0 ? restless[i - 1]! : 0) | (i < n - 1 ? restless[i + 1]! : 0);
-    active[i] = a;
-    if (a !== 0) {
+    const after = i < n - 1 ? restless[i + 1]! : 0;
+    if (here !== 0) {
+      let vi = v[i]!;
+      const ai = acc[i]!;
+      if (ai !== 0) {
+        const vn = vi + ai * h;
+        vi = (vi > 0 && vn < 0) || (vi < 0 && vn > 0) ? 0 : vn;
+        v[i] = vi;
+      }
+      x[i]! += vi * dt;
+    }
+    if ((before | here | after) !== 0) {
       count++;
       if (!open) {
         runs[2 * nRuns] = i;
@@ -282,7 +279,10 @@ export function stepActive(m: TrainModel, s: DynamicsState, dt: number): void {
       nRuns++;
       open = false;
     }
+    before = here;
+    here = after;
   }
+  s.t += dt;
   if (open) nRuns++;
   vehicleSteps += count;
   evaluateRuns(m, s, dt, h, runs, nRuns, restless);
