@@ -14,6 +14,50 @@ import { bunchedSlackM, integratorSteps, modelFromCase, RUN_OUT_STEP_S, stepDivi
 import type { StartCase } from "../../src/core/train/types.js";
 import { longTrainCase } from "./dynamics.js";
 import { heading, line, median, target, timeRuns } from "./util.js";
+import { setActiveOnlyStepping, vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
+import { vehicleStepsBeforeAllMoved } from "../../src/core/dynamics/runner.js";
+import { seededDepartures } from "../tools/departures.js";
+
+/** CPU time of `fn` (this thread's process: user + system), ms, `runs` times after one unmeasured run. */
+function cpuRuns<T>(fn: () => T, runs: number): { times: number[]; last: T } {
+  let last = fn();
+  const times: number[] = [];
+  for (let k = 0; k < runs; k++) {
+    const t0 = process.cpuUsage();
+    last = fn();
+    const d = process.cpuUsage(t0);
+    times.push((d.user + d.system) / 1000);
+  }
+  return { times, last };
+}
+
+/**
+ * The work of one plan (issue 14, the brake-release phase): vehicle-steps per plan over seeded departures,
+ * in all and before every vehicle has moved (brakes releasing, slack taken up), integrating every vehicle at
+ * every step ("before") against only the vehicles that can change (`stepActive`, exact: the same plans).
+ */
+function benchPlanWork(): void {
+  const cases = seededDepartures(12, 200);
+  heading(`Work per plan — ${cases.length} seeded all-different departures (plan without mass search), full step against only what can change`);
+  const runAll = (activeOnly: boolean) => {
+    setActiveOnlyStepping(activeOnly);
+    const w0 = vehicleStepsDone();
+    const b0 = vehicleStepsBeforeAllMoved();
+    const t0 = process.cpuUsage();
+    for (const c of cases) planStart(c, { skipMassSearch: true });
+    const d = process.cpuUsage(t0);
+    return { work: vehicleStepsDone() - w0, before: vehicleStepsBeforeAllMoved() - b0, cpuMs: (d.user + d.system) / 1000 };
+  };
+  runAll(true); // warm-up
+  const full = runAll(false);
+  const active = runAll(true);
+  setActiveOnlyStepping(true);
+  const per = (x: number) => `${(x / cases.length / 1e6).toFixed(2)} M`;
+  line("vehicle-steps per plan, full step (before)", per(full.work), `before every vehicle moves: ${per(full.before)} (${((100 * full.before) / full.work).toFixed(0)} %)`);
+  line("vehicle-steps per plan, only what can change (after)", per(active.work), `before every vehicle moves: ${per(active.before)} (${((100 * active.before) / active.work).toFixed(0)} %)`);
+  line("work of the brake-release phase, after ÷ before", `${(active.before / full.before).toFixed(2)}×`, `whole plan ${(active.work / full.work).toFixed(2)}×`);
+  line("CPU per plan, before → after", `${(full.cpuMs / cases.length).toFixed(0)} → ${(active.cpuMs / cases.length).toFixed(0)} ms`, `${(active.cpuMs / full.cpuMs).toFixed(2)}×`);
+}
 
 /** The INTERFACE.md example size: 40 wagons on the demo's Ashvale Loop, one 3000 kW unit, 1800 t, dry. */
 function fortyWagonCase(): StartCase {
@@ -54,6 +98,12 @@ export function benchPlanner(): void {
   }
   const long = timeRuns(() => planStart(cases[cases.length - 2]![1], { skipMassSearch: true }), 3, 1);
   target({ target: "one plan, 150 wagons (search + verifying run, in process)", figure: `${median(long.times).toFixed(0)} ms`, ratio: null, note: "see the whole `taut plan` process below" });
+  // CPU of one plan (search + verifying run) against the planner's own targets: 300 ms at 40 wagons, 1.5 s at 150.
+  const cpu40 = median(cpuRuns(() => planStart(cases[cases.length - 3]![1], { skipMassSearch: true }), 5).times);
+  target({ target: "one plan's CPU, 40 wagons ≤ 300 ms", figure: `${cpu40.toFixed(0)} ms`, ratio: cpu40 / 300 });
+  const cpu150 = median(cpuRuns(() => planStart(cases[cases.length - 2]![1], { skipMassSearch: true }), 3).times);
+  target({ target: "one plan's CPU, 150 wagons ≤ 1.5 s", figure: `${cpu150.toFixed(0)} ms`, ratio: cpu150 / 1500 });
+  benchPlanWork();
   const grouped = timeRuns(() => planStart(cases[cases.length - 1]![1], { skipMassSearch: true }), 3, 1);
   target({ target: "one plan, 150 wagons with head and rear groups (in process) ≤ 1.5 s", figure: `${median(grouped.times).toFixed(0)} ms`, ratio: null, note: `${grouped.last.verdict}; ${grouped.last.steps.length} steps` });
   benchStep(cases);
