@@ -65,9 +65,16 @@ export function App(props: { state: AppContextValue; screens: readonly ScreenEnt
           <nav class="tabs" aria-label={t("screensNav")}>
             <For each={props.screens.filter((x) => !x.noTab)}>
               {(x) => (
-                <a class="tab" href={`#/${x.id}`} aria-current={x.id === current().id ? "page" : undefined} onClick={(e) => (e.preventDefault(), s.nav.go(x.id))}>
+                <a
+                  class="tab"
+                  href={`#/${x.id}`}
+                  // The screen's full name, also where its tab shows a shorter word (i18n tabs.ts).
+                  aria-label={x.title}
+                  aria-current={x.id === current().id ? "page" : undefined}
+                  onClick={(e) => (e.preventDefault(), s.nav.go(x.id))}
+                >
                   {typeof x.icon === "string" ? <Icon name={x.icon} size={28} /> : x.icon()}
-                  <span>{x.title}</span>
+                  <span class="tab-label">{x.tab ?? x.title}</span>
                 </a>
               )}
             </For>

@@ -23,7 +23,10 @@ describe("screen registry and tabs", () => {
     const screens = [...SCREENS.slice(0, -1), extra, SCREENS.at(-1)!];
     renderWithApp(undefined, { screens });
     const tabs = screen.getAllByRole("link");
-    expect(tabs.map((t) => t.textContent)).toEqual(screens.filter((s) => !s.noTab).map((s) => s.title));
+    // Each tab shows its words (the name, or a shorter word: i18n tabs.ts) and is named by the screen's full name.
+    expect(tabs.map((t) => t.textContent)).toEqual(screens.filter((s) => !s.noTab).map((s) => s.tab ?? s.title));
+    expect(tabs.map((t) => t.getAttribute("aria-label"))).toEqual(screens.filter((s) => !s.noTab).map((s) => s.title));
+    expect(tabs.find((t) => t.getAttribute("aria-label") === "Assistance check")?.textContent).toBe("Assis\u00ADtance");
     fireEvent.click(screen.getByRole("link", { name: "Example screen" }));
     expect(screen.getByText("table screen")).toBeTruthy();
     expect(location.hash).toBe("#/example-screen");

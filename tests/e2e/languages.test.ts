@@ -36,6 +36,12 @@ import { groupsDe } from "../../src/i18n/de/groups.js";
 import { groupsHu } from "../../src/i18n/hu/groups.js";
 import { cabDe } from "../../src/i18n/de/cab.js";
 import { cabHu } from "../../src/i18n/hu/cab.js";
+import { sketch } from "../../src/i18n/en/sketch.js";
+import { sketchDe } from "../../src/i18n/de/sketch.js";
+import { sketchHu } from "../../src/i18n/hu/sketch.js";
+import { dispatch } from "../../src/i18n/en/dispatch.js";
+import { dispatchDe } from "../../src/i18n/de/dispatch.js";
+import { dispatchHu } from "../../src/i18n/hu/dispatch.js";
 
 let context: BrowserContext;
 let page: Page;
@@ -147,7 +153,7 @@ describe("Taut in three languages", () => {
   it("switches to Hungarian and German in Settings, keeps the choice over a reload, and shows every screen (screenshots)", async () => {
     await page.goto(base);
     await go("start-plan");
-    expect(await page.locator("a.tab").allTextContents()).toEqual(expect.arrayContaining([...TITLES.en]));
+    expect(await page.locator("a.tab").evaluateAll((els) => els.map((e) => e.getAttribute("aria-label") ?? ""))).toEqual(expect.arrayContaining([...TITLES.en]));
     // A mixed train with a helper at the rear, so the wagon-groups form, a second locomotive group and Cab
     // steps' choice of driver are on screen in every language below (the draft is kept over reloads).
     await page.locator('[data-action="add-wagon-group"]').first().click();
@@ -157,11 +163,11 @@ describe("Taut in three languages", () => {
     for (const [lang, name] of [["hu", "Magyar"], ["de", "Deutsch"]] as const) {
       await go("settings");
       await page.getByRole("radio", { name }).click();
-      await expect.poll(() => page.locator("a.tab").allTextContents()).toEqual(expect.arrayContaining([...TITLES[lang]]));
+      await expect.poll(() => page.locator("a.tab").evaluateAll((els) => els.map((e) => e.getAttribute("aria-label") ?? ""))).toEqual(expect.arrayContaining([...TITLES[lang]]));
       expect(await page.evaluate(() => document.documentElement.lang)).toBe(lang);
       await page.reload();
       await go("start-plan");
-      expect(await page.locator("a.tab").allTextContents()).toEqual(expect.arrayContaining([...TITLES[lang]]));
+      expect(await page.locator("a.tab").evaluateAll((els) => els.map((e) => e.getAttribute("aria-label") ?? ""))).toEqual(expect.arrayContaining([...TITLES[lang]]));
       const verdict = (await page.locator(".verdict .verdict-word").textContent()) ?? "";
       const w = lang === "hu" ? wordsHu : wordsDe;
       expect([w.verdictStarts, w.verdictMarginal, w.verdictNeedsAssistance]).toContain(verdict);
@@ -203,7 +209,11 @@ describe("Taut in three languages", () => {
   }, 300_000);
 
   it("prints the location card in each language with the note's name and its load table (PDF text)", async () => {
-    for (const [lang, c, name] of [["en", card.en, "English"], ["hu", cardHu, "Magyar"], ["de", cardDe, "Deutsch"]] as const) {
+    for (const [lang, c, name, sk, place] of [
+      ["en", card.en, "English", sketch.en, dispatch.en.atHead],
+      ["hu", cardHu, "Magyar", sketchHu, dispatchHu.atHead],
+      ["de", cardDe, "Deutsch", sketchDe, dispatchDe.atHead],
+    ] as const) {
       await go("location-notes");
       // The first note's card button (its label is in the language on screen), and the note's name beside it.
       const item = page.locator(".notes-list .notes-item").first();
@@ -224,6 +234,10 @@ describe("Taut in three languages", () => {
       const dry = lang === "en" ? "Dry" : lang === "hu" ? wordsHu.railDry : wordsDe.railDry;
       expect(text, lang).toContain(`${dry} ${cells[0]} ${cells[1]}`);
       expect(cells[0]).toMatch(/\d/);
+      // The profile's legend and the reference train's locomotives in the card's language too.
+      expect(text, lang).toContain(sk.stretched as string);
+      expect(text, lang).toContain(sk.hazard as string);
+      expect(text, lang).toContain(` ${place as string}`);
       // Back to the library (the card view's last button).
       await page.locator(".notes-card-view .notes-row-actions button").last().click();
     }

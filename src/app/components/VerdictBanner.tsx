@@ -8,6 +8,7 @@ import type { Reason, Verdict } from "../../core/planner/outcome.js";
 import { words as en } from "../../i18n/en/words.js";
 import { tr } from "../i18n.js";
 import { words } from "../words.js";
+import { Figures } from "./Figures.js";
 
 const t = tr.ns(en);
 
@@ -72,7 +73,7 @@ export function VerdictBanner(props: VerdictBannerProps): JSX.Element {
         </Show>
         <Show when={props.masses}>
           <p class="verdict-masses" data-masses>
-            {props.masses}
+            <Figures text={props.masses!} />
           </p>
         </Show>
         <Show when={props.reasons.length > 0}>

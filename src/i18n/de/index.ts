@@ -16,6 +16,7 @@ import { adviceDe } from "./advice.js";
 import { trainDe } from "./train.js";
 import { groupsDe } from "./groups.js";
 import { cabDe } from "./cab.js";
+import { tabsDe } from "./tabs.js";
 import { chartDe } from "./chart.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe, train: trainDe, chart: chartDe, groups: groupsDe, cab: cabDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe, train: trainDe, chart: chartDe, groups: groupsDe, cab: cabDe, tabs: tabsDe };

@@ -7,5 +7,7 @@ import type { Catalog } from "../messages.js";
 import { departuresDe } from "./departures.js";
 import { noteChecksDe } from "./noteChecks.js";
 import { notesDe } from "./notes.js";
+import { compactDe } from "./compact.js";
+import { sketchDe } from "./sketch.js";
 
-export const deLater: Catalog = { departures: departuresDe, notes: notesDe, noteChecks: noteChecksDe };
+export const deLater: Catalog = { departures: departuresDe, notes: notesDe, noteChecks: noteChecksDe, compact: compactDe, sketch: sketchDe };

@@ -28,5 +28,8 @@ import { cliNotes } from "./cliNotes.js";
 import { cliHelp } from "./cliHelp.js";
 import { cliErrors } from "./cliErrors.js";
 import { railmlText } from "./railmlText.js";
+import { tabs } from "./tabs.js";
+import { compact } from "./compact.js";
+import { sketch } from "./sketch.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors, railmlText] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors, railmlText, tabs, compact, sketch] as const;

@@ -16,6 +16,7 @@ import { adviceHu } from "./advice.js";
 import { trainHu } from "./train.js";
 import { groupsHu } from "./groups.js";
 import { cabHu } from "./cab.js";
+import { tabsHu } from "./tabs.js";
 import { chartHu } from "./chart.js";
 
-export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu, dispatch: dispatchHu, cautions: cautionsHu, reasons: reasonsHu, guidance: guidanceHu, assistNotes: assistNotesHu, advice: adviceHu, train: trainHu, chart: chartHu, groups: groupsHu, cab: cabHu };
+export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu, dispatch: dispatchHu, cautions: cautionsHu, reasons: reasonsHu, guidance: guidanceHu, assistNotes: assistNotesHu, advice: adviceHu, train: trainHu, chart: chartHu, groups: groupsHu, cab: cabHu, tabs: tabsHu };

@@ -7,5 +7,7 @@ import type { Catalog } from "../messages.js";
 import { departuresHu } from "./departures.js";
 import { noteChecksHu } from "./noteChecks.js";
 import { notesHu } from "./notes.js";
+import { compactHu } from "./compact.js";
+import { sketchHu } from "./sketch.js";
 
-export const huLater: Catalog = { departures: departuresHu, notes: notesHu, noteChecks: noteChecksHu };
+export const huLater: Catalog = { departures: departuresHu, notes: notesHu, noteChecks: noteChecksHu, compact: compactHu, sketch: sketchHu };

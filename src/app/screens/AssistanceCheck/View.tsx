@@ -25,6 +25,7 @@ import type { CheckStatus } from "./createAssistanceCheck.js";
 import { marginChart, MARGIN_AXIS_TOP } from "./marginChart.js";
 import { RailSandTable } from "../shared/RailSandTable.js";
 import { assist } from "../../../i18n/en/assist.js";
+import { Figures } from "../../components/Figures.js";
 
 const t = tr.ns(assist);
 
@@ -77,7 +78,11 @@ export function AssistanceView(props: AssistanceViewProps): JSX.Element {
           when={props.info}
           fallback={<p class="problem">{t("invalid")}</p>}
         >
-          {(i) => <For each={i().lines}>{(l) => <p class="dispatch-line">{l}</p>}</For>}
+          {(i) => <For each={i().lines}>{(l) => (
+                <p class="dispatch-line">
+                  <Figures text={l} />
+                </p>
+              )}</For>}
         </Show>
         <Show when={props.profiles && props.added && props.onAdded}>
           <div class="row added-unit" data-field="added-unit">
@@ -153,7 +158,11 @@ function Options(props: { answer: AssistanceAnswer; units: UnitSystem; canTry: b
       </Show>
       <Show when={a().needed && a().base.reasons.length > 0}>
         <ul class="reasons">
-          <For each={a().base.reasons}>{(r: Reason) => <li>{words.reasonLine(r)}</li>}</For>
+          <For each={a().base.reasons}>{(r: Reason) => (
+            <li>
+              <Figures text={words.reasonLine(r)} />
+            </li>
+          )}</For>
         </ul>
       </Show>
       <Show when={a().needed} fallback={<StartsAlready answer={a()} units={props.units} />}>
@@ -239,7 +248,9 @@ function OptionCard(props: { option: AssistanceOptionData; rank: number; units: 
           </div>
         </Show>
       </dl>
-      <p class="option-note">{assistanceNoteText(tr, appQuantities(props.units), o().note)}</p>
+      <p class="option-note">
+        <Figures text={assistanceNoteText(tr, appQuantities(props.units), o().note)} />
+      </p>
       <div class="option-actions">
         <button type="button" class="button" disabled={!props.canTry} onClick={() => props.onTry(o())}>
           <Icon name="add" /> {t("planWithHelp")}
@@ -276,7 +287,9 @@ function NothingWorks(props: { answer: AssistanceAnswer; units: UnitSystem }): J
         {(d) => (
           <div class="divide-card">
             <h3>{t("divideHeading")}</h3>
-            <p class="divide-line">{divideLine(d(), props.units)}</p>
+            <p class="divide-line">
+              <Figures text={divideLine(d(), props.units)} />
+            </p>
             <Show when={d().verdict}>
               {(v) => (
                 <p>

@@ -13,6 +13,7 @@ import { notchText } from "../../steps.js";
 import { steps } from "../../../i18n/en/steps.js";
 import { tr } from "../../i18n.js";
 import { slipGuidanceText, slipHeadlineText } from "../../../i18n/renderSlip.js";
+import { Figures } from "../../components/Figures.js";
 
 const t = tr.ns(steps);
 
@@ -92,7 +93,11 @@ export function SlipCard(props: SlipCardProps): JSX.Element {
 }
 
 function SlipList(props: { title: string; items: readonly string[]; units: UnitSystem; lead?: boolean; bullets?: boolean }): JSX.Element {
-  const items = () => <For each={props.items}>{(t) => <li>{localiseText(t, props.units)}</li>}</For>;
+  const items = () => <For each={props.items}>{(t) => (
+        <li>
+          <Figures text={localiseText(t, props.units)} />
+        </li>
+      )}</For>;
   return (
     <Show when={props.items.length > 0}>
       <section class="slip-list" classList={{ lead: props.lead === true, reason: props.bullets === true }}>

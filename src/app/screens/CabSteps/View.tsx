@@ -17,6 +17,7 @@ import { steps } from "../../../i18n/en/steps.js";
 import { cab } from "../../../i18n/en/cab.js";
 import { tr } from "../../i18n.js";
 import { SlipCard } from "./SlipCard.js";
+import { Figures } from "../../components/Figures.js";
 
 export interface CabStepsViewProps {
   result: PlanResult | null;
@@ -157,7 +158,9 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
                   <dd>{stillSlipping(s())}</dd>
                 </div>
               </dl>
-              <p class="cab-why">{whyText(s().why, props.units)}</p>
+              <p class="cab-why">
+                <Figures text={whyText(s().why, props.units)} />
+              </p>
               <p class="cab-clock" aria-label={t("timeInStep", { time: clock(props.stepSeconds) })}>
                 <Icon name="clock" size={32} /> <span>{clock(props.stepSeconds)}</span>
                 <span class="cab-small">{t("inThisStep")}</span>

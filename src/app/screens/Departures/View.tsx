@@ -14,6 +14,7 @@ import { words } from "../../words.js";
 import { margin, show, showAtMost, type UnitSystem } from "../../format.js";
 import { Cautions } from "../shared/Cautions.js";
 import { departures } from "../../../i18n/en/departures.js";
+import { compact } from "../../../i18n/en/compact.js";
 import { tr } from "../../i18n.js";
 import { kept, rich } from "../shared/rich.js";
 import { divideLine, limitWord, optionHeadline } from "../shared/words.js";
@@ -21,6 +22,7 @@ import type { RunState } from "./createDeparturesRun.js";
 import type { DepartureRow, DeparturesSummary } from "./rows.js";
 
 const t = tr.ns(departures);
+const tc = tr.ns(compact);
 
 export interface LoadedFile {
   name: string;
@@ -275,7 +277,7 @@ function Row(props: { row: DepartureRow; units: UnitSystem; onOpen?: (row: Depar
   const x = () => props.row;
   const a = () => x().answer;
   const sub = () =>
-    [x().where, x().rail ? `${((RAIL_CONDITIONS as readonly string[]).includes(x().rail!) ? words.rail(x().rail as RailCondition) : x().rail)}${x().sand ? `, ${t("sand")}` : `, ${t("noSand")}`}` : "", x().trailingMassKg !== undefined ? show("mass", x().trailingMassKg!, props.units) : ""]
+    [x().line !== undefined ? tc("fileLine", { line: String(x().line) }) : x().where, x().rail ? `${((RAIL_CONDITIONS as readonly string[]).includes(x().rail!) ? words.rail(x().rail as RailCondition) : x().rail)}${x().sand ? `, ${t("sand")}` : `, ${t("noSand")}`}` : "", x().trailingMassKg !== undefined ? show("mass", x().trailingMassKg!, props.units) : ""]
       .filter((s) => s !== "")
       .join(" · ");
   const remedy = (): JSX.Element => {
@@ -309,10 +311,10 @@ function Row(props: { row: DepartureRow; units: UnitSystem; onOpen?: (row: Depar
         </Show>
       </td>
       <td data-label={t("colWhy")} class="why">{a() ? (a()!.reasons.length > 0 ? a()!.reasons.map((r) => words.reason(r)).join(", ") : "—") : ""}</td>
-      <td data-label={t("colMargin")} data-short="margin" class="num">
+      <td data-label={t("colMargin")} data-short="margin" data-word={tc("margin")} class="num">
         {a() ? `${margin(a()!.margin)} (${limitWord(a()!.binding)})` : ""}
       </td>
-      <td data-label={t("colLargest")} data-short="largest" class="num">
+      <td data-label={t("colLargest")} data-short="largest" data-word={tc("largest")} class="num">
         {a() ? (a()!.maxStartableMassKg >= 1000 ? showAtMost("mass", a()!.maxStartableMassKg, props.units) : t("none")) : ""}
       </td>
       <td data-label={t("colAssistance")} class="remedy">

@@ -19,6 +19,7 @@ import { loadChart } from "./loadChart.js";
 import { RailSandTable } from "../shared/RailSandTable.js";
 import { dispatch } from "../../../i18n/en/dispatch.js";
 import { tr } from "../../i18n.js";
+import { Figures } from "../../components/Figures.js";
 
 const t = tr.ns(dispatch);
 
@@ -119,7 +120,9 @@ export function LoadTableView(props: LoadTableViewProps): JSX.Element {
               onChange={(v) => props.onCount(Number(v))}
               options={["1", "2", "3", "4"].map((v) => ({ value: v, label: v }))}
             />
-            <p class="muted">{props.describe}</p>
+            <p class="muted">
+              <Figures text={props.describe} />
+            </p>
           </section>
         </div>
 

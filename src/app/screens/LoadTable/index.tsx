@@ -6,6 +6,7 @@
 import { createMemo, createSignal, type JSX, type Signal } from "solid-js";
 import { builtinTrains } from "../../../profiles/builtin.js";
 import { referenceCase, referenceSummary } from "../../../profiles/referenceTrain.js";
+import { referenceLocomotiveWords } from "../shared/referenceWords.js";
 import type { LocationNoteFile, ReferenceTrainFile } from "../../../profiles/schemas.js";
 import { PALETTES } from "../../charts/palette.js";
 import { useApp } from "../../context.js";
@@ -82,6 +83,11 @@ export default function LoadTable(): JSX.Element {
     const r = ref();
     return r ? referenceSummary(r, builtinTrains, lib()) : null;
   });
+  // The locomotives in the language on screen ("1 × … an der Spitze"), not the summary's English words.
+  const locomotiveWords = createMemo(() => {
+    const r = ref();
+    return (r && referenceLocomotiveWords(r, builtinTrains, lib())) ?? summary()?.locomotives ?? "";
+  });
   return (
     <LoadTableView
       locations={locations()}
@@ -93,7 +99,7 @@ export default function LoadTable(): JSX.Element {
       count={ref()?.count ?? 1}
       describe={(() => {
         const s = summary();
-        return s ? t("describe", { train: s.trainLabel, locomotives: s.locomotives }) : "";
+        return s ? t("describe", { train: s.trainLabel, locomotives: locomotiveWords() }) : "";
       })()}
       trainMassKg={(() => {
         const s = summary();

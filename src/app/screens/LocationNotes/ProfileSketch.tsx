@@ -7,9 +7,11 @@ import { For, Show, type JSX } from "solid-js";
 import { formatNumber, toDisplay, unitSymbol, type UnitSystem } from "../../format.js";
 import { alongGround, exaggerationFor, exaggerationWords, type ProfileModel } from "./profileModel.js";
 import { notes } from "../../../i18n/en/notes.js";
+import { sketch } from "../../../i18n/en/sketch.js";
 import { tr } from "../../i18n.js";
 
 const nt = tr.ns(notes);
+const st = tr.ns(sketch);
 
 const W = 1000;
 const H = 300;
@@ -40,6 +42,11 @@ export function ProfileSketch(props: { model: ProfileModel; units: UnitSystem })
   const label = (metres: number) => `${formatNumber(d(metres), 0)} ${unit()}`;
   const hAt = (x: number) => alongGround(m().ground, x, x)[0]!.h;
   const labelY = (y: number) => Math.max(LABEL_TOP, y);
+  /** Where the legend's second and third items start: after the words before them in the language on screen (about 9.5 px a letter at 17 px). */
+  const legendX = () => {
+    const second = 50 + st("stretched").length * 9.5 + 28;
+    return [second, second + 50 + st("bunched").length * 9.5 + 28] as const;
+  };
   const ticks = () => {
     const span = m().endM - m().startM;
     const raw = span / 6;
@@ -66,7 +73,7 @@ export function ProfileSketch(props: { model: ProfileModel; units: UnitSystem })
         )}
       </For>
       <text x={W - PAD.right} y={H - 4} font-size="16" text-anchor="end" fill="#444">
-        {`distance along the line, ${unit()} · ${exaggerationWords(exaggeration())}`}
+        {nt("ppDistance", { unit: unit(), heights: exaggerationWords(exaggeration()) })}
       </text>
       <Show when={m().train}>
         {(t) => (
@@ -85,7 +92,7 @@ export function ProfileSketch(props: { model: ProfileModel; units: UnitSystem })
             </For>
             <line x1={sx(t().frontM)} y1={sy(hAt(t().frontM)) - 36} x2={sx(t().frontM)} y2={sy(hAt(t().frontM)) + 4} stroke="#111" stroke-width="2" />
             <text x={sx(t().frontM) - 6} y={labelY(sy(hAt(t().frontM)) - 42)} font-size="18" text-anchor="end" fill="#111" font-weight="bold">
-              {`front ${label(t().frontM)}`}
+              {st("front", { distance: label(t().frontM) })}
             </text>
           </g>
         )}
@@ -93,7 +100,7 @@ export function ProfileSketch(props: { model: ProfileModel; units: UnitSystem })
       <Show when={m().clearEndM > m().frontM}>
         <path d={path(alongGround(m().ground, m().frontM, m().clearEndM), 7)} fill="none" stroke="#111" stroke-width="2.5" stroke-dasharray="3 5" />
         <text x={sx(m().frontM) + 10} y={labelY(sy(hAt(m().frontM)) - 42)} font-size="17" text-anchor="start" fill="#111">
-          {`clear ${label(m().clearEndM - m().frontM)} →`}
+          {st("clear", { distance: label(m().clearEndM - m().frontM) })}
         </text>
       </Show>
       <For each={m().hazards}>
@@ -109,15 +116,15 @@ export function ProfileSketch(props: { model: ProfileModel; units: UnitSystem })
       <g transform={`translate(${PAD.left}, 14)`}>
         <line x1="0" y1="0" x2="42" y2="0" stroke="#111" stroke-width="10" />
         <text x="50" y="6" font-size="17" fill="#111">
-          couplings stretched
+          {st("stretched")}
         </text>
-        <line x1="230" y1="0" x2="272" y2="0" stroke="#111" stroke-width="10" stroke-dasharray="14 7" />
-        <text x="280" y="6" font-size="17" fill="#111">
-          couplings bunched
+        <line x1={legendX()[0]} y1="0" x2={legendX()[0] + 42} y2="0" stroke="#111" stroke-width="10" stroke-dasharray="14 7" />
+        <text x={legendX()[0] + 50} y="6" font-size="17" fill="#111">
+          {st("bunched")}
         </text>
-        <path d="M470,-8 l-9,17 h18 z" fill="#fff" stroke="#111" stroke-width="2" />
-        <text x="486" y="6" font-size="17" fill="#111">
-          hazard (numbered below)
+        <path d={`M${legendX()[1] + 9},-8 l-9,17 h18 z`} fill="#fff" stroke="#111" stroke-width="2" />
+        <text x={legendX()[1] + 25} y="6" font-size="17" fill="#111">
+          {st("hazard")}
         </text>
       </g>
     </svg>

@@ -10,6 +10,7 @@ import type { Library } from "../../../profiles/library.js";
 import type { LocationNoteFile, TrainPresetFile } from "../../../profiles/schemas.js";
 import { referenceCase, referenceSummary, type ReferenceSummary } from "../../../profiles/referenceTrain.js";
 import type { UnitSystem } from "../../format.js";
+import { referenceLocomotiveWords } from "../shared/referenceWords.js";
 import { draftFromNote, idFromName, joinSegments, newDraft, nextSegment, noteFromDraft, type NoteDraft } from "./draft.js";
 import { noteFigures, type NoteFigures } from "./figures.js";
 import type { ComputeLoadTable, LoadTableOutcome } from "./loadTableRunner.js";
@@ -91,7 +92,11 @@ export function createNoteEditor(deps: NoteEditorDeps): NoteEditor {
     return s === undefined || canonicalNote(asSavedShape() as LocationNoteFile) !== s;
   });
 
-  const reference = createMemo(() => referenceSummary(draft.referenceTrain, deps.presets, deps.library()));
+  // The locomotives in the language on screen (the summary's own words are English, for files and the command line).
+  const reference = createMemo((): ReferenceSummary => {
+    const r = referenceSummary(draft.referenceTrain, deps.presets, deps.library());
+    return { ...r, locomotives: referenceLocomotiveWords(draft.referenceTrain, deps.presets, deps.library()) ?? r.locomotives };
+  });
   const issues = createMemo(() => {
     JSON.stringify(draft);
     return checkDraft(unwrap(draft), { units: deps.units(), trainLengthM: reference().lengthM, changed: changed() });

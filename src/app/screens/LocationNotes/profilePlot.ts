@@ -7,9 +7,11 @@
 import { formatNumber, toDisplay, unitSymbol, type UnitSystem } from "../../format.js";
 import { alongGround, exaggerationFor, exaggerationWords, type ProfileModel, type ProfilePoint, type SlackWord } from "./profileModel.js";
 import { notes } from "../../../i18n/en/notes.js";
+import { sketch } from "../../../i18n/en/sketch.js";
 import { tr } from "../../i18n.js";
 
 const nt = tr.ns(notes);
+const st = tr.ns(sketch);
 
 export interface PlotTick {
   /** Pixel position along its axis. */
@@ -154,7 +156,7 @@ export function profilePlot(m: ProfileModel, units: UnitSystem, width: number, h
   if (m.train) {
     const fx = sx(m.train.frontM);
     const gy = sy(groundAt(m.train.frontM));
-    const text = `front ${dist(m.train.frontM)}`;
+    const text = st("front", { distance: dist(m.train.frontM) });
     // To the left of the mark, unless there is no room there.
     frontLabelRight = !fits(fx - 6, text, "end");
     const anchor = frontLabelRight ? "start" : "end";
@@ -162,7 +164,7 @@ export function profilePlot(m: ProfileModel, units: UnitSystem, width: number, h
     plot.front = { x: fx, y1: gy + 4, y2: gy - 34, label: { x, y: labelY(x, text, anchor, TRAIN_LIFT + 12), text, anchor } };
   }
   if (m.clearEndM > m.frontM) {
-    const text = `clear ${dist(m.clearEndM - m.frontM)} →`;
+    const text = st("clear", { distance: dist(m.clearEndM - m.frontM) });
     const x0 = sx(m.frontM) + 8;
     const anchor = fits(x0, text, "start") ? "start" : "end";
     const x = anchor === "start" ? x0 : width - 2;

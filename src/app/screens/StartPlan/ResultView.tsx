@@ -27,6 +27,7 @@ import { massesLine } from "./masses.js";
 import { cautionWords } from "../../cautions.js";
 import { plan } from "../../../i18n/en/plan.js";
 import { appNumber, tr } from "../../i18n.js";
+import { Figures } from "../../components/Figures.js";
 
 const t = tr.ns(plan);
 
@@ -193,7 +194,11 @@ export function ResultView(props: ResultViewProps): JSX.Element {
             </Show>
             <Show when={res().advice.length > 0}>
               <ul class="reasons advice" data-advice>
-                <For each={res().advice}>{(a) => <li>{adviceWords(a, props.units)}</li>}</For>
+                <For each={res().advice}>{(a) => (
+                    <li>
+                      <Figures text={adviceWords(a, props.units)} />
+                    </li>
+                  )}</For>
               </ul>
             </Show>
 

@@ -7,6 +7,7 @@ import { helperCallWords, whyText } from "../../lines.js";
 import { advanceLead, advanceOthers, groupNotchesText, notchText, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
 import { steps } from "../../../i18n/en/steps.js";
 import { tr } from "../../i18n.js";
+import { Figures } from "../../components/Figures.js";
 
 const t = tr.ns(steps);
 
@@ -38,7 +39,10 @@ export function StepCard(props: StepCardProps): JSX.Element {
         <p class="step-advance">
           <strong>{advanceLead(s(), props.units, props.target)}</strong>
           <Show when={advanceOthers(s(), props.units).length > 0}>
-            <span class="muted"> ({advanceOthers(s(), props.units).join(" · ")})</span>
+            <span class="muted">
+              {" "}
+              <Figures text={`(${advanceOthers(s(), props.units).join(" · ")})`} />
+            </span>
           </Show>
         </p>
         <dl class="figures">
@@ -61,7 +65,9 @@ export function StepCard(props: StepCardProps): JSX.Element {
             <dt>{t("tractiveEffort")}</dt>
             <dd>
               {show("force", s().tractiveEffortN, props.units)}
-              <span class="basis">{t("atStepEnd", { speed: show("speed", s().speedMps, props.units) })}</span>
+              <span class="basis">
+                <Figures text={t("atStepEnd", { speed: show("speed", s().speedMps, props.units) })} />
+              </span>
             </dd>
           </div>
           <div classList={{ alert: heavy() }}>
@@ -69,7 +75,9 @@ export function StepCard(props: StepCardProps): JSX.Element {
             <dd>
               {show("force", s().peakCouplerForceN, props.units)}
               <Show when={Number.isFinite(props.couplerWorkingN)}>
-                <span class="basis">{t("ofAllowed", { force: show("force", props.couplerWorkingN, props.units) })}</span>
+                <span class="basis">
+                  <Figures text={t("ofAllowed", { force: show("force", props.couplerWorkingN, props.units) })} />
+                </span>
               </Show>
             </dd>
           </div>
@@ -78,12 +86,14 @@ export function StepCard(props: StepCardProps): JSX.Element {
             <dd>
               {percentOf(s().adhesionUse, 0)}
               <span class="basis">
-                {t("highestAt", { speed: show("speed", s().adhesionUseAt.speedMps, props.units), force: show("force", s().adhesionUseAt.tractiveEffortN, props.units) })}
+                <Figures text={t("highestAt", { speed: show("speed", s().adhesionUseAt.speedMps, props.units), force: show("force", s().adhesionUseAt.tractiveEffortN, props.units) })} />
               </span>
             </dd>
           </div>
         </dl>
-        <p class="step-why">{whyText(s().why, props.units)}</p>
+        <p class="step-why">
+          <Figures text={whyText(s().why, props.units)} />
+        </p>
         <For each={(s().groups ?? []).filter((g) => g.coordination)}>{(g) => <p class="step-coordination">{helperCallWords(g.coordination!)}</p>}</For>
       </div>
     </li>

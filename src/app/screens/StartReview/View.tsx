@@ -13,6 +13,7 @@ import type { Verdict } from "../../../core/planner/outcome.js";
 import { review } from "../../../i18n/en/review.js";
 import { tr } from "../../i18n.js";
 import { words } from "../../words.js";
+import { Figures } from "../../components/Figures.js";
 
 const t = tr.ns(review);
 
@@ -83,7 +84,11 @@ export function StartReviewView(props: StartReviewViewProps): JSX.Element {
       <button type="button" class="button" onClick={() => props.onBack()}>
         {t("back")}
       </button>
-      <Show when={props.blocked} fallback={<p>{props.caseText}</p>}>
+      <Show when={props.blocked} fallback={
+          <p>
+            <Figures text={props.caseText} />
+          </p>
+        }>
         {(why) => <p class="problem" role="status">{why()}</p>}
       </Show>
       <Show when={!props.blocked}>
@@ -117,7 +122,11 @@ export function StartReviewView(props: StartReviewViewProps): JSX.Element {
           <div class="review-result">
             <h3>{t("shows")}</h3>
             <ul>
-              <For each={props.lines}>{(line) => <li>{line}</li>}</For>
+              <For each={props.lines}>{(line) => (
+                <li>
+                  <Figures text={line} />
+                </li>
+              )}</For>
             </ul>
             <Show when={r().series}>
               {(s) => (

@@ -4,6 +4,7 @@ import { STANDARD_CAUTIONS, type Caution } from "../../../core/planner/cautions.
 import { cautionWords } from "../../cautions.js";
 import { dispatch } from "../../../i18n/en/dispatch.js";
 import { tr } from "../../i18n.js";
+import { Figures } from "../../components/Figures.js";
 
 const t = tr.ns(dispatch);
 
@@ -12,7 +13,11 @@ export function Cautions(props: { extra?: readonly Caution[] }): JSX.Element {
     <section class="panel cautions" aria-labelledby="cautions-h">
       <h2 id="cautions-h">{t("cautions")}</h2>
       <ul>
-        <For each={[...STANDARD_CAUTIONS, ...(props.extra ?? [])]}>{(c) => <li>{cautionWords(c)}</li>}</For>
+        <For each={[...STANDARD_CAUTIONS, ...(props.extra ?? [])]}>{(c) => (
+            <li>
+              <Figures text={cautionWords(c)} />
+            </li>
+          )}</For>
       </ul>
     </section>
   );
