@@ -165,6 +165,8 @@ function checkOf(c: StartCase, o: CheckRequestOptions, onProgress?: Progress): C
       divideBudget: CHECK_DIVIDE_BUDGET,
       maxFullPlans: 1,
       reportedOnly: true,
+      // Only the cheapest option is reported, not the rejections: a candidate that cannot rank first is not judged to the end.
+      pruneLosers: true,
       lightestStarts: masses.startsKg > 0,
       onProgress: part(onProgress, 0.6, 1),
       ...(o.helper ? { spec: o.helper } : {}),

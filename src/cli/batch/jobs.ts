@@ -130,6 +130,8 @@ function checkJob(job: Extract<Job, { kind: "check" }>): CheckOutcome {
       divideBudget: CHECK_DIVIDE_BUDGET,
       maxFullPlans: 1,
       reportedOnly: true,
+      // Only the cheapest option is reported, not the rejections: a candidate that cannot rank first is not judged to the end.
+      pruneLosers: true,
       ...(masses ? { lightestStarts: masses.maxStartableMassKg > 0 } : {}),
       ...(job.helper ? { spec: job.helper } : {}),
     });

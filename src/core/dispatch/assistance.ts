@@ -11,8 +11,10 @@
 import { middleWagon, proportionalSplitWagon, withAddedUnits, leadSpec, type AddedUnits } from "./assistPlacement.js";
 import { divideTrain, type DividedTrain } from "./divideTrain.js";
 import { judge, planStart, quasiStaticLimits, type PlanResult } from "../planner/index.js";
+import { failedSoFar } from "../planner/decision.js";
 import { staticCheck } from "../planner/staticCheck.js";
 import { marginalBound, plannerContext } from "../planner/context.js";
+import { memoSearchPlan, withEvaluationMemo } from "../planner/evaluationMemo.js";
 import type { LimitCheck } from "../planner/outcome.js";
 import type { LocomotiveSpec } from "../physics/types.js";
 import type { Reason, Verdict } from "../planner/outcome.js";
@@ -73,8 +75,13 @@ export interface AssistanceResult {
   rejected: RejectedOption[];
   /** The largest first part that starts with the train's own locomotives, when no option works and the train needs assistance. */
   divide: DividedTrain | null;
-  /** Planner runs used (verdict runs, full plans and dividing). */
+  /** Planner runs used (verdict runs, full plans and dividing); a candidate stopped at the ceiling counts as one. */
   plannerRuns: number;
+  /**
+   * Candidates whose judgement stopped early (`pruneLosers`): a limit had already failed, or the peak coupler
+   * tension had passed the best options'. Not among `rejected`.
+   */
+  pruned: number;
   /** False when the budget ran out before every candidate was judged. */
   complete: boolean;
 }
@@ -106,6 +113,18 @@ export interface AssistanceOptions {
   reportedOnly?: boolean;
   /** Whether the lightly loaded train starts, when a mass search already knows (divideTrain.ts). */
   lightestStarts?: boolean;
+  /**
+   * Stop judging a candidate as soon as it cannot be among the options returned: a limit has failed (the
+   * verdict-only plan, decision.ts's `failedSoFar`), or its planned start's peak coupler tension has passed
+   * that of the `maxFullPlans`-th best option found so far at its number of units — ranked by that peak, it
+   * comes after them. Both look only at what the plan keeps (search.ts's `stopWhenFailed`), so the stop is
+   * certain, and a plan that does not stop is the whole plan. The options, their plans, the divided train,
+   * `plannerRuns` and `complete` are exactly those of the full ranking; `rejected` then lists only the
+   * candidates judged to the end (a stopped one is counted in `pruned`). For the departures check, which
+   * reports the options and not the rejections; default false (the plan and the assistance screen list every
+   * rejection with its reasons).
+   */
+  pruneLosers?: boolean;
   shouldStop?: () => boolean;
   onProgress?: (fraction: number) => void;
 }
@@ -147,8 +166,22 @@ export function candidatePlacements(c: StartCase, spec: LocomotiveSpec, units: n
   });
 }
 
+/** Every candidate judged to the end even where `pruneLosers` is asked for (the benchmark's "before"). */
+let forceFullRanking = false;
+
+/** Judge every candidate to the end whatever the options say (true), or as asked (false, the default). */
+export function setFullRanking(on: boolean): void {
+  forceFullRanking = on;
+}
+
 /** Search for assistance. Throws the planner's "cancelled" error when `shouldStop` says so. */
 export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): AssistanceResult {
+  // Pruning judges a candidate first with a ceiling and then, if it is not stopped, by the same plan: shared.
+  if (opts.pruneLosers && !forceFullRanking) return withEvaluationMemo(() => search(c, opts, true));
+  return search(c, opts, false);
+}
+
+function search(c: StartCase, opts: AssistanceOptions, prune: boolean): AssistanceResult {
   const spec = opts.spec ?? leadSpec(c);
   const control = opts.control ?? "remote";
   const maxUnits = Math.max(1, Math.min(2, opts.maxUnits ?? 2));
@@ -157,8 +190,9 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
   const stop = opts.shouldStop;
   const planOpts = stop ? { shouldStop: stop } : {};
   let runs = 0;
+  let pruned = 0;
   let complete = true;
-  const result: AssistanceResult = { needed: true, spec, control, options: [], rejected: [], divide: null, plannerRuns: 0, complete: true };
+  const result: AssistanceResult = { needed: true, spec, control, options: [], rejected: [], divide: null, plannerRuns: 0, pruned: 0, complete: true };
 
   let base = opts.baseVerdict;
   if (base === undefined) {
@@ -187,8 +221,22 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
         complete = false;
         break;
       }
-      const d = judge(k.case, { depth: "starts", ...planOpts });
       runs++;
+      // Pruning: a candidate stops once a limit fails, and once `maxFull` options pass, when its peak passes the
+      // worst of the best `maxFull` (it ranks behind them all; a tie is kept and sorted as before).
+      if (prune) {
+        const ctx = plannerContext(k.case);
+        const ceilingN = passing.length >= maxFull ? passing.map((x) => x.peakN).sort((a, b) => a - b)[maxFull - 1]! : Infinity;
+        const fails = failedSoFar(ctx, "within");
+        const failed = (p: Parameters<typeof fails>[0]) => fails(p) || p.branch.peakTensionN() > ceilingN;
+        const r = memoSearchPlan(ctx, { ...planOpts, stopWhenFailed: { key: `within, peak to ${ceilingN} N`, failed } });
+        if (r.stoppedEarly) {
+          pruned++;
+          continue;
+        }
+      }
+      // (After a search the ceiling did not stop, the judgement takes that very plan from the memo.)
+      const d = judge(k.case, { depth: "starts", ...planOpts });
       if (d.verdict === "starts") passing.push({ k, peakN: d.threshold.search?.branch.peakTensionN() ?? 0 });
       else result.rejected.push({ added: k.added, units, ...ruledOut(d.limits), by: "planner" });
     }
@@ -217,7 +265,7 @@ export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): As
     runs += result.divide.plannerRuns;
   }
   opts.onProgress?.(1);
-  return { ...result, plannerRuns: runs, complete };
+  return { ...result, plannerRuns: runs, pruned, complete };
 }
 
 /** A verdict and its reasons from the threshold's limits of a start judged only as far as "starts". */
