@@ -3,13 +3,14 @@
  * of issue 14 with its figure and ratio. Figures, not assertions — this machine is shared and noisy; compare
  * ratios within one run.
  *   --quick   skip the slow comparison with the general-purpose integrator; 100 all-different departures
- *             instead of 500 (the figure is scaled)
+ *             instead of 500 (the figure is scaled); the assistance search on 24 departures instead of 60
  */
 import { availableParallelism, loadavg } from "node:os";
 import { benchDynamics } from "./dynamics.js";
 import { benchPlanner } from "./planner.js";
 import { run as benchStartup } from "./startup.js";
 import { run as benchBatch } from "./batch.js";
+import { benchAssistance } from "./assistance.js";
 import { run as benchBundle } from "./bundle.js";
 import { run as benchFirstPlan } from "./firstPlan.js";
 import { run as benchNotesLibrary } from "./notesLibrary.js";
@@ -23,6 +24,7 @@ benchPlanner();
 benchReview();
 benchStartup();
 benchBatch();
+benchAssistance(quick ? 24 : 60);
 await benchBundle();
 await benchFirstPlan();
 await benchNotesLibrary();
