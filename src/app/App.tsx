@@ -68,13 +68,15 @@ export function App(props: { state: AppContextValue; screens: readonly ScreenEnt
                 <a
                   class="tab"
                   href={`#/${x.id}`}
-                  // The screen's full name, also where its tab shows a shorter word (i18n tabs.ts).
-                  aria-label={x.title}
                   aria-current={x.id === current().id ? "page" : undefined}
                   onClick={(e) => (e.preventDefault(), s.nav.go(x.id))}
                 >
                   {typeof x.icon === "string" ? <Icon name={x.icon} size={28} /> : x.icon()}
-                  <span class="tab-label">{x.tab ?? x.title}</span>
+                  {/* The tab's name is the screen's full name, read from hidden text rather than an aria-label:
+                      the shown word may be shorter and carries soft hyphens (i18n tabs.ts), and a name
+                      that differs from the visible text fails label-in-name (WCAG 2.1, SC 2.5.3). */}
+                  <span class="tab-label" aria-hidden="true">{x.tab ?? x.title}</span>
+                  <span class="visually-hidden">{x.title}</span>
                 </a>
               )}
             </For>

@@ -24,9 +24,12 @@ describe("screen registry and tabs", () => {
     renderWithApp(undefined, { screens });
     const tabs = screen.getAllByRole("link");
     // Each tab shows its words (the name, or a shorter word: i18n tabs.ts) and is named by the screen's full name.
-    expect(tabs.map((t) => t.textContent)).toEqual(screens.filter((s) => !s.noTab).map((s) => s.tab ?? s.title));
-    expect(tabs.map((t) => t.getAttribute("aria-label"))).toEqual(screens.filter((s) => !s.noTab).map((s) => s.title));
-    expect(tabs.find((t) => t.getAttribute("aria-label") === "Assistance check")?.textContent).toBe("Assis\u00ADtance");
+    // The shown words are hidden from the accessibility tree; the name comes from hidden text holding the full name,
+    // so the visible word is part of the name (label in name, WCAG 2.1 SC 2.5.3).
+    expect(tabs.map((t) => t.querySelector(".tab-label")?.textContent)).toEqual(screens.filter((s) => !s.noTab).map((s) => s.tab ?? s.title));
+    expect(tabs.every((t) => t.querySelector(".tab-label")?.getAttribute("aria-hidden") === "true")).toBe(true);
+    expect(tabs.map((t) => t.querySelector(".visually-hidden")?.textContent)).toEqual(screens.filter((s) => !s.noTab).map((s) => s.title));
+    expect(screen.getByRole("link", { name: "Assistance check" }).querySelector(".tab-label")?.textContent).toBe("Assis\u00ADtance");
     fireEvent.click(screen.getByRole("link", { name: "Example screen" }));
     expect(screen.getByText("table screen")).toBeTruthy();
     expect(location.hash).toBe("#/example-screen");

@@ -153,7 +153,7 @@ describe("Taut in three languages", () => {
   it("switches to Hungarian and German in Settings, keeps the choice over a reload, and shows every screen (screenshots)", async () => {
     await page.goto(base);
     await go("start-plan");
-    expect(await page.locator("a.tab").evaluateAll((els) => els.map((e) => e.getAttribute("aria-label") ?? ""))).toEqual(expect.arrayContaining([...TITLES.en]));
+    expect(await page.locator("a.tab").evaluateAll((els) => els.map((e) => e.querySelector(".visually-hidden")?.textContent ?? ""))).toEqual(expect.arrayContaining([...TITLES.en]));
     // A mixed train with a helper at the rear, so the wagon-groups form, a second locomotive group and Cab
     // steps' choice of driver are on screen in every language below (the draft is kept over reloads).
     await page.locator('[data-action="add-wagon-group"]').first().click();
@@ -163,11 +163,11 @@ describe("Taut in three languages", () => {
     for (const [lang, name] of [["hu", "Magyar"], ["de", "Deutsch"]] as const) {
       await go("settings");
       await page.getByRole("radio", { name }).click();
-      await expect.poll(() => page.locator("a.tab").evaluateAll((els) => els.map((e) => e.getAttribute("aria-label") ?? ""))).toEqual(expect.arrayContaining([...TITLES[lang]]));
+      await expect.poll(() => page.locator("a.tab").evaluateAll((els) => els.map((e) => e.querySelector(".visually-hidden")?.textContent ?? ""))).toEqual(expect.arrayContaining([...TITLES[lang]]));
       expect(await page.evaluate(() => document.documentElement.lang)).toBe(lang);
       await page.reload();
       await go("start-plan");
-      expect(await page.locator("a.tab").evaluateAll((els) => els.map((e) => e.getAttribute("aria-label") ?? ""))).toEqual(expect.arrayContaining([...TITLES[lang]]));
+      expect(await page.locator("a.tab").evaluateAll((els) => els.map((e) => e.querySelector(".visually-hidden")?.textContent ?? ""))).toEqual(expect.arrayContaining([...TITLES[lang]]));
       const verdict = (await page.locator(".verdict .verdict-word").textContent()) ?? "";
       const w = lang === "hu" ? wordsHu : wordsDe;
       expect([w.verdictStarts, w.verdictMarginal, w.verdictNeedsAssistance]).toContain(verdict);
