@@ -2,12 +2,16 @@
  * The planner worker's logic, free of Worker globals so it runs in tests: requests are queued and run
  * one at a time on a later tick (a cancel that arrives first drops a queued request); each case gets a
  * structural check, then the work its kind asks for (src/worker/jobs.ts, the planner for `plan`).
+ *
+ * Only the planner is in the worker's first script: the page's first plan waits for nothing else. The
+ * other jobs (assistance, margins per rail, load table, departures check: jobs.ts and the dispatch code
+ * behind it) are a chunk of their own, imported when the first such request comes; that request, and any
+ * behind it in the queue, wait for the import. Once loaded, every job runs synchronously.
  */
 import { planStart } from "../core/planner/index.js";
 import { planWorkProblem } from "../core/planner/workCap.js";
 import type { PlanOptions, PlanResult } from "../core/planner/types.js";
 import type { StartCase } from "../core/train/types.js";
-import { runAssistance, runCheck, runConditionMargins, runLoadTable } from "./jobs.js";
 import {
   isWorkerRequest,
   planTransferables,
@@ -28,6 +32,19 @@ export type Jobs = {
   [K in RequestKind]: (c: StartCase, options: RequestMap[K]["options"], progress: (fraction: number, extra?: Pick<ProgressMessage, "row">) => void) => RequestMap[K]["result"];
 };
 
+/** The module of the jobs other than `plan` (jobs.ts). */
+export type JobsModule = Pick<typeof import("./jobs.js"), "runAssistance" | "runCheck" | "runConditionMargins" | "runLoadTable">;
+
+/** The jobs of jobs.ts, given its module. */
+type LaterJobs = { [K in Exclude<RequestKind, "plan">]: (m: JobsModule, ...args: Parameters<Jobs[K]>) => ReturnType<Jobs[K]> };
+
+const laterJobs: LaterJobs = {
+  assistance: (m, c, o, progress) => m.runAssistance(c, o ?? {}, progress),
+  conditionMargins: (m, c, o, progress) => m.runConditionMargins(c, o ?? {}, progress),
+  loadTable: (m, c, o, progress) => m.runLoadTable(c, o?.cells, (row, f) => progress(f, { row })),
+  check: (m, c, o, progress) => m.runCheck(c, o ?? {}, progress),
+};
+
 export interface HandlerDeps {
   plan?: (c: StartCase, opts: PlanOptions) => PlanResult;
   /** Replace the work of some request kinds (tests). */
@@ -37,6 +54,8 @@ export interface HandlerDeps {
   schedule?: (f: () => void) => void;
   /** Least time between two progress messages of one request, ms. */
   progressIntervalMs?: number;
+  /** Load jobs.ts (default: a dynamic import, on the first request other than `plan`). */
+  loadJobs?: () => Promise<JobsModule>;
 }
 
 /** A message handler for the planner worker; `post` sends a response (with its transfer list). */
@@ -45,23 +64,42 @@ export function createPlannerHandler(post: Post, deps: HandlerDeps = {}): (msg: 
   const now = deps.now ?? (() => performance.now());
   const schedule = deps.schedule ?? ((f: () => void) => void setTimeout(f, 0));
   const interval = deps.progressIntervalMs ?? 50;
-  const jobs: Jobs = {
+  const plans: Pick<Jobs, "plan"> = {
     plan: (c, o, progress) =>
       plan(c, {
         ...(o?.skipMassSearch ? { skipMassSearch: true } : {}),
         ...(o?.skipVerification ? { skipVerification: true } : {}),
         onProgress: (f) => progress(f),
       }),
-    assistance: (c, o, progress) => runAssistance(c, o ?? {}, progress),
-    conditionMargins: (c, o, progress) => runConditionMargins(c, o ?? {}, progress),
-    loadTable: (c, o, progress) => runLoadTable(c, o?.cells, (row, f) => progress(f, { row })),
-    check: (c, o, progress) => runCheck(c, o ?? {}, progress),
-    ...deps.jobs,
   };
+  const loadJobs = deps.loadJobs ?? (() => import("./jobs.js"));
+  let jobsModule: JobsModule | null = null;
+  let jobsLoading: Promise<JobsModule> | null = null;
+
+  /** The job for a request kind: at once when its code is here, else once jobs.ts is loaded. */
+  function jobOf<K extends RequestKind>(kind: K): Jobs[K] | Promise<Jobs[K]> {
+    const given = deps.jobs?.[kind] ?? (kind === "plan" ? plans.plan : undefined);
+    if (given) return given as Jobs[K];
+    const withModule = (m: JobsModule) => ((c, o, progress) => (laterJobs[kind as Exclude<RequestKind, "plan">] as (m: JobsModule, ...a: unknown[]) => unknown)(m, c, o, progress)) as Jobs[K];
+    if (jobsModule) return withModule(jobsModule);
+    jobsLoading ??= loadJobs().then(
+      (m) => (jobsModule = m),
+      (e: unknown) => {
+        // Tried again on the next request (a chunk that failed to load once, offline before it was saved).
+        jobsLoading = null;
+        throw e;
+      },
+    );
+    return jobsLoading.then(withModule);
+  }
+
   const queue: WorkRequest[] = [];
   let scheduled = false;
+  /** A request is waiting for its job's code: the queue waits with it. */
+  let waiting = false;
 
-  function run<K extends RequestKind>(req: RequestOf<K>): void {
+  /** Run one request; a promise when its job's code must load first. */
+  function run<K extends RequestKind>(req: RequestOf<K>): Promise<void> | void {
     post({ type: "progress", id: req.id, fraction: 0 }, []);
     const issues = [...startCaseIssues(req.startCase), ...requestOptionIssues(req as WorkRequest)];
     // A well-formed case may still ask for more work than a plan may take (a wagon of a few kilograms):
@@ -72,10 +110,24 @@ export function createPlannerHandler(post: Post, deps: HandlerDeps = {}): (msg: 
       post({ type: "error", id: req.id, kind: "invalid", issues, message: "The start case is malformed." }, []);
       return;
     }
+    const job = jobOf(req.type);
+    if (job instanceof Promise) {
+      return job.then(
+        (j) => runJob(req, j),
+        (e: unknown) => internalError(req.id, e),
+      );
+    }
+    runJob(req, job);
+  }
+
+  function internalError(id: number, e: unknown): void {
+    post({ type: "error", id, kind: "internal", issues: [], message: e instanceof Error ? e.message : String(e) }, []);
+  }
+
+  function runJob<K extends RequestKind>(req: RequestOf<K>, job: Jobs[K]): void {
     const t0 = now();
     let lastPost = t0;
     try {
-      const job = jobs[req.type] as Jobs[K];
       const result = job(req.startCase, (req.options ?? {}) as RequestMap[K]["options"], (fraction, extra) => {
         // A row of the load table always goes out; plain progress at most every `interval` ms, never 1.
         if (extra?.row) {
@@ -91,15 +143,28 @@ export function createPlannerHandler(post: Post, deps: HandlerDeps = {}): (msg: 
       const transfer = req.type === "plan" ? planTransferables(result as PlanResult) : [];
       post({ type: "result", id: req.id, request: req.type, result, elapsedMs: now() - t0 } as WorkerResponse, transfer);
     } catch (e) {
-      post({ type: "error", id: req.id, kind: "internal", issues: [], message: e instanceof Error ? e.message : String(e) }, []);
+      internalError(req.id, e);
     }
   }
 
   function drain(): void {
     scheduled = false;
     const req = queue.shift();
-    if (req) run(req);
-    if (queue.length > 0 && !scheduled) {
+    const pending = req ? run(req) : undefined;
+    if (pending) {
+      waiting = true;
+      void pending.then(() => {
+        waiting = false;
+        next();
+      });
+      return;
+    }
+    next();
+  }
+
+  /** Run the next request on a later tick, unless one is due or a request waits for its code. */
+  function next(): void {
+    if (queue.length > 0 && !scheduled && !waiting) {
       scheduled = true;
       schedule(drain);
     }
@@ -116,9 +181,6 @@ export function createPlannerHandler(post: Post, deps: HandlerDeps = {}): (msg: 
       return;
     }
     queue.push(msg);
-    if (!scheduled) {
-      scheduled = true;
-      schedule(drain);
-    }
+    next();
   };
 }

@@ -4,7 +4,8 @@ import type { PlanResult } from "../../src/core/planner/types.js";
 import type { StartCase } from "../../src/core/train/types.js";
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
-import { createPlannerHandler } from "../../src/worker/handler.js";
+import { createPlannerHandler, type JobsModule } from "../../src/worker/handler.js";
+import * as jobsModule from "../../src/worker/jobs.js";
 import { planTransferables, startCaseIssues, type WorkerResponse } from "../../src/worker/protocol.js";
 
 function resolved(json: unknown): StartCase {
@@ -121,6 +122,84 @@ describe("planner worker handler", () => {
     const fractions = h.posted.filter((p) => p.msg.type === "progress").map((p) => (p.msg as { fraction: number }).fraction);
     // 0 at the start; then only those at least 50 ms after the previous post (t = 60 and 120); never 1.
     expect(fractions).toEqual([0, 0.2, 0.6]);
+  });
+});
+
+describe("jobs loaded on first use", () => {
+  /** A load of jobs.ts that the test settles by hand, counting the loads. */
+  function manualLoad() {
+    const loads: Array<{ resolve: (m: JobsModule) => void; reject: (e: unknown) => void }> = [];
+    const loadJobs = () => new Promise<JobsModule>((resolve, reject) => loads.push({ resolve, reject }));
+    return { loads, loadJobs };
+  }
+  /** Tiny trains for the conditions-margins job: a quick answer. */
+  const request = (id: number, type: "plan" | "conditionMargins" = "conditionMargins") =>
+    type === "plan" ? ({ type, id, startCase: demo, options: { skipMassSearch: true } } as const) : ({ type, id, startCase: demo, options: { quick: true } } as const);
+  const settle = () => new Promise((r) => setTimeout(r, 0));
+
+  it("plans without loading the other jobs' code", () => {
+    const m = manualLoad();
+    const h = harness({ loadJobs: m.loadJobs });
+    h.handle(request(1, "plan"));
+    h.flush();
+    expect(h.posted.at(-1)!.msg).toMatchObject({ type: "result", id: 1, request: "plan" });
+    expect(m.loads).toHaveLength(0);
+  });
+
+  it("holds the queue while the code loads, then answers in order, loading it once", async () => {
+    const m = manualLoad();
+    const h = harness({ loadJobs: m.loadJobs });
+    h.handle(request(1));
+    h.handle(request(2, "plan"));
+    h.handle(request(3));
+    h.flush();
+    // The first request has started (progress 0) and waits for its code; the plan behind it waits too.
+    expect(h.posted.map((p) => p.msg.type)).toEqual(["progress"]);
+    expect(m.loads).toHaveLength(1);
+    m.loads[0]!.resolve(jobsModule);
+    await settle();
+    h.flush();
+    const answers = h.posted.filter((p) => p.msg.type === "result").map((p) => [p.msg.id, (p.msg as { request: string }).request]);
+    expect(answers).toEqual([
+      [1, "conditionMargins"],
+      [2, "plan"],
+      [3, "conditionMargins"],
+    ]);
+    expect(m.loads).toHaveLength(1);
+    // The same margins the job gives when called directly.
+    const first = h.posted.find((p) => p.msg.type === "result" && p.msg.id === 1)!.msg as { result: unknown };
+    expect(first.result).toEqual(jobsModule.runConditionMargins(demo, { quick: true }));
+  });
+
+  it("drops a request cancelled while the code loads", async () => {
+    const m = manualLoad();
+    const h = harness({ loadJobs: m.loadJobs });
+    h.handle(request(1));
+    h.handle(request(2));
+    h.flush();
+    h.handle({ type: "cancel", id: 2 });
+    m.loads[0]!.resolve(jobsModule);
+    await settle();
+    h.flush();
+    expect(h.posted.filter((p) => p.msg.type === "result").map((p) => p.msg.id)).toEqual([1]);
+    expect(h.posted.some((p) => p.msg.id === 2)).toBe(false);
+  });
+
+  it("answers an internal error when the code cannot load, and tries again on the next request", async () => {
+    const m = manualLoad();
+    const h = harness({ loadJobs: m.loadJobs });
+    h.handle(request(1));
+    h.flush();
+    m.loads[0]!.reject(new TypeError("Failed to fetch dynamically imported module"));
+    await settle();
+    expect(h.posted.at(-1)!.msg).toMatchObject({ type: "error", id: 1, kind: "internal", message: "Failed to fetch dynamically imported module" });
+    h.handle(request(2));
+    h.flush();
+    expect(m.loads).toHaveLength(2);
+    m.loads[1]!.resolve(jobsModule);
+    await settle();
+    h.flush();
+    expect(h.posted.at(-1)!.msg).toMatchObject({ type: "result", id: 2, request: "conditionMargins" });
   });
 });
 

@@ -30,14 +30,22 @@ function departure(id: string): StartCase {
   return structuredClone(r.value);
 }
 
-/** Run one request through the handler and collect what it posts. */
-function ask(req: WorkRequest): { posted: WorkerResponse[]; last: WorkerResponse } {
-  const posted: WorkerResponse[] = [];
-  const ticks: Array<() => void> = [];
-  const handle = createPlannerHandler((m) => posted.push(structuredClone(m)), { schedule: (f) => ticks.push(f) });
-  handle(structuredClone(req));
-  while (ticks.length > 0) ticks.shift()!();
-  return { posted, last: posted.at(-1)! };
+/**
+ * Run one request through the handler and collect what it posts, up to its answer (a result or an
+ * error). The jobs beyond `plan` load on first use (handler.ts), so the answer may come a few turns later.
+ */
+function ask(req: WorkRequest): Promise<{ posted: WorkerResponse[]; last: WorkerResponse }> {
+  return new Promise((resolve) => {
+    const posted: WorkerResponse[] = [];
+    const handle = createPlannerHandler(
+      (m) => {
+        posted.push(structuredClone(m));
+        if (m.type === "result" || m.type === "error") resolve({ posted, last: posted.at(-1)! });
+      },
+      { schedule: (f) => f() },
+    );
+    handle(structuredClone(req));
+  });
 }
 
 function resultOf<K extends WorkRequest["type"]>(kind: K, last: WorkerResponse): ResultOf<K>["result"] {
@@ -47,10 +55,10 @@ function resultOf<K extends WorkRequest["type"]>(kind: K, last: WorkerResponse):
 }
 
 describe("assistance request", () => {
-  it("answers a train that needs help with the core's options, cheapest first, and the case's own verdict", () => {
+  it("answers a train that needs help with the core's options, cheapest first, and the case's own verdict", async () => {
     // agg-1415: wet rail, no sand, 1,400 t behind one unit — the demo day's "needs assistance" that a rear unit fixes.
     const c = departure("agg-1415");
-    const { posted, last } = ask({ type: "assistance", id: 1, startCase: c });
+    const { posted, last } = await ask({ type: "assistance", id: 1, startCase: c });
     const a = resultOf("assistance", last);
     const base = planStart(departure("agg-1415"), { skipMassSearch: true });
     const direct = searchAssistance(departure("agg-1415"), { baseVerdict: base.verdict });
@@ -79,8 +87,8 @@ describe("assistance request", () => {
     expect(Math.max(...fractions)).toBeLessThan(1);
   });
 
-  it("says a train that starts as it stands needs nothing, and searches nothing", () => {
-    const { last } = ask({ type: "assistance", id: 2, startCase: departure("agg-0930") });
+  it("says a train that starts as it stands needs nothing, and searches nothing", async () => {
+    const { last } = await ask({ type: "assistance", id: 2, startCase: departure("agg-0930") });
     const a = resultOf("assistance", last);
     expect(a.base.verdict).toBe("starts");
     expect(a.needed).toBe(false);
@@ -88,16 +96,16 @@ describe("assistance request", () => {
     expect(a.rejected).toEqual([]);
   });
 
-  it("divides the train when no added unit makes it start, in no more parts than the case allows", () => {
+  it("divides the train when no added unit makes it start, in no more parts than the case allows", async () => {
     // agg-1845: leaves on the rail; no option with two more units starts. Into three parts (the default) it
     // does not start either, so nothing is offered; allowed ten parts, a short first part does.
     const leaves = departure("agg-1845");
-    const three = resultOf("assistance", ask({ type: "assistance", id: 3, startCase: leaves, options: { budget: 8, divideBudget: 6 } }).last);
+    const three = resultOf("assistance", (await ask({ type: "assistance", id: 3, startCase: leaves, options: { budget: 8, divideBudget: 6 } })).last);
     expect(three.options).toEqual([]);
     expect(three.rejected.length).toBeGreaterThan(0);
     expect(three.divide).toBeNull();
     const ten = { ...leaves, settings: { ...leaves.settings, maxDividedParts: 10 } };
-    const a = resultOf("assistance", ask({ type: "assistance", id: 3, startCase: ten, options: { budget: 8, divideBudget: 6 } }).last);
+    const a = resultOf("assistance", (await ask({ type: "assistance", id: 3, startCase: ten, options: { budget: 8, divideBudget: 6 } })).last);
     expect(a.divide).not.toBeNull();
     const d = a.divide!;
     expect(d.wagons).toBeGreaterThanOrEqual(Math.ceil(leaves.train.wagons / 10));
@@ -108,9 +116,9 @@ describe("assistance request", () => {
 });
 
 describe("conditionMargins request", () => {
-  it("gives twelve rows, every rail condition without then with sand, as the core gives them", () => {
+  it("gives twelve rows, every rail condition without then with sand, as the core gives them", async () => {
     const c = departure("agg-0610");
-    const { last } = ask({ type: "conditionMargins", id: 4, startCase: c, options: { quick: true } });
+    const { last } = await ask({ type: "conditionMargins", id: 4, startCase: c, options: { quick: true } });
     const rows = resultOf("conditionMargins", last);
     const direct = conditionMargins(departure("agg-0610"), { quick: true });
     expect(rows).toHaveLength(12);
@@ -122,13 +130,13 @@ describe("conditionMargins request", () => {
 });
 
 describe("loadTable request", () => {
-  it("works out the cells asked for, sends each row as it is found, and matches the core's row", () => {
+  it("works out the cells asked for, sends each row as it is found, and matches the core's row", async () => {
     const c = departure("goods-1710");
     const cells = [
       { rail: "wet" as const, sand: true },
       { rail: "greasy" as const, sand: false },
     ];
-    const { posted, last } = ask({ type: "loadTable", id: 5, startCase: c, options: { cells } });
+    const { posted, last } = await ask({ type: "loadTable", id: 5, startCase: c, options: { cells } });
     const rows = resultOf("loadTable", last);
     expect(rows.map((r) => [r.rail, r.sand])).toEqual([
       ["wet", true],
@@ -142,8 +150,8 @@ describe("loadTable request", () => {
     expect(rows[0]!.maxTrailingMassKg).toBeGreaterThan(rows[1]!.maxTrailingMassKg);
   });
 
-  it("refuses cells that name no rail condition, as a field issue", () => {
-    const { last } = ask({ type: "loadTable", id: 6, startCase: departure("goods-1710"), options: { cells: [{ rail: "slush" as never, sand: true }] } });
+  it("refuses cells that name no rail condition, as a field issue", async () => {
+    const { last } = await ask({ type: "loadTable", id: 6, startCase: departure("goods-1710"), options: { cells: [{ rail: "slush" as never, sand: true }] } });
     expect(last).toMatchObject({ type: "error", kind: "invalid", issues: [{ path: "options.cells[0]" }] });
   });
 });
@@ -153,9 +161,9 @@ describe("check request", () => {
     expect([CHECK_ASSISTANCE_BUDGET, CHECK_DIVIDE_BUDGET]).toEqual([CLI_ASSIST, CLI_DIVIDE]);
   });
 
-  it("answers a departure as the command line's batch job does, down to the exported CSV line", () => {
+  it("answers a departure as the command line's batch job does, down to the exported CSV line", async () => {
     for (const id of ["agg-1415", "agg-0930"]) {
-      const { last } = ask({ type: "check", id: 7, startCase: departure(id) });
+      const { last } = await ask({ type: "check", id: 7, startCase: departure(id) });
       const a = resultOf("check", last);
       const cli = runJob({ kind: "check", case: departure(id) }) as CheckOutcome;
       const mass = runJob({ kind: "mass", case: departure(id) }) as MassOutcome;
@@ -189,22 +197,22 @@ describe("check request", () => {
     }
   });
 
-  it("refuses a helper that is not a locomotive profile", () => {
-    const { last } = ask({ type: "check", id: 8, startCase: departure("agg-0930"), options: { helper: { id: "x" } as never } });
+  it("refuses a helper that is not a locomotive profile", async () => {
+    const { last } = await ask({ type: "check", id: 8, startCase: departure("agg-0930"), options: { helper: { id: "x" } as never } });
     expect(last).toMatchObject({ type: "error", kind: "invalid", issues: [{ path: "options.helper" }] });
   });
 });
 
 describe("request validation", () => {
-  it("refuses a budget that is not a whole number of at least 1", () => {
-    const { last } = ask({ type: "assistance", id: 9, startCase: departure("agg-0930"), options: { budget: 0, maxUnits: 1.5 } });
+  it("refuses a budget that is not a whole number of at least 1", async () => {
+    const { last } = await ask({ type: "assistance", id: 9, startCase: departure("agg-0930"), options: { budget: 0, maxUnits: 1.5 } });
     expect(last).toMatchObject({ type: "error", kind: "invalid" });
     if (last.type === "error") expect(last.issues.map((i) => i.path)).toEqual(["options.maxUnits", "options.budget"]);
   });
 
-  it("answers a malformed case of any kind with the case's field issues", () => {
+  it("answers a malformed case of any kind with the case's field issues", async () => {
     for (const type of ["assistance", "conditionMargins", "loadTable", "check"] as const) {
-      const { last } = ask({ type, id: 10, startCase: { train: {} } as unknown as StartCase });
+      const { last } = await ask({ type, id: 10, startCase: { train: {} } as unknown as StartCase });
       expect(last).toMatchObject({ type: "error", kind: "invalid" });
       if (last.type === "error") expect(last.issues.map((i) => i.path)).toEqual(expect.arrayContaining(["locomotives", "train.trailingMassKg"]));
     }
