@@ -8,7 +8,7 @@ import { GRAVITY_MPS2 } from "../../src/core/physics/constants.js";
 import { normalQuantile } from "../../src/core/physics/normal.js";
 import { demoCase, fixturePlan } from "./fixtures.js";
 import { Ticks } from "chart.js";
-import { toChartConfig } from "../../src/app/components/Chart.js";
+import { toChartConfig } from "../../src/app/components/chartConfig.js";
 import { PALETTES } from "../../src/app/charts/palette.js";
 import { setAppLanguage } from "../../src/app/i18n.js";
 import { chartDe } from "../../src/i18n/de/chart.js";

@@ -1,5 +1,5 @@
 /** Step cards, Cab steps (one step at a time, Back/Next, clock) and the If wheels slip card. */
-import { fireEvent, render, screen } from "@solidjs/testing-library";
+import { fireEvent, render, screen, waitFor } from "@solidjs/testing-library";
 import { createSignal } from "solid-js";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { CabStepsView } from "../../src/app/screens/CabSteps/View.js";
@@ -58,18 +58,19 @@ describe("step cards", () => {
     expect(document.body.textContent).toContain("short tons");
   });
 
-  it("draws the speed and coupler charts only when the plan has series, and says so otherwise", () => {
+  it("draws the speed and coupler charts only when the plan has series, and says so otherwise", async () => {
     resultView(fixturePlan());
-    expect(document.querySelector('[data-chart="Speed and notch"]')?.getAttribute("data-empty")).toBe("no");
+    // The charts' code comes in a chunk of its own, after the verdict (components/planCharts.ts).
+    await waitFor(() => expect(document.querySelector('[data-chart="Speed and notch"]')?.getAttribute("data-empty")).toBe("no"), { timeout: 15_000 });
     expect(document.querySelector('[data-chart="Peak coupler force along the train"]')?.getAttribute("data-empty")).toBe("no");
     expect(document.querySelector('[data-chart="Tractive effort and adhesion"]')?.getAttribute("data-empty")).toBe("no");
   });
 
-  it("has a clear empty state when the plan carries no steps or series", () => {
+  it("has a clear empty state when the plan carries no steps or series", async () => {
     const empty = new Float64Array(0);
     resultView(fixturePlan({ steps: [], couplerPeaksN: empty, series: { timeS: empty, speedMps: empty, notch: empty, locoTravelM: empty, maxTensionN: empty } }));
     expect(document.querySelector("[data-empty-steps]")?.textContent).toMatch(/No notch steps/);
-    expect(document.querySelector('[data-chart="Speed and notch"]')?.getAttribute("data-empty")).toBe("yes");
+    await waitFor(() => expect(document.querySelector('[data-chart="Speed and notch"]')?.getAttribute("data-empty")).toBe("yes"), { timeout: 15_000 });
     expect(screen.getByText(/No time series in this plan/)).toBeTruthy();
     expect(document.querySelector('[data-chart="Peak coupler force along the train"]')?.getAttribute("data-empty")).toBe("yes");
     // The effort chart needs only the case, so it is drawn anyway.

@@ -3,7 +3,8 @@
  * size (level 9), grouped by when the page needs it:
  * - before the verdict: the entry, what the page preloads (modulepreload links) and what those import, and
  *   the planner worker (target ≤ 90 KiB, issue 14);
- * - after the verdict: the chart worker, started once the verdict is painted (the charts follow);
+ * - after the verdict: the charts' chunk (their frame's drawing half, legend and the Start plan's chart
+ *   builders) and the chart worker, both loaded once the verdict is painted;
  * - on demand: the other screens and what only they use;
  * - service worker.
  * The budgets are printed beside the figures, not asserted.
@@ -98,7 +99,7 @@ export async function measureBundle(modules?: ModuleSizes): Promise<BundleFile[]
           ? "service worker"
           : first.has(rel) || /planner\.worker-/.test(rel)
             ? "before the verdict"
-            : /chart\.worker-/.test(rel)
+            : /(chart\.worker|chartParts)-/.test(rel)
               ? "after the verdict"
               : "on demand";
         return { file: rel, bytes: data.length, gzipBytes: gzipSync(data, { level: 9 }).length, serviceWorker, group };

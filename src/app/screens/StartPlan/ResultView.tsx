@@ -8,12 +8,11 @@ import { createEffect, createMemo, createSignal, For, Index, onCleanup, Show, ty
 import type { PlanResult } from "../../../core/planner/types.js";
 import type { Reason } from "../../../core/planner/outcome.js";
 import type { StartCase } from "../../../core/train/types.js";
-import { couplerChart } from "../../charts/couplerAlong.js";
-import { effortChart } from "../../charts/effortSpeed.js";
 import type { ChartPalette } from "../../charts/palette.js";
 import type { ChartSpec } from "../../charts/spec.js";
-import { speedNotchChart } from "../../charts/speedNotch.js";
 import { Chart } from "../../components/Chart.js";
+// The charts' code loads after the verdict is painted; until then each builder gives undefined (the chart's box stands in).
+import { couplerChart, effortChart, speedNotchChart } from "../../components/planCharts.js";
 import { Icon } from "../../components/Icon.js";
 import { VerdictBanner, VerdictIcon } from "../../components/VerdictBanner.js";
 import { words } from "../../words.js";
@@ -100,7 +99,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
   // The effort chart depends on the locomotives, the rail and the settings, not on the train's mass:
   // recomputed only when what it shows changes (a mass edit then costs no chart work).
   let effortKey = "";
-  const effortSpec = createMemo<ChartSpec | null>((prev) => {
+  const effortSpec = createMemo<ChartSpec | null | undefined>((prev) => {
     const c = props.startCase;
     if (!c) return null;
     const res = shownResult();
