@@ -109,17 +109,17 @@ export function show(m: MeasureKey, si: number, system: UnitSystem, decimals?: n
 }
 
 /**
- * Figures the command line prints too, rounded as it rounds them: forces from the tenth of a kN its JSON
- * gives, fractions (adhesion used, slip risk) from its four decimals — so the app and `taut plan` never
- * differ by one in the last digit.
+ * Figures the command line prints too, rounded as it rounds them: once, from the SI value (its JSON carries
+ * these forces and fractions unrounded; src/i18n/rounding.ts), so the app, `taut plan` and the lines of the
+ * limits and why never differ by one in the last digit.
  */
 export function showForce(si: number, system: UnitSystem, decimals?: number): string {
-  return show("force", Number.isFinite(si) ? roundHalfAway(si / 1000, 1) * 1000 : si, system, decimals);
+  return show("force", si, system, decimals);
 }
 
-/** A fraction as the command line rounds it (four decimals first), as a percentage. */
+/** A fraction as the command line rounds it (once, from the value itself), as a percentage. */
 export function percentOf(fraction: number, decimals = 1): string {
-  return percent(Number.isFinite(fraction) ? roundHalfAway(fraction, 4) : fraction, decimals);
+  return percent(fraction, decimals);
 }
 
 /**
@@ -137,7 +137,8 @@ export function showAtMost(m: MeasureKey, si: number, system: UnitSystem, decima
 export function percent(fraction: number, decimals = 1): string {
   if (!Number.isFinite(fraction)) return "–";
   const p = fraction * 100;
-  if (p > 0 && p < 10 ** -decimals) return `< ${formatNumber(10 ** -decimals, decimals)} %`;
+  // "< 1 %" only where the figure would read 0, as the command line and the why lines write it.
+  if (p > 0 && p < 0.5 * 10 ** -decimals) return `< ${formatNumber(10 ** -decimals, decimals)} %`;
   return `${formatNumber(p, decimals)} %`;
 }
 

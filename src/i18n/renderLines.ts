@@ -8,6 +8,7 @@
 import type { GroupPlace, HelperCall, StepWhy, TargetRef, WhyLine } from "../core/planner/lines.js";
 import { reasons } from "./en/reasons.js";
 import type { Translator } from "./translator.js";
+import { forceKN, wholePercent } from "./rounding.js";
 
 /** Figures with their units, as the reader's units write them. */
 export interface Quantities {
@@ -26,7 +27,7 @@ export interface Quantities {
 /** SI figures in the translator's language: kN, km/h, m, t (as the command line and the reports write them). */
 export function siQuantities(tr: Translator): Quantities {
   return {
-    force: (n) => `${tr.num(Math.round(n / 1000), 0)} kN`,
+    force: (n) => `${tr.num(forceKN(n), 0)} kN`,
     speed: (mps) => `${tr.num(Number((mps * 3.6).toFixed(1)), 1)} km/h`,
     length: (m, d = 0) => `${tr.num(d === 0 ? Math.round(m) : Number(m.toFixed(d)), d)} m`,
     mass: (kg) => `${tr.num(Math.round(kg / 1000), 0)} t`,
@@ -37,7 +38,8 @@ export function siQuantities(tr: Translator): Quantities {
 /** A fraction as whole percent ("< 1 %" above zero where it would read 0 when `belowOne`). */
 export function percent(tr: Translator, x: number, belowOne = false): string {
   const t = tr.ns(reasons);
-  return belowOne && x > 0 && x < 0.005 ? t("percentBelowOne") : t("percent", { value: tr.num(Math.round(x * 100), 0) });
+  const p = wholePercent(x);
+  return p === null ? (belowOne ? t("percentBelowOne") : t("percent", { value: tr.num(0, 0) })) : t("percent", { value: tr.num(p, 0) });
 }
 
 /** `x` to `d` decimals, rounded as toFixed rounds it (the digits the English text always had). */

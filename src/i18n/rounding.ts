@@ -32,6 +32,25 @@ export function roundHalfAway(x: number, d: number): number {
   return x < 0 && v !== 0 ? -v : v;
 }
 
+/**
+ * A force in newtons as the kilonewtons every surface prints (whole unless `d` is given), rounded once from
+ * the SI value: the limits, the why lines, the plan's header and the app's figures all go through here, so the
+ * same force never reads 206 kN in one place and 207 kN in another.
+ */
+export function forceKN(n_N: number, d = 0): number {
+  return roundHalfAway(n_N / 1000, d);
+}
+
+/**
+ * A fraction (slip risk, adhesion used) as the whole percent every surface prints, rounded once; `null` when it
+ * is above zero but would read 0 (the surfaces write "< 1 %" there). The steps table, the why lines and the app's
+ * step card read the same figure for the same step.
+ */
+export function wholePercent(fraction: number): number | null {
+  const p = fraction * 100;
+  return p > 0 && p < 0.5 ? null : roundHalfAway(p, 0);
+}
+
 /** Plain text of a figure with `d` decimals ("-" for negatives, no grouping): the command line's form. */
 export function fixedText(x: number, d: number): string {
   const body = fixedDigits(x, Math.max(0, Math.min(20, Math.trunc(d))));

@@ -211,6 +211,12 @@ export interface ConditionMarginReport {
 /** Round to a number of decimals (for output only), half away from zero as every figure is (numbers.ts). */
 export const r = (x: number, decimals = 1): number => roundHalfAway(x, decimals);
 const kN = (n: number, d = 1): number => r(n / 1000, d);
+/**
+ * A force the readable plan prints as whole kN beside the same force in a line's code (limits, why lines):
+ * carried unrounded, so the text rounds it once from the SI value, as the lines do (rounding.ts), and never
+ * prints 207 kN in the header against 206 kN in the limits for a 206.46 kN force.
+ */
+const kNExact = (n: number): number => n / 1000;
 
 /** The plan report from the static check alone (no steps). */
 export function staticReport(c: StartCase, s: StaticCheck, maxStartableMassKg: number, meta: PlanReport["case"] = {}): PlanReport {
@@ -224,23 +230,23 @@ export function staticReport(c: StartCase, s: StaticCheck, maxStartableMassKg: n
     margin: r(s.margin, 3),
     margins: { adhesion: r(s.margins.adhesion, 3), power: r(s.margins.power, 3), coupler: r(s.margins.coupler, 3), distance: r(s.margins.distance, 3) },
     resistance_kN: {
-      starting: kN(s.resistance.startingN),
-      grade: kN(s.resistance.gradeN),
-      curve: kN(s.resistance.curveN),
-      running: kN(s.resistance.runningN),
-      total: kN(s.resistance.totalN),
+      starting: kNExact(s.resistance.startingN),
+      grade: kNExact(s.resistance.gradeN),
+      curve: kNExact(s.resistance.curveN),
+      running: kNExact(s.resistance.runningN),
+      total: kNExact(s.resistance.totalN),
     },
     adhesion: {
       mu: r(mu, 4),
       muDesign: r(muDesign, 4),
       slipRiskThreshold: c.settings.slipRiskThreshold,
-      maxTractiveEffort_kN: kN(s.adhesionLimitN),
-      medianTractiveEffort_kN: kN(s.locos.reduce((t, l) => t + l.medianLimitN, 0)),
-      requiredTractiveEffort_kN: kN(s.requiredN),
-      slipRiskAtStart: r(s.slipRiskAtStart, 4),
+      maxTractiveEffort_kN: kNExact(s.adhesionLimitN),
+      medianTractiveEffort_kN: kNExact(s.locos.reduce((t, l) => t + l.medianLimitN, 0)),
+      requiredTractiveEffort_kN: kNExact(s.requiredN),
+      slipRiskAtStart: s.slipRiskAtStart,
     },
     steps: [],
-    peakCouplerForce_kN: kN(s.peakTensionN),
+    peakCouplerForce_kN: kNExact(s.peakTensionN),
     timeToTarget_s: null,
     trailingMass_t: r(c.train.trailingMassKg / 1000, 1),
     maxStartableMass_t: Number.isFinite(maxStartableMassKg) ? Math.floor(maxStartableMassKg / 1000) : 0,
@@ -259,10 +265,10 @@ export function stepReport(s: PlanStep): StepReport {
     advanceWhen: { after_s: r(s.advanceWhen.afterS, 0), moved_m: r(s.advanceWhen.movedM, 1), speed_kmh: kmh(s.advanceWhen.speedMps), primary: s.advanceWhen.primary },
     speed_kmh: kmh(s.speedMps),
     tractiveEffort_kN: kN(s.tractiveEffortN, 0),
-    adhesionUse: r(s.adhesionUse, 4),
+    adhesionUse: s.adhesionUse,
     adhesionUseAt_kmh: kmh(s.adhesionUseAt.speedMps),
     adhesionUseEffort_kN: kN(s.adhesionUseAt.tractiveEffortN, 0),
-    slipRisk: r(s.slipRisk, 4),
+    slipRisk: s.slipRisk,
     protectionActs: s.protectionActs,
     peakCouplerForce_kN: kN(s.peakCouplerForceN, 0),
     fallbackNotch: s.fallbackNotch,
@@ -326,10 +332,10 @@ export function planReport(c: StartCase, p: PlanResult, meta: PlanReport["case"]
   rep.massSearchCeiling_t = Math.floor(p.massSearchCeilingKg / 1000);
   if (c.train.groups) rep.massSearchScales = "the load above tare of every wagon group, in proportion";
   rep.steps = p.steps.map(stepReport);
-  rep.peakCouplerForce_kN = kN(p.peakCouplerForceN);
+  rep.peakCouplerForce_kN = kNExact(p.peakCouplerForceN);
   if (p.wheelClimb) {
     const w = p.wheelClimb;
-    rep.wheelClimb = { ratio: r(w.ratio, 3), allowance: r(w.allowance, 3), nadalLimit: r(w.nadalLimit, 3), vehicle: vehicleText(ENGLISH, ENGLISH_SI, w.vehicle), vehicleCode: lineReport(w.vehicle), buff_kN: kN(w.forceN), curveRadius_m: r(w.radiusM, 0) };
+    rep.wheelClimb = { ratio: r(w.ratio, 3), allowance: r(w.allowance, 3), nadalLimit: r(w.nadalLimit, 3), vehicle: vehicleText(ENGLISH, ENGLISH_SI, w.vehicle), vehicleCode: lineReport(w.vehicle), buff_kN: kNExact(w.forceN), curveRadius_m: r(w.radiusM, 0) };
   }
   rep.timeToTarget_s = p.timeToTargetS === null ? null : r(p.timeToTargetS, 0);
   rep.cautions = cautionsInEnglish(p.cautions);

@@ -112,11 +112,13 @@ describe("figures with their basis, as the command line rounds them", () => {
 
   it("key figures read as `taut plan` prints them", () => {
     const { figure } = rendered();
-    const needed = /needed (\d+) kN/.exec(cli)![1];
+    // The resistance at start, named as such on both (the limits' "needed" adds the slowest acceptable acceleration).
+    const needed = /against a resistance at start of (\d+) kN/.exec(cli)![1];
+    expect(cli).toContain(`Resistance at start: ${needed} kN`);
     const rails = /→ (\d+) kN/.exec(cli)![1];
     const mass = /starts up to (\d+) t/.exec(cli)![1];
     const peak = /peak coupler force (\d+) kN/.exec(cli)![1];
-    expect(figure(/needed to start/).firstChild!.textContent).toBe(`${needed} kN`);
+    expect(figure(/^Resistance at start/).firstChild!.textContent).toBe(`${needed} kN`);
     expect(figure(/^Rails give/).firstChild!.textContent).toBe(`${rails} kN`);
     expect(figure(/^Largest trailing mass/).textContent).toBe(`${Number(mass).toLocaleString("en-GB")} t`);
     expect(mass).toBe("1466");
@@ -155,6 +157,8 @@ describe("figures with their basis, as the command line rounds them", () => {
       expect(fig("Adhesion used").firstChild!.textContent, `step ${i + 1}`).toBe(use!.replace("%", " %"));
       expect(fig("Adhesion used").querySelector(".basis")!.textContent, `step ${i + 1}`).toMatch(new RegExp(`^highest, at ${at!.replace(".", "\\.")} km/h \\(\\d+ kN\\)$`));
       expect(fig("Peak coupler force").firstChild!.textContent).toBe(`${cells[8]} kN`);
+      // Slip risk: whole percent on the card, in the table and in the step's why line.
+      expect(fig("Slip risk").firstChild!.textContent, `step ${i + 1}`).toBe(cells[7]!.replace(" *", "").replace("<1%", "< 1%").replace(/%$/, " %"));
     });
   });
 

@@ -10,7 +10,7 @@ import { wrap } from "./wrap.js";
 import { describeOverrides } from "../caseOverrides.js";
 import { printable } from "../../profiles/text.js";
 import { lineOf } from "../../profiles/lineReport.js";
-import { groupName, helperCallText, siQuantities, stepWhyText } from "../../i18n/renderLines.js";
+import { groupName, helperCallText, percent, siQuantities, stepWhyText } from "../../i18n/renderLines.js";
 import { adviceText, limitWhatText, vehicleText } from "../../i18n/renderAdvice.js";
 import { slipGuidanceText } from "../../i18n/renderSlip.js";
 import { advice as adviceWords } from "../../i18n/en/advice.js";
@@ -33,7 +33,7 @@ export function renderPlan(p: PlanReport): string {
   lines.push(t("resistance", { total: num(r.total), starting: num(r.starting), running: num(r.running), grade: num(r.grade), curve: num(r.curve) }));
   const a = p.adhesion;
   lines.push(
-    t("adhesion", { mu: num(a.mu, 3), muDesign: num(a.muDesign, 3), threshold: pct(a.slipRiskThreshold), max: num(a.maxTractiveEffort_kN), needed: num(a.requiredTractiveEffort_kN), risk: pct(a.slipRiskAtStart, 1) }),
+    t("adhesion", { mu: num(a.mu, 3), muDesign: num(a.muDesign, 3), threshold: pct(a.slipRiskThreshold), max: num(a.maxTractiveEffort_kN), needed: num(r.total), risk: pct(a.slipRiskAtStart, 1) }),
   );
   const atCeiling = p.massSearchCeiling_t !== undefined && p.maxStartableMass_t >= p.massSearchCeiling_t;
   const largest = atCeiling ? t("largestMassNoLimit", { mass: num(p.maxStartableMass_t) }) : p.maxStartableMass_t > 0 ? t("largestMassValue", { mass: num(p.maxStartableMass_t) }) : t("largestMassNone");
@@ -62,6 +62,12 @@ export function renderPlan(p: PlanReport): string {
     const vehicle = w.vehicleCode ? vehicleText(cliTr(), q, lineOf<VehicleRef>(w.vehicleCode)) : w.vehicle;
     lines.push(rs("wheelClimbLine", { ratio: num(w.ratio, 2), vehicle, force: `${num(w.buff_kN)} kN`, radius: `${num(w.curveRadius_m)} m`, allowance: num(w.allowance, 2), nadal: num(w.nadalLimit, 2) }));
   }
+  // A marginal plan is made on the rail at the marginal bound, not the threshold the limits judge: say which
+  // rail the steps, the time to target and the peak belong to, so they cannot be read against the limits.
+  const planQ = p.planAdhesionQuantile;
+  if (p.steps.length > 0 && planQ !== undefined && Math.abs(planQ - p.adhesion.slipRiskThreshold) > 1e-9) {
+    lines.push(...wrap(t("planRail", { plan: railQuantile(planQ), threshold: railQuantile(p.adhesion.slipRiskThreshold) }), 100, ""));
+  }
   if (p.steps.length > 0) {
     lines.push(t("timeToTarget", { time: p.timeToTarget_s === null ? t("targetNotReached") : t("targetAfter", { time: num(p.timeToTarget_s) }), peak: num(p.peakCouplerForce_kN) }));
   }
@@ -78,7 +84,8 @@ export function renderPlan(p: PlanReport): string {
           num(s.speed_kmh, 1),
           num(s.tractiveEffort_kN),
           s.adhesionUseAt_kmh !== undefined ? `${pct(s.adhesionUse)} @${num(s.adhesionUseAt_kmh, 1)}` : pct(s.adhesionUse),
-          `${pct(s.slipRisk, 1)}${s.protectionActs ? " *" : ""}`,
+          // Whole percent, as the step's why line gives it (rounding.ts wholePercent).
+          `${pct(s.slipRisk)}${s.protectionActs ? " *" : ""}`,
           num(s.peakCouplerForce_kN),
           s.notch === 0 ? "—" : t("fallbackNotch", { notch: s.fallbackNotch }),
         ]),
@@ -119,6 +126,11 @@ export function renderPlan(p: PlanReport): string {
   lines.push(t("cautions"));
   for (const c of p.cautionCodes) lines.push(...wrap(`  - ${cautionText(cliTr(), cautionOf(c))}`, 100, "    "));
   return lines.join("\n");
+}
+
+/** A quantile as the limits' lines write it ("10 %"). */
+function railQuantile(x: number): string {
+  return percent(cliTr(), x);
 }
 
 function advance(a: PlanReport["steps"][number]["advanceWhen"]): string {

@@ -258,7 +258,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
                 <div>
                   <dt>{t("needed")}</dt>
                   <dd>
-                    {showForce(res().static.requiredN, props.units)}
+                    {showForce(res().static.resistance.totalN, props.units)}
                     <span class="basis">{t("neededBasis")}</span>
                   </dd>
                 </div>
@@ -300,6 +300,12 @@ export function ResultView(props: ResultViewProps): JSX.Element {
                   <dd>{res().timeToTargetS === null || res().steps.length === 0 ? "–" : duration(res().timeToTargetS!)}</dd>
                 </div>
               </dl>
+              {/* A marginal plan is made on the rail at the marginal bound: say which rail each figure belongs to. */}
+              <Show when={res().steps.length > 0 && Math.abs(res().planQuantile - threshold()) > 1e-9}>
+                <p class="muted" data-plan-rail>
+                  {t("planRail", { plan: percent(res().planQuantile, 0), threshold: percent(threshold(), 0) })}
+                </p>
+              </Show>
             </section>
 
             <Chart

@@ -53,7 +53,7 @@ export function StepCard(props: StepCardProps): JSX.Element {
           <div classList={{ alert: risky() }}>
             <dt>{t("slipRisk")}</dt>
             <dd>
-              {percentOf(s().slipRisk)}
+              {percentOf(s().slipRisk, 0)}
               <Show when={risky()}>{t("aboveYour", { threshold: percentOf(props.slipThreshold, 0) })}</Show>
             </dd>
           </div>
