@@ -8,6 +8,7 @@ import type { FieldCode } from "../i18n/en/fields.js";
 import { fields } from "../i18n/en/fields.js";
 import type { FieldIssue } from "../profiles/issues.js";
 import { figureIn, renderField, type FieldCoded } from "../profiles/issueText.js";
+import { readerMessage } from "../i18n/renderReaders.js";
 import { fieldOf, legacyLocaliseIssue, type LocalIssue } from "./fields.js";
 import { decimalsOf, formatNumber, toDisplay, unitSymbol, type MeasureKey, type UnitSystem } from "./format.js";
 import { addCatalogPart, tr } from "./i18n.js";
@@ -72,6 +73,8 @@ export function fieldLabel(path: string): string {
  */
 export function localiseIssue(issue: FieldIssue, system: UnitSystem): LocalIssue {
   const label = fieldLabel(issue.path);
+  // A reader's message (a notes file, a reference train) or the work cap's refusal: its own words.
+  if (issue.reader) return { ...issue, message: readerMessage(tr, issue.reader), label };
   if (!issue.code) return { ...legacyLocaliseIssue(issue, system), label };
   const c: FieldCoded = { code: issue.code, ...(issue.figures ? { figures: issue.figures } : {}), ...(issue.got !== undefined ? { got: issue.got } : {}) };
   const notANumber = c.got === "NaN" || c.got === "null" || ((c.code === "mustBe" || c.code === "required") && c.figures?.expected === "number");

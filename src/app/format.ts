@@ -5,7 +5,8 @@
 import { convert, convertTemperature, type Quantity } from "../core/physics/units.js";
 import { roundHalfAway } from "../profiles/numbers.js";
 import { parseNumberIn } from "../i18n/numbers.js";
-import { appLang, appNumber } from "./i18n.js";
+import { units } from "../i18n/en/units.js";
+import { appLang, appNumber, tr } from "./i18n.js";
 
 export type UnitSystem = "metric" | "us";
 
@@ -34,10 +35,9 @@ export const MEASURES = {
 
 export type MeasureKey = keyof typeof MEASURES | "temperature";
 
-/** Unit symbols as shown beside a figure. */
+/** Unit symbols as shown beside a figure (a unit without a known symbol is named in the language on screen: NAMED). */
 const SYMBOLS: Record<string, string> = {
   t: "t",
-  shortTon: "short tons",
   kN: "kN",
   klbf: "klbf",
   kmh: "km/h",
@@ -61,6 +61,7 @@ export function displayUnit(m: MeasureKey, system: UnitSystem): string {
 /** The symbol shown for a measure in a unit system, e.g. "km/h" or "short tons". */
 export function unitSymbol(m: MeasureKey, system: UnitSystem): string {
   const u = displayUnit(m, system);
+  if (u === "shortTon") return tr.ns(units)("shortTon");
   return SYMBOLS[u] ?? u;
 }
 

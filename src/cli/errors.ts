@@ -1,4 +1,5 @@
 /** Errors the command line reports without a stack trace, with their exit codes. */
+import { readerMessage } from "../i18n/renderReaders.js";
 import { issueMessage } from "../profiles/issueText.js";
 import { formatIssues, MAX_LISTED_ISSUES, type FieldIssue } from "../profiles/issues.js";
 import { cliFieldWords, cliTr } from "./lang.js";
@@ -36,7 +37,7 @@ export class InputError extends Error {
 function issueLines(issues: readonly FieldIssue[]): string {
   const tr = cliTr();
   if (tr.lang === "en") return formatIssues(issues);
-  const shown = issues.slice(0, MAX_LISTED_ISSUES).map((i) => ({ path: i.path, message: issueMessage(tr, i) }));
+  const shown = issues.slice(0, MAX_LISTED_ISSUES).map((i) => ({ path: i.path, message: i.reader ? readerMessage(tr, i.reader) : issueMessage(tr, i) }));
   const more = issues.length - MAX_LISTED_ISSUES;
   return formatIssues(shown) + (more > 0 ? `\n${cliFieldWords()("andMore", { count: more })}` : "");
 }

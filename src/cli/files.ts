@@ -13,9 +13,11 @@ import { printable } from "../profiles/text.js";
 import { planWorkProblem } from "../core/planner/workCap.js";
 import type { StartCase } from "../core/train/types.js";
 import { InputError } from "./errors.js";
-import { cliFieldWords } from "./lang.js";
+import { cliFieldWords, cliTr } from "./lang.js";
+import { readerText } from "../i18n/renderReaders.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { readNotesText } from "../profiles/notes.js";
+import { readerIssue } from "../profiles/readerIssues.js";
 import { applyOverrides, type CaseOverrides } from "./caseOverrides.js";
 
 /** The largest file read, bytes: a bundle of every note of a large network is some tens of megabytes. */
@@ -185,7 +187,7 @@ export function readNotesFiles(paths: readonly string[]): LocationNoteFile[] {
   const from = new Map<string, string>();
   for (const path of paths) {
     const r = readNotesText(readText(path));
-    if (!r.ok) throw new InputError(`${pathText(path)}: ${r.message.replace(/ Nothing was changed\.$/, "")}`, r.issues);
+    if (!r.ok) throw new InputError(`${pathText(path)}: ${readerText(cliTr(), r.headline)}`, r.issues);
     for (const n of r.notes) {
       const earlier = from.get(n.id);
       if (earlier !== undefined) throw new InputError(errorWords()("noteTwice", { file: pathText(path), id: `"${n.id}"`, earlier: pathText(earlier) }));
@@ -199,5 +201,5 @@ export function readNotesFiles(paths: readonly string[]): LocationNoteFile[] {
 /** Refuse a case whose plan would take more work than a plan may (src/core/planner/workCap.ts). */
 export function checkWork(c: StartCase, headline: string): void {
   const problem = planWorkProblem(c);
-  if (problem) throw new InputError(headline, [{ path: "train", message: problem }]);
+  if (problem) throw new InputError(headline, [readerIssue("train", problem)]);
 }

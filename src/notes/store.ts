@@ -12,6 +12,8 @@ import { mergeWrites, previewMerge, type ConflictChoice, type ImportConflict, ty
 import { migrateV1Record, NOTES_DB_VERSION } from "./migrations.js";
 import { checkRecord, checkRows, keyText, makeRecord, recordRev, rowOf, type NoteOrigin, type NoteRecord, type NoteRow, type RecordProblem, type SavedNote } from "./records.js";
 import { exportReminder, type ExportReminder } from "./reminder.js";
+import type { ReaderCoded } from "../profiles/readerIssues.js";
+import { readerEnglish } from "../profiles/readerIssues.js";
 
 export const DEFAULT_NOTES_DB = "taut-notes";
 
@@ -84,7 +86,13 @@ export type SaveBase = { rev: number } | "new" | "replace";
 /** Called with the conflicts of an import; returns a choice per conflicting id, or null to cancel. */
 export type ChooseConflicts = (conflicts: ImportConflict[]) => Promise<Record<string, ConflictChoice> | null> | Record<string, ConflictChoice> | null;
 
-export type ImportOutcome = { status: "applied"; summary: MergeWrites["summary"] } | { status: "cancelled" } | { status: "failed"; message: string };
+/** A failed import or review: the message in English, and as a code with its figures for the language on screen. */
+export type ImportOutcome = { status: "applied"; summary: MergeWrites["summary"] } | { status: "cancelled" } | { status: "failed"; message: string; coded: ReaderCoded };
+
+/** A refusal as the store returns it: its English words and its code. */
+function refusal(coded: ReaderCoded): { message: string; coded: ReaderCoded } {
+  return { message: readerEnglish(coded), coded };
+}
 
 /**
  * The store's connection was closed under it: another tab or window of a newer Taut upgraded the
@@ -133,7 +141,7 @@ export interface NotesStore {
   /** The Start reviews kept for a note, oldest first; damaged records are left out. */
   reviews(location: string): Promise<StartReviewFile[]>;
   /** Keep a review beside its note (which must exist); false with the reason when it cannot be. */
-  addReview(review: StartReviewFile): Promise<{ ok: true } | { ok: false; message: string }>;
+  addReview(review: StartReviewFile): Promise<{ ok: true } | { ok: false; message: string; coded: ReaderCoded }>;
   /** Remove a review; true when there was one. */
   deleteReview(id: string): Promise<boolean>;
   /** ISO date-time of the last export of the whole library. */
@@ -456,12 +464,12 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
       if (!opts.validated) {
         for (const [k, n] of notes.entries()) {
           const p = parseLocationNote(n);
-          if (!p.ok) return { status: "failed", message: `Note ${k + 1} is not valid (${p.issues[0]?.path}: ${p.issues[0]?.message}); nothing was imported.` };
+          if (!p.ok) return { status: "failed", ...refusal({ code: "importNoteInvalid", figures: { number: k + 1, path: String(p.issues[0]?.path), problem: String(p.issues[0]?.message) } }) };
         }
       }
       const ids = new Set<string>();
       for (const n of notes) {
-        if (ids.has(n.id)) return { status: "failed", message: `The id "${n.id}" appears twice in the file; nothing was imported.` };
+        if (ids.has(n.id)) return { status: "failed", ...refusal({ code: "importIdTwice", figures: { id: n.id } }) };
         ids.add(n.id);
       }
       const { valid, problems, keys } = await readAll();
@@ -477,7 +485,7 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
       try {
         writes = mergeWrites(preview, choices, keys);
       } catch (e) {
-        return { status: "failed", message: `${(e as Error).message}; nothing was imported.` };
+        return { status: "failed", ...refusal({ code: "importFailed", figures: { why: (e as Error).message } }) };
       }
       open();
       const at = now();
@@ -511,7 +519,7 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
           // already finished or aborted
         }
         await Promise.allSettled(pending);
-        return { status: "failed", message: `The device refused to save the notes (${(e as Error).message || (e as Error).name}); nothing was imported.` };
+        return { status: "failed", ...refusal({ code: "importRefused", figures: { why: (e as Error).message || (e as Error).name } }) };
       }
       const saved = records.map(remember);
       if (count) applied(count, (snap) => saved.forEach((x) => written(snap, x)));
@@ -540,11 +548,11 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
     async addReview(review) {
       open();
       const parsed = startReviewSchema.safeParse(review);
-      if (!parsed.success) return { ok: false, message: `The review is not valid (${parsed.error.issues[0]?.path.join(".")}: ${parsed.error.issues[0]?.message}); nothing was saved.` };
+      if (!parsed.success) return { ok: false, ...refusal({ code: "reviewInvalid", figures: { path: String(parsed.error.issues[0]?.path.join(".")), problem: String(parsed.error.issues[0]?.message) } }) };
       const tx = db.transaction(["notes", "reviews"], "readwrite");
       if ((await tx.objectStore("notes").getKey(review.location)) === undefined) {
         await tx.done;
-        return { ok: false, message: `There is no note "${review.location}" to keep the review beside; nothing was saved.` };
+        return { ok: false, ...refusal({ code: "reviewNoNote", figures: { id: review.location } }) };
       }
       await tx.objectStore("reviews").put(parsed.data);
       await tx.done;

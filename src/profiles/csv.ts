@@ -6,7 +6,14 @@ export interface CsvRecord {
   fields: string[];
 }
 
-/** Split CSV text into records; blank lines are skipped. Throws a RangeError naming the line of an unclosed quote. */
+/** A CSV text whose quoted field is not closed: the line it starts on (the message is English; a reader says it in any language from the line). */
+export class CsvQuoteError extends RangeError {
+  constructor(readonly line: number) {
+    super(`line ${line}: a quoted field is not closed`);
+  }
+}
+
+/** Split CSV text into records; blank lines are skipped. Throws a CsvQuoteError naming the line of an unclosed quote. */
 export function parseCsv(text: string): CsvRecord[] {
   const out: CsvRecord[] = [];
   let fields: string[] = [];
@@ -53,7 +60,7 @@ export function parseCsv(text: string): CsvRecord[] {
     } else field += ch;
     i++;
   }
-  if (quoted) throw new RangeError(`line ${start}: a quoted field is not closed`);
+  if (quoted) throw new CsvQuoteError(start);
   if (field !== "" || fields.length > 0) endRecord();
   return out;
 }

@@ -8,8 +8,15 @@
  */
 import { RAIL_CONDITIONS, type RailCondition } from "../core/physics/types.js";
 import type { StartCase } from "../core/train/types.js";
-import { parseCsv } from "./csv.js";
-import { formatIssues, type FieldIssue } from "./issues.js";
+import { CsvQuoteError, parseCsv } from "./csv.js";
+import type { ReaderCoded } from "../i18n/renderReaders.js";
+import { readerEnglish, readerIssue } from "./readerIssues.js";
+import { coded, formatIssues, MAX_LISTED_ISSUES, type FieldIssue } from "./issues.js";
+import { issueMessage } from "./issueText.js";
+import { fields } from "../i18n/en/fields.js";
+import { readers } from "../i18n/en/readers.js";
+import { readerMessage } from "../i18n/renderReaders.js";
+import type { Translator } from "../i18n/translator.js";
 import type { Library } from "./library.js";
 import { fileKind, kindText, parseJsonText, parseStartCase } from "./parse.js";
 import { printable, quoted } from "./text.js";
@@ -25,12 +32,58 @@ export interface Departure {
   case?: StartCase;
   /** The row's start case as a file (taut/start-case@1, the row's overrides written in), when the row is good: to open it elsewhere. */
   file?: unknown;
-  /** What is wrong with the row, when it is not. */
+  /** What is wrong with the row, when it is not (English). */
   error?: string;
+  /** The same as codes with their figures, for other languages (departureProblemText). */
+  problem?: DepartureProblem;
+}
+
+/**
+ * What is wrong with a row as data: where (a CSV line, or a JSON index with the row's id), then the issues,
+ * each after a prefix that is no word of any language (a column or field name, a file's path); written
+ * `where: lead part; part; …` as the English `error` is.
+ */
+export interface DepartureProblem {
+  line?: number;
+  index?: number;
+  id?: string;
+  /** Text before the first part (a case file's path and ": "). */
+  lead?: string;
+  parts: Array<{ prefix: string; issue: FieldIssue }>;
+  /** Issues beyond those listed. */
+  more?: number;
+}
+
+/** A case file that cannot be used for a row: its issues (the message is them on one line, in English). */
+export class CaseFileError extends Error {
+  constructor(readonly issues: FieldIssue[]) {
+    super(oneLine(issues));
+  }
+}
+
+/** A list of issues as a problem's parts, `path: message` each, cut as `oneLine` cuts them. */
+export function issueParts(issues: readonly FieldIssue[]): Pick<DepartureProblem, "parts" | "more"> {
+  const parts = issues.slice(0, MAX_LISTED_ISSUES).map((i) => ({ prefix: i.path ? `${i.path}: ` : "", issue: i }));
+  return issues.length > MAX_LISTED_ISSUES ? { parts, more: issues.length - MAX_LISTED_ISSUES } : { parts };
+}
+
+/** A row's problem in a language: the English `error` in English, the same codes and figures in Hungarian or German. */
+export function departureProblemText(tr: Translator, p: DepartureProblem): string {
+  const t = tr.ns(readers);
+  const where = p.line !== undefined ? t("rowLine", { line: p.line }) : `[${p.index}]${p.id ? ` (${printable(p.id)})` : ""}`;
+  const text = (i: FieldIssue) => (i.reader ? readerMessage(tr, i.reader) : issueMessage(tr, i));
+  const parts = p.parts.map((x, k) => printable(`${k === 0 ? (p.lead ?? "") : ""}${x.prefix}${text(x.issue)}`));
+  if (p.more) parts.push(tr.ns(fields)("andMore", { count: p.more }));
+  return `${where}: ${parts.join("; ")}`;
 }
 
 /** The departures of a file, or why the file as a whole cannot be read (with field issues when there are some). */
-export type DeparturesRead = { ok: true; departures: Departure[] } | { ok: false; message: string; issues?: FieldIssue[] };
+export type DeparturesRead = { ok: true; departures: Departure[] } | { ok: false; message: string; headline: ReaderCoded; issues?: FieldIssue[] };
+
+/** A departures file refused: the headline as a code and in English. */
+function refused(headline: ReaderCoded, issues?: FieldIssue[]): DeparturesRead {
+  return { ok: false, message: readerEnglish(headline), headline, ...(issues ? { issues } : {}) };
+}
 
 /** Issues on one line, for a row's error. */
 export function oneLine(issues: readonly FieldIssue[]): string {
@@ -40,15 +93,15 @@ export function oneLine(issues: readonly FieldIssue[]): string {
 /** Departures from a JSON departures file's text: a list of start cases. */
 export function departuresFromJson(text: string, lib: Library): DeparturesRead {
   const parsed = parseJsonText(text);
-  if (!parsed.ok) return { ok: false, message: "not a valid file", issues: parsed.issues };
-  if (!Array.isArray(parsed.value)) return { ok: false, message: "a departures file in JSON is a list of start cases ([ {...}, {...} ])" };
+  if (!parsed.ok) return refused({ code: "departuresNotValid" }, parsed.issues);
+  if (!Array.isArray(parsed.value)) return refused({ code: "departuresJsonList", figures: { open: "{", close: "}" } });
   return {
     ok: true,
     departures: parsed.value.map((item, index): Departure => {
       const rawId = item && typeof item === "object" && typeof (item as { id?: unknown }).id === "string" ? (item as { id: string }).id : undefined;
       const base = { id: rawId ?? `[${index}]`, where: `[${index}]`, index };
       const r = parseStartCase(item, lib);
-      if (!r.ok) return { ...base, error: `[${index}]${rawId ? ` (${printable(rawId)})` : ""}: ${oneLine(r.issues)}` };
+      if (!r.ok) return { ...base, error: `[${index}]${rawId ? ` (${printable(rawId)})` : ""}: ${oneLine(r.issues)}`, problem: { index, ...(rawId ? { id: rawId } : {}), ...issueParts(r.issues) } };
       return { ...base, case: r.value, file: item };
     }),
   };
@@ -62,9 +115,9 @@ const SAND_WORDS: Record<string, boolean> = { true: true, yes: true, y: true, "1
  */
 export function caseFileJson(text: string): unknown {
   const parsed = parseJsonText(text);
-  if (!parsed.ok) return new Error(oneLine(parsed.issues));
+  if (!parsed.ok) return new CaseFileError(parsed.issues);
   const kind = fileKind(parsed.value);
-  if (kind !== undefined && kind !== "taut/start-case@1") return new Error(`this is a ${kindText(kind)} file; a start case (taut/start-case@1) is needed`);
+  if (kind !== undefined && kind !== "taut/start-case@1") return new CaseFileError([readerIssue("", { code: "caseOtherKind", figures: { kind: kindText(kind) } })]);
   return parsed.value;
 }
 
@@ -80,13 +133,14 @@ export function departuresFromCsv(text: string, readCase: (casePath: string) => 
   try {
     records = parseCsv(text);
   } catch (e) {
-    return { ok: false, message: (e as Error).message };
+    if (e instanceof CsvQuoteError) return refused({ code: "csvUnclosed", figures: { line: e.line } });
+    throw e;
   }
   const header = records.shift();
-  if (!header) return { ok: false, message: 'the file is empty (a header line "id,case,rail,sand" is needed)' };
+  if (!header) return refused({ code: "csvEmpty" });
   const col = new Map(header.fields.map((h, k) => [h.trim().toLowerCase(), k]));
   // The header is not quoted back: a file given here by mistake may be anything.
-  if (!col.has("case")) return { ok: false, message: `line ${header.line}: the header must name the columns id,case,rail,sand (its ${header.fields.length} column${header.fields.length === 1 ? "" : "s"} include no "case")` };
+  if (!col.has("case")) return refused({ code: "csvNoCase", figures: { line: header.line, count: header.fields.length } });
   const files = new Map<string, unknown>();
   const cell = (fields: string[], name: string): string => {
     const k = col.get(name);
@@ -97,20 +151,25 @@ export function departuresFromCsv(text: string, readCase: (casePath: string) => 
     departures: records.map(({ line, fields }): Departure => {
       const id = cell(fields, "id") || `line ${line}`;
       const base = { id, where: `line ${line}`, line };
-      const fail = (message: string): Departure => ({ ...base, error: `line ${line}: ${message}` });
+      // The English error as it has always read, and the same as codes (`problem`) for other languages.
+      const fail = (message: string, problem: Omit<DepartureProblem, "line">): Departure => ({ ...base, error: `line ${line}: ${message}`, problem: { line, ...problem } });
+      const failWith = (prefix: string, issue: FieldIssue): Departure => fail(`${prefix}${issue.message}`, { parts: [{ prefix, issue }] });
       const casePath = cell(fields, "case");
-      if (casePath === "") return fail("case: a start-case file is needed");
+      if (casePath === "") return failWith("case: ", readerIssue("case", { code: "caseNeeded" }));
       const rail = cell(fields, "rail").toLowerCase();
-      if (rail !== "" && !(RAIL_CONDITIONS as readonly string[]).includes(rail)) return fail(`rail: must be one of ${RAIL_CONDITIONS.join(", ")} (got ${quoted(rail)})`);
+      if (rail !== "" && !(RAIL_CONDITIONS as readonly string[]).includes(rail)) return failWith("rail: ", coded("rail", { code: "oneOf", figures: { values: RAIL_CONDITIONS.join(", ") }, got: quoted(rail) }));
       const sandWord = cell(fields, "sand").toLowerCase();
-      if (sandWord !== "" && SAND_WORDS[sandWord] === undefined) return fail(`sand: must be yes or no (true/false, 1/0) (got ${quoted(sandWord)})`);
+      if (sandWord !== "" && SAND_WORDS[sandWord] === undefined) return failWith("sand: ", readerIssue("sand", { code: "sandYesNo", figures: { value: quoted(sandWord) } }));
       const location = cell(fields, "location");
       // A bare id (no folder, no extension) names a case of the library — the built-in demo cases — so a
       // shared departures file need not reach outside its own folder for them.
       if (!files.has(casePath)) files.set(casePath, CASE_ID.test(casePath) && lib.cases?.has(casePath) ? lib.cases.get(casePath) : readCase(casePath));
       const raw = files.get(casePath);
       const shownPath = printable(casePath);
-      if (raw instanceof Error) return fail(`${shownPath}: ${raw.message}`);
+      if (raw instanceof Error) {
+        const issues = raw instanceof CaseFileError ? raw.issues : [{ path: "", message: raw.message }];
+        return fail(`${shownPath}: ${raw.message}`, { lead: `${shownPath}: `, ...issueParts(issues) });
+      }
       const data = (raw && typeof raw === "object" && !Array.isArray(raw) ? (JSON.parse(JSON.stringify(raw)) as unknown) : {}) as Record<string, unknown>;
       const conditions = (data.conditions && typeof data.conditions === "object" ? data.conditions : {}) as Record<string, unknown>;
       if (rail !== "") conditions.rail = rail as RailCondition;
@@ -122,13 +181,11 @@ export function departuresFromCsv(text: string, readCase: (casePath: string) => 
         // A value the row's own cells put in is the CSV line's fault, not the case file's.
         const fromCell = r.issues.filter((i) => (location !== "" && i.path.startsWith("location")) || (rail !== "" && i.path === "conditions.rail") || (sandWord !== "" && i.path === "conditions.sand"));
         if (fromCell.length > 0) {
-          const said = (i: FieldIssue) =>
-            i.path.startsWith("location")
-              ? `location ${quoted(location)}: ${i.path === "location" ? "" : `${i.path.slice("location.".length)} `}${i.message}`
-              : `${i.path.slice("conditions.".length)}: ${i.message}`;
-          return fail(printable(fromCell.map(said).join("; ")));
+          const prefix = (i: FieldIssue) =>
+            i.path.startsWith("location") ? `location ${quoted(location)}: ${i.path === "location" ? "" : `${i.path.slice("location.".length)} `}` : `${i.path.slice("conditions.".length)}: `;
+          return fail(printable(fromCell.map((i) => `${prefix(i)}${i.message}`).join("; ")), { parts: fromCell.map((i) => ({ prefix: prefix(i), issue: i })) });
         }
-        return fail(`${shownPath}: ${oneLine(r.issues)}`);
+        return fail(`${shownPath}: ${oneLine(r.issues)}`, { lead: `${shownPath}: `, ...issueParts(r.issues) });
       }
       return { ...base, case: r.value, file: data };
     }),

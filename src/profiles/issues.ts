@@ -2,6 +2,8 @@
  * Validation results as data: every problem names the field (a dotted path) and the rule broken,
  * in words a driver or a script author can act on. Used by the CLI (exit 2) and the app (shown at the field).
  */
+import type { PlanWorkProblem } from "../core/planner/workCap.js";
+import type { ReaderCoded } from "../i18n/renderReaders.js";
 import { englishField, type FieldCoded, type GotValue } from "./issueText.js";
 import { printable, quoted } from "./text.js";
 
@@ -13,6 +15,8 @@ export interface FieldIssue extends Partial<FieldCoded> {
   /** Dotted path of the field, e.g. "train.trailingMass_t" or "locomotives[0].profile"; "" for the whole file. */
   path: string;
   message: string;
+  /** A reader's message (a notes file, a departures file, a reference train) or the work cap's refusal, as a code with its figures (i18n/renderReaders.ts). */
+  reader?: ReaderCoded | PlanWorkProblem;
 }
 
 /** A coded issue at `path`, its English message written from the code. */

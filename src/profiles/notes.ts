@@ -8,6 +8,8 @@ import * as z from "zod/mini";
 import { fromZodIssues, type FieldIssue, type RawIssue } from "./issues.js";
 import { fileKind, kindText, parseLocationNote, parseJsonText } from "./parse.js";
 import { quoted } from "./text.js";
+import type { ReaderCoded } from "../i18n/renderReaders.js";
+import { readerEnglish, readerIssue } from "./readerIssues.js";
 import { locationNoteSchema, railConditionSchema, type LocationNoteFile } from "./schemas.js";
 
 export const NOTES_BUNDLE_SCHEMA = "taut/notes-bundle@2";
@@ -57,7 +59,14 @@ export type NotesBundleFile = z.infer<typeof notesBundleSchema>;
 /** A notes file read and checked: the notes it holds (and their reviews), and whether it was one note or a bundle. */
 export type NotesFileResult =
   | { ok: true; kind: "note" | "bundle"; notes: LocationNoteFile[]; reviews: StartReviewFile[]; exported?: string; migratedFrom?: string }
-  | { ok: false; message: string; issues: FieldIssue[] };
+  | {
+      ok: false;
+      message: string;
+      /** The message as a code (and whether "Nothing was changed." follows it in `message`), for other languages. */
+      headline: ReaderCoded;
+      nothingChanged: boolean;
+      issues: FieldIssue[];
+    };
 
 /**
  * A version-1 bundle as version 2: the same notes and no reviews (version 1 had none). Anything that is
@@ -78,13 +87,13 @@ export function parseNotesBundle(data: unknown): { ok: true; value: NotesBundleF
   const issues: FieldIssue[] = [];
   r.data.notes.forEach((n, k) => {
     const first = seen.get(n.id);
-    if (first !== undefined) issues.push({ path: `notes[${k}].id`, message: `repeats the id of note ${first + 1} ("${n.id}"); ids must be unique in a bundle` });
+    if (first !== undefined) issues.push(readerIssue(`notes[${k}].id`, { code: "noteIdRepeated", figures: { first: first + 1, id: n.id } }));
     else seen.set(n.id, k);
   });
   const reviewIds = new Set<string>();
   r.data.reviews.forEach((v, k) => {
-    if (!seen.has(v.location)) issues.push({ path: `reviews[${k}].location`, message: `names the note "${v.location}", which is not in the bundle` });
-    if (reviewIds.has(v.id)) issues.push({ path: `reviews[${k}].id`, message: `repeats the id of another review ("${v.id}")` });
+    if (!seen.has(v.location)) issues.push(readerIssue(`reviews[${k}].location`, { code: "reviewNoteMissing", figures: { id: v.location } }));
+    if (reviewIds.has(v.id)) issues.push(readerIssue(`reviews[${k}].id`, { code: "reviewIdRepeated", figures: { id: v.id } }));
     reviewIds.add(v.id);
   });
   return issues.length > 0 ? { ok: false, issues } : { ok: true, value: r.data };
@@ -95,15 +104,9 @@ export function parseNotesBundle(data: unknown): { ok: true; value: NotesBundleF
  * another kind, and a bundle with any bad note are all refused with a headline and field issues.
  */
 export function readNotesText(text: string): NotesFileResult {
-  if (text.replace(/^\ufeff/, "").trim() === "") return { ok: false, message: "The file is empty.", issues: [] };
+  if (text.replace(/^\ufeff/, "").trim() === "") return refused({ code: "notesEmpty" }, false, []);
   const json = parseJsonText(text);
-  if (!json.ok) {
-    return {
-      ok: false,
-      message: "The file is not complete JSON: it may have been cut short while copying or downloading. Nothing was changed.",
-      issues: json.issues,
-    };
-  }
+  if (!json.ok) return refused({ code: "notesCutShort" }, true, json.issues);
   return readNotesData(json.value);
 }
 
@@ -112,30 +115,31 @@ export function readNotesData(data: unknown): NotesFileResult {
   const kind = fileKind(data);
   if (kind === NOTES_BUNDLE_SCHEMA || kind === NOTES_BUNDLE_SCHEMA_V1) {
     const r = parseNotesBundle(data);
-    if (!r.ok) return { ok: false, message: bundleHeadline(r.issues, data), issues: r.issues };
+    if (!r.ok) {
+      const h = bundleHeadline(r.issues, data);
+      return refused(h.headline, h.nothingChanged, r.issues);
+    }
     return { ok: true, kind: "bundle", notes: r.value.notes, reviews: r.value.reviews, exported: r.value.exported, ...(kind === NOTES_BUNDLE_SCHEMA_V1 ? { migratedFrom: kind } : {}) };
   }
   if (kind === LOCATION_NOTE_SCHEMA) {
     const r = parseLocationNote(data);
-    if (!r.ok) return { ok: false, message: `The location note ${nameText(data)} is not valid. Nothing was changed.`, issues: r.issues };
+    if (!r.ok) return refused(nameOf(data) === undefined ? { code: "noteNotValid" } : { code: "noteNotValid", figures: { name: quoted(nameOf(data)!) } }, true, r.issues);
     return { ok: true, kind: "note", notes: [r.value], reviews: [] };
   }
-  if (kind === undefined) {
-    return {
-      ok: false,
-      message: `This is not a Taut notes file: it has no "schema" field naming ${NOTES_BUNDLE_SCHEMA} or ${LOCATION_NOTE_SCHEMA}. Nothing was changed.`,
-      issues: [{ path: "schema", message: `must be "${NOTES_BUNDLE_SCHEMA}" or "${LOCATION_NOTE_SCHEMA}"` }],
-    };
-  }
-  return {
-    ok: false,
-    message: `This is a ${kindText(kind)} file, not location notes (${NOTES_BUNDLE_SCHEMA} or ${LOCATION_NOTE_SCHEMA}). Nothing was changed.`,
-    issues: [{ path: "schema", message: `must be "${NOTES_BUNDLE_SCHEMA}" or "${LOCATION_NOTE_SCHEMA}" (got ${kindText(kind)})` }],
-  };
+  const schemas = { bundle: NOTES_BUNDLE_SCHEMA, note: LOCATION_NOTE_SCHEMA };
+  if (kind === undefined) return refused({ code: "notesNoSchema", figures: schemas }, true, [readerIssue("schema", { code: "notesSchema", figures: schemas })]);
+  const k = kindText(kind);
+  return refused({ code: "notesOtherKind", figures: { ...schemas, kind: k } }, true, [readerIssue("schema", { code: "notesSchemaGot", figures: { ...schemas, kind: k } })]);
+}
+
+/** A notes file refused: its headline as a code and in English (with "Nothing was changed." where it says so). */
+export function refused(headline: ReaderCoded, nothingChanged: boolean, issues: FieldIssue[]): NotesFileResult {
+  const english = readerEnglish(headline);
+  return { ok: false, message: nothingChanged ? `${english} ${readerEnglish({ code: "nothingChanged" })}` : english, headline, nothingChanged, issues };
 }
 
 /** The headline for a refused bundle: which notes are bad, by number and name. */
-function bundleHeadline(issues: readonly FieldIssue[], data: unknown): string {
+function bundleHeadline(issues: readonly FieldIssue[], data: unknown): { headline: ReaderCoded; nothingChanged: boolean } {
   const bad = new Set<number>();
   for (const i of issues) {
     const m = /^notes\[(\d+)\]/.exec(i.path);
@@ -143,20 +147,14 @@ function bundleHeadline(issues: readonly FieldIssue[], data: unknown): string {
   }
   const notes = (data as { notes?: unknown }).notes;
   const count = Array.isArray(notes) ? notes.length : 0;
-  if (bad.size === 0) return "The notes bundle is not valid. Nothing was changed.";
+  if (bad.size === 0) return { headline: { code: "bundleNotValid" }, nothingChanged: true };
   const named = [...bad]
     .sort((a, b) => a - b)
     .map((k) => {
       const name = Array.isArray(notes) ? nameOf(notes[k]) : undefined;
-      return `note ${k + 1}${name ? ` (${quoted(name)})` : ""}`;
+      return { number: k + 1, ...(name ? { name: quoted(name) } : {}) };
     });
-  return `The bundle holds ${count} note${count === 1 ? "" : "s"}; ${named.join(", ")} ${bad.size === 1 ? "is" : "are"} not valid, so none was imported.`;
-}
-
-/** A note's name for a message, quoted safely. */
-function nameText(x: unknown): string {
-  const name = nameOf(x);
-  return name === undefined ? "without a name" : quoted(name);
+  return { headline: { code: "bundleBad", notes: count, named }, nothingChanged: false };
 }
 
 function nameOf(x: unknown): string | undefined {

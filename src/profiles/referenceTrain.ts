@@ -4,9 +4,10 @@
  * on the note's own profile, resolved exactly as the command line resolves a case.
  */
 import type { StartCase } from "../core/train/types.js";
-import type { FieldIssue, ParseResult } from "./issues.js";
+import type { ParseResult } from "./issues.js";
 import type { Library } from "./library.js";
 import { resolveStartCase } from "./parse.js";
+import { readerIssue } from "./readerIssues.js";
 import type { LocationNoteFile, ReferenceTrainFile, StartCaseFile, TrainPresetFile } from "./schemas.js";
 
 /** Air temperature a load table assumes when the note does not say, °C. */
@@ -35,8 +36,7 @@ export function referenceCaseFile(
 ): ParseResult<StartCaseFile> {
   const preset = presets.find((p) => p.id === ref.train);
   if (!preset) {
-    const issue: FieldIssue = { path: "referenceTrain.train", message: `names no known train ("${ref.train}"; known: ${presets.map((p) => p.id).join(", ")})` };
-    return { ok: false, issues: [issue] };
+    return { ok: false, issues: [readerIssue("referenceTrain.train", { code: "unknownTrain", figures: { id: ref.train, known: presets.map((p) => p.id).join(", ") } })] };
   }
   return {
     ok: true,

@@ -7,6 +7,7 @@ import { cautionText } from "../i18n/render.js";
 import { groupName, helperCallText, stepWhyText } from "../i18n/renderLines.js";
 import { adviceText, bandWhatText, limitWhatText, vehicleText } from "../i18n/renderAdvice.js";
 import { slipGuidanceText } from "../i18n/renderSlip.js";
+import { sensitivityChangeText } from "../i18n/renderSensitivity.js";
 import { ENGLISH, ENGLISH_SI, lineReport } from "./lineReport.js";
 import type { GroupPlace } from "../core/planner/lines.js";
 import type { PlanResult, PlanStep, SlipGuidance } from "../core/planner/types.js";
@@ -349,7 +350,9 @@ export function planReport(c: StartCase, p: PlanResult, meta: PlanReport["case"]
   };
   rep.sensitivity = p.sensitivity.map((x) => ({
     input: x.input,
-    change: x.change,
+    // `input` is the row's code already, its nudge a constant (core/planner/sensitivity.ts SENSITIVITY_NUDGES):
+    // the JSON stays as it was, `change` its English words.
+    change: sensitivityChangeText(ENGLISH, x.change),
     marginBefore: r(x.marginBefore, 3),
     marginAfter: r(x.marginAfter, 3),
     stretchTravelChange_m: r(x.stretchTravelChangeM, 2),

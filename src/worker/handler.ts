@@ -105,7 +105,8 @@ export function createPlannerHandler(post: Post, deps: HandlerDeps = {}): (msg: 
     // A well-formed case may still ask for more work than a plan may take (a wagon of a few kilograms):
     // refused with the reason, as the command line refuses it, rather than run for hours.
     const work = issues.length === 0 ? planWorkProblem(req.startCase) : undefined;
-    if (work) issues.push({ path: "train", message: work });
+    // The worker carries no words: the message is the code's, the page writes it (i18n/renderReaders.ts).
+    if (work) issues.push({ path: "train", message: work.code, reader: work });
     if (issues.length > 0) {
       post({ type: "error", id: req.id, kind: "invalid", issues, message: "The start case is malformed." }, []);
       return;

@@ -22,11 +22,14 @@ import type { PlanOptions, PlanResult } from "../core/planner/types.js";
 import { RAIL_CONDITIONS, type LocomotiveSpec, type RailCondition } from "../core/physics/types.js";
 import type { LimitName, Reason, StartKind, Verdict } from "../core/planner/outcome.js";
 import type { StartCase } from "../core/train/types.js";
+import type { PlanWorkProblem } from "../core/planner/workCap.js";
 
 /** A field problem, as the app shows it (same shape as src/profiles' FieldIssue). */
 export interface WorkerIssue {
   path: string;
   message: string;
+  /** The work cap's refusal as a code with its figures (the page writes it in words: i18n/renderReaders.ts). */
+  reader?: PlanWorkProblem;
 }
 
 // ------------------------------------------------------------------ results (plain data, SI)

@@ -11,6 +11,9 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { afterAll, describe, expect, it } from "vitest";
 import { PLAN_WORK_CAP_VEHICLE_STEPS, planWork, planWorkProblem } from "../../src/core/planner/workCap.js";
+import { readerMessage } from "../../src/i18n/renderReaders.js";
+import { ENGLISH } from "../../src/profiles/lineReport.js";
+import { readerEnglish } from "../../src/profiles/readerIssues.js";
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { csvField, parseCsv, toCsv } from "../../src/profiles/csv.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
@@ -218,7 +221,7 @@ describe("every number within a physical range; a plan's work capped", () => {
     // so a gram wagon's step is microseconds or less, far below the 3 ms accuracy cap [D].
     expect(w.stepS).toBeLessThan(1e-5);
     expect(w.vehicleSteps).toBeGreaterThan(PLAN_WORK_CAP_VEHICLE_STEPS);
-    expect(planWorkProblem(c)).toMatch(/^one plan of this train would take .* vehicle-steps \(61 vehicles at a [\d.]+ ns step, which the lightest vehicle, 1 g, sets\), more than the 5\.0 × 10\^8 a plan may take: check the masses$/);
+    expect(readerEnglish(planWorkProblem(c)!)).toMatch(/^one plan of this train would take .* vehicle-steps \(61 vehicles at a [\d.]+ ns step, which the lightest vehicle, 1 g, sets\), more than the 5\.0 × 10\^8 a plan may take: check the masses$/);
     // The planner worker answers it as invalid input with that message, never by running for hours.
     const posted: WorkerResponse[] = [];
     const ticks: Array<() => void> = [];
@@ -227,7 +230,10 @@ describe("every number within a physical range; a plan's work capped", () => {
     while (ticks.length > 0) ticks.shift()!();
     const last = posted.at(-1)!;
     expect(last).toMatchObject({ type: "error", id: 1, kind: "invalid" });
-    expect(last.type === "error" && last.issues?.[0]?.message).toMatch(/vehicle-steps/);
+    // As a code with its figures (the worker carries no words); the page writes them.
+    const reader = last.type === "error" ? last.issues?.[0]?.reader : undefined;
+    expect(reader).toMatchObject({ code: "work-cap", vehicles: 61, capVehicleSteps: PLAN_WORK_CAP_VEHICLE_STEPS });
+    expect(readerMessage(ENGLISH, reader!)).toMatch(/vehicle-steps/);
   });
 
   it("every train the schemas admit is within the cap: the most work is 408 of the lightest, shortest vehicles", () => {

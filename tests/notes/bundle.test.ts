@@ -28,7 +28,9 @@ describe("reading a notes file", () => {
     const r = readNotesText(JSON.stringify(makeNotesBundle([sampleNote(), sampleNote({ name: "Same id again (test)" })])));
     expect(r.ok).toBe(false);
     if (r.ok) return;
-    expect(r.issues).toEqual([{ path: "notes[1].id", message: 'repeats the id of note 1 ("brackenfold-up-main"); ids must be unique in a bundle' }]);
+    expect(r.issues).toEqual([
+      { path: "notes[1].id", message: 'repeats the id of note 1 ("brackenfold-up-main"); ids must be unique in a bundle', reader: { code: "noteIdRepeated", figures: { first: 1, id: "brackenfold-up-main" } } },
+    ]);
   });
 
   it("gives a refused bundle a headline naming the bad note by number and name", () => {
@@ -114,7 +116,11 @@ describe("export and import", () => {
     const bad = { ...sampleNote({ id: "ok-one" }) };
     const worse = { ...sampleNote({ id: "bad-one" }), revisions: [] };
     const outcome = await store.importBundle([bad, worse], neverAsked);
-    expect(outcome).toEqual({ status: "failed", message: "Note 2 is not valid (revisions: must have at least 1 item); nothing was imported." });
+    expect(outcome).toEqual({
+      status: "failed",
+      message: "Note 2 is not valid (revisions: must have at least 1 item); nothing was imported.",
+      coded: { code: "importNoteInvalid", figures: { number: 2, path: "revisions", problem: "must have at least 1 item" } },
+    });
     expect(await snapshot(store)).toEqual(before);
     store.close();
   });
@@ -207,7 +213,7 @@ describe("import conflicts: same id, another revision", () => {
     expect(await store.importBundle([theirs, fresh], () => null)).toEqual({ status: "cancelled" });
     expect(await snapshot(store)).toEqual(before);
     const unanswered = await store.importBundle([theirs, fresh], () => ({}));
-    expect(unanswered).toEqual({ status: "failed", message: 'no choice made for the conflicting note "brackenfold-up-main"; nothing was imported.' });
+    expect(unanswered).toMatchObject({ status: "failed", message: 'no choice made for the conflicting note "brackenfold-up-main"; nothing was imported.', coded: { code: "importFailed" } });
     expect(await snapshot(store)).toEqual(before);
     store.close();
   });

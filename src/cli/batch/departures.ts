@@ -11,8 +11,11 @@
 import { realpathSync } from "node:fs";
 import { dirname, extname, isAbsolute, relative, resolve, sep } from "node:path";
 import type { Library } from "../../profiles/library.js";
-import { caseFileJson, departuresFromCsv, departuresFromJson, type Departure, type DeparturesRead } from "../../profiles/departures.js";
+import { CaseFileError, caseFileJson, departureProblemText, departuresFromCsv, departuresFromJson, type Departure, type DepartureProblem, type DeparturesRead } from "../../profiles/departures.js";
 import { planWorkProblem } from "../../core/planner/workCap.js";
+import { readerIssue } from "../../profiles/readerIssues.js";
+import { readerText } from "../../i18n/renderReaders.js";
+import { cliTr } from "../lang.js";
 import { InputError } from "../errors.js";
 import { pathText, readRegularFile, readText } from "../files.js";
 
@@ -32,8 +35,22 @@ export function readDepartures(path: string, lib: Library, opts: ReadDeparturesO
   const read: DeparturesRead = json
     ? departuresFromJson(text, lib)
     : departuresFromCsv(text, (casePath) => readCaseFile(resolve(dir, casePath), opts.allowOutside ? undefined : dir), lib);
-  if (!read.ok) throw new InputError(`${pathText(path)}: ${read.message}`, read.issues);
-  return read.departures.map(withinWorkCap);
+  if (!read.ok) throw new InputError(`${pathText(path)}: ${readerText(cliTr(), read.headline)}`, read.issues);
+  const out = read.departures.map(withinWorkCap);
+  for (const d of out) if (d.error !== undefined && d.problem) problems.set(d.error, d.problem);
+  return out;
+}
+
+/**
+ * The rows' problems by their English error: the check's rows carry the English text (its JSON and CSV),
+ * the printout says it in this run's language from the codes behind it.
+ */
+const problems = new Map<string, DepartureProblem>();
+
+/** A row's error in this run's language (English: the text itself). */
+export function rowErrorText(error: string): string {
+  const p = cliTr().lang === "en" ? undefined : problems.get(error);
+  return p ? departureProblemText(cliTr(), p) : error;
 }
 
 /** A departure whose plan would take more work than a plan may becomes a row with that error. */
@@ -42,7 +59,9 @@ function withinWorkCap(d: Departure): Departure {
   const problem = planWorkProblem(d.case);
   if (!problem) return d;
   const { case: _dropped, ...rest } = d;
-  return { ...rest, error: `${d.where}: train: ${problem}` };
+  const issue = readerIssue("train", problem);
+  const at = d.line !== undefined ? { line: d.line } : { index: d.index ?? 0 };
+  return { ...rest, error: `${d.where}: train: ${issue.message}`, problem: { ...at, parts: [{ prefix: "train: ", issue }] } };
 }
 
 /** Whether `path` is `folder` itself or below it. */
@@ -63,7 +82,7 @@ function real(path: string): string {
 /** A start-case file's JSON, or the error that stops it; with `folder`, only files inside it are read. */
 function readCaseFile(path: string, folder: string | undefined): unknown {
   if (folder !== undefined && !isInside(real(folder), real(path))) {
-    return new Error(`is outside the folder of the departures file (${pathText(resolve(folder))}); case files are read from that folder and the folders below it (--allow-outside reads others)`);
+    return new CaseFileError([readerIssue("", { code: "caseOutside", figures: { folder: pathText(resolve(folder)) } })]);
   }
   const r = readRegularFile(path);
   if (!r.ok) return new Error(r.why);

@@ -24,6 +24,7 @@ import { where } from "../render/assistance.js";
 import { wrap } from "../render/wrap.js";
 import { jobsOption, progressReporter } from "../options.js";
 import { existsSync } from "node:fs";
+import { readerText } from "../../i18n/renderReaders.js";
 
 /** The train made from the train options (--wagons, --wagon-type, --slack, --limit) where they leave something out. */
 export const TABLE_DEFAULTS = { wagons: 40, wagonType: "bogie-hopper-loaded", targetKmh: 20 } as const;
@@ -183,7 +184,7 @@ export function tableCase(
     // One reference train per note, the same as the app's card (src/profiles/referenceTrain.ts).
     const ref = { ...referenceOf(note, builtinTrains), ...(loco !== undefined ? { locomotive: loco } : {}), ...(count !== undefined ? { count } : {}), ...(temperature !== undefined ? { temperature_C: temperature } : {}) };
     const r = referenceCaseFile(note, builtinTrains, ref);
-    if (!r.ok) throw new InputError(`${note.id}: the reference train cannot be used`, r.issues);
+    if (!r.ok) throw new InputError(readerText(cliTr(), { code: "referenceUnusable", figures: { id: note.id } }), r.issues);
     file = targetKmh !== undefined ? { ...r.value, target: { speed_kmh: cap(targetKmh) } } : r.value;
     source = note.referenceTrain ? "referenceTrain" : "defaultReferenceTrain";
     referenceTrain = ref.train;

@@ -10,6 +10,7 @@ import type { Caution } from "../../core/planner/cautions.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
 import { wrap } from "./wrap.js";
 import { printable } from "../../profiles/text.js";
+import { rowErrorText } from "../batch/departures.js";
 
 /** The remedy of a row in a few words: the cheapest option, or dividing the train. */
 export function remedyText(r: DepartureRow): string {
@@ -79,7 +80,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly Ca
   if (bad.length > 0) {
     lines.push("");
     lines.push(t("notAnswered", { count: bad.length }));
-    for (const r of bad) lines.push(...wrap(`  - ${printable(r.error ?? "")}`, 110, "    "));
+    for (const r of bad) lines.push(...wrap(`  - ${printable(rowErrorText(r.error ?? ""))}`, 110, "    "));
   }
   const s = summarise(rows);
   lines.push("");

@@ -8,22 +8,30 @@ import { quasiStaticLimits } from "./decision.js";
 import { marginalBound, plannerContext } from "./context.js";
 import type { AdhesionTable } from "../physics/types.js";
 import type { StartCase } from "../train/types.js";
-import type { SensitivityInput, SensitivityRow } from "./types.js";
+import type { SensitivityChange, SensitivityInput, SensitivityRow } from "./types.js";
 
-export type { SensitivityInput, SensitivityRow } from "./types.js";
+export type { SensitivityChange, SensitivityInput, SensitivityRow } from "./types.js";
 
-/** Nudges: +10 % trailing mass, −10 % adhesion, +1 ‰ gradient everywhere, +25 mm slack per coupling. */
+/** The nudges: +10 % trailing mass, −10 % adhesion, +1 ‰ gradient everywhere, +25 mm slack per coupling. */
+export const SENSITIVITY_NUDGES = {
+  mass: { code: "mass", fraction: 0.1 },
+  adhesion: { code: "adhesion", fraction: -0.1 },
+  grade: { code: "grade", gradient: 0.001 },
+  slack: { code: "slack", perCouplingM: 0.025 },
+} as const satisfies { [K in SensitivityInput]: Extract<SensitivityChange, { code: K }> };
+
 export function sensitivity(c: StartCase): SensitivityRow[] {
   const base = staticCheck(c);
-  const nudged: Array<[SensitivityInput, string, StartCase]> = [
-    ["mass", "+10 % trailing mass", { ...c, train: { ...c.train, trailingMassKg: c.train.trailingMassKg * 1.1 } }],
-    ["adhesion", "−10 % adhesion", { ...c, adhesion: scaleAdhesion(c.adhesion, 0.9) }],
+  const n = SENSITIVITY_NUDGES;
+  const nudged: Array<[SensitivityInput, SensitivityChange, StartCase]> = [
+    ["mass", n.mass, { ...c, train: { ...c.train, trailingMassKg: c.train.trailingMassKg * (1 + n.mass.fraction) } }],
+    ["adhesion", n.adhesion, { ...c, adhesion: scaleAdhesion(c.adhesion, 1 + n.adhesion.fraction) }],
     [
       "grade",
-      "+1 ‰ gradient",
-      { ...c, location: { ...c.location, track: { segments: c.location.track.segments.map((s) => ({ ...s, gradePermille: s.gradePermille + 1 })) } } },
+      n.grade,
+      { ...c, location: { ...c.location, track: { segments: c.location.track.segments.map((s) => ({ ...s, gradePermille: s.gradePermille + n.grade.gradient * 1000 })) } } },
     ],
-    ["slack", "+25 mm slack per coupling", { ...c, train: { ...c.train, couplerSlackM: c.train.couplerSlackM + 0.025 } }],
+    ["slack", n.slack, { ...c, train: { ...c.train, couplerSlackM: c.train.couplerSlackM + n.slack.perCouplingM } }],
   ];
   const before = quasiStaticMargin(c);
   const rows = nudged.map(([input, change, x]) => {

@@ -12,11 +12,21 @@ export type Phase = "prepare" | "stretch" | "build" | "accelerate";
 
 export type SensitivityInput = "mass" | "adhesion" | "grade" | "slack";
 
+/**
+ * A nudge as data, its size in SI (a fraction of the mass or of the adhesion, a gradient as a fraction, a
+ * length per coupling in m): src/i18n/renderSensitivity.ts says it in words, in any language.
+ */
+export type SensitivityChange =
+  | { code: "mass"; fraction: number }
+  | { code: "adhesion"; fraction: number }
+  | { code: "grade"; gradient: number }
+  | { code: "slack"; perCouplingM: number };
+
 /** One nudged input and what it does to the margin (sensitivity.ts). */
 export interface SensitivityRow {
   input: SensitivityInput;
-  /** The nudge, in words with its unit. */
-  change: string;
+  /** The nudge, as a code with its size. */
+  change: SensitivityChange;
   marginBefore: number;
   marginAfter: number;
   /** Change in locomotive travel needed to stretch the train, m (slack matters there, not in the margin). */

@@ -3,7 +3,7 @@
  * that the lightest vehicle and the stiffest coupling set (`stableTimeStep`), over at most the planner's
  * phase caps of simulated time, so a plan's work is bounded by vehicles × steps. A case whose bound is
  * beyond the cap (a wagon of a few kilograms shrinks the step a thousandfold) is refused with a message
- * rather than run for hours: as data, so the command line, the app and the planner workers can all say it.
+ * rather than run for hours: as data (a code with its figures), so the command line, the app and the planner workers can all say it.
  */
 import { modelFromCase, stableTimeStep } from "../train/trainModel.js";
 import type { StartCase } from "../train/types.js";
@@ -39,23 +39,16 @@ export function planWork(c: StartCase): PlanWork {
   return { vehicles: m.n, stepS, lightestKg, vehicleSteps: m.n * steps };
 }
 
-/** Why a case would take more work than a plan may, or undefined when it is within the cap. */
-export function planWorkProblem(c: StartCase, cap = PLAN_WORK_CAP_VEHICLE_STEPS): string | undefined {
-  const w = planWork(c);
-  if (w.vehicleSteps <= cap) return undefined;
-  const sci = (x: number) => (Number.isFinite(x) ? x.toExponential(1).replace("e+", " × 10^") : "without end");
-  return (
-    `one plan of this train would take ${sci(w.vehicleSteps)} vehicle-steps (${w.vehicles} vehicles at a ${duration(w.stepS)} step, ` +
-    `which the lightest vehicle, ${mass(w.lightestKg)}, sets), more than the ${sci(cap)} a plan may take: check the masses`
-  );
+/** Why a case would take more work than a plan may: its work and the cap, in vehicle-steps (words: src/i18n/renderReaders.ts). */
+export interface PlanWorkProblem extends PlanWork {
+  code: "work-cap";
+  /** The cap it exceeds, vehicle-steps. */
+  capVehicleSteps: number;
 }
 
-const sig2 = (x: number): string => String(Number(x.toPrecision(2)));
-/** A short time in the unit that reads best: ms, µs or ns. */
-function duration(s: number): string {
-  return s >= 1e-4 ? `${sig2(s * 1000)} ms` : s >= 1e-7 ? `${sig2(s * 1e6)} µs` : `${sig2(s * 1e9)} ns`;
-}
-/** A mass in the unit that reads best: t, kg or g. */
-function mass(kg: number): string {
-  return kg >= 1000 ? `${sig2(kg / 1000)} t` : kg >= 1 ? `${sig2(kg)} kg` : `${sig2(kg * 1000)} g`;
+/** Why a case would take more work than a plan may, or undefined when it is within the cap. */
+export function planWorkProblem(c: StartCase, cap = PLAN_WORK_CAP_VEHICLE_STEPS): PlanWorkProblem | undefined {
+  const w = planWork(c);
+  if (w.vehicleSteps <= cap) return undefined;
+  return { code: "work-cap", ...w, capVehicleSteps: cap };
 }

@@ -18,5 +18,8 @@ import { groupsDe } from "./groups.js";
 import { cabDe } from "./cab.js";
 import { tabsDe } from "./tabs.js";
 import { chartDe } from "./chart.js";
+import { sensitivityDe } from "./sensitivity.js";
+import { readersDe } from "./readers.js";
+import { unitsDe } from "./units.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe, train: trainDe, chart: chartDe, groups: groupsDe, cab: cabDe, tabs: tabsDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe, train: trainDe, chart: chartDe, groups: groupsDe, cab: cabDe, tabs: tabsDe, sensitivity: sensitivityDe, readers: readersDe, units: unitsDe };

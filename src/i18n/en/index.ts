@@ -32,4 +32,8 @@ import { tabs } from "./tabs.js";
 import { compact } from "./compact.js";
 import { sketch } from "./sketch.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors, railmlText, tabs, compact, sketch] as const;
+import { sensitivity } from "./sensitivity.js";
+import { readers } from "./readers.js";
+import { units } from "./units.js";
+
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors, railmlText, tabs, compact, sketch, sensitivity, readers, units] as const;

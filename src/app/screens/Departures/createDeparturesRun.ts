@@ -7,6 +7,8 @@ import { batch, createSignal, type Accessor } from "solid-js";
 import type { Departure } from "../../../profiles/departures.js";
 import type { CheckOutcome, PlannerCalls } from "../../../worker/client.js";
 import type { DepartureRow } from "./rows.js";
+import { readerMessage } from "../../../i18n/renderReaders.js";
+import { tr } from "../../i18n.js";
 
 export type RunState = "empty" | "running" | "done" | "cancelled";
 
@@ -32,6 +34,7 @@ function rowOf(d: Departure, order: number): DepartureRow {
     row.trailingMassKg = d.case.train.trailingMassKg;
   } else {
     row.error = d.error ?? `${d.where}: cannot be read`;
+    if (d.problem) row.problem = d.problem;
     row.errorKind = "input";
   }
   return row;
@@ -113,7 +116,7 @@ export function createDeparturesRun(deps: { workers: Pick<PlannerCalls, "check">
           if (!live()) return;
           if (o.ok) settle({ answer: o.result });
           else {
-            const issues = o.issues.length > 0 ? ` (${o.issues.map((i) => `${i.path}: ${i.message}`).join("; ")})` : "";
+            const issues = o.issues.length > 0 ? ` (${o.issues.map((i) => `${i.path}: ${i.reader ? readerMessage(tr, i.reader) : i.message}`).join("; ")})` : "";
             settle({ error: `${d.where}: ${o.kind === "invalid" ? "cannot be checked" : "internal error"}: ${o.message}${issues}`, errorKind: o.kind === "invalid" ? "input" : "internal" });
           }
         },

@@ -8,6 +8,7 @@ import { CHECK_CSV_HEADER, toCsv } from "../../../profiles/csv.js";
 import { r } from "../../../profiles/report.js";
 import type { CheckAnswer } from "../../../worker/protocol.js";
 import { optionLineText } from "../shared/words.js";
+import type { DepartureProblem } from "../../../profiles/departures.js";
 
 export interface DepartureRow {
   id: string;
@@ -26,6 +27,8 @@ export interface DepartureRow {
   file?: unknown;
   /** Why the row has no answer: bad input, or the calculation failed. */
   error?: string;
+  /** A row the file's reader refused, as codes: shown in the language on screen (the error stays English for the export). */
+  problem?: DepartureProblem;
   errorKind?: "input" | "internal";
 }
 

@@ -15,6 +15,7 @@ import { readNotesFile, type TextSource } from "./notesFile.js";
 import { notes } from "../../../i18n/en/notes.js";
 import { tr } from "../../i18n.js";
 import { localiseIssue } from "../../fieldWords.js";
+import { readerText } from "../../../i18n/renderReaders.js";
 
 const nt = tr.ns(notes);
 
@@ -175,7 +176,8 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
 
   const importRead = async (read: NotesFileResult, fileName: string, ask: (c: ImportConflict[]) => Promise<Record<string, ConflictChoice> | null>, validated: boolean) => {
     if (!read.ok) {
-      setNotice({ kind: "problem", text: `${fileName}: ${read.message}`, details: issueLines(read.issues) });
+      const headline = readerText(tr, read.headline) + (read.nothingChanged ? ` ${readerText(tr, { code: "nothingChanged" })}` : "");
+      setNotice({ kind: "problem", text: `${fileName}: ${headline}`, details: issueLines(read.issues) });
       return;
     }
     const outcome = await guarded((s) => s.importBundle(read.notes, ask, { validated, reviews: read.reviews }));
@@ -185,7 +187,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       return;
     }
     if (outcome.status === "failed") {
-      setNotice({ kind: "problem", text: `${fileName}: ${outcome.message}` });
+      setNotice({ kind: "problem", text: `${fileName}: ${readerText(tr, outcome.coded)}` });
       return;
     }
     await afterChange();

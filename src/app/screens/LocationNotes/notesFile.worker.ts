@@ -3,7 +3,7 @@
  * of ten thousand notes is tens of megabytes and seconds of checking). Messages: a file (Blob) in, the
  * `readNotesText` result out.
  */
-import { readNotesText, type NotesFileResult } from "../../../profiles/notes.js";
+import { readNotesText, refused, type NotesFileResult } from "../../../profiles/notes.js";
 import type { LocationNoteFile } from "../../../profiles/schemas.js";
 
 export interface NotesFileRequest {
@@ -35,6 +35,6 @@ scope.onmessage = (ev) => {
       scope.postMessage({ id, kind: "done", result: { ...result, notes: [] } });
     },
     (e: unknown) =>
-      scope.postMessage({ id, kind: "done", result: { ok: false, message: `The file could not be read (${e instanceof Error ? e.message : String(e)}). Nothing was changed.`, issues: [] } }),
+      scope.postMessage({ id, kind: "done", result: refused({ code: "notesUnreadable", figures: { why: e instanceof Error ? e.message : String(e) } }, true, []) }),
   );
 };

@@ -18,6 +18,7 @@ import { StartReviewView, type KeepForm, type ObservedTable } from "./View.js";
 import { review } from "../../../i18n/en/review.js";
 import { reviewText, type ReviewText } from "../../../i18n/reviewText.js";
 import { tr } from "../../i18n.js";
+import { readerText } from "../../../i18n/renderReaders.js";
 import { words } from "../../words.js";
 import { checkWords } from "../../checkWords.js";
 
@@ -105,7 +106,7 @@ export default function StartReview(): JSX.Element {
         if (out.ok) {
           setKept(true);
           setVersion((v) => v + 1);
-        } else setProblem({ message: out.message });
+        } else setProblem({ message: readerText(tr, out.coded) });
       })
       .finally(() => setBusy(false));
   };

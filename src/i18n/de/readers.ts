@@ -1,0 +1,48 @@
+/** German: what the file readers say about a refused file, and the work cap's refusal (see en/readers.ts, glossary.de.md). */
+import type { readers } from "../en/readers.js";
+import { translation } from "../messages.js";
+
+export const readersDe = translation<typeof readers.en>()({
+  workCap:
+    "ein Plan dieses Zuges bräuchte {steps} Fahrzeugschritte ({vehicles} Fahrzeuge bei einem Zeitschritt von {step}, den das leichteste Fahrzeug, {lightest}, vorgibt), mehr als die {cap}, die ein Plan brauchen darf: bitte die Massen prüfen",
+  withoutEnd: "unendlich",
+  nothingChanged: "Es wurde nichts geändert.",
+  notesUnreadable: "Die Datei ließ sich nicht lesen ({why}).",
+  notesEmpty: "Die Datei ist leer.",
+  notesCutShort: "Die Datei ist kein vollständiges JSON: sie wurde wohl beim Kopieren oder Herunterladen abgeschnitten.",
+  noteNotValid: "Die Ortsnotiz {name} ist ungültig.",
+  noteWithoutName: "ohne Namen",
+  notesNoSchema: 'Das ist keine Taut-Notizdatei: ihr fehlt ein Feld "schema" mit {bundle} oder {note}.',
+  notesOtherKind: "Das ist eine Datei der Art {kind}, keine Ortsnotizen ({bundle} oder {note}).",
+  bundleNotValid: "Das Notizpaket ist ungültig.",
+  bundleHolds: { one: "Das Paket enthält {count} Notiz", other: "Das Paket enthält {count} Notizen" },
+  bundleBad: { one: "{named} ist ungültig, daher wurde keine übernommen.", other: "{named} sind ungültig, daher wurde keine übernommen." },
+  bundleNote: "Notiz {number}",
+  bundleNoteNamed: "Notiz {number} ({name})",
+  noteIdRepeated: 'wiederholt die Kennung von Notiz {first} ("{id}"); Kennungen müssen in einem Paket eindeutig sein',
+  reviewNoteMissing: 'nennt die Notiz "{id}", die nicht im Paket ist',
+  reviewIdRepeated: 'wiederholt die Kennung einer anderen Auswertung ("{id}")',
+  notesSchema: 'muss "{bundle}" oder "{note}" sein',
+  notesSchemaGot: 'muss "{bundle}" oder "{note}" sein (angegeben: {kind})',
+  unknownTrain: 'nennt keinen bekannten Referenzzug ("{id}"; bekannt: {known})',
+  referenceUnusable: "{id}: der Referenzzug ist nicht verwendbar",
+  departuresNotValid: "keine gültige Datei",
+  departuresJsonList: "eine Abfahrtsdatei in JSON ist eine Liste von Anfahrfällen ([ {open}...{close}, {open}...{close} ])",
+  csvEmpty: 'die Datei ist leer (eine Kopfzeile "id,case,rail,sand" ist nötig)',
+  csvNoCase: {
+    one: 'Zeile {line}: die Kopfzeile muss die Spalten id,case,rail,sand nennen (unter ihrer {count} Spalte ist kein "case")',
+    other: 'Zeile {line}: die Kopfzeile muss die Spalten id,case,rail,sand nennen (unter ihren {count} Spalten ist kein "case")',
+  },
+  csvUnclosed: "Zeile {line}: ein Feld in Anführungszeichen ist nicht geschlossen",
+  rowLine: "Zeile {line}",
+  caseNeeded: "eine Anfahrfall-Datei ist nötig",
+  sandYesNo: "muss ja oder nein sein (yes/no, true/false, 1/0) (angegeben: {value})",
+  caseOtherKind: "das ist eine Datei der Art {kind}; ein Anfahrfall (taut/start-case@1) ist nötig",
+  caseOutside: "liegt außerhalb des Ordners der Abfahrtsdatei ({folder}); Falldateien werden aus diesem Ordner und seinen Unterordnern gelesen (--allow-outside liest auch andere)",
+  importNoteInvalid: "Notiz {number} ist ungültig ({path}: {problem}); es wurde nichts übernommen.",
+  importIdTwice: 'Die Kennung "{id}" steht zweimal in der Datei; es wurde nichts übernommen.',
+  importFailed: "{why}; es wurde nichts übernommen.",
+  importRefused: "Das Gerät hat das Speichern der Notizen abgelehnt ({why}); es wurde nichts übernommen.",
+  reviewInvalid: "Die Auswertung ist ungültig ({path}: {problem}); es wurde nichts gespeichert.",
+  reviewNoNote: 'Es gibt keine Notiz "{id}", neben der die Auswertung stehen könnte; es wurde nichts gespeichert.',
+});

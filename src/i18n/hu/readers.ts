@@ -1,0 +1,48 @@
+/** Hungarian: what the file readers say about a refused file, and the work cap's refusal (see en/readers.ts, glossary.hu.md). */
+import type { readers } from "../en/readers.js";
+import { translation } from "../messages.js";
+
+export const readersHu = translation<typeof readers.en>()({
+  workCap:
+    "ennek a vonatnak egyetlen terve {steps} járműlépést igényelne ({vehicles} jármű {step} lépésközzel, amit a legkönnyebb jármű, {lightest}, szab meg), többet, mint a tervenként megengedett {cap}: ellenőrizze a tömegeket",
+  withoutEnd: "végtelen",
+  nothingChanged: "Semmi sem változott.",
+  notesUnreadable: "A fájl nem olvasható ({why}).",
+  notesEmpty: "A fájl üres.",
+  notesCutShort: "A fájl nem teljes JSON: másolás vagy letöltés közben csonkulhatott.",
+  noteNotValid: "A(z) {name} helyszíni jegyzet nem érvényes.",
+  noteWithoutName: "névtelen",
+  notesNoSchema: 'Ez nem Taut jegyzetfájl: nincs {bundle} vagy {note} értékű "schema" mezője.',
+  notesOtherKind: "Ez {kind} fájl, nem helyszíni jegyzet ({bundle} vagy {note}).",
+  bundleNotValid: "A jegyzetcsomag nem érvényes.",
+  bundleHolds: { one: "A csomagban {count} jegyzet van", other: "A csomagban {count} jegyzet van" },
+  bundleBad: { one: "a(z) {named} nem érvényes, ezért egyik sem került be.", other: "a(z) {named} nem érvényesek, ezért egyik sem került be." },
+  bundleNote: "{number}. jegyzet",
+  bundleNoteNamed: "{number}. jegyzet ({name})",
+  noteIdRepeated: 'a(z) {first}. jegyzet azonosítóját ismétli ("{id}"); egy csomagban minden azonosító egyszer szerepelhet',
+  reviewNoteMissing: 'a(z) "{id}" jegyzetre hivatkozik, amely nincs a csomagban',
+  reviewIdRepeated: 'egy másik kiértékelés azonosítóját ismétli ("{id}")',
+  notesSchema: '"{bundle}" vagy "{note}" kell legyen',
+  notesSchemaGot: '"{bundle}" vagy "{note}" kell legyen (megadva: {kind})',
+  unknownTrain: 'nem ismert mintavonatot nevez meg ("{id}"; ismertek: {known})',
+  referenceUnusable: "{id}: a mintavonat nem használható",
+  departuresNotValid: "nem érvényes fájl",
+  departuresJsonList: "a JSON indulásfájl indítási esetek listája ([ {open}...{close}, {open}...{close} ])",
+  csvEmpty: 'a fájl üres (kell egy "id,case,rail,sand" fejléc sor)',
+  csvNoCase: {
+    one: '{line}. sor: a fejlécnek meg kell neveznie az id,case,rail,sand oszlopokat (a(z) {count} oszlop között nincs "case")',
+    other: '{line}. sor: a fejlécnek meg kell neveznie az id,case,rail,sand oszlopokat (a(z) {count} oszlop között nincs "case")',
+  },
+  csvUnclosed: "{line}. sor: egy idézőjeles mező nincs lezárva",
+  rowLine: "{line}. sor",
+  caseNeeded: "indítási eset fájl szükséges",
+  sandYesNo: "igen vagy nem kell legyen (yes/no, true/false, 1/0) (megadva: {value})",
+  caseOtherKind: "ez {kind} fájl; indítási eset (taut/start-case@1) kell",
+  caseOutside: "kívül esik az indulásfájl mappáján ({folder}); az esetfájlok abból a mappából és az alatta levőkből olvashatók (--allow-outside a többit is olvassa)",
+  importNoteInvalid: "A(z) {number}. jegyzet nem érvényes ({path}: {problem}); semmi sem került be.",
+  importIdTwice: 'A(z) "{id}" azonosító kétszer szerepel a fájlban; semmi sem került be.',
+  importFailed: "{why}; semmi sem került be.",
+  importRefused: "A készülék nem mentette el a jegyzeteket ({why}); semmi sem került be.",
+  reviewInvalid: "A kiértékelés nem érvényes ({path}: {problem}); semmi sem lett mentve.",
+  reviewNoNote: 'Nincs "{id}" jegyzet, amely mellé a kiértékelés kerülhetne; semmi sem lett mentve.',
+});
