@@ -140,6 +140,9 @@ function departureAgainstPlan(n: number): void {
   let departureMs = 0;
   let worst = 0;
   let searches = 0;
+  // The mass searches' own share (both searches of each departure): thread time and masses judged.
+  const massMs: number[] = [];
+  const judged: number[] = [];
   for (const c of cases) {
     const t0 = performance.now();
     planStart(c, { skipMassSearch: true });
@@ -150,10 +153,19 @@ function departureAgainstPlan(n: number): void {
     planMs += p;
     departureMs += d;
     searches += o.masses ? 1 : 0;
+    if (o.masses) {
+      massMs.push(o.masses.elapsedMs);
+      judged.push(o.masses.judgements);
+    }
     worst = Math.max(worst, d / p);
   }
+  const sorted = (xs: number[]) => [...xs].sort((a, b) => a - b);
+  const median = (xs: number[]) => sorted(xs)[Math.floor(xs.length / 2)] ?? 0;
+  const sum = (xs: number[]) => xs.reduce((a, b) => a + b, 0);
   heading(`A departure against one plan of the same train (first ${n} all-different departures, in process, one thread)`);
   line("one plan (verdict and verified plan)", `${(planMs / n).toFixed(0)} ms`, "mean");
   line("one departure (check, assistance, both masses)", `${(departureMs / n).toFixed(0)} ms`, `mean; ${searches} mass searches`);
+  line("mass searches (both) per departure", `${median(massMs).toFixed(0)} / ${Math.max(0, ...massMs).toFixed(0)} ms`, `median / worst; Σ ${(sum(massMs) / planMs).toFixed(2)}× Σ plans, ${((100 * sum(massMs)) / departureMs).toFixed(0)} % of the departures' time`);
+  line("masses judged per departure (both searches)", `${(sum(judged) / Math.max(1, judged.length)).toFixed(1)} mean, ${Math.max(0, ...judged)} worst`, "each most often one plan, at the mass where the quasi-static limits stop allowing the verdict");
   target({ target: "a departure's CPU ≤ 1.5 × one plan of the same train", figure: `${(departureMs / planMs).toFixed(2)}×`, ratio: departureMs / planMs / 1.5, note: `Σ departures ÷ Σ plans; worst single departure ${worst.toFixed(1)}×` });
 }

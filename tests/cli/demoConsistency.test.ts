@@ -90,7 +90,7 @@ describe("every demo case tells one story on every surface", () => {
       const check = await row(raw.id);
       const app = workerPlan(c);
       // The load table's cell at the case's own conditions: the command line's job and the app's worker.
-      const tableCli = loadTableRowReport({ rail: c.conditions.rail, sand: c.conditions.sand, maxTrailingMassKg: (runJob({ kind: "mass", case: c, startsOnly: true }) as MassOutcome).maxStartableMassKg });
+      const tableCli = loadTableRowReport({ rail: c.conditions.rail, sand: c.conditions.sand, maxTrailingMassKg: (runJob({ kind: "mass", case: c, startsOnly: true, ofMakeUp: true }) as MassOutcome).maxStartableMassKg });
       const tableApp = runLoadTable(structuredClone(c), [{ rail: c.conditions.rail, sand: c.conditions.sand }])[0]!;
 
       // Verdict and binding limit.

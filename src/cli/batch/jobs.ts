@@ -21,8 +21,11 @@ export const CHECK_DIVIDE_BUDGET = 6;
 export type Job =
   /** `masses`: also the largest masses, on the same thread, so the searches share the plans they have in common. */
   | { kind: "check"; case: StartCase; helper?: LocomotiveSpec; masses?: boolean }
-  /** The largest masses; `own` is the case's verdict when known (it brackets the search), `startsOnly` skips the marginal one. */
-  | { kind: "mass"; case: StartCase; own?: Verdict; startsOnly?: boolean }
+  /**
+   * The largest masses; `own` is the case's verdict when known (the figures agree with it), `startsOnly` skips the
+   * marginal one, `ofMakeUp` gives the make-up's figures (a load table's cell: no plan of the case's own mass).
+   */
+  | { kind: "mass"; case: StartCase; own?: Verdict; startsOnly?: boolean; ofMakeUp?: boolean }
   /**
    * One verdict of a mass search, judged ahead of time (speculate.ts): "starts" or "goes" (at least marginal).
    * `shared` also receives it in word 0 (1 holds, 2 does not, 3 failed; word 1 is set when the job begins), for a
@@ -57,6 +60,8 @@ export interface MassOutcome {
   maxStartableMassKg: number;
   /** NaN when only the largest startable mass was asked for. */
   largestMarginalMassKg: number;
+  /** Masses the two searches judged (each a verdict; most are one plan). */
+  judgements: number;
   elapsedMs: number;
 }
 
@@ -71,7 +76,7 @@ export type JobOutcome = CheckOutcome | MassOutcome | VerdictOutcome;
 /** Run one job on this thread. */
 export function runJob(job: Job): JobOutcome {
   if (job.kind === "verdict") return verdictJob(job);
-  return withEvaluationMemo(() => (job.kind === "mass" ? massJob(job.case, job.own, job.startsOnly) : checkJob(job)));
+  return withEvaluationMemo(() => (job.kind === "mass" ? massJob(job.case, job.own, job.startsOnly, job.ofMakeUp) : checkJob(job)));
 }
 
 /** Shared-state codes of a verdict job (see `Job`). */
@@ -103,10 +108,11 @@ function verdictJob(job: Extract<Job, { kind: "verdict" }>): VerdictOutcome {
   return { kind: "verdict", holds, elapsedMs: performance.now() - t0 };
 }
 
-function massJob(c: StartCase, own?: Verdict, startsOnly?: boolean): MassOutcome {
+function massJob(c: StartCase, own?: Verdict, startsOnly?: boolean, ofMakeUp?: boolean): MassOutcome {
   const t0 = performance.now();
-  const m = startableMasses(c, { ...(own ? { own } : {}), ...(startsOnly ? { startsOnly: true } : {}) });
-  return { kind: "mass", maxStartableMassKg: m.startsKg, largestMarginalMassKg: m.marginalKg, elapsedMs: performance.now() - t0 };
+  let judgements = 0;
+  const m = startableMasses(c, { ...(own ? { own } : {}), ...(startsOnly ? { startsOnly: true } : {}), ...(ofMakeUp ? { ofMakeUp: true } : {}), onJudgement: () => judgements++ });
+  return { kind: "mass", maxStartableMassKg: m.startsKg, largestMarginalMassKg: m.marginalKg, judgements, elapsedMs: performance.now() - t0 };
 }
 
 function checkJob(job: Extract<Job, { kind: "check" }>): CheckOutcome {

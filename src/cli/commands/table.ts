@@ -97,7 +97,7 @@ export const tableCommand: Command = {
       rows = await Promise.all(
         cells.map(async ({ rail, sand }) => {
           const c: StartCase = { ...built.c, conditions: { ...built.c.conditions, rail, sand } };
-          const o = (await pool.run({ kind: "mass", case: c, startsOnly: true })) as MassOutcome;
+          const o = (await pool.run({ kind: "mass", case: c, startsOnly: true, ofMakeUp: true })) as MassOutcome;
           report({ done: ++done, total: cells.length });
           return { rail, sand, maxTrailingMassKg: o.maxStartableMassKg };
         }),

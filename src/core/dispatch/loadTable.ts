@@ -1,8 +1,9 @@
 /**
  * Load table: the largest trailing mass that starts at a location with a locomotive set, for every
- * rail condition, with and without sand. Each cell is the plan's own largest startable mass (the same
- * decision, the same search, this train's wagons), so a mass just below a table value starts and one just
- * above does not. Rows are independent: one can be computed on its own (in a worker).
+ * rail condition, with and without sand. Each cell is the make-up's largest startable mass (startableMass.ts:
+ * the same decision and search as the plan's, these wagons; the figure every train of this make-up reads
+ * unless its own verdict disagrees with it), so the cell's mass starts and one within 0.5 % above it does
+ * not. Rows are independent: one can be computed on its own (in a worker).
  */
 import { largestStartableMassKg, startableMasses } from "../planner/startableMass.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../physics/types.js";
@@ -41,7 +42,7 @@ export function loadTableRow(
   const c: StartCase = { ...base, conditions: { ...base.conditions, rail, sand } };
   const kg = starts
     ? largestStartableMassKg(c, starts, opts.toleranceKg !== undefined ? { toleranceKg: opts.toleranceKg } : {})
-    : startableMasses(c, { startsOnly: true, ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}) }).startsKg;
+    : startableMasses(c, { startsOnly: true, ofMakeUp: true, ...(opts.shouldStop ? { shouldStop: opts.shouldStop } : {}) }).startsKg;
   return { rail, sand, maxTrailingMassKg: kg };
 }
 

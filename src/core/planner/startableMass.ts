@@ -7,7 +7,7 @@
 import type { StartCase } from "../train/types.js";
 import type { Verdict } from "./outcome.js";
 import { goesJudgement, judge, quasiStaticLimits } from "./decision.js";
-import { guidedLargestMass, type MassJudgement } from "./guidedBracket.js";
+import { guidedLargestMass, type GuidedSearch, type MassJudgement } from "./guidedBracket.js";
 import { marginalBound, plannerContext } from "./context.js";
 import { withEvaluationMemo } from "./evaluationMemo.js";
 
@@ -122,32 +122,32 @@ export function massCeilingKg(c: StartCase): number {
 const RELATIVE_TOLERANCE = 0.005;
 const TOLERANCE_KG = 2000;
 
+/** The search's widths (guidedBracket.ts), between the floor and the ceiling of a case. */
+function searchOf(c: StartCase): Omit<GuidedSearch, "startKg" | "holdsKg" | "failsKg"> {
+  return { floorKg: floorKgOf(c), ceilingKg: massCeilingKg(c), relativeTolerance: RELATIVE_TOLERANCE, toleranceKg: TOLERANCE_KG, minToleranceKg: MIN_TOLERANCE_KG };
+}
+
 /**
- * Largest mass for which `ok` holds, given what is known of the case's own mass (`ownOk`) and a mass known
- * to hold (`atLeastKg`, 0 for none). The probe is the quasi-static limit's bracket: its upper end fails
- * before any dynamics, so when a plan at its lower end holds, that one plan settles the answer (the
- * dynamics only verify it); when it fails, the search goes on below it with plans.
+ * Largest mass for which `ok` holds with this train's wagons, location and conditions — NOT its own mass:
+ * the search never starts from the train's own mass, so every train of the same make-up in the same place
+ * and conditions reads the same figure (`reconciled` then settles the few trains whose own verdict
+ * disagrees with it, near a limit where the verdict is not monotone in mass). `atLeastKg` is a mass known to
+ * hold (0 for none). The probe is the quasi-static limit's bracket: its upper end fails before any dynamics,
+ * so when a plan at its lower end holds, that one plan settles the answer (the dynamics only verify it); when
+ * it fails, the search goes on below it, guided by the margin.
  */
-function largestMass(c: StartCase, at: (m: number) => MassJudgement, ownOk: boolean, atLeastKg: number, probe: Bracket): number {
+function canonicalMass(c: StartCase, at: (m: number) => MassJudgement, atLeastKg: number, probe: Bracket): Bracket {
   const ok = (m: number): boolean => at(m).holds;
   const probeKg = probe.lo;
-  const own = c.train.trailingMassKg;
-  const floorKg = floorKgOf(c);
-  const ceiling = massCeilingKg(c);
-  let lo = Math.max(atLeastKg, ownOk ? own : 0);
-  let hi = ownOk ? ceiling : own;
-  // A mass known to fail (the case's own when it does; none yet when it holds).
-  let failing = !ownOk;
-  if (hi <= lo) return lo;
-  // Below the floor (nothing known to hold yet) the floor decides between "none" and a search — but a probe
-  // that holds settles that too, and the floor is the dearest train to plan (light wagons take the smallest
-  // steps): so the probe first, the floor only when the probe fails.
-  let floorUnknown = lo < floorKg;
-  if (floorUnknown) lo = floorKg;
-  if (probeKg > lo && probeKg < hi) {
+  const s = searchOf(c);
+  const { floorKg, ceilingKg: ceiling } = s;
+  let lo = atLeastKg;
+  let hi = ceiling;
+  // A mass known to fail (none yet).
+  let failing = false;
+  if (probeKg > Math.max(lo, floorKg) && probeKg < hi) {
     if (ok(probeKg)) {
       lo = probeKg;
-      floorUnknown = false;
       // Just above the probe the quasi-static limits already rule the verdict out: no plan can bring it back.
       if (probe.hi !== null && probe.hi > lo && probe.hi < hi) {
         hi = probe.hi;
@@ -158,33 +158,54 @@ function largestMass(c: StartCase, at: (m: number) => MassJudgement, ownOk: bool
       failing = true;
     }
   }
-  if (floorUnknown && !ok(floorKg)) return 0;
   // No quasi-static limit below the ceiling (a falling grade: the brakes hold any load): the ceiling itself
   // is the likeliest answer, and one plan there settles it instead of a plan at every doubling.
   if (!failing && probeKg >= ceiling && lo < ceiling) {
-    if (ok(ceiling)) return ceiling;
+    if (ok(ceiling)) return { lo: ceiling, hi: null };
     hi = ceiling;
     failing = true;
   }
-  // The rest follows the margin (guidedBracket.ts): from what holds (and what fails, when known) to the
-  // mass where the smallest margin crosses 1, each end settled by the verdict.
-  return guidedLargestMass(at, {
-    floorKg,
-    ceilingKg: ceiling,
-    relativeTolerance: RELATIVE_TOLERANCE,
-    toleranceKg: TOLERANCE_KG,
-    minToleranceKg: MIN_TOLERANCE_KG,
-    holdsKg: lo,
-    failsKg: failing ? hi : null,
-    startKg: lo,
-  }).lo;
+  // Nothing known to hold or fail yet (the quasi-static limits rule out even the lightest train, or set no
+  // probe): the floor decides (quasi-statically, when they rule it out: no plan).
+  if (lo < floorKg && !failing) {
+    if (!ok(floorKg)) return { lo: 0, hi: floorKg };
+    lo = floorKg;
+  }
+  // The rest follows the margin (guidedBracket.ts): from what holds (when anything is known to) and what
+  // fails to the mass where the smallest margin crosses 1, each end settled by the verdict. With nothing
+  // known to hold, it steps down from the failing end (to the floor at worst: then none holds).
+  return guidedLargestMass(at, { ...s, holdsKg: lo >= floorKg ? lo : 0, failsKg: failing ? hi : null, startKg: hi });
+}
+
+/**
+ * The figure this train reads, from the canonical bracket `b` and its own verdict: b's answer when the
+ * train's own verdict agrees with it (nearly always), else a search from the train's own mass — up from it
+ * when it holds there but b's answer is lighter, down from it when it fails there but b's answer is not
+ * lighter — so that this train holds ⇔ its mass ≤ the figure. `lowKg` is a mass known to hold (the train's
+ * own when it holds, or a largest mass the figure may not fall below; 0: none) and `failsKg` one known to fail
+ * (the train's own when it fails; null: none). `seen` holds every verdict the searches have found.
+ */
+function reconciled(c: StartCase, at: (m: number) => MassJudgement, b: Bracket, lowKg: number, failsKg: number | null, seen: ReadonlyMap<number, boolean>): number {
+  if (b.lo >= lowKg && (failsKg === null || b.lo < failsKg)) return b.lo;
+  let holds = lowKg;
+  let fails = failsKg;
+  for (const [m, h] of seen) {
+    if (h && m > holds && (fails === null || m < fails)) holds = m;
+  }
+  for (const [m, h] of seen) {
+    if (!h && m > holds && (fails === null || m < fails)) fails = m;
+  }
+  return guidedLargestMass(at, { ...searchOf(c), holdsKg: holds, failsKg: fails, startKg: fails ?? holds }).lo;
 }
 
 /**
  * The largest mass for which the quasi-static limits allow the verdict (all within, or none over), and the
  * mass just above it where they do not (so neither does the decision: it needs them within, or none over).
  */
-function quasiStaticMassKg(c: StartCase, need: "within" | "not-over"): Bracket {
+function quasiStaticMassKg(own: StartCase, need: "within" | "not-over"): Bracket {
+  // Not from the train's own mass: the bracket (and so every search it starts) is the same for every
+  // train of this make-up in this place and these conditions.
+  const c = withTrailingMass(own, own.train.wagons * QS_START_KG_PER_WAGON);
   const key = `${need}|${JSON.stringify(c)}`;
   const known = quasiStaticCache.get(key);
   if (known) return known;
@@ -211,6 +232,9 @@ function quasiStaticMassKg(c: StartCase, need: "within" | "not-over"): Bracket {
   return b;
 }
 
+/** Where the quasi-static search starts, kg per wagon (any fixed mass; a loaded wagon's order). */
+const QS_START_KG_PER_WAGON = 50_000;
+
 /** The last few quasi-static brackets (a plan's mass search and the probes speculated for it ask the same). */
 const quasiStaticCache = new Map<string, Bracket>();
 
@@ -230,10 +254,17 @@ export interface StartableMassOptions {
   /** Only the largest startable mass (skip the largest marginal one). */
   startsOnly?: boolean;
   /**
+   * The figures of the make-up (these wagons, locomotives, place and conditions), not reconciled with the
+   * train's own verdict (see `startableMasses`): what a load table shows, and no plan of the train's own mass.
+   */
+  ofMakeUp?: boolean;
+  /**
    * A verdict already found elsewhere (another thread judging the masses `massProbesKg` gives while this
    * one plans the case): true or false for "starts" or "goes" (at least marginal) at a mass, or undefined.
    */
   verdictAt?: MassVerdictLookup;
+  /** Told of every judgement the searches make (for benchmarks and tests: how much work a search did). */
+  onJudgement?: (need: "starts" | "goes", massKg: number, holds: boolean, score: number) => void;
 }
 
 /** See `StartableMassOptions.verdictAt`. */
@@ -251,34 +282,72 @@ export function massProbesKg(c: StartCase): { startsKg: number; goesKg: number }
 }
 
 /**
- * The largest trailing masses that start and that are at least marginal, with this train's wagons. By
- * construction: the case starts ⇔ its mass ≤ `startsKg`, and it needs assistance ⇔ its mass > `marginalKg`.
+ * The largest trailing masses that start and that are at least marginal, with this train's wagons
+ * (README "How Taut decides"). Two steps:
+ *  1. the figures of the make-up — the same for every trailing mass of these wagons, locomotives, place and
+ *     conditions: a search that never starts from the train's own mass (`canonicalMass`) ends at a mass that
+ *     holds with one within 0.5 % above it that fails;
+ *  2. the train's own verdict wins where it disagrees (near a limit the verdict can change back and forth
+ *     within a per cent or two of mass): a train that starts reads at least its own mass (the search goes on
+ *     up from it), one that does not reads the heaviest mass below its own that was found to hold.
+ * So the case starts ⇔ its mass ≤ `startsKg`, it needs assistance ⇔ its mass > `marginalKg`, each figure is a
+ * mass whose verdict holds, and every train whose verdict agrees with the make-up's figures reads those.
  */
 export function startableMasses(c: StartCase, opts: StartableMassOptions = {}): StartableMasses {
   // The two searches try some masses in common (the threshold's plan is the same for both).
   return withEvaluationMemo(() => searchMasses(c, opts));
 }
 
+function remember(seen: Map<number, boolean>, m: number, j: MassJudgement): MassJudgement {
+  seen.set(m, j.holds);
+  return j;
+}
+
 function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses {
+  const told = (need: "starts" | "goes", m: number, j: MassJudgement): MassJudgement => {
+    opts.onJudgement?.(need, m, j.holds, j.score);
+    return j;
+  };
   const stop = opts.shouldStop;
   const known = opts.verdictAt;
   // Each judgement gives the verdict (exactly startsAt's / goesAt's) and the margin the search follows.
   const startsJ = (m: number): MassJudgement => {
     const v = known?.("starts", m);
-    if (v !== undefined) return { holds: v, score: Number.NaN };
+    if (v !== undefined) return told("starts", m, { holds: v, score: Number.NaN });
     const d = judge(withTrailingMass(c, m), { depth: "starts", ...(stop ? { shouldStop: stop } : {}) });
-    return { holds: d.verdict === "starts", score: d.margin };
+    return told("starts", m, { holds: d.verdict === "starts", score: d.margin });
   };
   const goesJ = (m: number): MassJudgement => {
     const v = known?.("goes", m);
-    return v !== undefined ? { holds: v, score: Number.NaN } : goesJudgement(withTrailingMass(c, m), stop);
+    return told("goes", m, v !== undefined ? { holds: v, score: Number.NaN } : goesJudgement(withTrailingMass(c, m), stop));
   };
   const own = opts.own;
-  const ownStarts = own !== undefined ? own === "starts" : startsJ(c.train.trailingMassKg).holds;
-  const startsKg = largestMass(c, startsJ, ownStarts, 0, quasiStaticMassKg(c, "within"));
+  const ownKg = c.train.trailingMassKg;
+  // Every verdict found, by mass (the reconciling search starts from the nearest ones).
+  const seenStarts = new Map<number, boolean>();
+  const seenGoes = new Map<number, boolean>();
+  const startsAt = (m: number): MassJudgement => remember(seenStarts, m, startsJ(m));
+  const goesAt = (m: number): MassJudgement => remember(seenGoes, m, goesJ(m));
+  const makeUp = opts.ofMakeUp === true;
   const ceilingKg = massCeilingKg(c);
+  const starts = canonicalMass(c, startsAt, 0, quasiStaticMassKg(c, "within"));
+  let startsKg = starts.lo;
+  let ownStarts = false;
+  if (!makeUp) {
+    ownStarts = own !== undefined ? own === "starts" : startsAt(ownKg).holds;
+    seenStarts.set(ownKg, ownStarts);
+    startsKg = reconciled(c, startsAt, starts, ownStarts ? ownKg : 0, ownStarts ? null : ownKg, seenStarts);
+  }
   if (opts.startsOnly) return { startsKg, marginalKg: Number.NaN, ceilingKg };
-  const ownGoes = ownStarts || (own !== undefined ? own !== "needs-assistance" : goesJ(c.train.trailingMassKg).holds);
-  const marginalKg = largestMass(c, goesJ, ownGoes, startsKg, quasiStaticMassKg(c, "not-over"));
+  // Whatever starts goes: the make-up's largest startable mass is a lower end of its marginal one, and the
+  // train's own figure of the two a lower end of its own.
+  for (const [m, h] of seenStarts) if (h) seenGoes.set(m, true);
+  const goes = canonicalMass(c, goesAt, starts.lo, quasiStaticMassKg(c, "not-over"));
+  let marginalKg = goes.lo;
+  if (!makeUp) {
+    const ownGoes = ownStarts || (own !== undefined ? own !== "needs-assistance" : goesAt(ownKg).holds);
+    seenGoes.set(ownKg, ownGoes);
+    marginalKg = reconciled(c, goesAt, goes, Math.max(startsKg, ownGoes ? ownKg : 0), ownGoes ? null : ownKg, seenGoes);
+  }
   return { startsKg, marginalKg: Math.max(startsKg, marginalKg), ceilingKg };
 }
