@@ -263,6 +263,12 @@ export interface StartableMassOptions {
    * one plans the case): true or false for "starts" or "goes" (at least marginal) at a mass, or undefined.
    */
   verdictAt?: MassVerdictLookup;
+  /**
+   * Plan every judgement to its end (what the searches did before verdict-only plans): for benchmarks that
+   * compare. By default a judgement's plans stop as soon as a limit has failed (decision.ts, `stopWhenFailed`):
+   * the same verdicts; a stopped plan's margin only guides the search.
+   */
+  fullPlans?: boolean;
   /** Told of every judgement the searches make (for benchmarks and tests: how much work a search did). */
   onJudgement?: (need: "starts" | "goes", massKg: number, holds: boolean, score: number) => void;
 }
@@ -310,16 +316,17 @@ function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses
   };
   const stop = opts.shouldStop;
   const known = opts.verdictAt;
+  const verdictOnly = opts.fullPlans !== true;
   // Each judgement gives the verdict (exactly startsAt's / goesAt's) and the margin the search follows.
   const startsJ = (m: number): MassJudgement => {
     const v = known?.("starts", m);
     if (v !== undefined) return told("starts", m, { holds: v, score: Number.NaN });
-    const d = judge(withTrailingMass(c, m), { depth: "starts", ...(stop ? { shouldStop: stop } : {}) });
+    const d = judge(withTrailingMass(c, m), { depth: "starts", stopWhenFailed: verdictOnly, ...(stop ? { shouldStop: stop } : {}) });
     return told("starts", m, { holds: d.verdict === "starts", score: d.margin });
   };
   const goesJ = (m: number): MassJudgement => {
     const v = known?.("goes", m);
-    return told("goes", m, v !== undefined ? { holds: v, score: Number.NaN } : goesJudgement(withTrailingMass(c, m), stop));
+    return told("goes", m, v !== undefined ? { holds: v, score: Number.NaN } : goesJudgement(withTrailingMass(c, m), stop, { stopWhenFailed: verdictOnly }));
   };
   const own = opts.own;
   const ownKg = c.train.trailingMassKg;
