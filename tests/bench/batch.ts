@@ -25,6 +25,7 @@ import { heading, line, target } from "./util.js";
 import { runJob, type CheckOutcome } from "../../src/cli/batch/jobs.js";
 import { judge, planStart, startableMasses } from "../../src/core/planner/index.js";
 import type { StartCase } from "../../src/core/train/types.js";
+import { vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 
 const repo = fileURLToPath(new URL("../../", import.meta.url));
@@ -184,23 +185,33 @@ function massSearchesBeforeAfter(cases: readonly StartCase[]): void {
   };
   let before = 0;
   let after = 0;
+  let stepsBefore = 0;
+  let stepsAfter = 0;
   let differ = 0;
   for (const [k, c] of cases.entries()) {
     const own = judge(c, { depth: "marginal" }).verdict;
     const search = (fullPlans: boolean) => {
       const t0 = cpuMs();
+      const s0 = vehicleStepsDone();
       const m = startableMasses(c, { own, fullPlans });
-      return { m, ms: cpuMs() - t0 };
+      return { m, ms: cpuMs() - t0, steps: vehicleStepsDone() - s0 };
     };
     const [a, b] = k % 2 === 0 ? [search(true), search(false)] : [search(false), search(true)];
     const [full, verdictOnly] = k % 2 === 0 ? [a, b] : [b, a];
     before += full.ms;
     after += verdictOnly.ms;
+    stepsBefore += full.steps;
+    stepsAfter += verdictOnly.steps;
     if (full.m.startsKg !== verdictOnly.m.startsKg || full.m.marginalKg !== verdictOnly.m.marginalKg) differ++;
   }
   line(
     "mass searches, plans to the end → verdict-only",
     `${(before / cases.length).toFixed(0)} → ${(after / cases.length).toFixed(0)} ms`,
     `CPU per departure, same run; ${(after / before).toFixed(2)}×; ${differ} of ${cases.length} departures with other figures`,
+  );
+  line(
+    "mass searches' work, plans to the end → verdict-only",
+    `${(stepsBefore / cases.length / 1e6).toFixed(2)} → ${(stepsAfter / cases.length / 1e6).toFixed(2)} M`,
+    `vehicle-steps per departure; ${(stepsAfter / Math.max(1, stepsBefore)).toFixed(2)}×`,
   );
 }
