@@ -125,7 +125,7 @@ describe("coded rules broken, in the language on screen and the user's units", (
       // 1 short ton = 907.18474 kg (NIST SP 811, appendix B.8): 5 t = 5.51, 60 000 t = 66 138.7 short tons.
       expect(localiseIssue(mass, "us").message).toBe("must be from 5.51 to 66,139 short tons (got 2 short tons)");
       expect(await setAppLanguage("de")).toBe(true);
-      expect(localiseIssue(mass, "us")).toMatchObject({ message: "muss zwischen 5,51 und 66.139 short tons liegen (angegeben: 2 short tons)", label: "Anhängelast" });
+      expect(localiseIssue(mass, "us")).toMatchObject({ message: "muss zwischen 5,51 und 66.139 US-Tonnen liegen (angegeben: 2 US-Tonnen)", label: "Anhängelast" });
       // 20 m = 65.6 ft, 500 m = 1640 ft (1 ft = 0.3048 m exactly).
       expect(localiseIssue(gap, "us").message).toBe("lässt eine Lücke von 66 ft nach dem vorigen Abschnitt (der bei 1.640 ft endet) (angegeben: 1.706 ft)");
       expect(await setAppLanguage("hu")).toBe(true);

@@ -6,8 +6,13 @@
  */
 import { For, type JSX } from "solid-js";
 
-/** The units the app writes after a figure, metric and US customary (format.ts), longest first. */
-const UNITS = ["short tons", "km/h", "klbf", "mph", "kN", "kW", "mm", "ft", "in", "min", "°C", "°F", "‰", "%", "m", "t", "s", "h"];
+/**
+ * The units the app writes after a figure, metric and US customary (format.ts), longest first. The written-out
+ * US mass unit comes from the units catalog in each language (en/hu/de units.ts); its words are repeated here
+ * so this first-chunk module need not load the other languages' catalogs — tests/app/figures.test.tsx checks
+ * every figure format.ts writes in every language against this list.
+ */
+const UNITS = ["short tons", "rövid tonna", "US-Tonnen", "km/h", "klbf", "mph", "kN", "kW", "mm", "ft", "in", "min", "°C", "°F", "‰", "%", "m", "t", "s", "h"];
 const escape = (s: string) => s.replace(/[.*+?^${}()|[\]\\/]/g, "\\$&");
 const UNIT = `(?:${UNITS.map(escape).join("|")})`;
 /**
