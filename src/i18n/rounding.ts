@@ -56,3 +56,28 @@ export function fixedText(x: number, d: number): string {
   const body = fixedDigits(x, Math.max(0, Math.min(20, Math.trunc(d))));
   return x < 0 && /[1-9]/.test(body) ? `-${body}` : body;
 }
+
+/**
+ * Parts of a total, each rounded to `d` decimals so that they add up to the total rounded the same way: a
+ * printed breakdown ("187 kN (13 + 25 + 121 + 28)") never contradicts its own sum. The largest-remainder
+ * method (Hamilton's; Balinski & Young, "Fair Representation", 1982): every part is first rounded down, then
+ * the units still missing go to the parts that lost the most. Each part stays within one unit of its exact
+ * value, and where rounding each part on its own already gives the rounded sum, those are the parts returned.
+ */
+export function partsSummingTo(parts: readonly number[], d = 0): number[] {
+  const scale = 10 ** Math.max(0, Math.min(20, Math.trunc(d)));
+  const alone = parts.map((p) => roundHalfAway(p, d));
+  const total = roundHalfAway(parts.reduce((s, p) => s + p, 0), d);
+  const sumAlone = alone.reduce((s, p) => s + p, 0);
+  if (!parts.every(Number.isFinite) || Math.abs(sumAlone - total) < 0.5 / scale) return alone;
+  const scaled = parts.map((p) => p * scale);
+  const floors = scaled.map(Math.floor);
+  let missing = Math.round(total * scale - floors.reduce((s, f) => s + f, 0));
+  const order = scaled.map((x, i) => ({ i, rest: x - floors[i]! })).sort((a, b) => b.rest - a.rest || a.i - b.i);
+  for (const { i } of order) {
+    if (missing <= 0) break;
+    floors[i]! += 1;
+    missing -= 1;
+  }
+  return floors.map((f) => roundHalfAway(f / scale, d));
+}

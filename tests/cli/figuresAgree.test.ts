@@ -47,6 +47,12 @@ function disagreements(c: StartCase, p: PlanResult): string[] {
   const total = kNText(p.static.resistance.totalN);
   if (resistance !== total) out.push(`resistance ${resistance} against ${total}`);
   if (!adhesionLine.includes(`against a resistance at start of ${total} kN`)) out.push(`header resistance: ${adhesionLine}`);
+  // 1b. Its breakdown adds up to the total printed (a sum a driver can check by hand), each part within one kN
+  //     of its exact value — the largest-remainder rounding (Balinski & Young, "Fair Representation", 1982).
+  const parts = /\(breakaway (-?\d+) \+ running (-?\d+) \+ grade (-?\d+) \+ curve (-?\d+)\)/.exec(text)?.slice(1).map(Number);
+  const exact = [p.static.resistance.startingN, p.static.resistance.runningN, p.static.resistance.gradeN, p.static.resistance.curveN].map((n) => n / 1000);
+  if (!parts || parts.reduce((a, b) => a + b, 0) !== Number(total)) out.push(`resistance parts ${parts?.join(" + ")} do not add up to ${total}`);
+  else parts.forEach((x, i) => { if (Math.abs(x - exact[i]!) >= 1) out.push(`resistance part ${i}: ${x} against ${exact[i]}`); });
   // 2. The header's rail figure, rounded once from newtons.
   if (!adhesionLine.includes(`→ ${kNText(p.static.adhesionLimitN)} kN at standstill`)) out.push(`header rail ${adhesionLine} against ${kNText(p.static.adhesionLimitN)} kN`);
   // 3. Each step's slip risk: the table's cell and the why line's figure.

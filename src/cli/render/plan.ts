@@ -7,6 +7,7 @@ import { cliTr, cliWords } from "../lang.js";
 import { num, pct, textTable } from "../table.js";
 import { renderAssistance, renderConditions, verdictWord } from "./assistance.js";
 import { wrap } from "./wrap.js";
+import { partsSummingTo } from "../../i18n/rounding.js";
 import { describeOverrides } from "../caseOverrides.js";
 import { printable } from "../../profiles/text.js";
 import { lineOf } from "../../profiles/lineReport.js";
@@ -30,7 +31,9 @@ export function renderPlan(p: PlanReport): string {
   if (p.case.overrides && Object.keys(p.case.overrides).length > 0) lines.push(t("changedFromCase", { what: describeOverrides(p.case.overrides) }));
   lines.push(t("verdictLine", { verdict: verdictWord(p.verdict), margin: marginText(p.margin, p.binding) }) + (p.startKind === "gravity" ? t("gravityStart") : ""));
   const r = p.resistance_kN;
-  lines.push(t("resistance", { total: num(r.total), starting: num(r.starting), running: num(r.running), grade: num(r.grade), curve: num(r.curve) }));
+  // The parts rounded so that they add up to the total printed beside them.
+  const [starting, running, grade, curve] = partsSummingTo([r.starting, r.running, r.grade, r.curve]);
+  lines.push(t("resistance", { total: num(r.total), starting: num(starting), running: num(running), grade: num(grade), curve: num(curve) }));
   const a = p.adhesion;
   lines.push(
     t("adhesion", { mu: num(a.mu, 3), muDesign: num(a.muDesign, 3), threshold: pct(a.slipRiskThreshold), max: num(a.maxTractiveEffort_kN), needed: num(r.total), risk: pct(a.slipRiskAtStart, 1) }),
