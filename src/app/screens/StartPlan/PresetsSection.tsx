@@ -142,7 +142,7 @@ const presetName = (label: string) => label.split(",")[0]!.trim();
 const presetDetail = (label: string) => label.split(",").slice(1).join(",").trim();
 
 /** "Aggregate block leaving Ashvale Loop on a dry afternoon (illustrative)" → "Aggregate block" and "leaving Ashvale Loop on a dry afternoon". */
-const CASE_SPLIT = / (?=leaving |restarting |starting |departing )/;
+const CASE_SPLIT = / (?=leaving |restarting |starting |departing |out of )/;
 const plain = (label: string) => label.replace(/\s*\(illustrative\)\s*$/, "").trim();
 export const caseName = (label: string) => plain(label).split(CASE_SPLIT)[0]!.trim();
 export const caseDetail = (label: string) => plain(label).split(CASE_SPLIT).slice(1).join(" ").trim();
