@@ -4,7 +4,8 @@ import { issueMessage } from "../profiles/issueText.js";
 import { formatIssues, MAX_LISTED_ISSUES, type FieldIssue } from "../profiles/issues.js";
 import { cliFieldWords, cliTr } from "./lang.js";
 import { cliErrors } from "../i18n/en/cliErrors.js";
-import type { MessageFn } from "../i18n/translator.js";
+import type { MessageFn, Translator } from "../i18n/translator.js";
+import { cliHelp } from "../i18n/en/cliHelp.js";
 
 /** The command line's error words in this run's language. */
 export function errorWords(): MessageFn<typeof cliErrors.en> {
@@ -15,6 +16,26 @@ export function errorWords(): MessageFn<typeof cliErrors.en> {
 export function usageWord(): string {
   return errorWords()("usage");
 }
+
+/** "usage: taut …" in an error, in this run's language (usageText). */
+export function usageLine(usage: string): string {
+  return `${usageWord()} ${usageText(usage)}`;
+}
+/** The usage lines' placeholders that are words, and their keys in the catalog (NOTE-ID before the others). */
+const METAVARIABLES = { "NOTE-ID": "metaNoteId", FILE: "metaFile", CASE: "metaCase", DEPARTURES: "metaDepartures", LOCATION: "metaLocation", RECORDING: "metaRecording", TEXT: "metaText", PERMILLE: "metaPermille" } as const;
+const METAVARIABLE = new RegExp(`(?<![\\w-])(${Object.keys(METAVARIABLES).join("|")})(?![\\w-])`, "g");
+
+/**
+ * A usage line in this run's language: the placeholders that are words (FILE, CASE.json, PERMILLE…) in the
+ * language's words, as the translated help names them; option names, their values and file extensions as
+ * they are (the command line's contract). English: the line itself.
+ */
+export function usageText(usage: string, tr: Translator = cliTr()): string {
+  if (tr.lang === "en") return usage;
+  const t = tr.ns(cliHelp);
+  return usage.replace(METAVARIABLE, (w) => t(METAVARIABLES[w as keyof typeof METAVARIABLES]));
+}
+
 
 export const EXIT_OK = 0;
 export const EXIT_INTERNAL = 1;

@@ -19,63 +19,70 @@ import type { LocationNoteFile } from "../profiles/schemas.js";
 import { readNotesText } from "../profiles/notes.js";
 import { readerIssue } from "../profiles/readerIssues.js";
 import { applyOverrides, type CaseOverrides } from "./caseOverrides.js";
+import { fileProblemText, type FileProblem, type NotAFileKind } from "../i18n/renderFiles.js";
 
 /** The largest file read, bytes: a bundle of every note of a large network is some tens of megabytes. */
 export const MAX_INPUT_BYTES = 256 * 1024 * 1024;
 
-/** What a file that is not a regular file is, in words. */
-function kindOfFile(st: ReturnType<typeof fstatSync>): string {
-  const t = errorWords();
-  if (st.isDirectory()) return t("kindFolder");
-  if (st.isFIFO()) return t("kindPipe");
-  if (st.isCharacterDevice() || st.isBlockDevice()) return t("kindDevice");
-  if (st.isSocket()) return t("kindSocket");
-  return t("kindOther");
+/** What a file that is not a regular file is. */
+function kindOfFile(st: ReturnType<typeof fstatSync>): NotAFileKind {
+  if (st.isDirectory()) return "folder";
+  if (st.isFIFO()) return "pipe";
+  if (st.isCharacterDevice() || st.isBlockDevice()) return "device";
+  if (st.isSocket()) return "socket";
+  return "other";
+}
+
+/** Why a file cannot be read: as a code (`problem`) and in this run's language (`why`). */
+export type FileRefusal = { ok: false; problem: FileProblem; why: string };
+
+function refusal(problem: FileProblem): FileRefusal {
+  return { ok: false, problem, why: fileProblemText(cliTr(), problem) };
 }
 
 /**
  * Open a regular file for reading, or say why not (in words that never quote the file). The file is opened
  * without blocking and checked on the open handle, so a named pipe is refused, not waited on, and nothing
- * can swap the file between the check and the read. The caller closes the descriptor.
+ * can swap the file between the check and the read. The caller closes the descriptor. `jsonOrCsv`: the
+ * file is to be a JSON or CSV file (said when it is not a file at all).
  */
-export function openRegularFile(path: string): { ok: true; fd: number; size: number } | { ok: false; why: string; notAFile?: true } {
-  const t = errorWords();
+export function openRegularFile(path: string, jsonOrCsv = false): { ok: true; fd: number; size: number } | FileRefusal {
   let fd: number;
   try {
     fd = openSync(path, constants.O_RDONLY | (constants.O_NONBLOCK ?? 0));
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    if (code === "ENOENT" || code === "ENOTDIR") return { ok: false, why: t("noSuchFile") };
-    if (code === "EACCES" || code === "EPERM") return { ok: false, why: t("noPermission") };
-    return { ok: false, why: t("cannotRead", { code: code ?? "error" }) };
+    if (code === "ENOENT" || code === "ENOTDIR") return refusal({ code: "noSuchFile" });
+    if (code === "EACCES" || code === "EPERM") return refusal({ code: "noPermission" });
+    return refusal({ code: "cannotRead", errno: code ?? "error" });
   }
   try {
     const st = fstatSync(fd);
     if (!st.isFile()) {
       closeSync(fd);
-      return { ok: false, why: t("notAFile", { kind: kindOfFile(st) }), notAFile: true };
+      return refusal({ code: "notAFile", kind: kindOfFile(st), ...(jsonOrCsv ? { jsonOrCsv } : {}) });
     }
     return { ok: true, fd, size: st.size };
   } catch (e) {
     closeSync(fd);
-    return { ok: false, why: t("cannotRead", { code: (e as NodeJS.ErrnoException).code ?? "error" }) };
+    return refusal({ code: "cannotRead", errno: (e as NodeJS.ErrnoException).code ?? "error" });
   }
 }
 
 /** A regular file's text, or why it cannot be read (in words that never quote the file). */
-export function readRegularFile(path: string): { ok: true; text: string } | { ok: false; why: string } {
-  const t = errorWords();
-  const opened = openRegularFile(path);
-  if (!opened.ok) return { ok: false, why: opened.notAFile ? t("giveJsonOrCsv", { why: opened.why }) : opened.why };
+export function readRegularFile(path: string): { ok: true; text: string } | FileRefusal {
+  const opened = openRegularFile(path, true);
+  if (!opened.ok) return opened;
   const fd = opened.fd;
+  const maxMB = MAX_INPUT_BYTES / 1048576;
   try {
-    if (opened.size > MAX_INPUT_BYTES) return { ok: false, why: t("tooLarge", { size: String(Math.round(opened.size / 1048576)), max: String(MAX_INPUT_BYTES / 1048576) }) };
+    if (opened.size > MAX_INPUT_BYTES) return refusal({ code: "tooLarge", sizeMB: Math.round(opened.size / 1048576), maxMB });
     const bytes = readFileSync(fd);
-    if (bytes.length > MAX_INPUT_BYTES) return { ok: false, why: t("holdsMore", { max: String(MAX_INPUT_BYTES / 1048576) }) };
+    if (bytes.length > MAX_INPUT_BYTES) return refusal({ code: "holdsMore", maxMB });
     return { ok: true, text: bytes.toString("utf8") };
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    return { ok: false, why: code === "EISDIR" ? t("isFolder") : t("cannotRead", { code: code ?? "error" }) };
+    return refusal(code === "EISDIR" ? { code: "isFolder" } : { code: "cannotRead", errno: code ?? "error" });
   } finally {
     closeSync(fd);
   }

@@ -17,6 +17,7 @@ import { PLAN_ASSISTANCE_BUDGET, PLAN_ASSISTANCE_FULL_PLANS, PLAN_DIVIDE_BUDGET 
 import { TABLE_DEFAULTS } from "./commands/table.js";
 import { RAILML_DEFAULTS } from "./commands/notes.js";
 import { ACCELERATE_MAX_S } from "../core/planner/search.js";
+import { wrap } from "./render/wrap.js";
 
 /** The commands whose words are in the catalog (every command of ours). */
 export type HelpName = "plan" | "check" | "table" | "simulate" | "review" | "notes";
@@ -61,3 +62,41 @@ export function fillHelp(tr: Translator, name: HelpName): string {
   const t = tr.ns(cliHelp) as (key: string, params?: Record<string, string>) => string;
   return t(`${name}Help`, helpFigures(name));
 }
+
+/** The --lang option as every command's --help lists it. */
+const LANG_SIGNATURE = "--lang en|hu|de";
+
+/**
+ * A command's --help with the --lang option added as the last line of its last block of options, its
+ * description in that block's column (on the next line when the option is wider than the column) and
+ * wrapped as wide as the block's own lines (at least 100 columns).
+ */
+export function withLangOption(help: string, tr: Translator = cliTr()): string {
+  const lines = help.split("\n");
+  const isOption = (l: string) => /^ {2}--/.test(l);
+  // The last block of options: option lines and the lines continuing them (indented deeper).
+  let end = -1;
+  for (let i = lines.length - 1; i >= 0; i--) if (isOption(lines[i]!)) {
+    end = i;
+    break;
+  }
+  if (end < 0) return help;
+  while (end + 1 < lines.length && /^ {4,}\S/.test(lines[end + 1]!)) end++;
+  let start = end;
+  while (start > 0 && (isOption(lines[start - 1]!) || /^ {4,}\S/.test(lines[start - 1]!))) start--;
+  const block = lines.slice(start, end + 1);
+  // The block's column: where most of its option lines' descriptions start.
+  const counts = new Map<number, number>();
+  for (const l of block) {
+    const m = isOption(l) ? /^ {2}--\S*(?: \S+)*? {2,}(?=\S)/.exec(l) : null;
+    if (m) counts.set(m[0].length, (counts.get(m[0].length) ?? 0) + 1);
+  }
+  const column = [...counts].sort((a, b) => b[1] - a[1] || a[0] - b[0])[0]?.[0] ?? 22;
+  const width = Math.max(100, ...block.map((l) => l.length));
+  const indent = " ".repeat(column);
+  const description = tr.ns(cliHelp)("langOption");
+  const head = `  ${LANG_SIGNATURE}`;
+  const added = head.length + 2 <= column ? wrap(`${head.padEnd(column)}${description}`, width, indent) : [head, ...wrap(`${indent}${description}`, width, indent)];
+  return [...lines.slice(0, end + 1), ...added, ...lines.slice(end + 1)].join("\n");
+}
+

@@ -5,8 +5,8 @@
 import { readFileSync } from "node:fs";
 import { parseArgs } from "node:util";
 import type { Command, Output } from "./command.js";
-import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError, parseErrorText, usageWord } from "./errors.js";
-import { helpText, summaryText } from "./help.js";
+import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, InputError, parseErrorText, usageLine, usageText } from "./errors.js";
+import { helpText, summaryText, withLangOption } from "./help.js";
 import { printable, quoted, terminalSafe } from "../profiles/text.js";
 import { readStandardInput } from "./files.js";
 import { planCommand } from "./commands/plan.js";
@@ -100,10 +100,10 @@ export async function main(argv: string[], rawIo: Output = stdio, env: Readonly<
     try {
       parsed = parseArgs({ args: rest, options: { ...cmd.options, ...LANG_OPTION, help: { type: "boolean", short: "h" } }, allowPositionals: true, strict: true });
     } catch (e) {
-      throw new InputError(`${printable(parseErrorText(e as Error, (e as Error).message.replace(/\. To specify a positional.*$/s, "")))}\n  ${usageWord()} ${cmd.usage}`);
+      throw new InputError(`${printable(parseErrorText(e as Error, (e as Error).message.replace(/\. To specify a positional.*$/s, "")))}\n  ${usageLine(cmd.usage)}`);
     }
     if (parsed.values.help) {
-      io.out(`${t("usageOf", { usage: cmd.usage })}\n\n${helpText(cmd)}\n  --lang en|hu|de     ${t("topHelpLang").replace(/^--lang en\|hu\|de /, "")}`);
+      io.out(`${t("usageOf", { usage: usageText(cmd.usage) })}\n\n${withLangOption(helpText(cmd))}`);
       return EXIT_OK;
     }
     return await cmd.run(parsed as { values: Record<string, unknown>; positionals: string[] }, io);

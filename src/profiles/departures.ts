@@ -20,6 +20,8 @@ import type { Translator } from "../i18n/translator.js";
 import type { Library } from "./library.js";
 import { fileKind, kindText, parseJsonText, parseStartCase } from "./parse.js";
 import { printable, quoted } from "./text.js";
+import { fileProblemText, type FileProblem } from "../i18n/renderFiles.js";
+import { ENGLISH } from "./lineReport.js";
 
 export interface Departure {
   /** The row's id (from the file, or made from its place when it has none). */
@@ -49,7 +51,8 @@ export interface DepartureProblem {
   id?: string;
   /** Text before the first part (a case file's path and ": "). */
   lead?: string;
-  parts: Array<{ prefix: string; issue: FieldIssue }>;
+  /** `file`: a case file that cannot be opened or read, as a code (its English words are the issue's message). */
+  parts: Array<{ prefix: string; issue: FieldIssue; file?: FileProblem }>;
   /** Issues beyond those listed. */
   more?: number;
 }
@@ -58,6 +61,13 @@ export interface DepartureProblem {
 export class CaseFileError extends Error {
   constructor(readonly issues: FieldIssue[]) {
     super(oneLine(issues));
+  }
+}
+
+/** A case file that cannot be opened or read for a row (no such file, a folder…): why, as a code; the message is it in English. */
+export class CaseFileUnreadable extends Error {
+  constructor(readonly problem: FileProblem) {
+    super(fileProblemText(ENGLISH, problem));
   }
 }
 
@@ -72,7 +82,7 @@ export function departureProblemText(tr: Translator, p: DepartureProblem): strin
   const t = tr.ns(readers);
   const where = p.line !== undefined ? t("rowLine", { line: p.line }) : `[${p.index}]${p.id ? ` (${printable(p.id)})` : ""}`;
   const text = (i: FieldIssue) => (i.reader ? readerMessage(tr, i.reader) : issueMessage(tr, i));
-  const parts = p.parts.map((x, k) => printable(`${k === 0 ? (p.lead ?? "") : ""}${x.prefix}${text(x.issue)}`));
+  const parts = p.parts.map((x, k) => printable(`${k === 0 ? (p.lead ?? "") : ""}${x.prefix}${x.file ? fileProblemText(tr, x.file) : text(x.issue)}`));
   if (p.more) parts.push(tr.ns(fields)("andMore", { count: p.more }));
   return `${where}: ${parts.join("; ")}`;
 }
@@ -123,7 +133,8 @@ export function caseFileJson(text: string): unknown {
 
 /**
  * Departures from a CSV departures file's text. `readCase(path)` gives the JSON of the start-case file a row
- * names (as written in the CSV), or an Error saying why it cannot; it is asked once per distinct path.
+ * names (as written in the CSV), or an Error saying why it cannot (a CaseFileUnreadable or a CaseFileError
+ * says it as codes, which the row's problem keeps); it is asked once per distinct path.
  */
 /** What a case named by id looks like: letters, digits and hyphens only. */
 const CASE_ID = /^[A-Za-z0-9][A-Za-z0-9-]*$/;
@@ -166,6 +177,7 @@ export function departuresFromCsv(text: string, readCase: (casePath: string) => 
       if (!files.has(casePath)) files.set(casePath, CASE_ID.test(casePath) && lib.cases?.has(casePath) ? lib.cases.get(casePath) : readCase(casePath));
       const raw = files.get(casePath);
       const shownPath = printable(casePath);
+      if (raw instanceof CaseFileUnreadable) return fail(`${shownPath}: ${raw.message}`, { lead: `${shownPath}: `, parts: [{ prefix: "", issue: { path: "", message: raw.message }, file: raw.problem }] });
       if (raw instanceof Error) {
         const issues = raw instanceof CaseFileError ? raw.issues : [{ path: "", message: raw.message }];
         return fail(`${shownPath}: ${raw.message}`, { lead: `${shownPath}: `, ...issueParts(issues) });

@@ -8,6 +8,7 @@ import type { LocomotiveSpec } from "../../core/physics/types.js";
 import type { StartCase } from "../../core/train/types.js";
 import type { AssistanceReport, DivideReport } from "../../profiles/report.js";
 import type { Departure } from "./departures.js";
+import type { DepartureProblem } from "../../profiles/departures.js";
 import type { CheckOutcome, JobOutcome } from "./jobs.js";
 import type { JobPool } from "./pool.js";
 
@@ -42,6 +43,23 @@ export interface DepartureRow {
   error?: string;
   /** "input" for a row that could not be read, "internal" for one the calculation failed on. */
   errorKind?: "input" | "internal";
+  /**
+   * The error as codes, for the printout in other languages: kept beside `error` on the row itself, never
+   * in the JSON or CSV (publicRow drops it), where `error` stays the English text.
+   */
+  problem?: RowProblem;
+}
+
+/** What is wrong with a row as data: where it is (a CSV line or a JSON index) and what. */
+export type RowProblem =
+  | { kind: "input"; problem: DepartureProblem }
+  | { kind: "unread"; line?: number; index?: number }
+  | { kind: "internal"; line?: number; index?: number; message: string };
+
+/** A row as the JSON output gives it: without the codes behind its error. */
+export function publicRow(r: DepartureRow): Omit<DepartureRow, "problem"> {
+  const { problem: _codes, ...rest } = r;
+  return rest;
 }
 
 export interface CheckProgress {
@@ -86,7 +104,9 @@ export async function checkDepartures(
     const base: DepartureRow = { id: d.id, ...(d.line !== undefined ? { line: d.line } : {}), ...(d.index !== undefined ? { index: d.index } : {}) };
     if (!d.case) {
       tick();
-      return { ...base, error: d.error ?? `${d.where}: cannot be read`, errorKind: "input" };
+      const at = d.line !== undefined ? { line: d.line } : { index: d.index ?? 0 };
+      const problem: RowProblem | undefined = d.problem ? { kind: "input", problem: d.problem } : d.error === undefined ? { kind: "unread", ...at } : undefined;
+      return { ...base, error: d.error ?? `${d.where}: cannot be read`, errorKind: "input", ...(problem ? { problem } : {}) };
     }
     const c = d.case;
     const k = keyOf(c);
@@ -119,7 +139,9 @@ export async function checkDepartures(
         ...(o.advice.length > 0 ? { advice: o.advice } : {}),
       };
     } catch (e) {
-      return { ...described, error: `${d.where}: internal error: ${(e as Error).message}`, errorKind: "internal" };
+      const message = (e as Error).message;
+      const at = d.line !== undefined ? { line: d.line } : { index: d.index ?? 0 };
+      return { ...described, error: `${d.where}: internal error: ${message}`, errorKind: "internal", problem: { kind: "internal", ...at, message } };
     } finally {
       tick();
     }

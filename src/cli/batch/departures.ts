@@ -11,7 +11,7 @@
 import { realpathSync } from "node:fs";
 import { dirname, extname, isAbsolute, relative, resolve, sep } from "node:path";
 import type { Library } from "../../profiles/library.js";
-import { CaseFileError, caseFileJson, departureProblemText, departuresFromCsv, departuresFromJson, type Departure, type DepartureProblem, type DeparturesRead } from "../../profiles/departures.js";
+import { CaseFileError, CaseFileUnreadable, caseFileJson, departuresFromCsv, departuresFromJson, type Departure, type DeparturesRead } from "../../profiles/departures.js";
 import { planWorkProblem } from "../../core/planner/workCap.js";
 import { readerIssue } from "../../profiles/readerIssues.js";
 import { readerText } from "../../i18n/renderReaders.js";
@@ -36,21 +36,7 @@ export function readDepartures(path: string, lib: Library, opts: ReadDeparturesO
     ? departuresFromJson(text, lib)
     : departuresFromCsv(text, (casePath) => readCaseFile(resolve(dir, casePath), opts.allowOutside ? undefined : dir), lib);
   if (!read.ok) throw new InputError(`${pathText(path)}: ${readerText(cliTr(), read.headline)}`, read.issues);
-  const out = read.departures.map(withinWorkCap);
-  for (const d of out) if (d.error !== undefined && d.problem) problems.set(d.error, d.problem);
-  return out;
-}
-
-/**
- * The rows' problems by their English error: the check's rows carry the English text (its JSON and CSV),
- * the printout says it in this run's language from the codes behind it.
- */
-const problems = new Map<string, DepartureProblem>();
-
-/** A row's error in this run's language (English: the text itself). */
-export function rowErrorText(error: string): string {
-  const p = cliTr().lang === "en" ? undefined : problems.get(error);
-  return p ? departureProblemText(cliTr(), p) : error;
+  return read.departures.map(withinWorkCap);
 }
 
 /** A departure whose plan would take more work than a plan may becomes a row with that error. */
@@ -85,6 +71,6 @@ function readCaseFile(path: string, folder: string | undefined): unknown {
     return new CaseFileError([readerIssue("", { code: "caseOutside", figures: { folder: pathText(resolve(folder)) } })]);
   }
   const r = readRegularFile(path);
-  if (!r.ok) return new Error(r.why);
+  if (!r.ok) return new CaseFileUnreadable(r.problem);
   return caseFileJson(r.text);
 }

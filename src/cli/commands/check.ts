@@ -1,10 +1,10 @@
 /** `taut check DEPARTURES.csv|json` — a day's departures checked at once, in parallel worker threads. */
 import { STANDARD_CAUTIONS } from "../../core/planner/cautions.js";
 import { cautionsInEnglish } from "../../profiles/report.js";
-import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, errorWords, InputError, usageWord } from "../errors.js";
+import { EXIT_BAD_INPUT, EXIT_INTERNAL, EXIT_OK, errorWords, InputError, usageLine } from "../errors.js";
 import { library, readNotesFiles } from "../files.js";
 import type { Command } from "../command.js";
-import { checkDepartures } from "../batch/checkDepartures.js";
+import { checkDepartures, publicRow } from "../batch/checkDepartures.js";
 import { readDepartures } from "../batch/departures.js";
 import { parseShard, shardOf } from "../batch/shard.js";
 import { CHECK_ASSISTANCE_BUDGET, CHECK_DIVIDE_BUDGET } from "../batch/jobs.js";
@@ -49,8 +49,9 @@ export const checkCommand: Command = {
     "                batch scheduler's job array split a day among machines; join their CSV outputs after",
     "                (README: Splitting a day among machines)",
     "  --quiet       no progress lines on stderr",
-    "  --allow-outside  also read case files outside the CSV's folder (by default only that folder",
-    "                and the folders below it)",
+    "  --allow-outside",
+    "                also read case files outside the CSV's folder (by default only that folder and the",
+    "                folders below it)",
     "",
     `Each departure's assistance search is capped at ${CHECK_ASSISTANCE_BUDGET} planner runs for the options and ${CHECK_DIVIDE_BUDGET} for dividing`,
     "the train; `taut plan` on the case lists every option that starts.",
@@ -71,7 +72,7 @@ export const checkCommand: Command = {
   },
   async run({ values, positionals }, io) {
     const path = positionals[0];
-    if (!path) throw new InputError(`${errorWords()("departuresNeeded")}\n  ${usageWord()} ${checkCommand.usage}`);
+    if (!path) throw new InputError(`${errorWords()("departuresNeeded")}\n  ${usageLine(checkCommand.usage)}`);
     if (positionals.length > 1) throw new InputError(errorWords()("oneDepartures", { count: String(positionals.length) }));
     if (values.json && values.csv) throw new InputError(errorWords()("jsonOrCsv"));
     const sort = (values.sort as string | undefined) ?? "file";
@@ -108,7 +109,7 @@ export const checkCommand: Command = {
       maxMassSearch_ms: Math.round(Math.max(0, ...stats.massMs)),
       threadWork_s: Math.round([...stats.checkMs, ...stats.massMs].reduce((a, b) => a + b, 0) / 100) / 10,
     };
-    if (values.json) io.out(JSON.stringify({ schema: "taut/departures-check@1", file: path, order: sort, departures: rows, summary, cautions: cautionsInEnglish(STANDARD_CAUTIONS) }, null, 2));
+    if (values.json) io.out(JSON.stringify({ schema: "taut/departures-check@1", file: path, order: sort, departures: rows.map(publicRow), summary, cautions: cautionsInEnglish(STANDARD_CAUTIONS) }, null, 2));
     else if (values.csv) io.out(checkCsv(rows));
     else io.out(renderCheck(rows, STANDARD_CAUTIONS));
     if (!values.quiet) io.err(`taut check: ${errorWords()("checkDone", { shard: shard ? errorWords()("checkShard", { k: String(shard.k), n: String(shard.n) }) : "", rows: String(rows.length), of: shard ? errorWords()("checkOf", { all: String(all.length) }) : "", time: asGiven(summary.elapsed_s), count: jobs, checks: String(stats.checks), searches: String(stats.massSearches) })}`);

@@ -10,7 +10,7 @@ import { basename } from "node:path";
 import { builtinTrains } from "../../profiles/builtin.js";
 import { createRailmlReader, noteIdFrom, RailmlError, railmlNote, railmlStretch, type FrontPlace, type RailmlModel } from "../../profiles/railml/index.js";
 import type { Command } from "../command.js";
-import { errorWords, InputError, usageWord } from "../errors.js";
+import { errorWords, InputError, usageLine } from "../errors.js";
 import { asGiven, num, textTable } from "../table.js";
 import { cliNotes } from "../../i18n/en/cliNotes.js";
 import { cliTr } from "../lang.js";
@@ -68,8 +68,8 @@ export const notesCommand: Command = {
   async run({ values, positionals }, io) {
     const [sub, file, ...extra] = positionals;
     const t = words();
-    if (sub !== "from-railml") throw new InputError(`${sub === undefined ? t("subcommandNeeded") : t("subcommandUnknown", { name: `"${sub}"` })}: taut notes from-railml …\n  ${usageWord()} ${USAGE}`);
-    if (!file) throw new InputError(`${t("fileNeeded")}\n  ${usageWord()} ${USAGE}`);
+    if (sub !== "from-railml") throw new InputError(`${sub === undefined ? t("subcommandNeeded") : t("subcommandUnknown", { name: `"${sub}"` })}: taut notes from-railml …\n  ${usageLine(USAGE)}`);
+    if (!file) throw new InputError(`${t("fileNeeded")}\n  ${usageLine(USAGE)}`);
     if (extra.length > 0) throw new InputError(t("oneFile", { count: String(extra.length + 1) }));
     const direction = values.direction;
     if (direction !== "up" && direction !== "down") throw new InputError(direction === undefined ? t("directionNeeded") : t("directionGot", { value: `"${String(direction)}"` }));

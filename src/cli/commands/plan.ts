@@ -14,7 +14,7 @@ import { planReport as reportOf, type PlanReport } from "../../profiles/report.j
 import { assistanceReport, conditionMarginReport } from "../../profiles/assistanceReport.js";
 import type { LocomotiveSpec } from "../../core/physics/types.js";
 import type { StartCase } from "../../core/train/types.js";
-import { errorWords, InputError, usageWord } from "../errors.js";
+import { errorWords, InputError, usageLine } from "../errors.js";
 import { quoted } from "../../profiles/text.js";
 import { library, readNotesFiles, readStartCase, wagonTypeOf } from "../files.js";
 import type { Command } from "../command.js";
@@ -91,7 +91,7 @@ export const planCommand: Command = {
       meta = caseMeta(raw);
     } else {
       const path = positionals[0];
-      if (!path) throw new InputError(`${errorWords()("planCaseNeeded")}\n  ${usageWord()} taut plan CASE.json|- [--json]`);
+      if (!path) throw new InputError(`${errorWords()("planCaseNeeded")}\n  ${usageLine("taut plan CASE.json|- [--json]")}`);
       if (positionals.length > 1) throw new InputError(errorWords()("oneCase", { count: String(positionals.length) }));
       let text: string | undefined;
       if (path === "-") {

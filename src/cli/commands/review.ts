@@ -6,7 +6,7 @@ import { reviewText, type ReviewText } from "../../i18n/reviewText.js";
 import { cli } from "../../i18n/en/cli.js";
 import { cliTr, cliWords } from "../lang.js";
 import type { Verdict } from "../../core/planner/outcome.js";
-import { errorWords, InputError, usageWord } from "../errors.js";
+import { errorWords, InputError, usageLine } from "../errors.js";
 import { library, pathText, readStartCase, readText } from "../files.js";
 import type { Command } from "../command.js";
 import { num } from "../table.js";
@@ -51,7 +51,7 @@ export const reviewCommand: Command = {
   options: { json: { type: "boolean" }, series: { type: "boolean" } },
   run({ values, positionals }, io) {
     const [casePath, recPath] = positionals;
-    if (!casePath || !recPath) throw new InputError(`${errorWords()("reviewNeeded")}\n  ${usageWord()} taut review CASE.json RECORDING.gpx|.csv [--json]`);
+    if (!casePath || !recPath) throw new InputError(`${errorWords()("reviewNeeded")}\n  ${usageLine("taut review CASE.json RECORDING.gpx|.csv [--json]")}`);
     const { c } = readStartCase(casePath, library());
     let read: ReadRecording;
     try {

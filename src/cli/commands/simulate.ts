@@ -9,7 +9,7 @@ import { library, readStartCase } from "../files.js";
 import type { Command } from "../command.js";
 import { asGiven, num, textTable } from "../table.js";
 import { cli } from "../../i18n/en/cli.js";
-import { usageWord } from "../errors.js";
+import { usageLine } from "../errors.js";
 import { wrap } from "../render/wrap.js";
 import { cliSimulate } from "../../i18n/en/cliSimulate.js";
 import { createTranslator, type Translator } from "../../i18n/translator.js";
@@ -287,7 +287,7 @@ export const simulateCommand: Command = {
   },
   run({ values, positionals }, io) {
     const path = positionals[0];
-    if (!path) throw new InputError(`${words()("caseNeeded")}\n  ${usageWord()} taut simulate CASE.json --sequence "1@0,4@20"`);
+    if (!path) throw new InputError(`${words()("caseNeeded")}\n  ${usageLine(`taut simulate CASE.json --sequence "1@0,4@20"`)}`);
     if (typeof values.sequence !== "string") throw new InputError(words()("sequenceRequired"));
     const { c } = readStartCase(path, library());
     const maxNotch = Math.min(...c.locomotives.map((g) => g.spec.notchPower.length));

@@ -10,7 +10,7 @@ import { builtinTrains } from "../../profiles/builtin.js";
 import type { Library } from "../../profiles/library.js";
 import { parseStartCaseFile, resolveStartCase } from "../../profiles/parse.js";
 import type { LocationNoteFile, StartCaseFile } from "../../profiles/schemas.js";
-import { errorWords, InputError, usageWord } from "../errors.js";
+import { errorWords, InputError, usageLine } from "../errors.js";
 import { printable, quoted } from "../../profiles/text.js";
 import { checkWork, library, readNotesFiles } from "../files.js";
 import type { Command } from "../command.js";
@@ -80,7 +80,7 @@ export const tableCommand: Command = {
   },
   async run({ values, positionals }, io) {
     const where = positionals[0];
-    if (!where) throw new InputError(`${errorWords()("tableNoteNeeded")}\n  ${usageWord()} ${tableCommand.usage}`);
+    if (!where) throw new InputError(`${errorWords()("tableNoteNeeded")}\n  ${usageLine(tableCommand.usage)}`);
     if (positionals.length > 1) throw new InputError(errorWords()("oneLocation", { count: String(positionals.length) }));
     if (values.json && values.csv) throw new InputError(errorWords()("jsonOrCsv"));
     const lib = library();

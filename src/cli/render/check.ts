@@ -5,12 +5,14 @@ import { csv, num, textTable } from "../table.js";
 import { divideLine, optionLine } from "./assistance.js";
 import { cliTr, cliWords } from "../lang.js";
 import { cli } from "../../i18n/en/cli.js";
+import { readers } from "../../i18n/en/readers.js";
 import { cautionText } from "../../i18n/render.js";
 import type { Caution } from "../../core/planner/cautions.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
 import { wrap } from "./wrap.js";
 import { printable } from "../../profiles/text.js";
-import { rowErrorText } from "../batch/departures.js";
+import { departureProblemText } from "../../profiles/departures.js";
+import { cliErrors } from "../../i18n/en/cliErrors.js";
 
 /** The remedy of a row in a few words: the cheapest option, or dividing the train. */
 export function remedyText(r: DepartureRow): string {
@@ -27,6 +29,17 @@ export function massesText(r: DepartureRow): string {
   const t = (x: number | undefined) => (x === undefined ? "" : x > 0 ? num(x) : cliTr().ns(cli)("none"));
   const m = r.largestMarginalMass_t;
   return m !== undefined && m !== r.maxStartableMass_t ? `${t(r.maxStartableMass_t)} / ${t(m)}` : t(r.maxStartableMass_t);
+}
+
+/** A row's error in this run's language, from the codes beside it (English: the row's `error` itself). */
+export function rowErrorText(r: DepartureRow): string {
+  const tr = cliTr();
+  const p = r.problem;
+  if (tr.lang === "en" || p === undefined) return r.error ?? "";
+  if (p.kind === "input") return departureProblemText(tr, p.problem);
+  const t = tr.ns(cliErrors);
+  const at = p.line !== undefined ? tr.ns(readers)("rowLine", { line: p.line }) : `[${p.index ?? 0}]`;
+  return p.kind === "internal" ? t("rowInternal", { where: at, message: p.message }) : t("rowUnread", { where: at });
 }
 
 function where(r: DepartureRow): string {
@@ -80,7 +93,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly Ca
   if (bad.length > 0) {
     lines.push("");
     lines.push(t("notAnswered", { count: bad.length }));
-    for (const r of bad) lines.push(...wrap(`  - ${printable(rowErrorText(r.error ?? ""))}`, 110, "    "));
+    for (const r of bad) lines.push(...wrap(`  - ${printable(rowErrorText(r))}`, 110, "    "));
   }
   const s = summarise(rows);
   lines.push("");

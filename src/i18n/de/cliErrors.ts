@@ -13,7 +13,7 @@ export const cliErrorsDe = translation<typeof cliErrors.en>()({
   progress: "{done}/{total} {what} ({percent} %), {time} s",
   progressDepartures: "Abfahrten beantwortet",
   progressTableRows: "Zeilen der Lasttafel",
-  noSuchFile: "keine solche Datei",
+  noSuchFile: "Datei nicht gefunden",
   noPermission: "nicht lesbar (keine Berechtigung)",
   cannotRead: "nicht lesbar ({code})",
   notAFile: "ist {kind}, keine Datei",
@@ -66,4 +66,6 @@ export const cliErrorsDe = translation<typeof cliErrors.en>()({
   gradeNoNote: "--grade: keine Ortsnotiz {id}, aus der Bogen und freier Weg voraus genommen werden können",
   bearingRoller: "Rollen",
   bearingPlain: "Gleit",
+  rowUnread: "{where}: nicht lesbar",
+  rowInternal: "{where}: interner Fehler: {message}",
 });

@@ -12,13 +12,13 @@ Hilft keine, nennt es den größten vorderen Zugteil, der anfährt (Zug teilen).
 Sekunden bleibt, ist die Suche hier auf {budget} Planerläufe für die Möglichkeiten ({fullPlans} davon vollständig
 nachgeprüft) und {divide} für das Teilen begrenzt; die Ausgabe sagt, wenn die Grenze die Suche abschnitt.
 
-CASE.json ist eine Anfahrfall-Datei (taut/start-case@1); "-" liest sie von der Standardeingabe.
+FALL.json ist eine Anfahrfall-Datei (taut/start-case@1); "-" liest sie von der Standardeingabe.
 
 Abweichungen (was sich von Abfahrt zu Abfahrt ändert; die Falldatei bleibt, wie sie ist):
   --rail R            Schienenzustand: {rails}
   --sand, --no-sand   Sanden ein oder aus
   --mass T            Anhängelast, Tonnen
-  --grade PERMILLE    Neigung unter dem ganzen Zug, Promille (positiv: steigt voraus); ein Fall auf einem
+  --grade PROMILLE    Neigung unter dem ganzen Zug, Promille (positiv: steigt voraus); ein Fall auf einem
                       Streckenprofil oder einer Ortsnotiz wird zu gleichmäßiger Neigung mit dem engsten
                       Bogen des Profils unter dem Zug und seinem freien Weg voraus
 
@@ -26,9 +26,9 @@ Optionen:
   --json              den Plan als JSON statt als Tabelle: dieselben Werte, jedes Feld mit seiner
                       Einheit benannt (trailingMass_t, peakCouplerForce_kN, ...), für Skripte
   --demo              den eingebauten Beispielfall statt einer Datei verwenden
-  --notes FILE        Ortsnotizen (eine Notiz taut/location@1 oder ein Bündel taut/notes-bundle@2), die
+  --notes DATEI       Ortsnotizen (eine Notiz taut/location@1 oder ein Bündel taut/notes-bundle@2), die
                       "location" des Falls per id benennen kann; mehrfach angebbar
-  --location NOTE-ID  an dieser Ortsnotiz statt am eigenen Ort des Falls anfahren
+  --location NOTIZ    an dieser Ortsnotiz statt am eigenen Ort des Falls anfahren
   --helper ID         Lokprofil, das die Zusatzlok-Möglichkeiten anfügen (Vorgabe: das der führenden Lok)
   --helper-control C  wie im Zug oder am Schluss angefügte Loks gefahren werden: remote (eigene
                       Fahrstufe vom führenden Führerstand aus; Vorgabe) oder helper (eigener
@@ -56,21 +56,22 @@ oder ihrem Index (JSON, ab 0) gemeldet; die übrigen Zeilen werden trotzdem bean
 Abfahrten werden einmal berechnet.
 
 Optionen:
-  --sort risk   die gefährdetsten zuerst, wie der Bildschirm Abfahrten: Zusatzlok nötig, dann
-                Grenzfall, dann fährt an, jeweils nach Reserve (kleinste zuerst), unbeantwortete
-                Zeilen zuletzt; Gleichstand in Dateireihenfolge. --sort file (Vorgabe) behält sie.
-  --json        Zeilen als JSON: {json}
-  --csv         Zeilen als CSV
-  --notes FILE  Ortsnotizen (eine Notiz taut/location@1 oder ein Bündel taut/notes-bundle@2); mehrfach
-  --helper ID   Lokprofil, das die Zusatzlok-Möglichkeiten anfügen (Vorgabe: das der führenden Lok
-                jedes Zuges)
-  --jobs N      Worker-Threads (Vorgabe: die verfügbaren Kerne, hier {jobs}; 1 rechnet in diesem Thread)
-  --shard K/N   nur jede N-te Abfahrt der Datei beantworten, ab der K-ten (K = 1…N): N Jobs eines
-                Job-Arrays teilen einen Tag auf Rechner auf; ihre CSV-Ausgaben danach zusammenfügen
-                (README: Splitting a day among machines)
-  --quiet       keine Fortschrittszeilen auf stderr
-  --allow-outside  auch Falldateien außerhalb des Ordners der CSV lesen (sonst nur dieser Ordner
-                und die Ordner darunter)
+  --sort risk    die gefährdetsten zuerst, wie der Bildschirm Abfahrten: Zusatzlok nötig, dann
+                 Grenzfall, dann fährt an, jeweils nach Reserve (kleinste zuerst), unbeantwortete
+                 Zeilen zuletzt; Gleichstand in Dateireihenfolge. --sort file (Vorgabe) behält sie.
+  --json         Zeilen als JSON: {json}
+  --csv          Zeilen als CSV
+  --notes DATEI  Ortsnotizen (eine Notiz taut/location@1 oder ein Bündel taut/notes-bundle@2); mehrfach
+  --helper ID    Lokprofil, das die Zusatzlok-Möglichkeiten anfügen (Vorgabe: das der führenden Lok
+                 jedes Zuges)
+  --jobs N       Worker-Threads (Vorgabe: die verfügbaren Kerne, hier {jobs}; 1 rechnet in diesem Thread)
+  --shard K/N    nur jede N-te Abfahrt der Datei beantworten, ab der K-ten (K = 1…N): N Jobs eines
+                 Job-Arrays teilen einen Tag auf Rechner auf; ihre CSV-Ausgaben danach zusammenfügen
+                 (README: Splitting a day among machines)
+  --quiet        keine Fortschrittszeilen auf stderr
+  --allow-outside
+                 auch Falldateien außerhalb des Ordners der CSV lesen (sonst nur dieser Ordner und die
+                 Ordner darunter)
 
 Die Zusatzlok-Suche jeder Abfahrt ist auf {budget} Planerläufe für die Möglichkeiten und {divide} für das
 Teilen des Zuges begrenzt; \`taut plan\` auf den Fall nennt jede Möglichkeit, mit der er anfährt.
@@ -84,7 +85,7 @@ Sanden. Jeder Wert ist eine Intervallhalbierung über das Ergebnis des Anfahrpla
 statischen Grenze): ein Zug knapp leichter als der Wert fährt an, einer knapp schwerer nicht. Zwölf
 Lastsuchen in parallelen Worker-Threads: einige Sekunden.
 
-LOCATION.json ist eine Ortsnotiz (taut/location@1) oder ein Bündel (taut/notes-bundle@2) mit
+ORT.json ist eine Ortsnotiz (taut/location@1) oder ein Bündel (taut/notes-bundle@2) mit
 --note ID; eine eingebaute Notiz kann statt einer Datei mit ihrer id genannt werden.
 
 Der Zug der Tafel: der Referenzzug der Notiz — derselbe, den die Karte der Ortsnotizen in der App
@@ -119,14 +120,14 @@ Ohne --duration läuft die Rechnung, bis das Ziel des Falls erreicht ist, und sa
 endete: die Zeitgrenze ({cap} s), Liegenbleiben oder Schleudern im Stillstand.
 
 Optionen:
-  --sequence S          Fahrstufe@Sekunden, durch Kommas getrennt (nötig)
-  --duration S          genau S Sekunden rechnen
-  --release-at S        wann die Lokbremse gelöst wird, s
-  --brake-released      die Zugbremse ist bei 0 s schon gelöst (die Lokbremse hält dann bis 3 s nach
-                        der ersten Fahrstufe, sofern --release-at nichts anderes sagt)
-  --adhesion-quantile Q angenommener Kraftschluss: 0.5 Median (Vorgabe), 0.1 die schlechtesten 10 %
-  --json                Ausgabe als JSON
-  --series              mit --json auch die ausgedünnte Zeitreihe`,
+  --sequence S           Fahrstufe@Sekunden, durch Kommas getrennt (nötig)
+  --duration S           genau S Sekunden rechnen
+  --release-at S         wann die Lokbremse gelöst wird, s
+  --brake-released       die Zugbremse ist bei 0 s schon gelöst (die Lokbremse hält dann bis 3 s nach
+                         der ersten Fahrstufe, sofern --release-at nichts anderes sagt)
+  --adhesion-quantile Q  angenommener Kraftschluss: 0.5 Median (Vorgabe), 0.1 die schlechtesten 10 %
+  --json                 Ausgabe als JSON
+  --series               mit --json auch die ausgedünnte Zeitreihe`,
   reviewSummary: "eine aufgezeichnete Anfahrt (GPX oder CSV) neben den Plan legen und die beobachteten Faktoren anpassen",
   reviewHelp: `Legt eine aufgezeichnete Anfahrt ab dem Anfahrzeitpunkt (die Geschwindigkeit bleibt erstmals 5 s über
 2 km/h) über den Plan des Falls und passt durch erneutes Rechnen des Dynamikmodells den Faktor auf die
@@ -135,7 +136,7 @@ Mit aufgezeichneter Fahrstufe passt es auch die Zugkraft der Loks an und sagt, w
 beides nicht trennen kann; mit Fahrstufe und Strom findet es Schleudern (der Strom fällt, während die
 Fahrstufe bleibt). Danach plant es mit den angepassten Werten neu: würde sich das Ergebnis ändern?
 
-RECORDING: ein GPX-1.1-Track (Zeit und Position; Geschwindigkeit aus den Positionen oder die mit den
+AUFZEICHNUNG: ein GPX-1.1-Track (Zeit und Position; Geschwindigkeit aus den Positionen oder die mit den
 Punkten aufgezeichnete) oder ein CSV-Protokoll mit der Kopfzeile time_s,speed_kmh[,notch][,current_A][,distance_m].
 
 Optionen:
@@ -163,8 +164,17 @@ Optionen:
   --id ID            id der Notiz (Vorgabe: aus dem Namen gebildet)
   --initials XX      Kürzel für den ersten Revisionseintrag der Notiz (Vorgabe: railML)
   --no-hazards       die Gefahrenstellen weglassen
-  --out FILE         die Notiz in FILE schreiben
+  --out DATEI        die Notiz in DATEI schreiben
   --json             die Notiz (taut/location@1) auf die Standardausgabe schreiben
 
 railML-3-Dateien werden erkannt und abgelehnt. XML-Entity-Deklarationen werden abgelehnt, nie ausgewertet.`,
+  langOption: "die Sprache des Textes: en Englisch, hu Ungarisch, de Deutsch (Vorgabe: nach LC_ALL, LC_MESSAGES oder LANG); JSON und CSV sind in jeder Sprache gleich",
+  metaFile: "DATEI",
+  metaCase: "FALL",
+  metaDepartures: "ABFAHRTEN",
+  metaLocation: "ORT",
+  metaRecording: "AUFZEICHNUNG",
+  metaText: "TEXT",
+  metaPermille: "PROMILLE",
+  metaNoteId: "NOTIZ",
 });

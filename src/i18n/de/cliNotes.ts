@@ -15,7 +15,7 @@ export const cliNotesDe = translation<typeof cliNotes.en>()({
   speedLimit: "; zulässige Geschwindigkeit {speed} km/h",
   hazards: "Gefahrenstellen:",
   written: "Geschrieben nach {file}.",
-  howToKeep: "Mit --json wird die Notiz ausgegeben, mit --out FILE in eine Datei geschrieben.",
+  howToKeep: "Mit --json wird die Notiz ausgegeben, mit --out DATEI in eine Datei geschrieben.",
   subcommandNeeded: "ein Unterbefehl wird gebraucht",
   subcommandUnknown: "unbekannter Unterbefehl {name}",
   fileNeeded: "eine railML-Datei wird gebraucht",

@@ -68,4 +68,7 @@ export const cliErrors = namespace("cliErrors", {
   // The load table's bearing word before "bearings" (cli.tableTrain): English the code itself.
   bearingRoller: "roller",
   bearingPlain: "plain",
+  // A row of \`taut check\` not answered: one that cannot be read, one the calculation failed on ({message}: the failure's own words).
+  rowUnread: "{where}: cannot be read",
+  rowInternal: "{where}: internal error: {message}",
 });

@@ -70,8 +70,9 @@ Options:
                 batch scheduler's job array split a day among machines; join their CSV outputs after
                 (README: Splitting a day among machines)
   --quiet       no progress lines on stderr
-  --allow-outside  also read case files outside the CSV's folder (by default only that folder
-                and the folders below it)
+  --allow-outside
+                also read case files outside the CSV's folder (by default only that folder and the
+                folders below it)
 
 Each departure's assistance search is capped at {budget} planner runs for the options and {divide} for dividing
 the train; \`taut plan\` on the case lists every option that starts.
@@ -160,4 +161,16 @@ Options:
   --json             print the note (taut/location@1) on standard output
 
 railML 3 files are recognised and refused. XML entity declarations are refused, never expanded.`,
+  // The --lang option, which every command's --help lists last among its options (src/cli/help.ts withLangOption).
+  langOption: "the language of the text: en English, hu Hungarian, de German (default: from LC_ALL, LC_MESSAGES or LANG); JSON and CSV are the same in every language",
+  // The usage lines' placeholders that are words (src/cli/help.ts usageText): in capitals, no spaces. Single letters
+  // and abbreviations (N, M, ID, POS, KN) are symbols and stay as they are.
+  metaFile: "FILE",
+  metaCase: "CASE",
+  metaDepartures: "DEPARTURES",
+  metaLocation: "LOCATION",
+  metaRecording: "RECORDING",
+  metaText: "TEXT",
+  metaPermille: "PERMILLE",
+  metaNoteId: "NOTE-ID",
 });

@@ -66,4 +66,6 @@ export const cliErrorsHu = translation<typeof cliErrors.en>()({
   gradeNoNote: "--grade: nincs {id} helyszíni jegyzet, amelyből az ív és a szabad út vehető",
   bearingRoller: "görgős",
   bearingPlain: "sikló",
+  rowUnread: "{where}: nem olvasható",
+  rowInternal: "{where}: belső hiba: {message}",
 });

@@ -12,13 +12,13 @@ segít, megadja a vonat legnagyobb elülső részét, amely elindul (a vonat meg
 másodpercen belül maradjon, a keresés itt {budget} tervezőfutásra korlátozott a lehetőségekhez (ebből
 {fullPlans} teljesen ellenőrzött) és {divide} futásra a megosztáshoz; a kiírás jelzi, ha a korlát megszakította.
 
-A CASE.json indítási esetfájl (taut/start-case@1); a "-" a szabványos bemenetről olvassa.
+Az ESET.json indítási esetfájl (taut/start-case@1); a "-" a szabványos bemenetről olvassa.
 
 Felülírások (ami indulásról indulásra változik; az esetfájl változatlan marad):
   --rail R            sínállapot: {rails}
   --sand, --no-sand   homokolás be vagy ki
   --mass T            vontatott tömeg, tonna
-  --grade PERMILLE    lejtviszony a teljes vonat alatt, ezrelék (pozitív: előre emelkedik); a
+  --grade EZRELÉK     lejtviszony a teljes vonat alatt, ezrelék (pozitív: előre emelkedik); a
                       pályaprofilon vagy helyszíni jegyzeten álló eset egyenletes lejtviszonnyá válik, a
                       profil legkisebb ívsugarával a vonat alatt és a szabad úttal előre
 
@@ -26,9 +26,9 @@ Kapcsolók:
   --json              a terv JSON-ként táblázat helyett: ugyanazok az értékek, minden mező a
                       mértékegységével megnevezve (trailingMass_t, peakCouplerForce_kN, ...), szkriptekhez
   --demo              a beépített szemléltető eset fájl helyett
-  --notes FILE        helyszíni jegyzetek (egy taut/location@1 jegyzet vagy egy taut/notes-bundle@2
+  --notes FÁJL        helyszíni jegyzetek (egy taut/location@1 jegyzet vagy egy taut/notes-bundle@2
                       csomag), amelyeket az eset "location" mezője id alapján megnevezhet; többször is
-  --location NOTE-ID  indulás ennél a helyszíni jegyzetnél az eset saját helye helyett
+  --location JEGYZET  indulás ennél a helyszíni jegyzetnél az eset saját helye helyett
   --helper ID         a rásegítési lehetőségekhez adott mozdonyprofil (alapból: a vezető mozdonyé)
   --helper-control C  a vonat közepére vagy végére adott mozdonyok vezetése: remote (saját fokozat
                       a vezető vezetőállásról; alapból) vagy helper (saját mozdonyvezető, rádión egyeztetve)
@@ -59,7 +59,7 @@ Kapcsolók:
                 válaszolt sorok a végén; egyezésnél a fájl sorrendje. --sort file (alapból) megtartja.
   --json        a sorok JSON-ként: {json}
   --csv         a sorok CSV-ként
-  --notes FILE  helyszíni jegyzetek (egy taut/location@1 jegyzet vagy egy taut/notes-bundle@2
+  --notes FÁJL  helyszíni jegyzetek (egy taut/location@1 jegyzet vagy egy taut/notes-bundle@2
                 csomag); többször is megadható
   --helper ID   a rásegítési lehetőségekhez adott mozdonyprofil (alapból: minden vonat vezető mozdonyáé)
   --jobs N      munkaszálak (alapból: a rendelkezésre álló magok, itt {jobs}; 1 ezen a szálon számol)
@@ -67,8 +67,9 @@ Kapcsolók:
                 ütemező N feladata így osztja szét a napot gépek között; a CSV-kimeneteket utána
                 össze kell fűzni (README: Splitting a day among machines)
   --quiet       nincsenek haladási sorok a stderr-en
-  --allow-outside  a CSV mappáján kívüli esetfájlokat is olvassa (alapból csak azt a mappát és
-                az alatta lévőket)
+  --allow-outside
+                a CSV mappáján kívüli esetfájlokat is olvassa (alapból csak azt a mappát és az alatta
+                lévőket)
 
 Minden indulás rásegítés-keresése {budget} tervezőfutásra korlátozott a lehetőségekhez és {divide} futásra a
 vonat megosztásához; az esetre futtatott \`taut plan\` minden induló lehetőséget felsorol.
@@ -82,7 +83,7 @@ homokolás nélkül és vele. Minden érték intervallumfelezés az indítási t
 statikus határ alatt): a nála kicsit könnyebb vonat elindul, a kicsit nehezebb nem. Tizenkét
 tömegkeresés párhuzamos munkaszálakon: néhány másodperc.
 
-A LOCATION.json helyszíni jegyzet (taut/location@1), vagy csomag (taut/notes-bundle@2) a --note ID-vel;
+A HELYSZÍN.json helyszíni jegyzet (taut/location@1), vagy csomag (taut/notes-bundle@2) a --note ID-vel;
 beépített jegyzet fájl helyett az id-jével is megnevezhető.
 
 A vonat, amelyre a táblázat szól: a jegyzet mintavonata — ugyanaz, amelyet az alkalmazás Helyszíni
@@ -118,14 +119,14 @@ pillanatáig tart (alapból: a terv pillanata, és legalább 3 s-mal az első fo
 előbb: az időkorlát ({cap} s), elakadás, vagy álló helyzetben perdülő kerekek.
 
 Kapcsolók:
-  --sequence S          fokozat@másodperc, vesszővel elválasztva (kötelező)
-  --duration S          pontosan S másodpercet számol
-  --release-at S        mikor oldják a mozdonyféket, s
-  --brake-released      a vonatfék 0 s-kor már oldva van (a mozdonyfék ekkor az első fokozat után
-                        3 s-ig tart, hacsak a --release-at mást nem mond)
-  --adhesion-quantile Q a futás feltételezett tapadása: 0.5 medián (alapból), 0.1 a legrosszabb 10 %
-  --json                JSON-kimenet
-  --series              a --json mellett a ritkított idősor is`,
+  --sequence S           fokozat@másodperc, vesszővel elválasztva (kötelező)
+  --duration S           pontosan S másodpercet számol
+  --release-at S         mikor oldják a mozdonyféket, s
+  --brake-released       a vonatfék 0 s-kor már oldva van (a mozdonyfék ekkor az első fokozat után
+                         3 s-ig tart, hacsak a --release-at mást nem mond)
+  --adhesion-quantile Q  a futás feltételezett tapadása: 0.5 medián (alapból), 0.1 a legrosszabb 10 %
+  --json                 JSON-kimenet
+  --series               a --json mellett a ritkított idősor is`,
   reviewSummary: "egy rögzített indulás (GPX vagy CSV) összevetése a tervvel, és a megfigyelt tényezők illesztése",
   reviewHelp: `Az eset tervére fektet egy rögzített indulást az indulás pillanatától (amikor a sebesség először
 5 s-ig 2 km/h fölött marad), és a dinamikai modell újrafuttatásával illeszti a vontatott tömeg azon
@@ -134,7 +135,7 @@ intervallummal. Rögzített fokozattal a mozdonyok vonóerejét is illeszti, és
 tudja a kettőt szétválasztani; fokozattal és árammal a perdüléseket is megtalálja (az áram esik, míg a
 fokozat marad). Ezután az illesztett értékekkel újratervez: változna-e az eredmény?
 
-RECORDING: GPX 1.1 nyomvonal (idő és helyzet; a sebesség a helyzetekből, vagy a pontokkal rögzített
+FELVÉTEL: GPX 1.1 nyomvonal (idő és helyzet; a sebesség a helyzetekből, vagy a pontokkal rögzített
 sebesség) vagy CSV-napló a time_s,speed_kmh[,notch][,current_A][,distance_m] fejléccel.
 
 Kapcsolók:
@@ -157,12 +158,21 @@ Kapcsolók:
   --ahead M          a vonal méterei a vonat eleje előtt (alapból {ahead}); a jegyzet szabad útja
   --track ID         a vágány, amelyen a vonat eleje áll (kell, ahol egy vonalbeli helyzet több
                      vágányra esik)
-  --name TEXT        a jegyzet neve (alapból: a szolgálati hely, vagy a vágány és a helyzet)
+  --name SZÖVEG      a jegyzet neve (alapból: a szolgálati hely, vagy a vágány és a helyzet)
   --id ID            a jegyzet id-je (alapból: a névből képezve)
   --initials XX      monogram a jegyzet első változásbejegyzéséhez (alapból: railML)
   --no-hazards       a veszélyforrások elhagyása
-  --out FILE         a jegyzet FILE-ba írása
+  --out FÁJL         a jegyzet kiírása a FÁJL-ba
   --json             a jegyzet (taut/location@1) kiírása a szabványos kimenetre
 
 A railML 3 fájlokat felismeri és elutasítja. Az XML-entitásdeklarációkat elutasítja, sosem bontja ki.`,
+  langOption: "a szöveg nyelve: en angol, hu magyar, de német (alapból: az LC_ALL, az LC_MESSAGES vagy a LANG szerint); a JSON és a CSV minden nyelven ugyanaz",
+  metaFile: "FÁJL",
+  metaCase: "ESET",
+  metaDepartures: "INDULÁSOK",
+  metaLocation: "HELYSZÍN",
+  metaRecording: "FELVÉTEL",
+  metaText: "SZÖVEG",
+  metaPermille: "EZRELÉK",
+  metaNoteId: "JEGYZET",
 });

@@ -15,7 +15,7 @@ export const cliNotesHu = translation<typeof cliNotes.en>()({
   speedLimit: "; sebességkorlát {speed} km/h",
   hazards: "Veszélyforrások:",
   written: "Kiírva ide: {file}.",
-  howToKeep: "A --json kiírja a jegyzetet, a --out FILE fájlba menti.",
+  howToKeep: "A --json kiírja a jegyzetet, a --out FÁJL fájlba menti.",
   subcommandNeeded: "alparancs szükséges",
   subcommandUnknown: "ismeretlen alparancs: {name}",
   fileNeeded: "railML-fájl szükséges",
