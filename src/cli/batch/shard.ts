@@ -4,7 +4,7 @@
  * departure once, whatever N, so N jobs with K = 1…N split a network's day among machines with no
  * coordination between them; their CSV outputs are joined afterwards (README).
  */
-import { InputError } from "../errors.js";
+import { errorWords, InputError } from "../errors.js";
 
 export interface Shard {
   /** This job's share, 1…n. */
@@ -22,7 +22,7 @@ export function parseShard(text: string): Shard {
   const k = m ? Number(m[1]) : NaN;
   const n = m ? Number(m[2]) : NaN;
   if (!m || n < 1 || n > MAX_SHARDS || k < 1 || k > n) {
-    throw new InputError(`--shard must be K/N, whole numbers with 1 ≤ K ≤ N ≤ ${MAX_SHARDS}, e.g. 3/8 for the third of eight jobs (got "${text}")`);
+    throw new InputError(errorWords()("shardValue", { max: String(MAX_SHARDS), value: `"${text}"` }));
   }
   return { k, n };
 }

@@ -68,4 +68,5 @@ export const cliErrorsDe = translation<typeof cliErrors.en>()({
   bearingPlain: "Gleit",
   rowUnread: "{where}: nicht lesbar",
   rowInternal: "{where}: interner Fehler: {message}",
+  shardValue: "--shard: muss K/N sein, ganze Zahlen mit 1 ≤ K ≤ N ≤ {max}, z. B. 3/8 für den dritten von acht Jobs (erhalten: {value})",
 });

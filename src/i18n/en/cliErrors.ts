@@ -71,4 +71,5 @@ export const cliErrors = namespace("cliErrors", {
   // A row of \`taut check\` not answered: one that cannot be read, one the calculation failed on ({message}: the failure's own words).
   rowUnread: "{where}: cannot be read",
   rowInternal: "{where}: internal error: {message}",
+  shardValue: "--shard must be K/N, whole numbers with 1 ≤ K ≤ N ≤ {max}, e.g. 3/8 for the third of eight jobs (got {value})",
 });

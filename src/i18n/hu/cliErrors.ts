@@ -68,4 +68,5 @@ export const cliErrorsHu = translation<typeof cliErrors.en>()({
   bearingPlain: "sikló",
   rowUnread: "{where}: nem olvasható",
   rowInternal: "{where}: belső hiba: {message}",
+  shardValue: "--shard: K/N alakú kell legyen, egész számokkal, 1 ≤ K ≤ N ≤ {max}, pl. 3/8 a nyolc feladat közül a harmadiknak (kapott érték: {value})",
 });
