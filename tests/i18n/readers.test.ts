@@ -55,6 +55,7 @@ const READERS: ByCode<ReaderCoded> = {
   sandYesNo: { code: "sandYesNo", figures: { value: '"maybe"' } },
   caseOtherKind: { code: "caseOtherKind", figures: { kind: '"taut/location@1"' } },
   caseOutside: { code: "caseOutside", figures: { folder: "/srv/day" } },
+  caseNotPicked: { code: "caseNotPicked", figures: { file: "wet-0930.json", departures: "day-7.csv" } },
   importNoteInvalid: { code: "importNoteInvalid", figures: { number: 5, path: "segments[2].length_m", problem: "must be greater than 0" } },
   importIdTwice: { code: "importIdTwice", figures: { id: "east-loop" } },
   importFailed: { code: "importFailed", figures: { why: "QuotaExceededError" } },

@@ -9,5 +9,6 @@ import { noteChecksDe } from "./noteChecks.js";
 import { notesDe } from "./notes.js";
 import { compactDe } from "./compact.js";
 import { sketchDe } from "./sketch.js";
+import { departureErrorsDe } from "./departureErrors.js";
 
-export const deLater: Catalog = { departures: departuresDe, notes: notesDe, noteChecks: noteChecksDe, compact: compactDe, sketch: sketchDe };
+export const deLater: Catalog = { departures: departuresDe, notes: notesDe, noteChecks: noteChecksDe, compact: compactDe, sketch: sketchDe, departureErrors: departureErrorsDe };

@@ -39,6 +39,7 @@ export const readersDe = translation<typeof readers.en>()({
   sandYesNo: "muss ja oder nein sein (yes/no, true/false, 1/0) (angegeben: {value})",
   caseOtherKind: "das ist eine Datei der Art {kind}; ein Anfahrfall (taut/start-case@1) ist nötig",
   caseOutside: "liegt außerhalb des Ordners der Abfahrtsdatei ({folder}); Falldateien werden aus diesem Ordner und seinen Unterordnern gelesen (--allow-outside liest auch andere)",
+  caseNotPicked: "nicht unter den gewählten Dateien: {file} zusammen mit {departures} wählen",
   importNoteInvalid: "Notiz {number} ist ungültig ({path}: {problem}); es wurde nichts übernommen.",
   importIdTwice: 'Die Kennung "{id}" steht zweimal in der Datei; es wurde nichts übernommen.',
   importFailed: "{why}; es wurde nichts übernommen.",

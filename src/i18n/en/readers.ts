@@ -52,6 +52,7 @@ export const readers = namespace("readers", {
   sandYesNo: "must be yes or no (true/false, 1/0) (got {value})",
   caseOtherKind: "this is a {kind} file; a start case (taut/start-case@1) is needed",
   caseOutside: "is outside the folder of the departures file ({folder}); case files are read from that folder and the folders below it (--allow-outside reads others)",
+  caseNotPicked: "not among the picked files: pick {file} together with {departures}",
   // The device's notes library refusing an import or a review.
   importNoteInvalid: "Note {number} is not valid ({path}: {problem}); nothing was imported.",
   importIdTwice: 'The id "{id}" appears twice in the file; nothing was imported.',

@@ -9,5 +9,6 @@ import { noteChecksHu } from "./noteChecks.js";
 import { notesHu } from "./notes.js";
 import { compactHu } from "./compact.js";
 import { sketchHu } from "./sketch.js";
+import { departureErrorsHu } from "./departureErrors.js";
 
-export const huLater: Catalog = { departures: departuresHu, notes: notesHu, noteChecks: noteChecksHu, compact: compactHu, sketch: sketchHu };
+export const huLater: Catalog = { departures: departuresHu, notes: notesHu, noteChecks: noteChecksHu, compact: compactHu, sketch: sketchHu, departureErrors: departureErrorsHu };

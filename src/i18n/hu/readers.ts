@@ -39,6 +39,7 @@ export const readersHu = translation<typeof readers.en>()({
   sandYesNo: "igen vagy nem kell legyen (yes/no, true/false, 1/0) (megadva: {value})",
   caseOtherKind: "ez {kind} fájl; indítási eset (taut/start-case@1) kell",
   caseOutside: "kívül esik az indulásfájl mappáján ({folder}); az esetfájlok abból a mappából és az alatta levőkből olvashatók (--allow-outside a többit is olvassa)",
+  caseNotPicked: "nincs a kiválasztott fájlok között: a(z) {file} fájlt a(z) {departures} fájllal együtt válassza ki",
   importNoteInvalid: "A(z) {number}. jegyzet nem érvényes ({path}: {problem}); semmi sem került be.",
   importIdTwice: 'A(z) "{id}" azonosító kétszer szerepel a fájlban; semmi sem került be.',
   importFailed: "{why}; semmi sem került be.",

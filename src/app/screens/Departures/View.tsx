@@ -20,7 +20,7 @@ import { kept, rich } from "../shared/rich.js";
 import { divideLine, limitWord, optionHeadline } from "../shared/words.js";
 import type { RunState } from "./createDeparturesRun.js";
 import type { DepartureRow, DeparturesSummary } from "./rows.js";
-import { departureProblemText } from "../../../profiles/departures.js";
+import { rowErrorText } from "./rowErrors.js";
 
 const t = tr.ns(departures);
 const tc = tr.ns(compact);
@@ -204,7 +204,7 @@ export function DeparturesView(props: DeparturesViewProps): JSX.Element {
         <section class="bad-rows" aria-labelledby="bad-h" role="alert">
           <h2 id="bad-h">{t("badHeading", { count: props.bad.length })}</h2>
           <ul>
-            <For each={props.bad}>{(x) => <li>{x.problem ? departureProblemText(tr, x.problem) : x.error}</li>}</For>
+            <For each={props.bad}>{(x) => <li>{rowErrorText(tr, x)}</li>}</For>
           </ul>
           <p>{t("badRest")}</p>
         </section>

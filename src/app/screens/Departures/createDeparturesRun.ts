@@ -7,8 +7,7 @@ import { batch, createSignal, type Accessor } from "solid-js";
 import type { Departure } from "../../../profiles/departures.js";
 import type { CheckOutcome, PlannerCalls } from "../../../worker/client.js";
 import type { DepartureRow } from "./rows.js";
-import { readerMessage } from "../../../i18n/renderReaders.js";
-import { tr } from "../../i18n.js";
+import { rowErrorEnglish, type RowFailure } from "./rowErrors.js";
 
 export type RunState = "empty" | "running" | "done" | "cancelled";
 
@@ -116,14 +115,16 @@ export function createDeparturesRun(deps: { workers: Pick<PlannerCalls, "check">
           if (!live()) return;
           if (o.ok) settle({ answer: o.result });
           else {
-            const issues = o.issues.length > 0 ? ` (${o.issues.map((i) => `${i.path}: ${i.reader ? readerMessage(tr, i.reader) : i.message}`).join("; ")})` : "";
-            settle({ error: `${d.where}: ${o.kind === "invalid" ? "cannot be checked" : "internal error"}: ${o.message}${issues}`, errorKind: o.kind === "invalid" ? "input" : "internal" });
+            // The English for the export; the codes for the screen, which writes them in its language.
+            const failure: RowFailure = { kind: o.kind, detail: o.message, issues: o.issues };
+            settle({ error: rowErrorEnglish(d.where, failure, o.message), failure, errorKind: o.kind === "invalid" ? "input" : "internal" });
           }
         },
         (e: unknown) => {
           // Cancelled: the row stays unanswered. Anything else is reported on the row.
           if (!live()) return;
-          settle({ error: `${d.where}: internal error: ${e instanceof Error ? e.message : String(e)}`, errorKind: "internal" });
+          const detail = e instanceof Error ? e.message : String(e);
+          settle({ error: `${d.where}: internal error: ${detail}`, failure: { kind: "internal", detail, issues: [] }, errorKind: "internal" });
         },
       );
     });

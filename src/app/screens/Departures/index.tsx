@@ -11,25 +11,30 @@ import { declarePrintStatus } from "../../state/printStatus.js";
 import { download } from "../../download.js";
 import "../shared/dispatch.css";
 import { departuresRunFor } from "./createDeparturesRun.js";
-import { pickedFiles, readPickedDepartures, type PickedFile } from "./readFiles.js";
+import { pickedFiles, pickedProblemText, readPickedDepartures, type PickedFile } from "./readFiles.js";
 import { parseStartCaseFile } from "../../../profiles/parse.js";
 import { byRisk, departuresCsv, summarise, type DepartureRow } from "./rows.js";
 import { DeparturesView, type DeparturesFilter, type DeparturesSort, type LoadedFile } from "./View.js";
 import { departures } from "../../../i18n/en/departures.js";
 import { tr } from "../../i18n.js";
 import { laterWords } from "../../laterWords.js";
+import { fieldWords, localiseIssue } from "../../fieldWords.js";
 
-// This screen's words in the language on screen (a chunk of their own) come before it shows.
-await laterWords;
+// This screen's words in the language on screen (a chunk of their own) come before it shows, and the
+// field messages of a refused file or row.
+await Promise.all([laterWords, fieldWords]);
 
 const t = tr.ns(departures);
+
+/** A problem shown: written when it is drawn, in the language on screen then (a switch redraws it). */
+type Problem = () => string;
 
 /** The file and problem shown, kept with the run (per set of workers) while the app is open. */
 const screens = new WeakMap<
   object,
   {
     loaded: Signal<{ file: LoadedFile; picked: PickedFile[] } | null>;
-    problem: Signal<string | null>;
+    problem: Signal<Problem | null>;
     filter: Signal<DeparturesFilter>;
     sort: Signal<DeparturesSort>;
   }
@@ -39,7 +44,7 @@ function screenState(workers: object) {
   if (!s) {
     s = {
       loaded: createSignal<{ file: LoadedFile; picked: PickedFile[] } | null>(null),
-      problem: createSignal<string | null>(null),
+      problem: createSignal<Problem | null>(null),
       filter: createSignal<DeparturesFilter>("all"),
       sort: createSignal<DeparturesSort>("risk"),
     };
@@ -77,14 +82,16 @@ export default function Departures(): JSX.Element {
       const lib = await libraryForFiles(app.locations.library());
       const r = readPickedDepartures(picked, lib);
       if (!r.ok) {
-        setProblem(r.message);
+        const p = r.problem;
+        setProblem(() => () => pickedProblemText(tr, p, (i) => localiseIssue(i, app.settings.settings().units).message));
         return;
       }
       setProblem(null);
       setLoaded({ file: { name: r.file, kind: r.kind, missing: r.missing, unused: r.unused }, picked });
       run.start(r.departures);
     } catch (e) {
-      setProblem(t("unreadable", { error: (e as Error).message || String(e) }));
+      const error = (e as Error).message || String(e);
+      setProblem(() => () => t("unreadable", { error }));
     } finally {
       setReading(false);
     }
@@ -93,7 +100,7 @@ export default function Departures(): JSX.Element {
   return (
     <DeparturesView
       file={loaded()?.file ?? null}
-      problem={problem()}
+      problem={problem()?.() ?? null}
       reading={reading()}
       state={run.state()}
       rows={shown(rows(), filter(), sort())}
@@ -104,7 +111,8 @@ export default function Departures(): JSX.Element {
       onOpen={(row, where) => {
         const f = parseStartCaseFile(row.file);
         if (!f.ok) {
-          setProblem(t("cannotOpen", { id: row.id, issues: f.issues.map((i) => `${i.path}: ${i.message}`).join("; ") }));
+          const issues = f.issues;
+          setProblem(() => () => t("cannotOpen", { id: row.id, issues: issues.map((i) => `${i.path}: ${localiseIssue(i, app.settings.settings().units).message}`).join("; ") }));
           return;
         }
         // The departure becomes the case being edited: Start plan plans it, Assistance check checks it.

@@ -9,6 +9,7 @@ import { r } from "../../../profiles/report.js";
 import type { CheckAnswer } from "../../../worker/protocol.js";
 import { optionLineText } from "../shared/words.js";
 import type { DepartureProblem } from "../../../profiles/departures.js";
+import type { RowFailure } from "./rowErrors.js";
 
 export interface DepartureRow {
   id: string;
@@ -29,6 +30,8 @@ export interface DepartureRow {
   error?: string;
   /** A row the file's reader refused, as codes: shown in the language on screen (the error stays English for the export). */
   problem?: DepartureProblem;
+  /** A row the planner did not answer, as codes: shown in the language on screen (the error stays English). */
+  failure?: RowFailure;
   errorKind?: "input" | "internal";
 }
 
