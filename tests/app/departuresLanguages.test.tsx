@@ -85,7 +85,7 @@ describe("the Departures screen's own errors in Hungarian and German", () => {
       await waitFor(() => expect(document.querySelector(".bad-rows h2")?.textContent).toBe(d("badHeading", { count: 3 })));
       const items = [...document.querySelectorAll(".bad-rows li")].map((li) => li.textContent!);
       expect(items).toHaveLength(3);
-      const [heavy, fault, stop] = ["[0]", "[1]", "[2]"].map((w) => items.find((t) => t.startsWith(`${w}: `))!);
+      const [heavy, fault, stop] = ["[0]", "[1]", "[2]"].map((w) => items.find((t) => t.startsWith(`${w}: `)) ?? "") as [string, string, string];
       // The work cap's figures as in English (1.3 × 10^12, 61 vehicles, 4.2 ns, 1 g, 5.0 × 10^8), with the language's decimal sign.
       expect(heavy).toContain(`${oneDecimal(locale, 1.3)} × 10^12`);
       expect(heavy).toContain(`${oneDecimal(locale, 4.2)} ns`);
