@@ -126,10 +126,21 @@ describe("taut notes in Hungarian and German", () => {
     expect(figures(de.stderr)).toEqual(figures(en.stderr));
     expect(hu.stdout).toContain(cliNotesHu.straight as string);
     expect(de.stdout).toContain(`${cliNotesDe.hazards === "" ? "" : "Zugspitze bei 1000,0 m; 1000,0 m voraus; zulässige Geschwindigkeit 40 km/h."}`);
+    // The note itself: the same codes and figures in every language; the words it holds for the driver to
+    // read (where the front stands, the direction, the revision entry) in the run's language.
     const json = await Promise.all([taut(...args, "--json"), taut(...args, "--json", "--lang", "hu"), taut(...args, "--json", "--lang", "de")]);
     expect(json[0].code).toBe(0);
-    expect(json[1].stdout).toBe(json[0].stdout);
-    expect(json[2].stdout).toBe(json[0].stdout);
+    const said = ["direction", "standing", "revisions"] as const;
+    const notes = json.map((j) => JSON.parse(j.stdout) as Record<string, unknown>);
+    const rest = notes.map((n) => Object.fromEntries(Object.entries(n).filter(([k]) => !(said as readonly string[]).includes(k))));
+    expect(rest[1]).toEqual(rest[0]);
+    expect(rest[2]).toEqual(rest[0]);
+    const words = (n: Record<string, unknown>) => JSON.stringify(said.map((k) => n[k]));
+    expect(words(notes[0]!)).toContain("Front at operational point");
+    expect(englishIn(words(notes[1]!)), words(notes[1]!)).toEqual([]);
+    expect(englishIn(words(notes[2]!)), words(notes[2]!)).toEqual([]);
+    expect(figures(words(notes[1]!))).toEqual(figures(words(notes[0]!)));
+    expect(figures(words(notes[2]!))).toEqual(figures(words(notes[0]!)));
   });
 
   it("the English stretch words from the catalog are the railML reader's own, byte for byte", async () => {

@@ -8,14 +8,15 @@ import { createReadStream, writeFileSync } from "node:fs";
 import { openRegularFile, pathText } from "../files.js";
 import { basename } from "node:path";
 import { builtinTrains } from "../../profiles/builtin.js";
-import { createRailmlReader, noteIdFrom, RailmlError, railmlNote, railmlStretch, type FrontPlace, type RailmlModel } from "../../profiles/railml/index.js";
+import { createRailmlReader, noteIdFrom, RailmlError, railmlDirection, railmlNote, railmlStretch, type FrontPlace, type RailmlModel } from "../../profiles/railml/index.js";
 import type { Command } from "../command.js";
 import { errorWords, InputError, usageLine } from "../errors.js";
 import { asGiven, num, textTable } from "../table.js";
 import { cliNotes } from "../../i18n/en/cliNotes.js";
 import { cliTr } from "../lang.js";
+import type { Translator } from "../../i18n/translator.js";
 import type { Stretch } from "../../profiles/railml/index.js";
-import { railmlWords } from "../../profiles/railml/text.js";
+import { given, railmlWords, say } from "../../profiles/railml/text.js";
 
 /** The words of `taut notes` in this run's language. */
 const words = () => cliTr().ns(cliNotes);
@@ -68,6 +69,8 @@ export const notesCommand: Command = {
   async run({ values, positionals }, io) {
     const [sub, file, ...extra] = positionals;
     const t = words();
+    // This run's language, taken before the file is read (runs in one process may overlap, as in the tests).
+    const tl = cliTr();
     if (sub !== "from-railml") throw new InputError(`${sub === undefined ? t("subcommandNeeded") : t("subcommandUnknown", { name: `"${sub}"` })}: taut notes from-railml …\n  ${usageLine(USAGE)}`);
     if (!file) throw new InputError(`${t("fileNeeded")}\n  ${usageLine(USAGE)}`);
     if (extra.length > 0) throw new InputError(t("oneFile", { count: String(extra.length + 1) }));
@@ -82,19 +85,19 @@ export const notesCommand: Command = {
 
     const model = await readRailmlFile(file);
     const r = railmlStretch(model, { front, direction, behindM, aheadM });
-    if (!r.ok) throw new InputError(`${file}: ${r.text ? railmlWords(cliTr(), r.text) : r.message}`);
+    if (!r.ok) throw new InputError(`${file}: ${r.text ? railmlWords(tl, r.text) : r.message}`);
     const s = r.value;
-    const name = (values.name as string | undefined) ?? defaultName(front, s.tracks[0]?.id);
+    const name = (values.name as string | undefined) ?? defaultName(front, s.tracks[0]?.id, tl);
     const n = railmlNote(s, {
       id: (values.id as string | undefined) ?? noteIdFrom(name),
       name,
-      direction: `${direction} (railML dir="${direction}" on the front's track)`,
+      direction: railmlDirection(direction, tl),
       date: today(),
       initials: (values.initials as string | undefined) ?? "railML",
       source: basename(file),
       hazards: values["no-hazards"] !== true,
       ...(builtinTrains[0] ? { referenceTrain: { train: builtinTrains[0].id } } : {}),
-    });
+    }, tl);
     if (!n.ok) throw new InputError(t("notValidNote", { file }), n.issues);
     const text = `${JSON.stringify(n.value, null, 2)}\n`;
     if (values.out) {
@@ -104,7 +107,7 @@ export const notesCommand: Command = {
         throw new InputError(t("cannotWrite", { file: values.out as string, code: (e as NodeJS.ErrnoException).code ?? (e as Error).message }));
       }
     }
-    for (const w of [...model.warningTexts, ...s.noteTexts]) io.err(`taut notes: ${railmlWords(cliTr(), w)}`);
+    for (const w of [...model.warningTexts, ...s.noteTexts]) io.err(`taut notes: ${railmlWords(tl, w)}`);
     if (values.json) {
       io.out(text);
       return 0;
@@ -160,10 +163,10 @@ export function stretchText(s: Stretch): string {
   });
 }
 
-function defaultName(front: FrontPlace, track: string | undefined): string {
+function defaultName(front: FrontPlace, track: string | undefined, tl: Translator): string {
   if (front.kind === "ocp") return front.ocp.trim().slice(0, 120);
-  if (front.kind === "pos") return `Track ${front.track} at ${front.pos} m (railML)`.slice(0, 120);
-  return `Line position ${front.absPos} m${track ? ` on track ${track}` : ""} (railML)`.slice(0, 120);
+  if (front.kind === "pos") return railmlWords(tl, say("nameTrack", { track: front.track, pos: given(front.pos) })).slice(0, 120);
+  return railmlWords(tl, say("nameLine", { absPos: given(front.absPos), onTrack: track ? say("nameOnTrack", { track }) : "" })).slice(0, 120);
 }
 
 function today(now = new Date()): string {
@@ -172,7 +175,7 @@ function today(now = new Date()): string {
 }
 
 /** Read a railML file as a stream of text into the reader. */
-export async function readRailmlFile(path: string): Promise<RailmlModel> {
+export async function readRailmlFile(path: string, tl: Translator = cliTr()): Promise<RailmlModel> {
   // A regular file only, checked on the open handle (a named pipe would be waited on for ever).
   const opened = openRegularFile(path);
   if (!opened.ok) throw new InputError(`${pathText(path)}: ${opened.why}`);
@@ -181,7 +184,7 @@ export async function readRailmlFile(path: string): Promise<RailmlModel> {
     for await (const chunk of createReadStream(path, { fd: opened.fd, encoding: "utf8", highWaterMark: 1 << 20 })) reader.write(chunk as string);
     return reader.close();
   } catch (e) {
-    if (e instanceof RailmlError) throw new InputError(`${pathText(path)}: ${railmlWords(cliTr(), e.text)}`);
+    if (e instanceof RailmlError) throw new InputError(`${pathText(path)}: ${railmlWords(tl, e.text)}`);
     const code = (e as NodeJS.ErrnoException).code;
     if (code) throw new InputError(`${pathText(path)}: ${errorWords()("cannotRead", { code })}`);
     throw e;

@@ -97,6 +97,8 @@ export interface RailmlSummary {
   gradientChanges: number;
   radiusChanges: number;
   warnings: string[];
+  /** The same as data, for words in another language (railml/text.ts). */
+  warningTexts: RailmlText[];
 }
 
 export function summarise(m: RailmlModel): RailmlSummary {
@@ -119,5 +121,6 @@ export function summarise(m: RailmlModel): RailmlSummary {
     gradientChanges: m.tracks.reduce((n, t) => n + t.gradients.length, 0),
     radiusChanges: m.tracks.reduce((n, t) => n + t.radii.length, 0),
     warnings: m.warnings,
+    warningTexts: m.warningTexts,
   };
 }

@@ -18,7 +18,7 @@
  * - A curve's side does not change its resistance, so a radius's sign is dropped; 0 is straight.
  */
 import type { SegmentFile } from "../schemas.js";
-import { given, railmlEnglish, say, type RailmlText } from "./text.js";
+import { given, railmlEnglish, say, type RailmlCode, type RailmlText } from "./text.js";
 import type { PlacedThing, PlacedValue, RailmlModel, RailmlThingKind, RailmlTrack } from "./model.js";
 
 export type TravelDirection = "up" | "down";
@@ -46,7 +46,10 @@ export interface StretchHazard {
   kind: "signal" | "points" | "level-crossing" | "tunnel" | "bridge" | "platform";
   /** Chainage in the note, m. */
   at_m: number;
+  /** The hazard's note in English ("From railML: signal "S4" (T1, s4)."). */
   note: string;
+  /** The same as data, for the note in another language (railml/text.ts). */
+  text: RailmlText;
 }
 
 export interface Stretch {
@@ -371,13 +374,13 @@ function toSegments(grad: Array<{ from: number; to: number; value: number }>, ra
   return segs;
 }
 
-const HAZARD_WORD: Record<RailmlThingKind, string> = {
-  signal: "signal",
-  points: "points",
-  "level-crossing": "level crossing",
-  tunnel: "tunnel",
-  bridge: "bridge",
-  platform: "platform edge",
+const HAZARD_WORD: Record<RailmlThingKind, RailmlCode> = {
+  signal: "thingSignal",
+  points: "thingPoints",
+  "level-crossing": "thingLevelCrossing",
+  tunnel: "thingTunnel",
+  bridge: "thingBridge",
+  platform: "thingPlatform",
 };
 
 /** Things on the walk that a note may list as hazards, at their chainage (signals only facing the way of travel). */
@@ -392,9 +395,13 @@ function hazardsAlong(pieces: readonly Piece[], startAt: number): StretchHazard[
       if (th.pos < a - EPS || th.pos > b + EPS) continue;
       if (th.kind === "signal" && th.dir !== "both" && th.dir !== facing) continue;
       const at = round3(startAt + offset + Math.abs(th.pos - p.fromPos));
-      const name = th.name ? ` "${th.name}"` : "";
-      const length = th.length !== undefined ? `, ${round3(th.length)} m long` : "";
-      out.push({ kind: th.kind, at_m: at, note: `From railML: ${HAZARD_WORD[th.kind]}${name}${length} (${p.track.id}${th.id ? `, ${th.id}` : ""}).` });
+      const text = say("hazardNote", {
+        what: say(HAZARD_WORD[th.kind]),
+        name: th.name ? say("hazardName", { name: th.name }) : "",
+        length: th.length !== undefined ? say("hazardLength", { length: given(round3(th.length)) }) : "",
+        ids: `${p.track.id}${th.id ? `, ${th.id}` : ""}`,
+      });
+      out.push({ kind: th.kind, at_m: at, note: railmlEnglish(text), text });
     }
     offset += b - a;
   }

@@ -33,9 +33,10 @@ export function railmlWords(tr: Translator, t: RailmlText): string {
   return (tr.ns(railmlText) as (key: string, p: Record<string, string>) => string)(t.code, params);
 }
 
-const ENGLISH = createTranslator("en", null);
+/** English, the reader's own language. */
+export const railmlEnglishTranslator: Translator = createTranslator("en", null);
 
 /** A text in English (the reader's own sentences). */
 export function railmlEnglish(t: RailmlText): string {
-  return railmlWords(ENGLISH, t);
+  return railmlWords(railmlEnglishTranslator, t);
 }

@@ -27,7 +27,7 @@ import { SaveConflictDialog } from "./SaveConflictDialog.js";
 import { noteLoadTableOn } from "./loadTableRunner.js";
 import { installNotesLocationSource } from "./source.js";
 import { cardLoadTable, View, type Mode } from "./View.js";
-import { railmlNote } from "../../../profiles/railml/note.js";
+import { railmlDirection, railmlHazards, railmlNote, railmlStanding } from "../../../profiles/railml/note.js";
 import type { Stretch } from "../../../profiles/railml/stretch.js";
 import { createRailmlImporter } from "./railml/client.js";
 import { createRailmlImport } from "./railml/createRailmlImport.js";
@@ -35,10 +35,11 @@ import { notes } from "../../../i18n/en/notes.js";
 import { tr } from "../../i18n.js";
 import { laterWords } from "../../laterWords.js";
 import { fieldWords } from "../../fieldWords.js";
+import { railmlTextWords } from "./railml/words.js";
 
 // This screen's words in the language on screen (a chunk of their own) come before it shows, and the
 // field words its editor's last check (the schema) speaks in.
-await Promise.all([laterWords, fieldWords]);
+await Promise.all([laterWords, fieldWords, railmlTextWords]);
 
 const nt = tr.ns(notes);
 
@@ -201,20 +202,21 @@ export function LocationNotesScreen(): JSX.Element {
   // Import from railML: the file is read and the stretch made in a worker; saving goes through the
   // notes store like any note (the schema checks it), or the editor opens with it first.
   const railml = createRailmlImport({ importer: () => createRailmlImporter() });
-  const railmlDirection = () => `${railml.choice.direction} (railML dir="${railml.choice.direction}" on the front's track)`;
+  // The words the import writes into the note are in the language on screen: the trainer reads the note in it.
+  const railmlWay = () => railmlDirection(railml.choice.direction, tr);
   const saveRailml = (s: Stretch) =>
     void task(async () => {
       const name = railml.choice.name.trim();
       const n = railmlNote(s, {
         id: idFromName(name, takenIds()),
         name,
-        direction: railmlDirection(),
+        direction: railmlWay(),
         date: today(),
         initials: initials().trim().slice(0, 8) || "railML",
         source: railml.fileName(),
         hazards: true,
         ...(builtinTrains[0] ? { referenceTrain: { train: builtinTrains[0].id } } : {}),
-      });
+      }, tr);
       if (!n.ok) {
         lib.setNotice({ kind: "problem", text: nt("nfStretchInvalid"), details: n.issues.map((i) => `${i.path}: ${i.message}`) });
         return;
@@ -236,13 +238,13 @@ export function LocationNotesScreen(): JSX.Element {
     setBase("new");
     editor.set({
       name: railml.choice.name.trim(),
-      direction: railmlDirection(),
-      standing: nt("nfFrontAt", { place: s.frontWords }).slice(0, 400),
+      direction: railmlWay(),
+      standing: railmlStanding(s, tr),
       segments: s.segments.map((g) => ({ ...g })),
       frontAt_m: s.frontAt_m,
       clearAhead_m: s.aheadM,
       speedLimit_kmh: s.speedLimit_kmh ?? Number.NaN,
-      hazards: s.hazards.map((h) => ({ kind: h.kind, at_m: h.at_m, note: h.note.slice(0, 400) })),
+      hazards: railmlHazards(s, tr),
     });
     editor.set("revision", "change", nt("nfImportedRailml", { file: railml.fileName() }).slice(0, 400));
     setMode("edit");

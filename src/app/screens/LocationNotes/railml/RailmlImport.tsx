@@ -19,6 +19,7 @@ import type { FrontKind, RailmlImport } from "./createRailmlImport.js";
 import { hazardWord } from "../draft.js";
 import { notes } from "../../../../i18n/en/notes.js";
 import { tr } from "../../../i18n.js";
+import { railmlWords } from "../../../../profiles/railml/text.js";
 
 const t = tr.ns(notes);
 
@@ -100,7 +101,7 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
         </Match>
         <Match when={imp().phase() === "failed"}>
           <p class="notes-issue-box" role="alert">
-            {imp().fileName()}: {imp().problem()}
+            {imp().fileName()}: {imp().problem()?.()}
           </p>
         </Match>
         <Match when={imp().phase() === "ready" && imp().summary()}>
@@ -110,9 +111,9 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
                 {t("rmSummary", { file: imp().fileName(), version: sum().version || "2", tracks: formatNumber(sum().tracks, 0), gradients: formatNumber(sum().gradientChanges, 0), radii: formatNumber(sum().radiusChanges, 0) })}
                 {sum().absPosRange ? t("rmLinePositions", { min: dist(sum().absPosRange!.min), max: dist(sum().absPosRange!.max) }) : ""}.
               </p>
-              <Show when={sum().warnings.length > 0}>
+              <Show when={sum().warningTexts.length > 0}>
                 <ul class="notes-small">
-                  <For each={sum().warnings}>{(w) => <li>{w}</li>}</For>
+                  <For each={sum().warningTexts}>{(w) => <li>{railmlWords(tr, w)}</li>}</For>
                 </ul>
               </Show>
 
@@ -162,20 +163,20 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
 
               <Show when={imp().result()} fallback={<p class="notes-hint">{t("rmMaking")}</p>}>
                 {(r) => (
-                  <Show when={stretch()} fallback={<p class="notes-issue-box" role="alert">{r().ok ? "" : (r() as { message: string }).message}</p>}>
+                  <Show when={stretch()} fallback={<p class="notes-issue-box" role="alert">{(() => { const x = r(); return x.ok ? "" : x.words(); })()}</p>}>
                     {(s) => (
                       <div class="notes-railml-preview" aria-label={t("rmPreviewLabel")}>
                         <p class="notes-small">
-                          {t("rmStretch", { behind: dist(s().behindM), ahead: dist(s().aheadM), front: s().frontWords, count: s().segments.length })}
+                          {t("rmStretch", { behind: dist(s().behindM), ahead: dist(s().aheadM), front: railmlWords(tr, s().frontText), count: s().segments.length })}
                           {s().speedLimit_kmh !== undefined ? t("rmSpeedLimit", { speed: show("speed", s().speedLimit_kmh! / 3.6, u(), 0) }) : ""}.
                         </p>
                         <Show when={placed()?.model}>{(m) => <ProfileSketch model={m()} units={u()} />}</Show>
                         <Show when={placed()?.issue}>
                           <p class="notes-issue-box">{placed()!.issue}</p>
                         </Show>
-                        <Show when={s().notes.length > 0}>
+                        <Show when={s().noteTexts.length > 0}>
                           <ul class="notes-small">
-                            <For each={s().notes}>{(n) => <li>{n}</li>}</For>
+                            <For each={s().noteTexts}>{(n) => <li>{railmlWords(tr, n)}</li>}</For>
                           </ul>
                         </Show>
                         <table class="notes-railml-segs">

@@ -1,8 +1,10 @@
 /**
  * The page's side of the railML import worker: one request at a time, a promise per request, progress
- * while a file is read, and cancel (which ends the worker; the next request starts a fresh one).
+ * while a file is read, and cancel (which ends the worker; the next request starts a fresh one). A failure
+ * is an Error with its English message and, as `text`, the same as data (profiles/railml/text.ts).
  */
 import type { RailmlSummary, StretchRequest, StretchResult } from "../../../../profiles/railml/index.js";
+import { railmlEnglish, say } from "../../../../profiles/railml/text.js";
 import type { RailmlReply, RailmlRequest } from "./protocol.js";
 
 export interface RailmlWorkerLike {
@@ -46,14 +48,15 @@ export function createRailmlImporter(createWorker: () => RailmlWorkerLike = defa
       if (!p) return;
       if (r.type === "progress") return p.progress?.(r.fraction);
       pending.delete(r.id);
-      if (r.type === "error") p.reject(new Error(r.message));
+      if (r.type === "error") p.reject(Object.assign(new Error(r.message), { text: r.text }));
       else p.resolve(r);
     };
     w.onerror = (ev) => {
       ev.preventDefault?.();
       worker?.terminate();
       worker = undefined;
-      fail(new Error(`The import stopped: ${ev.message || "the worker failed"}.`));
+      const text = say("importStopped", { reason: ev.message ? ev.message : say("workerFailed") });
+      fail(Object.assign(new Error(railmlEnglish(text)), { text }));
     };
     worker = w;
     return w;

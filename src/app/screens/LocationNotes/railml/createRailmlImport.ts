@@ -2,15 +2,33 @@
  * The railML import's state: the file being read in the worker (with progress and cancel), what it holds,
  * the trainer's choice of stretch (where the front stands, which way the train goes, how far behind and
  * ahead), and the stretch the worker makes of it, asked again shortly after each change of the choice.
+ * What it has to say (a problem, why no stretch can be made) is kept as words to be drawn (`Words`), so the
+ * screen writes them in the language on screen and again when the language changes.
  */
 import { createEffect, createSignal, on, onCleanup, type Accessor } from "solid-js";
 import { createStore, unwrap, type SetStoreFunction } from "solid-js/store";
-import type { FrontPlace, RailmlSummary, StretchRequest, StretchResult, TravelDirection } from "../../../../profiles/railml/index.js";
+import type { FrontPlace, RailmlSummary, Stretch, StretchRequest, TravelDirection } from "../../../../profiles/railml/index.js";
+import { railmlWords, type RailmlText } from "../../../../profiles/railml/text.js";
 import type { RailmlImporter } from "./client.js";
 import { notes } from "../../../../i18n/en/notes.js";
 import { tr } from "../../../i18n.js";
 
 const t = tr.ns(notes);
+
+/** Words drawn in the language on screen at the time they are drawn (a reactive read of the language). */
+export type Words = () => string;
+
+/** A text of the railML reader, the stretch or the worker, in the language on screen. */
+export const railmlSaid = (text: RailmlText): Words => () => railmlWords(tr, text);
+
+/** An error's words: its railML text where it carries one (from the worker), else its message as it is. */
+export function errorWords(e: Error): Words {
+  const text = (e as Error & { text?: RailmlText }).text;
+  return text ? railmlSaid(text) : () => e.message;
+}
+
+/** The stretch for the choice, or why there is none, in words. */
+export type ImportResult = { ok: true; value: Stretch } | { ok: false; words: Words };
 
 export type FrontKind = "absPos" | "ocp" | "pos";
 
@@ -38,11 +56,11 @@ export interface RailmlImport {
   progress: Accessor<number>;
   fileName: Accessor<string>;
   summary: Accessor<RailmlSummary | undefined>;
-  problem: Accessor<string | null>;
+  problem: Accessor<Words | null>;
   choice: RailmlChoice;
   setChoice: SetStoreFunction<RailmlChoice>;
   /** The stretch for the current choice (undefined while it is being made). */
-  result: Accessor<StretchResult | undefined>;
+  result: Accessor<ImportResult | undefined>;
   pick(file: File): void;
   cancel(): void;
 }
@@ -51,23 +69,26 @@ export interface RailmlImport {
 export const RAILML_DEFAULT_BEHIND_M = 1500;
 export const RAILML_DEFAULT_AHEAD_M = 1000;
 
-/** The request for a choice, or why it cannot be made yet. */
-export function requestOf(c: RailmlChoice): StretchRequest | string {
+/** The notes messages that say what a choice still lacks (none takes a value). */
+type NotesKey = "rmChooseOcp" | "rmEnterTrack" | "rmEnterPos" | "rmEnterAbsPos" | "rmBehindMore" | "rmAheadMore";
+
+/** The request for a choice, or why it cannot be made yet (a message of the notes namespace). */
+export function requestOf(c: RailmlChoice): StretchRequest | { missing: NotesKey } {
   let front: FrontPlace;
   const track = c.track.trim();
   if (c.kind === "ocp") {
-    if (!c.ocp) return t("rmChooseOcp");
+    if (!c.ocp) return { missing: "rmChooseOcp" };
     front = track ? { kind: "ocp", ocp: c.ocp, track } : { kind: "ocp", ocp: c.ocp };
   } else if (c.kind === "pos") {
-    if (!track) return t("rmEnterTrack");
-    if (!Number.isFinite(c.pos)) return t("rmEnterPos");
+    if (!track) return { missing: "rmEnterTrack" };
+    if (!Number.isFinite(c.pos)) return { missing: "rmEnterPos" };
     front = { kind: "pos", track, pos: c.pos };
   } else {
-    if (!Number.isFinite(c.absPos)) return t("rmEnterAbsPos");
+    if (!Number.isFinite(c.absPos)) return { missing: "rmEnterAbsPos" };
     front = track ? { kind: "absPos", absPos: c.absPos, track } : { kind: "absPos", absPos: c.absPos };
   }
-  if (!(c.behindM > 0)) return t("rmBehindMore");
-  if (!(c.aheadM >= 0)) return t("rmAheadMore");
+  if (!(c.behindM > 0)) return { missing: "rmBehindMore" };
+  if (!(c.aheadM >= 0)) return { missing: "rmAheadMore" };
   return { front, direction: c.direction, behindM: c.behindM, aheadM: c.aheadM };
 }
 
@@ -76,8 +97,8 @@ export function createRailmlImport(deps: { importer: () => RailmlImporter; delay
   const [progress, setProgress] = createSignal(0);
   const [fileName, setFileName] = createSignal("");
   const [summary, setSummary] = createSignal<RailmlSummary | undefined>();
-  const [problem, setProblem] = createSignal<string | null>(null);
-  const [result, setResult] = createSignal<StretchResult | undefined>();
+  const [problem, setProblem] = createSignal<Words | null>(null);
+  const [result, setResult] = createSignal<ImportResult | undefined>();
   const [choice, setChoice] = createStore<RailmlChoice>({
     kind: "absPos",
     absPos: Number.NaN,
@@ -119,7 +140,8 @@ export function createRailmlImport(deps: { importer: () => RailmlImporter; delay
         },
         (e: Error) => {
           if (n !== reading) return;
-          setProblem(e.name === "AbortError" ? t("rmCancelled") : t("rmNothingSaved", { problem: e.message }));
+          const said = errorWords(e);
+          setProblem(() => (e.name === "AbortError" ? () => t("rmCancelled") : () => t("rmNothingSaved", { problem: said() })));
           setPhase("failed");
         },
       );
@@ -134,8 +156,9 @@ export function createRailmlImport(deps: { importer: () => RailmlImporter; delay
       setResult(undefined);
       if (p !== "ready") return;
       const req = requestOf(unwrap(choice));
-      if (typeof req === "string") {
-        setResult({ ok: false, message: req });
+      if ("missing" in req) {
+        const key = req.missing;
+        setResult({ ok: false, words: () => t(key) });
         return;
       }
       const n = ++asked;
@@ -143,8 +166,8 @@ export function createRailmlImport(deps: { importer: () => RailmlImporter; delay
         worker()
           .stretch(req)
           .then(
-            (r) => n === asked && setResult(r),
-            (e: Error) => n === asked && setResult({ ok: false, message: e.message }),
+            (r) => n === asked && setResult(r.ok ? r : { ok: false, words: r.text ? railmlSaid(r.text) : () => r.message }),
+            (e: Error) => n === asked && setResult({ ok: false, words: errorWords(e) }),
           );
       }, deps.delayMs ?? 250);
     }),
@@ -167,7 +190,7 @@ export function createRailmlImport(deps: { importer: () => RailmlImporter; delay
     cancel: () => {
       reading++;
       importer?.cancel();
-      setProblem(t("rmCancelled"));
+      setProblem(() => () => t("rmCancelled"));
       setPhase("failed");
     },
   };

@@ -6,6 +6,7 @@
 import { summarise, type RailmlModel } from "../../../../profiles/railml/model.js";
 import { createRailmlReader, RailmlError } from "../../../../profiles/railml/reader.js";
 import { railmlStretch } from "../../../../profiles/railml/stretch.js";
+import { railmlEnglish, say, type RailmlText } from "../../../../profiles/railml/text.js";
 import type { RailmlReply, RailmlRequest } from "./protocol.js";
 
 /** Bytes read at a time. */
@@ -29,12 +30,14 @@ export function createRailmlHandler(post: (r: RailmlReply) => void): (msg: Railm
         model = reader.close();
         post({ type: "read", id: msg.id, summary: summarise(model) });
       } catch (e) {
-        post({ type: "error", id: msg.id, message: e instanceof RailmlError ? e.message : `The file could not be read: ${(e as Error).message || String(e)}` });
+        const text = e instanceof RailmlError ? e.text : say("couldNotRead", { detail: (e as Error).message || String(e) });
+        post({ type: "error", id: msg.id, message: railmlEnglish(text), text });
       }
       return;
     }
     if (!model) {
-      post({ type: "error", id: msg.id, message: "No railML file has been read yet." });
+      const text: RailmlText = say("nothingRead");
+      post({ type: "error", id: msg.id, message: railmlEnglish(text), text });
       return;
     }
     post({ type: "stretch", id: msg.id, result: railmlStretch(model, msg.request) });
