@@ -1,13 +1,15 @@
 /**
  * Every screen in Hungarian, German and pseudo-localised English (every message 40 % longer, accented)
- * at 800×1280 and 1280×800, as the user sees it: no text running past its box (a button, a tab, a card, a
+ * at 800×1280 and 1280×800 — with Cab steps' slip card, a location note opened in the editor, the railML
+ * import form with a file read and its stretch shown, a location card and Start review — as the user sees it: no text running past its box (a button, a tab, a card, a
  * table cell, a heading, a line of text: scrollWidth over clientWidth), the page never scrolling sideways,
  * and no word broken inside itself on a tab or a button (a line may end inside a word only at a soft hyphen
  * or after a hyphen the word carries). The tab bar also at 600×960, the narrowest width the app supports
  * (a 7-inch tablet in portrait). One browser, one page, the screens' own content waited for.
- * Screenshots: test-results/screenshots/layout-*.
+ * Screenshots: test-results/screenshots/layout-* (the note editor and the railML form also scrolled down,
+ * layout-*-2.png, -3.png…, for a person to look at).
  */
-import { mkdtempSync, rmSync } from "node:fs";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
@@ -18,16 +20,51 @@ import { notes } from "../../src/i18n/en/notes.js";
 import { notesDe } from "../../src/i18n/de/notes.js";
 import { notesHu } from "../../src/i18n/hu/notes.js";
 import { pseudoText } from "../../src/i18n/pseudo.js";
+import { chain, railmlFile } from "../tools/railml.js";
 
 let context: BrowserContext;
 let page: Page;
 let profile: string;
+let work: string;
+let railml: string;
 let problems: string[] = [];
 const base = inject("baseURL");
 /** The narrowest screen the app supports: a 7-inch tablet in portrait (600 CSS px). */
 const NARROW = { width: 600, height: 960 };
 const RECORDING = fileURLToPath(new URL("../../profiles/recordings/demo-aggregate-ashvale-heavier.gpx", import.meta.url));
 const DEMO_DAY = fileURLToPath(new URL("../../profiles/departures/demo-day.csv", import.meta.url));
+
+/** The Location notes words the test clicks by, in the language on screen. */
+interface NotesWords {
+  startReview: string;
+  backToLibrary: string;
+  importRailml: string;
+}
+const wordsOf = (m: Record<string, unknown>, f: (x: string) => string = (x) => x): NotesWords => ({
+  startReview: f(m.startReview as string),
+  backToLibrary: f(m.backToLibrary as string),
+  importRailml: f(m.importRailml as string),
+});
+
+/**
+ * A railML line written by the test (tests/tools/railml.ts) whose import says much: an operational point
+ * with a long name, changes without a dir (a warning), curves, a speed limit and signals (hazards offered).
+ */
+function railmlLine(): string {
+  const [a, b, c] = chain([1200, 1500, 1300], 31_000);
+  a!.name = "Lower through line";
+  a!.gradients = [{ pos: 0, value: 4 }];
+  a!.radii = [{ pos: 0, dir: "up", value: 0 }, { pos: 700, dir: "up", value: 650 }];
+  b!.gradients = [{ pos: 0, dir: "up", value: 4 }, { pos: 600, dir: "up", value: 11.5 }];
+  b!.radii = [{ pos: 0, dir: "up", value: 0 }, { pos: 900, dir: "up", value: -420 }, { pos: 1300, dir: "up", value: 0 }];
+  b!.speeds = [{ pos: 0, dir: "up", value: 40 }];
+  b!.signals = [{ id: "sig-b1", pos: 450, dir: "up", name: "Exit signal B1" }];
+  b!.levelCrossings = [{ id: "lc-b", pos: 1100 }];
+  b!.crossSections = [{ id: "cs1", pos: 300, ocpRef: "ocp1" }];
+  c!.gradients = [{ pos: 0, dir: "up", value: 11.5 }, { pos: 500, dir: "up", value: 2 }];
+  c!.radii = [{ pos: 0, dir: "up", value: 0 }];
+  return railmlFile({ tracks: [a!, b!, c!], ocps: [{ id: "ocp1", name: "Thistlemoor freight loop north exit (invented)" }] });
+}
 
 async function go(id: string): Promise<void> {
   await page.evaluate((h) => (location.hash = h), `#/${id}`);
@@ -111,14 +148,26 @@ async function layoutProblems(label: string): Promise<string[]> {
   return found.map((f) => `${label}: ${f}`);
 }
 
-async function look(label: string, file: string): Promise<string[]> {
-  await page.locator(".screen").evaluate((el) => el.scrollTo(0, 0));
+async function look(label: string, file: string, pages = 1): Promise<string[]> {
+  const screenBox = page.locator(".screen");
+  await screenBox.evaluate((el) => el.scrollTo(0, 0));
   await page.screenshot({ path: join(SHOTS, `layout-${file}.png`) });
+  // A long form, also a screenful further down each time (for a person to look at; the checks measure the whole page).
+  for (let k = 2; k <= pages; k++) {
+    const moved = await screenBox.evaluate((el) => {
+      const before = el.scrollTop;
+      el.scrollBy(0, el.clientHeight - 80);
+      return el.scrollTop > before;
+    });
+    if (!moved) break;
+    await page.screenshot({ path: join(SHOTS, `layout-${file}-${k}.png`) });
+  }
+  await screenBox.evaluate((el) => el.scrollTo(0, 0));
   return layoutProblems(label);
 }
 
 /** Every screen at the size the page has now, in the language on screen. */
-async function everyScreen(lang: string, size: string, startReview: string): Promise<string[]> {
+async function everyScreen(lang: string, size: string, w: NotesWords): Promise<string[]> {
   const found: string[] = [];
   const at = (id: string) => `${lang} ${size} ${id}`;
   for (const id of ["start-plan", "cab-steps", "assistance-check", "departures", "load-table", "location-notes", "settings"]) {
@@ -144,11 +193,25 @@ async function everyScreen(lang: string, size: string, startReview: string): Pro
       await dialog.waitFor({ state: "detached" });
     }
     if (id === "location-notes") {
+      // The first note opened in the editor (its load table worked out).
+      await page.locator(".notes-list .notes-item .notes-item-open").first().click();
+      await page.locator(".notes-editor .notes-loadtable").waitFor({ timeout: 120_000 });
+      found.push(...(await look(at("note editor"), `${lang}-note-editor-${size}`, 8)));
+      await page.locator(".notes-editor button", { hasText: w.backToLibrary }).first().click();
+      await page.locator(".notes-list .notes-item").first().waitFor({ timeout: 30_000 });
+      // The railML import form: a file read, the front at its operational point, the stretch shown.
+      await page.locator(".notes-library button", { hasText: w.importRailml }).click();
+      await page.locator(".notes-railml input[type=file]").setInputFiles(railml);
+      await page.locator(".notes-railml-segs tbody tr").first().waitFor({ timeout: 60_000 });
+      await page.locator(".notes-railml-preview svg").first().waitFor({ timeout: 60_000 });
+      found.push(...(await look(at("railML import"), `${lang}-railml-import-${size}`, 5)));
+      await page.locator(".notes-railml button", { hasText: w.backToLibrary }).first().click();
+      await page.locator(".notes-list .notes-item").first().waitFor({ timeout: 30_000 });
       // The first note's card (its load table worked out), then Start review of a recording from it.
       await page.locator(".notes-list .notes-item").first().locator("button.button").click();
       await page.locator(".notes-card-preview .notes-loadtable").waitFor({ timeout: 120_000 });
       found.push(...(await look(at("location card"), `${lang}-location-card-${size}`)));
-      await page.locator(".notes-card-view button", { hasText: startReview }).click();
+      await page.locator(".notes-card-view button", { hasText: w.startReview }).click();
       await page.locator("#review-h").waitFor({ timeout: 30_000 });
       await page.locator(".review-screen input[type=file]").setInputFiles(RECORDING);
       await page.locator(".review-result li").first().waitFor({ timeout: 120_000 });
@@ -173,6 +236,9 @@ async function narrowTabs(lang: string): Promise<string[]> {
 
 beforeAll(async () => {
   profile = mkdtempSync(join(tmpdir(), "taut-layout-"));
+  work = mkdtempSync(join(tmpdir(), "taut-layout-files-"));
+  railml = join(work, "thistlemoor-line.xml");
+  writeFileSync(railml, railmlLine());
   ({ context, page, problems } = await launch(inject("chromiumPath"), profile));
   await page.goto(base);
   await go("start-plan");
@@ -187,12 +253,13 @@ beforeAll(async () => {
 afterAll(async () => {
   await context?.close();
   if (profile) rmSync(profile, { recursive: true, force: true });
+  if (work) rmSync(work, { recursive: true, force: true });
 });
 
 describe("every screen holds Hungarian, German and pseudo-localised text", () => {
   for (const [lang, radio, review] of [
-    ["hu", "Magyar", notesHu.startReview as string],
-    ["de", "Deutsch", notesDe.startReview as string],
+    ["hu", "Magyar", wordsOf(notesHu)],
+    ["de", "Deutsch", wordsOf(notesDe)],
   ] as const) {
     it(`${lang}: nothing runs past its box and no word breaks inside itself at 800×1280 and 1280×800, tabs also at 600×960`, async () => {
       await page.setViewportSize(LANDSCAPE);
@@ -224,7 +291,7 @@ describe("every screen holds Hungarian, German and pseudo-localised text", () =>
     const found: string[] = [];
     for (const [size, name] of [[PORTRAIT, "800x1280"], [LANDSCAPE, "1280x800"]] as const) {
       await page.setViewportSize(size);
-      found.push(...(await everyScreen("pseudo", name, pseudoText(notes.en.startReview))));
+      found.push(...(await everyScreen("pseudo", name, wordsOf(notes.en, pseudoText))));
     }
     await page.evaluate(() => localStorage.removeItem("taut.pseudo"));
     expect(found).toEqual([]);

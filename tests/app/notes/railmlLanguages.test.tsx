@@ -37,7 +37,7 @@ describe("Import from railML in Hungarian and German", () => {
     storage.setItem(SETTINGS_KEY, JSON.stringify({ language: "hu" }));
     try {
       renderWithApp(() => <LocationNotesScreen />, { storage, pool: quickTablePool() });
-      await waitFor(() => expect(appLang()).toBe("hu"));
+      await waitFor(() => expect(appLang()).toBe("hu"), { timeout: 10_000 });
       await waitFor(() => expect(listed().length).toBeGreaterThan(0), { timeout: 10_000 });
       fireEvent.click(screen.getByRole("button", { name: notesHu.importRailml as string }));
       fireEvent.change(screen.getByLabelText(notesHu.rmFileLabel as string), { target: { files: [new File([LINE], "line.xml", { type: "application/xml" })] } });
@@ -52,7 +52,7 @@ describe("Import from railML in Hungarian and German", () => {
 
       // The language changes: the same file's words are drawn again in German, without reading it again.
       await setAppLanguage("de");
-      await waitFor(() => expect(section().textContent).toContain((railmlTextDe.noDir as string).replace("{count}", "2")));
+      await waitFor(() => expect(section().textContent).toContain((railmlTextDe.noDir as string).replace("{count}", "2")), { timeout: 10_000 });
       expect(section().textContent).toContain(railmlTextDe.noRadius as string);
       expect(section().textContent).toContain('Betriebsstelle "Kavicsbánya kitérő (invented)"');
       expect(section().textContent).not.toContain(huDir);

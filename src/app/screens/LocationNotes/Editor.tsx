@@ -86,6 +86,8 @@ export function Editor(props: EditorProps): JSX.Element {
             value={d().standing}
             onValue={(v) => e().set("standing", v)}
             maxLength={400}
+            multiline
+            rows={2}
             class="wide"
             hint={t("edStandingHint")}
           />

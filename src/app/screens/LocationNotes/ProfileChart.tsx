@@ -8,7 +8,7 @@
 import { createMemo, createSignal, For, onCleanup, onMount, Show, type JSX } from "solid-js";
 import { withAlpha, type ChartPalette } from "../../charts/palette.js";
 import type { UnitSystem } from "../../format.js";
-import { HAZARD_KINDS } from "./draft.js";
+import { hazardWord } from "./draft.js";
 import type { ProfileModel } from "./profileModel.js";
 import { profilePlot } from "./profilePlot.js";
 import { notes } from "../../../i18n/en/notes.js";
@@ -44,7 +44,6 @@ export function ProfileChart(props: ProfileChartProps): JSX.Element {
 
   const plot = createMemo(() => (props.model ? profilePlot(props.model, props.units, width(), HEIGHT) : undefined));
   const p = () => props.palette;
-  const hazardWord = (k: string) => HAZARD_KINDS.find((h) => h.kind === k)?.label ?? k;
 
   return (
     <figure class="chart notes-chart" data-chart="Profile">

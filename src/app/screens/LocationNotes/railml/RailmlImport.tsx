@@ -20,6 +20,7 @@ import { hazardWord } from "../draft.js";
 import { notes } from "../../../../i18n/en/notes.js";
 import { tr } from "../../../i18n.js";
 import { railmlWords } from "../../../../profiles/railml/text.js";
+import { readerMessage } from "../../../../i18n/renderReaders.js";
 
 const t = tr.ns(notes);
 
@@ -50,7 +51,7 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
     if (!s) return undefined;
     const geometry = { segments: s.segments, frontAt_m: s.frontAt_m, clearAhead_m: s.aheadM, ...(s.speedLimit_kmh !== undefined ? { speedLimit_kmh: s.speedLimit_kmh } : {}) };
     const r = referenceCase(geometry, props.presets, props.library);
-    return { model: profileModel({ ...geometry, hazards: s.hazards }, r.ok ? r.value : undefined), issue: r.ok ? undefined : r.issues.map((i) => i.message).join("; ") };
+    return { model: profileModel({ ...geometry, hazards: s.hazards }, r.ok ? r.value : undefined), issues: r.ok ? undefined : r.issues };
   });
   const kinds = (): Array<{ value: FrontKind; label: string }> => [
     ...((imp().summary()?.ocps.length ?? 0) > 0 ? [{ value: "ocp" as const, label: t("rmOcp") }] : []),
@@ -126,6 +127,7 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
                       name="railml.ocp"
                       value={c().ocp}
                       options={sum().ocps.map((o) => ({ value: o.id, label: o.label }))}
+                      class="wide"
                       onValue={(v) => {
                         imp().setChoice("ocp", v);
                         imp().setChoice("name", sum().ocps.find((o) => o.id === v)?.label ?? v);
@@ -158,7 +160,7 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
                 />
                 <QuantityField label={t("rmBehind")} name="railml.behind" value={c().behindM} units={u()} measure="distance" fileUnit="m" step={{ metric: 100, us: 300 }} min={0} onValue={(v) => imp().setChoice("behindM", v)} />
                 <QuantityField label={t("rmAhead")} name="railml.ahead" value={c().aheadM} units={u()} measure="distance" fileUnit="m" step={{ metric: 100, us: 300 }} min={0} onValue={(v) => imp().setChoice("aheadM", v)} />
-                <TextField label={t("rmName")} name="railml.name" value={c().name} onValue={(v) => imp().setChoice("name", v)} maxLength={120} />
+                <TextField label={t("rmName")} name="railml.name" value={c().name} onValue={(v) => imp().setChoice("name", v)} maxLength={120} class="wide" />
               </div>
 
               <Show when={imp().result()} fallback={<p class="notes-hint">{t("rmMaking")}</p>}>
@@ -171,8 +173,8 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
                           {s().speedLimit_kmh !== undefined ? t("rmSpeedLimit", { speed: show("speed", s().speedLimit_kmh! / 3.6, u(), 0) }) : ""}.
                         </p>
                         <Show when={placed()?.model}>{(m) => <ProfileSketch model={m()} units={u()} />}</Show>
-                        <Show when={placed()?.issue}>
-                          <p class="notes-issue-box">{placed()!.issue}</p>
+                        <Show when={placed()?.issues}>
+                          {(issues) => <p class="notes-issue-box">{issues().map((i) => (i.reader ? readerMessage(tr, i.reader) : i.message)).join("; ")}</p>}
                         </Show>
                         <Show when={s().noteTexts.length > 0}>
                           <ul class="notes-small">
