@@ -88,7 +88,7 @@ export function Editor(props: EditorProps): JSX.Element {
             maxLength={400}
             multiline
             rows={2}
-            class="wide"
+            class="wide lines"
             hint={t("edStandingHint")}
           />
         </div>
