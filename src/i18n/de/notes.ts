@@ -231,7 +231,6 @@ export const notesDe = translation<typeof notes.en>()({
   nfRescue: "„{name}“, soweit übernommen werden konnte: berichtigen Sie, was der Editor markiert, und speichern Sie dann (das ersetzt den beschädigten Eintrag).",
   nfStretchInvalid: "Der Abschnitt ergibt keine gültige Notiz; nichts wurde gespeichert.",
   nfSavedRailml: "„{name}“ aus railML gespeichert.",
-  nfFrontAt: "Zugspitze bei {place} (aus railML).",
   nfImportedRailml: "Aus railML importiert ({file}).",
   nfWentWrong: "Etwas ist schiefgegangen: {problem}",
   nfOlderFormat: "Aus dem älteren Notizformat übernommen, dabei fehlt etwas: prüfen Sie sie und speichern Sie dann.",

@@ -230,7 +230,6 @@ export const notes = namespace("notes", {
   nfRescue: "\"{name}\" as far as it could be carried over: put right what the editor marks, then save (it replaces the damaged record).",
   nfStretchInvalid: "The stretch does not make a valid note; nothing was saved.",
   nfSavedRailml: "Saved \"{name}\" from railML.",
-  nfFrontAt: "Front at {place} (from railML).",
   nfImportedRailml: "Imported from railML ({file}).",
   nfWentWrong: "Something went wrong: {problem}",
   nfOlderFormat: "Carried over from the older notes format with something left out: check it, then save.",

@@ -231,7 +231,6 @@ export const notesHu = translation<typeof notes.en>()({
   nfRescue: "„{name}”, amennyire átvihető volt: javítsa ki, amit a szerkesztő jelöl, majd mentse (ez lecseréli a sérült rekordot).",
   nfStretchInvalid: "A szakaszból nem lesz érvényes jegyzet; semmi sem került mentésre.",
   nfSavedRailml: "Mentve railML-ből: „{name}”.",
-  nfFrontAt: "A vonat eleje: {place} (railML-ből).",
   nfImportedRailml: "railML-ből importálva ({file}).",
   nfWentWrong: "Hiba történt: {problem}",
   nfOlderFormat: "A régebbi jegyzetformátumból átvéve, valami kimaradt: ellenőrizze, majd mentse.",
