@@ -21,6 +21,7 @@ export function usageWord(): string {
 export function usageLine(usage: string): string {
   return `${usageWord()} ${usageText(usage)}`;
 }
+
 /** The usage lines' placeholders that are words, and their keys in the catalog (NOTE-ID before the others). */
 const METAVARIABLES = { "NOTE-ID": "metaNoteId", FILE: "metaFile", CASE: "metaCase", DEPARTURES: "metaDepartures", LOCATION: "metaLocation", RECORDING: "metaRecording", TEXT: "metaText", PERMILLE: "metaPermille" } as const;
 const METAVARIABLE = new RegExp(`(?<![\\w-])(${Object.keys(METAVARIABLES).join("|")})(?![\\w-])`, "g");
@@ -35,7 +36,6 @@ export function usageText(usage: string, tr: Translator = cliTr()): string {
   const t = tr.ns(cliHelp);
   return usage.replace(METAVARIABLE, (w) => t(METAVARIABLES[w as keyof typeof METAVARIABLES]));
 }
-
 
 export const EXIT_OK = 0;
 export const EXIT_INTERNAL = 1;

@@ -75,11 +75,8 @@ export function withLangOption(help: string, tr: Translator = cliTr()): string {
   const lines = help.split("\n");
   const isOption = (l: string) => /^ {2}--/.test(l);
   // The last block of options: option lines and the lines continuing them (indented deeper).
-  let end = -1;
-  for (let i = lines.length - 1; i >= 0; i--) if (isOption(lines[i]!)) {
-    end = i;
-    break;
-  }
+  let end = lines.length - 1;
+  while (end >= 0 && !isOption(lines[end]!)) end--;
   if (end < 0) return help;
   while (end + 1 < lines.length && /^ {4,}\S/.test(lines[end + 1]!)) end++;
   let start = end;
