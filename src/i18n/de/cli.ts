@@ -81,7 +81,7 @@ export const cliDe = translation<typeof cli.en>()({
   no: "nein",
   tableTitle: "Lasttafel — {name}",
   tableLocos: "Loks: {list}",
-  tableTrain: "Zug: {wagons} × {type} ({length} m), Kupplungsspiel {slack} mm, Kupplungen {limit} kN, {bearing}-Lager, {temperature} °C; Ziel {target} km/h",
+  tableTrain: "Zug: {wagons} × {type} ({length} m), Kupplungsspiel {slack} mm, Kupplungen {limit} kN, {bearing}, {temperature} °C; Ziel {target} km/h",
   tableWagons: "Wagen",
   tableRefTrain: " (der Bezugszug der Notiz, {train})",
   tableDefaultTrain: " (die Notiz nennt keinen Bezugszug: die erste Zugvorlage, {train}, wie auf der Karte der App)",

@@ -65,7 +65,7 @@ export const cliErrors = namespace("cliErrors", {
   railValue: "--rail: must be one of {list} (got {value})",
   sandBoth: "--sand and --no-sand: give one of them",
   gradeNoNote: "--grade: no location note {id} to take the curve and the distance clear ahead from",
-  // The load table's bearing word before "bearings" (cli.tableTrain): English the code itself.
+  // The load table's bearings (cli.tableTrain): in English the word before "bearings", the code itself; in hu/de the whole term.
   bearingRoller: "roller",
   bearingPlain: "plain",
   // A row of \`taut check\` not answered: one that cannot be read, one the calculation failed on ({message}: the failure's own words).

@@ -81,7 +81,7 @@ export const cliHu = translation<typeof cli.en>()({
   no: "nem",
   tableTitle: "Terhelési táblázat — {name}",
   tableLocos: "Mozdonyok: {list}",
-  tableTrain: "Vonat: {wagons} × {type} ({length} m), hézag {slack} mm, kapcsolók {limit} kN, {bearing} csapágyak, {temperature} °C; cél {target} km/h",
+  tableTrain: "Vonat: {wagons} × {type} ({length} m), hézag {slack} mm, vonókészülék {limit} kN, {bearing}, {temperature} °C; cél {target} km/h",
   tableWagons: "kocsi",
   tableRefTrain: " (a jegyzet viszonyítási vonata, {train})",
   tableDefaultTrain: " (a jegyzet nem nevez meg viszonyítási vonatot: az első vonatminta, {train}, ahogy az alkalmazás lapján)",
