@@ -17,6 +17,7 @@ import { notesCommand } from "./commands/notes.js";
 import { reviewCommand } from "./commands/review.js";
 import { cli } from "../i18n/en/cli.js";
 import { cliTr, languageOf, setCliLanguage } from "./lang.js";
+import { wrap } from "./render/wrap.js";
 
 const COMMANDS: Command[] = [planCommand, checkCommand, tableCommand, simulateCommand, reviewCommand, notesCommand];
 
@@ -32,17 +33,18 @@ export function addCommand(c: Command): void {
 function topHelp(): string {
   const t = cliTr().ns(cli);
   const width = Math.max(...COMMANDS.map((c) => c.name.length));
+  // Lines of at most 104 columns; English keeps its own break of the title (it always printed it so).
+  const title = cliTr().lang === "en" ? [t("topTitle"), t("topTitle2")] : wrap(`${t("topTitle")} ${t("topTitle2")}`, 104, "");
   return [
-    t("topTitle"),
-    t("topTitle2"),
+    ...title,
     "",
     t("usage"),
     "",
     t("commandsTitle"),
-    ...COMMANDS.map((c) => `  ${c.name.padEnd(width)}  ${summaryText(c)}`),
+    ...COMMANDS.flatMap((c) => wrap(`  ${c.name.padEnd(width)}  ${summaryText(c)}`, 104, " ".repeat(width + 4))),
     "",
     t("topHelpMore"),
-    t("topHelpLang"),
+    ...wrap(t("topHelpLang"), 104, ""),
     t("exitCodes"),
   ].join("\n");
 }

@@ -261,6 +261,12 @@ describe("--help: the options' descriptions in one column, --lang among them", (
   });
 
   for (const lang of ["en", "hu", "de"] as const) {
+    it(`${lang}: the top-level help's lines, --lang's among them, at most 104 columns`, async () => {
+      const top = (await taut("--help", "--lang", lang)).stdout.split("\n");
+      expect(top.filter((l) => l.includes("--lang")).length, lang).toBe(1);
+      for (const l of top) expect(l.length, `${lang}: ${l}`).toBeLessThanOrEqual(104);
+    });
+
     it(`${lang}: every command`, async () => {
       for (const c of commands()) {
         const r = await taut(c.name, "--help", "--lang", lang);
