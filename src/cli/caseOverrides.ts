@@ -4,7 +4,10 @@
  * gradient of a uniform location). They are written into the case's JSON before it is validated, so a value
  * out of range gets the same message, with the field's path, as it would in the file.
  */
-import { RAIL_CONDITIONS } from "../core/physics/types.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../core/physics/types.js";
+import { cli } from "../i18n/en/cli.js";
+import { cliTr, cliWords } from "./lang.js";
+import { asGiven } from "./table.js";
 import { errorWords, InputError } from "./errors.js";
 
 export interface CaseOverrides {
@@ -152,10 +155,11 @@ function trainLengthM(train: Record<string, unknown>, wagonType: (id: string) =>
 
 /** The overrides in words, for the readable output: "rail wet, no sand, 1,500 t, grade 8 ‰". */
 export function describeOverrides(o: CaseOverrides): string {
+  const t = cliTr().ns(cli);
   const parts: string[] = [];
-  if (o.rail !== undefined) parts.push(`rail ${o.rail}`);
-  if (o.sand !== undefined) parts.push(o.sand ? "sand" : "no sand");
-  if (o.trailingMass_t !== undefined) parts.push(`trailing mass ${o.trailingMass_t} t`);
-  if (o.gradient_permille !== undefined) parts.push(`grade ${o.gradient_permille} ‰ under the whole train`);
+  if (o.rail !== undefined) parts.push(t("overrideRail", { rail: (RAIL_CONDITIONS as readonly string[]).includes(o.rail) ? cliWords().railInline(o.rail as RailCondition) : o.rail }));
+  if (o.sand !== undefined) parts.push(t(o.sand ? "overrideSand" : "overrideNoSand"));
+  if (o.trailingMass_t !== undefined) parts.push(t("overrideMass", { mass: asGiven(o.trailingMass_t) }));
+  if (o.gradient_permille !== undefined) parts.push(t("overrideGrade", { grade: asGiven(o.gradient_permille) }));
   return parts.join(", ");
 }

@@ -178,6 +178,17 @@ describe("error paths in Hungarian and German: no English sentence left", () => 
   }
 });
 
+describe("what the overrides changed, in the language", () => {
+  it("plan --rail --no-sand --mass --grade: the line saying what changed has no English left, its figures with the language's decimal sign", async () => {
+    const { en, hu, de } = await inEach(["plan", "--demo", "--rail", "wet", "--no-sand", "--mass", "2500.5", "--grade", "12"]);
+    const changed = (r: Run) => r.stdout.split("\n")[1]!;
+    expect(changed(en)).toBe("Changed from the case file: rail wet, no sand, trailing mass 2500.5 t, grade 12 ‰ under the whole train");
+    expect(changed(de)).toBe("Gegenüber der Falldatei geändert: Schiene nass, ohne Sanden, Anhängelast 2500,5 t, Neigung 12 ‰ unter dem ganzen Zug");
+    expect(englishLeft(changed(en), changed(hu))).toEqual([]);
+    expect(changed(hu)).toContain("2500,5 t");
+  });
+});
+
 describe("a check row's error: English in JSON and CSV, the language on the printout", () => {
   it("JSON and CSV are the same bytes in English, Hungarian and German", async () => {
     for (const format of ["--json", "--csv"]) {

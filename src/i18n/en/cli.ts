@@ -7,6 +7,12 @@ export const cli = namespace("cli", {
   verdictMarginal: "MARGINAL",
   verdictNeedsAssistance: "NEEDS ASSISTANCE",
   changedFromCase: "Changed from the case file: {what}",
+  // What the command line's overrides changed ({rail}: the condition's inline word; figures as given).
+  overrideRail: "rail {rail}",
+  overrideSand: "sand",
+  overrideNoSand: "no sand",
+  overrideMass: "trailing mass {mass} t",
+  overrideGrade: "grade {grade} ‰ under the whole train",
   verdictLine: "Verdict: {verdict}   {margin}",
   gravityStart: "   (brake-controlled start: gravity starts the train)",
   margin: "margin {value}",
