@@ -218,7 +218,7 @@ export function tableCase(
   if (!valid.ok) throw new InputError(errorWords()("tableTrainInvalid"), valid.issues);
   const r = resolveStartCase(valid.value, lib);
   if (!r.ok) throw new InputError(errorWords()("tableTrainMisfit", { id: `"${note.id}"` }), r.issues);
-  checkWork(r.value, `the train for the table is not valid`);
+  checkWork(r.value, errorWords()("tableTrainInvalid"));
   const wt = file.train.wagonType !== undefined ? lib.wagons.get(file.train.wagonType) : undefined;
   return { c: r.value, file, source, referenceTrain, capacityT: wt ? Math.round((file.train.wagons * wt.maxGrossKg) / 1000) : null };
 }
