@@ -103,7 +103,7 @@ const CK0 = 7.5 / 44 + 0.161;
 export function createState(m: TrainModel, opts: { trackEnergy?: boolean } = {}): DynamicsState {
   const n = m.n;
   const nc = Math.max(0, n - 1);
-  const s: DynamicsState = {
+  const s = shapedState({
     t: 0,
     x: new Float64Array(n),
     v: new Float64Array(n),
@@ -129,20 +129,20 @@ export function createState(m: TrainModel, opts: { trackEnergy?: boolean } = {})
     lagDt: -1,
     lagRise: 0,
     lagFall: 0,
-    takeUp: {
+    takeUp: shapedTakeUp({
       count: 0,
       timeS: new Float64Array(TAKE_UP_CAPACITY),
       coupling: new Int32Array(TAKE_UP_CAPACITY),
       relSpeedMps: new Float64Array(TAKE_UP_CAPACITY),
       maxRunOutMps: 0,
       maxRunInMps: 0,
-    },
+    }),
     energy: null,
     restless: new Uint8Array(n),
     restlessValid: false,
     runs: new Int32Array(2 * n + 2),
     intervalMaxStale: false,
-  };
+  });
   for (let i = 0; i < n; i++) s.seg[i] = segmentOf(m, m.chainage0M[i]!, 0);
   // Couplings that stand exactly at the edge of their slack start engaged with no load.
   for (let j = 0; j < nc; j++) {
@@ -167,6 +167,63 @@ export function createState(m: TrainModel, opts: { trackEnergy?: boolean } = {})
   }
   evaluate(m, s, 0);
   return s;
+}
+
+/**
+ * Every state is built here, so that all of them — fresh or cloned — share one shape in the engine and the
+ * hot loops see one kind of object. Its number fields start as fractions, then take their values: a field
+ * that began as a small integer would change its stored form at the first fraction (every compiled hot loop
+ * thrown away and made again, with the run meanwhile interpreted).
+ */
+export function shapedState(p: DynamicsState): DynamicsState {
+  const s: DynamicsState = {
+    t: 0.5,
+    x: p.x,
+    v: p.v,
+    acc: p.acc,
+    seg: p.seg,
+    gearF: p.gearF,
+    gearDefl: p.gearDefl,
+    couplerF: p.couplerF,
+    engaged: p.engaged,
+    tractionN: p.tractionN,
+    brakeN: p.brakeN,
+    notch: p.notch,
+    effortN: p.effortN,
+    targetN: p.targetN,
+    peakTensionN: p.peakTensionN,
+    peakTensionT: p.peakTensionT,
+    peakCompressionN: p.peakCompressionN,
+    peakCompressionT: p.peakCompressionT,
+    intervalMaxTensionN: 0.5,
+    intervalMaxCompressionN: 0.5,
+    slipCount: p.slipCount,
+    lastSlipT: p.lastSlipT,
+    lagDt: 0.5,
+    lagRise: 0.5,
+    lagFall: 0.5,
+    takeUp: p.takeUp,
+    energy: p.energy,
+    restless: p.restless,
+    restlessValid: p.restlessValid,
+    runs: p.runs,
+    intervalMaxStale: p.intervalMaxStale,
+  };
+  s.t = p.t;
+  s.intervalMaxTensionN = p.intervalMaxTensionN;
+  s.intervalMaxCompressionN = p.intervalMaxCompressionN;
+  s.lagDt = p.lagDt;
+  s.lagRise = p.lagRise;
+  s.lagFall = p.lagFall;
+  return s;
+}
+
+/** The take-up log in its one shape (as `shapedState`). */
+export function shapedTakeUp(p: TakeUpLog): TakeUpLog {
+  const log: TakeUpLog = { count: p.count, timeS: p.timeS, coupling: p.coupling, relSpeedMps: p.relSpeedMps, maxRunOutMps: 0.5, maxRunInMps: 0.5 };
+  log.maxRunOutMps = p.maxRunOutMps;
+  log.maxRunInMps = p.maxRunInMps;
+  return log;
 }
 
 function segmentOf(m: TrainModel, chainage: number, guess: number): number {
@@ -374,7 +431,19 @@ function evaluateRuns(m: TrainModel, s: DynamicsState, dt: number, kickH: number
         if (engaged[i] !== 1) engage(s, i, 1, w, t);
         const e = ext - hs;
         const travel = m.draftTravelM[i]!;
-        const gf = gearForce(gearF[i]!, gearDefl[i]!, e, travel, m.draftRatedN[i]!, m.draftLinear[i]!, m.draftPreloadN[i]!, unloadR[i]!, transK[i]!);
+        // gearForce, written out here: called, its nine numbers would be boxed at every coupling and step.
+        let xi = e / travel;
+        if (xi > 1) xi = 1;
+        const lin = m.draftLinear[i]!;
+        let load = m.draftRatedN[i]! * xi * (lin + (1 - lin) * xi);
+        const preload = m.draftPreloadN[i]!;
+        if (preload > 0) load += e < PRELOAD_RAMP_M ? (preload * e) / PRELOAD_RAMP_M : preload;
+        let gf = gearF[i]! + transK[i]! * (e - gearDefl[i]!);
+        if (gf > load) gf = load;
+        else {
+          const unload = load * unloadR[i]!;
+          if (gf < unload) gf = unload;
+        }
         gearF[i] = gf;
         gearDefl[i] = e;
         f = gf + damp[i]! * w;
@@ -390,7 +459,19 @@ function evaluateRuns(m: TrainModel, s: DynamicsState, dt: number, kickH: number
         if (engaged[i] !== -1) engage(s, i, -1, w, t);
         const e = -ext - hs;
         const travel = m.buffTravelM[i]!;
-        const gf = gearForce(gearF[i]!, gearDefl[i]!, e, travel, m.buffRatedN[i]!, m.buffLinear[i]!, m.buffPreloadN[i]!, unloadR[i]!, transK[i]!);
+        // gearForce, written out (as in draft).
+        let xi = e / travel;
+        if (xi > 1) xi = 1;
+        const lin = m.buffLinear[i]!;
+        let load = m.buffRatedN[i]! * xi * (lin + (1 - lin) * xi);
+        const preload = m.buffPreloadN[i]!;
+        if (preload > 0) load += e < PRELOAD_RAMP_M ? (preload * e) / PRELOAD_RAMP_M : preload;
+        let gf = gearF[i]! + transK[i]! * (e - gearDefl[i]!);
+        if (gf > load) gf = load;
+        else {
+          const unload = load * unloadR[i]!;
+          if (gf < unload) gf = unload;
+        }
         gearF[i] = gf;
         gearDefl[i] = e;
         f = -gf + damp[i]! * w;

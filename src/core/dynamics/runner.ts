@@ -4,7 +4,7 @@
  * `simulate` drives one run to the end; the planner clones runs to try alternatives from a shared start.
  */
 import { adhesionSpeedFactor, slipRisk } from "../physics/adhesion.js";
-import { activeOnlyStepping, applyBrakes, countVehicleSteps, createState, evaluate, step, stepActive, vehicleStepsDone, type DynamicsState } from "./dynamics.js";
+import { activeOnlyStepping, applyBrakes, countVehicleSteps, createState, evaluate, shapedState, shapedTakeUp, step, stepActive, vehicleStepsDone, type DynamicsState } from "./dynamics.js";
 import { CONTROL_INTERVAL_S, integratorSteps, stepDividing, type TrainModel } from "../train/trainModel.js";
 import { SETTLE_AFTER_CHANGE_S, SWAY_WINDOW_S, maySettle, measureSway, mustUnsettle, settle, settledStep, unsettle, type Settled } from "./settled.js";
 
@@ -89,33 +89,33 @@ export interface RunOptions {
 
 export class Run {
   /** The present integrator step: a whole fraction of the control interval, s. */
-  dt: number;
+  dt!: number;
   /** Integrator steps per control interval. */
-  stepsPerInterval: number;
-  readonly controlIntervalS: number;
+  stepsPerInterval!: number;
+  readonly controlIntervalS!: number;
   /** Control intervals between samples of the series. */
-  readonly seriesEvery: number;
-  lead: number;
-  brakes: BrakeSchedule;
-  brakesDoneS: number;
-  started: Uint8Array;
+  readonly seriesEvery!: number;
+  lead!: number;
+  brakes!: BrakeSchedule;
+  brakesDoneS!: number;
+  started!: Uint8Array;
   startedCount = 0;
   lastVehicleMovesS: number | null = null;
   locoTravelToStretchM: number | null = null;
   episodes: SlipEpisode[] = [];
-  private lastSlipCount: Int32Array;
-  private openEpisode: Array<SlipEpisode | null>;
-  series: SeriesBuffer;
+  private lastSlipCount!: Int32Array;
+  private openEpisode!: Array<SlipEpisode | null>;
+  series!: SeriesBuffer;
   /** Vehicles that have not moved yet (the first `waitingCount` entries). */
-  private waiting: Int32Array;
-  private waitingCount: number;
+  private waiting!: Int32Array;
+  private waitingCount!: number;
   private seriesMaxT = 0;
   private seriesMaxC = 0;
   /** The clock: the run's start time and the control intervals completed since. */
-  private readonly t0: number;
+  private readonly t0!: number;
   private intervals = 0;
   /** Step to change to once the run-out has passed (0: none pending). */
-  private rollingStepS: number;
+  private rollingStepS!: number;
   /** Steps actually integrated (quiescent intervals are skipped in one evaluation; a settled interval is one). */
   steps = 0;
   /** Run the train as one mass whenever it has settled (settled.ts); off unless asked for. */
@@ -123,11 +123,11 @@ export class Run {
   /** The settled train while it runs as one (null: the full chain). */
   private settled: Settled | null = null;
   /** The notches of the last interval and when they last changed, s. */
-  private notchSeen: Int32Array;
+  private notchSeen!: Int32Array;
   private notchChangedS = -Infinity;
   /** Each coupling's quasi-static force and the sway about it measured since `swayFromS`, N. */
-  private meanScratch: Float64Array;
-  private sway: Float64Array;
+  private meanScratch!: Float64Array;
+  private sway!: Float64Array;
   private swayFromS = Infinity;
 
   constructor(
@@ -135,7 +135,14 @@ export class Run {
     public s: DynamicsState,
     brakes: BrakeSchedule,
     opts: RunOptions = {},
+    from: Run | null = null,
   ) {
+    if (from) {
+      // A copy (`clone`): built by this constructor, so it has the same shape in the engine as every run.
+      Object.assign(this, from);
+      this.s = s;
+      return;
+    }
     this.controlIntervalS = opts.controlIntervalS ?? CONTROL_INTERVAL_S;
     const choice = integratorSteps(m, this.controlIntervalS);
     const first = opts.dt === undefined ? choice.takeUpS : stepDividing(this.controlIntervalS, opts.dt);
@@ -437,9 +444,7 @@ export class Run {
 
   /** A deep copy that can be advanced independently. */
   clone(): Run {
-    const r = Object.create(Run.prototype) as Run;
-    Object.assign(r, this);
-    r.s = cloneState(this.s);
+    const r = new Run(this.m, cloneState(this.s), this.brakes, {}, this);
     r.started = this.started.slice();
     r.waiting = this.waiting.slice();
     r.episodes = this.episodes.map((e) => ({ ...e }));
@@ -517,19 +522,19 @@ function copySeries(b: SeriesBuffer): SeriesBuffer {
   };
 }
 
-/** Deep copy of a dynamics state. */
+/** Deep copy of a dynamics state (in the one shape every state has: `shapedState`). */
 export function cloneState(s: DynamicsState): DynamicsState {
-  const copy: DynamicsState = { ...s };
+  const copy = shapedState(s);
   for (const key of Object.keys(s) as Array<keyof DynamicsState>) {
     const v = s[key];
     if (ArrayBuffer.isView(v)) (copy as unknown as Record<string, unknown>)[key] = (v as Float64Array).slice();
   }
-  copy.takeUp = {
+  copy.takeUp = shapedTakeUp({
     ...s.takeUp,
     timeS: s.takeUp.timeS.slice(),
     coupling: s.takeUp.coupling.slice(),
     relSpeedMps: s.takeUp.relSpeedMps.slice(),
-  };
+  });
   if (s.energy) {
     const e = s.energy;
     copy.energy = {
