@@ -12,6 +12,9 @@ import { notchTargetN } from "../../src/core/dynamics/runner.js";
 import { adhesionSpeedFactor } from "../../src/core/physics/adhesion.js";
 import { GRAVITY_MPS2 } from "../../src/core/physics/constants.js";
 import { gradeAt } from "../../src/core/physics/track.js";
+import { rigidResistanceAt, rigidResistanceCurve } from "../../src/core/planner/need.js";
+import { seededDepartures } from "../tools/departures.js";
+import { longTrainCase } from "../bench/dynamics.js";
 
 /** Resistance of the whole train at travel x and speed v, each vehicle at its own place, N. */
 function trainResistanceN(ctx: PlannerContext, x: number, v: number): number {
@@ -62,3 +65,25 @@ describe("one-mass model", () => {
     expect(Math.abs(out.travelM - x)).toBeLessThan(1e-6 * x);
   });
 });
+
+describe("the train's resistance as a function of speed at one place (the notch rule's look ahead)", () => {
+  it("summed over the train once gives what summing every vehicle at every speed gives", () => {
+    // Seeded departures (grades, curves, several segments, every wagon family) and the 150-wagon train; speeds
+    // at a crawl (breakaway still fading) and rolling, places from standing to well along the track.
+    let checked = 0;
+    for (const c of [...seededDepartures(12, 200), longTrainCase()]) {
+      const ctx = plannerContext(c);
+      const seg = new Int32Array(ctx.model.n);
+      for (const x of [0, 37.5, 400, 2500]) {
+        const curve = rigidResistanceCurve(ctx.model, x, seg);
+        for (const v of [0, 0.01, 0.5 * ctx.model.fadeSpeedMps, ctx.model.fadeSpeedMps, 1, 4.2, 8.33, 20]) {
+          const ref = trainResistanceN(ctx, x, v);
+          expect(Math.abs(rigidResistanceAt(curve, v) - ref), `${c.train.wagons} wagons at ${x} m, ${v} m/s`).toBeLessThanOrEqual(1e-9 * Math.max(Math.abs(ref), 1));
+          checked++;
+        }
+      }
+    }
+    expect(checked).toBe(13 * 4 * 8);
+  });
+});
+

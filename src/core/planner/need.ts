@@ -135,3 +135,43 @@ export function rigidVehicleResistanceN(m: TrainModel, i: number, travelM: numbe
   const r = m.davisA[i]! + (m.davisB[i]! + m.davisC[i]! * v) * v + m.massKg[i]! * (GRAVITY_MPS2 * m.segSin[k]! + m.segCurveNPerKg[k]!);
   return v < m.fadeSpeedMps ? r + m.breakawayExcessN[i]! * (1 - v / m.fadeSpeedMps) : r;
 }
+
+/**
+ * `rigidResistanceN` as a function of speed alone, every vehicle `travelM` ahead of where it stood: the
+ * speed-independent part (Davis A, grade and curve under each vehicle) and the Davis B and C terms and the
+ * breakaway excess summed over the train once, so each speed after costs a few operations instead of a pass
+ * over the train. The same figure to rounding (the sums taken in another order).
+ */
+export interface RigidResistanceCurve {
+  constN: number;
+  bNPerMps: number;
+  cNPerMps2: number;
+  excessN: number;
+  fadeMps: number;
+}
+
+export function rigidResistanceCurve(m: TrainModel, travelM: number, seg: Int32Array): RigidResistanceCurve {
+  let constN = 0;
+  let b = 0;
+  let c = 0;
+  let excess = 0;
+  for (let i = 0; i < m.n; i++) {
+    const ch = m.chainage0M[i]! + travelM;
+    let k = seg[i]!;
+    while (ch >= m.segEndM[k]!) k++;
+    while (ch < m.segStartM[k]!) k--;
+    seg[i] = k;
+    constN += m.davisA[i]! + m.massKg[i]! * (GRAVITY_MPS2 * m.segSin[k]! + m.segCurveNPerKg[k]!);
+    b += m.davisB[i]!;
+    c += m.davisC[i]!;
+    excess += m.breakawayExcessN[i]!;
+  }
+  return { constN, bNPerMps: b, cNPerMps2: c, excessN: excess, fadeMps: m.fadeSpeedMps };
+}
+
+/** The resistance of a `rigidResistanceCurve` at speed v, N. */
+export function rigidResistanceAt(r: RigidResistanceCurve, v: number): number {
+  const n = r.constN + (r.bNPerMps + r.cNPerMps2 * v) * v;
+  return v < r.fadeMps ? n + r.excessN * (1 - v / r.fadeMps) : n;
+}
+

@@ -9,7 +9,7 @@
 import { Run, type BrakeSchedule, type Observation } from "../dynamics/runner.js";
 import { stabilityTimeStep } from "../train/trainModel.js";
 import { Branch } from "./branch.js";
-import { rigidResistanceN } from "./need.js";
+import { rigidResistanceAt, rigidResistanceCurve } from "./need.js";
 import { GROUP_RATIO_LIMIT, estimateCouplers, raises, settingLevel, standingNotches, type CouplerEstimate } from "./groupNotches.js";
 import type { Phase } from "./types.js";
 import { MIN_NOTCH_DWELL_S, holdingNotch, needNowN, notchAdhesion, notchDeliveredN, notchSaturated, unitNotch, type NotchSetting, type PlannerContext, type StartKind } from "./context.js";
@@ -370,11 +370,13 @@ function fallsShort(ctx: PlannerContext, notch: NotchSetting, up: NotchSetting, 
   // Twice the progress the accelerate phase waits for: the one-mass estimate here must not hold a notch that
   // the full dynamics, with its sway, then finds creeping below that progress (a plan given up short of the target).
   const leastN = 2 * ctx.effMassKg * PROGRESS_MPS2;
+  // Taken where the train is now: the resistance depends on the speed alone (summed over the train once).
+  const resistance = rigidResistanceCurve(ctx.model, travelM, seg);
   let s = v;
   let timeS = 0;
   while (s < top && notchRiskAhead(ctx, up, s) > ctx.quantile) {
     const ds = Math.min(0.05, top - s);
-    const surplusN = notchDeliveredN(ctx, notch, s) - rigidResistanceN(ctx.model, travelM, s, seg);
+    const surplusN = notchDeliveredN(ctx, notch, s) - rigidResistanceAt(resistance, s);
     if (surplusN < leastN) return true;
     timeS += (ds * ctx.effMassKg) / surplusN;
     s += ds;
