@@ -13,6 +13,7 @@ import { adhesionSpeedFactor } from "../../src/core/physics/adhesion.js";
 import { GRAVITY_MPS2 } from "../../src/core/physics/constants.js";
 import { gradeAt } from "../../src/core/physics/track.js";
 import { rigidResistanceAt, rigidResistanceCurve } from "../../src/core/planner/need.js";
+import { notchRiskAhead, riskAheadAt, riskAheadParts } from "../../src/core/planner/search.js";
 import { seededDepartures } from "../tools/departures.js";
 import { longTrainCase } from "../bench/dynamics.js";
 
@@ -84,6 +85,22 @@ describe("the train's resistance as a function of speed at one place (the notch 
       }
     }
     expect(checked).toBe(13 * 4 * 8);
+  });
+
+  it("the slip risk a notch carries up to the target, its parts at the target and the corners taken once, is the same number", () => {
+    let checked = 0;
+    for (const c of [...seededDepartures(12, 200), longTrainCase()]) {
+      const ctx = plannerContext(c);
+      const top = c.target.kind === "speed" ? c.target.speedMps : Math.min(...ctx.model.locoSpecs.map((s) => s.maxSpeedMps), 40 / 3.6);
+      for (let notch = 1; notch <= ctx.maxNotch; notch++) {
+        const parts = riskAheadParts(ctx, notch, top);
+        for (let v = 0; v < top; v += top / 37) {
+          expect(riskAheadAt(ctx, notch, v, parts), `${c.train.wagons} wagons, notch ${notch}, ${v} m/s`).toBe(notchRiskAhead(ctx, notch, v));
+          checked++;
+        }
+      }
+    }
+    expect(checked).toBeGreaterThan(1000);
   });
 });
 

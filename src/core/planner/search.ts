@@ -374,7 +374,10 @@ function fallsShort(ctx: PlannerContext, notch: NotchSetting, up: NotchSetting, 
   const resistance = rigidResistanceCurve(ctx.model, travelM, seg);
   let s = v;
   let timeS = 0;
-  while (s < top && notchRiskAhead(ctx, up, s) > ctx.quantile) {
+  // notchRiskAhead(ctx, up, s) at each speed: its parts at the target and at the power limit's corners are the
+  // same at every speed below the target, taken once.
+  const ahead = riskAheadParts(ctx, up, top);
+  while (s < top && riskAheadAt(ctx, up, s, ahead) > ctx.quantile) {
     const ds = Math.min(0.05, top - s);
     const surplusN = notchDeliveredN(ctx, notch, s) - rigidResistanceAt(resistance, s);
     if (surplusN < leastN) return true;
@@ -459,6 +462,40 @@ export function notchRiskAhead(ctx: PlannerContext, notch: NotchSetting, v: numb
     const idx = k * m.notchStride + Math.min(n, m.notchStride - 1);
     const corner = m.notchPowerW[idx]! / m.notchCurrentN[idx]!;
     if (corner > v && corner < top) worst = Math.max(worst, notchAdhesion(ctx, notch, corner).risk);
+  }
+  return worst;
+}
+
+/** `notchRiskAhead`'s speed-independent parts below `top`: the risk at `top`, and each unit's corner speed and its risk there. */
+export interface RiskAheadParts {
+  top: number;
+  topRisk: number;
+  corner: Float64Array;
+  cornerRisk: Float64Array;
+}
+
+export function riskAheadParts(ctx: PlannerContext, notch: NotchSetting, top: number): RiskAheadParts {
+  const m = ctx.model;
+  const corner = new Float64Array(m.nl).fill(Number.NaN);
+  const cornerRisk = new Float64Array(m.nl);
+  for (let k = 0; k < m.nl; k++) {
+    const n = unitNotch(ctx, notch, k);
+    if (n <= 0) continue;
+    const idx = k * m.notchStride + Math.min(n, m.notchStride - 1);
+    corner[k] = m.notchPowerW[idx]! / m.notchCurrentN[idx]!;
+    if (corner[k]! < top) cornerRisk[k] = notchAdhesion(ctx, notch, corner[k]!).risk;
+  }
+  return { top, topRisk: notchAdhesion(ctx, notch, top).risk, corner, cornerRisk };
+}
+
+/** `notchRiskAhead(ctx, notch, v)` for a speed v below `top` of `riskAheadParts` (the same number). */
+export function riskAheadAt(ctx: PlannerContext, notch: NotchSetting, v: number, p: RiskAheadParts): number {
+  let worst = notchAdhesion(ctx, notch, v).risk;
+  worst = Math.max(worst, p.topRisk);
+  for (let k = 0; k < p.corner.length; k++) {
+    const c = p.corner[k]!;
+    // NaN (a unit in no notch) is never between.
+    if (c > v && c < p.top) worst = Math.max(worst, p.cornerRisk[k]!);
   }
   return worst;
 }
