@@ -9,7 +9,8 @@
 import { isDeepStrictEqual } from "node:util";
 import { afterEach, describe, expect, it } from "vitest";
 import { planStart, type StartCase } from "../../src/core/index.js";
-import { setActiveOnlyStepping, vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
+import { applyBrakes, applyBrakesFrom, createState, setActiveOnlyStepping, vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
+import { modelFromCase } from "../../src/core/train/trainModel.js";
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { seededDepartures } from "../tools/departures.js";
@@ -50,5 +51,42 @@ describe("integrating only the vehicles that can change gives the full integrati
       active += b.work;
     }
     expect(active).toBeLessThan(0.9 * full);
+  });
+});
+
+describe("the brakes set only where they can be changing (applyBrakesFrom)", () => {
+  it("gives every vehicle the capacity, and makes restless the vehicles, that setting every vehicle gives", () => {
+    // The reference is `applyBrakes`, which works out every vehicle's brake from the release schedule at each
+    // call; the claim is exactness over a whole release (wagons released in order down the train, the
+    // locomotive brake eased off meanwhile), at a step's pace and at a control interval's.
+    let compared = 0;
+    let differ = 0;
+    for (const [, c] of [...demos(), ...seededDepartures(4, 200).map((x): [string, StartCase] => ["", x])]) {
+      const m = modelFromCase(c);
+      const trainReleaseS = 0.7;
+      const locoReleaseS = 30;
+      for (const dt of [0.0137, 0.1]) {
+        // A run sets every vehicle's brake when it starts (Run's constructor), then only what can change.
+        const a = createState(m);
+        const b = createState(m);
+        applyBrakes(m, a, trainReleaseS, locoReleaseS);
+        applyBrakes(m, b, trainReleaseS, locoReleaseS);
+        let done = 0;
+        const end = trainReleaseS + Math.max(...m.brakeReleaseDelayS) + m.brakeReleaseRampS + 5;
+        while (a.t < Math.max(end, locoReleaseS + 5)) {
+          a.t = b.t = a.t + dt;
+          a.restless.fill(0);
+          b.restless.fill(0);
+          applyBrakes(m, a, trainReleaseS, locoReleaseS);
+          done = applyBrakesFrom(m, b, trainReleaseS, locoReleaseS, done);
+          for (let i = 0; i < m.n; i++) if (b.brakeN[i] !== a.brakeN[i] || b.restless[i] !== a.restless[i]) differ++;
+          compared++;
+        }
+        // Every wagon's train brake is off in the end, and counted released for good.
+        expect(done).toBe(Array.from(m.trainBrakeN).filter((tb, i) => tb > 0 && !(m.locoBrakeN[i]! > 0)).length);
+      }
+    }
+    expect(differ).toBe(0);
+    expect(compared).toBeGreaterThan(1000);
   });
 });

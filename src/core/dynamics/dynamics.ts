@@ -661,3 +661,79 @@ export function applyBrakes(m: TrainModel, s: DynamicsState, trainReleaseS: numb
     }
   }
 }
+
+/** A model's vehicles by brake: those with a locomotive brake, and the rest with a train brake in order of its release. */
+interface BrakeOrder {
+  loco: Int32Array;
+  byRelease: Int32Array;
+}
+const brakeOrders = new WeakMap<TrainModel, BrakeOrder>();
+
+function brakeOrder(m: TrainModel): BrakeOrder {
+  let o = brakeOrders.get(m);
+  if (!o) {
+    const loco: number[] = [];
+    const train: number[] = [];
+    for (let i = 0; i < m.n; i++) {
+      if (m.locoBrakeN[i]! > 0) loco.push(i);
+      else if (m.trainBrakeN[i]! > 0) train.push(i);
+    }
+    // Stable: vehicles released at the same moment keep their order (any model of the same train agrees).
+    train.sort((a, b) => m.brakeReleaseDelayS[a]! - m.brakeReleaseDelayS[b]!);
+    o = { loco: Int32Array.from(loco), byRelease: Int32Array.from(train) };
+    brakeOrders.set(m, o);
+  }
+  return o;
+}
+
+/**
+ * `applyBrakes` for a run whose clock only goes forward, looking only at the vehicles whose brake can be
+ * changing: every vehicle with a locomotive brake, and the others from `done` on in order of their train
+ * brake's release, up to the first whose release has not begun (it and every later one still hold in full,
+ * as they were set). `done` counts the vehicles in that order already released in full (they hold nothing
+ * more for good); returns the new count. The same capacities, and the same vehicles made restless.
+ */
+export function applyBrakesFrom(m: TrainModel, s: DynamicsState, trainReleaseS: number, locoReleaseS: number, done: number): number {
+  const t = s.t;
+  const ramp = m.brakeReleaseRampS;
+  const trainBrakeN = m.trainBrakeN;
+  const locoBrakeN = m.locoBrakeN;
+  const delay = m.brakeReleaseDelayS;
+  const brakeN = s.brakeN;
+  const restless = s.restless;
+  const order = brakeOrder(m);
+  const loco = order.loco;
+  for (let q = 0; q < loco.length; q++) {
+    const i = loco[q]!;
+    let cap = 0;
+    const tb = trainBrakeN[i]!;
+    if (tb > 0) {
+      const start = trainReleaseS + delay[i]!;
+      cap += t <= start ? tb : t >= start + ramp ? 0 : tb * (1 - (t - start) / ramp);
+    }
+    const lb = locoBrakeN[i]!;
+    const lr = 3;
+    cap += t <= locoReleaseS ? lb : t >= locoReleaseS + lr ? 0 : lb * (1 - (t - locoReleaseS) / lr);
+    if (brakeN[i] !== cap) {
+      brakeN[i] = cap;
+      restless[i] = 1;
+    }
+  }
+  const byRelease = order.byRelease;
+  let next = done;
+  for (let q = done; q < byRelease.length; q++) {
+    const i = byRelease[q]!;
+    const start = trainReleaseS + delay[i]!;
+    if (t <= start) break;
+    const tb = trainBrakeN[i]!;
+    let cap = 0;
+    cap += t >= start + ramp ? 0 : tb * (1 - (t - start) / ramp);
+    if (brakeN[i] !== cap) {
+      brakeN[i] = cap;
+      restless[i] = 1;
+    }
+    if (q === next && cap === 0) next++;
+  }
+  return next;
+}
+

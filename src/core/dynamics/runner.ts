@@ -4,7 +4,7 @@
  * `simulate` drives one run to the end; the planner clones runs to try alternatives from a shared start.
  */
 import { adhesionSpeedFactor, slipRisk } from "../physics/adhesion.js";
-import { activeOnlyStepping, applyBrakes, countVehicleSteps, createState, evaluate, shapedState, shapedTakeUp, step, stepActive, vehicleStepsDone, type DynamicsState } from "./dynamics.js";
+import { activeOnlyStepping, applyBrakes, applyBrakesFrom, countVehicleSteps, createState, evaluate, shapedState, shapedTakeUp, step, stepActive, vehicleStepsDone, type DynamicsState } from "./dynamics.js";
 import { CONTROL_INTERVAL_S, integratorSteps, stepDividing, type TrainModel } from "../train/trainModel.js";
 import { SETTLE_AFTER_CHANGE_S, SWAY_WINDOW_S, maySettle, measureSway, mustUnsettle, settle, settledStep, unsettle, type Settled } from "./settled.js";
 
@@ -129,6 +129,8 @@ export class Run {
   private meanScratch!: Float64Array;
   private sway!: Float64Array;
   private swayFromS = Infinity;
+  /** Vehicles whose train brake is released in full for good, in order of release (`applyBrakesFrom`). */
+  private brakesReleased = 0;
 
   constructor(
     readonly m: TrainModel,
@@ -238,7 +240,7 @@ export class Run {
       // interval finds the moment (to within the interval) when something breaks away.
       const span = this.controlIntervalS;
       s.t += span;
-      if (s.t <= this.brakesDoneS + span) applyBrakes(m, s, this.brakes.trainBrakeReleaseS, this.brakes.locoBrakeReleaseS);
+      if (s.t <= this.brakesDoneS + span) this.applyBrakes();
       evaluate(m, s, span);
       this.afterStep();
     } else if (this.startedCount < m.n) {
@@ -246,7 +248,7 @@ export class Run {
       const work0 = vehicleStepsDone();
       const activeOnly = activeOnlyStepping();
       for (let k = 0; k < steps; k++) {
-        if (s.t <= this.brakesDoneS) applyBrakes(m, s, this.brakes.trainBrakeReleaseS, this.brakes.locoBrakeReleaseS);
+        if (s.t <= this.brakesDoneS) this.applyBrakes();
         if (activeOnly) stepActive(m, s, this.dt);
         else step(m, s, this.dt);
         this.afterStep();
@@ -255,7 +257,7 @@ export class Run {
       beforeAllMovedWork += vehicleStepsDone() - work0;
     } else {
       for (let k = 0; k < steps; k++) {
-        if (s.t <= this.brakesDoneS) applyBrakes(m, s, this.brakes.trainBrakeReleaseS, this.brakes.locoBrakeReleaseS);
+        if (s.t <= this.brakesDoneS) this.applyBrakes();
         step(m, s, this.dt);
         this.afterStep();
       }
@@ -271,6 +273,11 @@ export class Run {
       this.rollingStepS = 0;
     }
     if (this.settleWhenSteady && !this.settled && this.mayRunAsOne()) this.measureOrSettle();
+  }
+
+  /** The brakes' holding capacities for the present time (only the vehicles whose brake can be changing: `applyBrakesFrom`). */
+  private applyBrakes(): void {
+    this.brakesReleased = applyBrakesFrom(this.m, this.s, this.brakes.trainBrakeReleaseS, this.brakes.locoBrakeReleaseS, this.brakesReleased);
   }
 
   /** Note a notch change; the settled train goes back to the chain for it (and when slow or near a slack). */
