@@ -173,6 +173,19 @@ export function notchAdhesion(ctx: PlannerContext, notch: NotchSetting, speedMps
   return { risk, use };
 }
 
+/** `notchAdhesion(ctx, notch, speedMps).risk` alone (the same number, without the pair). */
+export function notchRisk(ctx: PlannerContext, notch: NotchSetting, speedMps: number): number {
+  const m = ctx.model;
+  let risk = 0;
+  const factor = adhesionSpeedFactor(speedMps);
+  for (let k = 0; k < m.nl; k++) {
+    const demandMu = notchTargetN(m, k, unitNotch(ctx, notch, k), speedMps) / m.adhesiveWeightN[k]!;
+    const mu = ctx.mu0Median[k]! * factor;
+    risk = Math.max(risk, slipRisk(demandMu, mu, ctx.sigmaLn));
+  }
+  return risk;
+}
+
 /**
  * Lowest notch that, with the locomotive brake, holds the train against rolling back (with 10 % in hand) on
  * the rail the plan assumes; 0 when nothing pulls it back; −1 when no notch can.

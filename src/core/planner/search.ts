@@ -12,7 +12,7 @@ import { Branch } from "./branch.js";
 import { rigidResistanceAt, rigidResistanceCurve } from "./need.js";
 import { GROUP_RATIO_LIMIT, estimateCouplers, raises, settingLevel, standingNotches, type CouplerEstimate } from "./groupNotches.js";
 import type { Phase } from "./types.js";
-import { MIN_NOTCH_DWELL_S, holdingNotch, needNowN, notchAdhesion, notchDeliveredN, notchSaturated, unitNotch, type NotchSetting, type PlannerContext, type StartKind } from "./context.js";
+import { MIN_NOTCH_DWELL_S, holdingNotch, needNowN, notchDeliveredN, notchRisk, notchSaturated, unitNotch, type NotchSetting, type PlannerContext, type StartKind } from "./context.js";
 
 /** Longest the planner waits for a stretch notch to get the last vehicle moving, s. */
 export const STRETCH_MAX_S = 90;
@@ -454,14 +454,14 @@ function raiseAll(ctx: PlannerContext, from: Int32Array): Int32Array | null {
 export function notchRiskAhead(ctx: PlannerContext, notch: NotchSetting, v: number): number {
   const m = ctx.model;
   const top = Math.max(v, targetSpeedMps(ctx));
-  let worst = notchAdhesion(ctx, notch, v).risk;
-  worst = Math.max(worst, notchAdhesion(ctx, notch, top).risk);
+  let worst = notchRisk(ctx, notch, v);
+  worst = Math.max(worst, notchRisk(ctx, notch, top));
   for (let k = 0; k < m.nl; k++) {
     const n = unitNotch(ctx, notch, k);
     if (n <= 0) continue;
     const idx = k * m.notchStride + Math.min(n, m.notchStride - 1);
     const corner = m.notchPowerW[idx]! / m.notchCurrentN[idx]!;
-    if (corner > v && corner < top) worst = Math.max(worst, notchAdhesion(ctx, notch, corner).risk);
+    if (corner > v && corner < top) worst = Math.max(worst, notchRisk(ctx, notch, corner));
   }
   return worst;
 }
@@ -483,14 +483,14 @@ export function riskAheadParts(ctx: PlannerContext, notch: NotchSetting, top: nu
     if (n <= 0) continue;
     const idx = k * m.notchStride + Math.min(n, m.notchStride - 1);
     corner[k] = m.notchPowerW[idx]! / m.notchCurrentN[idx]!;
-    if (corner[k]! < top) cornerRisk[k] = notchAdhesion(ctx, notch, corner[k]!).risk;
+    if (corner[k]! < top) cornerRisk[k] = notchRisk(ctx, notch, corner[k]!);
   }
-  return { top, topRisk: notchAdhesion(ctx, notch, top).risk, corner, cornerRisk };
+  return { top, topRisk: notchRisk(ctx, notch, top), corner, cornerRisk };
 }
 
 /** `notchRiskAhead(ctx, notch, v)` for a speed v below `top` of `riskAheadParts` (the same number). */
 export function riskAheadAt(ctx: PlannerContext, notch: NotchSetting, v: number, p: RiskAheadParts): number {
-  let worst = notchAdhesion(ctx, notch, v).risk;
+  let worst = notchRisk(ctx, notch, v);
   worst = Math.max(worst, p.topRisk);
   for (let k = 0; k < p.corner.length; k++) {
     const c = p.corner[k]!;
