@@ -248,7 +248,21 @@ export type FailLevel = "within" | "over";
  */
 export function failedSoFar(ctx: PlannerContext, level: FailLevel): (p: PlanSoFar) => boolean {
   const fails = (l: LimitCheck) => (level === "within" ? l.level !== "within" : l.level === "over");
+  // The answer depends on these figures alone (dynamicLimits without the target): asked at every control
+  // interval, it is worked out again only when one of them has changed since the last time.
+  let last: { tensionN: number; compressionN: number; climb: number; stretchM: number | null; kind: StartKind; buildEndM: number | null; buildDone: boolean; failed: boolean } | null = null;
   return (p) => {
+    const b = p.branch;
+    const tensionN = b.peakTensionN();
+    const compressionN = b.steps.reduce((x, s) => Math.max(x, s.peakCompressionN), 0);
+    const climb = ctx.wheelClimb.active ? (b.wheelClimbPeak()?.ratio ?? -1) : -1;
+    const stretchM = b.run.locoTravelToStretchM;
+    if (last && last.tensionN === tensionN && last.compressionN === compressionN && last.climb === climb && last.stretchM === stretchM && last.kind === p.startKind && last.buildEndM === p.buildEndTravelM && last.buildDone === p.buildDone) return last.failed;
+    const failed = failedNow(p);
+    last = { tensionN, compressionN, climb, stretchM, kind: p.startKind, buildEndM: p.buildEndTravelM, buildDone: p.buildDone, failed };
+    return failed;
+  };
+  function failedNow(p: PlanSoFar): boolean {
     const partial = { branch: p.branch, startKind: p.startKind, buildEndTravelM: p.buildEndTravelM } as SearchResult;
     for (const l of dynamicLimits(ctx, partial, false)) {
       // The distance limit's own figure waits for the build (power start); its band, the stretch, is final already.
@@ -256,7 +270,7 @@ export function failedSoFar(ctx: PlannerContext, level: FailLevel): (p: PlanSoFa
       if (fails(l)) return true;
     }
     return false;
-  };
+  }
 }
 
 /** The search options of one plan of `judge`: stop at `level` when the evaluation is verdict-only. */
