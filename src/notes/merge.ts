@@ -7,6 +7,7 @@
  */
 import { canonicalNote, latestRevision } from "../profiles/notes.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
+import { noteRecordEnglish, type RecordWhy } from "../profiles/noteRecordText.js";
 
 export type ConflictChoice = "mine" | "theirs" | "both";
 
@@ -16,6 +17,8 @@ export interface ImportConflict {
   /** Our note; absent when the id is a damaged record's (`damaged` then says why it could not be read). */
   mine?: LocationNoteFile;
   damaged?: string;
+  /** Why, as a code (the app writes it in the language on screen), when the library gave it. */
+  damagedWhy?: RecordWhy;
   theirs: LocationNoteFile;
   /** True when both carry the same latest revision entry yet differ (edited without a revision). */
   sameRevision: boolean;
@@ -34,14 +37,18 @@ export interface MergeWrites {
   summary: { added: string[]; replaced: string[]; keptMine: string[]; copies: Array<{ from: string; to: string }>; unchanged: string[]; repaired: string[] };
 }
 
-/** Compare incoming notes with the library (`mine` by id; `damaged`: why each unreadable record, by key). */
-export function previewMerge(incoming: readonly LocationNoteFile[], mine: ReadonlyMap<string, LocationNoteFile>, damaged: ReadonlyMap<string, string>): MergePreview {
+/**
+ * Compare incoming notes with the library (`mine` by id; `damaged`: why each unreadable record, by key, in
+ * English, or with its code beside it).
+ */
+export function previewMerge(incoming: readonly LocationNoteFile[], mine: ReadonlyMap<string, LocationNoteFile>, damaged: ReadonlyMap<string, string | { message: string; why: RecordWhy }>): MergePreview {
   const out: MergePreview = { added: [], unchanged: [], conflicts: [] };
   for (const theirs of incoming) {
     const ours = mine.get(theirs.id);
     if (!ours) {
       const why = damaged.get(theirs.id);
-      if (why !== undefined) out.conflicts.push({ id: theirs.id, damaged: why, theirs, sameRevision: false });
+      if (typeof why === "string") out.conflicts.push({ id: theirs.id, damaged: why, theirs, sameRevision: false });
+      else if (why !== undefined) out.conflicts.push({ id: theirs.id, damaged: why.message, damagedWhy: why.why, theirs, sameRevision: false });
       else out.added.push(theirs);
       continue;
     }
@@ -76,7 +83,7 @@ export function mergeWrites(preview: MergePreview, choices: Readonly<Record<stri
   };
   for (const c of preview.conflicts) {
     const choice = choices[c.id];
-    if (choice === undefined) throw new RangeError(`no choice made for the conflicting note "${c.id}"`);
+    if (choice === undefined) throw new RangeError(noteRecordEnglish.noChoice(c.id));
     if (choice === "mine") w.summary.keptMine.push(c.id);
     else if (choice === "theirs") {
       w.put.push(c.theirs);

@@ -12,7 +12,7 @@
  * note they belong to. Notes are not touched by the step.
  */
 import { parseLocationNote } from "../profiles/parse.js";
-import { formatIssues } from "../profiles/issues.js";
+import { noteRecordEnglish, type MigrationFailure, type MigrationFlag } from "../profiles/noteRecordText.js";
 import type { NoteRecord } from "./recordTypes.js";
 import { RAIL_CONDITIONS } from "../core/physics/types.js";
 
@@ -51,9 +51,13 @@ const SEASON_ORDER = ["spring", "summer", "autumn", "winter"] as const;
 /** The rail words a season may name (the rail conditions of the program). */
 const RAIL_WORDS: readonly string[] = RAIL_CONDITIONS;
 
+/**
+ * A migration's result. `flags` and `message` are in English (as the library has always said them; the
+ * flags are stored with the note); `flagCodes` and `why` are the same as codes, for the language on screen.
+ */
 export type V1Migration =
-  | { ok: true; record: NoteRecord; flags: string[] }
-  | { ok: false; message: string; partial: Record<string, unknown>; flags: string[] };
+  | { ok: true; record: NoteRecord; flags: string[]; flagCodes: MigrationFlag[] }
+  | { ok: false; message: string; why: MigrationFailure; partial: Record<string, unknown>; flags: string[]; flagCodes: MigrationFlag[] };
 
 /**
  * Turn a version-1 record into a version-2 record. What is valid is carried over; a season or hazard
@@ -64,19 +68,23 @@ export type V1Migration =
  * left in place and reported when read.
  */
 export function migrateV1Record(raw: unknown): V1Migration {
-  if (!raw || typeof raw !== "object") return { ok: false, message: "not an object", partial: {}, flags: [] };
+  if (!raw || typeof raw !== "object") {
+    const why: MigrationFailure = { code: "migrationNotObject" };
+    return { ok: false, message: noteRecordEnglish.migration(why), why, partial: {}, flags: [], flagCodes: [] };
+  }
   const v1 = raw as Partial<NoteRecordV1>;
   const p = v1.profile;
-  const flags: string[] = [];
+  const flagCodes: MigrationFlag[] = [];
   const hazards = Array.isArray(v1.hazards) ? v1.hazards : [];
   hazards.forEach((h, k) => {
-    if (typeof h !== "string") flags.push(`Hazard ${k + 1} was not text and was left out.`);
+    if (typeof h !== "string") flagCodes.push({ code: "hazardNotText", number: k + 1 });
   });
   const rail = v1.rail && typeof v1.rail === "object" ? (v1.rail as Record<string, unknown>) : {};
   for (const [season, word] of Object.entries(rail)) {
-    if (!(SEASON_ORDER as readonly string[]).includes(season)) flags.push(`The usual rail for ${JSON.stringify(season)} was left out: not a season (spring, summer, autumn, winter).`);
-    else if (typeof word !== "string" || !RAIL_WORDS.includes(word)) flags.push(`The usual rail in ${season}, ${JSON.stringify(word)}, was left out: not one of ${RAIL_WORDS.join(", ")}.`);
+    if (!(SEASON_ORDER as readonly string[]).includes(season)) flagCodes.push({ code: "seasonUnknown", season: JSON.stringify(season) });
+    else if (typeof word !== "string" || !RAIL_WORDS.includes(word)) flagCodes.push({ code: "railUnknown", season, word: String(JSON.stringify(word)), rails: RAIL_WORDS.join(", ") });
   }
+  const flags = flagCodes.map(noteRecordEnglish.flag);
   const candidate = {
     schema: "taut/location@1",
     id: v1.id,
@@ -96,7 +104,10 @@ export function migrateV1Record(raw: unknown): V1Migration {
     revisions: [{ date: v1.revised, initials: v1.by, change: V1_CARRIED_OVER }],
   };
   const parsed = parseLocationNote(candidate);
-  if (!parsed.ok) return { ok: false, message: formatIssues(parsed.issues).replace(/\n/g, "; "), partial: candidate, flags };
+  if (!parsed.ok) {
+    const why: MigrationFailure = { code: "noteInvalid", issues: parsed.issues };
+    return { ok: false, message: noteRecordEnglish.migration(why), why, partial: candidate, flags, flagCodes };
+  }
   const savedAt = typeof v1.revised === "string" ? `${v1.revised}T00:00:00.000Z` : new Date(0).toISOString();
-  return { ok: true, record: { id: parsed.value.id, origin: v1.demo ? "demo" : "mine", savedAt, rev: 1, ...(flags.length > 0 ? { flags } : {}), note: parsed.value }, flags };
+  return { ok: true, record: { id: parsed.value.id, origin: v1.demo ? "demo" : "mine", savedAt, rev: 1, ...(flags.length > 0 ? { flags, flagCodes } : {}), note: parsed.value }, flags, flagCodes };
 }

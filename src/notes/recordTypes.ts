@@ -3,6 +3,7 @@
  * migrations can name it without importing the checks (which use the migrations).
  */
 import type { LocationNoteFile } from "../profiles/schemas.js";
+import type { MigrationFlag } from "../profiles/noteRecordText.js";
 
 /** Where a saved note came from: a demo note shipped with the program, the user's own, or a file. */
 export type NoteOrigin = "demo" | "mine" | "imported";
@@ -20,5 +21,10 @@ export interface NoteRecord {
   rev?: number;
   /** What a migration from the older format could not carry over, for the trainer to look at. */
   flags?: string[];
+  /**
+   * The same as codes with their figures (language-neutral), so the app can say them in the language on
+   * screen; kept beside the English, which stays as it was written.
+   */
+  flagCodes?: MigrationFlag[];
   note: LocationNoteFile;
 }

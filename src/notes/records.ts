@@ -3,11 +3,11 @@
  * storage can be damaged (a half-written record, another program's data, a hand edit in developer
  * tools), so nothing read from IndexedDB is trusted until it has been validated again.
  */
-import { formatIssues } from "../profiles/issues.js";
 import { parseLocationNote } from "../profiles/parse.js";
 import { latestRevision } from "../profiles/notes.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
 import { migrateV1Record } from "./migrations.js";
+import { noteRecordEnglish, type MigrationFlag, type RecordWhy } from "../profiles/noteRecordText.js";
 import type { NoteOrigin, NoteRecord } from "./recordTypes.js";
 
 export type { NoteOrigin, NoteRecord } from "./recordTypes.js";
@@ -22,6 +22,8 @@ export interface SavedNote {
   rev: number;
   /** Things a migration could not carry over (none for a note saved since). */
   flags?: string[];
+  /** The same as codes, when the record keeps them (the app writes them in the language on screen). */
+  flagCodes?: MigrationFlag[];
   note: LocationNoteFile;
 }
 
@@ -31,12 +33,15 @@ export interface RecordProblem {
   key: string;
   /** The key as stored (a number stays a number), to remove or export the record. */
   rawKey: IDBValidKey;
+  /** In English (as the library has always said it). */
   message: string;
+  /** Why, as a code with its figures: the app writes it in the language on screen. */
+  why: RecordWhy;
   /**
    * For a record of the older format that could not be carried over: what could be (fields the
    * trainer can put right in the editor) and what was left out.
    */
-  rescue?: { note: Record<string, unknown>; flags: string[] };
+  rescue?: { note: Record<string, unknown>; flags: string[]; flagCodes: MigrationFlag[] };
 }
 
 /** The write count a raw record carries (0 when it has none or a wrong one). */
@@ -48,25 +53,52 @@ export function recordRev(raw: unknown): number {
 /** Validate a raw record read back from storage. */
 export function checkRecord(key: IDBValidKey, raw: unknown): { ok: true; saved: SavedNote } | { ok: false; problem: RecordProblem } {
   const k = keyText(key);
-  const bad = (why: string, rescue?: RecordProblem["rescue"]) => ({
+  const bad = (why: RecordWhy, rescue?: RecordProblem["rescue"]) => ({
     ok: false as const,
-    problem: { key: k, rawKey: key, message: `The saved note "${k}" is damaged and was skipped: ${why}`, ...(rescue ? { rescue } : {}) },
+    problem: { key: k, rawKey: key, message: noteRecordEnglish.problem(k, why), why, ...(rescue ? { rescue } : {}) },
   });
-  if (!raw || typeof raw !== "object") return bad("the record is not an object");
+  if (!raw || typeof raw !== "object") return bad({ code: "notObject" });
   const r = raw as Partial<Record<keyof NoteRecord, unknown>>;
   if (r.note === undefined && ("title" in r || "profile" in r)) {
     // A record of the older format that the upgrade could not carry over: say why, keep what can be kept.
     const m = migrateV1Record(raw);
-    if (m.ok) return bad("it is in the older format; reopen the app to carry it over");
-    return bad(`it is in an older format that could not be carried over (${m.message})`, { note: m.partial, flags: m.flags });
+    if (m.ok) return bad({ code: "olderFormat" });
+    return bad({ code: "olderNotCarried", why: m.why }, { note: m.partial, flags: m.flags, flagCodes: m.flagCodes });
   }
-  if (!ORIGINS.includes(r.origin as NoteOrigin)) return bad(`its origin is ${JSON.stringify(r.origin)}, not one of ${ORIGINS.join(", ")}`);
-  if (typeof r.savedAt !== "string" || Number.isNaN(Date.parse(r.savedAt))) return bad("its save time is missing or not a date");
+  if (!ORIGINS.includes(r.origin as NoteOrigin)) return bad({ code: "badOrigin", origin: String(JSON.stringify(r.origin)), origins: ORIGINS.join(", ") });
+  if (typeof r.savedAt !== "string" || Number.isNaN(Date.parse(r.savedAt))) return bad({ code: "badSavedAt" });
   const parsed = parseLocationNote(r.note);
-  if (!parsed.ok) return bad(formatIssues(parsed.issues).replace(/\n/g, "; "));
-  if (parsed.value.id !== k) return bad(`it is stored under "${k}" but the note inside says "${parsed.value.id}"`);
+  if (!parsed.ok) return bad({ code: "noteInvalid", issues: parsed.issues });
+  if (parsed.value.id !== k) return bad({ code: "wrongKey", key: k, id: parsed.value.id });
   const flags = Array.isArray(r.flags) ? r.flags.filter((f): f is string => typeof f === "string") : [];
-  return { ok: true, saved: { origin: r.origin as NoteOrigin, savedAt: r.savedAt, rev: recordRev(raw), ...(flags.length > 0 ? { flags } : {}), note: parsed.value } };
+  const flagCodes = flagCodesOf(r.flagCodes, flags);
+  return { ok: true, saved: { origin: r.origin as NoteOrigin, savedAt: r.savedAt, rev: recordRev(raw), ...(flags.length > 0 ? { flags } : {}), ...(flagCodes ? { flagCodes } : {}), note: parsed.value } };
+}
+
+/**
+ * The codes a record keeps beside its flags, when they are the codes of exactly those flags (a record
+ * carried over before the codes were kept, or edited by hand, has only the English).
+ */
+export function flagCodesOf(raw: unknown, flags: readonly string[]): MigrationFlag[] | undefined {
+  if (!Array.isArray(raw) || raw.length !== flags.length || raw.length === 0) return undefined;
+  const codes: MigrationFlag[] = [];
+  for (const [k, c] of (raw as unknown[]).entries()) {
+    const f = migrationFlag(c);
+    if (!f || noteRecordEnglish.flag(f) !== flags[k]) return undefined;
+    codes.push(f);
+  }
+  return codes;
+}
+
+/** A flag's code read back from storage, or undefined when it is not one. */
+function migrationFlag(x: unknown): MigrationFlag | undefined {
+  if (!x || typeof x !== "object") return undefined;
+  const c = x as Record<string, unknown>;
+  const text = (v: unknown): v is string => typeof v === "string";
+  if (c.code === "hazardNotText" && typeof c.number === "number" && Number.isInteger(c.number)) return { code: "hazardNotText", number: c.number };
+  if (c.code === "seasonUnknown" && text(c.season)) return { code: "seasonUnknown", season: c.season };
+  if (c.code === "railUnknown" && text(c.season) && text(c.word) && text(c.rails)) return { code: "railUnknown", season: c.season, word: c.word, rails: c.rails };
+  return undefined;
 }
 
 /** A record for a validated note. */

@@ -14,6 +14,7 @@ import { checkRecord, checkRows, keyText, makeRecord, recordRev, rowOf, type Not
 import { exportReminder, type ExportReminder } from "./reminder.js";
 import type { ReaderCoded } from "../profiles/readerIssues.js";
 import { readerEnglish } from "../profiles/readerIssues.js";
+import { noteRecordEnglish } from "../profiles/noteRecordText.js";
 
 export const DEFAULT_NOTES_DB = "taut-notes";
 
@@ -86,8 +87,12 @@ export type SaveBase = { rev: number } | "new" | "replace";
 /** Called with the conflicts of an import; returns a choice per conflicting id, or null to cancel. */
 export type ChooseConflicts = (conflicts: ImportConflict[]) => Promise<Record<string, ConflictChoice> | null> | Record<string, ConflictChoice> | null;
 
-/** A failed import or review: the message in English, and as a code with its figures for the language on screen. */
-export type ImportOutcome = { status: "applied"; summary: MergeWrites["summary"] } | { status: "cancelled" } | { status: "failed"; message: string; coded: ReaderCoded };
+/**
+ * A failed import or review: the message in English, and as a code with its figures for the language on
+ * screen; a refused note also gives its first field issue (`issue`), whose English is the
+ * code's `problem` figure, for the screen to write in its language.
+ */
+export type ImportOutcome = { status: "applied"; summary: MergeWrites["summary"] } | { status: "cancelled" } | { status: "failed"; message: string; coded: ReaderCoded; issue?: FieldIssue };
 
 /** A refusal as the store returns it: its English words and its code. */
 function refusal(coded: ReaderCoded): { message: string; coded: ReaderCoded } {
@@ -101,11 +106,7 @@ function refusal(coded: ReaderCoded): { message: string; coded: ReaderCoded } {
  */
 export class NotesClosedError extends Error {
   constructor(readonly reason: "upgrade" | "terminated") {
-    super(
-      reason === "upgrade"
-        ? "The notes library was upgraded by another tab or window of Taut. Reload this page to go on working; your unsaved edit is kept."
-        : "The browser closed the notes library. Reload this page to go on working; your unsaved edit is kept.",
-    );
+    super(noteRecordEnglish.closed(reason));
     this.name = "NotesClosedError";
   }
 }
@@ -241,7 +242,7 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
     return r && typeof r === "object" ? `${String(r.savedAt)}|${recordRev(raw)}|${String(r.origin)}` : "";
   };
   const remember = (rec: NoteRecord): SavedNote => {
-    const saved: SavedNote = { origin: rec.origin, savedAt: rec.savedAt, rev: rec.rev ?? 0, ...(rec.flags ? { flags: rec.flags } : {}), note: rec.note };
+    const saved: SavedNote = { origin: rec.origin, savedAt: rec.savedAt, rev: rec.rev ?? 0, ...(rec.flags ? { flags: rec.flags } : {}), ...(rec.flagCodes ? { flagCodes: rec.flagCodes } : {}), note: rec.note };
     checked.set(rec.id, { stamp: stampOf(rec), saved });
     return saved;
   };
@@ -464,7 +465,7 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
       if (!opts.validated) {
         for (const [k, n] of notes.entries()) {
           const p = parseLocationNote(n);
-          if (!p.ok) return { status: "failed", ...refusal({ code: "importNoteInvalid", figures: { number: k + 1, path: String(p.issues[0]?.path), problem: String(p.issues[0]?.message) } }) };
+          if (!p.ok) return { status: "failed", ...refusal({ code: "importNoteInvalid", figures: { number: k + 1, path: String(p.issues[0]?.path), problem: String(p.issues[0]?.message) } }), ...(p.issues[0] ? { issue: p.issues[0] } : {}) };
         }
       }
       const ids = new Set<string>();
@@ -474,7 +475,7 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
       }
       const { valid, problems, keys } = await readAll();
       const mine = new Map([...valid].map(([id, s]) => [id, s.note]));
-      const preview = previewMerge(notes, mine, new Map(problems.map((p) => [p.key, p.message])));
+      const preview = previewMerge(notes, mine, new Map(problems.map((p) => [p.key, { message: p.message, why: p.why }])));
       let choices: Record<string, ConflictChoice> = {};
       if (preview.conflicts.length > 0) {
         const chosen = await choose(preview.conflicts);

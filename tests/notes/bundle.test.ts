@@ -120,6 +120,8 @@ describe("export and import", () => {
       status: "failed",
       message: "Note 2 is not valid (revisions: must have at least 1 item); nothing was imported.",
       coded: { code: "importNoteInvalid", figures: { number: 2, path: "revisions", problem: "must have at least 1 item" } },
+      // The field issue itself, for the screen to write in its language.
+      issue: { path: "revisions", message: "must have at least 1 item", code: "minItems", figures: { count: 1 } },
     });
     expect(await snapshot(store)).toEqual(before);
     store.close();

@@ -92,7 +92,7 @@ describe("migrateV1Record", () => {
     expect(m.message).toBe("segments[0].gradient_permille: must be from -60 to 60 ‰ (got 90)");
     expect(m.partial).toMatchObject({ id: "harrowby-goods-loop", name: "Harrowby goods loop (test)", segments: [{ from_m: 0, length_m: 1600, gradient_permille: 90, curveRadius_m: 0 }] });
     expect(m.flags).toHaveLength(1);
-    expect(migrateV1Record(null)).toEqual({ ok: false, message: "not an object", partial: {}, flags: [] });
+    expect(migrateV1Record(null)).toEqual({ ok: false, message: "not an object", why: { code: "migrationNotObject" }, partial: {}, flags: [], flagCodes: [] });
   });
 });
 

@@ -10,5 +10,6 @@ import { notesDe } from "./notes.js";
 import { compactDe } from "./compact.js";
 import { sketchDe } from "./sketch.js";
 import { departureErrorsDe } from "./departureErrors.js";
+import { noteRecordsDe } from "./noteRecords.js";
 
-export const deLater: Catalog = { departures: departuresDe, notes: notesDe, noteChecks: noteChecksDe, compact: compactDe, sketch: sketchDe, departureErrors: departureErrorsDe };
+export const deLater: Catalog = { departures: departuresDe, notes: notesDe, noteChecks: noteChecksDe, compact: compactDe, sketch: sketchDe, departureErrors: departureErrorsDe, noteRecords: noteRecordsDe };

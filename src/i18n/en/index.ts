@@ -36,5 +36,6 @@ import { sensitivity } from "./sensitivity.js";
 import { readers } from "./readers.js";
 import { units } from "./units.js";
 import { departureErrors } from "./departureErrors.js";
+import { noteRecords } from "./noteRecords.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors, railmlText, tabs, compact, sketch, sensitivity, readers, units, departureErrors] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors, railmlText, tabs, compact, sketch, sensitivity, readers, units, departureErrors, noteRecords] as const;

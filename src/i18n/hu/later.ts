@@ -10,5 +10,6 @@ import { notesHu } from "./notes.js";
 import { compactHu } from "./compact.js";
 import { sketchHu } from "./sketch.js";
 import { departureErrorsHu } from "./departureErrors.js";
+import { noteRecordsHu } from "./noteRecords.js";
 
-export const huLater: Catalog = { departures: departuresHu, notes: notesHu, noteChecks: noteChecksHu, compact: compactHu, sketch: sketchHu, departureErrors: departureErrorsHu };
+export const huLater: Catalog = { departures: departuresHu, notes: notesHu, noteChecks: noteChecksHu, compact: compactHu, sketch: sketchHu, departureErrors: departureErrorsHu, noteRecords: noteRecordsHu };

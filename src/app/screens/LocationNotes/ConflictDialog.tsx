@@ -10,6 +10,7 @@ import type { ConflictChoice, ImportConflict } from "../../../notes/merge.js";
 import { SegmentedButtons } from "../../components/SegmentedButtons.js";
 import { notes } from "../../../i18n/en/notes.js";
 import { tr } from "../../i18n.js";
+import { recordProblemWords } from "./createNotesLibrary.js";
 
 const t = tr.ns(notes);
 
@@ -57,7 +58,7 @@ export function ConflictDialog(props: { conflicts: readonly ImportConflict[]; on
                   when={c.mine}
                   fallback={
                     <p>
-                      <strong>{t("cfOnDevice")}</strong> {t("cfDamaged", { problem: String(c.damaged) })}
+                      <strong>{t("cfOnDevice")}</strong> {t("cfDamaged", { problem: c.damagedWhy ? recordProblemWords({ key: c.id, why: c.damagedWhy }) : String(c.damaged) })}
                     </p>
                   }
                 >

@@ -6,7 +6,7 @@
 import { createMemo, createSignal, For, Show, type JSX } from "solid-js";
 import type { NoteRow, RecordProblem } from "../../../notes/records.js";
 import type { ExportReminder, PersistResult } from "../../../notes/reminder.js";
-import type { Notice } from "./createNotesLibrary.js";
+import { flagWords, recordProblemWords, type Notice } from "./createNotesLibrary.js";
 import { notes } from "../../../i18n/en/notes.js";
 import { tr } from "../../i18n.js";
 
@@ -212,10 +212,10 @@ export function Library(props: LibraryProps): JSX.Element {
             <For each={props.problems}>
               {(p) => (
                 <li>
-                  <span>{p.message}</span>
+                  <span>{recordProblemWords(p)}</span>
                   <Show when={p.rescue && p.rescue.flags.length > 0}>
                     <ul class="notes-small">
-                      <For each={p.rescue!.flags}>{(f) => <li>{f}</li>}</For>
+                      <For each={flagWords(p.rescue!.flags, p.rescue!.flagCodes)}>{(f) => <li>{f}</li>}</For>
                     </ul>
                   </Show>
                   <Show when={p.rescue}>

@@ -12,6 +12,7 @@ import { notes } from "../../../i18n/en/notes.js";
 import { LOCALE_TAGS } from "../../../i18n/language.js";
 import { appLang, tr } from "../../i18n.js";
 import { kept, rich } from "../shared/rich.js";
+import { recordProblemWords } from "./createNotesLibrary.js";
 
 const n = tr.ns(notes);
 
@@ -36,7 +37,7 @@ export function SaveConflictDialog(props: { conflict: SaveConflict; onChoose: (c
           </p>
         </Show>
         <Show when={props.conflict.damaged}>
-          <p>{n("scDamagedText", { problem: props.conflict.damaged!.message })}</p>
+          <p>{n("scDamagedText", { problem: recordProblemWords(props.conflict.damaged!) })}</p>
         </Show>
         <Show when={removed()}>
           <p>{n("scRemovedText")}</p>

@@ -16,6 +16,8 @@ import { notes } from "../../../i18n/en/notes.js";
 import { tr } from "../../i18n.js";
 import { localiseIssue } from "../../fieldWords.js";
 import { readerText } from "../../../i18n/renderReaders.js";
+import { migrationFlagText, notesClosedText, recordProblemText, type MigrationFlag, type RecordWhy } from "../../../profiles/noteRecordText.js";
+import type { ReaderCoded } from "../../../profiles/readerIssues.js";
 
 const nt = tr.ns(notes);
 
@@ -75,12 +77,50 @@ export interface NotesLibraryDeps {
   onClosed?: (f: (reason: "upgrade" | "terminated") => void) => () => void;
 }
 
+/** A field issue's message in the language on screen, its figures in the file's own (metric) units. */
+const issueWords = (i: FieldIssue) => localiseIssue(i, "metric").message;
+
 /** A refused file's issues in the language on screen, their figures in the file's own (metric) units. */
-const issueLines = (issues: readonly FieldIssue[]) =>
+export const issueLines = (issues: readonly FieldIssue[]) =>
   issues.map((i) => {
-    const m = localiseIssue(i, "metric").message;
+    const m = issueWords(i);
     return i.path ? `${i.path}: ${m}` : m;
   });
+
+/** A damaged record's message in the language on screen (read when drawn: a language switch redraws it). */
+export function recordProblemWords(p: { key: string; why: RecordWhy }): string {
+  return recordProblemText(tr, p.key, p.why, issueWords);
+}
+
+/**
+ * What carrying a note over from the older format left out, in the language on screen: from the codes
+ * when the record keeps them, else the English it was stored with.
+ */
+export function flagWords(flags: readonly string[], codes?: readonly MigrationFlag[]): string[] {
+  return codes && codes.length === flags.length ? codes.map((c) => migrationFlagText(tr, c)) : [...flags];
+}
+
+/** A refused import or review in the language on screen; a refused note's field issue in the screen's words too. */
+export function refusalWords(coded: ReaderCoded, issue?: FieldIssue): string {
+  if (issue && coded.code === "importNoteInvalid" && coded.figures) return readerText(tr, { ...coded, figures: { ...coded.figures, problem: issueWords(issue) } });
+  return readerText(tr, coded);
+}
+
+/**
+ * A notice whose words are written when it is drawn, so a language switch redraws it: `text` (and
+ * `details`) read the language on screen each time.
+ */
+export function wordsNotice(kind: Notice["kind"], text: () => string, more: { details?: () => string[]; reload?: boolean } = {}): Notice {
+  const n: Notice = {
+    kind,
+    get text() {
+      return text();
+    },
+  };
+  if (more.details) Object.defineProperty(n, "details", { get: more.details, enumerable: true });
+  if (more.reload) n.reload = true;
+  return n;
+}
 
 export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
   const [ready, setReady] = createSignal(false);
@@ -99,7 +139,8 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
   /** The library was closed under the page: say so, with a way to reload; the editor's draft is kept. */
   const closedNotice = (e: NotesClosedError) => {
     setClosed(e.reason);
-    setNotice({ kind: "problem", text: e.message, reload: true });
+    const reason = e.reason;
+    setNotice(wordsNotice("problem", () => notesClosedText(tr, reason), { reload: true }));
   };
   /** Run a library action; a closed library is reported, not thrown. */
   async function guarded<T>(f: (s: NotesStore) => Promise<T>): Promise<T | undefined> {
@@ -176,31 +217,37 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
 
   const importRead = async (read: NotesFileResult, fileName: string, ask: (c: ImportConflict[]) => Promise<Record<string, ConflictChoice> | null>, validated: boolean) => {
     if (!read.ok) {
-      const headline = readerText(tr, read.headline) + (read.nothingChanged ? ` ${readerText(tr, { code: "nothingChanged" })}` : "");
-      setNotice({ kind: "problem", text: `${fileName}: ${headline}`, details: issueLines(read.issues) });
+      const { headline, nothingChanged, issues } = read;
+      setNotice(
+        wordsNotice("problem", () => `${fileName}: ${readerText(tr, headline)}${nothingChanged ? ` ${readerText(tr, { code: "nothingChanged" })}` : ""}`, {
+          details: () => issueLines(issues),
+        }),
+      );
       return;
     }
     const outcome = await guarded((s) => s.importBundle(read.notes, ask, { validated, reviews: read.reviews }));
     if (outcome === undefined) return;
     if (outcome.status === "cancelled") {
-      setNotice({ kind: "done", text: nt("nfImportCancelled", { file: fileName }) });
+      setNotice(wordsNotice("done", () => nt("nfImportCancelled", { file: fileName })));
       return;
     }
     if (outcome.status === "failed") {
-      setNotice({ kind: "problem", text: `${fileName}: ${readerText(tr, outcome.coded)}` });
+      const { coded, issue } = outcome;
+      setNotice(wordsNotice("problem", () => `${fileName}: ${refusalWords(coded, issue)}`));
       return;
     }
     await afterChange();
     const sm = outcome.summary;
-    const parts = [
-      sm.added.length > 0 ? nt("nfAdded", { count: sm.added.length }) : "",
-      sm.repaired.length > 0 ? nt("nfRepaired", { count: sm.repaired.length }) : "",
-      sm.replaced.length > 0 ? nt("nfReplaced", { count: sm.replaced.length }) : "",
-      sm.keptMine.length > 0 ? nt("nfKeptMine", { count: sm.keptMine.length }) : "",
-      sm.copies.length > 0 ? nt("nfCopies", { count: sm.copies.length }) : "",
-      sm.unchanged.length > 0 ? nt("nfUnchanged", { count: sm.unchanged.length }) : "",
-    ].filter(Boolean);
-    setNotice({ kind: "done", text: nt("nfImported", { file: fileName, parts: parts.join(", ") || nt("nfNothingToImport") }) });
+    const parts = () =>
+      [
+        sm.added.length > 0 ? nt("nfAdded", { count: sm.added.length }) : "",
+        sm.repaired.length > 0 ? nt("nfRepaired", { count: sm.repaired.length }) : "",
+        sm.replaced.length > 0 ? nt("nfReplaced", { count: sm.replaced.length }) : "",
+        sm.keptMine.length > 0 ? nt("nfKeptMine", { count: sm.keptMine.length }) : "",
+        sm.copies.length > 0 ? nt("nfCopies", { count: sm.copies.length }) : "",
+        sm.unchanged.length > 0 ? nt("nfUnchanged", { count: sm.unchanged.length }) : "",
+      ].filter(Boolean);
+    setNotice(wordsNotice("done", () => nt("nfImported", { file: fileName, parts: parts().join(", ") || nt("nfNothingToImport") })));
   };
 
   void refresh();
@@ -239,7 +286,8 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       }
       if (r.ok) {
         await afterChange();
-        setNotice({ kind: "done", text: nt("nfSaved", { name: r.saved.note.name }) });
+        const name = r.saved.note.name;
+        setNotice(wordsNotice("done", () => nt("nfSaved", { name })));
       }
       return r;
     },
@@ -248,7 +296,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       const done = await guarded((s) => s.delete(key));
       if (done === undefined) return;
       await afterChange();
-      setNotice({ kind: "done", text: nt("nfRemoved", { name }) });
+      setNotice(wordsNotice("done", () => nt("nfRemoved", { name })));
     },
     async rawText(key) {
       const raw = await guarded((s) => s.rawRecord(key));
@@ -260,7 +308,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       const done = await guarded(async (s) => (await s.clear(), true));
       if (!done) return;
       await afterChange();
-      setNotice({ kind: "done", text: nt("nfRemovedAll", { count: n }) });
+      setNotice(wordsNotice("done", () => nt("nfRemovedAll", { count: n })));
     },
     async importText(text, fileName, ask) {
       await importRead(readNotesText(text), fileName, ask, true);
@@ -279,7 +327,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       const n = await guarded((s) => s.restoreDemos());
       if (n === undefined) return;
       await afterChange();
-      setNotice({ kind: "done", text: n > 0 ? nt("nfPutBack", { count: n }) : nt("nfAllDemos") });
+      setNotice(wordsNotice("done", () => (n > 0 ? nt("nfPutBack", { count: n }) : nt("nfAllDemos"))));
     },
   };
 }

@@ -21,7 +21,7 @@ import { APP_VERSION } from "../../version.js";
 import { setReviewTarget } from "../../state/reviewTarget.js";
 import { cardComplete } from "./Card.js";
 import { createNoteEditor } from "./createNoteEditor.js";
-import { createNotesLibrary, downloadBundle } from "./createNotesLibrary.js";
+import { createNotesLibrary, downloadBundle, flagWords } from "./createNotesLibrary.js";
 import { draftFromPartial, idFromName, storedNoteDraft, today, type NoteDraft } from "./draft.js";
 import { SaveConflictDialog } from "./SaveConflictDialog.js";
 import { noteLoadTableOn } from "./loadTableRunner.js";
@@ -195,7 +195,7 @@ export function LocationNotesScreen(): JSX.Element {
     lib.setNotice({
       kind: "problem",
       text: nt("nfRescue", { name: String(p.rescue.note.name ?? p.key) }),
-      ...(p.rescue.flags.length > 0 ? { details: p.rescue.flags } : {}),
+      ...(p.rescue.flags.length > 0 ? { details: flagWords(p.rescue.flags, p.rescue.flagCodes) } : {}),
     });
   };
 
@@ -287,7 +287,7 @@ export function LocationNotesScreen(): JSX.Element {
   };
   const showNote = (s: SavedNote, then: Mode) => {
     // A note carried over from the older format with something left out says what, until it is saved again.
-    lib.setNotice(s.flags && s.flags.length > 0 ? { kind: "problem", text: nt("nfOlderFormat"), details: s.flags } : null);
+    lib.setNotice(s.flags && s.flags.length > 0 ? { kind: "problem", text: nt("nfOlderFormat"), details: flagWords(s.flags, s.flagCodes) } : null);
     editor.load(s.note);
     setBase({ rev: s.rev });
     setMode(then);
