@@ -12,7 +12,7 @@ import { openDB } from "idb";
 import { afterEach, describe, expect, it } from "vitest";
 import LocationNotesScreen from "../../src/app/screens/LocationNotes/index.js";
 import { refusalWords } from "../../src/app/screens/LocationNotes/createNotesLibrary.js";
-import { DEFAULT_NOTES_DB, migrateV1Record, openNotesStore, type NoteRecordV1 } from "../../src/notes/index.js";
+import { DEFAULT_NOTES_DB, migrateV1Record, openNotesStore } from "../../src/notes/index.js";
 import { builtinLocations } from "../../src/profiles/builtin.js";
 import { appLang, setAppLanguage } from "../../src/app/i18n.js";
 import { SETTINGS_KEY } from "../../src/app/state/createSettings.js";
@@ -51,7 +51,7 @@ async function writeDamage(): Promise<void> {
   await db.put("notes", { id: "moved-note", origin: "mine", savedAt: "2026-03-01T10:00:00.000Z", rev: 1, note: demo } as never);
   await db.put("notes", { id: "half-written", origin: "mine", savedAt: "2026-03-01T10:00:00.000Z", rev: 1, note: { ...demo, id: "half-written", clearAhead_m: 250000 } } as never);
   // Carried over with something left out: the flags and their codes, as the upgrade writes them.
-  const carried = migrateV1Record({ ...steep, id: "gentle-siding", title: "Gentle siding (test)", profile: { ...steep.profile, segments: [{ start_m: 0, length_m: 1500, grade_permille: 9, radius_m: 0 }] } } satisfies Partial<NoteRecordV1> as unknown);
+  const carried = migrateV1Record({ ...steep, id: "gentle-siding", title: "Gentle siding (test)", profile: { ...steep.profile, segments: [{ start_m: 0, length_m: 1500, grade_permille: 9, radius_m: 0 }] } } as unknown);
   if (!carried.ok) throw new Error(carried.message);
   await db.put("notes", carried.record as never);
   await db.put("meta", String(Number((await db.get("meta", "changes")) ?? "0") + 1), "changes");
