@@ -1,5 +1,5 @@
 /**
- * The words of Assistance check and Start review in Hungarian and German: a chunk per language of their
+ * The words of Assistance check and Start review (and of Settings' list of sources) in Hungarian and German: a chunk per language of their
  * own, loaded with the first of those screens (its module awaits `checkWords`), so neither the first plan
  * nor the catalog loaded before it carries them. English is in each screen's own chunk.
  */

@@ -5,5 +5,7 @@
 import type { Catalog } from "../messages.js";
 import { assistDe } from "./assist.js";
 import { reviewDe } from "./review.js";
+import { failuresDe } from "./failures.js";
+import { sourcesDe } from "./sources.js";
 
-export const deChecks: Catalog = { assist: assistDe, review: reviewDe };
+export const deChecks: Catalog = { assist: assistDe, review: reviewDe, failures: failuresDe, sources: sourcesDe };

@@ -5,5 +5,7 @@
 import type { Catalog } from "../messages.js";
 import { assistHu } from "./assist.js";
 import { reviewHu } from "./review.js";
+import { failuresHu } from "./failures.js";
+import { sourcesHu } from "./sources.js";
 
-export const huChecks: Catalog = { assist: assistHu, review: reviewHu };
+export const huChecks: Catalog = { assist: assistHu, review: reviewHu, failures: failuresHu, sources: sourcesHu };

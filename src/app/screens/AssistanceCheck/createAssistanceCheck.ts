@@ -10,6 +10,20 @@ import type { StartCase } from "../../../core/train/types.js";
 import type { LocomotiveSpec } from "../../../core/physics/types.js";
 import type { Outcome, PlannerCalls } from "../../../worker/client.js";
 import type { AssistanceAnswer } from "../../../worker/protocol.js";
+import { failures } from "../../../i18n/en/failures.js";
+import { readerMessage } from "../../../i18n/renderReaders.js";
+import { tr } from "../../i18n.js";
+
+const tf = tr.ns(failures);
+
+/** Why a request gave no answer, in the language on screen: a refused case with its issues, a failure's own words, a stopped planner. */
+function failureWords(o: Extract<Outcome<unknown>, { ok: false }>): string {
+  if (o.kind === "invalid") {
+    const issues = o.issues.map((i) => `${i.path}: ${i.reader ? readerMessage(tr, i.reader) : i.message}`).join("; ");
+    return issues ? tf("caseRefusedBecause", { issues }) : tf("caseRefused");
+  }
+  return o.kind === "crashed" ? tf("plannerStopped") : tf("internalError", { detail: o.message });
+}
 
 export type CheckStatus = "invalid" | "running" | "done" | "cancelled" | "failed";
 
@@ -59,7 +73,10 @@ export function createAssistanceCheck(deps: AssistanceCheckDeps): AssistanceChec
   const [assistProgress, setAssistProgress] = createSignal(0);
   const [margins, setMargins] = createSignal<ConditionMargin[] | null>(null);
   const [answer, setAnswer] = createSignal<AssistanceAnswer | null>(null);
-  const [error, setError] = createSignal<string | null>(null);
+  // Why a part failed, written when it is shown (a language switch redraws it).
+  const [errorWords, setErrorWords] = createSignal<(() => string) | null>(null);
+  const setError = (words: (() => string) | null) => setErrorWords(() => words);
+  const error = () => errorWords()?.() ?? null;
   const [nonce, setNonce] = createSignal(0);
   let controller: AbortController | null = null;
 
@@ -68,10 +85,6 @@ export function createAssistanceCheck(deps: AssistanceCheckDeps): AssistanceChec
     controller = null;
   };
 
-  const failure = <T>(o: Outcome<T>): string | null => {
-    if (o.ok) return null;
-    return o.issues.length > 0 ? `${o.message} ${o.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}` : o.message;
-  };
 
   const start = (c: StartCase, key: string) => {
     const ctrl = new AbortController();
@@ -86,14 +99,14 @@ export function createAssistanceCheck(deps: AssistanceCheckDeps): AssistanceChec
     const m = deps.workers.conditionMargins(c, { signal: ctrl.signal, onProgress: (f) => live() && setMarginsProgress(f) }).then((o) => {
       if (!live()) return null;
       if (o.ok) setMargins(o.result);
-      else setError(`Margins per rail condition: ${failure(o)}`);
+      else setError(() => tf("marginsFailed", { why: failureWords(o) }));
       return o.ok ? o.result : null;
     });
     const added = deps.added?.() ?? {};
     const a = deps.workers.assistance(c, { signal: ctrl.signal, onProgress: (f) => live() && setAssistProgress(f), ...(added.helper ? { helper: added.helper } : {}), ...(added.control ? { control: added.control } : {}) }).then((o) => {
       if (!live()) return null;
       if (o.ok) setAnswer(o.result);
-      else setError(`Assistance search: ${failure(o)}`);
+      else setError(() => tf("searchFailed", { why: failureWords(o) }));
       return o.ok ? o.result : null;
     });
     Promise.all([m, a]).then(
@@ -107,7 +120,8 @@ export function createAssistanceCheck(deps: AssistanceCheckDeps): AssistanceChec
       },
       (e: unknown) => {
         if ((e as { name?: string }).name === "AbortError" || !live()) return;
-        setError(e instanceof Error ? e.message : String(e));
+        const detail = e instanceof Error ? e.message : String(e);
+        setError(() => tf("internalError", { detail }));
         setStatus("failed");
       },
     );

@@ -12,8 +12,10 @@ import { DEFAULT_APP_SETTINGS, SAFETY_BOUNDS, type AppSettings, type ThemeChoice
 import { settings as en } from "../../../i18n/en/settings.js";
 import { LANGS, LANGUAGE_NAMES } from "../../../i18n/language.js";
 import { appNumber, tr, type LanguageChoice } from "../../i18n.js";
+import { sources } from "../../../i18n/en/sources.js";
 
 const t = tr.ns(en);
+const ts = tr.ns(sources);
 
 export interface SettingsViewProps {
   settings: AppSettings;
@@ -178,13 +180,14 @@ export function SettingsView(props: SettingsViewProps): JSX.Element {
         <p>{t("demoDataText")}</p>
         <h3>{t("sources")}</h3>
         <ul class="sources">
-          <li>Adhesion against speed: E. W. Curtius and A. Kniffler, Elektrische Bahnen 20 (1950).</li>
-          <li>Adhesion as a statistical problem: S. Johnsson, IMechE (1963).</li>
-          <li>Running resistance: W. J. Davis Jr., General Electric Review 29 (1926).</li>
-          <li>Curve resistance: the Röckl formula, cross-checked with the per-degree rule of US practice.</li>
-          <li>Starting resistance: W. W. Hay, Railroad Engineering, 2nd ed. (1982).</li>
-          <li>Diesel-electric traction: W. J. White, How Diesel-Electric Locomotives Operate (1997).</li>
-          <li>Longitudinal train dynamics: C. Cole, in Handbook of Railway Vehicle Dynamics (2006); Wu, Spiryagin and Cole, Vehicle System Dynamics 54 (2016).</li>
+          {/* The subjects in the language on screen; the works as they were published. */}
+          <li>{ts("adhesionSpeed", { work: "E. W. Curtius and A. Kniffler, Elektrische Bahnen 20 (1950)." })}</li>
+          <li>{ts("adhesionStatistics", { work: "S. Johnsson, IMechE (1963)." })}</li>
+          <li>{ts("runningResistance", { work: "W. J. Davis Jr., General Electric Review 29 (1926)." })}</li>
+          <li>{ts("curveResistance", { formula: "Röckl" })}</li>
+          <li>{ts("startingResistance", { work: "W. W. Hay, Railroad Engineering, 2nd ed. (1982)." })}</li>
+          <li>{ts("traction", { work: "W. J. White, How Diesel-Electric Locomotives Operate (1997)." })}</li>
+          <li>{ts("trainDynamics", { work: "C. Cole, in Handbook of Railway Vehicle Dynamics (2006); Wu, Spiryagin and Cole, Vehicle System Dynamics 54 (2016)." })}</li>
           <For each={props.sources}>{(src) => <li>{src}</li>}</For>
         </ul>
       </section>

@@ -3,6 +3,16 @@ import type { JSX } from "solid-js";
 import { builtinRailConditions } from "../../../profiles/builtin.js";
 import { useApp } from "../../context.js";
 import { SettingsView } from "./View.js";
+import { sources } from "../../../i18n/en/sources.js";
+import { appNumber, tr } from "../../i18n.js";
+import { checkWords } from "../../checkWords.js";
+
+// The list of sources in the language on screen (in the catalog part of the screens opened later) comes before the screen shows.
+await checkWords;
+
+const ts = tr.ns(sources);
+/** A coefficient with the decimals the table gives it, in the language on screen. */
+const coefficient = (x: number) => appNumber(x, String(x).split(".")[1]?.length ?? 0);
 
 declare const __TAUT_VERSION__: string | undefined;
 
@@ -17,7 +27,7 @@ export default function Settings(): JSX.Element {
       offlineReady={app.offline.ready()}
       offlineSupported={app.offline.supported}
       onCheckUpdate={() => void app.offline.check()}
-      sources={Object.entries(builtinRailConditions.conditions).map(([rail, c]) => `Rail condition "${rail}" (median μ ${c.median}, ${c.sanded} with sand): ${c.source}`)}
+      sources={Object.entries(builtinRailConditions.conditions).map(([rail, c]) => ts("railCondition", { rail, median: coefficient(c.median), sanded: coefficient(c.sanded), source: c.source }))}
       version={typeof __TAUT_VERSION__ === "string" ? __TAUT_VERSION__ : "dev"}
     />
   );
