@@ -80,7 +80,7 @@ describe("the Departures screen's own errors in Hungarian and German", () => {
     it(`${lang}: rows the planner did not answer, with the work cap's figures and the program's own detail`, async () => {
       const d = createTranslator(lang, catalog).ns(departures);
       const { unmount } = renderWithApp(() => <Departures />, { storage: inLanguage(lang), pool: fakePool({ check: outcome }) });
-      await waitFor(() => expect(appLang()).toBe(lang));
+      await waitFor(() => expect(appLang()).toBe(lang), { timeout: 10_000 });
       fireEvent.change(screen.getByLabelText(d("pickLabel")), { target: { files: [dayFile()] } });
       await waitFor(() => expect(document.querySelector(".bad-rows h2")?.textContent).toBe(d("badHeading", { count: 3 })));
       const items = [...document.querySelectorAll(".bad-rows li")].map((li) => li.textContent!);
@@ -110,7 +110,7 @@ describe("the Departures screen's own errors in Hungarian and German", () => {
     it(`${lang}: a case file not picked with its CSV, and picked files without a departures file`, async () => {
       const d = createTranslator(lang, catalog).ns(departures);
       const { unmount } = renderWithApp(() => <Departures />, { storage: inLanguage(lang), pool: fakePool({ check: outcome }) });
-      await waitFor(() => expect(appLang()).toBe(lang));
+      await waitFor(() => expect(appLang()).toBe(lang), { timeout: 10_000 });
       const csv = new File(["id,case,rail,sand\nx-1,cases/far-away.json,dry,no\n"], "day-7.csv", { type: "text/csv" });
       fireEvent.change(screen.getByLabelText(d("pickLabel")), { target: { files: [csv] } });
       await waitFor(() => expect(badText()).not.toBe(""));

@@ -111,7 +111,7 @@ describe("the notes library's messages in Hungarian and German", () => {
       const storage = memoryStorage();
       storage.setItem(SETTINGS_KEY, JSON.stringify({ language: lang }));
       const { unmount } = renderWithApp(() => <LocationNotesScreen />, { storage, pool: quickTablePool() });
-      await waitFor(() => expect(appLang()).toBe(lang));
+      await waitFor(() => expect(appLang()).toBe(lang), { timeout: 10_000 });
       await waitFor(() => expect(document.querySelectorAll(".notes-damaged > ul > li")).toHaveLength(5), { timeout: 10_000 });
       const text = damagedText();
       // The ids, the field's path and figures as the record holds them; the range with the app's minus.
@@ -161,7 +161,7 @@ describe("the notes library's messages in Hungarian and German", () => {
       const storage = memoryStorage();
       storage.setItem(SETTINGS_KEY, JSON.stringify({ language: lang }));
       const { unmount } = renderWithApp(() => <LocationNotesScreen />, { storage, pool: quickTablePool() });
-      await waitFor(() => expect(appLang()).toBe(lang));
+      await waitFor(() => expect(appLang()).toBe(lang), { timeout: 10_000 });
       if (!newer) {
         await waitFor(() => expect(listed().length).toBeGreaterThan(0), { timeout: 10_000 });
         const version = await openDB(DEFAULT_NOTES_DB).then((db) => (db.close(), db.version));
