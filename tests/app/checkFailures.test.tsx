@@ -2,17 +2,26 @@
  * The Assistance check's failures and Settings' list of sources in Hungarian and German: a case the planner
  * refuses (beyond the work cap: its figures with the language's decimal sign) and a planner that stopped, in
  * the language on screen and redrawn when it changes; the sources' subjects in the language, the works cited
- * as they were published, and the rail table's figures with the language's decimal sign.
+ * as they were published, and the rail table's figures with the language's decimal sign; and the print
+ * stamp of a screen printed before its figures are in says what it waits for in the language.
  */
 import { screen, waitFor } from "@solidjs/testing-library";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import AssistanceCheck from "../../src/app/screens/AssistanceCheck/index.js";
 import { forgetAssistanceChecks } from "../../src/app/screens/AssistanceCheck/createAssistanceCheck.js";
 import Settings from "../../src/app/screens/Settings/index.js";
+import Departures from "../../src/app/screens/Departures/index.js";
+import { PrintStamp } from "../../src/app/components/PrintStamp.js";
+import { fireEvent } from "@solidjs/testing-library";
 import { PLAN_WORK_CAP_VEHICLE_STEPS, type PlanWorkProblem } from "../../src/core/planner/workCap.js";
 import { appLang, setAppLanguage } from "../../src/app/i18n.js";
 import { SETTINGS_KEY } from "../../src/app/state/createSettings.js";
 import { builtinRailConditions } from "../../src/profiles/builtin.js";
+import { readFileSync } from "node:fs";
+import { join } from "node:path";
+
+/** A demo start case as a file holds it. */
+const builtinCase = () => JSON.parse(readFileSync(join(process.cwd(), "profiles", "cases", "demo-ore-lantern.json"), "utf8")) as unknown;
 import { memoryStorage, renderWithApp } from "./harness.js";
 import { fakePool } from "./dispatch/fakes.js";
 
@@ -83,4 +92,27 @@ describe("Settings' list of sources in Hungarian and German", () => {
     });
   }
   void screen;
+});
+
+describe("the print stamp of a screen printed too early, in Hungarian and German", () => {
+  for (const [lang, waiting] of [["de", "Unvollständig — warten auf: die Prüfung aller Abfahrten."], ["hu", "Hiányos — várjon: minden indulás ellenőrzésére."]] as const) {
+    it(`${lang}: Departures while its rows are checked`, async () => {
+      const pool = fakePool({});
+      const { unmount } = renderWithApp(
+        () => (
+          <>
+            <PrintStamp screen="Departures" />
+            <Departures />
+          </>
+        ),
+        { storage: inLanguage(lang), pool },
+      );
+      await waitFor(() => expect(appLang()).toBe(lang), { timeout: 10_000 });
+      const day = new File([JSON.stringify([JSON.parse(JSON.stringify(builtinCase()))])], "day.json");
+      fireEvent.change(document.querySelector('input[type="file"]')!, { target: { files: [day] } });
+      await waitFor(() => expect(pool.calls.some((c) => c.kind === "check")).toBe(true), { timeout: 5_000 });
+      expect(document.querySelector(".print-incomplete strong")!.textContent).toBe(waiting);
+      unmount();
+    });
+  }
 });

@@ -21,5 +21,6 @@ import { chartDe } from "./chart.js";
 import { sensitivityDe } from "./sensitivity.js";
 import { readersDe } from "./readers.js";
 import { unitsDe } from "./units.js";
+import { printWaitsDe } from "./printWaits.js";
 
-export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe, train: trainDe, chart: chartDe, groups: groupsDe, cab: cabDe, tabs: tabsDe, sensitivity: sensitivityDe, readers: readersDe, units: unitsDe };
+export const de: Catalog = { shell: shellDe, words: wordsDe, settings: settingsDe, card: cardDe, steps: stepsDe, plan: planDe, inputs: inputsDe, dispatch: dispatchDe, cautions: cautionsDe, reasons: reasonsDe, guidance: guidanceDe, assistNotes: assistNotesDe, advice: adviceDe, train: trainDe, chart: chartDe, groups: groupsDe, cab: cabDe, tabs: tabsDe, sensitivity: sensitivityDe, readers: readersDe, units: unitsDe, printWaits: printWaitsDe };

@@ -39,5 +39,6 @@ import { departureErrors } from "./departureErrors.js";
 import { noteRecords } from "./noteRecords.js";
 import { failures } from "./failures.js";
 import { sources } from "./sources.js";
+import { printWaits } from "./printWaits.js";
 
-export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors, railmlText, tabs, compact, sketch, sensitivity, readers, units, departureErrors, noteRecords, failures, sources] as const;
+export const NAMESPACES = [shell, words, settings, card, steps, plan, inputs, dispatch, cautions, cli, departures, notes, reasons, guidance, assistNotes, advice, fields, noteChecks, train, assist, review, chart, groups, cab, cliSimulate, cliNotes, cliHelp, cliErrors, railmlText, tabs, compact, sketch, sensitivity, readers, units, departureErrors, noteRecords, failures, sources, printWaits] as const;

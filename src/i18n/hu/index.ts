@@ -21,5 +21,6 @@ import { chartHu } from "./chart.js";
 import { sensitivityHu } from "./sensitivity.js";
 import { readersHu } from "./readers.js";
 import { unitsHu } from "./units.js";
+import { printWaitsHu } from "./printWaits.js";
 
-export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu, dispatch: dispatchHu, cautions: cautionsHu, reasons: reasonsHu, guidance: guidanceHu, assistNotes: assistNotesHu, advice: adviceHu, train: trainHu, chart: chartHu, groups: groupsHu, cab: cabHu, tabs: tabsHu, sensitivity: sensitivityHu, readers: readersHu, units: unitsHu };
+export const hu: Catalog = { shell: shellHu, words: wordsHu, settings: settingsHu, card: cardHu, steps: stepsHu, plan: planHu, inputs: inputsHu, dispatch: dispatchHu, cautions: cautionsHu, reasons: reasonsHu, guidance: guidanceHu, assistNotes: assistNotesHu, advice: adviceHu, train: trainHu, chart: chartHu, groups: groupsHu, cab: cabHu, tabs: tabsHu, sensitivity: sensitivityHu, readers: readersHu, units: unitsHu, printWaits: printWaitsHu };

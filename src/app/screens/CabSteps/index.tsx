@@ -4,6 +4,8 @@ import { useApp } from "../../context.js";
 import { declarePrintStatus } from "../../state/printStatus.js";
 import { createWakeLock } from "../../state/createWakeLock.js";
 import { CabStepsView } from "./View.js";
+import { printWaits } from "../../../i18n/en/printWaits.js";
+import { tr } from "../../i18n.js";
 
 /** Seconds since `key()` last changed, ticking twice a second. */
 export function createStepClock(key: () => unknown, now: () => number = () => performance.now()): () => number {
@@ -38,7 +40,7 @@ export default function CabSteps(): JSX.Element {
   declarePrintStatus(() => {
     const s = app.run.status();
     const c = checked();
-    return { complete: !(s === "running" || s === "waiting" || (s === "done" && !app.run.current())), waitingFor: "the plan", inputs: c.ok ? c.value : null };
+    return { complete: !(s === "running" || s === "waiting" || (s === "done" && !app.run.current())), waitingFor: tr.ns(printWaits)("plan"), inputs: c.ok ? c.value : null };
   });
   return (
     <CabStepsView

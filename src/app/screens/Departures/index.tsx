@@ -19,6 +19,7 @@ import { departures } from "../../../i18n/en/departures.js";
 import { tr } from "../../i18n.js";
 import { laterWords } from "../../laterWords.js";
 import { fieldWords, localiseIssue } from "../../fieldWords.js";
+import { printWaits } from "../../../i18n/en/printWaits.js";
 
 // This screen's words in the language on screen (a chunk of their own) come before it shows, and the
 // field messages of a refused file or row.
@@ -74,7 +75,7 @@ export default function Departures(): JSX.Element {
   } = screenState(app.pool);
   const [reading, setReading] = createSignal(false);
   const rows = run.rows;
-  declarePrintStatus(() => ({ complete: run.state() !== "running", waitingFor: "every departure to be checked", inputs: loaded()?.picked ?? null }));
+  declarePrintStatus(() => ({ complete: run.state() !== "running", waitingFor: tr.ns(printWaits)("departures"), inputs: loaded()?.picked ?? null }));
 
   const load = async (picked: PickedFile[]) => {
     setReading(true);

@@ -17,6 +17,7 @@ import { createLoadTableRun } from "./createLoadTableRun.js";
 import { LoadTableView } from "./View.js";
 import { dispatch } from "../../../i18n/en/dispatch.js";
 import { tr } from "../../i18n.js";
+import { printWaits } from "../../../i18n/en/printWaits.js";
 
 const t = tr.ns(dispatch);
 
@@ -78,7 +79,7 @@ export default function LoadTable(): JSX.Element {
     return p && p.ok ? p.value : null;
   });
   const run = createLoadTableRun({ workers: app.pool, parallel: app.pool.size, startCase });
-  declarePrintStatus(() => ({ complete: run.status() !== "running", waitingFor: "the load table", inputs: startCase() }));
+  declarePrintStatus(() => ({ complete: run.status() !== "running", waitingFor: tr.ns(printWaits)("loadTable"), inputs: startCase() }));
   const summary = createMemo(() => {
     const r = ref();
     return r ? referenceSummary(r, builtinTrains, lib()) : null;

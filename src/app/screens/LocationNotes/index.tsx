@@ -36,6 +36,7 @@ import { tr } from "../../i18n.js";
 import { laterWords } from "../../laterWords.js";
 import { fieldWords } from "../../fieldWords.js";
 import { railmlTextWords } from "./railml/words.js";
+import { printWaits } from "../../../i18n/en/printWaits.js";
 
 // This screen's words in the language on screen (a chunk of their own) come before it shows, and the
 // field words its editor's last check (the schema) speaks in.
@@ -264,7 +265,7 @@ export function LocationNotesScreen(): JSX.Element {
   // The editor printed as it is (the card prints its own stamp): incomplete while its load table is coming.
   declarePrintStatus(() => ({
     complete: mode() === "library" || cardComplete(cardLoadTable(editor)),
-    waitingFor: "the load table",
+    waitingFor: tr.ns(printWaits)("loadTable"),
     inputs: mode() === "library" ? null : noteFigureInputs(editor.draft, builtinTrains, profiles, APP_VERSION, editor.draft.referenceTrain),
   }));
 

@@ -5,6 +5,8 @@ import { PALETTES } from "../../charts/palette.js";
 import { useApp } from "../../context.js";
 import { declarePrintStatus } from "../../state/printStatus.js";
 import { StartPlanView } from "./View.js";
+import { printWaits } from "../../../i18n/en/printWaits.js";
+import { tr } from "../../i18n.js";
 
 export default function StartPlan(): JSX.Element {
   const app = useApp();
@@ -15,7 +17,7 @@ export default function StartPlan(): JSX.Element {
     const c = checked();
     return {
       complete: !(s === "running" || s === "waiting" || (s === "done" && (!app.run.current() || app.run.massPending()))),
-      waitingFor: "the plan",
+      waitingFor: tr.ns(printWaits)("plan"),
       inputs: c.ok ? c.value : null,
     };
   });
