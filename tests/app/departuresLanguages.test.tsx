@@ -82,7 +82,7 @@ describe("the Departures screen's own errors in Hungarian and German", () => {
       const { unmount } = renderWithApp(() => <Departures />, { storage: inLanguage(lang), pool: fakePool({ check: outcome }) });
       await waitFor(() => expect(appLang()).toBe(lang), { timeout: 10_000 });
       fireEvent.change(screen.getByLabelText(d("pickLabel")), { target: { files: [dayFile()] } });
-      await waitFor(() => expect(document.querySelector(".bad-rows h2")?.textContent).toBe(d("badHeading", { count: 3 })));
+      await waitFor(() => expect(document.querySelector(".bad-rows h2")?.textContent).toBe(d("badHeading", { count: 3 })), { timeout: 10_000 });
       const items = [...document.querySelectorAll(".bad-rows li")].map((li) => li.textContent!);
       expect(items).toHaveLength(3);
       const [heavy, fault, stop] = ["[0]", "[1]", "[2]"].map((w) => items.find((t) => t.startsWith(`${w}: `)) ?? "") as [string, string, string];
@@ -101,7 +101,7 @@ describe("the Departures screen's own errors in Hungarian and German", () => {
       for (const e of ENGLISH) expect(shown).not.toMatch(e);
       // The export keeps the English `taut check` writes.
       fireEvent.click(screen.getByRole("button", { name: new RegExp(d("exportCsv")) }));
-      await waitFor(() => expect(saved).toHaveLength(1));
+      await waitFor(() => expect(saved).toHaveLength(1), { timeout: 10_000 });
       expect(saved[0]).toContain("[0]: cannot be checked: The start case is malformed. (train: one plan of this train would take 1.3 × 10^12 vehicle-steps");
       expect(saved[0]).toContain("[1]: internal error: RangeError: offset 7 is out of bounds");
       unmount();
@@ -113,7 +113,7 @@ describe("the Departures screen's own errors in Hungarian and German", () => {
       await waitFor(() => expect(appLang()).toBe(lang), { timeout: 10_000 });
       const csv = new File(["id,case,rail,sand\nx-1,cases/far-away.json,dry,no\n"], "day-7.csv", { type: "text/csv" });
       fireEvent.change(screen.getByLabelText(d("pickLabel")), { target: { files: [csv] } });
-      await waitFor(() => expect(badText()).not.toBe(""));
+      await waitFor(() => expect(badText()).not.toBe(""), { timeout: 10_000 });
       // "line 2" in the language's words, the file names as given.
       expect(badText()).toContain(lang === "de" ? "Zeile 2" : "2. sor");
       expect(badText()).toContain("cases/far-away.json: ");
@@ -123,13 +123,13 @@ describe("the Departures screen's own errors in Hungarian and German", () => {
       // Two CSVs at once, then nothing that is a departures file: the alert names the files, in the language.
       const twin = new File(["id,case\n"], "day-8.csv", { type: "text/csv" });
       fireEvent.change(screen.getByLabelText(d("pickLabel")), { target: { files: [csv, twin] } });
-      await waitFor(() => expect(document.querySelector("p.problem")?.textContent).toContain("day-8.csv"));
+      await waitFor(() => expect(document.querySelector("p.problem")?.textContent).toContain("day-8.csv"), { timeout: 10_000 });
       const two = document.querySelector("p.problem")!.textContent!;
       expect(two).toContain("day-7.csv, day-8.csv");
       for (const e of ENGLISH) expect(two).not.toMatch(e);
       const caseFile = new File([read("cases/demo-ore-lantern.json")], "demo-ore-lantern.json");
       fireEvent.change(screen.getByLabelText(d("pickLabel")), { target: { files: [caseFile] } });
-      await waitFor(() => expect(document.querySelector("p.problem")?.textContent).not.toBe(two));
+      await waitFor(() => expect(document.querySelector("p.problem")?.textContent).not.toBe(two), { timeout: 10_000 });
       const none = document.querySelector("p.problem")!.textContent!;
       expect(none).toContain("demo-ore-lantern.json");
       expect(none).toContain("id,case,rail,sand");
@@ -141,14 +141,14 @@ describe("the Departures screen's own errors in Hungarian and German", () => {
   it("a language switch redraws the errors already on screen", async () => {
     const { unmount } = renderWithApp(() => <Departures />, { pool: fakePool({ check: outcome }) });
     fireEvent.change(screen.getByLabelText(departures.en.pickLabel), { target: { files: [dayFile()] } });
-    await waitFor(() => expect(document.querySelectorAll(".bad-rows li")).toHaveLength(3));
+    await waitFor(() => expect(document.querySelectorAll(".bad-rows li")).toHaveLength(3), { timeout: 10_000 });
     expect(badText()).toContain("[0]: cannot be checked (train: one plan of this train would take 1.3 × 10^12 vehicle-steps");
     expect(badText()).toContain("[2]: internal error: the planner stopped unexpectedly");
     await setAppLanguage("de");
-    await waitFor(() => expect(badText()).toContain("1,3 × 10^12"));
+    await waitFor(() => expect(badText()).toContain("1,3 × 10^12"), { timeout: 10_000 });
     for (const e of ENGLISH) expect(badText().replace("RangeError: offset 7 is out of bounds", "")).not.toMatch(e);
     await setAppLanguage("en");
-    await waitFor(() => expect(badText()).toContain("[0]: cannot be checked"));
+    await waitFor(() => expect(badText()).toContain("[0]: cannot be checked"), { timeout: 10_000 });
     unmount();
   });
 });

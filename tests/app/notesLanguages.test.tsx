@@ -123,7 +123,7 @@ describe("the notes library's messages in Hungarian and German", () => {
       for (const e of ENGLISH) expect(text).not.toMatch(e);
       // Opening the note carried over says what was left out, in the language.
       fireEvent.click([...document.querySelectorAll(".notes-item-open")].find((b) => b.textContent!.startsWith("Gentle siding (test)"))!);
-      await waitFor(() => expect(noticeText()).toContain(n("nfOlderFormat")));
+      await waitFor(() => expect(noticeText()).toContain(n("nfOlderFormat")), { timeout: 10_000 });
       expect(noticeText()).toContain('"slimy"');
       expect(noticeText()).toMatch(/\b2\b/);
       for (const e of ENGLISH) expect(noticeText()).not.toMatch(e);
@@ -146,10 +146,10 @@ describe("the notes library's messages in Hungarian and German", () => {
     await waitFor(() => expect(document.querySelectorAll(".notes-damaged > ul > li")).toHaveLength(5), { timeout: 10_000 });
     expect(damagedText()).toContain('The saved note "odd-origin" is damaged and was skipped');
     await setAppLanguage("de");
-    await waitFor(() => expect(damagedText()).toContain('Die gespeicherte Notiz "odd-origin" ist beschädigt'));
+    await waitFor(() => expect(damagedText()).toContain('Die gespeicherte Notiz "odd-origin" ist beschädigt'), { timeout: 10_000 });
     for (const e of ENGLISH) expect(damagedText()).not.toMatch(e);
     await setAppLanguage("en");
-    await waitFor(() => expect(damagedText()).toContain("is damaged and was skipped"));
+    await waitFor(() => expect(damagedText()).toContain("is damaged and was skipped"), { timeout: 10_000 });
     unmount();
   });
 
@@ -167,7 +167,7 @@ describe("the notes library's messages in Hungarian and German", () => {
         const version = await openDB(DEFAULT_NOTES_DB).then((db) => (db.close(), db.version));
         newer = await openDB(DEFAULT_NOTES_DB, version + 1, { upgrade: () => undefined });
       }
-      await waitFor(() => expect(screen.getByRole("button", { name: n("reload") })).toBeTruthy());
+      await waitFor(() => expect(screen.getByRole("button", { name: n("reload") })).toBeTruthy(), { timeout: 10_000 });
       expect(noticeText()).toContain("Taut");
       for (const e of ENGLISH) expect(noticeText()).not.toMatch(e);
       unmount();
