@@ -18,6 +18,10 @@ import { LoadTableView } from "./View.js";
 import { dispatch } from "../../../i18n/en/dispatch.js";
 import { tr } from "../../i18n.js";
 import { printWaits } from "../../../i18n/en/printWaits.js";
+import { fieldWords, localiseIssue } from "../../fieldWords.js";
+
+// A train that cannot be placed is said in field words, in the language on screen.
+await fieldWords;
 
 const t = tr.ns(dispatch);
 
@@ -108,7 +112,7 @@ export default function LoadTable(): JSX.Element {
       })()}
       problem={(() => {
         const p = placed();
-        return p && !p.ok ? p.issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join("; ") : null;
+        return p && !p.ok ? p.issues.map((i) => (i.path ? `${i.path}: ${localiseIssue(i, units()).message}` : localiseIssue(i, units()).message)).join("; ") : null;
       })()}
       status={run.status()}
       rows={run.rows()}

@@ -21,7 +21,7 @@ import { APP_VERSION } from "../../version.js";
 import { setReviewTarget } from "../../state/reviewTarget.js";
 import { cardComplete } from "./Card.js";
 import { createNoteEditor } from "./createNoteEditor.js";
-import { createNotesLibrary, downloadBundle, flagWords } from "./createNotesLibrary.js";
+import { createNotesLibrary, downloadBundle, flagWords, issueLines } from "./createNotesLibrary.js";
 import { draftFromPartial, idFromName, storedNoteDraft, today, type NoteDraft } from "./draft.js";
 import { SaveConflictDialog } from "./SaveConflictDialog.js";
 import { noteLoadTableOn } from "./loadTableRunner.js";
@@ -185,7 +185,7 @@ export function LocationNotesScreen(): JSX.Element {
     const r = await lib.save(note, saveBase);
     if (r.ok) afterSaved(r.saved);
     else if (r.conflict) setSaveConflict({ conflict: r.conflict, note });
-    else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: nt("nfNotSaved"), details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+    else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: nt("nfNotSaved"), details: issueLines(r.issues) });
   };
 
   const rescue = (p: RecordProblem) => {
@@ -219,13 +219,13 @@ export function LocationNotesScreen(): JSX.Element {
         ...(builtinTrains[0] ? { referenceTrain: { train: builtinTrains[0].id } } : {}),
       }, tr);
       if (!n.ok) {
-        lib.setNotice({ kind: "problem", text: nt("nfStretchInvalid"), details: n.issues.map((i) => `${i.path}: ${i.message}`) });
+        lib.setNotice({ kind: "problem", text: nt("nfStretchInvalid"), details: issueLines(n.issues) });
         return;
       }
       const r = await lib.save(n.value, "new");
       if (!r.ok) {
         if (r.conflict) setSaveConflict({ conflict: r.conflict, note: n.value as unknown as Record<string, unknown> });
-        else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: nt("nfNotSaved"), details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+        else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: nt("nfNotSaved"), details: issueLines(r.issues) });
         return;
       }
       lib.setNotice({ kind: "done", text: nt("nfSavedRailml", { name }) });
@@ -367,7 +367,7 @@ export function LocationNotesScreen(): JSX.Element {
           if (!r.ok) {
             if (r.conflict) setSaveConflict({ conflict: r.conflict, note });
             // No issues and no conflict: the library was closed under the page (its notice says so; the edit is kept).
-            else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: nt("nfNotSaved"), details: r.issues.map((i) => `${i.path}: ${i.message}`) });
+            else if (r.issues.length > 0) lib.setNotice({ kind: "problem", text: nt("nfNotSaved"), details: issueLines(r.issues) });
             return;
           }
           afterSaved(r.saved);
