@@ -42,11 +42,20 @@ const builtWorker = !workerUrl.pathname.includes("/src/");
 /** Start judging the probes of `c` on two worker threads; null where that would not pay (one core, sources). */
 export function speculateMassVerdicts(c: StartCase): Speculation | null {
   if (!builtWorker || availableParallelism() < 2) return null;
-  const probes = massProbesKg(c);
-  const slots: Slot[] = (["starts", "goes"] as const).map((need) => {
+  // The workers first: each loads its modules while this thread finds the probes (a few hundred ms of
+  // quasi-static searches), so neither waits for the other.
+  const workers = [new Worker(workerUrl), new Worker(workerUrl)];
+  let probes: ReturnType<typeof massProbesKg>;
+  try {
+    probes = massProbesKg(c);
+  } catch (e) {
+    for (const w of workers) void w.terminate();
+    throw e;
+  }
+  const slots: Slot[] = (["starts", "goes"] as const).map((need, k) => {
     const massKg = need === "starts" ? probes.startsKg : probes.goesKg;
     const shared = new Int32Array(new SharedArrayBuffer(8));
-    const worker = new Worker(workerUrl);
+    const worker = workers[k]!;
     const job: Job = { kind: "verdict", case: withTrailingMass(c, massKg), need, shared };
     // Posted at once: the worker takes it when it is up, while this thread is busy planning.
     worker.postMessage({ id: 1, job });
