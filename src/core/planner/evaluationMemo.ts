@@ -12,6 +12,7 @@
  */
 import type { PlannerContext } from "./context.js";
 import { searchPlan, type SearchOptions, type SearchResult } from "./search.js";
+import { lumpedWagons } from "../train/lumped.js";
 
 /** Plans kept at most (oldest dropped first): a check with its searches makes a few dozen. */
 const MAX_ENTRIES = 48;
@@ -38,7 +39,9 @@ export function withEvaluationMemo<T>(work: () => T): T {
 export function memoSearchPlan(ctx: PlannerContext, opts: SearchOptions = {}): SearchResult {
   const memo = active;
   if (!memo) return searchPlan(ctx, opts);
-  const key = `${ctx.quantile}|${JSON.stringify(ctx.c)}`;
+  // A plan of lumped wagons (a search's guide, startableMass.ts) is kept apart from the full model's.
+  const lump = lumpedWagons();
+  const key = `${lump > 1 ? `lumped ${lump}|` : ""}${ctx.quantile}|${JSON.stringify(ctx.c)}`;
   const stopKey = opts.stopWhenFailed ? `${opts.stopWhenFailed.key}|${key}` : null;
   const known = memo.get(key) ?? (stopKey !== null ? memo.get(stopKey) : undefined);
   if (known) {

@@ -10,6 +10,7 @@ import { goesJudgement, judge, quasiStaticLimits } from "./decision.js";
 import { guidedLargestMass, type GuidedSearch, type MassJudgement } from "./guidedBracket.js";
 import { marginalBound, plannerContext } from "./context.js";
 import { withEvaluationMemo } from "./evaluationMemo.js";
+import { withLumpedWagons } from "../train/lumped.js";
 
 /** The bracket never needs to be narrower than this, kg. */
 const MIN_TOLERANCE_KG = 50;
@@ -136,7 +137,7 @@ function searchOf(c: StartCase): Omit<GuidedSearch, "startKg" | "holdsKg" | "fai
  * so when a plan at its lower end holds, that one plan settles the answer (the dynamics only verify it); when
  * it fails, the search goes on below it, guided by the margin.
  */
-function canonicalMass(c: StartCase, at: (m: number) => MassJudgement, atLeastKg: number, probe: Bracket): Bracket {
+function canonicalMass(c: StartCase, at: (m: number) => MassJudgement, atLeastKg: number, probe: Bracket, guide: ((m: number) => MassJudgement) | null = null): Bracket {
   const ok = (m: number): boolean => at(m).holds;
   const probeKg = probe.lo;
   const s = searchOf(c);
@@ -174,7 +175,52 @@ function canonicalMass(c: StartCase, at: (m: number) => MassJudgement, atLeastKg
   // The rest follows the margin (guidedBracket.ts): from what holds (when anything is known to) and what
   // fails to the mass where the smallest margin crosses 1, each end settled by the verdict. With nothing
   // known to hold, it steps down from the failing end (to the floor at worst: then none holds).
-  return guidedLargestMass(at, { ...s, holdsKg: lo >= floorKg ? lo : 0, failsKg: failing ? hi : null, startKg: hi });
+  return guidedWithGuide(at, guide, { ...s, holdsKg: lo >= floorKg ? lo : 0, failsKg: failing ? hi : null, startKg: hi });
+}
+
+/** Steps out from a guide's bracket the full model did not confirm, at most. */
+const MAX_STEPS_OUT = 4;
+
+/**
+ * `guidedLargestMass` over `at`, the full model's judgement, with a cheaper model's search first when there is
+ * one (`guide`: the same judgement on lumped wagons, train/lumped.ts): its bracket says where to look, the full
+ * model judges that bracket's two ends, and the full search goes on from what they settle — nothing further
+ * when the guide was right (two plans instead of a dozen where the verdict jumps with the mass). The answer
+ * has the same guarantee as without a guide: a mass the full model holds, one within the tolerance above it
+ * that it fails.
+ */
+function guidedWithGuide(at: (m: number) => MassJudgement, guide: ((m: number) => MassJudgement) | null, s: GuidedSearch): Bracket {
+  let lo = s.holdsKg ?? 0;
+  let hi = s.failsKg ?? null;
+  const width = (m: number) => Math.min(s.toleranceKg, Math.max(s.minToleranceKg, s.relativeTolerance * m));
+  const settled = () => lo > 0 && hi !== null && hi - lo <= width(lo);
+  if (guide === null || settled()) return guidedLargestMass(at, s);
+  const g = guidedLargestMass(guide, s);
+  // A guide that finds no mass holding above the floor says nothing the full search can start from (near the
+  // floor the verdict of a near-empty train is not a guide to a loaded one's): the full search alone.
+  if (!(g.lo > s.floorKg)) return guidedLargestMass(at, s);
+  const inside = (m: number | null): m is number => m !== null && m >= s.floorKg && m <= s.ceilingKg && m > lo && (hi === null || m < hi);
+  const judged = (m: number): boolean => {
+    const holds = at(m).holds;
+    if (holds) lo = m;
+    else hi = m;
+    return holds;
+  };
+  // Where to step out to if the full model disagrees: up (it holds at the guide's failing end), down (it fails
+  // at the guide's holding end), or nowhere. The failing end first: when the full model holds there, the
+  // holding end below it needs no plan.
+  let up: boolean | null = null;
+  if (inside(g.hi) && judged(g.hi)) up = true;
+  else if (inside(g.lo)) up = judged(g.lo) ? null : false;
+  // The full model's limit lies beyond the guide's bracket (the guide was a little off): it is near, so step
+  // out from it by the tolerance, doubling, rather than searching the whole bracket the probe left.
+  let step = width(Math.max(lo, s.floorKg));
+  for (let k = 0; up !== null && !settled() && k < MAX_STEPS_OUT; k++, step *= 2) {
+    const m = up ? lo + step : (hi as number) - step;
+    if (!inside(m)) break;
+    if (judged(m) !== up) break;
+  }
+  return guidedLargestMass(at, { ...s, holdsKg: lo, failsKg: hi, startKg: hi ?? (lo > 0 ? lo : s.startKg) });
 }
 
 /**
@@ -232,6 +278,12 @@ function quasiStaticMassKg(own: StartCase, need: "within" | "not-over"): Bracket
   return b;
 }
 
+/** Wagons a body in the lumped guide: about a dozen bodies; none under 24 wagons (the full model is cheap there). */
+const GUIDE_BODIES = 12;
+function guideLumpOf(c: StartCase): number {
+  return c.train.wagons >= 2 * GUIDE_BODIES ? Math.floor(c.train.wagons / GUIDE_BODIES) : 1;
+}
+
 /** Where the quasi-static search starts, kg per wagon (any fixed mass; a loaded wagon's order). */
 const QS_START_KG_PER_WAGON = 50_000;
 
@@ -269,6 +321,11 @@ export interface StartableMassOptions {
    * the same verdicts; a stopped plan's margin only guides the search.
    */
   fullPlans?: boolean;
+  /**
+   * Guide a search the quasi-static probe did not settle by the same search on lumped wagons first (default
+   * true; false: the full model only, as before, for the agreement test and the bench).
+   */
+  lumpedGuide?: boolean;
   /** Told of every judgement the searches make (for benchmarks and tests: how much work a search did). */
   onJudgement?: (need: "starts" | "goes", massKg: number, holds: boolean, score: number) => void;
 }
@@ -328,6 +385,17 @@ function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses
     const v = known?.("goes", m);
     return told("goes", m, v !== undefined ? { holds: v, score: Number.NaN } : goesJudgement(withTrailingMass(c, m), stop, { stopWhenFailed: verdictOnly }));
   };
+  // The same judgements on lumped wagons, to guide a search the quasi-static probe did not settle.
+  const lump = opts.lumpedGuide === false ? 1 : guideLumpOf(c);
+  const startsGuide =
+    lump > 1
+      ? (m: number): MassJudgement =>
+          withLumpedWagons(lump, () => {
+            const d = judge(withTrailingMass(c, m), { depth: "starts", stopWhenFailed: verdictOnly, ...(stop ? { shouldStop: stop } : {}) });
+            return { holds: d.verdict === "starts", score: d.margin };
+          })
+      : null;
+  const goesGuide = lump > 1 ? (m: number): MassJudgement => withLumpedWagons(lump, () => goesJudgement(withTrailingMass(c, m), stop, { stopWhenFailed: verdictOnly })) : null;
   const own = opts.own;
   const ownKg = c.train.trailingMassKg;
   // Every verdict found, by mass (the reconciling search starts from the nearest ones).
@@ -337,7 +405,7 @@ function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses
   const goesAt = (m: number): MassJudgement => remember(seenGoes, m, goesJ(m));
   const makeUp = opts.ofMakeUp === true;
   const ceilingKg = massCeilingKg(c);
-  const starts = canonicalMass(c, startsAt, 0, quasiStaticMassKg(c, "within"));
+  const starts = canonicalMass(c, startsAt, 0, quasiStaticMassKg(c, "within"), startsGuide);
   let startsKg = starts.lo;
   let ownStarts = false;
   if (!makeUp) {
@@ -349,7 +417,7 @@ function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses
   // Whatever starts goes: the make-up's largest startable mass is a lower end of its marginal one, and the
   // train's own figure of the two a lower end of its own.
   for (const [m, h] of seenStarts) if (h) seenGoes.set(m, true);
-  const goes = canonicalMass(c, goesAt, starts.lo, quasiStaticMassKg(c, "not-over"));
+  const goes = canonicalMass(c, goesAt, starts.lo, quasiStaticMassKg(c, "not-over"), goesGuide);
   let marginalKg = goes.lo;
   if (!makeUp) {
     const ownGoes = ownStarts || (own !== undefined ? own !== "needs-assistance" : goesAt(ownKg).holds);

@@ -8,6 +8,7 @@ import { GRAVITY_MPS2, M_PER_FT } from "../physics/constants.js";
 import { controlOf, type LocoGroup, type LocoPosition, type StartCase, type TrainSpec, type UnitControl } from "./types.js";
 import type { LocomotiveSpec, WagonSpec } from "../physics/types.js";
 import { placedWagons } from "./groups.js";
+import { lumpedConsist, lumpedWagons } from "./lumped.js";
 
 export interface Vehicle {
   kind: "locomotive" | "wagon";
@@ -68,8 +69,13 @@ export function wagonRotatingFraction(massKg: number, axles: number): number {
   return 0.09 - ((perAxleT - 6) * 0.06) / 14;
 }
 
-/** Place the locomotives and wagons of a case on its track, head first. */
+/** Place the locomotives and wagons of a case on its track, head first (as lumped wagons inside `withLumpedWagons`). */
 export function buildConsist(c: StartCase): Consist {
+  const k = lumpedWagons();
+  return k > 1 ? lumpedConsist(placedConsist(c), k) : placedConsist(c);
+}
+
+function placedConsist(c: StartCase): Consist {
   const order = placedOrder(c.locomotives, c.train.wagons);
   const wagons = placedWagons(c.train);
   const vehicles: Vehicle[] = [];
