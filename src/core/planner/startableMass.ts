@@ -213,9 +213,10 @@ function guidedWithGuide(at: (m: number) => MassJudgement, guide: ((m: number) =
   if (inside(g.hi) && judged(g.hi)) up = true;
   else if (inside(g.lo)) up = judged(g.lo) ? null : false;
   // The full model's limit lies beyond the guide's bracket (the guide was a little off): it is near, so step
-  // out from it by the tolerance, doubling, rather than searching the whole bracket the probe left.
+  // out from it by the tolerance (twice; a guide is most often off by a width or two), then doubling, rather
+  // than searching the whole bracket the probe left.
   let step = width(up === false && hi !== null ? hi : Math.max(lo, s.floorKg));
-  for (let k = 0; up !== null && !settled() && k < MAX_STEPS_OUT; k++, step *= 2) {
+  for (let k = 0; up !== null && !settled() && k < MAX_STEPS_OUT; k++, step *= k >= 2 ? 2 : 1) {
     const m = up ? lo + step : (hi as number) - step;
     if (!inside(m)) break;
     if (judged(m) !== up) break;
