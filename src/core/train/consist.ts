@@ -5,58 +5,13 @@
 import { couplingOfKind, type CouplingSpec } from "../physics/coupling.js";
 import { DAVIS_DEFAULTS, breakawayResistancePermille, davisCoefficients, type DavisCoefficients } from "../physics/resistance.js";
 import { GRAVITY_MPS2, M_PER_FT } from "../physics/constants.js";
-import { controlOf, type LocoGroup, type LocoPosition, type StartCase, type TrainSpec, type UnitControl } from "./types.js";
+import { controlOf, type LocoGroup, type StartCase, type TrainSpec } from "./types.js";
 import type { LocomotiveSpec, WagonSpec } from "../physics/types.js";
 import { placedWagons } from "./groups.js";
 import { lumpedConsist, lumpedWagons } from "./lumped.js";
 
-export interface Vehicle {
-  kind: "locomotive" | "wagon";
-  /** Head-to-tail index. */
-  index: number;
-  massKg: number;
-  /** Mass including the rotating-mass allowance, kg. */
-  effectiveMassKg: number;
-  lengthM: number;
-  axles: number;
-  davis: DavisCoefficients;
-  /** Resistance to be overcome at rest (breakaway), N; never below the Davis constant term. */
-  breakawayN: number;
-  /** The locomotive's profile, for powered vehicles. */
-  loco?: LocomotiveSpec;
-  /** Chainage of the vehicle's centre when standing, m. */
-  centreChainageM: number;
-  /** Wagons: the number from the head (1-based) and the type. */
-  wagonNumber?: number;
-  wagon?: WagonSpec;
-}
-
-/**
- * Units whose notch is set together: the head's (its units and every `with-head` unit) and each
- * `remote` or `helper` entry of the case on its own.
- */
-export interface ControlGroup {
-  control: UnitControl;
-  position: LocoPosition;
-  /** Indices into the powered units (`locoIndices`) of the units in the group. */
-  units: number[];
-}
-
-export interface Consist {
-  vehicles: Vehicle[];
-  /** couplings[j] joins vehicles j and j+1. */
-  couplings: CouplingSpec[];
-  /** Indices of powered vehicles. */
-  locoIndices: number[];
-  /** Overall length, m. */
-  lengthM: number;
-  /** Mean wagon mass, kg. */
-  wagonMassKg: number;
-  /** Control groups; the first is the head's (its notch is the plan's notch). */
-  controlGroups: ControlGroup[];
-  /** The control group of each powered unit. */
-  unitGroup: number[];
-}
+export type { Consist, ControlGroup, Vehicle } from "./consistTypes.js";
+import type { Consist, ControlGroup, Vehicle } from "./consistTypes.js";
 
 /**
  * Rotating-mass allowance γ of a wagon from its mass per axle: ≈ 0.09 empty (≤ 6 t/axle) to ≈ 0.03

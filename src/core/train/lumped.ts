@@ -12,7 +12,7 @@
  * Scoped: `withLumpedWagons(k, work)` makes every consist built during `work` a lumped one.
  */
 import type { CouplingSpec, GearSide } from "../physics/coupling.js";
-import type { Consist, Vehicle } from "./consist.js";
+import type { Consist, Vehicle } from "./consistTypes.js";
 
 let active = 1;
 
