@@ -16,6 +16,7 @@ import { longTrainCase } from "./dynamics.js";
 import { heading, line, median, target, timeRuns } from "./util.js";
 import { setActiveOnlyStepping, vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
 import { vehicleStepsBeforeAllMoved } from "../../src/core/dynamics/runner.js";
+import { setCreepingPeakAsOne } from "../../src/core/dynamics/settled.js";
 import { seededDepartures } from "../tools/departures.js";
 
 /** CPU time of `fn` (this thread's process: user + system), ms, `runs` times after one unmeasured run. */
@@ -63,24 +64,45 @@ function benchPlanWork(): void {
  * The work of one 150-wagon plan (issue 14): vehicle-steps and CPU with the settled train run as one mass
  * (the plan's model) against the full chain throughout, in the same run. The long train's tail coupling
  * carries only the last wagon, a few kN; before the settled model's slack rule was measured against the sway
- * alone (not 2 kN beyond it) this train never ran as one and both figures were the same.
+ * alone (not 2 kN beyond it) this train never ran as one and both figures were the same. Then the creeping
+ * peak: with a coupling's crest not allowed past the peak it had reached (settled.ts, `setCreepingPeakAsOne`
+ * off: before) the long train stayed in the chain while it crept up to speed at its head couplings' peak;
+ * after, it runs as one there too, each new peak reported at the quasi-static force plus the upward sway.
+ * The same before/after over 24 seeded departures, with the largest change of a plan's peak tension.
  */
 function benchLongPlanWork(c: StartCase): void {
-  const one = (asOne: boolean) => {
+  const one = (c: StartCase, asOne: boolean, creeping: boolean, runs: number) => {
     setRunAsOneWhenSettled(asOne);
+    setCreepingPeakAsOne(creeping);
     try {
       const w0 = vehicleStepsDone();
-      planStart(c, { skipMassSearch: true });
+      const plan = planStart(c, { skipMassSearch: true });
       const work = vehicleStepsDone() - w0;
-      const { times } = cpuRuns(() => planStart(c, { skipMassSearch: true }), 3);
-      return { work, cpuMs: median(times) };
+      const { times } = runs > 0 ? cpuRuns(() => planStart(c, { skipMassSearch: true }), runs) : { times: [0] };
+      return { work, cpuMs: median(times), peakN: plan.peakCouplerForceN ?? 0 };
     } finally {
       setRunAsOneWhenSettled(true);
+      setCreepingPeakAsOne(true);
     }
   };
-  const full = one(false);
-  const asOne = one(true);
-  line("150-wagon plan, vehicle-steps: full chain throughout → settled train as one", `${(full.work / 1e6).toFixed(2)} → ${(asOne.work / 1e6).toFixed(2)} M`, `${(asOne.work / full.work).toFixed(2)}×; CPU ${full.cpuMs.toFixed(0)} → ${asOne.cpuMs.toFixed(0)} ms (${(asOne.cpuMs / full.cpuMs).toFixed(2)}×)`);
+  const full = one(c, false, true, 3);
+  const before = one(c, true, false, 3);
+  const asOne = one(c, true, true, 3);
+  const M = (x: number) => (x / 1e6).toFixed(2);
+  line("150-wagon plan, vehicle-steps: full chain throughout → settled train as one", `${M(full.work)} → ${M(asOne.work)} M`, `${(asOne.work / full.work).toFixed(2)}×; CPU ${full.cpuMs.toFixed(0)} → ${asOne.cpuMs.toFixed(0)} ms (${(asOne.cpuMs / full.cpuMs).toFixed(2)}×)`);
+  line("150-wagon plan, as one at the creeping peak: before → after", `${M(before.work)} → ${M(asOne.work)} M`, `${(asOne.work / before.work).toFixed(2)}×; CPU ${before.cpuMs.toFixed(0)} → ${asOne.cpuMs.toFixed(0)} ms (${(asOne.cpuMs / before.cpuMs).toFixed(2)}×); peak coupler force ${(before.peakN / 1000).toFixed(1)} → ${(asOne.peakN / 1000).toFixed(1)} kN`);
+  const cases = seededDepartures(24, 200);
+  let w0 = 0;
+  let w1 = 0;
+  let worst = 0;
+  for (const d of cases) {
+    const b = one(d, true, false, 0);
+    const a = one(d, true, true, 0);
+    w0 += b.work;
+    w1 += a.work;
+    if (b.peakN > 0) worst = Math.max(worst, Math.abs(a.peakN - b.peakN) / b.peakN);
+  }
+  line(`${cases.length} seeded departures, as one at the creeping peak: before → after`, `${M(w0 / cases.length)} → ${M(w1 / cases.length)} M per plan`, `${(w1 / w0).toFixed(2)}×; largest change of a plan's peak coupler force ${(100 * worst).toFixed(2)} %`);
 }
 
 /** The INTERFACE.md example size: 40 wagons on the demo's Ashvale Loop, one 3000 kW unit, 1800 t, dry. */

@@ -125,7 +125,7 @@ export class Run {
   /** The notches of the last interval and when they last changed, s. */
   private notchSeen!: Int32Array;
   private notchChangedS = -Infinity;
-  /** Each coupling's quasi-static force and the sway about it measured since `swayFromS`, N. */
+  /** Each coupling's quasi-static force and the sways above and below it measured since `swayFromS` (settled.ts `measureSway`), N. */
   private meanScratch!: Float64Array;
   private sway!: Float64Array;
   private swayFromS = Infinity;
@@ -162,7 +162,7 @@ export class Run {
     this.lastSlipCount = new Int32Array(m.nl);
     this.notchSeen = new Int32Array(m.nl);
     this.meanScratch = new Float64Array(Math.max(0, m.n - 1));
-    this.sway = new Float64Array(Math.max(0, m.n - 1));
+    this.sway = new Float64Array(2 * Math.max(0, m.n - 1));
     this.openEpisode = Array.from({ length: m.nl }, () => null);
     this.series = emptySeries(256);
     applyBrakes(m, s, brakes.trainBrakeReleaseS, brakes.locoBrakeReleaseS);
@@ -299,7 +299,7 @@ export class Run {
 
   /**
    * Measure the chain's sway about its quasi-static forces over a window; at the window's end run the
-   * train as one if that hides no peak (settled.ts), else measure a fresh window.
+   * train as one if every coupling stays clear of its slack (settled.ts), else measure a fresh window.
    */
   private measureOrSettle(): void {
     const s = this.s;

@@ -32,6 +32,24 @@ export const SWAY_WINDOW_S = 10;
 export const SWAY_ALLOWANCE = 1.1;
 export const SWAY_FLOOR_N = 1000;
 
+/**
+ * May a coupling run as one while its quasi-static force plus its upward sway passes the peak it has reached
+ * (the model then reports that crest as the coupling's new peak: high by the sway's allowance unless the
+ * chain is stirred anew)?
+ * A long train creeping up to speed holds its head couplings at their creeping peak for minutes, which kept
+ * it in the full chain. Off: the earlier rule (one sway both ways, no new peak as one), for the benchmark's
+ * before/after.
+ */
+let creepingPeakAsOne = true;
+export function setCreepingPeakAsOne(on: boolean): void {
+  creepingPeakAsOne = on;
+}
+
+/** The sway allowed for over a measured crest (`SWAY_ALLOWANCE`, at least `SWAY_FLOOR_N`), N. */
+function allowance(measuredN: number): number {
+  return Math.max(SWAY_FLOOR_N, SWAY_ALLOWANCE * measuredN);
+}
+
 /** The settled train's own state beside the chain's. */
 export interface Settled {
   /** x_i − x_lead when the train settled, m. */
@@ -40,11 +58,13 @@ export interface Settled {
   notch: Int32Array;
   /** Engaged side of each coupling when it settled (+1 draft, −1 buff). */
   side: Int8Array;
-  /** The sway each coupling's force showed about its quasi-static force before it settled, N. */
-  swayN: Float64Array;
+  /** The sway each coupling's force showed above its quasi-static force (on its engaged side) before it settled, allowance included, N. */
+  swayUpN: Float64Array;
+  /** The same below its quasi-static force (towards its slack), N. */
+  swayDownN: Float64Array;
   /** Each coupling's quasi-static force now (its force as reported adds the sway on its engaged side), N. */
   meanN: Float64Array;
-  /** The sway on top of the quasi-static force could set a new peak, or a coupling nears its slack. */
+  /** A coupling nears its slack (or, with `creepingPeakAsOne` off, its crest could set a new peak). */
   leave: boolean;
 }
 
@@ -72,30 +92,49 @@ export function quasiStaticForces(m: TrainModel, s: DynamicsState, out: Float64A
   }
 }
 
-/** Widen each coupling's measured sway by the chain's present departure from its quasi-static force. */
+/**
+ * Widen each coupling's measured sway by the chain's present departure from its quasi-static force: `sway`
+ * holds 2(n − 1) figures, the upward sway (away from the slack, on the side the coupling is engaged now) of
+ * coupling j at j and the downward sway (towards its slack) at n − 1 + j.
+ */
 export function measureSway(m: TrainModel, s: DynamicsState, mean: Float64Array, sway: Float64Array): void {
   quasiStaticForces(m, s, mean);
-  for (let j = 0; j < m.n - 1; j++) {
-    const d = Math.abs(s.couplerF[j]! - mean[j]!);
+  const k = m.n - 1;
+  for (let j = 0; j < k; j++) {
+    const d = (s.engaged[j]! < 0 ? -1 : 1) * (s.couplerF[j]! - mean[j]!);
     if (d > sway[j]!) sway[j] = d;
+    if (-d > sway[k + j]!) sway[k + j] = -d;
   }
+}
+
+/** Coupling j's upward and downward allowances from the measured sways (one figure both ways with `creepingPeakAsOne` off). */
+function allowances(sway: Float64Array, k: number, j: number): [number, number] {
+  const up = sway[j]!;
+  const down = sway[k + j]!;
+  if (!creepingPeakAsOne) {
+    const w = allowance(Math.max(up, down));
+    return [w, w];
+  }
+  return [allowance(up), allowance(down)];
 }
 
 /**
  * May the train run as one now? Moving well above a crawl, every coupling engaged on the side of its
- * quasi-static force and, with the sway measured, far enough from its slack, and no coupling's quasi-static
- * force plus its sway beyond the peak it has already reached (so running as one hides no peak).
+ * quasi-static force and, less the downward sway measured, far enough from its slack. A coupling's
+ * quasi-static force plus its upward sway may pass the peak it has already reached: running as one then
+ * reports that crest as the new peak (the crest the chain would reach, with the allowance over the sway measured).
  */
 export function maySettle(m: TrainModel, s: DynamicsState, lead: number, mean: Float64Array, sway: Float64Array): boolean {
   if (s.v[lead]! < SETTLED_MIN_SPEED_MPS * 1.5) return false;
   for (let i = 0; i < m.n; i++) if (s.v[i]! <= 0) return false;
   quasiStaticForces(m, s, mean);
-  for (let j = 0; j < m.n - 1; j++) {
+  const k = m.n - 1;
+  for (let j = 0; j < k; j++) {
     const side = s.engaged[j]!;
     const f = side * mean[j]!;
-    const w = Math.max(SWAY_FLOOR_N, SWAY_ALLOWANCE * sway[j]!);
-    if (side === 0 || f - w <= 0) return false;
-    if (f + w > (side > 0 ? s.peakTensionN[j]! : s.peakCompressionN[j]!)) return false;
+    const [up, down] = allowances(sway, k, j);
+    if (side === 0 || f - down <= 0) return false;
+    if (!creepingPeakAsOne && f + up > (side > 0 ? s.peakTensionN[j]! : s.peakCompressionN[j]!)) return false;
   }
   return true;
 }
@@ -113,8 +152,11 @@ export function settle(m: TrainModel, s: DynamicsState, lead: number, mean: Floa
   }
   // The train's speed is its momentum's: the vehicles' small spread averaged out.
   s.v.fill(momentum / effMass);
-  const swayN = Float64Array.from(measuredSway, (w) => Math.max(SWAY_FLOOR_N, SWAY_ALLOWANCE * w));
-  return { offsetM, notch: s.notch.slice(), side: Int8Array.from(s.engaged), swayN, meanN: mean.slice(), leave: false };
+  const k = n - 1;
+  const swayUpN = new Float64Array(k);
+  const swayDownN = new Float64Array(k);
+  for (let j = 0; j < k; j++) [swayUpN[j], swayDownN[j]] = allowances(measuredSway, k, j);
+  return { offsetM, notch: s.notch.slice(), side: Int8Array.from(s.engaged), swayUpN, swayDownN, meanN: mean.slice(), leave: false };
 }
 
 /** The settled train must go back to the chain: a notch changed, it is slow, or its forces could matter. */
@@ -179,14 +221,13 @@ function settledForces(m: TrainModel, s: DynamicsState, st: Settled, v: number):
     fq += net[j]! - m.effMassKg[j]! * a;
     mean[j] = fq;
     const side = st.side[j]!;
-    const w = st.swayN[j]!;
-    const crest = side * fq + w;
-    if (side * fq - w <= 0) st.leave = true;
+    const crest = side * fq + st.swayUpN[j]!;
+    if (side * fq - st.swayDownN[j]! <= 0) st.leave = true;
     if (side > 0) {
       F[j] = crest;
       if (crest > maxT) maxT = crest;
       if (crest > s.peakTensionN[j]!) {
-        st.leave = true;
+        if (!creepingPeakAsOne) st.leave = true;
         s.peakTensionN[j] = crest;
         s.peakTensionT[j] = s.t;
       }
@@ -194,7 +235,7 @@ function settledForces(m: TrainModel, s: DynamicsState, st: Settled, v: number):
       F[j] = -crest;
       if (crest > maxC) maxC = crest;
       if (crest > s.peakCompressionN[j]!) {
-        st.leave = true;
+        if (!creepingPeakAsOne) st.leave = true;
         s.peakCompressionN[j] = crest;
         s.peakCompressionT[j] = s.t;
       }
