@@ -49,14 +49,16 @@ export async function launch(firstWorker: Worker): Promise<void> {
       return w as unknown as WorkerLike;
     },
   });
+  const startCase = decodeExact(firstPlan.startCase) as StartCase;
   const state = createRoot(() =>
     createAppState({
       planner,
       background: createBrowserPlannerClient(30_000),
       registerSW,
       screenIds: SCREENS.map((s) => s.id),
-      firstPlan: { key: firstPlan.key, result: decodePlan(firstPlan.plan) },
-      prechecked: { caseJson: firstPlan.caseJson, value: decodeExact(firstPlan.startCase) as StartCase },
+      // The key is the checked case as text, as the plan run keys its requests (firstPlan.ts).
+      firstPlan: { key: JSON.stringify(startCase), result: decodePlan(firstPlan.plan) },
+      prechecked: { caseJson: firstPlan.caseJson, value: startCase },
       // The time from load to the first plan on screen (and the planner's share), for the browser checks:
       // the build-time plan when the first case is the demo, then the live one.
       onFirstPlan: (workerMs, fromBuild) =>

@@ -3,12 +3,13 @@
  * one at a time on a later tick (a cancel that arrives first drops a queued request); each case gets a
  * structural check, then the work its kind asks for (src/worker/jobs.ts, the planner for `plan`).
  *
- * Only the planner is in the worker's first script: the page's first plan waits for nothing else. The
- * other jobs (assistance, margins per rail, load table, departures check: jobs.ts and the dispatch code
- * behind it) are a chunk of their own, imported when the first such request comes; that request, and any
- * behind it in the queue, wait for the import. Once loaded, every job runs synchronously.
+ * Only the planner is in the worker's first script, without its largest masses' search: the page's first
+ * plan (which skips that search) waits for nothing else. A plan with its masses and the other jobs
+ * (assistance, margins per rail, load table, departures check: jobs.ts and the dispatch code behind it) are a
+ * chunk of their own, imported when the first such request comes; that request, and any behind it in the
+ * queue, wait for the import. Once loaded, every job runs synchronously.
  */
-import { planStart } from "../core/planner/index.js";
+import { planStartWith } from "../core/planner/planBody.js";
 import { planWorkProblem } from "../core/planner/workCap.js";
 import type { PlanOptions, PlanResult } from "../core/planner/types.js";
 import type { StartCase } from "../core/train/types.js";
@@ -33,7 +34,7 @@ export type Jobs = {
 };
 
 /** The module of the jobs other than `plan` (jobs.ts). */
-export type JobsModule = Pick<typeof import("./jobs.js"), "runAssistance" | "runCheck" | "runConditionMargins" | "runLoadTable">;
+export type JobsModule = Pick<typeof import("./jobs.js"), "runAssistance" | "runCheck" | "runConditionMargins" | "runLoadTable" | "runPlan">;
 
 /** The jobs of jobs.ts, given its module. */
 type LaterJobs = { [K in Exclude<RequestKind, "plan">]: (m: JobsModule, ...args: Parameters<Jobs[K]>) => ReturnType<Jobs[K]> };
@@ -44,6 +45,10 @@ const laterJobs: LaterJobs = {
   loadTable: (m, c, o, progress) => m.runLoadTable(c, o?.cells, (row, f) => progress(f, { row })),
   check: (m, c, o, progress) => m.runCheck(c, o ?? {}, progress),
 };
+
+/** A plan with its largest masses (jobs.ts): the search's code loads with the other jobs. */
+const planWithMasses = (m: JobsModule, c: StartCase, o: RequestMap["plan"]["options"], progress: (fraction: number) => void): PlanResult =>
+  m.runPlan(c, { ...(o?.skipVerification ? { skipVerification: true } : {}), onProgress: (f: number) => progress(f) });
 
 export interface HandlerDeps {
   plan?: (c: StartCase, opts: PlanOptions) => PlanResult;
@@ -60,7 +65,9 @@ export interface HandlerDeps {
 
 /** A message handler for the planner worker; `post` sends a response (with its transfer list). */
 export function createPlannerHandler(post: Post, deps: HandlerDeps = {}): (msg: unknown) => void {
-  const plan = deps.plan ?? planStart;
+  // A plan that skips the largest masses runs at once; one with them waits for jobs.ts (the search's code).
+  // The page shows no sensitivity table: the quick plan skips it with the masses.
+  const plan = deps.plan ?? ((c: StartCase, o: PlanOptions) => planStartWith(c, { ...o, skipSensitivity: true }, null));
   const now = deps.now ?? (() => performance.now());
   const schedule = deps.schedule ?? ((f: () => void) => void setTimeout(f, 0));
   const interval = deps.progressIntervalMs ?? 50;
@@ -76,11 +83,14 @@ export function createPlannerHandler(post: Post, deps: HandlerDeps = {}): (msg: 
   let jobsModule: JobsModule | null = null;
   let jobsLoading: Promise<JobsModule> | null = null;
 
-  /** The job for a request kind: at once when its code is here, else once jobs.ts is loaded. */
-  function jobOf<K extends RequestKind>(kind: K): Jobs[K] | Promise<Jobs[K]> {
-    const given = deps.jobs?.[kind] ?? (kind === "plan" ? plans.plan : undefined);
+  /** The job for a request: at once when its code is here, else once jobs.ts is loaded. */
+  function jobOf<K extends RequestKind>(req: RequestOf<K>): Jobs[K] | Promise<Jobs[K]> {
+    const kind = req.type as K;
+    const here = kind === "plan" && (deps.plan || (req.options as RequestMap["plan"]["options"])?.skipMassSearch);
+    const given = deps.jobs?.[kind] ?? (here ? plans.plan : undefined);
     if (given) return given as Jobs[K];
-    const withModule = (m: JobsModule) => ((c, o, progress) => (laterJobs[kind as Exclude<RequestKind, "plan">] as (m: JobsModule, ...a: unknown[]) => unknown)(m, c, o, progress)) as Jobs[K];
+    const later = (kind === "plan" ? planWithMasses : laterJobs[kind as Exclude<RequestKind, "plan">]) as (m: JobsModule, ...a: unknown[]) => unknown;
+    const withModule = (m: JobsModule) => ((c, o, progress) => later(m, c, o, progress)) as Jobs[K];
     if (jobsModule) return withModule(jobsModule);
     jobsLoading ??= loadJobs().then(
       (m) => (jobsModule = m),
@@ -111,7 +121,7 @@ export function createPlannerHandler(post: Post, deps: HandlerDeps = {}): (msg: 
       post({ type: "error", id: req.id, kind: "invalid", issues, message: "The start case is malformed." }, []);
       return;
     }
-    const job = jobOf(req.type);
+    const job = jobOf(req);
     if (job instanceof Promise) {
       return job.then(
         (j) => runJob(req, j),

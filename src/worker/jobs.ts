@@ -10,7 +10,7 @@ import type { DividedTrain } from "../core/dispatch/divideTrain.js";
 import { loadTableCells, loadTableRow, type LoadTableRow } from "../core/dispatch/loadTable.js";
 import { planStart, startableMasses } from "../core/planner/index.js";
 import { withEvaluationMemo } from "../core/planner/evaluationMemo.js";
-import type { PlanResult } from "../core/planner/types.js";
+import type { PlanOptions, PlanResult } from "../core/planner/types.js";
 import type { LocomotiveSpec } from "../core/physics/types.js";
 import type { StartCase } from "../core/train/types.js";
 import type {
@@ -96,6 +96,11 @@ const part =
  * The assistance check of one case: its own verified plan (no mass search), then, unless it starts, the
  * search for added units and, when none works, the divided train. The core's defaults unless told.
  */
+/** A plan with its largest masses (the search's code is in this chunk, not in the worker's first script). */
+export function runPlan(c: StartCase, opts: PlanOptions): PlanResult {
+  return planStart(c, opts);
+}
+
 export function runAssistance(c: StartCase, o: AssistanceRequestOptions = {}, onProgress?: Progress): AssistanceAnswer {
   // Plans shared between the searches' judgements (evaluationMemo.ts); the answer is plain data, copied out.
   return withEvaluationMemo(() => assistanceOf(c, o, onProgress));

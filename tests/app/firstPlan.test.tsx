@@ -9,7 +9,7 @@ import { createRoot } from "solid-js";
 import { describe, expect, it } from "vitest";
 import { createAppState } from "../../src/app/createAppState.js";
 import { computeFirstPlan, FIRST_PLAN_OPTIONS, withoutSeries } from "../../src/app/firstPlan.js";
-import { decodePlan, encodePlan } from "../../src/app/planCodec.js";
+import { decodeExact, decodePlan, encodePlan } from "../../src/app/planCodec.js";
 import { SCREENS } from "../../src/app/screens/registry.js";
 import type { PlanResult } from "../../src/core/planner/types.js";
 import type { StartCase } from "../../src/core/train/types.js";
@@ -51,6 +51,12 @@ describe("the demo plan worked out at build time", () => {
     // Compared as exact text (every number to the last bit, every array by its kind): the test environment's
     // typed arrays and the structured clone's come from different realms, which a deep equality would count.
     expect(same(decodePlan(built.plan), withoutSeries(liveAnswer(c)))).toBe(true);
+  });
+
+  it("ships no key: the page's key, JSON.stringify of the decoded checked case, is the build's key", () => {
+    // launch.tsx works the key out from startCase; the build's key is JSON.stringify of the case it planned.
+    expect(JSON.stringify(decodeExact(built.startCase))).toBe(built.key);
+    expect(built.key.length).toBeGreaterThan(100);
   });
 
   it("survives its text form exactly: typed arrays and NaN included", () => {

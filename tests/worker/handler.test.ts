@@ -1,4 +1,4 @@
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { planStart } from "../../src/core/planner/index.js";
 import type { PlanResult } from "../../src/core/planner/types.js";
 import type { StartCase } from "../../src/core/train/types.js";
@@ -28,12 +28,14 @@ function harness(deps: Parameters<typeof createPlannerHandler>[1] = {}) {
 }
 
 describe("planner worker handler", () => {
-  it("plans the demo case: progress 0 first, then the same result the core gives", () => {
+  it("plans the demo case: progress 0 first, then the same result the core gives, its largest masses with the later jobs' code", async () => {
     const h = harness();
     h.handle({ type: "plan", id: 7, startCase: demo });
     expect(h.posted).toHaveLength(0); // nothing runs before the next tick
     h.flush();
     expect(h.posted[0]!.msg).toEqual({ type: "progress", id: 7, fraction: 0 });
+    // The mass search's code is in jobs.ts, imported on this first plan that asks for the masses.
+    await vi.waitFor(() => expect(h.posted.at(-1)!.msg.type).toBe("result"), { timeout: 30_000 });
     const last = h.posted.at(-1)!.msg;
     expect(last.type).toBe("result");
     if (last.type !== "result" || last.request !== "plan") throw new Error("not a plan result");
@@ -41,7 +43,23 @@ describe("planner worker handler", () => {
     expect(last.result.verdict).toBe(direct.verdict);
     expect(last.result.margin).toBeCloseTo(direct.margin, 12);
     expect(last.result.steps.length).toBe(direct.steps.length);
+    expect(last.result.maxStartableMassKg).toBe(direct.maxStartableMassKg);
+    expect(Number.isFinite(last.result.maxStartableMassKg)).toBe(true);
     expect(last.elapsedMs).toBeGreaterThanOrEqual(0);
+  });
+
+  it("plans without the largest masses at once, loading no later code (the page's first plan)", () => {
+    let loads = 0;
+    const h = harness({ loadJobs: () => (loads++, import("../../src/worker/jobs.js")) });
+    h.handle({ type: "plan", id: 3, startCase: demo, options: { skipMassSearch: true, skipVerification: true } });
+    h.flush();
+    const last = h.posted.at(-1)!.msg;
+    if (last.type !== "result" || last.request !== "plan") throw new Error("not a plan result");
+    const direct = planStart(resolved(builtinCaseJson[0]), { skipMassSearch: true, skipVerification: true });
+    expect(last.result.margin).toBe(direct.margin);
+    expect(Number.isNaN(last.result.maxStartableMassKg)).toBe(true);
+    expect(last.result.massSearchCeilingKg).toBe(direct.massSearchCeilingKg);
+    expect(loads).toBe(0);
   });
 
   it("answers a malformed case with field issues, not an exception", () => {
@@ -83,8 +101,8 @@ describe("planner worker handler", () => {
 
   it("drops a queued request when its cancel arrives first, and runs the others in order", () => {
     const h = harness();
-    h.handle({ type: "plan", id: 1, startCase: demo });
-    h.handle({ type: "plan", id: 2, startCase: demo });
+    h.handle({ type: "plan", id: 1, startCase: demo, options: { skipMassSearch: true } });
+    h.handle({ type: "plan", id: 2, startCase: demo, options: { skipMassSearch: true } });
     h.handle({ type: "cancel", id: 1 });
     h.flush();
     const ids = h.posted.filter((p) => p.msg.type === "result").map((p) => p.msg.id);

@@ -5,6 +5,8 @@
  * startable mass below its own and one that needs assistance never has a largest marginal mass above it.
  */
 import type { StartCase } from "../train/types.js";
+import { CEILING_KG_PER_WAGON, massCeilingKg } from "./massCeiling.js";
+export { CEILING_KG_PER_WAGON, massCeilingKg };
 import type { Verdict } from "./outcome.js";
 import { goesJudgement, judge, quasiStaticLimits } from "./decision.js";
 import { guidedLargestMass, type GuidedSearch, type MassJudgement } from "./guidedBracket.js";
@@ -110,15 +112,6 @@ function bisect(lo: number, hi: number, ok: (m: number) => boolean, rel: number,
   return { lo, hi };
 }
 
-/**
- * Heaviest wagon the search goes to, kg: beyond any freight wagon's gross mass [M], so a largest mass at this
- * ceiling means the locomotives set no limit (on a falling grade, for example, the brakes hold any load).
- */
-export const CEILING_KG_PER_WAGON = 250_000;
-/** The search's ceiling for a case: 250 t a wagon, or the case's own mass if that is more, kg. */
-export function massCeilingKg(c: StartCase): number {
-  return Math.max(c.train.trailingMassKg, c.train.wagons * CEILING_KG_PER_WAGON);
-}
 /** Relative width the search narrows to (0.5 %), and never wider than 2 t. */
 const RELATIVE_TOLERANCE = 0.005;
 const TOLERANCE_KG = 2000;
