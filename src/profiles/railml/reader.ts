@@ -27,6 +27,21 @@ export class RailmlError extends Error {
   }
 }
 
+/** What the XML parser (saxes) found wrong, from its English message, as a code of our own. */
+export function xmlProblem(message: string): RailmlText {
+  const named = (re: RegExp) => re.exec(message)?.[1];
+  let tag: string | undefined;
+  if (/^unexpected end/.test(message)) return say("xmlUnexpectedEnd");
+  if ((tag = named(/^unclosed tag: (.+?)\.?$/))) return say("xmlUnclosedTag", { tag });
+  if ((tag = named(/^unmatched closing tag: (.+?)\.?$/))) return say("xmlUnmatchedTag", { tag });
+  if (/^(unexpected close tag|weird empty close tag)/.test(message)) return say("xmlCloseTag");
+  if (/^disallowed character/.test(message)) return say("xmlCharacter");
+  if (/attribute|value must be quoted|value required|no whitespace between attributes/.test(message)) return say("xmlAttribute");
+  if (/^(text data outside of root node|documents may contain only one root)/.test(message)) return say("xmlOutsideRoot");
+  if (/^document must contain a root element/.test(message)) return say("xmlNoRoot");
+  return say("xmlOther");
+}
+
 /** railML 2.x namespaces: a year, over http or https. */
 const RAILML2_NS = /^https?:\/\/www\.railml\.org\/schemas\/(\d{4})\/?$/;
 /** railML 3.x namespaces: "3", "3.1", "3.2" … */
@@ -226,7 +241,9 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
   parser.on("opentag", open);
   parser.on("closetag", close);
   parser.on("error", (e) => {
-    throw new RailmlError(say("notWellFormed", { detail: e.message.replace(/^.*?:\d+:\d+:\s*/, ""), line: String(parser.line) }));
+    // saxes writes "line:column: what." in English: the place as figures, what went wrong as one of our codes.
+    const m = /(\d+):(\d+):\s*(.*)$/s.exec(e.message);
+    throw new RailmlError(say("notWellFormed", { detail: xmlProblem(m?.[3] ?? e.message), line: m?.[1] ?? String(parser.line), column: m?.[2] ?? String(parser.column) }));
   });
 
   const guard = (f: () => void) => {
