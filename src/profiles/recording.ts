@@ -26,6 +26,7 @@ import {
 import { fig, reviewText, type ReviewText } from "../i18n/reviewText.js";
 import { createTranslator, type Translator } from "../i18n/translator.js";
 import { parseCsv } from "./csv.js";
+import { xmlProblemCode } from "./xmlProblem.js";
 
 /** A recording file that cannot be read or cannot be a start; the message (English) and its sentences as data (`texts`) are for the user. */
 export class RecordingFileError extends Error {
@@ -67,7 +68,11 @@ export const RECORDING_WORDS = {
   csvNotch: (line: number, raw: string): ReviewText => ({ key: "csvNotch", params: { line, raw: clip(raw) } }),
   csvPartial: (name: string): ReviewText => ({ key: "csvPartial", params: { name } }),
   csvQuote: (detail: string): ReviewText => ({ key: "csvQuote", params: { detail } }),
-  gpxNotXml: (line: number, column: number, detail: string): ReviewText => ({ key: "gpxNotXml", params: { line, column, detail } }),
+  gpxNotXml: (line: number, column: number, message: string): ReviewText => {
+    // What is wrong as a code of ours (xmlProblem.ts), not the parser's English.
+    const p = xmlProblemCode(message);
+    return { key: "gpxNotXml", params: { line, column, detail: { text: p.tag === undefined ? { key: p.code } : { key: p.code, params: { tag: p.tag } } } } };
+  },
   gpxRoot: (name: string): ReviewText => ({ key: "gpxRoot", params: { name } }),
   gpxEntities: { key: "gpxEntities" },
   gpxNoPoints: { key: "gpxNoPoints" },
@@ -294,12 +299,12 @@ export function readGpx(text: string): ReadRecording {
     textBuf = "";
   });
   parser.on("error", (e) => {
-    failure ??= new RecordingFileError(RECORDING_WORDS.gpxNotXml(parser.line, parser.column, e.message.replace(/^[^:]*:\d+:\d+: /, "")));
+    failure ??= new RecordingFileError(RECORDING_WORDS.gpxNotXml(parser.line, parser.column, e.message));
   });
   try {
     parser.write(text.replace(/^\ufeff/, "")).close();
   } catch (e) {
-    failure ??= new RecordingFileError(RECORDING_WORDS.gpxNotXml(parser.line, parser.column, (e as Error).message.replace(/^[^:]*:\d+:\d+: /, "")));
+    failure ??= new RecordingFileError(RECORDING_WORDS.gpxNotXml(parser.line, parser.column, (e as Error).message));
   }
   if (failure) throw failure;
   if (pointNo === 0) throw new RecordingFileError(RECORDING_WORDS.gpxNoPoints);

@@ -1,5 +1,5 @@
 /**
- * A railML file that is not well-formed XML is refused with what is wrong as a code of ours and where, so the
+ * A railML (or GPX) file that is not well-formed XML is refused with what is wrong as a code of ours and where, so the
  * refusal reads whole in Hungarian and German rather than carrying the XML parser's English. The broken
  * documents below each break one well-formedness rule of W3C, "Extensible Markup Language (XML) 1.0 (Fifth
  * Edition)", 2008: §2.1 (one root element, nothing but markup and white space outside it), §3 (every start-tag
@@ -12,6 +12,10 @@ import { railmlTextDe } from "../../src/i18n/de/railmlText.js";
 import { railmlTextHu } from "../../src/i18n/hu/railmlText.js";
 import { RailmlError, readRailmlText } from "../../src/profiles/railml/reader.js";
 import { railmlEnglish, railmlWords, type RailmlText } from "../../src/profiles/railml/text.js";
+import { readGpx, RecordingFileError } from "../../src/profiles/recording.js";
+import { reviewText } from "../../src/i18n/reviewText.js";
+import { reviewDe } from "../../src/i18n/de/review.js";
+import { reviewHu } from "../../src/i18n/hu/review.js";
 
 const HU = createTranslator("hu", { railmlText: railmlTextHu });
 const DE = createTranslator("de", { railmlText: railmlTextDe });
@@ -58,5 +62,25 @@ describe("a railML file that is not well-formed XML", () => {
         expect(text).toContain(String(t.params?.column));
       }
     }
+  });
+});
+
+describe("a GPX recording that is not well-formed XML", () => {
+  const huReview = createTranslator("hu", { review: reviewHu });
+  const deReview = createTranslator("de", { review: reviewDe });
+  it("names what is wrong as the railML reader does, in every language", () => {
+    let err: unknown;
+    try {
+      readGpx('<gpx version="1.1"><trk><trkseg>');
+    } catch (e) {
+      err = e;
+    }
+    if (!(err instanceof RecordingFileError)) throw new Error("read without complaint");
+    const t = err.texts[0]!;
+    expect(t.key).toBe("gpxNotXml");
+    expect(t.params?.detail).toEqual({ text: { key: "xmlUnclosedTag", params: { tag: "trkseg" } } });
+    expect(err.message).toMatch(/^The file is not well-formed XML \(line 1, column \d+\): the element <trkseg> is never closed$/);
+    expect(reviewText(huReview, t)).toContain("<trkseg> elem nincs lezárva");
+    expect(reviewText(deReview, t)).toContain("Element <trkseg> wird nie geschlossen");
   });
 });

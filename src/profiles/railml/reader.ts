@@ -14,6 +14,7 @@
  */
 import { SaxesParser, type SaxesTagNS } from "saxes";
 import { railmlEnglish, say, type RailmlText } from "./text.js";
+import { xmlProblemCode } from "../xmlProblem.js";
 import type { PlacedThing, RailmlDir, RailmlModel, RailmlOcp, RailmlThingKind, RailmlTrack, TrackEndInfo } from "./model.js";
 
 /** A file that cannot be read as railML infrastructure; the message is for the user. */
@@ -27,19 +28,10 @@ export class RailmlError extends Error {
   }
 }
 
-/** What the XML parser (saxes) found wrong, from its English message, as a code of our own. */
+/** What the XML parser (saxes) found wrong, from its English message, as a text of ours (xmlProblem.ts). */
 export function xmlProblem(message: string): RailmlText {
-  const named = (re: RegExp) => re.exec(message)?.[1];
-  let tag: string | undefined;
-  if (/^unexpected end/.test(message)) return say("xmlUnexpectedEnd");
-  if ((tag = named(/^unclosed tag: (.+?)\.?$/))) return say("xmlUnclosedTag", { tag });
-  if ((tag = named(/^unmatched closing tag: (.+?)\.?$/))) return say("xmlUnmatchedTag", { tag });
-  if (/^(unexpected close tag|weird empty close tag)/.test(message)) return say("xmlCloseTag");
-  if (/^disallowed character/.test(message)) return say("xmlCharacter");
-  if (/attribute|value must be quoted|value required|no whitespace between attributes/.test(message)) return say("xmlAttribute");
-  if (/^(text data outside of root node|documents may contain only one root)/.test(message)) return say("xmlOutsideRoot");
-  if (/^document must contain a root element/.test(message)) return say("xmlNoRoot");
-  return say("xmlOther");
+  const p = xmlProblemCode(message);
+  return p.tag === undefined ? say(p.code) : say(p.code, { tag: p.tag });
 }
 
 /** railML 2.x namespaces: a year, over http or https. */
