@@ -72,7 +72,9 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly Ca
   const w = cliWords();
   const lines: string[] = [];
   const good = rows.filter((r) => !r.error);
-  lines.push(
+  // A table with no row would be a header over nothing: say so in a sentence instead.
+  if (good.length === 0) lines.push(t("noneAnswered"));
+  else lines.push(
     textTable(
       [t("colId"), t("colRow"), t("colRail"), t("colSand"), t("colMassT"), t("colVerdict"), t("colWhy"), t("colMargin"), t("colLargest"), t("colCheapest")],
       good.map((r) => [

@@ -104,6 +104,7 @@ export const cliDe = translation<typeof cli.en>()({
   colCheapest: "günstigste Zusatzlok",
   rowLine: "Zeile {line}",
   notAnswered: "Nicht beantwortete Zeilen ({count}):",
+  noneAnswered: "Keine Abfahrt ließ sich prüfen: jede Zeile hat ein Problem (unten).",
   summary: "{departures} Abfahrten: {starts} fahren an, {marginal} Grenzfall, {assist} brauchen eine Zusatzlok",
   summaryBad: ", {count} fehlerhafte Zeilen",
   summaryFailed: ", {count} fehlgeschlagen",

@@ -108,6 +108,7 @@ export const cli = namespace("cli", {
   colCheapest: "cheapest assistance",
   rowLine: "line {line}",
   notAnswered: "Rows not answered ({count}):",
+  noneAnswered: "No departure could be checked: every row has a problem (below).",
   summary: "{departures} departures: {starts} start, {marginal} marginal, {assist} need assistance",
   summaryBad: ", {count} bad rows",
   summaryFailed: ", {count} failed",

@@ -104,6 +104,7 @@ export const cliHu = translation<typeof cli.en>()({
   colCheapest: "legolcsóbb rásegítés",
   rowLine: "{line}. sor",
   notAnswered: "Megválaszolatlan sorok ({count}):",
+  noneAnswered: "Egyetlen indulás sem ellenőrizhető: minden sorban hiba van (lent).",
   summary: "{departures} indulás: {starts} elindul, {marginal} határeset, {assist} rásegítést igényel",
   summaryBad: ", {count} hibás sor",
   summaryFailed: ", {count} sikertelen",
