@@ -13,7 +13,7 @@ import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from "n
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { afterAll, describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it, vi } from "vitest";
 import { margin as appMargin, showAtMost } from "../../src/app/format.js";
 import { massesLine } from "../../src/app/screens/StartPlan/masses.js";
 import { runJob, type MassOutcome } from "../../src/cli/batch/jobs.js";
@@ -41,12 +41,14 @@ function resolved(json: unknown): StartCase {
 }
 
 /** The plan the app's worker answers for a case, as the app asks for it once the first plan is shown (with the mass search). */
-function workerPlan(c: StartCase): PlanResult {
+async function workerPlan(c: StartCase): Promise<PlanResult> {
   const posted: WorkerResponse[] = [];
   const ticks: Array<() => void> = [];
   const handle = createPlannerHandler((msg) => posted.push(msg), { schedule: (f) => ticks.push(f) });
   handle({ type: "plan", id: 1, startCase: structuredClone(c) });
   while (ticks.length > 0) ticks.shift()!();
+  // A plan with its largest masses waits for the later jobs' code (the mass search) to load.
+  await vi.waitFor(() => expect(posted.at(-1)?.type).not.toBe("progress"), { timeout: 60_000 });
   const last = posted.at(-1)!;
   if (last.type !== "result" || last.request !== "plan") throw new Error(`worker: ${JSON.stringify(last)}`);
   return last.result;
@@ -88,7 +90,7 @@ describe("every demo case tells one story on every surface", () => {
       expect(planRun.code, planRun.stderr).toBe(0);
       const plan = JSON.parse(planRun.stdout) as PlanReport;
       const check = await row(raw.id);
-      const app = workerPlan(c);
+      const app = await workerPlan(c);
       // The load table's cell at the case's own conditions: the command line's job and the app's worker.
       const tableCli = loadTableRowReport({ rail: c.conditions.rail, sand: c.conditions.sand, maxTrailingMassKg: (runJob({ kind: "mass", case: c, startsOnly: true, ofMakeUp: true }) as MassOutcome).maxStartableMassKg });
       const tableApp = runLoadTable(structuredClone(c), [{ rail: c.conditions.rail, sand: c.conditions.sand }])[0]!;
