@@ -1,6 +1,7 @@
 /** German: what the railML reader and the stretch say (see en/railmlText.ts and glossary.de.md). */
 import type { railmlText } from "../en/railmlText.js";
 import { translation } from "../messages.js";
+import { xmlProblemsDe } from "./xmlProblems.js";
 
 export const railmlTextDe = translation<typeof railmlText.en>()({
   frontTrack: "Gleis {track} bei pos {pos} m",
@@ -48,15 +49,7 @@ export const railmlTextDe = translation<typeof railmlText.en>()({
   tooManyElements: "Die Datei hat mehr als {max} Elemente: zu groß zum Lesen.",
   entities: "Die Dokumenttyp-Deklaration der Datei deklariert XML-Entities. Taut löst Entities weder auf noch lädt es sie (sie können riesige oder fremde Inhalte verbergen), daher liest es diese Datei nicht.",
   notWellFormed: "Die Datei ist kein wohlgeformtes XML ({detail}, Zeile {line}, Spalte {column}).",
-  xmlUnexpectedEnd: "die Datei endet, bevor ihre Elemente geschlossen sind",
-  xmlUnclosedTag: "das Element <{tag}> wird nie geschlossen",
-  xmlCloseTag: "ein schließendes Tag, das nicht zum offenen Element passt",
-  xmlUnmatchedTag: "das schließende Tag </{tag}> ohne offenes Element",
-  xmlCharacter: "ein in XML nicht erlaubtes Zeichen",
-  xmlAttribute: "ein fehlerhaftes Attribut",
-  xmlOutsideRoot: "Text oder Elemente außerhalb des Wurzelelements",
-  xmlNoRoot: "kein Wurzelelement",
-  xmlOther: "eine Struktur, die XML nicht erlaubt",
+  ...xmlProblemsDe,
   couldNotRead: "Die Datei ließ sich nicht lesen: {detail}",
   tooLarge: "Die Datei ist größer als {max} MB: zu groß zum Lesen.",
   empty: "Die Datei ist leer.",

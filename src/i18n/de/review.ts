@@ -1,6 +1,7 @@
 /** German: the Start review — its summary, the recording readers' words, the screen (see en/review.ts, glossary.de.md). */
 import type { review } from "../en/review.js";
 import { translation } from "../messages.js";
+import { xmlProblemsDe } from "./xmlProblems.js";
 
 export const reviewDe = translation<typeof review.en>()({
   heavier: "Der Zug verhielt sich, als wäre er {pct} % schwerer als geplant: Massenfaktor {value} (95-%-Intervall {low}–{high}), bei der angegebenen Zugkraft der Triebfahrzeuge.",
@@ -29,15 +30,7 @@ export const reviewDe = translation<typeof review.en>()({
   csvPartial: "Die Spalte {name} ist in manchen Zeilen gefüllt und in anderen leer: füllen Sie sie in jeder Zeile oder lassen Sie sie weg.",
   csvQuote: "Die Datei ist kein lesbares CSV: {detail}.",
   gpxNotXml: "Die Datei ist kein wohlgeformtes XML (Zeile {line}, Spalte {column}): {detail}",
-  xmlUnexpectedEnd: "die Datei endet, bevor ihre Elemente geschlossen sind",
-  xmlUnclosedTag: "das Element <{tag}> wird nie geschlossen",
-  xmlCloseTag: "ein schließendes Tag, das nicht zum offenen Element passt",
-  xmlUnmatchedTag: "das schließende Tag </{tag}> ohne offenes Element",
-  xmlCharacter: "ein in XML nicht erlaubtes Zeichen",
-  xmlAttribute: "ein fehlerhaftes Attribut",
-  xmlOutsideRoot: "Text oder Elemente außerhalb des Wurzelelements",
-  xmlNoRoot: "kein Wurzelelement",
-  xmlOther: "eine Struktur, die XML nicht erlaubt",
+  ...xmlProblemsDe,
   gpxRoot: "Das ist keine GPX-Datei: ihr Wurzelelement ist <{name}>, nicht <gpx>.",
   gpxEntities: "Die Datei deklariert eigene XML-Entitäten; ein GPX-Track hat keine, und eine solche Datei wird nicht gelesen.",
   gpxNoPoints: "Die GPX-Datei enthält keine Trackpunkte (trk / trkseg / trkpt).",

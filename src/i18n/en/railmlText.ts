@@ -4,6 +4,7 @@
  * messages; the command line renders the same codes in its language (railml/text.ts).
  */
 import { namespace } from "../messages.js";
+import { xmlProblems } from "./xmlProblems.js";
 
 export const railmlText = namespace("railmlText", {
   // Where the front stands; {track} is the track's name and id as the file gives them.
@@ -55,15 +56,7 @@ export const railmlText = namespace("railmlText", {
   tooManyElements: "The file has more than {max} elements: too large to read.",
   entities: "The file's document type declares XML entities. Taut does not expand or fetch entities (they can hide huge or outside content), so it does not read this file.",
   notWellFormed: "The file is not well-formed XML ({detail} at line {line}, column {column}).",
-  xmlUnexpectedEnd: "the file ends before its elements are closed",
-  xmlUnclosedTag: "the element <{tag}> is never closed",
-  xmlCloseTag: "a closing tag that does not match the element open",
-  xmlUnmatchedTag: "the closing tag </{tag}> with no element open",
-  xmlCharacter: "a character XML does not allow",
-  xmlAttribute: "a malformed attribute",
-  xmlOutsideRoot: "text or elements outside the root element",
-  xmlNoRoot: "no root element",
-  xmlOther: "a structure XML does not allow",
+  ...xmlProblems,
   couldNotRead: "The file could not be read: {detail}",
   tooLarge: "The file is larger than {max} MB: too large to read.",
   empty: "The file is empty.",

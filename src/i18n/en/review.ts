@@ -4,6 +4,7 @@
  * screen's own labels. The command line's `taut review` printout and the app share the first two.
  */
 import { namespace } from "../messages.js";
+import { xmlProblems } from "./xmlProblems.js";
 
 export const review = namespace("review", {
   // What the review says, one sentence each.
@@ -34,15 +35,7 @@ export const review = namespace("review", {
   csvPartial: "The column {name} is filled on some lines and empty on others: fill it on every line or leave it out.",
   csvQuote: "The file is not readable CSV: {detail}.",
   gpxNotXml: "The file is not well-formed XML (line {line}, column {column}): {detail}",
-  xmlUnexpectedEnd: "the file ends before its elements are closed",
-  xmlUnclosedTag: "the element <{tag}> is never closed",
-  xmlCloseTag: "a closing tag that does not match the element open",
-  xmlUnmatchedTag: "the closing tag </{tag}> with no element open",
-  xmlCharacter: "a character XML does not allow",
-  xmlAttribute: "a malformed attribute",
-  xmlOutsideRoot: "text or elements outside the root element",
-  xmlNoRoot: "no root element",
-  xmlOther: "a structure XML does not allow",
+  ...xmlProblems,
   gpxRoot: "This is not a GPX file: its root element is <{name}>, not <gpx>.",
   gpxEntities: "The file declares its own XML entities; a GPX track has none, and such a file is not read.",
   gpxNoPoints: "The GPX file holds no track points (trk / trkseg / trkpt).",

@@ -1,6 +1,7 @@
 /** Hungarian: what the railML reader and the stretch say (see en/railmlText.ts and glossary.hu.md). */
 import type { railmlText } from "../en/railmlText.js";
 import { translation } from "../messages.js";
+import { xmlProblemsHu } from "./xmlProblems.js";
 
 export const railmlTextHu = translation<typeof railmlText.en>()({
   frontTrack: "{track} vágány, pos {pos} m",
@@ -48,15 +49,7 @@ export const railmlTextHu = translation<typeof railmlText.en>()({
   tooManyElements: "A fájlnak több mint {max} eleme van: túl nagy az olvasáshoz.",
   entities: "A fájl dokumentumtípusa XML-entitásokat deklarál. A Taut nem bont ki és nem tölt le entitásokat (óriási vagy külső tartalmat rejthetnek), ezért ezt a fájlt nem olvassa.",
   notWellFormed: "A fájl nem jól formált XML ({detail}, {line}. sor, {column}. oszlop).",
-  xmlUnexpectedEnd: "a fájl véget ér, mielőtt az elemei lezárulnának",
-  xmlUnclosedTag: "a(z) <{tag}> elem nincs lezárva",
-  xmlCloseTag: "a záró címke nem a nyitott elemhez tartozik",
-  xmlUnmatchedTag: "a(z) </{tag}> záró címke nyitott elem nélkül",
-  xmlCharacter: "XML-ben nem megengedett karakter",
-  xmlAttribute: "hibás attribútum",
-  xmlOutsideRoot: "szöveg vagy elem a gyökérelemen kívül",
-  xmlNoRoot: "nincs gyökérelem",
-  xmlOther: "az XML szabályai szerint hibás szerkezet",
+  ...xmlProblemsHu,
   couldNotRead: "A fájl nem olvasható: {detail}",
   tooLarge: "A fájl nagyobb {max} MB-nál: túl nagy az olvasáshoz.",
   empty: "A fájl üres.",

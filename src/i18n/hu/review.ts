@@ -1,6 +1,7 @@
 /** Hungarian: the Start review — its summary, the recording readers' words, the screen (see en/review.ts, glossary.hu.md). */
 import type { review } from "../en/review.js";
 import { translation } from "../messages.js";
+import { xmlProblemsHu } from "./xmlProblems.js";
 
 export const reviewHu = translation<typeof review.en>()({
   heavier: "A vonat úgy viselkedett, mintha {pct} %-kal nehezebb lett volna a tervezettnél: tömegtényező {value} (95%-os tartomány {low}–{high}), a mozdonyok előírt vonóerejével.",
@@ -29,15 +30,7 @@ export const reviewHu = translation<typeof review.en>()({
   csvPartial: "A(z) {name} oszlop egyes sorokban ki van töltve, másokban üres: töltse ki minden sorban, vagy hagyja el.",
   csvQuote: "A fájl nem olvasható CSV: {detail}.",
   gpxNotXml: "A fájl nem szabályos XML ({line}. sor, {column}. oszlop): {detail}",
-  xmlUnexpectedEnd: "a fájl véget ér, mielőtt az elemei lezárulnának",
-  xmlUnclosedTag: "a(z) <{tag}> elem nincs lezárva",
-  xmlCloseTag: "a záró címke nem a nyitott elemhez tartozik",
-  xmlUnmatchedTag: "a(z) </{tag}> záró címke nyitott elem nélkül",
-  xmlCharacter: "XML-ben nem megengedett karakter",
-  xmlAttribute: "hibás attribútum",
-  xmlOutsideRoot: "szöveg vagy elem a gyökérelemen kívül",
-  xmlNoRoot: "nincs gyökérelem",
-  xmlOther: "az XML szabályai szerint hibás szerkezet",
+  ...xmlProblemsHu,
   gpxRoot: "Ez nem GPX fájl: a gyökéreleme <{name}>, nem <gpx>.",
   gpxEntities: "A fájl saját XML-entitásokat deklarál; egy GPX nyomvonalban nincs ilyen, és az ilyen fájlt nem olvassuk be.",
   gpxNoPoints: "A GPX fájlban nincs nyomvonalpont (trk / trkseg / trkpt).",
