@@ -3,13 +3,15 @@
  * of issue 14 with its figure and ratio. Figures, not assertions — this machine is shared and noisy; compare
  * ratios within one run.
  *   --quick   skip the slow comparison with the general-purpose integrator; 100 all-different departures
- *             instead of 500 (the figure is scaled); the assistance search on 24 departures instead of 60
+ *             instead of 500 (the figure is scaled); the assistance search on 24 departures instead of 60; the pool's
+ *             order of work on 40 departures instead of 100
  */
 import { availableParallelism, loadavg } from "node:os";
 import { benchDynamics } from "./dynamics.js";
 import { benchPlanner } from "./planner.js";
 import { run as benchStartup } from "./startup.js";
 import { run as benchBatch } from "./batch.js";
+import { benchBatchPool } from "./batchPool.js";
 import { benchAssistance } from "./assistance.js";
 import { benchMassJudgements } from "./massJudgements.js";
 import { run as benchBundle } from "./bundle.js";
@@ -25,6 +27,7 @@ benchPlanner();
 benchReview();
 benchStartup();
 benchBatch();
+benchBatchPool(quick ? 40 : 100);
 benchMassJudgements(quick ? 16 : 40);
 benchAssistance(quick ? 24 : 60);
 await benchBundle();

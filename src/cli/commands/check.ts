@@ -88,7 +88,9 @@ export const checkCommand: Command = {
     const progress = values.quiet ? undefined : progressReporter(io, errorWords()("progressDepartures"));
     let result;
     try {
-      result = await checkDepartures(deps, pool, { ...(helper ? { helper } : {}), ...(progress ? { onProgress: progress } : {}) });
+      // TAUT_BENCH_CHECK_ORDER=input: the file's order, for the batch benchmark's comparison (not a user setting).
+      const order = process.env.TAUT_BENCH_CHECK_ORDER === "input" ? "input" : "costliest-first";
+      result = await checkDepartures(deps, pool, { order, ...(helper ? { helper } : {}), ...(progress ? { onProgress: progress } : {}) });
     } finally {
       await pool.close();
     }
