@@ -106,7 +106,7 @@ function benchLongPlanWork(c: StartCase): void {
 }
 
 /** The INTERFACE.md example size: 40 wagons on the demo's Ashvale Loop, one 3000 kW unit, 1800 t, dry. */
-function fortyWagonCase(): StartCase {
+export function fortyWagonCase(): StartCase {
   const demo = builtinCaseJson[0] as Record<string, unknown>;
   const r = parseStartCase({ ...demo, id: "forty", train: { ...(demo.train as object), trailingMass_t: 1800, wagons: 40, length_m: 560 } }, builtinLibrary());
   if (!r.ok) throw new Error("forty-wagon case invalid");

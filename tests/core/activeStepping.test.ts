@@ -9,13 +9,17 @@
 import { isDeepStrictEqual } from "node:util";
 import { afterEach, describe, expect, it } from "vitest";
 import { planStart, type StartCase } from "../../src/core/index.js";
-import { applyBrakes, applyBrakesFrom, createState, setActiveOnlyStepping, vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
+import { applyBrakes, applyBrakesFrom, createState, evaluate, mayBreakAway, setActiveOnlyStepping, setBrakeChangeHeldCheck, vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
+import { cloneState } from "../../src/core/dynamics/runner.js";
 import { modelFromCase } from "../../src/core/train/trainModel.js";
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { seededDepartures } from "../tools/departures.js";
 
-afterEach(() => setActiveOnlyStepping(true));
+afterEach(() => {
+  setActiveOnlyStepping(true);
+  setBrakeChangeHeldCheck(true);
+});
 
 function plan(c: StartCase, activeOnly: boolean) {
   setActiveOnlyStepping(activeOnly);
@@ -88,5 +92,53 @@ describe("the brakes set only where they can be changing (applyBrakesFrom)", () 
     }
     expect(differ).toBe(0);
     expect(compared).toBeGreaterThan(1000);
+  });
+});
+
+describe("a brake change makes its vehicle restless only when it may break away (mayBreakAway)", () => {
+  it("agrees with the evaluation itself on every standing vehicle, at brakes around what holds it", () => {
+    // The reference is `evaluate`: a standing vehicle moves at the next evaluation exactly when what pushes it
+    // passes what holds it. Each standing vehicle's brake is set from none to more than grade and coupling
+    // forces push with, on trains standing on grades and changes of grade (seeded departures).
+    let held = 0;
+    let freed = 0;
+    for (const c of seededDepartures(12, 120)) {
+      const m = modelFromCase(c);
+      const base = createState(m);
+      base.brakeN.fill(0);
+      evaluate(m, base, 0);
+      for (let i = 0; i < m.n; i++) {
+        if (base.v[i] !== 0) continue;
+        const a0 = base.acc[i]!;
+        for (const brakeN of [0, 1, 1e3, 1e4, 5e4, 1e5, 3e5]) {
+          const s = cloneState(base);
+          s.acc.fill(0);
+          s.brakeN[i] = brakeN;
+          const predicted = mayBreakAway(m, s, i);
+          const e = cloneState(s);
+          evaluate(m, e, 0);
+          expect(predicted, `vehicle ${i}, brake ${brakeN} N, first acceleration ${a0}`).toBe(e.acc[i] !== 0);
+          if (predicted) freed++;
+          else held++;
+        }
+      }
+    }
+    // Both answers occur (the test tells them apart).
+    expect(held).toBeGreaterThan(100);
+    expect(freed).toBeGreaterThan(100);
+  });
+
+  it("the same plans with less work in the brake release than making every brake change restless", () => {
+    const cases = seededDepartures(10, 120);
+    const work = (on: boolean) => {
+      setBrakeChangeHeldCheck(on);
+      const before = vehicleStepsDone();
+      const plans = cases.map((c) => planStart(c, { skipMassSearch: true }));
+      return { plans, work: vehicleStepsDone() - before };
+    };
+    const every = work(false);
+    const only = work(true);
+    cases.forEach((_, k) => expect(isDeepStrictEqual(only.plans[k], every.plans[k]), `departure ${k}`).toBe(true));
+    expect(only.work).toBeLessThan(every.work);
   });
 });

@@ -55,7 +55,7 @@ export interface DynamicsState {
   energy: EnergyLedger | null;
 
   // The resting vehicles' part of a step (`stepActive`): which vehicles may change at the next evaluation.
-  /** 1: the vehicle moved or was pushed at its last evaluation, or its brake changed since (0: it rests). */
+  /** 1: the vehicle moved or was pushed at its last evaluation, or its brake changed since so that it may move (0: it rests). */
   restless: Uint8Array;
   /** `restless` describes the state (false after an evaluation of every vehicle, which does not keep it). */
   restlessValid: boolean;
@@ -287,7 +287,8 @@ export function step(m: TrainModel, s: DynamicsState, dt: number): void {
 /**
  * `step` for a train most of whose vehicles rest (the brakes releasing, the train still standing or taking
  * up its slack): only the vehicles that can change are integrated — each that moved or was pushed at its last
- * evaluation, whose brake changed since (`applyBrakes` marks it), and their neighbours, with the couplings
+ * evaluation, whose brake changed since so that it may break away (`applyBrakes` marks it: `mayBreakAway`),
+ * and their neighbours, with the couplings
  * between them; and every unit (its effort changes by itself). Exact: a vehicle that stood still with no
  * force moving it, between neighbours that did the same, has the same position, speed, coupling forces and
  * acceleration at the next evaluation, so the full step would compute for it what it already holds (the
@@ -632,7 +633,41 @@ export function kineticEnergyJ(m: TrainModel, s: DynamicsState): number {
   return e;
 }
 
-/** Set the brake holding capacities for time t from the release schedule; a vehicle whose brake changed is restless. */
+/** `mayBreakAway` looks (true, the default); off, every brake change makes its vehicle restless (the benchmark's before). */
+let heldCheck = true;
+
+export function setBrakeChangeHeldCheck(on: boolean): void {
+  heldCheck = on;
+}
+
+/**
+ * Can a resting vehicle whose brake has just changed (`brakeN`) move at the next evaluation? The test that
+ * evaluation makes for a standing vehicle, with the same numbers in the same order: what pushes it (its
+ * couplings' forces as they stand, gravity along the grade) beyond what holds it (running resistance at
+ * standstill with the breakaway excess, curve, the new brake). A vehicle still held — at rest (no speed, no
+ * acceleration) — gets from the next evaluation exactly what it has, when its neighbours rest too; when one
+ * of them is restless it is evaluated anyway, with its new brake. So it need not be made restless: the brake
+ * release no longer sets a whole train's evaluation going while only its front moves (the graduated release
+ * eases every wagon's brake at once, for a minute or more).
+ */
+export function mayBreakAway(m: TrainModel, s: DynamicsState, i: number): boolean {
+  if (!heldCheck || s.v[i] !== 0 || s.acc[i] !== 0) return true;
+  const n = m.n;
+  const k = s.seg[i]!;
+  const mass = m.massKg[i]!;
+  const grade = mass * GRAVITY_MPS2 * m.segSin[k]!;
+  const fFront = i > 0 ? s.couplerF[i - 1]! : 0;
+  const f = i < n - 1 ? s.couplerF[i]! : 0;
+  const fApp = s.tractionN[i]! - grade + fFront - f;
+  // As in `evaluateRuns` at sp = 0.
+  const sp = 0;
+  let res = m.davisA[i]! + (m.davisB[i]! + m.davisC[i]! * sp) * sp + mass * m.segCurveNPerKg[k]!;
+  if (sp < m.fadeSpeedMps) res += m.breakawayExcessN[i]! * (1 - sp / m.fadeSpeedMps);
+  const hold = res + s.brakeN[i]!;
+  return fApp > hold || fApp < -hold;
+}
+
+/** Set the brake holding capacities for time t from the release schedule; a resting vehicle whose brake changed so that it may move is restless (`mayBreakAway`). */
 export function applyBrakes(m: TrainModel, s: DynamicsState, trainReleaseS: number, locoReleaseS: number): void {
   const t = s.t;
   const ramp = m.brakeReleaseRampS;
@@ -657,7 +692,7 @@ export function applyBrakes(m: TrainModel, s: DynamicsState, trainReleaseS: numb
     }
     if (brakeN[i] !== cap) {
       brakeN[i] = cap;
-      restless[i] = 1;
+      if (restless[i] === 0 && mayBreakAway(m, s, i)) restless[i] = 1;
     }
   }
 }
@@ -716,7 +751,7 @@ export function applyBrakesFrom(m: TrainModel, s: DynamicsState, trainReleaseS: 
     cap += t <= locoReleaseS ? lb : t >= locoReleaseS + lr ? 0 : lb * (1 - (t - locoReleaseS) / lr);
     if (brakeN[i] !== cap) {
       brakeN[i] = cap;
-      restless[i] = 1;
+      if (restless[i] === 0 && mayBreakAway(m, s, i)) restless[i] = 1;
     }
   }
   const byRelease = order.byRelease;
@@ -730,7 +765,7 @@ export function applyBrakesFrom(m: TrainModel, s: DynamicsState, trainReleaseS: 
     cap += t >= start + ramp ? 0 : tb * (1 - (t - start) / ramp);
     if (brakeN[i] !== cap) {
       brakeN[i] = cap;
-      restless[i] = 1;
+      if (restless[i] === 0 && mayBreakAway(m, s, i)) restless[i] = 1;
     }
     if (q === next && cap === 0) next++;
   }

@@ -79,6 +79,27 @@ export function vehicleStepsBeforeAllMoved(): number {
   return beforeAllMovedWork;
 }
 
+/**
+ * Where the runs' work goes, vehicle-steps, by phase (for the benchmarks): 0 quiescent intervals (one
+ * evaluation), 1 before every vehicle moved with the brakes still releasing, 2 before every vehicle moved
+ * with the brakes off, 3 every vehicle moved, still at the take-up step, 4 the full chain at the rolling step,
+ * 5 the settled train. Steps (integrator steps or evaluations) in the same phases at 6…11, and the
+ * vehicle-steps a full step of every vehicle would have done at 12…17.
+ */
+const phaseTally = new Float64Array(18);
+
+/** A copy of the work by phase so far (`phaseTally`), this process. */
+export function workByPhase(): Float64Array {
+  return phaseTally.slice();
+}
+
+/** Add work to a phase of `phaseTally`. */
+function tally(phase: number, vehicleStepsDelta: number, stepsDelta: number, n: number): void {
+  phaseTally[phase]! += vehicleStepsDelta;
+  phaseTally[6 + phase]! += stepsDelta;
+  phaseTally[12 + phase]! += stepsDelta * n;
+}
+
 export interface RunOptions {
   /** A fixed step for the whole run (rounded down to a whole fraction of the control interval), s. */
   dt?: number;
@@ -235,6 +256,7 @@ export class Run {
       this.afterStep();
       this.steps++;
       countVehicleSteps(m.n);
+      tally(5, m.n, 1, m.n);
     } else if (this.quiescent()) {
       // Everything stands and is held: only brakes and the effort lag change. One evaluation over the
       // interval finds the moment (to within the interval) when something breaks away.
@@ -243,6 +265,7 @@ export class Run {
       if (s.t <= this.brakesDoneS + span) this.applyBrakes();
       evaluate(m, s, span);
       this.afterStep();
+      tally(0, m.n, 1, m.n);
     } else if (this.startedCount < m.n) {
       // Until every vehicle has moved, most of the train often rests: integrate only what can change (exact).
       const work0 = vehicleStepsDone();
@@ -255,6 +278,7 @@ export class Run {
       }
       this.steps += steps;
       beforeAllMovedWork += vehicleStepsDone() - work0;
+      tally(s.t <= this.brakesDoneS ? 1 : 2, vehicleStepsDone() - work0, steps, m.n);
     } else {
       for (let k = 0; k < steps; k++) {
         if (s.t <= this.brakesDoneS) this.applyBrakes();
@@ -262,6 +286,7 @@ export class Run {
         this.afterStep();
       }
       this.steps += steps;
+      tally(this.rollingStepS > 0 ? 3 : 4, steps * m.n, steps, m.n);
     }
     // The clock counts whole intervals, so rounding in the steps never accumulates: after k intervals the
     // time is exactly t0 + k × interval.
