@@ -7,14 +7,14 @@
  */
 import { planStart } from "../../src/core/planner/index.js";
 import { setBrakeChangeHeldCheck, vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
-import { workByPhase } from "../../src/core/dynamics/runner.js";
+import { setQuiescentActiveOnly, workByPhase } from "../../src/core/dynamics/runner.js";
 import { integratorSteps, modelFromCase } from "../../src/core/train/trainModel.js";
 import type { StartCase } from "../../src/core/train/types.js";
 import { longTrainCase } from "./dynamics.js";
 import { fortyWagonCase } from "./planner.js";
 import { seededDepartures } from "../tools/departures.js";
 
-const PHASES = ["quiescent (one evaluation)", "brakes releasing, not all moved", "brakes off, not all moved", "all moved, take-up step", "chain, rolling step", "settled (one mass)"];
+const PHASES = ["quiescent (evaluations)", "brakes releasing, not all moved", "brakes off, not all moved", "all moved, take-up step", "chain, rolling step", "settled (one mass)"];
 
 export function preparationBreakdown(name: string, cases: StartCase[], opts: { massSearch?: boolean } = {}): { work: number; cpuMs: number; byPhase: Float64Array } {
   const p0 = workByPhase();
@@ -34,7 +34,7 @@ export function preparationBreakdown(name: string, cases: StartCase[], opts: { m
     const steps = by[6 + k]!;
     const full = by[12 + k]!;
     console.log(
-      `  ${PHASES[k]!.padEnd(34)} ${(vs / cases.length / 1e6).toFixed(3).padStart(7)} M/plan ${k > 0 ? ((100 * vs) / total).toFixed(1).padStart(5) + " %" : "  (not counted)"}  steps ${(steps / cases.length).toFixed(0).padStart(7)}/plan  share integrated ${full > 0 ? ((100 * vs) / full).toFixed(1) : "-"} %`,
+      `  ${PHASES[k]!.padEnd(34)} ${(vs / cases.length / 1e6).toFixed(3).padStart(7)} M/plan ${k > 0 ? ((100 * vs) / total).toFixed(1).padStart(5) + " %" : "  (no step) "}  steps ${(steps / cases.length).toFixed(0).padStart(7)}/plan  share integrated ${full > 0 ? ((100 * vs) / full).toFixed(1) : "-"} %`,
     );
   }
   return { work, cpuMs, byPhase: by };
@@ -63,15 +63,36 @@ preparationBreakdown("150 wagons", long);
 preparationBreakdown("40 seeded departures (no mass search)", many);
 if (process.argv.includes("--mass")) preparationBreakdown("40 seeded departures (with mass search)", many, { massSearch: true });
 
-// Before → after: a brake change making its vehicle restless always, against only when it may break away.
+// Before → after: every brake change making its vehicle restless and every quiescent interval evaluating every
+// vehicle, against only the vehicles a brake change may free (`mayBreakAway`) and a quiescent interval
+// evaluating only what can change (`evaluateActive`). The same plans (tests/core/activeStepping.test.ts).
 {
-  const rounds: Array<[string, boolean]> = [["before (every brake change restless)", false], ["after (mayBreakAway)", true], ["before (every brake change restless)", false], ["after (mayBreakAway)", true]];
-  for (const [label, on] of rounds) {
+  const setBoth = (on: boolean) => {
     setBrakeChangeHeldCheck(on);
-    const a = preparationBreakdown(`${label}: 40 seeded departures`, many);
-    const b = preparationBreakdown(`${label}: 150 wagons`, long);
-    const f = preparationBreakdown(`${label}: 40 wagons`, forty);
-    void a, b, f;
+    setQuiescentActiveOnly(on);
+  };
+  const sums = new Map<string, { work: number; cpuMs: number; quiescent: number; release: number }>();
+  for (let round = 0; round < 2; round++) {
+    for (const [label, on] of [["before", false], ["after", true]] as const) {
+      setBoth(on);
+      for (const [name, cases] of [["40 wagons", forty], ["150 wagons", long], ["40 seeded departures", many]] as const) {
+        const r = preparationBreakdown(`${label}: ${name}`, cases);
+        const key = `${name} ${label}`;
+        const e = sums.get(key) ?? { work: 0, cpuMs: 0, quiescent: 0, release: 0 };
+        e.work += r.work / cases.length;
+        e.cpuMs += r.cpuMs / cases.length;
+        e.quiescent += r.byPhase[0]! / cases.length;
+        e.release += (r.byPhase[1]! + r.byPhase[2]!) / cases.length;
+        sums.set(key, e);
+      }
+    }
   }
-  setBrakeChangeHeldCheck(true);
+  setBoth(true);
+  console.log("\nBefore → after (per plan, mean of 2 rounds):");
+  for (const name of ["40 wagons", "150 wagons", "40 seeded departures"]) {
+    const b = sums.get(`${name} before`)!;
+    const a = sums.get(`${name} after`)!;
+    const M = (x: number) => (x / 2 / 1e6).toFixed(3);
+    console.log(`  ${name}: vehicle-steps ${M(b.work)} → ${M(a.work)} M; before every vehicle moved ${M(b.release)} → ${M(a.release)} M; quiescent evaluations ${M(b.quiescent)} → ${M(a.quiescent)} M; CPU ${(b.cpuMs / 2).toFixed(0)} → ${(a.cpuMs / 2).toFixed(0)} ms`);
+  }
 }

@@ -10,7 +10,7 @@ import { isDeepStrictEqual } from "node:util";
 import { afterEach, describe, expect, it } from "vitest";
 import { planStart, type StartCase } from "../../src/core/index.js";
 import { applyBrakes, applyBrakesFrom, createState, evaluate, mayBreakAway, setActiveOnlyStepping, setBrakeChangeHeldCheck, vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
-import { cloneState } from "../../src/core/dynamics/runner.js";
+import { cloneState, setQuiescentActiveOnly, workByPhase } from "../../src/core/dynamics/runner.js";
 import { modelFromCase } from "../../src/core/train/trainModel.js";
 import { builtinCaseJson, builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
@@ -19,6 +19,7 @@ import { seededDepartures } from "../tools/departures.js";
 afterEach(() => {
   setActiveOnlyStepping(true);
   setBrakeChangeHeldCheck(true);
+  setQuiescentActiveOnly(true);
 });
 
 function plan(c: StartCase, activeOnly: boolean) {
@@ -128,17 +129,25 @@ describe("a brake change makes its vehicle restless only when it may break away 
     expect(freed).toBeGreaterThan(100);
   });
 
-  it("the same plans with less work in the brake release than making every brake change restless", () => {
+  it("the same plans with less work in the brake release than making every brake change restless and evaluating every vehicle while all stand", () => {
+    // The reference: every brake change makes its vehicle restless, and a quiescent interval (everything
+    // standing and held) evaluates every vehicle — the full evaluation of what `stepActive` and
+    // `evaluateActive` skip. Seeded departures of up to 120 wagons, some standing for a minute or more
+    // while the brake release runs down the train.
     const cases = seededDepartures(10, 120);
     const work = (on: boolean) => {
       setBrakeChangeHeldCheck(on);
+      setQuiescentActiveOnly(on);
       const before = vehicleStepsDone();
+      const quiet = workByPhase()[0]!;
       const plans = cases.map((c) => planStart(c, { skipMassSearch: true }));
-      return { plans, work: vehicleStepsDone() - before };
+      return { plans, work: vehicleStepsDone() - before, quiescentEvaluations: workByPhase()[0]! - quiet };
     };
     const every = work(false);
     const only = work(true);
     cases.forEach((_, k) => expect(isDeepStrictEqual(only.plans[k], every.plans[k]), `departure ${k}`).toBe(true));
     expect(only.work).toBeLessThan(every.work);
+    expect(every.quiescentEvaluations).toBeGreaterThan(0);
+    expect(only.quiescentEvaluations).toBeLessThan(0.5 * every.quiescentEvaluations);
   });
 });

@@ -362,6 +362,67 @@ export function stepActive(m: TrainModel, s: DynamicsState, dt: number): void {
 }
 
 /**
+ * `evaluate` for a train that stands and is held throughout an interval (the run's quiescent interval: the
+ * brakes releasing, nothing moving yet), looking only at what can change: every unit (its effort), each
+ * vehicle whose brake change may free it (`mayBreakAway`), each that moved or was pushed at its last
+ * evaluation, and their neighbours — the runs `stepActive` would take, without its kicks and drift. Exact for
+ * the reason `stepActive` is: every other vehicle, standing and held between standing neighbours, would be
+ * given what it holds. The couplings not evaluated count in the interval's largest forces as in
+ * `stepActive` (every vehicle when `restless` does not describe the state); the full `evaluate` with the
+ * energy ledger. Returns how many vehicles it evaluated.
+ */
+export function evaluateActive(m: TrainModel, s: DynamicsState, dt: number): number {
+  if (s.energy !== null) {
+    evaluate(m, s, dt);
+    return m.n;
+  }
+  const n = m.n;
+  const restless = s.restless;
+  if (!s.restlessValid) restless.fill(1);
+  for (let k = 0; k < m.nl; k++) restless[m.locoVehicle[k]!] = 1;
+  const runs = s.runs;
+  let nRuns = 0;
+  let open = false;
+  let before = 0;
+  let here = n > 0 ? restless[0]! : 0;
+  let count = 0;
+  for (let i = 0; i < n; i++) {
+    const after = i < n - 1 ? restless[i + 1]! : 0;
+    if ((before | here | after) !== 0) {
+      count++;
+      if (!open) {
+        runs[2 * nRuns] = i;
+        open = true;
+      }
+      runs[2 * nRuns + 1] = i;
+    } else if (open) {
+      nRuns++;
+      open = false;
+    }
+    before = here;
+    here = after;
+  }
+  if (open) nRuns++;
+  evaluateRuns(m, s, dt, 0, runs, nRuns, restless);
+  s.restlessValid = true;
+  if (s.intervalMaxStale) {
+    // As in `stepActive`: the couplings not evaluated keep their forces and count once in this interval.
+    const F = s.couplerF;
+    let maxT = s.intervalMaxTensionN;
+    let maxC = s.intervalMaxCompressionN;
+    for (let j = 0; j < n - 1; j++) {
+      const f = F[j]!;
+      if (f > maxT) maxT = f;
+      if (-f > maxC) maxC = -f;
+    }
+    s.intervalMaxTensionN = maxT;
+    s.intervalMaxCompressionN = maxC;
+    s.intervalMaxStale = false;
+  }
+  return count;
+}
+
+/**
  * Evaluate coupler forces, traction and accelerations at the current positions and speeds. `dt` is the
  * time since the previous evaluation (for the effort lag); `kickH` > 0 also applies the closing half-kick.
  * One pass head to tail: each coupling's force is computed just before the vehicle behind needs it.
