@@ -55,8 +55,10 @@ export interface CardProvenance {
   /** Date of its latest revision, YYYY-MM-DD. */
   revisionDate: string;
   version: string;
-  /** The rail-condition defaults in a line. */
+  /** The rail-condition defaults in a line (English, as the command line prints it). */
   rail: string;
+  /** The rail-condition table itself, for a line in another language. */
+  adhesion: AdhesionTable;
   /** Fingerprint of every input of the card's figures ("xxxx-xxxx"). */
   fingerprint: string;
 }
@@ -67,6 +69,7 @@ export function cardProvenance(note: LocationNoteFile, presets: readonly TrainPr
     revisionDate: latestRevision(note).date,
     version,
     rail: railDefaultsLine(lib.adhesion),
+    adhesion: lib.adhesion,
     fingerprint: fingerprint(noteFigureInputs(note, presets, lib, version)),
   };
 }

@@ -24,6 +24,9 @@ import {
 } from "./protocol.js";
 
 /** The part of a Worker the client uses (a fake in tests). */
+/** A crashed worker's message when the browser gave none (the app says it in the language on screen). */
+export const PLANNER_STOPPED = "The planner stopped unexpectedly.";
+
 export interface WorkerLike {
   postMessage(msg: WorkerRequest): void;
   terminate(): void;
@@ -196,7 +199,7 @@ export function createPlannerClient(options: PlannerClientOptions): PlannerClien
       ev.preventDefault?.();
       // A crashed worker answers nothing more: report every pending request and start afresh next time.
       stopWorker();
-      const message = ev.message || "The planner stopped unexpectedly.";
+      const message = ev.message || PLANNER_STOPPED;
       for (const id of [...pending.keys()]) settle(id, { ok: false, kind: "crashed", issues: [], message });
     };
     worker = w;

@@ -24,6 +24,8 @@ import { join } from "node:path";
 const builtinCase = () => JSON.parse(readFileSync(join(process.cwd(), "profiles", "cases", "demo-ore-lantern.json"), "utf8")) as unknown;
 import { memoryStorage, renderWithApp } from "./harness.js";
 import { fakePool } from "./dispatch/fakes.js";
+import { wordsHu } from "../../src/i18n/hu/words.js";
+import { wordsDe } from "../../src/i18n/de/words.js";
 
 const WORK: PlanWorkProblem = { code: "work-cap", vehicles: 61, stepS: 4.2e-9, lightestKg: 0.001, vehicleSteps: 1.27e12, capVehicleSteps: PLAN_WORK_CAP_VEHICLE_STEPS };
 const oneDecimal = (locale: string, x: number) => new Intl.NumberFormat(locale, { minimumFractionDigits: 1, maximumFractionDigits: 1 }).format(x);
@@ -85,8 +87,14 @@ describe("Settings' list of sources in Hungarian and German", () => {
       expect(text).toContain("Röckl");
       const dry = builtinRailConditions.conditions.dry!;
       const comma = (x: number) => new Intl.NumberFormat(locale, { maximumFractionDigits: 4 }).format(x);
-      expect(items().find((t) => t.includes('"dry"'))).toContain(`μ ${comma(dry.median)}`);
-      expect(items().find((t) => t.includes('"dry"'))).toContain(comma(dry.sanded));
+      // The condition in the language's own word, and the table's note on its source in the language too.
+      const dryItem = items().find((t) => t.includes(` ${(lang === "de" ? wordsDe : wordsHu).railInlineDry} (`));
+      expect(dryItem).toContain(`μ ${comma(dry.median)}`);
+      expect(dryItem).toContain(comma(dry.sanded));
+      expect(dryItem).toContain(`Curtius–Kniffler μ(0) = ${comma(0.3315)}`);
+      expect(dryItem).toContain("(Elektrische Bahnen 20, 1950)");
+      expect(text).not.toContain('"dry"');
+      expect(text).not.toContain("From memory");
       for (const e of ENGLISH) expect(text).not.toMatch(e);
       unmount();
     });

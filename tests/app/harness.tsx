@@ -86,13 +86,13 @@ export function quickTablePool(): PlannerPool {
   });
 }
 
-export function renderWithApp(ui?: () => JSX.Element, opts: { storage?: Storage; screens?: readonly ScreenEntry[]; background?: boolean; pool?: PlannerPool } = {}) {
+export function renderWithApp(ui?: () => JSX.Element, opts: { storage?: Storage; screens?: readonly ScreenEntry[]; background?: boolean; pool?: PlannerPool; createWorker?: () => WorkerLike } = {}) {
   const storage = opts.storage ?? memoryStorage();
   let h!: Harness;
   const screens = opts.screens ?? SCREENS;
   const result = render(() => {
     const state = createAppState({
-      planner: createPlannerClient({ createWorker: () => new InProcessWorker() }),
+      planner: createPlannerClient({ createWorker: opts.createWorker ?? (() => new InProcessWorker()) }),
       ...(opts.background ? { background: createPlannerClient({ createWorker: () => new InProcessWorker() }) } : {}),
       registerSW: null,
       screenIds: screens.map((s) => s.id),

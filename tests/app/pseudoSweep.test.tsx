@@ -101,6 +101,12 @@ const WORKS = [
   "W. W. Hay, Railroad Engineering, 2nd ed. (1982).",
   "W. J. White, How Diesel-Electric Locomotives Operate (1997).",
   "C. Cole, in Handbook of Railway Vehicle Dynamics (2006); Wu, Spiryagin and Cole, Vehicle System Dynamics 54 (2016).",
+  // The works the rail table's notes cite, now that the notes' own words come from the catalog (Settings/railNotes.ts).
+  "Curtius–Kniffler",
+  "Elektrische Bahnen 20, 1950",
+  "Fisk et al., IMechE Stephenson Conference 2015",
+  "Koffman 1948, J. Inst. Locomotive Engineers paper 479",
+  "Olofsson et al., Proc. IMechE F 218, 2004",
 ];
 
 describe("pseudo-localised screens: no word outside the catalogs", () => {

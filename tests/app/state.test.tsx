@@ -200,7 +200,8 @@ describe("plan run", () => {
     await waitFor(() => expect(calls).toHaveLength(1));
     calls[0]!.resolve({ ok: false, kind: "crashed", issues: [], message: "out of memory" });
     await waitFor(() => expect(run.status()).toBe("failed"));
-    expect(run.error()).toBe("out of memory");
+    // A planner that stopped is said in the app's words, with the browser's own words on why beside them.
+    expect(run.error()).toBe("the planner stopped unexpectedly (out of memory).");
     run.retry();
     await waitFor(() => expect(calls).toHaveLength(2));
   });

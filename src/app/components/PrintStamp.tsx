@@ -29,7 +29,8 @@ export function PrintStamp(props: { screen: string }): JSX.Element {
       </Show>
       <p>
         {t("printStamp", { version: APP_VERSION, screen: props.screen, at: at() })}
-        <Show when={status()}>{(s) => t("printFingerprint", { fingerprint: fingerprint([APP_VERSION, s().inputs]) })}</Show>
+        {/* Words in a JSX expression, not a Show callback's return: they redraw when the language changes. */}
+        <Show when={status()}>{t("printFingerprint", { fingerprint: fingerprint([APP_VERSION, status()!.inputs]) })}</Show>
         {t("printAdvisory")}
       </p>
     </div>

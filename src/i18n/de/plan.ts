@@ -10,6 +10,8 @@ export const planDe = translation<typeof plan.en>()({
   planning: "Planung",
   planningDots: "Wird geplant…",
   failed: "Der Planer konnte nicht zu Ende rechnen: {error}",
+  plannerStopped: "der Planer hat unerwartet angehalten.",
+  plannerStoppedBecause: "der Planer hat unerwartet angehalten ({detail}).",
   tryAgain: "Erneut versuchen",
   noPlanLabel: "Kein Plan: die Eingaben verletzen eine Regel",
   noPlanWord: "Kein Plan: Eingaben korrigieren",

@@ -10,5 +10,10 @@ export const sourcesDe = translation<typeof sources.en>()({
   startingResistance: "Anfahrwiderstand: {work}",
   traction: "Dieselelektrische Traktion: {work}",
   trainDynamics: "Längsdynamik des Zuges: {work}",
-  railCondition: 'Schienenzustand "{rail}" (Median μ {median}, mit Sand {sanded}): {source}',
+  railCondition: "Schienenzustand: {rail} (Median μ {median}, mit Sand {sanded}): {source}",
+  railNoteMemory: "Aus dem Gedächtnis [M].",
+  railNoteDry: "Aus dem Gedächtnis [M]; der trockene Median stimmt mit {authors} μ(0) = {mu} überein ({work}).",
+  railNoteDamp: "Aus dem Gedächtnis [M]; Tau, Nieselregen und beginnender Regen sind schlechter als starker Regen ({work}).",
+  railNoteWet: "Aus dem Gedächtnis [M]; nass ≈ {factor} × trocken ({work}).",
+  railNoteLeaves: "Aus dem Gedächtnis [M]; Laubschichten senken den Reibwert etwa auf ein Viertel ({work}).",
 });

@@ -25,6 +25,7 @@ export const card = namespace("card", {
   loadTable: "Load table",
   workingOut: "Working out…",
   cannotWorkOut: "The load table cannot be worked out: {why}",
+  cannotPlace: "the reference train cannot be placed on the profile.",
   largestMass: "Largest trailing mass that starts",
   none: "none",
   noneNote: "\"none\": not even a light train of these wagons is expected to start in that condition with these locomotives.",
@@ -44,6 +45,8 @@ export const card = namespace("card", {
   earlierRevisions: { one: "{count} earlier revision is kept in the note file.", other: "{count} earlier revisions are kept in the note file." },
   foot: "Taut location card · {id} · revision {revision} of {date} · printed {at} · Taut {version} · fingerprint {fingerprint} · advisory only",
   computedFrom: "Computed from: {locomotives} with \"{train}\", {temperature}; rail-condition defaults, {rail}.",
+  // The rail-condition table in the card's foot: {list} is each condition with its median adhesion at standstill without / with sand.
+  railDefaults: "adhesion at standstill without / with sand: {list}",
   rail: "Rail",
   withoutSand: "Without sand",
   withSand: "With sand",

@@ -9,6 +9,8 @@ export const plan = namespace("plan", {
   planning: "Planning",
   planningDots: "Planning…",
   failed: "The planner could not finish: {error}",
+  plannerStopped: "the planner stopped unexpectedly.",
+  plannerStoppedBecause: "the planner stopped unexpectedly ({detail}).",
   tryAgain: "Try again",
   noPlanLabel: "No plan: the inputs break a rule",
   noPlanWord: "No plan: fix the inputs",

@@ -10,6 +10,8 @@ export const planHu = translation<typeof plan.en>()({
   planning: "Tervezés",
   planningDots: "Tervezés…",
   failed: "A tervező nem tudta befejezni: {error}",
+  plannerStopped: "a tervező váratlanul leállt.",
+  plannerStoppedBecause: "a tervező váratlanul leállt ({detail}).",
   tryAgain: "Újra",
   noPlanLabel: "Nincs terv: a bemenetek szabályt sértenek",
   noPlanWord: "Nincs terv: javítsa a bemeneteket",

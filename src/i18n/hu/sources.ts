@@ -10,5 +10,10 @@ export const sourcesHu = translation<typeof sources.en>()({
   startingResistance: "Indítási ellenállás: {work}",
   traction: "Dízel-elektromos vontatás: {work}",
   trainDynamics: "Hosszirányú vonatdinamika: {work}",
-  railCondition: 'Sínállapot: "{rail}" (medián μ {median}, homokolással {sanded}): {source}',
+  railCondition: "Sínállapot: {rail} (medián μ {median}, homokolással {sanded}): {source}",
+  railNoteMemory: "Emlékezetből [M].",
+  railNoteDry: "Emlékezetből [M]; a száraz medián egyezik ezzel: {authors} μ(0) = {mu} ({work}).",
+  railNoteDamp: "Emlékezetből [M]; a harmat, a szitálás és a kezdődő eső rosszabb az erős esőnél ({work}).",
+  railNoteWet: "Emlékezetből [M]; nedves ≈ {factor} × száraz ({work}).",
+  railNoteLeaves: "Emlékezetből [M]; a lomb okozta réteg a súrlódást nagyjából negyedére csökkenti ({work}).",
 });

@@ -8,6 +8,15 @@ import { loadTableCells, type LoadTableRow } from "../../../core/dispatch/loadTa
 import type { StartCase } from "../../../core/train/types.js";
 import type { PlannerCalls } from "../../../worker/client.js";
 import type { LoadTableCell } from "../../../worker/protocol.js";
+import { plan } from "../../../i18n/en/plan.js";
+import { PLANNER_STOPPED } from "../../../worker/client.js";
+import { tr } from "../../i18n.js";
+
+/** A planner that stopped, in the language on screen, with the browser's own words on why when it gave any. */
+function stoppedWords(message: string): string {
+  const t = tr.ns(plan);
+  return message && message !== PLANNER_STOPPED ? t("plannerStoppedBecause", { detail: message }) : t("plannerStopped");
+}
 
 export type TableStatus = "idle" | "running" | "done" | "cancelled" | "failed";
 
@@ -48,7 +57,10 @@ const order = (r: Pick<LoadTableRow, "rail" | "sand">) => loadTableCells().findI
 export function createLoadTableRun(deps: LoadTableRunDeps): LoadTableRun {
   const [status, setStatus] = createSignal<TableStatus>("idle");
   const [rows, setRows] = createSignal<LoadTableRow[]>([]);
-  const [error, setError] = createSignal<string | null>(null);
+  // A planner that stopped is said in the language on screen; a failure inside the program keeps its own words.
+  const [errorWords, setErrorWords] = createSignal<(() => string) | null>(null);
+  const setError = (m: string | null, stopped = false) => setErrorWords(() => (m === null ? null : stopped ? () => stoppedWords(m) : () => m));
+  const error = () => errorWords()?.() ?? null;
   const [elapsedMs, setElapsed] = createSignal<number | null>(null);
   const [nonce, setNonce] = createSignal(0);
   let controller: AbortController | null = null;
@@ -74,7 +86,7 @@ export function createLoadTableRun(deps: LoadTableRunDeps): LoadTableRun {
         controller = null;
         const bad = outs.find((o) => !o.ok);
         if (bad && !bad.ok) {
-          setError(bad.issues.length > 0 ? bad.issues.map((i) => `${i.path}: ${i.message}`).join("; ") : bad.message);
+          setError(bad.issues.length > 0 ? bad.issues.map((i) => `${i.path}: ${i.message}`).join("; ") : bad.message, bad.kind === "crashed");
           setStatus("failed");
           return;
         }

@@ -14,7 +14,7 @@ import { For, Show, type JSX } from "solid-js";
 import { STANDARD_CAUTIONS } from "../../../core/planner/cautions.js";
 import { cautionWords } from "../../cautions.js";
 import type { LoadTableRow } from "../../../core/dispatch/loadTable.js";
-import type { RailCondition } from "../../../core/physics/types.js";
+import { RAIL_CONDITIONS, type RailCondition } from "../../../core/physics/types.js";
 import { latestRevision } from "../../../profiles/notes.js";
 import type { LocationNoteFile } from "../../../profiles/schemas.js";
 import type { CardProvenance } from "../../../profiles/provenance.js";
@@ -268,7 +268,7 @@ export function Card(props: CardProps): JSX.Element {
             locomotives: props.reference.locomotives || t("referenceLocos"),
             train: props.reference.trainLabel,
             temperature: show("temperature", n().referenceTrain?.temperature_C ?? DEFAULT_REFERENCE_TEMPERATURE_C, u()),
-            rail: props.provenance.rail,
+            rail: t("railDefaults", { list: RAIL_CONDITIONS.map((r) => `${words.railInline(r)} ${tr.num(props.provenance.adhesion[r].median, 2)} / ${tr.num(props.provenance.adhesion[r].sanded, 2)}`).join(", ") }),
           })}
         </p>
       </footer>

@@ -196,7 +196,7 @@ export function Editor(props: EditorProps): JSX.Element {
 
       <section class="panel notes-section" aria-labelledby="notes-hazards-title">
         <h3 id="notes-hazards-title">{t("edHazards")}</h3>
-        <For each={d().hazards} fallback={<p class="notes-hint">None recorded.</p>}>
+        <For each={d().hazards} fallback={<p class="notes-hint">{t("edNoneRecorded")}</p>}>
           {(h, k) => (
             <div class="notes-list-row">
               <SelectField<HazardKind> label={t("edHazardN", { n: k() + 1 })} name={`hazards[${k()}].kind`} value={h.kind} options={HAZARD_KINDS.map((x) => ({ value: x.kind, label: hazardWord(x.kind) }))} onValue={(v) => e().set("hazards", k(), "kind", v)} />
@@ -215,7 +215,7 @@ export function Editor(props: EditorProps): JSX.Element {
 
       <section class="panel notes-section" aria-labelledby="notes-seasons-title">
         <h3 id="notes-seasons-title">{t("edSeasons")}</h3>
-        <For each={d().seasons} fallback={<p class="notes-hint">None recorded.</p>}>
+        <For each={d().seasons} fallback={<p class="notes-hint">{t("edNoneRecorded")}</p>}>
           {(s, k) => (
             <div class="notes-list-row">
               <SelectField<Season> label={t("edSeason")} name={`seasons[${k()}].season`} value={s.season} options={SEASONS.map((x) => ({ value: x, label: seasonLabel(x) }))} onValue={(v) => e().set("seasons", k(), "season", v)} />
@@ -262,7 +262,7 @@ export function Editor(props: EditorProps): JSX.Element {
           </table>
         </Show>
         <div class="notes-grid">
-          <TextField label={t("edRevisionDate")} name="revision.date" value={d().revision.date} onValue={(v) => e().set("revision", "date", v)} issue={at("revision.date")} placeholder="YYYY-MM-DD" />
+          <TextField label={t("edRevisionDate")} name="revision.date" value={d().revision.date} onValue={(v) => e().set("revision", "date", v)} issue={at("revision.date")} placeholder={t("edDateFormat")} />
           <TextField label={t("edInitials")} name="revision.initials" value={d().revision.initials} onValue={(v) => e().set("revision", "initials", v)} issue={at("revision.initials")} maxLength={8} />
           <TextField label={t("edWhatChanged")} name="revision.change" value={d().revision.change} onValue={(v) => e().set("revision", "change", v)} issue={at("revision.change")} maxLength={400} class="wide" />
         </div>

@@ -101,7 +101,7 @@ function fitToPage(root: HTMLDivElement): void {
  */
 export function cardLoadTable(editor: Pick<NoteEditor, "loadTable" | "placed" | "errors">): LoadTableOutcome | undefined {
   if (editor.placed()) return editor.loadTable();
-  const why = editor.errors()[0]?.message ?? "the reference train cannot be placed on the profile.";
+  const why = editor.errors()[0]?.message ?? t("cannotPlace");
   return { ok: false, issues: [{ path: "", message: why }] };
 }
 

@@ -5,6 +5,7 @@
  */
 import type { LocationNoteFile, ReferenceTrainFile, SegmentFile } from "../../../profiles/schemas.js";
 import { card } from "../../../i18n/en/card.js";
+import { notes } from "../../../i18n/en/notes.js";
 import { tr } from "../../i18n.js";
 
 export type HazardKind = LocationNoteFile["hazards"][number]["kind"];
@@ -30,6 +31,9 @@ const HAZARD_KEY = {
   platform: "hazardPlatform",
   other: "hazardOther",
 } as const satisfies Record<HazardKind, keyof typeof card.en>;
+
+/** The words a new revision entry starts with, in the language on screen. */
+const tn = (k: "edRevNew" | "edRevCarried") => tr.ns(notes)(k);
 
 /** A hazard's kind in the language on screen. */
 export function hazardWord(k: HazardKind): string {
@@ -96,7 +100,7 @@ export function newDraft(referenceTrain: ReferenceTrainFile, initials: string, n
     seasons: [],
     practice: "",
     revisions: [],
-    revision: { date: today(now), initials, change: "New note." },
+    revision: { date: today(now), initials, change: tn("edRevNew") },
     referenceTrain,
   };
 }
@@ -256,7 +260,7 @@ export function draftFromPartial(p: Record<string, unknown>, fallbackTrain: Refe
       .map((s) => ({ season: str(s.season) as Season, rail: str(s.rail) as RailWord, note: str(s.note) })),
     practice: str(p.practice),
     revisions: list(p.revisions).map((r) => ({ date: str(r.date), initials: str(r.initials), change: str(r.change) })),
-    revision: { date: today(now), initials, change: "Put right after carrying over from the older notes format." },
+    revision: { date: today(now), initials, change: tn("edRevCarried") },
     referenceTrain: isObj(p.referenceTrain) && typeof p.referenceTrain.train === "string" ? (p.referenceTrain as ReferenceTrainFile) : fallbackTrain,
   };
 }

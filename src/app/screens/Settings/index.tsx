@@ -1,11 +1,14 @@
 /** Settings wiring. */
 import type { JSX } from "solid-js";
+import type { RailCondition } from "../../../core/physics/types.js";
 import { builtinRailConditions } from "../../../profiles/builtin.js";
 import { useApp } from "../../context.js";
 import { SettingsView } from "./View.js";
 import { sources } from "../../../i18n/en/sources.js";
 import { appNumber, tr } from "../../i18n.js";
 import { checkWords } from "../../checkWords.js";
+import { words } from "../../words.js";
+import { railNote } from "./railNotes.js";
 
 // The list of sources in the language on screen (in the catalog part of the screens opened later) comes before the screen shows.
 await checkWords;
@@ -27,7 +30,7 @@ export default function Settings(): JSX.Element {
       offlineReady={app.offline.ready()}
       offlineSupported={app.offline.supported}
       onCheckUpdate={() => void app.offline.check()}
-      sources={Object.entries(builtinRailConditions.conditions).map(([rail, c]) => ts("railCondition", { rail, median: coefficient(c.median), sanded: coefficient(c.sanded), source: c.source }))}
+      sources={Object.entries(builtinRailConditions.conditions).map(([rail, c]) => ts("railCondition", { rail: words.railInline(rail as RailCondition), median: coefficient(c.median), sanded: coefficient(c.sanded), source: railNote(rail, c.source) }))}
       version={typeof __TAUT_VERSION__ === "string" ? __TAUT_VERSION__ : "dev"}
     />
   );

@@ -106,7 +106,8 @@ export function ResultView(props: ResultViewProps): JSX.Element {
     const requiredN = res?.static.requiredN;
     // Each step where it uses the most adhesion: the point its card's "adhesion used" is read at.
     const steps = (res?.steps ?? []).map((st, i) => ({ number: i + 1, speedMps: st.adhesionUseAt.speedMps, effortN: st.adhesionUseAt.tractiveEffortN })).filter((m) => m.effortN > 0);
-    const key = JSON.stringify([c.locomotives, c.adhesion, c.conditions, c.settings.slipRiskThreshold, c.target, props.units, requiredN, steps]);
+    // The language is part of what it shows (its legend and axes), and reading it here redraws on a switch.
+    const key = JSON.stringify([tr.lang, c.locomotives, c.adhesion, c.conditions, c.settings.slipRiskThreshold, c.target, props.units, requiredN, steps]);
     if (key === effortKey && prev) return prev;
     effortKey = key;
     return effortChart(c, props.units, requiredN, steps);
