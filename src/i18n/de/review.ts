@@ -61,7 +61,7 @@ export const reviewDe = translation<typeof review.en>()({
   noCase: "Richten Sie zuerst Zug, Triebfahrzeuge und Bedingungen im Anfahrplan ein: die Auswertung plant dieses Anfahren am Ort dieser Notiz.",
   caseText: { one: "Der Anfahrfall aus dem Anfahrplan ({mass} t, {count} Wagen, Schiene {rail}{sand}), an den Ort dieser Notiz gesetzt.", other: "Der Anfahrfall aus dem Anfahrplan ({mass} t, {count} Wagen, Schiene {rail}{sand}), an den Ort dieser Notiz gesetzt." },
   caseSand: ", gesandet",
-  recording: "Aufzeichnung (.gpx oder .csv)",
+  recording: "Aufzeichnung wählen (.gpx oder .csv)",
   recordingFile: "Aufzeichnungsdatei",
   reviewing: "Auswertung: das Anfahren wird mit Probefaktoren neu gerechnet…",
   shows: "Was die Aufzeichnung zeigt",

@@ -68,7 +68,7 @@ export const review = namespace("review", {
   noCase: "Set up the train, locomotives and conditions in Start plan first: the review plans that start at this note's location.",
   caseText: { one: "The start case from Start plan ({mass} t, {count} wagon, {rail} rail{sand}), placed at this note's location.", other: "The start case from Start plan ({mass} t, {count} wagons, {rail} rail{sand}), placed at this note's location." },
   caseSand: ", sand",
-  recording: "Recording (.gpx or .csv)",
+  recording: "Choose a recording (.gpx or .csv)",
   recordingFile: "Recording file",
   reviewing: "Reviewing: re-running the start with trial factors…",
   shows: "What the recording shows",

@@ -61,7 +61,7 @@ export const reviewHu = translation<typeof review.en>()({
   noCase: "Előbb állítsa be a vonatot, a mozdonyokat és a körülményeket az Indítási tervben: az elemzés ennek a jegyzetnek a helyszínén tervezi meg az indítást.",
   caseText: { one: "Az Indítási terv indítási esete ({mass} t, {count} kocsi, {rail} sín{sand}), ennek a jegyzetnek a helyszínére téve.", other: "Az Indítási terv indítási esete ({mass} t, {count} kocsi, {rail} sín{sand}), ennek a jegyzetnek a helyszínére téve." },
   caseSand: ", homokolással",
-  recording: "Felvétel (.gpx vagy .csv)",
+  recording: "Felvétel kiválasztása (.gpx vagy .csv)",
   recordingFile: "Felvételfájl",
   reviewing: "Elemzés: az indítás újrafuttatása próbatényezőkkel…",
   shows: "Amit a felvétel mutat",

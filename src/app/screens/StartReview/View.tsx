@@ -14,6 +14,7 @@ import { review } from "../../../i18n/en/review.js";
 import { tr } from "../../i18n.js";
 import { words } from "../../words.js";
 import { Figures } from "../../components/Figures.js";
+import { Icon } from "../../components/Icon.js";
 
 const t = tr.ns(review);
 
@@ -77,6 +78,7 @@ const verdictWord = (v: string) => (["starts", "marginal", "needs-assistance"].i
 const railWord = (r: string) => ((RAIL_CONDITIONS as readonly string[]).includes(r) ? words.railInline(r as RailCondition) : r);
 
 export function StartReviewView(props: StartReviewViewProps): JSX.Element {
+  let picker: HTMLInputElement | undefined;
   return (
     <section class="review-screen" aria-labelledby="review-h">
       <h2 id="review-h">{props.noteName ? t("titleNote", { note: props.noteName }) : t("title")}</h2>
@@ -92,12 +94,18 @@ export function StartReviewView(props: StartReviewViewProps): JSX.Element {
         {(why) => <p class="problem" role="status">{why()}</p>}
       </Show>
       <Show when={!props.blocked}>
-        <label class="field">
-          <span>{t("recording")}</span>
+        {/* Our own button in the language on screen: the browser's file input would speak its own language. */}
+        <div class="file-actions">
+          <button type="button" class="button primary big" disabled={props.busy} onClick={() => picker?.click()}>
+            <Icon name="open" /> {t("recording")}
+          </button>
           <input
+            ref={picker}
+            class="visually-hidden"
             type="file"
             accept=".gpx,.csv"
             aria-label={t("recordingFile")}
+            tabIndex={-1}
             disabled={props.busy}
             onChange={(e) => {
               const f = e.currentTarget.files?.[0];
@@ -105,7 +113,7 @@ export function StartReviewView(props: StartReviewViewProps): JSX.Element {
               e.currentTarget.value = "";
             }}
           />
-        </label>
+        </div>
       </Show>
       <Show when={props.busy}>
         <p role="status">{t("reviewing")}</p>
