@@ -114,7 +114,8 @@ describe("group notches in the steps", () => {
     ));
     expect(document.querySelector(".cab-notch-value")?.textContent).toBe("3");
     expect(screen.getByTestId("cab-group-notches").textContent).toBe("head 3 · rear helper 2");
-    fireEvent.click(screen.getByRole("button", { name: "rear helper driver" }));
+    // A group's name starts the button with a capital, as "Head driver" does.
+    fireEvent.click(screen.getByRole("button", { name: "Rear helper driver" }));
     expect(document.querySelector(".cab-notch-value")?.textContent).toBe("2");
     expect(document.querySelector(".cab-notch-label")?.textContent).toBe("Notch, rear helper");
     expect(screen.getByTestId("helper-line").textContent).toMatch(/takes notch 2 about 3 s later/);

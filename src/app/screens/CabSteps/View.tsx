@@ -42,6 +42,8 @@ export interface CabStepsViewProps {
 
 const t = tr.ns(steps);
 const tt = tr.ns(cab);
+/** A button's words with a capital first letter (a group's name, which starts them in some languages, is written in lower case). */
+const capitalised = (s: string) => s.charAt(0).toLocaleUpperCase(tr.lang) + s.slice(1);
 
 const WAKE_TEXT: Record<WakeLockState, () => string> = {
   on: () => t("wakeOn"),
@@ -126,7 +128,7 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
                 <For each={helpers()}>
                   {(h) => (
                     <button type="button" class="button" aria-pressed={who() === h.k} onClick={() => setDriver(h.k)}>
-                      {tt("groupDriver", { name: h.name })}
+                      {capitalised(tt("groupDriver", { name: h.name }))}
                     </button>
                   )}
                 </For>
