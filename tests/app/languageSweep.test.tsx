@@ -32,6 +32,7 @@ import { huLater } from "../../src/i18n/hu/later.js";
 import { de } from "../../src/i18n/de/index.js";
 import { deLater } from "../../src/i18n/de/later.js";
 import type { WorkerLike } from "../../src/worker/client.js";
+import { fakePool } from "./dispatch/fakes.js";
 import { memoryStorage, quickTablePool, renderWithApp } from "./harness.js";
 
 const WORD = /\p{L}+/gu;
@@ -228,6 +229,7 @@ describe.each(LANGS)("no English left on screen in %s", (lang) => {
     const { default: AssistanceCheck } = await import("../../src/app/screens/AssistanceCheck/index.js");
     const s = await inLanguage(lang, () => <AssistanceCheck />);
     await waitFor(() => expect(document.body.textContent!.length).toBeGreaterThan(200), { timeout: 20_000 });
+    await waitFor(() => expect(document.querySelectorAll(".legend li").length).toBeGreaterThan(0), { timeout: 20_000 });
     s.look("Assistance check");
     expect(s.words).toEqual([]);
   });
@@ -248,8 +250,31 @@ describe.each(LANGS)("no English left on screen in %s", (lang) => {
     const { default: LoadTable } = await import("../../src/app/screens/LoadTable/index.js");
     const s = await inLanguage(lang, () => <LoadTable />);
     await waitFor(() => expect(document.querySelectorAll(".load-table-grid td").length).toBeGreaterThan(0), { timeout: 20_000 });
+    await waitFor(() => expect(document.querySelectorAll(".legend li").length).toBeGreaterThan(0), { timeout: 20_000 });
     s.look("Load table");
     expect(s.words).toEqual([]);
+  });
+
+  it("Load table and Assistance check while they work, and cancelled", async () => {
+    // A pool that holds every request: the screens stay at work until cancelled.
+    const { default: LoadTable } = await import("../../src/app/screens/LoadTable/index.js");
+    const s = await inLanguage(lang, () => <LoadTable />, { pool: fakePool({}) });
+    await waitFor(() => expect(document.querySelector(".panel-head .button")).not.toBeNull(), { timeout: 20_000 });
+    s.look("Load table, at work");
+    click(document.querySelector(".panel-head .button"));
+    await waitFor(() => expect(document.querySelector(".panel-head .button.primary")).not.toBeNull());
+    s.look("Load table, cancelled");
+    cleanup();
+    const { default: AssistanceCheck } = await import("../../src/app/screens/AssistanceCheck/index.js");
+    const { forgetAssistanceChecks } = await import("../../src/app/screens/AssistanceCheck/createAssistanceCheck.js");
+    forgetAssistanceChecks();
+    const a = await inLanguage(lang, () => <AssistanceCheck />, { pool: fakePool({}) });
+    await waitFor(() => expect(document.querySelector(".dispatch-run-row .button")).not.toBeNull(), { timeout: 20_000 });
+    a.look("Assistance check, at work");
+    click(document.querySelector(".dispatch-run-row .button"));
+    await waitFor(() => expect(document.querySelector(".dispatch-run-row .button.primary")).not.toBeNull());
+    a.look("Assistance check, cancelled");
+    expect([...s.words, ...a.words]).toEqual([]);
   });
 
   it("Location notes: the library, a note in the editor, a new note, the printable card", async () => {
@@ -310,6 +335,18 @@ class StoppingWorker implements WorkerLike {
   }
   terminate() {}
 }
+
+describe("the sweep itself", () => {
+  it("finds an English word of the catalog, passes a word both languages share, the demo's names and the works cited", () => {
+    const div = document.createElement("div");
+    div.innerHTML = `<p>Start</p><button>Nyomtatás</button><p title="Print">x</p><p><span>Aggregate block</span><span>leaving Ashvale Loop on a dry afternoon</span></p><li>Koffman 1948, J. Inst. Locomotive Engineers paper 479</li><label>None recorded.</label><input type="text" value="New note.">`;
+    document.body.append(div);
+    const got = leftovers(div, "hu").map((x) => x.split("  ")[0]);
+    div.remove();
+    // "Start" is Hungarian too ("start"); "Print" (a title) and the filled-in field are not.
+    expect(got.sort()).toEqual(["New", "None", "Print", "recorded"].sort());
+  });
+});
 
 describe("the rail table's notes on their sources", () => {
   it("the catalog's English of each note is the file's note word for word, so the translated note says what the file says", async () => {
