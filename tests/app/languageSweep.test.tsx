@@ -317,6 +317,27 @@ describe.each(LANGS)("no English left on screen in %s", (lang) => {
     expect(s.words).toEqual([]);
   });
 
+  it("Start review at a note: a recording reviewed", async () => {
+    const { default: StartReview } = await import("../../src/app/screens/StartReview/index.js");
+    const { setReviewTarget } = await import("../../src/app/state/reviewTarget.js");
+    const { planSequence, planStart, scaledCase } = await import("../../src/core/index.js");
+    const { locationFromNote } = await import("../../src/profiles/convert.js");
+    const { csvText, simulatedStart } = await import("../tools/recordings.js");
+    const note = builtinLocations[0]!;
+    setReviewTarget(note.id);
+    const s = await inLanguage(lang, () => <StartReview />);
+    await waitFor(() => expect(document.querySelector(".review-screen input[type=file]")).not.toBeNull(), { timeout: 15_000 });
+    s.look("Start review, before a recording");
+    const checked = s.harness.state.draft.checked();
+    if (!checked.ok) throw new Error("the default case is not valid");
+    const c = { ...checked.value, location: locationFromNote(note) };
+    const run = simulatedStart(scaledCase(c, { massFactor: 1.15, effortFactor: 1 }), planSequence(planStart(c, { skipMassSearch: true, skipVerification: true })), { extraS: 10 });
+    fireEvent.change(document.querySelector(".review-screen input[type=file]")!, { target: { files: [new File([csvText(run)], "start.csv")] } });
+    await waitFor(() => expect(document.querySelectorAll(".review-result li").length).toBeGreaterThan(0), { timeout: 30_000 });
+    s.look("Start review, a recording reviewed", ["start.csv"]);
+    expect(s.words).toEqual([]);
+  }, 90_000);
+
   it("Start review, nothing to review yet", async () => {
     const { default: StartReview } = await import("../../src/app/screens/StartReview/index.js");
     const s = await inLanguage(lang, () => <StartReview />);
