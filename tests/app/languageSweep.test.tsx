@@ -335,6 +335,9 @@ describe.each(LANGS)("no English left on screen in %s", (lang) => {
     fireEvent.change(document.querySelector(".review-screen input[type=file]")!, { target: { files: [new File([csvText(run)], "start.csv")] } });
     await waitFor(() => expect(document.querySelectorAll(".review-result li").length).toBeGreaterThan(0), { timeout: 30_000 });
     s.look("Start review, a recording reviewed", ["start.csv"]);
+    // Its sketch's three lines (recorded, planned, re-run) are told apart without colour, as its caption says.
+    const dashes = [...document.querySelectorAll(".review-result .review-sketch polyline")].map((p) => p.getAttribute("stroke-dasharray") ?? "solid");
+    expect(new Set(dashes).size).toBe(3);
     expect(s.words).toEqual([]);
   }, 90_000);
 

@@ -69,7 +69,7 @@ export const reviewDe = translation<typeof review.en>()({
   planned: "geplant",
   fitted: "neu gerechnet mit dem angepassten Faktor",
   sketchLabel: "Geschwindigkeit über der Zeit: {series}; bis {speed} km/h in {time} s",
-  sketchCaption: "Geschwindigkeit ab dem Anfahrzeitpunkt: aufgezeichnet (durchgezogen), geplant und mit dem angepassten Faktor neu gerechnet (gestrichelt).",
+  sketchCaption: "Geschwindigkeit ab dem Anfahrzeitpunkt: aufgezeichnet (durchgezogen), geplant (gestrichelt) und mit dem angepassten Faktor neu gerechnet (gepunktet).",
   keep: "Bei der Notiz aufbewahren",
   date: "Datum",
   railOnDay: "Schiene an dem Tag",

@@ -76,7 +76,7 @@ export const review = namespace("review", {
   planned: "planned",
   fitted: "re-run with the fitted factor",
   sketchLabel: "Speed against time: {series}; up to {speed} km/h over {time} s",
-  sketchCaption: "Speed from the moment of start: recorded (solid), planned and re-run with the fitted factor (dashed).",
+  sketchCaption: "Speed from the moment of start: recorded (solid), planned (dashed) and re-run with the fitted factor (dotted).",
   keep: "Keep it with the note",
   date: "Date",
   railOnDay: "Rail on the day",

@@ -69,7 +69,7 @@ export const reviewHu = translation<typeof review.en>()({
   planned: "tervezett",
   fitted: "újrafuttatva az illesztett tényezővel",
   sketchLabel: "Sebesség az idő függvényében: {series}; legfeljebb {speed} km/h, {time} s alatt",
-  sketchCaption: "Sebesség az elindulás pillanatától: felvett (folytonos), tervezett és az illesztett tényezővel újrafuttatott (szaggatott).",
+  sketchCaption: "Sebesség az elindulás pillanatától: felvett (folytonos), tervezett (szaggatott) és az illesztett tényezővel újrafuttatott (pontozott).",
   keep: "Megőrzés a jegyzettel",
   date: "Dátum",
   railOnDay: "Sínállapot aznap",

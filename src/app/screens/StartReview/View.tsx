@@ -56,8 +56,11 @@ export interface StartReviewViewProps {
   onTable: () => void;
 }
 
-/** A small speed–time sketch: polylines in a fixed box, the first series solid, the others dashed. */
-export function SpeedSketch(props: { timeS: number[]; series: Array<{ label: string; kmh: number[]; dashed?: boolean }>; width?: number; height?: number }): JSX.Element {
+/** Line styles of the sketch's series: solid, dashed, dotted (each told apart without colour). */
+const DASH = { dashed: "5 4", dotted: "1.5 3.5" } as const;
+
+/** A small speed–time sketch: polylines in a fixed box, each series solid, dashed or dotted. */
+export function SpeedSketch(props: { timeS: number[]; series: Array<{ label: string; kmh: number[]; line?: keyof typeof DASH }>; width?: number; height?: number }): JSX.Element {
   const w = props.width ?? 320;
   const h = props.height ?? 120;
   const t0 = Math.min(...props.timeS);
@@ -67,7 +70,7 @@ export function SpeedSketch(props: { timeS: number[]; series: Array<{ label: str
   return (
     <svg class="review-sketch" width={w} height={h} viewBox={`0 0 ${w} ${h}`} role="img" aria-label={t("sketchLabel", { series: props.series.map((s) => s.label).join(", "), speed: Math.round(v1), time: Math.round(t1 - t0) })}>
       <rect x="0.5" y="0.5" width={w - 1} height={h - 1} fill="none" stroke="currentColor" stroke-opacity="0.3" />
-      <For each={props.series}>{(s) => <polyline points={points(s.kmh)} fill="none" stroke="currentColor" stroke-width={s.dashed ? 1.5 : 2.5} stroke-dasharray={s.dashed ? "5 4" : undefined} />}</For>
+      <For each={props.series}>{(s) => <polyline points={points(s.kmh)} fill="none" stroke="currentColor" stroke-width={s.line ? 1.8 : 2.5} stroke-linecap={s.line === "dotted" ? "round" : undefined} stroke-dasharray={s.line ? DASH[s.line] : undefined} />}</For>
     </svg>
   );
 }
@@ -143,8 +146,8 @@ export function StartReviewView(props: StartReviewViewProps): JSX.Element {
                     timeS={s().time_s}
                     series={[
                       { label: t("recorded"), kmh: s().recordedSpeed_kmh },
-                      { label: t("planned"), kmh: s().plannedSpeed_kmh, dashed: true },
-                      { label: t("fitted"), kmh: s().fittedSpeed_kmh, dashed: true },
+                      { label: t("planned"), kmh: s().plannedSpeed_kmh, line: "dashed" },
+                      { label: t("fitted"), kmh: s().fittedSpeed_kmh, line: "dotted" },
                     ]}
                     width={480}
                     height={180}
