@@ -23,7 +23,9 @@ import { appLang, setAppLanguage } from "../../src/app/i18n.js";
 import { SETTINGS_KEY } from "../../src/app/state/createSettings.js";
 import { NAMESPACES } from "../../src/i18n/en/index.js";
 import type { Lang } from "../../src/i18n/language.js";
-import { builtinCases, builtinLocations } from "../../src/profiles/builtin.js";
+import { builtinCases, builtinLocations, builtinRailConditions } from "../../src/profiles/builtin.js";
+import { wordsHu } from "../../src/i18n/hu/words.js";
+import { wordsDe } from "../../src/i18n/de/words.js";
 import { SCREENS } from "../../src/app/screens/registry.js";
 import { notes } from "../../src/i18n/en/notes.js";
 import { createTranslator } from "../../src/i18n/translator.js";
@@ -293,6 +295,10 @@ describe.each(LANGS)("no English left on screen in %s", (lang) => {
     await waitFor(() => expect(document.querySelector(".notes-card .card-foot")).not.toBeNull(), { timeout: 15_000 });
     await waitFor(() => expect(document.querySelector(".notes-card .notes-loadtable")).not.toBeNull(), { timeout: 15_000 });
     s.look("Location notes, the card");
+    // Its foot's rail-condition line in the language, with the language's decimal comma (the table's dry 0.33 / 0.36).
+    const dry = builtinRailConditions.conditions.dry!;
+    const comma = (x: number) => x.toFixed(2).replace(".", ",");
+    expect(document.querySelector(".notes-card .card-computed")?.textContent).toContain(`${(lang === "hu" ? wordsHu : wordsDe).railInlineDry} ${comma(dry.median)} / ${comma(dry.sanded)}`);
     // A new note: its empty lists, its revision entry, then saved with its revision list.
     cleanup();
     const s2 = await inLanguage(lang, () => <LocationNotes />);
@@ -374,7 +380,6 @@ describe("the sweep itself", () => {
 
 describe("the rail table's notes on their sources", () => {
   it("the catalog's English of each note is the file's note word for word, so the translated note says what the file says", async () => {
-    const { builtinRailConditions } = await import("../../src/profiles/builtin.js");
     const { englishRailNote, railNote } = await import("../../src/app/screens/Settings/railNotes.js");
     for (const [rail, c] of Object.entries(builtinRailConditions.conditions)) expect([rail, englishRailNote(rail)]).toEqual([rail, c.source]);
     // A note the catalog does not hold is shown as the file gives it.

@@ -45,7 +45,7 @@ export const cardDe = translation<typeof card.en>()({
   revisions: "Änderungen",
   earlierRevisions: { one: "{count} frühere Änderung steht in der Notizdatei.", other: "{count} frühere Änderungen stehen in der Notizdatei." },
   foot: "Taut-Ortskarte · {id} · Änderung {revision} vom {date} · gedruckt {at} · Taut {version} · Prüfsumme {fingerprint} · nur zur Orientierung",
-  computedFrom: "Berechnet aus: {locomotives} mit „{train}“, {temperature}; Vorgaben für den Schienenzustand: {rail}.",
+  computedFrom: "Berechnet aus: {locomotives} mit „{train}“, {temperature}; Vorgaben für den Schienenzustand, {rail}.",
   railDefaults: "Kraftschluss im Stillstand ohne / mit Sand: {list}",
   rail: "Schiene",
   withoutSand: "Ohne Sand",

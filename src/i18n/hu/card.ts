@@ -45,7 +45,7 @@ export const cardHu = translation<typeof card.en>()({
   revisions: "Módosítások",
   earlierRevisions: { one: "{count} korábbi módosítás a jegyzetfájlban marad.", other: "{count} korábbi módosítás a jegyzetfájlban marad." },
   foot: "Taut helyszíni lap · {id} · {revision}. módosítás, {date} · nyomtatva {at} · Taut {version} · ujjlenyomat {fingerprint} · csak tájékoztató",
-  computedFrom: "Számítás alapja: {locomotives}, „{train}” vonat, {temperature}; sínállapot-alapértékek: {rail}.",
+  computedFrom: "Számítás alapja: {locomotives}, „{train}” vonat, {temperature}; sínállapot-alapértékek, {rail}.",
   railDefaults: "tapadás álló helyzetben homok nélkül / homokkal: {list}",
   rail: "Sín",
   withoutSand: "Homok nélkül",
