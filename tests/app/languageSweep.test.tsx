@@ -198,6 +198,19 @@ describe.each(LANGS)("no English left on screen in %s", (lang) => {
     expect(s.words).toEqual([]);
   });
 
+  it("Start plan with inputs that break a rule: the plan withdrawn, each field's message", async () => {
+    const { default: StartPlan } = await import("../../src/app/screens/StartPlan/index.js");
+    const s = await inLanguage(lang, () => <StartPlan />);
+    await waitFor(() => expect(document.querySelector(".verdict:not(.stale)")).not.toBeNull(), { timeout: 20_000 });
+    s.harness.state.draft.set("train", "trailingMass_t", -10);
+    s.harness.state.draft.set("train", "couplerSlack_mm", 900);
+    s.harness.state.draft.set("conditions", "temperature_C", 200);
+    await waitFor(() => expect(s.harness.state.run.status()).toBe("invalid"), { timeout: 20_000 });
+    await waitFor(() => expect(document.querySelectorAll(".field-issue").length).toBeGreaterThanOrEqual(3), { timeout: 20_000 });
+    s.look("Start plan, inputs that break a rule");
+    expect(s.words).toEqual([]);
+  });
+
   it("the whole app: each tab with the top bar, the tabs and the print stamp", async () => {
     const s = await inLanguage(lang, undefined);
     await waitFor(() => expect(document.querySelector(".verdict:not(.stale)")).not.toBeNull(), { timeout: 20_000 });
