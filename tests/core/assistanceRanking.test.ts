@@ -9,7 +9,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { judge, type StartCase } from "../../src/core/index.js";
-import { searchAssistance, type AssistanceOptions, type AssistanceResult } from "../../src/core/dispatch/assistance.js";
+import { searchAssistance, setJudgeByFloor, type AssistanceOptions, type AssistanceResult } from "../../src/core/dispatch/assistance.js";
 import { withEvaluationMemo } from "../../src/core/planner/evaluationMemo.js";
 import { plannerContext } from "../../src/core/planner/context.js";
 import { searchPlan } from "../../src/core/planner/search.js";
@@ -23,11 +23,22 @@ function answer(a: AssistanceResult) {
   return { options: rep.assistance, divide: rep.divide, plannerRuns: a.plannerRuns, complete: a.complete };
 }
 
-function both(c: StartCase, opts: AssistanceOptions): { full: AssistanceResult; pruned: AssistanceResult } {
-  // Each in a memo of its own, as the check runs it: nothing is shared between the two.
+/**
+ * The full ranking, the pruned one as the check runs it (candidates planned a phase at a time, lowest peak so
+ * far first: `setJudgeByFloor(true)`, the default) and the pruned one by a ceiling from the candidates planned
+ * before (`setJudgeByFloor(false)`).
+ */
+function both(c: StartCase, opts: AssistanceOptions): { full: AssistanceResult; pruned: AssistanceResult; ceiling: AssistanceResult } {
+  // Each in a memo of its own, as the check runs it: nothing is shared between them.
   const full = withEvaluationMemo(() => searchAssistance(c, { ...opts, pruneLosers: false }));
   const pruned = withEvaluationMemo(() => searchAssistance(c, { ...opts, pruneLosers: true }));
-  return { full, pruned };
+  setJudgeByFloor(false);
+  try {
+    const ceiling = withEvaluationMemo(() => searchAssistance(c, { ...opts, pruneLosers: true }));
+    return { full, pruned, ceiling };
+  } finally {
+    setJudgeByFloor(true);
+  }
 }
 
 describe("a plan search stopped at a peak ceiling", () => {
@@ -77,8 +88,11 @@ describe("the pruned ranking against the full ranking (seeded departures)", () =
   for (const [k, c] of cases.entries()) {
     it(`departure ${k + 1}: the departures check's option and divided train, as the full ranking gives them`, () => {
       const base = judge(c).verdict;
-      const { full, pruned } = both(c, { baseVerdict: base, budget: CHECK_ASSISTANCE_BUDGET, divideBudget: CHECK_DIVIDE_BUDGET, maxFullPlans: 1, reportedOnly: true });
+      const { full, pruned, ceiling } = both(c, { baseVerdict: base, budget: CHECK_ASSISTANCE_BUDGET, divideBudget: CHECK_DIVIDE_BUDGET, maxFullPlans: 1, reportedOnly: true });
       expect(answer(pruned)).toEqual(answer(full));
+      expect(answer(ceiling)).toEqual(answer(full));
+      // The option's own plan, step for step (the ranking's plan, taken from the memo).
+      expect(pruned.options.map((o) => o.plan?.steps)).toEqual(full.options.map((o) => o.plan?.steps));
       // Same units and placement (and every figure, above); the rejections kept are among the full search's.
       expect(pruned.options.map((o) => o.added)).toEqual(full.options.map((o) => o.added));
       for (const r of pruned.rejected) expect(full.rejected).toContainEqual(r);
@@ -93,8 +107,9 @@ describe("the pruned ranking against the full ranking (seeded departures)", () =
   it("with two options kept (as `taut plan` keeps them): the same two, in the same order", () => {
     const c = cases.find((x) => searchAssistance(x, { divide: false, maxUnits: 1, budget: 5 }).options.length > 0);
     expect(c, "a departure one unit helps").toBeDefined();
-    const { full, pruned } = both(c!, { budget: 10, maxFullPlans: 2, divide: false });
+    const { full, pruned, ceiling } = both(c!, { budget: 10, maxFullPlans: 2, divide: false });
     expect(answer(pruned)).toEqual(answer(full));
+    expect(answer(ceiling)).toEqual(answer(full));
     expect(full.options.length).toBe(2);
   });
 

@@ -14,7 +14,8 @@ import { judge, planStart, quasiStaticLimits, type PlanResult } from "../planner
 import { failedSoFar } from "../planner/decision.js";
 import { staticCheck } from "../planner/staticCheck.js";
 import { marginalBound, plannerContext } from "../planner/context.js";
-import { memoSearchPlan, withEvaluationMemo } from "../planner/evaluationMemo.js";
+import { memoResumableSearch, memoSearchPlan, withEvaluationMemo } from "../planner/evaluationMemo.js";
+import type { ResumableSearch } from "../planner/search.js";
 import type { LimitCheck } from "../planner/outcome.js";
 import type { LocomotiveSpec } from "../physics/types.js";
 import type { Reason, Verdict } from "../planner/outcome.js";
@@ -174,6 +175,30 @@ export function setFullRanking(on: boolean): void {
   forceFullRanking = on;
 }
 
+/**
+ * How `pruneLosers` ranks: the candidates planned a phase at a time, the one with the lowest peak so far
+ * continued first, until the best finished ones are certain (true, the default: `rankByFloor`); or each
+ * candidate planned in turn, stopped once its peak passes the best found so far (false, kept for the test and
+ * the benchmark).
+ */
+let judgeByFloor = true;
+
+/** Rank by the peaks so far (true, the default) or by a ceiling from the candidates planned before (false). */
+export function setJudgeByFloor(on: boolean): void {
+  judgeByFloor = on;
+}
+
+/**
+ * The benchmark's exact-search floor: the ceiling each number of added units would have if the answer were
+ * known beforehand (what a perfect ordering of the candidates costs). Null (the default): none.
+ */
+let knownCeiling: ((units: number) => number) | null = null;
+
+/** Give the ceiling of every level beforehand (the benchmark only), or take it away (null). */
+export function setKnownCeiling(ceiling: ((units: number) => number) | null): void {
+  knownCeiling = ceiling;
+}
+
 /** Search for assistance. Throws the planner's "cancelled" error when `shouldStop` says so. */
 export function searchAssistance(c: StartCase, opts: AssistanceOptions = {}): AssistanceResult {
   // Pruning judges a candidate first with a ceiling and then, if it is not stopped, by the same plan: shared.
@@ -216,7 +241,23 @@ function search(c: StartCase, opts: AssistanceOptions, prune: boolean): Assistan
     // kept back for the full plan of an option that passes.
     screened.sort((a, b) => a.staticPeakN - b.staticPeakN);
     const passing: Array<{ k: Candidate; peakN: number }> = [];
-    for (const k of screened) {
+    const byFloor = prune && judgeByFloor && !knownCeiling;
+    if (byFloor) {
+      // The candidates the budget judges are the same as below, each counted as one run.
+      const judged: Candidate[] = [];
+      for (const k of screened) {
+        if (runs >= budget - 1) {
+          complete = false;
+          break;
+        }
+        runs++;
+        judged.push(k);
+      }
+      const r = rankByFloor(judged, units, maxFull, planOpts, result.rejected);
+      passing.push(...r.passing);
+      pruned += r.pruned;
+    }
+    for (const k of byFloor ? [] : screened) {
       if (runs >= budget - 1) {
         complete = false;
         break;
@@ -226,7 +267,7 @@ function search(c: StartCase, opts: AssistanceOptions, prune: boolean): Assistan
       // worst of the best `maxFull` (it ranks behind them all; a tie is kept and sorted as before).
       if (prune) {
         const ctx = plannerContext(k.case);
-        const ceilingN = passing.length >= maxFull ? passing.map((x) => x.peakN).sort((a, b) => a - b)[maxFull - 1]! : Infinity;
+        const ceilingN = knownCeiling ? knownCeiling(units) : passing.length >= maxFull ? passing.map((x) => x.peakN).sort((a, b) => a - b)[maxFull - 1]! : Infinity;
         const fails = failedSoFar(ctx, "within");
         const failed = (p: Parameters<typeof fails>[0]) => fails(p) || p.branch.peakTensionN() > ceilingN;
         const r = memoSearchPlan(ctx, { ...planOpts, stopWhenFailed: { key: `within, peak to ${ceilingN} N`, failed } });
@@ -266,6 +307,66 @@ function search(c: StartCase, opts: AssistanceOptions, prune: boolean): Assistan
   }
   opts.onProgress?.(1);
   return { ...result, plannerRuns: runs, pruned, complete };
+}
+
+/**
+ * The best `maxFull` of `judged` (all of `units` added units, in the order a short budget keeps them), ranked
+ * as the full ranking ranks them — by the peak coupler tension of their planned starts, a tie to the earlier —
+ * without planning every one to the end. Each is planned a phase at a time (search.ts's `ResumableSearch`),
+ * always the one with the lowest peak so far next (the earlier on a tie): a peak so far is a floor of the
+ * finished plan's, as peaks only grow along a plan. A candidate is dropped once a limit has failed
+ * (decision.ts's `failedSoFar`: it cannot start), or once `maxFull` finished candidates that start rank ahead
+ * of anything it can still become: the `maxFull`-th best's peak below its floor, or equal to it and earlier.
+ * So the ones that start and are kept are the full ranking's first `maxFull`, with the same peaks; a finished
+ * search goes to the memo, and the judgement takes that very plan. `rejected` gets the candidates finished
+ * that do not start, as the full ranking lists them.
+ */
+function rankByFloor(judged: readonly Candidate[], units: number, maxFull: number, planOpts: { shouldStop?: () => boolean }, rejected: RejectedOption[]): { passing: Array<{ k: Candidate; peakN: number }>; pruned: number } {
+  interface Open {
+    k: Candidate;
+    index: number;
+    search: ResumableSearch;
+  }
+  const open: Open[] = judged.map((k, index) => {
+    const ctx = plannerContext(k.case);
+    return { k, index, search: memoResumableSearch(ctx, { ...planOpts, stopWhenFailed: { key: "within", failed: failedSoFar(ctx, "within") } }) };
+  });
+  const passing: Array<{ k: Candidate; peakN: number; index: number }> = [];
+  const ahead = (a: { peakN: number; index: number }, b: { peakN: number; index: number }) => a.peakN - b.peakN || a.index - b.index;
+  let pruned = 0;
+  for (;;) {
+    // The finished: stopped once a limit failed (dropped), or judged by the decision from the memo's plan.
+    for (let j = open.length - 1; j >= 0; j--) {
+      const o = open[j]!;
+      const r = o.search.result;
+      if (!r) continue;
+      open.splice(j, 1);
+      if (r.stoppedEarly) {
+        pruned++;
+        continue;
+      }
+      const d = judge(o.k.case, { depth: "starts", ...planOpts });
+      if (d.verdict === "starts") passing.push({ k: o.k, peakN: d.threshold.search?.branch.peakTensionN() ?? 0, index: o.index });
+      else rejected.push({ added: o.k.added, units, ...ruledOut(d.limits), by: "planner" });
+    }
+    passing.sort(ahead);
+    // Dropped: the unfinished that rank behind the `maxFull`-th best finished, whatever the rest of their plans.
+    if (passing.length >= maxFull) {
+      const last = passing[maxFull - 1]!;
+      for (let j = open.length - 1; j >= 0; j--) {
+        if (ahead(last, { peakN: open[j]!.search.floorN(), index: open[j]!.index }) < 0) {
+          open.splice(j, 1);
+          pruned++;
+        }
+      }
+    }
+    if (open.length === 0) break;
+    let next = open[0]!;
+    for (const o of open) if (ahead({ peakN: o.search.floorN(), index: o.index }, { peakN: next.search.floorN(), index: next.index }) < 0) next = o;
+    next.search.continueSearch();
+  }
+  // In the order the full ranking sorts them (by peak, stable over the budget's order).
+  return { passing: passing.map(({ k, peakN }) => ({ k, peakN })), pruned };
 }
 
 /** A verdict and its reasons from the threshold's limits of a start judged only as far as "starts". */

@@ -11,7 +11,7 @@
  * so nothing is kept once the work that asked for the memo returns.
  */
 import type { PlannerContext } from "./context.js";
-import { searchPlan, type SearchOptions, type SearchResult } from "./search.js";
+import { ResumableSearch, searchPlan, type SearchOptions, type SearchResult } from "./search.js";
 import { lumpedWagons } from "../train/lumped.js";
 
 /** Plans kept at most (oldest dropped first): a check with its searches makes a few dozen. */
@@ -39,9 +39,7 @@ export function withEvaluationMemo<T>(work: () => T): T {
 export function memoSearchPlan(ctx: PlannerContext, opts: SearchOptions = {}): SearchResult {
   const memo = active;
   if (!memo) return searchPlan(ctx, opts);
-  // A plan of lumped wagons (a search's guide, startableMass.ts) is kept apart from the full model's.
-  const lump = lumpedWagons();
-  const key = `${lump > 1 ? `lumped ${lump}|` : ""}${ctx.quantile}|${JSON.stringify(ctx.c)}`;
+  const key = keyOf(ctx);
   const stopKey = opts.stopWhenFailed ? `${opts.stopWhenFailed.key}|${key}` : null;
   const known = memo.get(key) ?? (stopKey !== null ? memo.get(stopKey) : undefined);
   if (known) {
@@ -49,9 +47,41 @@ export function memoSearchPlan(ctx: PlannerContext, opts: SearchOptions = {}): S
     return known;
   }
   const r = searchPlan(ctx, opts);
-  if (memo.size >= MAX_ENTRIES) memo.delete(memo.keys().next().value!);
-  memo.set(r.stoppedEarly && stopKey !== null ? stopKey : key, r);
+  keep(memo, r.stoppedEarly && stopKey !== null ? stopKey : key, r);
   return r;
+}
+
+/**
+ * A search of a context to be run a phase at a time (search.ts's `ResumableSearch`), shared with the memo as
+ * `memoSearchPlan` is: already finished when the memo holds a plan that answers it, and once run to its end
+ * kept there (a whole plan under the case's key, one stopped by `stopWhenFailed` under its check's), so a
+ * later judgement of the same case on the same rail takes it and nothing is planned twice. A search left
+ * unfinished keeps nothing.
+ */
+export function memoResumableSearch(ctx: PlannerContext, opts: SearchOptions = {}): ResumableSearch {
+  const memo = active;
+  if (!memo) return new ResumableSearch(ctx, opts);
+  const key = keyOf(ctx);
+  const stopKey = opts.stopWhenFailed ? `${opts.stopWhenFailed.key}|${key}` : null;
+  const known = memo.get(key) ?? (stopKey !== null ? memo.get(stopKey) : undefined);
+  if (known) {
+    hits++;
+    return new ResumableSearch(ctx, opts, known);
+  }
+  const s = new ResumableSearch(ctx, opts);
+  s.onFinished = (r) => keep(memo, r.stoppedEarly && stopKey !== null ? stopKey : key, r);
+  return s;
+}
+
+function keyOf(ctx: PlannerContext): string {
+  // A plan of lumped wagons (a search's guide, startableMass.ts) is kept apart from the full model's.
+  const lump = lumpedWagons();
+  return `${lump > 1 ? `lumped ${lump}|` : ""}${ctx.quantile}|${JSON.stringify(ctx.c)}`;
+}
+
+function keep(memo: Map<string, SearchResult>, key: string, r: SearchResult): void {
+  if (memo.size >= MAX_ENTRIES) memo.delete(memo.keys().next().value!);
+  memo.set(key, r);
 }
 
 /** Judgements answered from the memo since the process started (for the benchmark). */

@@ -132,6 +132,64 @@ export function runsAsOneWhenSettled(): boolean {
 
 /** Run the search for a case. */
 export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): SearchResult {
+  const phases = searchPhases(ctx, opts);
+  for (;;) {
+    const r = phases.next();
+    if (r.done) return r.value;
+  }
+}
+
+/** Control intervals of the accelerate phase between two pauses of a resumable search. */
+export const ACCELERATE_SLICE_TICKS = 100;
+
+/**
+ * A search that can be run a phase at a time (`continueSearch`) and left unfinished: it pauses once the
+ * stretch is chosen, once the build is over, and every `ACCELERATE_SLICE_TICKS` control intervals of the
+ * accelerate phase — each time on the plan's own line, so the peak coupler tension so far is a floor of the
+ * finished plan's (it only grows along a plan). Resumed to the end it is the search run in one go, every step
+ * and figure (the same code, paused between ticks).
+ */
+export class ResumableSearch {
+  private readonly phases: Generator<PlanSoFar, SearchResult, void> | null;
+  /** The plan's line at the last pause (null before the first phase, and once finished). */
+  soFar: PlanSoFar | null = null;
+  /** The finished search (null until then). */
+  result: SearchResult | null;
+  /** Phases (and slices of the accelerate phase) run so far. */
+  phasesRun = 0;
+
+  constructor(ctx: PlannerContext, opts: SearchOptions = {}, finished: SearchResult | null = null) {
+    this.result = finished;
+    this.phases = finished ? null : searchPhases(ctx, opts);
+  }
+
+  /** Largest coupler tension the plan has reached so far, N: no more than the finished plan's. */
+  floorN(): number {
+    if (this.result) return this.result.branch.peakTensionN();
+    return this.soFar ? this.soFar.branch.peakTensionN() : 0;
+  }
+
+  /** Run the next phase (or slice); the finished search once it ends, else null. */
+  continueSearch(): SearchResult | null {
+    if (this.result) return this.result;
+    const r = this.phases!.next();
+    this.phasesRun++;
+    if (r.done) {
+      this.result = r.value;
+      this.soFar = null;
+      this.onFinished?.(r.value);
+      return r.value;
+    }
+    this.soFar = r.value;
+    return null;
+  }
+
+  /** Called once when the search finishes (the memo keeps the plan: evaluationMemo.ts). */
+  onFinished: ((r: SearchResult) => void) | null = null;
+}
+
+/** The search, pausing at each phase's end and within the accelerate phase (`ResumableSearch`). */
+function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generator<PlanSoFar, SearchResult, void> {
   const check = () => {
     if (opts.shouldStop?.()) throw new Cancelled("cancelled");
   };
@@ -180,7 +238,8 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
     // No notch: gravity starts the train; power only if it then needs more to reach the target.
     const b = prep.clone();
     openStep(ctx, b, "accelerate", 0);
-    const acc = accelerate(ctx, b, MIN_NOTCH_DWELL_S, prep.run.s.t, check, failed && (() => failed({ branch: b, startKind: ctx.startKind, buildDone: true, buildEndTravelM: null })));
+    const gravitySoFar: PlanSoFar = { branch: b, startKind: ctx.startKind, buildDone: true, buildEndTravelM: null };
+    const acc = yield* accelerate(ctx, b, MIN_NOTCH_DWELL_S, prep.run.s.t, check, gravitySoFar, failed && (() => failed(gravitySoFar)));
     opts.onProgress?.(0.85);
     return { ...base, branch: b, powerS: prep.run.s.t, ...accelerationOutcome(acc), stoppedEarly: acc.stoppedEarly };
   }
@@ -209,7 +268,9 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
   opts.onProgress?.(0.45);
   if (!chosen) return { ...base, stretch: { notch: 0, outcome: "weak", tried }, failure: "cannot-start" };
   const stretch = { notch: chosen.notch, outcome: chosen.outcome, tried };
-  if (failed?.({ branch: chosen.branch, startKind: ctx.startKind, buildDone: false, buildEndTravelM: null })) return { ...base, branch: chosen.branch, stretch, stoppedEarly: true };
+  const stretched: PlanSoFar = { branch: chosen.branch, startKind: ctx.startKind, buildDone: false, buildEndTravelM: null };
+  if (failed?.(stretched)) return { ...base, branch: chosen.branch, stretch, stoppedEarly: true };
+  yield stretched;
 
   // Build: the shortest pace between notches that keeps the couplers within their allowance.
   let built: { branch: Branch; dwell: number; endS: number; endTravelM: number; capped: boolean } | null = null;
@@ -226,15 +287,16 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
   const builtPart = { ...base, branch: b, stretch, buildDwellS: built!.dwell, buildWithinAllowance: withinAllowance, buildEndS: built!.endS, buildEndTravelM: built!.endTravelM };
   const soFar: PlanSoFar = { branch: b, startKind: ctx.startKind, buildDone: true, buildEndTravelM: built!.endTravelM };
   if (failed?.(soFar)) return { ...builtPart, adhesionCapped: built!.capped, stoppedEarly: true };
+  yield soFar;
 
   // Accelerate: hold the notch the policy settles on (adjusting as speed changes) to the target.
-  const acc = accelerate(ctx, b, built!.dwell, powerS, check, failed && (() => failed(soFar)));
+  const acc = yield* accelerate(ctx, b, built!.dwell, powerS, check, soFar, failed && (() => failed(soFar)));
   opts.onProgress?.(0.85);
   const out = accelerationOutcome(acc);
   return { ...builtPart, ...out, adhesionCapped: built!.capped || out.adhesionCapped, stoppedEarly: acc.stoppedEarly };
 }
 
-function accelerationOutcome(acc: ReturnType<typeof accelerate>) {
+function accelerationOutcome(acc: AccelerateOutcome) {
   return {
     targetReachedS: acc.reachedS,
     targetTravelM: acc.travelM,
@@ -535,8 +597,21 @@ function targetReached(ctx: PlannerContext, obs: Observation): boolean {
   return t.kind === "speed" ? obs.leadSpeedMps >= t.speedMps : obs.tailTravelM >= t.distanceM;
 }
 
-/** Carry on with the same policy until the target, a stall or the time limit (or, when given, `failed` holds). */
-function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: number, check: () => void, failed?: () => boolean) {
+interface AccelerateOutcome {
+  reachedS: number | null;
+  travelM: number | null;
+  stalled: boolean;
+  capped: boolean;
+  bestSpeedMps: number;
+  bestTailTravelM: number;
+  stoppedEarly: boolean;
+}
+
+/**
+ * Carry on with the same policy until the target, a stall or the time limit (or, when given, `failed` holds);
+ * pausing with `soFar` every `ACCELERATE_SLICE_TICKS` control intervals.
+ */
+function* accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: number, check: () => void, soFar: PlanSoFar, failed?: () => boolean): Generator<PlanSoFar, AccelerateOutcome, void> {
   // Stretched and rolling, no coupling goes in or out of its slack any more: the stability-limited step
   // is enough (the accuracy limit is for slack engagement).
   if (ctx.startKind === "power") b.run.setStep(Math.max(b.run.dt, stabilityTimeStep(ctx.model)));
@@ -589,6 +664,7 @@ function accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numbe
       openStep(ctx, b, next > notch && notch === 0 ? "build" : "accelerate", next, set);
     }
     if (++ticks % 200 === 0) check();
+    if (ticks % ACCELERATE_SLICE_TICKS === 0) yield soFar;
   }
   if (b.current.phase === "stretch" && reachedS !== null) b.current.trigger = "target";
   return { reachedS, travelM, stalled, capped: capped.hit, bestSpeedMps: best, bestTailTravelM: bestTail, stoppedEarly };
