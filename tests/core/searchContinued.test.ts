@@ -1,5 +1,5 @@
 /**
- * A plan search run a phase at a time (search.ts's `ResumableSearch`, as the assistance ranking runs its
+ * A plan search run a phase at a time (resumableSearch.ts, as the assistance ranking runs its
  * candidates) against the same search run in one go: the same plan, step for step and figure for figure; and
  * the peak coupler tension at every pause is a floor of the finished plan's (peaks only grow along a plan,
  * the property the ranking relies on). The reference is the one-go search itself (common practice: a
@@ -7,9 +7,10 @@
  */
 import { describe, expect, it } from "vitest";
 import { plannerContext } from "../../src/core/planner/context.js";
-import { ResumableSearch, searchPlan, type SearchResult } from "../../src/core/planner/search.js";
+import { searchPlan, type SearchResult } from "../../src/core/planner/search.js";
+import { memoResumableSearch, ResumableSearch } from "../../src/core/planner/resumableSearch.js";
 import { failedSoFar } from "../../src/core/planner/decision.js";
-import { memoResumableSearch, memoSearchPlan, withEvaluationMemo } from "../../src/core/planner/evaluationMemo.js";
+import { memoSearchPlan, withEvaluationMemo } from "../../src/core/planner/evaluationMemo.js";
 import { Run } from "../../src/core/dynamics/runner.js";
 import { seededDepartures } from "../tools/departures.js";
 

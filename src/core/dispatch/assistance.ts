@@ -14,8 +14,8 @@ import { judge, planStart, quasiStaticLimits, type PlanResult } from "../planner
 import { failedSoFar } from "../planner/decision.js";
 import { staticCheck } from "../planner/staticCheck.js";
 import { marginalBound, plannerContext } from "../planner/context.js";
-import { memoResumableSearch, memoSearchPlan, withEvaluationMemo } from "../planner/evaluationMemo.js";
-import type { ResumableSearch } from "../planner/search.js";
+import { memoSearchPlan, withEvaluationMemo } from "../planner/evaluationMemo.js";
+import { memoResumableSearch, type ResumableSearch } from "../planner/resumableSearch.js";
 import type { LimitCheck } from "../planner/outcome.js";
 import type { LocomotiveSpec } from "../physics/types.js";
 import type { Reason, Verdict } from "../planner/outcome.js";
@@ -312,7 +312,7 @@ function search(c: StartCase, opts: AssistanceOptions, prune: boolean): Assistan
 /**
  * The best `maxFull` of `judged` (all of `units` added units, in the order a short budget keeps them), ranked
  * as the full ranking ranks them — by the peak coupler tension of their planned starts, a tie to the earlier —
- * without planning every one to the end. Each is planned a phase at a time (search.ts's `ResumableSearch`),
+ * without planning every one to the end. Each is planned a phase at a time (resumableSearch.ts),
  * always the one with the lowest peak so far next (the earlier on a tie): a peak so far is a floor of the
  * finished plan's, as peaks only grow along a plan. A candidate is dropped once a limit has failed
  * (decision.ts's `failedSoFar`: it cannot start), or once `maxFull` finished candidates that start rank ahead

@@ -11,7 +11,7 @@
  * so nothing is kept once the work that asked for the memo returns.
  */
 import type { PlannerContext } from "./context.js";
-import { ResumableSearch, searchPlan, type SearchOptions, type SearchResult } from "./search.js";
+import { searchPlan, type SearchOptions, type SearchResult } from "./search.js";
 import { lumpedWagons } from "../train/lumped.js";
 
 /** Plans kept at most (oldest dropped first): a check with its searches makes a few dozen. */
@@ -37,40 +37,27 @@ export function withEvaluationMemo<T>(work: () => T): T {
  * answers every request (a verdict-only one that never stopped is a whole plan).
  */
 export function memoSearchPlan(ctx: PlannerContext, opts: SearchOptions = {}): SearchResult {
-  const memo = active;
-  if (!memo) return searchPlan(ctx, opts);
-  const key = keyOf(ctx);
-  const stopKey = opts.stopWhenFailed ? `${opts.stopWhenFailed.key}|${key}` : null;
-  const known = memo.get(key) ?? (stopKey !== null ? memo.get(stopKey) : undefined);
-  if (known) {
-    hits++;
-    return known;
-  }
+  if (!active) return searchPlan(ctx, opts);
+  const { known, keep } = memoEntry(ctx, opts);
+  if (known) return known;
   const r = searchPlan(ctx, opts);
-  keep(memo, r.stoppedEarly && stopKey !== null ? stopKey : key, r);
+  keep(r);
   return r;
 }
 
 /**
- * A search of a context to be run a phase at a time (search.ts's `ResumableSearch`), shared with the memo as
- * `memoSearchPlan` is: already finished when the memo holds a plan that answers it, and once run to its end
- * kept there (a whole plan under the case's key, one stopped by `stopWhenFailed` under its check's), so a
- * later judgement of the same case on the same rail takes it and nothing is planned twice. A search left
- * unfinished keeps nothing.
+ * The memo's answer for a plan of a context (`known`, counted as a hit), or how to keep the plan once made
+ * (`keep`: a whole plan under the case's key, one stopped by `stopWhenFailed` under its check's; nothing
+ * outside a memo). For searches run a phase at a time (resumableSearch.ts).
  */
-export function memoResumableSearch(ctx: PlannerContext, opts: SearchOptions = {}): ResumableSearch {
+export function memoEntry(ctx: PlannerContext, opts: SearchOptions = {}): { known: SearchResult | undefined; keep: (r: SearchResult) => void } {
   const memo = active;
-  if (!memo) return new ResumableSearch(ctx, opts);
+  if (!memo) return { known: undefined, keep: () => {} };
   const key = keyOf(ctx);
   const stopKey = opts.stopWhenFailed ? `${opts.stopWhenFailed.key}|${key}` : null;
   const known = memo.get(key) ?? (stopKey !== null ? memo.get(stopKey) : undefined);
-  if (known) {
-    hits++;
-    return new ResumableSearch(ctx, opts, known);
-  }
-  const s = new ResumableSearch(ctx, opts);
-  s.onFinished = (r) => keep(memo, r.stoppedEarly && stopKey !== null ? stopKey : key, r);
-  return s;
+  if (known) hits++;
+  return { known, keep: (r) => keep(memo, r.stoppedEarly && stopKey !== null ? stopKey : key, r) };
 }
 
 function keyOf(ctx: PlannerContext): string {

@@ -139,57 +139,15 @@ export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): Searc
   }
 }
 
-/** Control intervals of the accelerate phase between two pauses of a resumable search. */
+/** Control intervals of the accelerate phase between two pauses of a resumable search (resumableSearch.ts). */
 export const ACCELERATE_SLICE_TICKS = 100;
 
 /**
- * A search that can be run a phase at a time (`continueSearch`) and left unfinished: it pauses once the
- * stretch is chosen, once the build is over, and every `ACCELERATE_SLICE_TICKS` control intervals of the
- * accelerate phase — each time on the plan's own line, so the peak coupler tension so far is a floor of the
- * finished plan's (it only grows along a plan). Resumed to the end it is the search run in one go, every step
- * and figure (the same code, paused between ticks).
+ * The search, pausing on the plan's own line once the stretch is chosen, once the build is over and every
+ * `ACCELERATE_SLICE_TICKS` control intervals of the accelerate phase (resumableSearch.ts runs it a phase at a
+ * time); returning the search's result.
  */
-export class ResumableSearch {
-  private readonly phases: Generator<PlanSoFar, SearchResult, void> | null;
-  /** The plan's line at the last pause (null before the first phase, and once finished). */
-  soFar: PlanSoFar | null = null;
-  /** The finished search (null until then). */
-  result: SearchResult | null;
-  /** Phases (and slices of the accelerate phase) run so far. */
-  phasesRun = 0;
-
-  constructor(ctx: PlannerContext, opts: SearchOptions = {}, finished: SearchResult | null = null) {
-    this.result = finished;
-    this.phases = finished ? null : searchPhases(ctx, opts);
-  }
-
-  /** Largest coupler tension the plan has reached so far, N: no more than the finished plan's. */
-  floorN(): number {
-    if (this.result) return this.result.branch.peakTensionN();
-    return this.soFar ? this.soFar.branch.peakTensionN() : 0;
-  }
-
-  /** Run the next phase (or slice); the finished search once it ends, else null. */
-  continueSearch(): SearchResult | null {
-    if (this.result) return this.result;
-    const r = this.phases!.next();
-    this.phasesRun++;
-    if (r.done) {
-      this.result = r.value;
-      this.soFar = null;
-      this.onFinished?.(r.value);
-      return r.value;
-    }
-    this.soFar = r.value;
-    return null;
-  }
-
-  /** Called once when the search finishes (the memo keeps the plan: evaluationMemo.ts). */
-  onFinished: ((r: SearchResult) => void) | null = null;
-}
-
-/** The search, pausing at each phase's end and within the accelerate phase (`ResumableSearch`). */
-function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generator<PlanSoFar, SearchResult, void> {
+export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generator<PlanSoFar, SearchResult, void> {
   const check = () => {
     if (opts.shouldStop?.()) throw new Cancelled("cancelled");
   };
