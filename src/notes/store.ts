@@ -4,7 +4,7 @@
  * applied in one transaction so the library is never half-updated.
  */
 import { openDB, type DBSchema, type IDBPDatabase, type IDBPTransaction } from "idb";
-import type { FieldIssue } from "../profiles/issues.js";
+import { fromZodIssues, type FieldIssue, type RawIssue } from "../profiles/issues.js";
 import { makeNotesBundle, startReviewSchema, type NotesBundleFile, type StartReviewFile } from "../profiles/notes.js";
 import { parseLocationNote } from "../profiles/parse.js";
 import type { LocationNoteFile } from "../profiles/schemas.js";
@@ -142,7 +142,7 @@ export interface NotesStore {
   /** The Start reviews kept for a note, oldest first; damaged records are left out. */
   reviews(location: string): Promise<StartReviewFile[]>;
   /** Keep a review beside its note (which must exist); false with the reason when it cannot be. */
-  addReview(review: StartReviewFile): Promise<{ ok: true } | { ok: false; message: string; coded: ReaderCoded }>;
+  addReview(review: StartReviewFile): Promise<{ ok: true } | { ok: false; message: string; coded: ReaderCoded; issue?: FieldIssue }>;
   /** Remove a review; true when there was one. */
   deleteReview(id: string): Promise<boolean>;
   /** ISO date-time of the last export of the whole library. */
@@ -549,7 +549,14 @@ function makeStore(db: IDBPDatabase<NotesDB>, demos: readonly LocationNoteFile[]
     async addReview(review) {
       open();
       const parsed = startReviewSchema.safeParse(review);
-      if (!parsed.success) return { ok: false, ...refusal({ code: "reviewInvalid", figures: { path: String(parsed.error.issues[0]?.path.join(".")), problem: String(parsed.error.issues[0]?.message) } }) };
+      if (!parsed.success) {
+        const first = parsed.error.issues[0];
+        // The field's problem as a code with its figures (a date in the wrong form, a value not one of the
+        // list), for other languages; its English stays the words the schema gave it.
+        const coded = first ? fromZodIssues([first as unknown as RawIssue])[0] : undefined;
+        const issue = coded ? { ...coded, message: String(first?.message) } : undefined;
+        return { ok: false, ...refusal({ code: "reviewInvalid", figures: { path: String(first?.path.join(".")), problem: String(first?.message) } }), ...(issue ? { issue } : {}) };
+      }
       const tx = db.transaction(["notes", "reviews"], "readwrite");
       if ((await tx.objectStore("notes").getKey(review.location)) === undefined) {
         await tx.done;

@@ -8,6 +8,7 @@ import * as z from "zod/mini";
 import { fromZodIssues, type FieldIssue, type RawIssue } from "./issues.js";
 import { fileKind, kindText, parseLocationNote, parseJsonText } from "./parse.js";
 import { quoted } from "./text.js";
+import { englishField } from "./issueText.js";
 import type { ReaderCoded } from "../i18n/renderReaders.js";
 import { readerEnglish, readerIssue } from "./readerIssues.js";
 import { locationNoteSchema, railConditionSchema, type LocationNoteFile } from "./schemas.js";
@@ -30,7 +31,7 @@ export const startReviewSchema = z.object({
   id: z.string().check(z.minLength(1), z.maxLength(80)),
   /** The note (location id) it belongs to. */
   location: z.string().check(z.minLength(1), z.maxLength(80)),
-  date: z.string().check(z.regex(DATE, "must be a date, YYYY-MM-DD")),
+  date: z.string().check(z.refine((d) => DATE.test(d), { message: englishField({ code: "dateIso" }), params: { code: "dateIso" } })),
   rail: railConditionSchema,
   /** The train, in the trainer's words (or the case's label). */
   train: z.string().check(z.minLength(1), z.maxLength(200)),

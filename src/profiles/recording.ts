@@ -25,7 +25,7 @@ import {
 } from "../core/dispatch/recording.js";
 import { fig, reviewText, type ReviewText } from "../i18n/reviewText.js";
 import { createTranslator, type Translator } from "../i18n/translator.js";
-import { parseCsv } from "./csv.js";
+import { CsvQuoteError, parseCsv } from "./csv.js";
 import { xmlProblemCode } from "./xmlProblem.js";
 
 /** A recording file that cannot be read or cannot be a start; the message (English) and its sentences as data (`texts`) are for the user. */
@@ -68,6 +68,7 @@ export const RECORDING_WORDS = {
   csvNotch: (line: number, raw: string): ReviewText => ({ key: "csvNotch", params: { line, raw: clip(raw) } }),
   csvPartial: (name: string): ReviewText => ({ key: "csvPartial", params: { name } }),
   csvQuote: (detail: string): ReviewText => ({ key: "csvQuote", params: { detail } }),
+  csvUnclosed: (line: number): ReviewText => ({ key: "csvUnclosed", params: { line } }),
   gpxNotXml: (line: number, column: number, message: string): ReviewText => {
     // What is wrong as a code of ours (xmlProblem.ts), not the parser's English.
     const p = xmlProblemCode(message);
@@ -135,7 +136,7 @@ export function readCsvLog(text: string): ReadRecording {
   try {
     records = parseCsv(text);
   } catch (e) {
-    throw new RecordingFileError(RECORDING_WORDS.csvQuote((e as Error).message));
+    throw new RecordingFileError(e instanceof CsvQuoteError ? RECORDING_WORDS.csvUnclosed(e.line) : RECORDING_WORDS.csvQuote((e as Error).message));
   }
   if (records.length > MAX_SAMPLES + 1) throw new RecordingFileError(RECORDING_WORDS.tooMany);
   const head = records[0];

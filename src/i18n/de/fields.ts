@@ -46,6 +46,7 @@ export const fieldsDe = translation<typeof fields.en>()({
   segmentGap: "lässt eine Lücke von {gap} {unit} nach dem vorigen Abschnitt (der bei {end} {unit} endet)",
   segmentOverlap: "überlappt den vorigen Abschnitt um {overlap} {unit} (er endet bei {end} {unit})",
   dateForm: "muss ein Datum der Form JJJJ-MM-TT sein",
+  dateIso: "muss ein Datum sein, JJJJ-MM-TT",
   perWagon: {
     one: "muss {min} bis {max} {unit} je Wagen ergeben (angegeben: {value} {unit} je Wagen bei {count} Wagen)",
     other: "muss {min} bis {max} {unit} je Wagen ergeben (angegeben: {value} {unit} je Wagen bei {count} Wagen)",

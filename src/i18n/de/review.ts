@@ -29,6 +29,7 @@ export const reviewDe = translation<typeof review.en>()({
   csvNotch: "Zeile {line}: notch muss eine ganze Zahl ab 0 sein (erhalten: „{raw}“).",
   csvPartial: "Die Spalte {name} ist in manchen Zeilen gefüllt und in anderen leer: füllen Sie sie in jeder Zeile oder lassen Sie sie weg.",
   csvQuote: "Die Datei ist kein lesbares CSV: {detail}.",
+  csvUnclosed: "Die Datei ist kein lesbares CSV: Zeile {line}: ein Feld in Anführungszeichen ist nicht geschlossen.",
   gpxNotXml: "Die Datei ist kein wohlgeformtes XML (Zeile {line}, Spalte {column}): {detail}",
   ...xmlProblemsDe,
   gpxRoot: "Das ist keine GPX-Datei: ihr Wurzelelement ist <{name}>, nicht <gpx>.",

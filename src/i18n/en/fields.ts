@@ -55,6 +55,8 @@ export const fields = namespace("fields", {
   segmentGap: "leaves a gap of {gap} {unit} after the previous segment (which ends at {end} {unit})",
   segmentOverlap: "overlaps the previous segment by {overlap} {unit} (it ends at {end} {unit})",
   dateForm: "must be a date as YYYY-MM-DD",
+  // A kept Start review's date (profiles/notes.ts), in the words that rule has always had.
+  dateIso: "must be a date, YYYY-MM-DD",
   perWagon: {
     one: "must give from {min} to {max} {unit} per wagon (got {value} {unit} per wagon over {count} wagon)",
     other: "must give from {min} to {max} {unit} per wagon (got {value} {unit} per wagon over {count} wagons)",

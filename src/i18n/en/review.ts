@@ -34,6 +34,8 @@ export const review = namespace("review", {
   csvNotch: 'line {line}: notch must be a whole number from 0 (got "{raw}").',
   csvPartial: "The column {name} is filled on some lines and empty on others: fill it on every line or leave it out.",
   csvQuote: "The file is not readable CSV: {detail}.",
+  // A quoted field left open (profiles/csv.ts CsvQuoteError): the line it starts on.
+  csvUnclosed: "The file is not readable CSV: line {line}: a quoted field is not closed.",
   gpxNotXml: "The file is not well-formed XML (line {line}, column {column}): {detail}",
   ...xmlProblems,
   gpxRoot: "This is not a GPX file: its root element is <{name}>, not <gpx>.",

@@ -46,6 +46,7 @@ export const fieldsHu = translation<typeof fields.en>()({
   segmentGap: "{gap} {unit} hézagot hagy az előző szakasz után (amely itt ér véget: {end} {unit})",
   segmentOverlap: "{overlap} {unit} hosszan átfedi az előző szakaszt (amely itt ér véget: {end} {unit})",
   dateForm: "ÉÉÉÉ-HH-NN alakú dátum kell legyen",
+  dateIso: "dátum kell legyen, ÉÉÉÉ-HH-NN alakban",
   perWagon: {
     one: "kocsinként {min} és {max} {unit} között kell legyen (megadva: kocsinként {value} {unit}, {count} kocsira)",
     other: "kocsinként {min} és {max} {unit} között kell legyen (megadva: kocsinként {value} {unit}, {count} kocsira)",

@@ -29,6 +29,7 @@ export const reviewHu = translation<typeof review.en>()({
   csvNotch: "{line}. sor: a notch 0-tól induló egész szám kell legyen (kapott: „{raw}”).",
   csvPartial: "A(z) {name} oszlop egyes sorokban ki van töltve, másokban üres: töltse ki minden sorban, vagy hagyja el.",
   csvQuote: "A fájl nem olvasható CSV: {detail}.",
+  csvUnclosed: "A fájl nem olvasható CSV: {line}. sor: egy idézőjeles mező nincs lezárva.",
   gpxNotXml: "A fájl nem szabályos XML ({line}. sor, {column}. oszlop): {detail}",
   ...xmlProblemsHu,
   gpxRoot: "Ez nem GPX fájl: a gyökéreleme <{name}>, nem <gpx>.",

@@ -18,18 +18,31 @@ import { StartReviewView, type KeepForm, type ObservedTable } from "./View.js";
 import { review } from "../../../i18n/en/review.js";
 import { reviewText, type ReviewText } from "../../../i18n/reviewText.js";
 import { tr } from "../../i18n.js";
-import { readerText } from "../../../i18n/renderReaders.js";
+import { readerText, type ReaderCoded } from "../../../i18n/renderReaders.js";
+import { issueMessage } from "../../../profiles/issueText.js";
+import type { FieldIssue } from "../../../profiles/issues.js";
 import { words } from "../../words.js";
 import { checkWords } from "../../checkWords.js";
+import { fieldWords, localiseIssue } from "../../fieldWords.js";
 
-// The screen's Hungarian and German words come in a chunk of their own, before the screen shows.
-await checkWords;
+// The screen's Hungarian and German words come in a chunk of their own, before the screen shows; a
+// field's problem (a refused review, a train that cannot be placed) is said in field words.
+await Promise.all([checkWords, fieldWords]);
 
 const t = tr.ns(review);
 
-/** A problem to show: a refused recording (its file's name and the reasons, as data), or a message as it came. */
-type Problem = { fileName: string; texts: ReviewText[] } | { message: string };
-const problemWords = (p: Problem) => ("message" in p ? p.message : `${p.fileName}: ${p.texts.map((x) => reviewText(tr, x)).join("\n")}`);
+/**
+ * A problem to show, as data rendered when drawn (a language switch redraws it): a refused recording (its
+ * file's name and the reasons), or a review the store refused (its code, and the field's issue as a code).
+ */
+type Problem = { fileName: string; texts: ReviewText[] } | { refused: ReaderCoded; issue?: FieldIssue };
+const problemWords = (p: Problem) => ("refused" in p ? refusedWords(p.refused, p.issue) : `${p.fileName}: ${p.texts.map((x) => reviewText(tr, x)).join("\n")}`);
+
+/** A refused review in the language on screen: the field's problem rendered from its code (English: the words the store gave). */
+export function refusedWords(coded: ReaderCoded, issue?: FieldIssue): string {
+  if (issue && coded.code === "reviewInvalid" && coded.figures) return readerText(tr, { ...coded, figures: { ...coded.figures, problem: issueMessage(tr, issue) } });
+  return readerText(tr, coded);
+}
 
 const today = () => new Date().toISOString().slice(0, 10);
 
@@ -106,12 +119,19 @@ export default function StartReview(): JSX.Element {
         if (out.ok) {
           setKept(true);
           setVersion((v) => v + 1);
-        } else setProblem({ message: readerText(tr, out.coded) });
+        } else setProblem({ refused: out.coded, ...(out.issue ? { issue: out.issue } : {}) });
       })
       .finally(() => setBusy(false));
   };
 
-  const [table, setTable] = createSignal<ObservedTable | null>(null);
+  // Why no table came, as data (the issues that stop the reference train, or an error), worded when drawn.
+  const [table, setTable] = createSignal<(ObservedTable & { issues?: FieldIssue[] }) | null>(null);
+  const tableShown = (): ObservedTable | null => {
+    const x = table();
+    if (!x?.issues) return x;
+    const { issues, ...rest } = x;
+    return { ...rest, why: issues.map((i) => localiseIssue(i, app.settings.settings().units).message).join("; ") };
+  };
   const onTable = () => {
     const n = note();
     const o = observedMassFactor(reviews() ?? []);
@@ -120,7 +140,7 @@ export default function StartReview(): JSX.Element {
     setTable({ working: true });
     void computeNoteLoadTable(n, ref, app.pool).then(
       (out) => {
-        if (!out.ok) return setTable({ working: false, why: out.issues.map((i) => i.message).join("; ") });
+        if (!out.ok) return setTable({ working: false, issues: out.issues });
         // A train that starts as if f times heavier than its papers: of the masses on paper, the model's
         // largest ÷ f start as the model's largest does.
         const t = (kg: number) => (kg > 0 ? Math.floor(kg / 1000) : null);
@@ -161,7 +181,7 @@ export default function StartReview(): JSX.Element {
           .then(() => setVersion((v) => v + 1))
       }
       onBack={() => app.nav.go("location-notes")}
-      table={table()}
+      table={tableShown()}
       onTable={onTable}
     />
   );
