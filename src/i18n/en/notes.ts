@@ -214,6 +214,13 @@ export const notes = namespace("notes", {
   rmCancelled: "The import was cancelled: nothing was saved.",
   rmNothingSaved: "{problem} Nothing was saved.",
   nfCannotOpen: "The notes library could not be opened on this device ({problem}). Notes cannot be saved here.",
+  // Why the library could not be opened ({problem} above), from the browser's error name; {name} is that name.
+  nfWhyNoStorage: "this browser keeps no IndexedDB storage",
+  nfWhyRefused: "the browser refuses storage here, as in a private window or by a setting",
+  nfWhyNewer: "it was saved by a newer version of Taut",
+  nfWhyFull: "the device's storage is full",
+  nfWhyDamaged: "the stored library is damaged or cannot be read",
+  nfWhyOther: "the browser reported {name}",
   nfImportCancelled: "Import of {file} cancelled; nothing was changed.",
   nfImported: "Imported {file}: {parts}.",
   nfNothingToImport: "nothing to import",

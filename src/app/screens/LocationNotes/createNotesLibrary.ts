@@ -87,6 +87,42 @@ export const issueLines = (issues: readonly FieldIssue[]) =>
     return i.path ? `${i.path}: ${m}` : m;
   });
 
+/**
+ * Why the device's store could not be opened, as a code from the browser's error name (its message is the
+ * browser's own words): no IndexedDB at all, storage refused (private window, a setting), the library
+ * written by a newer Taut, the device's storage full, or the store damaged; any other error by its name.
+ */
+export type OpenFailure = { why: "noStorage" | "refused" | "newer" | "full" | "damaged" | "other"; name: string; message: string };
+
+export function openFailureOf(e: unknown): OpenFailure {
+  const name = e instanceof Error || (typeof e === "object" && e !== null && "name" in e) ? String((e as Error).name) : "Error";
+  const message = e instanceof Error || (typeof e === "object" && e !== null && "message" in e) ? String((e as Error).message) : String(e);
+  const why: OpenFailure["why"] =
+    typeof indexedDB === "undefined" || name === "ReferenceError"
+      ? "noStorage"
+      : name === "SecurityError" || name === "InvalidStateError" || name === "NotAllowedError"
+        ? "refused"
+        : name === "VersionError"
+          ? "newer"
+          : name === "QuotaExceededError"
+            ? "full"
+            : name === "UnknownError" || name === "DataError" || name === "NotReadableError" || name === "DataCloneError"
+              ? "damaged"
+              : "other";
+  return { why, name, message };
+}
+
+const OPEN_WHY = { noStorage: "nfWhyNoStorage", refused: "nfWhyRefused", newer: "nfWhyNewer", full: "nfWhyFull", damaged: "nfWhyDamaged", other: "nfWhyOther" } as const;
+
+/**
+ * The library's "cannot open" message in the language on screen (read when drawn: a language switch
+ * redraws it). English keeps the browser's words, as it always showed them; other languages say the code.
+ */
+export function openFailureText(f: OpenFailure): string {
+  const problem = tr.lang === "en" ? f.message || f.name : nt(OPEN_WHY[f.why], { name: f.name });
+  return nt("nfCannotOpen", { problem });
+}
+
 /** A damaged record's message in the language on screen (read when drawn: a language switch redraws it). */
 export function recordProblemWords(p: { key: string; why: RecordWhy }): string {
   return recordProblemText(tr, p.key, p.why, issueWords);
@@ -124,7 +160,11 @@ export function wordsNotice(kind: Notice["kind"], text: () => string, more: { de
 
 export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
   const [ready, setReady] = createSignal(false);
-  const [failure, setFailure] = createSignal<string | null>(null);
+  const [failed, setFailed] = createSignal<OpenFailure | null>(null);
+  const failure = () => {
+    const f = failed();
+    return f ? openFailureText(f) : null;
+  };
   const [notes, setNotes] = createSignal<SavedNote[]>([]);
   const [rows, setRows] = createSignal<NoteRow[]>([]);
   const [checking, setChecking] = createSignal(false);
@@ -165,7 +205,7 @@ export function createNotesLibrary(deps: NotesLibraryDeps): NotesLibrary {
       if (why) closedNotice(new NotesClosedError(why));
       return store;
     } catch (e) {
-      setFailure(nt("nfCannotOpen", { problem: (e as Error).message || (e as Error).name }));
+      setFailed(openFailureOf(e));
       setReady(true);
       return undefined;
     }
