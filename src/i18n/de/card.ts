@@ -26,7 +26,7 @@ export const cardDe = translation<typeof card.en>()({
   loadTable: "Lasttafel",
   workingOut: "Wird berechnet…",
   cannotWorkOut: "Die Lasttafel kann nicht berechnet werden: {why}",
-  cannotPlace: "der Bezugszug lässt sich nicht auf das Profil stellen.",
+  cannotPlace: "der Referenzzug lässt sich nicht auf das Profil stellen.",
   largestMass: "Größte Anhängelast, die anfährt",
   none: "keine",
   noneNote: "„keine“: mit diesen Loks fährt bei diesem Zustand nicht einmal ein leichter Zug aus diesen Wagen voraussichtlich an.",

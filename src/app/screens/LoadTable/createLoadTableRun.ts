@@ -7,7 +7,7 @@ import { createEffect, createMemo, createSignal, on, onCleanup, type Accessor } 
 import { loadTableCells, type LoadTableRow } from "../../../core/dispatch/loadTable.js";
 import type { StartCase } from "../../../core/train/types.js";
 import type { PlannerCalls } from "../../../worker/client.js";
-import type { LoadTableCell } from "../../../worker/protocol.js";
+import type { LoadTableCell, WorkerIssue } from "../../../worker/protocol.js";
 import { plan } from "../../../i18n/en/plan.js";
 import { PLANNER_STOPPED } from "../../../worker/client.js";
 import { tr } from "../../i18n.js";
@@ -36,6 +36,8 @@ export interface LoadTableRunDeps {
   /** How many requests to share the cells among (the pool's size). */
   parallel: number;
   startCase: Accessor<StartCase | null>;
+  /** The issues that stopped a table, in words (read when drawn: the app's words in the language on screen); default: path and message as they came. */
+  issueWords?: (issues: readonly WorkerIssue[]) => string;
 }
 
 const finished = new Map<string, { rows: LoadTableRow[]; elapsedMs: number }>();
@@ -57,10 +59,16 @@ const order = (r: Pick<LoadTableRow, "rail" | "sand">) => loadTableCells().findI
 export function createLoadTableRun(deps: LoadTableRunDeps): LoadTableRun {
   const [status, setStatus] = createSignal<TableStatus>("idle");
   const [rows, setRows] = createSignal<LoadTableRow[]>([]);
-  // A planner that stopped is said in the language on screen; a failure inside the program keeps its own words.
-  const [errorWords, setErrorWords] = createSignal<(() => string) | null>(null);
-  const setError = (m: string | null, stopped = false) => setErrorWords(() => (m === null ? null : stopped ? () => stoppedWords(m) : () => m));
-  const error = () => errorWords()?.() ?? null;
+  // Why the table failed, as data worded when read: the workers' issues, a planner that stopped (said in the
+  // language on screen), or a failure inside the program (its own words).
+  const [failure, setFailure] = createSignal<{ issues: readonly WorkerIssue[] } | { message: string; stopped?: boolean } | null>(null);
+  const setError = (message: string | null) => setFailure(message === null ? null : { message });
+  const error = () => {
+    const f = failure();
+    if (!f) return null;
+    if ("message" in f) return f.stopped ? stoppedWords(f.message) : f.message;
+    return (deps.issueWords ?? ((is) => is.map((i) => `${i.path}: ${i.message}`).join("; ")))(f.issues);
+  };
   const [elapsedMs, setElapsed] = createSignal<number | null>(null);
   const [nonce, setNonce] = createSignal(0);
   let controller: AbortController | null = null;
@@ -86,7 +94,7 @@ export function createLoadTableRun(deps: LoadTableRunDeps): LoadTableRun {
         controller = null;
         const bad = outs.find((o) => !o.ok);
         if (bad && !bad.ok) {
-          setError(bad.issues.length > 0 ? bad.issues.map((i) => `${i.path}: ${i.message}`).join("; ") : bad.message, bad.kind === "crashed");
+          setFailure(bad.issues.length > 0 ? { issues: bad.issues } : { message: bad.message, stopped: bad.kind === "crashed" });
           setStatus("failed");
           return;
         }

@@ -82,7 +82,13 @@ export default function LoadTable(): JSX.Element {
     const p = placed();
     return p && p.ok ? p.value : null;
   });
-  const run = createLoadTableRun({ workers: app.pool, parallel: app.pool.size, startCase });
+  // A table the workers refuse (the work cap, a case they cannot take) is said in field words too.
+  const run = createLoadTableRun({
+    workers: app.pool,
+    parallel: app.pool.size,
+    startCase,
+    issueWords: (issues) => issues.map((i) => `${i.path}: ${localiseIssue(i, units()).message}`).join("; "),
+  });
   declarePrintStatus(() => ({ complete: run.status() !== "running", waitingFor: tr.ns(printWaits)("loadTable"), inputs: startCase() }));
   const summary = createMemo(() => {
     const r = ref();

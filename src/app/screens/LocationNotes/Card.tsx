@@ -28,6 +28,7 @@ import { ProfileSketch } from "./ProfileSketch.js";
 import { RailSandTable } from "../shared/RailSandTable.js";
 import { card } from "../../../i18n/en/card.js";
 import { tr } from "../../i18n.js";
+import { localiseIssue } from "../../fieldWords.js";
 
 const t = tr.ns(card);
 const SEASON_WORD = { spring: () => t("spring"), summer: () => t("summer"), autumn: () => t("autumn"), winter: () => t("winter") } as const;
@@ -70,7 +71,9 @@ export function LoadTableGrid(props: { rows: readonly LoadTableRow[]; units: Uni
 /** A worked-out load table, or why it could not be worked out. */
 export function LoadTableResult(props: { outcome: LoadTableOutcome; units: UnitSystem }): JSX.Element {
   const rows = () => (props.outcome.ok ? props.outcome.rows : undefined);
-  const why = () => (props.outcome.ok ? "" : props.outcome.issues.map((i) => i.message).join("; "));
+  // A coded issue (the reference train off the profile, an unknown train, the work cap) in the language on
+  // screen; an editor's check arrives already in words.
+  const why = () => (props.outcome.ok ? "" : props.outcome.issues.map((i) => (i.code || i.reader ? localiseIssue(i, props.units).message : i.message)).join("; "));
   return (
     <Show when={rows()} fallback={<p class="notes-issue-box">{t("cannotWorkOut", { why: why() })}</p>}>
       {(r) => (

@@ -20,7 +20,7 @@ import { hazardWord } from "../draft.js";
 import { notes } from "../../../../i18n/en/notes.js";
 import { tr } from "../../../i18n.js";
 import { railmlWords } from "../../../../profiles/railml/text.js";
-import { readerMessage } from "../../../../i18n/renderReaders.js";
+import { localiseIssue } from "../../../fieldWords.js";
 
 const t = tr.ns(notes);
 
@@ -174,7 +174,7 @@ export function RailmlImportView(props: RailmlImportProps): JSX.Element {
                         </p>
                         <Show when={placed()?.model}>{(m) => <ProfileSketch model={m()} units={u()} />}</Show>
                         <Show when={placed()?.issues}>
-                          {(issues) => <p class="notes-issue-box">{issues().map((i) => (i.reader ? readerMessage(tr, i.reader) : i.message)).join("; ")}</p>}
+                          {(issues) => <p class="notes-issue-box">{issues().map((i) => localiseIssue(i, u()).message).join("; ")}</p>}
                         </Show>
                         <Show when={s().noteTexts.length > 0}>
                           <ul class="notes-small">
