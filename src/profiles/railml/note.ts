@@ -11,7 +11,7 @@ import type { ParseResult } from "../issues.js";
 import type { LocationNoteFile, ReferenceTrainFile } from "../schemas.js";
 import type { Translator } from "../../i18n/translator.js";
 import type { Stretch, TravelDirection } from "./stretch.js";
-import { given, railmlEnglishTranslator, railmlWords, say } from "./text.js";
+import { counted, given, railmlEnglishTranslator, railmlWords, say } from "./text.js";
 
 export interface RailmlNoteMeta {
   id: string;
@@ -63,7 +63,7 @@ export function noteFromStretch(s: Stretch, meta: RailmlNoteMeta, tr: Translator
   note.hazards = meta.hazards ? railmlHazards(s, tr) : [];
   note.seasons = [];
   note.practice = "";
-  const change = railmlWords(tr, say("noteChange", { file: meta.source, count: String(s.segments.length), behind: given(s.behindM), ahead: given(s.aheadM) }));
+  const change = railmlWords(tr, say("noteChange", { file: meta.source, count: counted(s.segments.length), behind: given(s.behindM), ahead: given(s.aheadM) }));
   note.revisions = [{ date: meta.date, initials: meta.initials, change: change.slice(0, 400) }];
   return note;
 }

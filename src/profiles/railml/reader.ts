@@ -13,7 +13,7 @@
  * holding `tracks`. railML 3.x files and anything else get a message saying what the file is.
  */
 import { SaxesParser, type SaxesTagNS } from "saxes";
-import { railmlEnglish, say, type RailmlText } from "./text.js";
+import { counted, railmlEnglish, say, type RailmlText } from "./text.js";
 import { xmlProblemCode } from "../xmlProblem.js";
 import type { PlacedThing, RailmlDir, RailmlModel, RailmlOcp, RailmlThingKind, RailmlTrack, TrackEndInfo } from "./model.js";
 
@@ -142,7 +142,7 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
   const parent = (k = 1) => stack[stack.length - k];
 
   const open = (tag: SaxesTagNS) => {
-    if (++elements > maxElements) fail(say("tooManyElements", { max: String(maxElements) }));
+    if (++elements > maxElements) fail(say("tooManyElements", { max: counted(maxElements) }));
     if (stack.length === 0) {
       openRoot(tag);
       stack.push(tag.local);
@@ -252,7 +252,7 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
     write(chunk) {
       guard(() => {
         chars += chunk.length;
-        if (chars > maxChars) fail(say("tooLarge", { max: String(Math.max(1, Math.round(maxChars / 1024 / 1024))) }));
+        if (chars > maxChars) fail(say("tooLarge", { max: counted(Math.max(1, Math.round(maxChars / 1024 / 1024))) }));
         parser.write(chunk);
       });
     },
@@ -266,9 +266,9 @@ export function createRailmlReader(limits: RailmlReaderLimits = {}): RailmlReade
       if (model.tracks.every((t) => t.gradients.length === 0 && t.radii.length === 0)) {
         warn(say("noProfile"));
       }
-      if (noDir > 0) warn(say("noDir", { count: String(noDir) }));
+      if (noDir > 0) warn(say("noDir", { count: counted(noDir) }));
       const noAbs = model.tracks.filter((t) => t.begin?.absPos === undefined || t.end?.absPos === undefined).length;
-      if (noAbs > 0) warn(say("noAbs", { count: String(noAbs), all: String(model.tracks.length) }));
+      if (noAbs > 0) warn(say("noAbs", { count: counted(noAbs), all: counted(model.tracks.length) }));
       return model;
     },
   };

@@ -18,7 +18,7 @@
  * - A curve's side does not change its resistance, so a radius's sign is dropped; 0 is straight.
  */
 import type { SegmentFile } from "../schemas.js";
-import { given, railmlEnglish, say, type RailmlCode, type RailmlText } from "./text.js";
+import { counted, given, railmlEnglish, say, type RailmlCode, type RailmlText } from "./text.js";
 import type { PlacedThing, PlacedValue, RailmlModel, RailmlThingKind, RailmlTrack } from "./model.js";
 
 export type TravelDirection = "up" | "down";
@@ -155,7 +155,7 @@ function findFront(
     if (distinct.length > 1) {
       const main = onlyMain(distinct.map((c) => c.t));
       if (!main) {
-        return failed(say("absPosOnSeveral", { absPos: given(f.absPos), count: String(distinct.length), list: distinct.map((c) => c.t.id).join(", ") }));
+        return failed(say("absPosOnSeveral", { absPos: given(f.absPos), count: counted(distinct.length), list: distinct.map((c) => c.t.id).join(", ") }));
       }
       const c = distinct.find((x) => x.t === main)!;
       return found(c.t, c.pos);

@@ -3,7 +3,8 @@
  * page's thread): what the reader and the stretch say about the file (here: changes without a dir, a speed
  * limit, a line without curves), where the front stands and a refusal are drawn from their codes in the
  * language on screen, redrawn when the language changes, and the note saved holds its words (standing,
- * direction, revision entry) in the language it was saved in. The sentences expected are the catalog's,
+ * direction, revision entry) in the language it was saved in, its figures grouped as the language groups
+ * thousands (hu 21 800 with a no-break space, de 21.800; CLDR). The sentences expected are the catalog's,
  * filled by hand with the file's figures (the file is written by the test: tests/tools/railml.ts).
  */
 import "fake-indexeddb/auto";
@@ -47,6 +48,9 @@ describe("Import from railML in Hungarian and German", () => {
       await waitFor(() => expect(section().textContent).toContain(huCurves), { timeout: 10_000 });
       expect(section().textContent).toContain((railmlTextHu.speedLimit as string).replace("{speed}", "60"));
       expect(section().textContent).toContain('"Kavicsbánya kitérő (invented)" szolgálati hely');
+      // The front's line position as Hungarian groups it (the stretch gives 21800 m).
+      expect(section().textContent).toContain("21\u00a0800 m");
+      expect(section().textContent).not.toContain("21800");
       // Nothing the reader says in English is left.
       expect(section().textContent).not.toMatch(/\b(the|was|were|taken|towards|applies|Speed limit|operational point)\b/);
 
@@ -56,14 +60,15 @@ describe("Import from railML in Hungarian and German", () => {
       expect(section().textContent).toContain(railmlTextDe.noRadius as string);
       expect(section().textContent).toContain('Betriebsstelle "Kavicsbánya kitérő (invented)"');
       expect(section().textContent).not.toContain(huDir);
+      expect(section().textContent).toContain("21.800 m");
 
       // Saved in German: the note's words are German; its figures are the stretch's.
       fireEvent.click(screen.getByRole("button", { name: notesDe.rmSave as string }));
       await screen.findByText((notesDe.nfSavedRailml as string).replace("{name}", "Kavicsbánya kitérő (invented)"), {}, { timeout: 10_000 });
       const saved = (await (await openNotesStore()).list()).notes.find((n) => n.note.name === "Kavicsbánya kitérő (invented)");
-      expect(saved?.note.standing).toMatch(/^Zugspitze bei Betriebsstelle "Kavicsbánya kitérő \(invented\)", Gleis "T2" bei pos 300 m, absPos 21800 m \(aus railML\)\.$/);
+      expect(saved?.note.standing).toMatch(/^Zugspitze bei Betriebsstelle "Kavicsbánya kitérő \(invented\)", Gleis "T2" bei pos 300 m, absPos 21\.800 m \(aus railML\)\.$/);
       expect(saved?.note.direction).toBe('in Richtung steigender pos (railML dir="up" auf dem Gleis der Zugspitze)');
-      expect(saved?.note.revisions[0]?.change).toBe("Aus railML importiert (line.xml): 1 Abschnitt(e), 1500 m hinter und 1000 m vor der Zugspitze.");
+      expect(saved?.note.revisions[0]?.change).toBe("Aus railML importiert (line.xml): 1 Abschnitt(e), 1.500 m hinter und 1.000 m vor der Zugspitze.");
 
       // A refusal from the reader, in German.
       fireEvent.click(screen.getByRole("button", { name: notesDe.backToLibrary as string }));
