@@ -19,7 +19,10 @@ export const NOTES_BUNDLE_SCHEMA_V1 = "taut/notes-bundle@1";
 export const LOCATION_NOTE_SCHEMA = "taut/location@1";
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
-const finite = z.number().check(z.refine(Number.isFinite, "must be a finite number"));
+/** A rule of ours: its English words and its code (other languages render the code). */
+const rule = (code: "dateIso" | "isoDateTime" | "finiteNumber") => ({ message: englishField({ code }), params: { code } });
+const finite = z.number().check(z.refine(Number.isFinite, rule("finiteNumber")));
+const ISO_DATE_TIME = z.iso.datetime({ offset: true });
 /** A fitted factor and its 95 % interval. */
 const factorSchema = z.object({ value: finite, low: finite, high: finite });
 
@@ -31,7 +34,7 @@ export const startReviewSchema = z.object({
   id: z.string().check(z.minLength(1), z.maxLength(80)),
   /** The note (location id) it belongs to. */
   location: z.string().check(z.minLength(1), z.maxLength(80)),
-  date: z.string().check(z.refine((d) => DATE.test(d), { message: englishField({ code: "dateIso" }), params: { code: "dateIso" } })),
+  date: z.string().check(z.refine((d) => DATE.test(d), rule("dateIso"))),
   rail: railConditionSchema,
   /** The train, in the trainer's words (or the case's label). */
   train: z.string().check(z.minLength(1), z.maxLength(200)),
@@ -51,7 +54,7 @@ export type StartReviewFile = z.infer<typeof startReviewSchema>;
 export const notesBundleSchema = z.object({
   schema: z.literal(NOTES_BUNDLE_SCHEMA),
   /** When the bundle was written, ISO 8601 date-time (UTC). */
-  exported: z.iso.datetime({ offset: true, message: "must be an ISO date and time, e.g. 2026-10-12T08:30:00Z" }),
+  exported: z.string().check(z.refine((s) => ISO_DATE_TIME.safeParse(s).success, rule("isoDateTime"))),
   notes: z.array(locationNoteSchema),
   reviews: z.array(startReviewSchema),
 });

@@ -47,6 +47,8 @@ export const fieldsDe = translation<typeof fields.en>()({
   segmentOverlap: "überlappt den vorigen Abschnitt um {overlap} {unit} (er endet bei {end} {unit})",
   dateForm: "muss ein Datum der Form JJJJ-MM-TT sein",
   dateIso: "muss ein Datum sein, JJJJ-MM-TT",
+  isoDateTime: "muss ein ISO-Datum mit Uhrzeit sein, z. B. 2026-10-12T08:30:00Z",
+  finiteNumber: "muss eine endliche Zahl sein",
   perWagon: {
     one: "muss {min} bis {max} {unit} je Wagen ergeben (angegeben: {value} {unit} je Wagen bei {count} Wagen)",
     other: "muss {min} bis {max} {unit} je Wagen ergeben (angegeben: {value} {unit} je Wagen bei {count} Wagen)",

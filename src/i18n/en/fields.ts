@@ -57,6 +57,9 @@ export const fields = namespace("fields", {
   dateForm: "must be a date as YYYY-MM-DD",
   // A kept Start review's date (profiles/notes.ts), in the words that rule has always had.
   dateIso: "must be a date, YYYY-MM-DD",
+  // A notes bundle's time of export, and a kept review's fitted factors (profiles/notes.ts).
+  isoDateTime: "must be an ISO date and time, e.g. 2026-10-12T08:30:00Z",
+  finiteNumber: "must be a finite number",
   perWagon: {
     one: "must give from {min} to {max} {unit} per wagon (got {value} {unit} per wagon over {count} wagon)",
     other: "must give from {min} to {max} {unit} per wagon (got {value} {unit} per wagon over {count} wagons)",

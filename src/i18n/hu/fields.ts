@@ -47,6 +47,8 @@ export const fieldsHu = translation<typeof fields.en>()({
   segmentOverlap: "{overlap} {unit} hosszan átfedi az előző szakaszt (amely itt ér véget: {end} {unit})",
   dateForm: "ÉÉÉÉ-HH-NN alakú dátum kell legyen",
   dateIso: "dátum kell legyen, ÉÉÉÉ-HH-NN alakban",
+  isoDateTime: "ISO dátum és időpont kell legyen, pl. 2026-10-12T08:30:00Z",
+  finiteNumber: "véges szám kell legyen",
   perWagon: {
     one: "kocsinként {min} és {max} {unit} között kell legyen (megadva: kocsinként {value} {unit}, {count} kocsira)",
     other: "kocsinként {min} és {max} {unit} között kell legyen (megadva: kocsinként {value} {unit}, {count} kocsira)",
