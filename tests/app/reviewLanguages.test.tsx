@@ -15,6 +15,7 @@ import { SETTINGS_KEY } from "../../src/app/state/createSettings.js";
 import { deviceNotesStore } from "../../src/notes/index.js";
 import type { StartReviewFile } from "../../src/profiles/notes.js";
 import { builtinLocations } from "../../src/profiles/builtin.js";
+import { reviewDe } from "../../src/i18n/de/review.js";
 import { memoryStorage, quickTablePool, renderWithApp } from "./harness.js";
 
 const note = builtinLocations[0]!;
@@ -44,8 +45,8 @@ function reviewWith(over: Partial<Record<keyof StartReviewFile, unknown>>): Star
     rail: "dry",
     train: "1400 t, 28 wagons",
     massFactor: { value: 1.1, low: 1.05, high: 1.15 },
-    plannedVerdict: "go",
-    replannedVerdict: "go",
+    plannedVerdict: "starts",
+    replannedVerdict: "starts",
     thumbnail: { time_s: [0, 1], speed_kmh: [0, 1] },
     ...over,
   } as StartReviewFile;
@@ -116,6 +117,36 @@ describe("Start review's refusals in the language on screen", () => {
     await setAppLanguage("de");
     await waitFor(() => expect(alertText()).toContain("Zeile 3"), { timeout: 10_000 });
     for (const e of ENGLISH) expect(alertText()).not.toMatch(e);
+    unmount();
+  });
+
+  it("de: the observed table's reason (a reference train no preset has) in field words, its id as given", async () => {
+    const store = await deviceNotesStore();
+    const odd = { ...note, id: "odd-train", name: "Odd train (test)", referenceTrain: { train: "no-such-train" } };
+    const put = await store.put(odd, "mine", "new");
+    expect(put.ok).toBe(true);
+    const kept = await store.addReview(reviewWith({ id: "odd-train-r1", location: "odd-train" }));
+    expect(kept.ok).toBe(true);
+    const storage = memoryStorage();
+    storage.setItem(SETTINGS_KEY, JSON.stringify({ language: "de" }));
+    setReviewTarget("odd-train");
+    const { unmount } = renderWithApp(() => <StartReview />, { storage, pool: quickTablePool() });
+    await waitFor(() => expect(appLang()).toBe("de"), { timeout: 10_000 });
+    const button = await waitFor(
+      () => {
+        const b = [...document.querySelectorAll<HTMLButtonElement>(".review-screen button")].find((x) => x.textContent === reviewDe.tableButton);
+        expect(b).toBeTruthy();
+        return b!;
+      },
+      { timeout: 10_000 },
+    );
+    fireEvent.click(button);
+    const why = () => document.querySelector(".review-screen p.problem")?.textContent ?? "";
+    await waitFor(() => expect(why()).toContain('"no-such-train"'), { timeout: 10_000 });
+    // Without the ids, which are as the note gives them: no English word.
+    expect(why().replace(/"[^"]*"/g, "").replace(/[a-z]+-\d+/g, "")).not.toMatch(/\b(names|no known|known|train)\b/);
+    await setAppLanguage("en");
+    await waitFor(() => expect(why()).toContain('names no known train ("no-such-train"'), { timeout: 10_000 });
     unmount();
   });
 });
