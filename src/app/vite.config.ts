@@ -68,7 +68,8 @@ export default defineConfig({
   root: here("."),
   base: "./",
   publicDir: here("../../public"),
-  define: { __TAUT_VERSION__: JSON.stringify(pkg.version) },
+  // __TAUT_APP__: the core's benchmark counters and switches are left out of the app (core/dynamics/benchOnly.ts).
+  define: { __TAUT_VERSION__: JSON.stringify(pkg.version), __TAUT_APP__: "true" },
   build: {
     outDir: here("../../dist"),
     emptyOutDir: true,

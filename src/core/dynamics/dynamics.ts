@@ -9,6 +9,7 @@
 import { GRAVITY_MPS2 } from "../physics/constants.js";
 import { PRELOAD_RAMP_M } from "../physics/coupling.js";
 import type { TrainModel } from "../train/trainModel.js";
+import { BENCH } from "./benchOnly.js";
 
 export interface DynamicsState {
   t: number;
@@ -243,7 +244,7 @@ export function vehicleStepsDone(): number {
 
 /** Count work done outside `step` (the settled train's interval: every vehicle once). */
 export function countVehicleSteps(k: number): void {
-  vehicleSteps += k;
+  if (BENCH) vehicleSteps += k;
 }
 
 /**
@@ -257,12 +258,12 @@ export function setActiveOnlyStepping(on: boolean): void {
 }
 
 export function activeOnlyStepping(): boolean {
-  return activeOnly;
+  return !BENCH || activeOnly;
 }
 
 /** Advance the state by dt seconds (kick–drift–kick). Notches and brake capacities are read from the state. */
 export function step(m: TrainModel, s: DynamicsState, dt: number): void {
-  vehicleSteps += m.n;
+  if (BENCH) vehicleSteps += m.n;
   const h = 0.5 * dt;
   const n = m.n;
   const x = s.x;
@@ -342,7 +343,7 @@ export function stepActive(m: TrainModel, s: DynamicsState, dt: number): void {
   }
   s.t += dt;
   if (open) nRuns++;
-  vehicleSteps += count;
+  if (BENCH) vehicleSteps += count;
   evaluateRuns(m, s, dt, h, runs, nRuns, restless);
   s.restlessValid = true;
   if (s.intervalMaxStale) {
@@ -712,7 +713,7 @@ export function setBrakeChangeHeldCheck(on: boolean): void {
  * eases every wagon's brake at once, for a minute or more).
  */
 export function mayBreakAway(m: TrainModel, s: DynamicsState, i: number): boolean {
-  if (!heldCheck || s.v[i] !== 0 || s.acc[i] !== 0) return true;
+  if ((BENCH && !heldCheck) || s.v[i] !== 0 || s.acc[i] !== 0) return true;
   const n = m.n;
   const k = s.seg[i]!;
   const mass = m.massKg[i]!;

@@ -4,6 +4,7 @@
  * `simulate` drives one run to the end; the planner clones runs to try alternatives from a shared start.
  */
 import { adhesionSpeedFactor, slipRisk } from "../physics/adhesion.js";
+import { BENCH } from "./benchOnly.js";
 import { activeOnlyStepping, applyBrakes, applyBrakesFrom, countVehicleSteps, createState, evaluate, evaluateActive, shapedState, shapedTakeUp, step, stepActive, vehicleStepsDone, type DynamicsState } from "./dynamics.js";
 import { CONTROL_INTERVAL_S, integratorSteps, stepDividing, type TrainModel } from "../train/trainModel.js";
 import { SETTLE_AFTER_CHANGE_S, SWAY_WINDOW_S, maySettle, measureSway, mustUnsettle, settle, settledStep, unsettle, type Settled } from "./settled.js";
@@ -266,7 +267,7 @@ export class Run {
       this.afterStep();
       this.steps++;
       countVehicleSteps(m.n);
-      tally(5, m.n, 1, m.n);
+      if (BENCH) tally(5, m.n, 1, m.n);
     } else if (this.quiescent()) {
       // Everything stands and is held: only brakes and the effort lag change. One evaluation over the
       // interval finds the moment (to within the interval) when something breaks away.
@@ -275,14 +276,14 @@ export class Run {
       if (s.t <= this.brakesDoneS + span) this.applyBrakes();
       // Before every vehicle has moved, only what can change is looked at (`evaluateActive`, exact).
       let looked = m.n;
-      if (this.startedCount < m.n && activeOnlyStepping() && quiescentActive) looked = evaluateActive(m, s, span);
+      if (this.startedCount < m.n && (!BENCH || (activeOnlyStepping() && quiescentActive))) looked = evaluateActive(m, s, span);
       else evaluate(m, s, span);
       this.afterStep();
-      tally(0, looked, 1, m.n);
+      if (BENCH) tally(0, looked, 1, m.n);
     } else if (this.startedCount < m.n) {
       // Until every vehicle has moved, most of the train often rests: integrate only what can change (exact).
-      const work0 = vehicleStepsDone();
-      const activeOnly = activeOnlyStepping();
+      const work0 = BENCH ? vehicleStepsDone() : 0;
+      const activeOnly = !BENCH || activeOnlyStepping();
       for (let k = 0; k < steps; k++) {
         if (s.t <= this.brakesDoneS) this.applyBrakes();
         if (activeOnly) stepActive(m, s, this.dt);
@@ -290,8 +291,10 @@ export class Run {
         this.afterStep();
       }
       this.steps += steps;
-      beforeAllMovedWork += vehicleStepsDone() - work0;
-      tally(s.t <= this.brakesDoneS ? 1 : 2, vehicleStepsDone() - work0, steps, m.n);
+      if (BENCH) {
+        beforeAllMovedWork += vehicleStepsDone() - work0;
+        tally(s.t <= this.brakesDoneS ? 1 : 2, vehicleStepsDone() - work0, steps, m.n);
+      }
     } else {
       for (let k = 0; k < steps; k++) {
         if (s.t <= this.brakesDoneS) this.applyBrakes();
@@ -299,7 +302,7 @@ export class Run {
         this.afterStep();
       }
       this.steps += steps;
-      tally(this.rollingStepS > 0 ? 3 : 4, steps * m.n, steps, m.n);
+      if (BENCH) tally(this.rollingStepS > 0 ? 3 : 4, steps * m.n, steps, m.n);
     }
     // The clock counts whole intervals, so rounding in the steps never accumulates: after k intervals the
     // time is exactly t0 + k × interval.

