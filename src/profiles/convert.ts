@@ -2,7 +2,7 @@
  * From validated files (units in field names) to the core's SI types. The only place file values
  * are converted; the core trusts what it receives.
  */
-import { DEFAULT_LOCO_FRONTAL_AREA_M2, DEFAULT_WAGON_FRONTAL_AREA_M2 } from "../core/train/consist.js";
+import { DEFAULT_LOCO_FRONTAL_AREA_M2, DEFAULT_WAGON_FRONTAL_AREA_M2 } from "../core/physics/davisDefaults.js";
 import { kmhToMps, kNToN, tonnesToKg } from "../core/physics/units.js";
 import type { AdhesionTable, LocomotiveSpec, TrackProfile, WagonSpec } from "../core/physics/types.js";
 import type { Location } from "../core/train/types.js";

@@ -3,6 +3,7 @@
  * starting (breakaway) resistance by bearing type and temperature. Forces in N, SI in and out.
  */
 import { GRAVITY_MPS2, KG_PER_SHORT_TON, M_PER_FT, MPS_PER_MPH, NEWTONS_PER_LBF } from "./constants.js";
+import { DAVIS_DEFAULTS } from "./davisDefaults.js";
 import type { Bearing } from "./types.js";
 
 /**
@@ -70,11 +71,7 @@ export interface DavisInput {
   frontalAreaM2: number;
 }
 
-/** Default Davis b and K by vehicle kind [M: W. J. Davis Jr., General Electric Review 29, 1926]. */
-export const DAVIS_DEFAULTS = {
-  wagon: { b: 0.045, k: 0.0005, frontalAreaFt2: 88 },
-  locomotive: { b: 0.03, k: 0.0024, frontalAreaFt2: 110 },
-} as const;
+export { DAVIS_DEFAULTS };
 
 /** Convert the Davis equation of one vehicle into SI coefficients. */
 export function davisCoefficients(input: DavisInput): DavisCoefficients {

@@ -4,7 +4,7 @@
  */
 import { couplingOfKind, type CouplingSpec } from "../physics/coupling.js";
 import { DAVIS_DEFAULTS, breakawayResistancePermille, davisCoefficients, type DavisCoefficients } from "../physics/resistance.js";
-import { GRAVITY_MPS2, M_PER_FT } from "../physics/constants.js";
+import { GRAVITY_MPS2 } from "../physics/constants.js";
 import { controlOf, type LocoGroup, type StartCase, type TrainSpec } from "./types.js";
 import type { LocomotiveSpec, WagonSpec } from "../physics/types.js";
 import { placedWagons } from "./groups.js";
@@ -172,7 +172,5 @@ function makeLoco(spec: LocomotiveSpec, temperatureC: number): Vehicle {
   };
 }
 
-/** Default locomotive frontal area, m² (110 ft²) [M: Davis 1926]. */
-export const DEFAULT_LOCO_FRONTAL_AREA_M2 = DAVIS_DEFAULTS.locomotive.frontalAreaFt2 * M_PER_FT * M_PER_FT;
-/** Default wagon frontal area, m² (88 ft²) [M: Davis 1926]. */
-export const DEFAULT_WAGON_FRONTAL_AREA_M2 = DAVIS_DEFAULTS.wagon.frontalAreaFt2 * M_PER_FT * M_PER_FT;
+/** The default frontal areas (kept with the Davis defaults, physics/davisDefaults.ts). */
+export { DEFAULT_LOCO_FRONTAL_AREA_M2, DEFAULT_WAGON_FRONTAL_AREA_M2 } from "../physics/davisDefaults.js";
