@@ -11,7 +11,8 @@
  *   ratio, with 3:1 for graphical objects (success criterion 1.4.11).
  */
 import { describe, expect, it } from "vitest";
-import { PALETTES, RAIL_COLOUR, RAIL_MARKER, SERIES } from "../../src/app/charts/palette.js";
+import { RAIL_MARKER } from "../../src/app/charts/colours.js";
+import { PALETTES, RAIL_COLOUR, SERIES } from "../../src/app/charts/palette.js";
 import { effortChart } from "../../src/app/charts/effortSpeed.js";
 import { loadChart } from "../../src/app/screens/LoadTable/loadChart.js";
 import { RAIL_CONDITIONS } from "../../src/core/physics/types.js";

@@ -9,7 +9,7 @@ import { notchEffortN } from "../../core/physics/traction.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
 import type { StartCase } from "../../core/train/types.js";
 import { percent, toDisplay, unitSymbol, type UnitSystem } from "../format.js";
-import { RAIL_MARKER } from "./palette.js";
+import { RAIL_MARKER } from "./colours.js";
 import { niceCeil, type ChartSpec, type LegendEntry, type LineSeries, type Point } from "./spec.js";
 import { chart } from "../../i18n/en/chart.js";
 import { tr } from "../i18n.js";

@@ -7,10 +7,11 @@
  * marker shape each, and the bars without sand a dashed outline. Only the axes, the grid, the "needed" line
  * (text colours) and the notch ramp (light to dark by day, dark to light at night, numbered at the right)
  * follow the theme.
+ * The page's first load needs only the palettes (this module); what draws with them (`colours.ts`: a series'
+ * colour, a fill, the rail markers) loads with the charts.
  */
 import type { RailCondition } from "../../core/physics/types.js";
 import type { Theme } from "../state/createTheme.js";
-import type { SeriesRole } from "./spec.js";
 
 export interface ChartPalette {
   text: string;
@@ -48,16 +49,6 @@ export const RAIL_COLOUR: Readonly<Record<RailCondition, string>> = {
   greasy: "#3f7132",
 };
 
-/** A marker shape per rail condition (chart.js point styles), on the chart and in its legend. */
-export const RAIL_MARKER: Readonly<Record<RailCondition, "circle" | "rect" | "triangle" | "rectRot" | "crossRot" | "star">> = {
-  dry: "circle",
-  damp: "rect",
-  wet: "triangle",
-  frost: "rectRot",
-  leaves: "crossRot",
-  greasy: "star",
-};
-
 export const PALETTES: Record<Theme, ChartPalette> = {
   day: {
     text: "#1f262d",
@@ -86,34 +77,3 @@ export const PALETTES: Record<Theme, ChartPalette> = {
     rail: RAIL_COLOUR,
   },
 };
-
-/** Colour of a series by role and tone (a band's by its rail condition). */
-export function colourOf(p: ChartPalette, role: SeriesRole, tone = 0, tones = 1, rail?: RailCondition): string {
-  switch (role) {
-    case "main":
-      return p.main;
-    case "second":
-      return p.second;
-    case "limit":
-      return p.limit;
-    case "working":
-      return p.working;
-    case "need":
-    case "step":
-      return p.need;
-    case "notch": {
-      const t = tones <= 1 ? 1 : tone / (tones - 1);
-      const c = p.notchFrom.map((a, i) => Math.round(a + (p.notchTo[i]! - a) * t));
-      return `rgb(${c[0]},${c[1]},${c[2]})`;
-    }
-    case "band":
-      return rail ? p.rail[rail] : p.text;
-  }
-}
-
-/** A colour with an alpha (for band fills). */
-export function withAlpha(hex: string, alpha: number): string {
-  const m = /^#([0-9a-f]{2})([0-9a-f]{2})([0-9a-f]{2})$/i.exec(hex);
-  if (!m) return hex;
-  return `rgba(${parseInt(m[1]!, 16)},${parseInt(m[2]!, 16)},${parseInt(m[3]!, 16)},${alpha})`;
-}

@@ -9,7 +9,8 @@
 import type { ChartConfiguration } from "chart.js";
 import { createEffect, createSignal, For, on, onCleanup, onMount, Show, type JSX } from "solid-js";
 import type { ChartReply, ChartRequest } from "../charts/chart.worker.js";
-import { colourOf, type ChartPalette } from "../charts/palette.js";
+import { colourOf } from "../charts/colours.js";
+import type { ChartPalette } from "../charts/palette.js";
 import type { ChartSpec, LegendEntry } from "../charts/spec.js";
 import { shell } from "../../i18n/en/shell.js";
 import { tr } from "../i18n.js";

@@ -3,7 +3,8 @@
  * charts' drawing half (ChartCanvas.tsx), loaded once the first verdict is painted.
  */
 import type { ChartConfiguration, ChartDataset } from "chart.js";
-import { colourOf, withAlpha, type ChartPalette } from "../charts/palette.js";
+import { colourOf, withAlpha } from "../charts/colours.js";
+import type { ChartPalette } from "../charts/palette.js";
 import type { ChartSpec } from "../charts/spec.js";
 import { tr } from "../i18n.js";
 import { LOCALE_TAGS, type Lang } from "../../i18n/language.js";

@@ -6,7 +6,8 @@
  * the app's chart palette for the theme; the legend is ours, large and readable.
  */
 import { createMemo, createSignal, For, onCleanup, onMount, Show, type JSX } from "solid-js";
-import { withAlpha, type ChartPalette } from "../../charts/palette.js";
+import { withAlpha } from "../../charts/colours.js";
+import type { ChartPalette } from "../../charts/palette.js";
 import type { UnitSystem } from "../../format.js";
 import { hazardWord } from "./draft.js";
 import type { ProfileModel } from "./profileModel.js";
