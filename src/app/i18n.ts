@@ -72,9 +72,9 @@ let wanted: Lang = "en";
  */
 const parts: ((l: Lang) => Promise<Catalog | null>)[] = [];
 
-/** The words of every part added so far in `l`, as one catalog (null when none has any). */
-async function partsIn(l: Lang): Promise<Catalog | null> {
-  const got = await Promise.all(parts.map((p) => p(l)));
+/** The words of the parts from `from` to `to` (not included) in `l`, as one catalog (null when none has any). */
+async function partsIn(l: Lang, from: number, to: number): Promise<Catalog | null> {
+  const got = await Promise.all(parts.slice(from, to).map((p) => p(l)));
   return got.some((c) => c) ? Object.assign({}, ...got.filter((c) => c)) : null;
 }
 
@@ -103,8 +103,17 @@ export async function setAppLanguage(l: Lang): Promise<boolean> {
   let c: Catalog | null;
   try {
     c = await loadCatalog(l);
-    const more = c && parts.length > 0 ? await partsIn(l) : null;
-    if (c && more) c = { ...c, ...more };
+    // Every part added so far, also those added while this was loading (a later screen's module fetched in
+    // the background adds its words while the language is still the old one, and loads them in that one):
+    // loop until none is missing. The check and the switch below run with no wait between them, so no part
+    // can come in unseen.
+    let covered = 0;
+    while (c && covered < parts.length) {
+      const upTo = parts.length;
+      const more = await partsIn(l, covered, upTo);
+      if (more) c = { ...c, ...more };
+      covered = upTo;
+    }
   } catch {
     return false;
   }
