@@ -346,20 +346,25 @@ export function stepActive(m: TrainModel, s: DynamicsState, dt: number): void {
   if (BENCH) vehicleSteps += count;
   evaluateRuns(m, s, dt, h, runs, nRuns, restless);
   s.restlessValid = true;
-  if (s.intervalMaxStale) {
-    // The couplings not evaluated keep their forces: count them once in this interval's maxima.
-    const F = s.couplerF;
-    let maxT = s.intervalMaxTensionN;
-    let maxC = s.intervalMaxCompressionN;
-    for (let j = 0; j < n - 1; j++) {
-      const f = F[j]!;
-      if (f > maxT) maxT = f;
-      if (-f > maxC) maxC = -f;
-    }
-    s.intervalMaxTensionN = maxT;
-    s.intervalMaxCompressionN = maxC;
-    s.intervalMaxStale = false;
+  if (s.intervalMaxStale) countStandingCouplings(s, n);
+}
+
+/**
+ * After an evaluation of only part of the train (`stepActive`, `evaluateActive`): the couplings not evaluated
+ * keep their forces, so count every coupling once in this interval's largest forces (once after each reset).
+ */
+function countStandingCouplings(s: DynamicsState, n: number): void {
+  const F = s.couplerF;
+  let maxT = s.intervalMaxTensionN;
+  let maxC = s.intervalMaxCompressionN;
+  for (let j = 0; j < n - 1; j++) {
+    const f = F[j]!;
+    if (f > maxT) maxT = f;
+    if (-f > maxC) maxC = -f;
   }
+  s.intervalMaxTensionN = maxT;
+  s.intervalMaxCompressionN = maxC;
+  s.intervalMaxStale = false;
 }
 
 /**
@@ -406,20 +411,7 @@ export function evaluateActive(m: TrainModel, s: DynamicsState, dt: number): num
   if (open) nRuns++;
   evaluateRuns(m, s, dt, 0, runs, nRuns, restless);
   s.restlessValid = true;
-  if (s.intervalMaxStale) {
-    // As in `stepActive`: the couplings not evaluated keep their forces and count once in this interval.
-    const F = s.couplerF;
-    let maxT = s.intervalMaxTensionN;
-    let maxC = s.intervalMaxCompressionN;
-    for (let j = 0; j < n - 1; j++) {
-      const f = F[j]!;
-      if (f > maxT) maxT = f;
-      if (-f > maxC) maxC = -f;
-    }
-    s.intervalMaxTensionN = maxT;
-    s.intervalMaxCompressionN = maxC;
-    s.intervalMaxStale = false;
-  }
+  if (s.intervalMaxStale) countStandingCouplings(s, n);
   return count;
 }
 
