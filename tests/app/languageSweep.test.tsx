@@ -36,6 +36,7 @@ import { deLater } from "../../src/i18n/de/later.js";
 import type { WorkerLike } from "../../src/worker/client.js";
 import { fakePool } from "./dispatch/fakes.js";
 import { memoryStorage, quickTablePool, renderWithApp } from "./harness.js";
+import { CITED_WORKS } from "./citedWorks.js";
 
 const WORD = /\p{L}+/gu;
 
@@ -80,21 +81,7 @@ const DEMO_PAIRS = new Set(DEMO_TEXTS.flatMap((t) => {
   return w.slice(1).map((b, i) => `${w[i]} ${b}`);
 }));
 
-/** Works cited in Settings, as published (authors, titles, journals). */
-const WORKS = [
-  "E. W. Curtius and A. Kniffler, Elektrische Bahnen 20 (1950).",
-  "S. Johnsson, IMechE (1963).",
-  "W. J. Davis Jr., General Electric Review 29 (1926).",
-  "W. W. Hay, Railroad Engineering, 2nd ed. (1982).",
-  "W. J. White, How Diesel-Electric Locomotives Operate (1997).",
-  "C. Cole, in Handbook of Railway Vehicle Dynamics (2006); Wu, Spiryagin and Cole, Vehicle System Dynamics 54 (2016).",
-  // The works the rail table's notes cite (Settings/railNotes.ts).
-  "Curtius–Kniffler",
-  "Elektrische Bahnen 20, 1950",
-  "Fisk et al., IMechE Stephenson Conference 2015",
-  "Koffman 1948, J. Inst. Locomotive Engineers paper 479",
-  "Olofsson et al., Proc. IMechE F 218, 2004",
-];
+const WORKS = CITED_WORKS;
 
 /** The languages' own names, as the language choice offers them. */
 const LANGUAGE_NAMES = ["English", "Magyar", "Deutsch"];

@@ -13,6 +13,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { JSX } from "solid-js";
 import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
+import { CITED_WORKS } from "./citedWorks.js";
 
 /** Words of data and of the trade's codes that are plain in every language (ids, units, file kinds, column names). */
 const DATA = /^(taut|json|csv|id|case|rail|sand|kN|km|min|dry|damp|wet|frost|leaves|greasy|demo|mine|imported|elsewhere|spring|summer|autumn|winter|slimy|railML|illustrative|day|agg|ore)$/i;
@@ -92,22 +93,7 @@ function profileTexts(): string[] {
   return [...out].filter((t) => t.length > 2).sort((a, b) => b.length - a.length);
 }
 
-/** The published works Settings cites, as they were published (authors, titles, journals). */
-const WORKS = [
-  "E. W. Curtius and A. Kniffler, Elektrische Bahnen 20 (1950).",
-  "S. Johnsson, IMechE (1963).",
-  "W. J. Davis Jr., General Electric Review 29 (1926).",
-  "Röckl",
-  "W. W. Hay, Railroad Engineering, 2nd ed. (1982).",
-  "W. J. White, How Diesel-Electric Locomotives Operate (1997).",
-  "C. Cole, in Handbook of Railway Vehicle Dynamics (2006); Wu, Spiryagin and Cole, Vehicle System Dynamics 54 (2016).",
-  // The works the rail table's notes cite, now that the notes' own words come from the catalog (Settings/railNotes.ts).
-  "Curtius–Kniffler",
-  "Elektrische Bahnen 20, 1950",
-  "Fisk et al., IMechE Stephenson Conference 2015",
-  "Koffman 1948, J. Inst. Locomotive Engineers paper 479",
-  "Olofsson et al., Proc. IMechE F 218, 2004",
-];
+const WORKS = CITED_WORKS;
 
 describe("pseudo-localised screens: no word outside the catalogs", () => {
   it("Departures with a bad file: its errors and rows", async () => {
