@@ -23,10 +23,10 @@ import {
   type WorkerRequest,
 } from "./protocol.js";
 
-/** The part of a Worker the client uses (a fake in tests). */
 /** A crashed worker's message when the browser gave none (the app says it in the language on screen). */
 export const PLANNER_STOPPED = "The planner stopped unexpectedly.";
 
+/** The part of a Worker the client uses (a fake in tests). */
 export interface WorkerLike {
   postMessage(msg: WorkerRequest): void;
   terminate(): void;

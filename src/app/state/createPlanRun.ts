@@ -11,15 +11,7 @@ import type { PlanResult } from "../../core/planner/types.js";
 import type { StartCase } from "../../core/train/types.js";
 import type { PlannerClient } from "../../worker/client.js";
 import type { WorkerIssue } from "../../worker/protocol.js";
-import { plan } from "../../i18n/en/plan.js";
-import { PLANNER_STOPPED } from "../../worker/client.js";
-import { tr } from "../i18n.js";
-
-/** A planner that stopped, in the language on screen, with the browser's own words on why when it gave any. */
-function stoppedWords(message: string): string {
-  const t = tr.ns(plan);
-  return message && message !== PLANNER_STOPPED ? t("plannerStoppedBecause", { detail: message }) : t("plannerStopped");
-}
+import { failureWords, type RunFailure } from "./runFailure.js";
 
 export type RunStatus = "idle" | "waiting" | "running" | "done" | "invalid" | "failed";
 
@@ -74,11 +66,13 @@ export function createPlanRun(deps: PlanRunDeps): PlanRun {
   const [resultKey, setResultKey] = createSignal<string | null>(null);
   const [massPending, setMassPending] = createSignal(false);
   const [issues, setIssues] = createSignal<WorkerIssue[]>([]);
-  // Why the last plan failed, as words drawn when shown: a planner that stopped is said in the language on
-  // screen (and redrawn when it changes); a failure inside the program keeps its own words.
-  const [errorWords, setErrorWords] = createSignal<(() => string) | null>(null);
-  const setError = (m: string | null, stopped = false) => setErrorWords(() => (m === null ? null : stopped ? () => stoppedWords(m) : () => m));
-  const error = () => errorWords()?.() ?? null;
+  // Why the last plan failed, worded when shown (runFailure.ts).
+  const [failure, setFailure] = createSignal<RunFailure | null>(null);
+  const setError = (message: string | null, stopped = false) => setFailure(message === null ? null : { message, stopped });
+  const error = () => {
+    const f = failure();
+    return f ? failureWords(f) : null;
+  };
   const [elapsedMs, setElapsedMs] = createSignal<number | null>(null);
   const [nonce, setNonce] = createSignal(0);
   let controller: AbortController | null = null;

@@ -21,8 +21,6 @@ export class ResumableSearch {
   soFar: PlanSoFar | null = null;
   /** The finished search (null until then). */
   result: SearchResult | null;
-  /** Phases (and slices of the accelerate phase) run so far. */
-  phasesRun = 0;
 
   constructor(ctx: PlannerContext, opts: SearchOptions = {}, finished: SearchResult | null = null) {
     this.result = finished;
@@ -39,7 +37,6 @@ export class ResumableSearch {
   continueSearch(): SearchResult | null {
     if (this.result) return this.result;
     const r = this.phases!.next();
-    this.phasesRun++;
     if (r.done) {
       this.result = r.value;
       this.soFar = null;

@@ -8,15 +8,7 @@ import { loadTableCells, type LoadTableRow } from "../../../core/dispatch/loadTa
 import type { StartCase } from "../../../core/train/types.js";
 import type { PlannerCalls } from "../../../worker/client.js";
 import type { LoadTableCell, WorkerIssue } from "../../../worker/protocol.js";
-import { plan } from "../../../i18n/en/plan.js";
-import { PLANNER_STOPPED } from "../../../worker/client.js";
-import { tr } from "../../i18n.js";
-
-/** A planner that stopped, in the language on screen, with the browser's own words on why when it gave any. */
-function stoppedWords(message: string): string {
-  const t = tr.ns(plan);
-  return message && message !== PLANNER_STOPPED ? t("plannerStoppedBecause", { detail: message }) : t("plannerStopped");
-}
+import { failureWords, type RunFailure } from "../../state/runFailure.js";
 
 export type TableStatus = "idle" | "running" | "done" | "cancelled" | "failed";
 
@@ -59,14 +51,13 @@ const order = (r: Pick<LoadTableRow, "rail" | "sand">) => loadTableCells().findI
 export function createLoadTableRun(deps: LoadTableRunDeps): LoadTableRun {
   const [status, setStatus] = createSignal<TableStatus>("idle");
   const [rows, setRows] = createSignal<LoadTableRow[]>([]);
-  // Why the table failed, as data worded when read: the workers' issues, a planner that stopped (said in the
-  // language on screen), or a failure inside the program (its own words).
-  const [failure, setFailure] = createSignal<{ issues: readonly WorkerIssue[] } | { message: string; stopped?: boolean } | null>(null);
+  // Why the table failed, as data worded when read: the workers' issues, or a run failure (runFailure.ts).
+  const [failure, setFailure] = createSignal<{ issues: readonly WorkerIssue[] } | RunFailure | null>(null);
   const setError = (message: string | null) => setFailure(message === null ? null : { message });
   const error = () => {
     const f = failure();
     if (!f) return null;
-    if ("message" in f) return f.stopped ? stoppedWords(f.message) : f.message;
+    if ("message" in f) return failureWords(f);
     return (deps.issueWords ?? ((is) => is.map((i) => `${i.path}: ${i.message}`).join("; ")))(f.issues);
   };
   const [elapsedMs, setElapsed] = createSignal<number | null>(null);
