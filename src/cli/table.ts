@@ -3,7 +3,7 @@ import { cliTr } from "./lang.js";
 
 export function textTable(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<string>>): string {
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
-  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+<]?[\d.,]+%?( @[\d.,]+)?$|^—$|^none$/.test(r[i] ?? "")));
+  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+<]?[\d.,]+\+?%?( @[\d.,]+)?$|^—$|^none$/.test(r[i] ?? "")));
   const line = (cells: readonly string[]) =>
     cells.map((c, i) => (isNum[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join("  ").trimEnd();
   return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");
@@ -17,6 +17,16 @@ export function textTable(header: readonly string[], rows: ReadonlyArray<Readonl
 export function num(x: number | null | undefined, decimals = 0): string {
   if (x === null || x === undefined || !Number.isFinite(x)) return "—";
   return cliTr().num(x, decimals);
+}
+
+/**
+ * A margin (allowance ÷ demand) to two decimals. The core caps a margin at 99 (outcome.ts; 99 also when
+ * nothing is demanded), so a capped one reads "99+", as the app writes it ("× 99+"): "99.00" read as an
+ * exact figure where 600 m clear against 4 m of travel is 171.
+ */
+export function marginNum(x: number | null | undefined): string {
+  if (x !== null && x !== undefined && x >= 99) return "99+";
+  return num(x, 2);
 }
 
 /** A fraction as a percentage; a small one that would read 0 reads "<0.1%" (as the app shows it). */

@@ -1,6 +1,6 @@
 /** Readable assistance options, the divided train and margins per rail condition. */
 import type { AssistanceReport, ConditionMarginReport, DivideReport, PlanReport } from "../../profiles/report.js";
-import { num, textTable } from "../table.js";
+import { marginNum, num, textTable } from "../table.js";
 import { wrap } from "./wrap.js";
 import { cli } from "../../i18n/en/cli.js";
 import { RAIL_CONDITIONS, type RailCondition } from "../../core/physics/types.js";
@@ -108,7 +108,7 @@ export function renderConditions(rows: readonly ConditionMarginReport[]): string
     t("byConditionTitle"),
     ...textTable(
       [t("colRail"), t("colSand"), t("colVerdict"), t("colMargin"), w.reason("adhesion"), w.reason("power"), w.reason("coupler"), t("colLimitedBy")],
-      rows.map((m) => [(RAIL_CONDITIONS as readonly string[]).includes(m.rail) ? w.railInline(m.rail as RailCondition) : m.rail, m.sand ? t("yes") : t("no"), w.verdictInline(m.verdict), num(m.margin, 2), num(m.margins.adhesion, 2), num(m.margins.power, 2), num(m.margins.coupler, 2), m.binding ? w.limit(m.binding) : m.limitedBy]),
+      rows.map((m) => [(RAIL_CONDITIONS as readonly string[]).includes(m.rail) ? w.railInline(m.rail as RailCondition) : m.rail, m.sand ? t("yes") : t("no"), w.verdictInline(m.verdict), marginNum(m.margin), marginNum(m.margins.adhesion), marginNum(m.margins.power), marginNum(m.margins.coupler), m.binding ? w.limit(m.binding) : m.limitedBy]),
     )
       .split("\n")
       .map((l) => `  ${l}`),

@@ -1,7 +1,7 @@
 /** Readable and CSV forms of a departures check. */
 import type { DepartureRow } from "../batch/checkDepartures.js";
 import { CHECK_CSV_HEADER } from "../../profiles/csv.js";
-import { csv, num, textTable } from "../table.js";
+import { csv, marginNum, num, textTable } from "../table.js";
 import { divideLine, optionLine } from "./assistance.js";
 import { cliTr, cliWords } from "../lang.js";
 import { cli } from "../../i18n/en/cli.js";
@@ -85,7 +85,7 @@ export function renderCheck(rows: readonly DepartureRow[], cautions: readonly Ca
         num(r.trailingMass_t),
         cliWords().verdictInline(r.verdict!),
         (r.reasons ?? []).map((x) => w.reason(x)).join(", ") || "—",
-        `${num(r.margin, 2)}${r.binding ? ` (${cliWords().limit(r.binding)})` : ""}`,
+        `${marginNum(r.margin)}${r.binding ? ` (${cliWords().limit(r.binding)})` : ""}`,
         massesText(r),
         remedyText(r) || "—",
       ]),

@@ -4,7 +4,7 @@ import { cautionText } from "../../i18n/render.js";
 import type { LimitName } from "../../core/planner/outcome.js";
 import { cli } from "../../i18n/en/cli.js";
 import { cliTr, cliWords } from "../lang.js";
-import { num, pct, textTable } from "../table.js";
+import { marginNum, num, pct, textTable } from "../table.js";
 import { renderAssistance, renderConditions, verdictWord } from "./assistance.js";
 import { wrap } from "./wrap.js";
 import { partsSummingTo } from "../../i18n/rounding.js";
@@ -14,6 +14,8 @@ import { lineOf } from "../../profiles/lineReport.js";
 import { groupName, helperCallText, percent, siQuantities, stepWhyText } from "../../i18n/renderLines.js";
 import { adviceText, limitWhatText, vehicleText } from "../../i18n/renderAdvice.js";
 import { slipGuidanceText } from "../../i18n/renderSlip.js";
+import { steps as stepWords } from "../../i18n/en/steps.js";
+import { slipHeadline } from "../../core/planner/slip.js";
 import { advice as adviceWords } from "../../i18n/en/advice.js";
 import type { AdviceLine, GroupPlace, HelperCall, LimitWhat, StepWhy, VehicleRef } from "../../core/planner/lines.js";
 
@@ -50,7 +52,7 @@ export function renderPlan(p: PlanReport): string {
     lines.push(
       textTable(
         [t("colLimit"), t("colMargin"), "", t("colWhat")],
-        p.limits.map((l) => [w.limit(l.name), num(l.margin, 2), l.level === "within" ? t("levelOk") : l.level === "soft" ? t("levelMarginal") : t("levelOver"), l.whatCode ? limitWhatText(cliTr(), q, lineOf<LimitWhat>(l.whatCode)) : l.what]),
+        p.limits.map((l) => [w.limit(l.name), marginNum(l.margin), l.level === "within" ? t("levelOk") : l.level === "soft" ? t("levelMarginal") : t("levelOver"), l.whatCode ? limitWhatText(cliTr(), q, lineOf<LimitWhat>(l.whatCode)) : l.what]),
       )
         .split("\n")
         .map((x) => `  ${x}`)
@@ -58,7 +60,9 @@ export function renderPlan(p: PlanReport): string {
     );
   }
   if (p.stretch && p.stretch.lastVehicleMoves_s !== null) {
-    lines.push(t("stretch", { time: num(p.stretch.lastVehicleMoves_s, 0), travel: num(p.stretch.locoTravelToStretch_m, 1) }));
+    // Printed as the report carries them (0.1 s, 0.01 m), as `taut simulate` prints them: rounding the
+    // report's 0.25 m again read "0.3 m" beside the stretch step's "about 0.2 m" (0.246 m).
+    lines.push(t("stretch", { time: num(p.stretch.lastVehicleMoves_s, 1), travel: num(p.stretch.locoTravelToStretch_m, 2) }));
   }
   if (p.wheelClimb) {
     const w = p.wheelClimb;
@@ -90,7 +94,7 @@ export function renderPlan(p: PlanReport): string {
           // Whole percent, as the step's why line gives it (rounding.ts wholePercent).
           `${pct(s.slipRisk)}${s.protectionActs ? " *" : ""}`,
           num(s.peakCouplerForce_kN),
-          s.notch === 0 ? "—" : t("fallbackNotch", { notch: s.fallbackNotch }),
+          stillSlipping(s),
         ]),
       ),
     );
@@ -131,6 +135,17 @@ export function renderPlan(p: PlanReport): string {
   return lines.join("\n");
 }
 
+/**
+ * The "still slipping" cell: the step's fallback notch, or shut off and start again where there is no lower
+ * notch to drop to (the core's slipHeadline, as the app's step cards and Cab steps say it) — never "notch 1"
+ * beside a step that is already in notch 1.
+ */
+function stillSlipping(s: PlanReport["steps"][number]): string {
+  if (s.notch <= 0) return "—";
+  const then = slipHeadline(s.notch, s.fallbackNotch).then;
+  return then.code === "drop" ? cliTr().ns(cli)("fallbackNotch", { notch: then.notch }) : cliTr().ns(stepWords)("shutOff");
+}
+
 /** A quantile as the limits' lines write it ("10 %"). */
 function railQuantile(x: number): string {
   return percent(cliTr(), x);
@@ -153,5 +168,5 @@ function advance(a: PlanReport["steps"][number]["advanceWhen"]): string {
 /** "margin 0.93 (adhesion)": the binding limit's margin, named. */
 export function marginText(margin: number, binding?: LimitName): string {
   const t = cliTr().ns(cli);
-  return binding ? t("marginNamed", { value: num(margin, 2), limit: cliWords().limit(binding) }) : t("margin", { value: num(margin, 2) });
+  return binding ? t("marginNamed", { value: marginNum(margin), limit: cliWords().limit(binding) }) : t("margin", { value: marginNum(margin) });
 }

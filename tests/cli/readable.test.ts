@@ -1,0 +1,74 @@
+/**
+ * The readable plan as a driver reads it at night: a figure it gives twice reads alike, a capped margin is not
+ * printed as if exact, and the "still slipping" column never tells a driver in notch 1 to drop to notch 1 —
+ * it says what the app's step cards and Cab steps say there (shut off, start again: the core's slipHeadline).
+ * Over the demo cases (profiles/cases). Expected figures are worked out here from the planner's SI values
+ * (rounding half away from zero, once: common practice for figures read by people).
+ */
+import { readdirSync, readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
+import { describe, expect, it } from "vitest";
+import { planStart, type PlanResult, type StartCase } from "../../src/core/index.js";
+import { renderPlan } from "../../src/cli/render/plan.js";
+import { marginNum, textTable } from "../../src/cli/table.js";
+import { builtinLibrary } from "../../src/profiles/builtin.js";
+import { parseStartCase } from "../../src/profiles/parse.js";
+import { planReport } from "../../src/profiles/report.js";
+
+const casesDir = fileURLToPath(new URL("../../profiles/cases/", import.meta.url));
+const lib = builtinLibrary();
+const demos: Array<{ name: string; c: StartCase; p: PlanResult; text: string }> = readdirSync(casesDir)
+  .filter((f) => f.endsWith(".json"))
+  .map((f) => {
+    const r = parseStartCase(JSON.parse(readFileSync(casesDir + f, "utf8")), lib);
+    if (!r.ok) throw new Error(f);
+    const p = planStart(r.value, { skipMassSearch: true });
+    return { name: f, c: r.value, p, text: renderPlan(planReport(r.value, p)) };
+  });
+
+/** Half away from zero, to `d` decimals, once. */
+const once = (x: number, d: number): string => (Math.sign(x) * Math.floor(Math.abs(x) * 10 ** d + 0.5) / 10 ** d).toFixed(d);
+
+describe("the readable plan, as a driver reads it", () => {
+  it("the demo cases hold a step with no lower notch to drop to, and one with a fallback (both cells are exercised)", () => {
+    const steps = demos.flatMap((d) => d.p.steps.filter((s) => s.notch > 0));
+    expect(steps.some((s) => s.fallbackNotch >= s.notch)).toBe(true);
+    expect(steps.some((s) => s.fallbackNotch > 0 && s.fallbackNotch < s.notch)).toBe(true);
+  });
+
+  for (const d of demos) {
+    it(`${d.name}: "still slipping" drops to a lower notch, or says shut off and start again`, () => {
+      const rows = d.text.split("\n").filter((l) => /^\d+ {2}/.test(l));
+      expect(rows).toHaveLength(d.p.steps.length);
+      d.p.steps.forEach((s, i) => {
+        const cell = rows[i]!.split(/ {2,}/).at(-1);
+        if (s.notch <= 0) expect(cell).toBe("—");
+        else if (s.fallbackNotch > 0 && s.fallbackNotch < s.notch) expect(cell).toBe(`notch ${s.fallbackNotch}`);
+        else expect(cell).toBe("shut off, start again");
+      });
+    });
+
+    it(`${d.name}: the stretch line gives the last vehicle's move as the plan has it, and agrees with the stretch step's why`, () => {
+      const st = d.p.stretch;
+      const line = /Stretch: last vehicle moves ([\d.]+) s after taking power, after ([\d.]+) m of locomotive travel/.exec(d.text);
+      if (st.lastVehicleMovesS === null || st.locoTravelToStretchM === null) return;
+      expect(line?.slice(1)).toEqual([once(st.lastVehicleMovesS, 1), once(st.locoTravelToStretchM, 2)]);
+      // The why line of the stretch step says "after about X m" to 0.1 m: the two may differ by its rounding only.
+      const about = /last vehicle moves after about ([\d.]+) m of locomotive travel/.exec(d.text.replace(/\s+/g, " "))?.[1];
+      if (about !== undefined) expect(Math.abs(Number(about) - Number(line![2]))).toBeLessThanOrEqual(0.05 + 1e-9);
+    });
+  }
+
+  it("a margin the core caps at 99 reads 99+, not 99.00, and stays in its right-aligned column", () => {
+    expect(marginNum(99)).toBe("99+");
+    expect(marginNum(98.994)).toBe("98.99");
+    expect(marginNum(1.4)).toBe("1.40");
+    expect(textTable(["margin"], [["1.40"], ["99+"]]).split("\n").slice(2)).toEqual(["  1.40", "   99+"]);
+    const capped = demos.filter((d) => d.p.limits.some((l) => l.margin >= 99));
+    expect(capped.length).toBeGreaterThan(0);
+    for (const d of capped) {
+      expect(d.text).not.toMatch(/\b99\.00\b/);
+      for (const l of d.p.limits.filter((x) => x.margin >= 99)) expect(d.text).toMatch(new RegExp(`\\n {2}${l.name.replace("-", " ")}\\s+99\\+ {2}`));
+    }
+  });
+});
