@@ -165,6 +165,26 @@ describe("Cab steps", () => {
     expect(screen.queryByRole("dialog")).toBeNull();
   });
 
+  it("gives each step's slip risk as its step card does (whole percent: 9.9 % read 10 % on the card and in the why line)", () => {
+    // The demo aggregate train's last step has a slip risk of 0.0994: the card and `taut plan` say 10 %.
+    const steps = FIXTURE_STEPS.map((s, i) => (i === 2 ? { ...s, slipRisk: 0.0994 } : i === 1 ? { ...s, slipRisk: 1e-9 } : s));
+    const plan = fixturePlan({ steps });
+    const cards = (() => {
+      const r = resultView(plan);
+      const out = [...document.querySelectorAll(".step-card")].map((c) => [...c.querySelectorAll(".figures > div")].find((d) => d.querySelector("dt")?.textContent === "Slip risk")?.querySelector("dd")?.textContent?.split(" — ")[0]);
+      r.unmount();
+      return out;
+    })();
+    expect(cards[2]).toBe("10 %");
+    expect(cards[1]).toBe("< 1 %");
+    cab(plan);
+    const cabRisk = () => [...document.querySelectorAll(".cab-figures > div")].find((d) => d.querySelector("dt")?.textContent === "Slip risk")?.querySelector("dd")?.textContent;
+    steps.forEach((_, i) => {
+      expect(cabRisk(), `step ${i + 1}`).toBe(cards[i]);
+      if (i < steps.length - 1) fireEvent.click(screen.getByRole("button", { name: /Next/ }));
+    });
+  });
+
   it("says so when there is no plan, or no steps", () => {
     cab(null);
     expect(screen.getByText(/There is no plan yet/)).toBeTruthy();

@@ -8,7 +8,7 @@ import type { Target } from "../../../core/train/types.js";
 import { Icon } from "../../components/Icon.js";
 import { VerdictIcon } from "../../components/VerdictBanner.js";
 import { words } from "../../words.js";
-import { clock, percent, show, type UnitSystem } from "../../format.js";
+import { clock, percentOf, show, type UnitSystem } from "../../format.js";
 import { groupWords, whyText } from "../../lines.js";
 import type { WakeLockState } from "../../state/createWakeLock.js";
 import { advanceLead, advanceOthers, groupNotchesText, helperLine, notchText, phaseLine, phaseWord, stillSlippingLabel, stillSlipping } from "../../steps.js";
@@ -153,7 +153,8 @@ export function CabStepsView(props: CabStepsViewProps): JSX.Element {
                 </div>
                 <div classList={{ alert: s().slipRisk > props.slipThreshold }}>
                   <dt>{t("slipRisk")}</dt>
-                  <dd>{percent(s().slipRisk)}</dd>
+                  {/* Whole percent, as the step card, the why line and `taut plan` give it (9.9 % read 10 % there). */}
+                  <dd>{percentOf(s().slipRisk, 0)}</dd>
                 </div>
                 <div>
                   <dt>{stillSlippingLabel()}</dt>
