@@ -7,6 +7,7 @@
  * on the brakes: no notch until the train needs one. Deterministic: the same case always gives the same plan.
  */
 import { BENCH } from "../dynamics/benchOnly.js";
+import { vehicleStepsDone } from "../dynamics/dynamics.js";
 import { Run, type BrakeSchedule, type Observation } from "../dynamics/runner.js";
 import { stabilityTimeStep } from "../train/trainModel.js";
 import { Branch } from "./branch.js";
@@ -131,6 +132,45 @@ export function runsAsOneWhenSettled(): boolean {
   return !BENCH || settleInAccelerate;
 }
 
+/**
+ * One part of a plan search, for the benchmark (BENCH only): the preparing, a stretch notch or build pace
+ * tried, or the accelerate phase; whether the plan kept it; its work (vehicle-steps) and simulated time, and
+ * for a try that was dropped how far into it (s) its dropping was certain, with the work done after that.
+ */
+export interface SearchTry {
+  phase: "prepare" | "stretch" | "build" | "accelerate";
+  /** The stretch notch or the build pace (s between notches); 0 otherwise. */
+  label: number;
+  kept: boolean;
+  vehicleSteps: number;
+  simS: number;
+  /** A dropped try: simulated time into it when it was certain to be dropped (null: only at its end). */
+  certainAfterS: number | null;
+  /** A dropped try: vehicle-steps done after it was certain to be dropped. */
+  stepsAfterCertain: number;
+  /** Time it took by the logger's clock, ms; a stretch try's outcome. */
+  ms: number;
+  outcome?: StretchOutcome;
+}
+
+let tryLog: SearchTry[] | null = null;
+let tryClock: () => number = () => 0;
+
+/** Log every search's parts into `log` from now on (null: stop), timed by `clock` (ms). For the benchmark. */
+export function logSearchTries(log: SearchTry[] | null, clock: () => number = () => 0): void {
+  tryLog = log;
+  tryClock = clock;
+}
+
+/** The work and the clock when a part begins (BENCH logging only). */
+function mark(): { w: number; t: number } {
+  return BENCH && tryLog ? { w: vehicleStepsDone(), t: tryClock() } : { w: 0, t: 0 };
+}
+
+function logTry(from: { w: number; t: number }, t: Omit<SearchTry, "vehicleSteps" | "ms">): void {
+  if (BENCH && tryLog) tryLog.push({ ...t, vehicleSteps: vehicleStepsDone() - from.w, ms: tryClock() - from.t });
+}
+
 /** Run the search for a case. */
 export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): SearchResult {
   const phases = searchPhases(ctx, opts);
@@ -154,6 +194,7 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
   };
   const hold = holdingNotch(ctx);
   const powerS = ctx.releaseS + 2;
+  const w0 = mark();
   const run = Run.start(ctx.model, brakeSchedule(ctx));
   const prep = new Branch(run, []);
   openStep(ctx, prep, "prepare", Math.max(0, hold));
@@ -190,6 +231,7 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
     if (graduated && obs.allMoving) break;
   }
   prep.current.trigger = graduated && prep.run.lastVehicleMovesS !== null ? "moved" : "time";
+  if (BENCH && tryLog) logTry(w0, { phase: "prepare", label: 0, kept: true, simS: prep.run.s.t, certainAfterS: null, stepsAfterCertain: 0 });
   check();
   opts.onProgress?.(0.2);
 
@@ -198,7 +240,9 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
     const b = prep.clone();
     openStep(ctx, b, "accelerate", 0);
     const gravitySoFar: PlanSoFar = { branch: b, startKind: ctx.startKind, buildDone: true, buildEndTravelM: null };
+    const wa = mark();
     const acc = yield* accelerate(ctx, b, MIN_NOTCH_DWELL_S, prep.run.s.t, check, gravitySoFar, failed && (() => failed(gravitySoFar)));
+    if (BENCH && tryLog) logTry(wa, { phase: "accelerate", label: 0, kept: true, simS: b.run.s.t - prep.run.s.t, certainAfterS: null, stepsAfterCertain: 0 });
     opts.onProgress?.(0.85);
     return { ...base, branch: b, powerS: prep.run.s.t, ...accelerationOutcome(acc), stoppedEarly: acc.stoppedEarly };
   }
@@ -213,9 +257,14 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
       if (last) break;
       continue;
     }
+    const ws = mark();
     const b = prep.clone();
     const outcome = stretchWith(ctx, b, n);
     tried.push({ notch: n, outcome });
+    if (BENCH && tryLog) {
+      const dropped = outcome === "weak" || outcome === "rollback";
+      logTry(ws, { phase: "stretch", label: n, kept: !dropped, simS: b.run.s.t - prep.run.s.t, certainAfterS: null, stepsAfterCertain: 0, outcome });
+    }
     check();
     if (outcome === "weak" || outcome === "rollback") {
       if (last) break;
@@ -234,11 +283,19 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
   // Build: the shortest pace between notches that keeps the couplers within their allowance.
   let built: { branch: Branch; dwell: number; endS: number; endTravelM: number; capped: boolean } | null = null;
   for (const dwell of BUILD_DWELLS_S) {
+    const wb = mark();
+    const watch = BENCH && tryLog ? { overAtS: null as number | null, stepsAt: 0 } : undefined;
     const b = chosen.branch.clone();
-    const r = buildWith(ctx, b, dwell);
+    const r = buildWith(ctx, b, dwell, watch);
     check();
     built = { branch: b, dwell, endS: r.endS, endTravelM: b.run.s.x[b.run.lead]!, capped: r.capped };
-    if (b.peakTensionN() <= ctx.couplerAllowanceN) break;
+    const within = b.peakTensionN() <= ctx.couplerAllowanceN;
+    if (BENCH && tryLog && watch) {
+      const dropped = !within && dwell !== BUILD_DWELLS_S[BUILD_DWELLS_S.length - 1];
+      const t0 = chosen.branch.run.s.t;
+      logTry(wb, { phase: "build", label: dwell, kept: !dropped, simS: b.run.s.t - t0, certainAfterS: dropped && watch.overAtS !== null ? Math.max(0, watch.overAtS - t0) : null, stepsAfterCertain: dropped ? vehicleStepsDone() - (watch.overAtS !== null ? watch.stepsAt : wb.w) : 0 });
+    }
+    if (within) break;
   }
   opts.onProgress?.(0.65);
   const b = built!.branch;
@@ -249,7 +306,10 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
   yield soFar;
 
   // Accelerate: hold the notch the policy settles on (adjusting as speed changes) to the target.
+  const wa = mark();
+  const ta = b.run.s.t;
   const acc = yield* accelerate(ctx, b, built!.dwell, powerS, check, soFar, failed && (() => failed(soFar)));
+  if (BENCH && tryLog) logTry(wa, { phase: "accelerate", label: 0, kept: true, simS: b.run.s.t - ta, certainAfterS: null, stepsAfterCertain: 0 });
   opts.onProgress?.(0.85);
   const out = accelerationOutcome(acc);
   return { ...builtPart, ...out, adhesionCapped: built!.capped || out.adhesionCapped, stoppedEarly: acc.stoppedEarly };
@@ -530,12 +590,16 @@ function targetSpeedMps(ctx: PlannerContext): number {
 }
 
 /** Notch up at the given pace until the highest notch is reached or none is allowed for a while. */
-function buildWith(ctx: PlannerContext, b: Branch, dwell: number): { endS: number; capped: boolean } {
+function buildWith(ctx: PlannerContext, b: Branch, dwell: number, watch?: { overAtS: number | null; stepsAt: number }): { endS: number; capped: boolean } {
   const capped = { hit: false };
   const seg = new Int32Array(ctx.model.n);
   let lastChange = b.run.s.t;
   for (;;) {
     const obs = b.tick(ctx);
+    if (BENCH && watch && watch.overAtS === null && b.peakTensionN() > ctx.couplerAllowanceN) {
+      watch.overAtS = obs.timeS;
+      watch.stepsAt = vehicleStepsDone();
+    }
     if (targetReached(ctx, obs)) break;
     const notch = levelOf(b);
     const { notch: next, set } = nextNotch(ctx, b, obs, obs.timeS - b.current.startS, dwell, capped, seg);
