@@ -58,7 +58,7 @@ function summarise(name: string, log: SearchTry[], plans: number): void {
       line(
         `  … dropped tries' simulated time`,
         `${simS.toFixed(0)} s`,
-        `certain early in ${certain.length}: at ${sum(certain, (t) => t.certainAfterS!).toFixed(0)} of their ${sum(certain, (t) => t.simS).toFixed(0)} s; ${M(sum(dropped, (t) => t.stepsAfterCertain))} vehicle-steps after certain`,
+        `certain early in ${certain.length}: at ${sum(certain, (t) => t.certainAfterS!).toFixed(0)} of their ${sum(certain, (t) => t.simS).toFixed(0)} s; ${M(sum(dropped, (t) => t.stepsAfterCertain))} vehicle-steps, ${sum(dropped, (t) => t.msAfterCertain ?? 0).toFixed(0)} ms CPU after that`,
       );
     }
   }

@@ -146,8 +146,9 @@ export interface SearchTry {
   simS: number;
   /** A dropped try: simulated time into it when it was certain to be dropped (null: only at its end). */
   certainAfterS: number | null;
-  /** A dropped try: vehicle-steps done after it was certain to be dropped. */
+  /** A dropped try: vehicle-steps done after it was certain to be dropped, and the time that took by the logger's clock, ms. */
   stepsAfterCertain: number;
+  msAfterCertain?: number;
   /** Time it took by the logger's clock, ms; a stretch try's outcome. */
   ms: number;
   outcome?: StretchOutcome;
@@ -259,11 +260,14 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
     }
     const ws = mark();
     const b = prep.clone();
-    const outcome = stretchWith(ctx, b, n);
+    const watch = BENCH && tryLog ? { lastWorkS: prep.run.s.t, stepsAt: ws.w, clockAt: ws.t } : undefined;
+    const outcome = stretchWith(ctx, b, n, watch);
     tried.push({ notch: n, outcome });
-    if (BENCH && tryLog) {
+    if (BENCH && tryLog && watch) {
       const dropped = outcome === "weak" || outcome === "rollback";
-      logTry(ws, { phase: "stretch", label: n, kept: !dropped, simS: b.run.s.t - prep.run.s.t, certainAfterS: null, stepsAfterCertain: 0, outcome });
+      // A weak try's last part with no work done: the train stood, held, to the end (known at the earliest then).
+      const idle = dropped && watch.lastWorkS < b.run.s.t - 1e-9;
+      logTry(ws, { phase: "stretch", label: n, kept: !dropped, simS: b.run.s.t - prep.run.s.t, certainAfterS: idle ? watch.lastWorkS - prep.run.s.t : null, stepsAfterCertain: 0, msAfterCertain: idle ? tryClock() - watch.clockAt : 0, outcome });
     }
     check();
     if (outcome === "weak" || outcome === "rollback") {
@@ -342,7 +346,7 @@ function canEverMove(ctx: PlannerContext, notch: number): boolean {
 }
 
 /** Take `notch` and wait for the last vehicle to move; classify how it went. */
-function stretchWith(ctx: PlannerContext, b: Branch, notch: number): StretchOutcome {
+function stretchWith(ctx: PlannerContext, b: Branch, notch: number, watch?: { lastWorkS: number; stepsAt: number; clockAt: number }): StretchOutcome {
   b.current.trigger = "time";
   openStep(ctx, b, "stretch", notch);
   const start = b.run.s.t;
@@ -351,6 +355,11 @@ function stretchWith(ctx: PlannerContext, b: Branch, notch: number): StretchOutc
   let movedAt = -1;
   for (;;) {
     const obs = b.tick(ctx);
+    if (BENCH && watch && vehicleStepsDone() !== watch.stepsAt) {
+      watch.lastWorkS = obs.timeS;
+      watch.stepsAt = vehicleStepsDone();
+      watch.clockAt = tryClock();
+    }
     if (obs.leadTravelM < -ROLL_BACK_LIMIT_M) return "rollback";
     if (obs.maxTensionN > ctx.couplerAllowanceN || b.current.peakTensionN > ctx.couplerAllowanceN) outcome = "force";
     // The whole train moving at up to the practice speed is fine; the locomotive racing ahead is not.
