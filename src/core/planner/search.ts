@@ -172,6 +172,22 @@ function logTry(from: { w: number; t: number }, t: Omit<SearchTry, "vehicleSteps
   if (BENCH && tryLog) tryLog.push({ ...t, vehicleSteps: vehicleStepsDone() - from.w, ms: tryClock() - from.t });
 }
 
+/**
+ * A build pace before the last that has taken a coupling beyond its allowance is certain to be dropped; it is
+ * not run on (the stretch already beyond it: not started). The same plans, every figure (tests/core/
+ * droppedPaces.test.ts). On by default, for every plan; off only to compare (the benchmark, the test).
+ */
+let cutDroppedPaces = true;
+
+/** Cut build paces certain to be dropped (true, the default) or run each to its end as before. */
+export function setCutDroppedPaces(on: boolean): void {
+  cutDroppedPaces = on;
+}
+
+function cutsDroppedPaces(): boolean {
+  return !BENCH || cutDroppedPaces;
+}
+
 /** Run the search for a case. */
 export function searchPlan(ctx: PlannerContext, opts: SearchOptions = {}): SearchResult {
   const phases = searchPhases(ctx, opts);
@@ -284,19 +300,33 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
   if (failed?.(stretched)) return { ...base, branch: chosen.branch, stretch, stoppedEarly: true };
   yield stretched;
 
-  // Build: the shortest pace between notches that keeps the couplers within their allowance.
+  // Build: the shortest pace between notches that keeps the couplers within their allowance (the last pace
+  // whatever it gives). A pace before the last that takes a coupling beyond the allowance — in the stretch
+  // already, or at any moment of the pace, the peaks only growing — is certain to be dropped: it is not run on
+  // from there (`cutDroppedPaces`), and the next is tried.
+  const lastDwell = BUILD_DWELLS_S[BUILD_DWELLS_S.length - 1]!;
+  const cut = cutsDroppedPaces();
   let built: { branch: Branch; dwell: number; endS: number; endTravelM: number; capped: boolean } | null = null;
   for (const dwell of BUILD_DWELLS_S) {
     const wb = mark();
     const watch = BENCH && tryLog ? { overAtS: null as number | null, stepsAt: 0 } : undefined;
+    const t0 = chosen.branch.run.s.t;
+    const dropAboveN = cut && dwell !== lastDwell ? ctx.couplerAllowanceN : Infinity;
+    if (chosen.branch.peakTensionN() > dropAboveN) {
+      if (BENCH && tryLog) logTry(wb, { phase: "build", label: dwell, kept: false, simS: 0, certainAfterS: 0, stepsAfterCertain: 0 });
+      continue;
+    }
     const b = chosen.branch.clone();
-    const r = buildWith(ctx, b, dwell, watch);
+    const r = buildWith(ctx, b, dwell, watch, dropAboveN);
     check();
+    if (r.over) {
+      if (BENCH && tryLog && watch) logTry(wb, { phase: "build", label: dwell, kept: false, simS: b.run.s.t - t0, certainAfterS: Math.max(0, (watch.overAtS ?? b.run.s.t) - t0), stepsAfterCertain: vehicleStepsDone() - (watch.overAtS !== null ? watch.stepsAt : wb.w) });
+      continue;
+    }
     built = { branch: b, dwell, endS: r.endS, endTravelM: b.run.s.x[b.run.lead]!, capped: r.capped };
     const within = b.peakTensionN() <= ctx.couplerAllowanceN;
     if (BENCH && tryLog && watch) {
-      const dropped = !within && dwell !== BUILD_DWELLS_S[BUILD_DWELLS_S.length - 1];
-      const t0 = chosen.branch.run.s.t;
+      const dropped = !within && dwell !== lastDwell;
       logTry(wb, { phase: "build", label: dwell, kept: !dropped, simS: b.run.s.t - t0, certainAfterS: dropped && watch.overAtS !== null ? Math.max(0, watch.overAtS - t0) : null, stepsAfterCertain: dropped ? vehicleStepsDone() - (watch.overAtS !== null ? watch.stepsAt : wb.w) : 0 });
     }
     if (within) break;
@@ -598,8 +628,11 @@ function targetSpeedMps(ctx: PlannerContext): number {
   return Math.min(vmax, 40 / 3.6);
 }
 
-/** Notch up at the given pace until the highest notch is reached or none is allowed for a while. */
-function buildWith(ctx: PlannerContext, b: Branch, dwell: number, watch?: { overAtS: number | null; stepsAt: number }): { endS: number; capped: boolean } {
+/**
+ * Notch up at the given pace until the highest notch is reached or none is allowed for a while; or stop
+ * (`over`) as soon as a coupling's tension passes `dropAboveN` (the branch's peak before the build is below it).
+ */
+function buildWith(ctx: PlannerContext, b: Branch, dwell: number, watch?: { overAtS: number | null; stepsAt: number }, dropAboveN = Infinity): { endS: number; capped: boolean; over: boolean } {
   const capped = { hit: false };
   const seg = new Int32Array(ctx.model.n);
   let lastChange = b.run.s.t;
@@ -609,6 +642,8 @@ function buildWith(ctx: PlannerContext, b: Branch, dwell: number, watch?: { over
       watch.overAtS = obs.timeS;
       watch.stepsAt = vehicleStepsDone();
     }
+    // Every tick's peak goes into the step current then, so the current step's peak covers the whole pace.
+    if (b.current.peakTensionN > dropAboveN) return { endS: b.run.s.t, capped: capped.hit, over: true };
     if (targetReached(ctx, obs)) break;
     const notch = levelOf(b);
     const { notch: next, set } = nextNotch(ctx, b, obs, obs.timeS - b.current.startS, dwell, capped, seg);
@@ -621,7 +656,7 @@ function buildWith(ctx: PlannerContext, b: Branch, dwell: number, watch?: { over
     }
     if (obs.timeS - b.steps[1]!.startS > ACCELERATE_MAX_S) break;
   }
-  return { endS: b.run.s.t, capped: capped.hit };
+  return { endS: b.run.s.t, capped: capped.hit, over: false };
 }
 
 function targetReached(ctx: PlannerContext, obs: Observation): boolean {
