@@ -5,15 +5,21 @@
  * mass search) and for a holding judgement (`judge` at depth "starts", verdict-only, at the departure's
  * largest startable mass): vehicle-steps of the tries kept against those dropped, by phase, and how far into
  * a dropped try it was certain to be dropped (with the work done after that). Figures, not assertions.
- * Run: `nice npx tsx tests/bench/rejectedTries.ts [count]`.
+ * Then before → after for the exact saving (search.ts `setCutDroppedPaces`: a build pace certain to be dropped
+ * is not run on): vehicle-steps and CPU of the own plans and of the departures' checks with their mass searches
+ * (`runJob` check with masses, as tests/bench/batch.ts), two rounds alternating which goes first, and whether
+ * every outcome's figures agree (elapsed time aside).
+ * Run: `nice npx tsx tests/bench/rejectedTries.ts [count]` (`--saving` for the before → after alone, `--tries`
+ * without it).
  */
 import { judge, planStart, startableMasses } from "../../src/core/planner/index.js";
 import { withTrailingMass } from "../../src/core/planner/startableMass.js";
-import { logSearchTries, type SearchTry } from "../../src/core/planner/search.js";
+import { logSearchTries, setCutDroppedPaces, type SearchTry } from "../../src/core/planner/search.js";
+import { vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import type { StartCase } from "../../src/core/train/types.js";
-import { runJob } from "../../src/cli/batch/jobs.js";
+import { runJob, type CheckOutcome } from "../../src/cli/batch/jobs.js";
 import { allDifferentDepartures } from "./departures.js";
 import { heading, line } from "./util.js";
 
@@ -93,9 +99,51 @@ export function measureTries(cases: readonly StartCase[], masses: readonly numbe
   return { ownMs, holdingMs, holdingPlans };
 }
 
+/** Before → after of the cut build paces: own plans and departures' checks, vehicle-steps and CPU per departure. */
+export function droppedPacesBeforeAfter(cases: readonly StartCase[], rounds = 2): void {
+  const sums = { own: [0, 0, 0, 0], check: [0, 0, 0, 0] };
+  const outcomes: Array<Map<number, string>> = [new Map(), new Map()];
+  let differ = 0;
+  for (let round = 0; round < rounds; round++) {
+    for (const on of round % 2 === 0 ? [false, true] : [true, false]) {
+      setCutDroppedPaces(on);
+      const i = on ? 1 : 0;
+      let w0 = vehicleStepsDone();
+      let t0 = cpuMs();
+      for (const c of cases) planStart(c, { skipMassSearch: true });
+      sums.own[2 * i]! += vehicleStepsDone() - w0;
+      sums.own[2 * i + 1]! += cpuMs() - t0;
+      w0 = vehicleStepsDone();
+      t0 = cpuMs();
+      for (const [k, c] of cases.entries()) {
+        const o = runJob({ kind: "check", case: c, masses: true }) as CheckOutcome;
+        const figures = JSON.stringify({ ...o, elapsedMs: 0, masses: o.masses ? { ...o.masses, elapsedMs: 0 } : null });
+        const seen = outcomes[i]!.get(k);
+        if (seen === undefined) outcomes[i]!.set(k, figures);
+        else if (seen !== figures) differ++;
+      }
+      sums.check[2 * i]! += vehicleStepsDone() - w0;
+      sums.check[2 * i + 1]! += cpuMs() - t0;
+    }
+  }
+  setCutDroppedPaces(true);
+  for (const [k, figures] of outcomes[0]!) if (outcomes[1]!.get(k) !== figures) differ++;
+  const per = rounds * cases.length;
+  const M = (x: number) => (x / per / 1e6).toFixed(3);
+  const ms = (x: number) => (x / per).toFixed(0);
+  heading(`Build paces certain to be dropped, run to their end → cut (first ${cases.length} departures, ${rounds} rounds, in process, one thread)`);
+  line("own plans: vehicle-steps per departure", `${M(sums.own[0]!)} → ${M(sums.own[2]!)} M`, `CPU ${ms(sums.own[1]!)} → ${ms(sums.own[3]!)} ms`);
+  line("checks with mass searches: vehicle-steps", `${M(sums.check[0]!)} → ${M(sums.check[2]!)} M`, `CPU ${ms(sums.check[1]!)} → ${ms(sums.check[3]!)} ms; ${((100 * (sums.check[0]! - sums.check[2]!)) / Math.max(1, sums.check[0]!)).toFixed(2)} % less work`);
+  line("outcomes with other figures", `${differ}`, "of every check, both ways and every round (elapsed time aside)");
+}
+
 if (import.meta.url === `file://${process.argv[1]}`) {
-  const n = Number(process.argv[2] ?? 40);
+  const n = Number(process.argv.find((a, i) => i >= 2 && /^\d+$/.test(a)) ?? 40);
   const cases = departureCases(n);
+  if (process.argv.includes("--saving")) {
+    droppedPacesBeforeAfter(cases);
+    process.exit(0);
+  }
   const masses = largestStartable(cases);
   const own: SearchTry[] = [];
   const holding: SearchTry[] = [];
@@ -107,9 +155,29 @@ if (import.meta.url === `file://${process.argv[1]}`) {
   const checks: SearchTry[] = [];
   logSearchTries(checks, cpuMs);
   const t0 = cpuMs();
-  for (const c of cases) runJob({ kind: "check", case: c, masses: true });
+  // Preparings that end in the state of an earlier one in the same check (the same train on another rail).
+  let prepares = 0;
+  let repeated = 0;
+  let repeatedSteps = 0;
+  let repeatedMs = 0;
+  for (const c of cases) {
+    const from = checks.length;
+    runJob({ kind: "check", case: c, masses: true });
+    const seen = new Set<string>();
+    for (const t of checks.slice(from)) {
+      if (t.phase !== "prepare" || !t.digest) continue;
+      prepares++;
+      if (seen.has(t.digest)) {
+        repeated++;
+        repeatedSteps += t.vehicleSteps;
+        repeatedMs += t.ms;
+      } else seen.add(t.digest);
+    }
+  }
   const checkMs = cpuMs() - t0;
   logSearchTries(null);
   summarise(`Departures' checks with their mass searches (runJob check, masses)`, checks, n);
   line("CPU", `${(checkMs / n).toFixed(0)} ms per departure`);
+  line("preparings ending as an earlier one of the check", `${repeated} of ${prepares}`, `${(repeatedSteps / 1e6).toFixed(2)} M vehicle-steps, ${repeatedMs.toFixed(0)} ms CPU (a share of them could be cloned instead)`);
+  if (!process.argv.includes("--tries")) droppedPacesBeforeAfter(cases);
 }

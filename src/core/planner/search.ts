@@ -152,6 +152,8 @@ export interface SearchTry {
   /** Time it took by the logger's clock, ms; a stretch try's outcome. */
   ms: number;
   outcome?: StretchOutcome;
+  /** The preparing: a digest of the run's state at its end (two preparings ending in the same state share it). */
+  digest?: string;
 }
 
 let tryLog: SearchTry[] | null = null;
@@ -248,7 +250,7 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
     if (graduated && obs.allMoving) break;
   }
   prep.current.trigger = graduated && prep.run.lastVehicleMovesS !== null ? "moved" : "time";
-  if (BENCH && tryLog) logTry(w0, { phase: "prepare", label: 0, kept: true, simS: prep.run.s.t, certainAfterS: null, stepsAfterCertain: 0 });
+  if (BENCH && tryLog) logTry(w0, { phase: "prepare", label: 0, kept: true, simS: prep.run.s.t, certainAfterS: null, stepsAfterCertain: 0, digest: stateDigest(prep.run) });
   check();
   opts.onProgress?.(0.2);
 
@@ -735,4 +737,18 @@ function* accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numb
   }
   if (b.current.phase === "stretch" && reachedS !== null) b.current.trigger = "target";
   return { reachedS, travelM, stalled, capped: capped.hit, bestSpeedMps: best, bestTailTravelM: bestTail, stoppedEarly };
+}
+
+/** A digest of a run's state (time, positions, speeds, forces, brakes, notches, efforts), for the benchmark's log. */
+function stateDigest(r: Run): string {
+  const s = r.s;
+  let h = 2166136261;
+  const mix = (a: Float64Array | Int32Array) => {
+    const u = new Uint32Array(a.buffer, a.byteOffset, a.byteLength / 4);
+    for (let i = 0; i < u.length; i++) h = Math.imul(h ^ u[i]!, 16777619);
+  };
+  mix(Float64Array.of(s.t));
+  for (const a of [s.x, s.v, s.acc, s.couplerF, s.gearF, s.brakeN, s.effortN, s.targetN, s.peakTensionN, s.peakCompressionN]) mix(a);
+  mix(s.notch);
+  return `${r.m.n}:${(h >>> 0).toString(16)}`;
 }
