@@ -130,8 +130,8 @@ function searchOf(c: StartCase): Omit<GuidedSearch, "startKg" | "holdsKg" | "fai
  * so when a plan at its lower end holds, that one plan settles the answer (the dynamics only verify it); when
  * it fails, the search goes on below it, guided by the margin.
  */
-function canonicalMass(c: StartCase, at: (m: number) => MassJudgement, atLeastKg: number, probe: Bracket, guide: ((m: number) => MassJudgement) | null = null): Bracket {
-  const ok = (m: number): boolean => at(m).holds;
+function canonicalMass(c: StartCase, at: (m: number, why: JudgementReason) => MassJudgement, atLeastKg: number, probe: Bracket, guide: ((m: number) => MassJudgement) | null = null): Bracket {
+  const ok = (m: number, why: JudgementReason): boolean => at(m, why).holds;
   const probeKg = probe.lo;
   const s = searchOf(c);
   const { floorKg, ceilingKg: ceiling } = s;
@@ -140,7 +140,7 @@ function canonicalMass(c: StartCase, at: (m: number) => MassJudgement, atLeastKg
   // A mass known to fail (none yet).
   let failing = false;
   if (probeKg > Math.max(lo, floorKg) && probeKg < hi) {
-    if (ok(probeKg)) {
+    if (ok(probeKg, "probe")) {
       lo = probeKg;
       // Just above the probe the quasi-static limits already rule the verdict out: no plan can bring it back.
       if (probe.hi !== null && probe.hi > lo && probe.hi < hi) {
@@ -155,14 +155,14 @@ function canonicalMass(c: StartCase, at: (m: number) => MassJudgement, atLeastKg
   // No quasi-static limit below the ceiling (a falling grade: the brakes hold any load): the ceiling itself
   // is the likeliest answer, and one plan there settles it instead of a plan at every doubling.
   if (!failing && probeKg >= ceiling && lo < ceiling) {
-    if (ok(ceiling)) return { lo: ceiling, hi: null };
+    if (ok(ceiling, "ceiling")) return { lo: ceiling, hi: null };
     hi = ceiling;
     failing = true;
   }
   // Nothing known to hold or fail yet (the quasi-static limits rule out even the lightest train, or set no
   // probe): the floor decides (quasi-statically, when they rule it out: no plan).
   if (lo < floorKg && !failing) {
-    if (!ok(floorKg)) return { lo: 0, hi: floorKg };
+    if (!ok(floorKg, "floor")) return { lo: 0, hi: floorKg };
     lo = floorKg;
   }
   // The rest follows the margin (guidedBracket.ts): from what holds (when anything is known to) and what
@@ -182,19 +182,20 @@ const MAX_STEPS_OUT = 4;
  * has the same guarantee as without a guide: a mass the full model holds, one within the tolerance above it
  * that it fails.
  */
-function guidedWithGuide(at: (m: number) => MassJudgement, guide: ((m: number) => MassJudgement) | null, s: GuidedSearch): Bracket {
+function guidedWithGuide(at: (m: number, why: JudgementReason) => MassJudgement, guide: ((m: number) => MassJudgement) | null, s: GuidedSearch): Bracket {
   let lo = s.holdsKg ?? 0;
   let hi = s.failsKg ?? null;
   const width = (m: number) => Math.min(s.toleranceKg, Math.max(s.minToleranceKg, s.relativeTolerance * m));
   const settled = () => lo > 0 && hi !== null && hi - lo <= width(lo);
-  if (guide === null || settled()) return guidedLargestMass(at, s);
+  const bisecting = (m: number) => at(m, "search");
+  if (guide === null || settled()) return guidedLargestMass(bisecting, s);
   const g = guidedLargestMass(guide, s);
   // A guide that finds no mass holding above the floor says nothing the full search can start from (near the
   // floor the verdict of a near-empty train is not a guide to a loaded one's): the full search alone.
-  if (!(g.lo > s.floorKg)) return guidedLargestMass(at, s);
+  if (!(g.lo > s.floorKg)) return guidedLargestMass(bisecting, s);
   const inside = (m: number | null): m is number => m !== null && m >= s.floorKg && m <= s.ceilingKg && m > lo && (hi === null || m < hi);
-  const judged = (m: number): boolean => {
-    const holds = at(m).holds;
+  const judged = (m: number, why: JudgementReason): boolean => {
+    const holds = at(m, why).holds;
     if (holds) lo = m;
     else hi = m;
     return holds;
@@ -203,8 +204,8 @@ function guidedWithGuide(at: (m: number) => MassJudgement, guide: ((m: number) =
   // at the guide's holding end), or nowhere. The failing end first: when the full model holds there, the
   // holding end below it needs no plan.
   let up: boolean | null = null;
-  if (inside(g.hi) && judged(g.hi)) up = true;
-  else if (inside(g.lo)) up = judged(g.lo) ? null : false;
+  if (inside(g.hi) && judged(g.hi, "guide")) up = true;
+  else if (inside(g.lo)) up = judged(g.lo, "guide") ? null : false;
   // The full model's limit lies beyond the guide's bracket (the guide was a little off): it is near, so step
   // out from it by the tolerance (twice; a guide is most often off by a width or two), then doubling, rather
   // than searching the whole bracket the probe left.
@@ -212,9 +213,9 @@ function guidedWithGuide(at: (m: number) => MassJudgement, guide: ((m: number) =
   for (let k = 0; up !== null && !settled() && k < MAX_STEPS_OUT; k++, step *= k >= 2 ? 2 : 1) {
     const m = up ? lo + step : (hi as number) - step;
     if (!inside(m)) break;
-    if (judged(m) !== up) break;
+    if (judged(m, "step-out") !== up) break;
   }
-  return guidedLargestMass(at, { ...s, holdsKg: lo, failsKg: hi, startKg: hi ?? (lo > 0 ? lo : s.startKg) });
+  return guidedLargestMass(bisecting, { ...s, holdsKg: lo, failsKg: hi, startKg: hi ?? (lo > 0 ? lo : s.startKg) });
 }
 
 /**
@@ -225,7 +226,7 @@ function guidedWithGuide(at: (m: number) => MassJudgement, guide: ((m: number) =
  * own when it holds, or a largest mass the figure may not fall below; 0: none) and `failsKg` one known to fail
  * (the train's own when it fails; null: none). `seen` holds every verdict the searches have found.
  */
-function reconciled(c: StartCase, at: (m: number) => MassJudgement, b: Bracket, lowKg: number, failsKg: number | null, seen: ReadonlyMap<number, boolean>): number {
+function reconciled(c: StartCase, at: (m: number, why: JudgementReason) => MassJudgement, b: Bracket, lowKg: number, failsKg: number | null, seen: ReadonlyMap<number, boolean>): number {
   if (b.lo >= lowKg && (failsKg === null || b.lo < failsKg)) return b.lo;
   let holds = lowKg;
   let fails = failsKg;
@@ -235,7 +236,7 @@ function reconciled(c: StartCase, at: (m: number) => MassJudgement, b: Bracket, 
   for (const [m, h] of seen) {
     if (!h && m > holds && (fails === null || m < fails)) fails = m;
   }
-  return guidedLargestMass(at, { ...searchOf(c), holdsKg: holds, failsKg: fails, startKg: fails ?? holds }).lo;
+  return guidedLargestMass((m) => at(m, "reconcile"), { ...searchOf(c), holdsKg: holds, failsKg: fails, startKg: fails ?? holds }).lo;
 }
 
 /**
@@ -321,8 +322,15 @@ export interface StartableMassOptions {
    */
   lumpedGuide?: boolean;
   /** Told of every judgement the searches make (for benchmarks and tests: how much work a search did). */
-  onJudgement?: (need: "starts" | "goes", massKg: number, holds: boolean, score: number) => void;
+  onJudgement?: (need: "starts" | "goes", massKg: number, holds: boolean, score: number, why: JudgementReason) => void;
 }
+
+/**
+ * Why a search judged a mass: the quasi-static probe, the ceiling or the floor (canonicalMass), an end of the
+ * lumped guide's bracket or a step out from it, the margin-guided search, the train's own mass, or the search
+ * that reconciles the figure with the train's own verdict.
+ */
+export type JudgementReason = "probe" | "ceiling" | "floor" | "guide" | "step-out" | "search" | "own" | "reconcile";
 
 /** See `StartableMassOptions.verdictAt`. */
 export type MassVerdictLookup = (need: "starts" | "goes", massKg: number) => boolean | undefined;
@@ -361,23 +369,23 @@ function remember(seen: Map<number, boolean>, m: number, j: MassJudgement): Mass
 }
 
 function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses {
-  const told = (need: "starts" | "goes", m: number, j: MassJudgement): MassJudgement => {
-    opts.onJudgement?.(need, m, j.holds, j.score);
+  const told = (need: "starts" | "goes", m: number, j: MassJudgement, why: JudgementReason): MassJudgement => {
+    opts.onJudgement?.(need, m, j.holds, j.score, why);
     return j;
   };
   const stop = opts.shouldStop;
   const known = opts.verdictAt;
   const verdictOnly = opts.fullPlans !== true;
   // Each judgement gives the verdict (exactly startsAt's / goesAt's) and the margin the search follows.
-  const startsJ = (m: number): MassJudgement => {
+  const startsJ = (m: number, why: JudgementReason): MassJudgement => {
     const v = known?.("starts", m);
-    if (v !== undefined) return told("starts", m, { holds: v, score: Number.NaN });
+    if (v !== undefined) return told("starts", m, { holds: v, score: Number.NaN }, why);
     const d = judge(withTrailingMass(c, m), { depth: "starts", stopWhenFailed: verdictOnly, ...(stop ? { shouldStop: stop } : {}) });
-    return told("starts", m, { holds: d.verdict === "starts", score: d.margin });
+    return told("starts", m, { holds: d.verdict === "starts", score: d.margin }, why);
   };
-  const goesJ = (m: number): MassJudgement => {
+  const goesJ = (m: number, why: JudgementReason): MassJudgement => {
     const v = known?.("goes", m);
-    return told("goes", m, v !== undefined ? { holds: v, score: Number.NaN } : goesJudgement(withTrailingMass(c, m), stop, { stopWhenFailed: verdictOnly }));
+    return told("goes", m, v !== undefined ? { holds: v, score: Number.NaN } : goesJudgement(withTrailingMass(c, m), stop, { stopWhenFailed: verdictOnly }), why);
   };
   // The same judgements on lumped wagons, to guide a search the quasi-static probe did not settle.
   const lump = opts.lumpedGuide === false ? 1 : guideLumpOf(c);
@@ -395,15 +403,15 @@ function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses
   // Every verdict found, by mass (the reconciling search starts from the nearest ones).
   const seenStarts = new Map<number, boolean>();
   const seenGoes = new Map<number, boolean>();
-  const startsAt = (m: number): MassJudgement => remember(seenStarts, m, startsJ(m));
-  const goesAt = (m: number): MassJudgement => remember(seenGoes, m, goesJ(m));
+  const startsAt = (m: number, why: JudgementReason): MassJudgement => remember(seenStarts, m, startsJ(m, why));
+  const goesAt = (m: number, why: JudgementReason): MassJudgement => remember(seenGoes, m, goesJ(m, why));
   const makeUp = opts.ofMakeUp === true;
   const ceilingKg = massCeilingKg(c);
   const starts = canonicalMass(c, startsAt, 0, quasiStaticMassKg(c, "within"), startsGuide);
   let startsKg = starts.lo;
   let ownStarts = false;
   if (!makeUp) {
-    ownStarts = own !== undefined ? own === "starts" : startsAt(ownKg).holds;
+    ownStarts = own !== undefined ? own === "starts" : startsAt(ownKg, "own").holds;
     seenStarts.set(ownKg, ownStarts);
     startsKg = reconciled(c, startsAt, starts, ownStarts ? ownKg : 0, ownStarts ? null : ownKg, seenStarts);
   }
@@ -414,7 +422,7 @@ function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses
   const goes = canonicalMass(c, goesAt, starts.lo, quasiStaticMassKg(c, "not-over"), goesGuide);
   let marginalKg = goes.lo;
   if (!makeUp) {
-    const ownGoes = ownStarts || (own !== undefined ? own !== "needs-assistance" : goesAt(ownKg).holds);
+    const ownGoes = ownStarts || (own !== undefined ? own !== "needs-assistance" : goesAt(ownKg, "own").holds);
     seenGoes.set(ownKg, ownGoes);
     marginalKg = reconciled(c, goesAt, goes, Math.max(startsKg, ownGoes ? ownKg : 0), ownGoes ? null : ownKg, seenGoes);
   }
