@@ -472,6 +472,26 @@ export function policyNotch(
   return up;
 }
 
+/**
+ * `fallsShort` skips the rail's risk at each speed when the risk at the target already exceeds the quantile
+ * (true, the default): the risk ahead at any speed below the target is at least that one, so only the notch's
+ * surplus decides — the same answer, without a slip risk per unit and speed. A train creeping at its limit asks
+ * this at every control interval (a mass search's holding judgements, its lumped guide). False: every speed's
+ * risk worked out, as before (the exactness test, the benchmark).
+ */
+let topRiskDecides = true;
+
+export function setFallsShortTopRisk(on: boolean): void {
+  topRiskDecides = on;
+}
+
+let topRiskWalks = 0;
+
+/** The walks `fallsShort` made without the risk at each speed, since the process started (benchmarks, tests). */
+export function fallsShortTopRiskWalks(): number {
+  return topRiskWalks;
+}
+
 /** The least progress the accelerate phase waits for before it calls the target out of reach: 0.05 m/s a minute. */
 const PROGRESS_MPS2 = 0.05 / 60;
 
@@ -499,12 +519,20 @@ function fallsShort(ctx: PlannerContext, notch: NotchSetting, up: NotchSetting, 
   // notchRiskAhead(ctx, up, s) at each speed: its parts at the target and at the power limit's corners are the
   // same at every speed below the target, taken once.
   const ahead = riskAheadParts(ctx, up, top);
-  while (s < top && riskAheadAt(ctx, up, s, ahead) > ctx.quantile) {
+  const overAtTop = (!BENCH || topRiskDecides) && ahead.topRisk > ctx.quantile;
+  // Then the walk ends at the target itself (near a target of 1 m/s or more, speed and target are within a
+  // factor of two, so the rest of the way is exact and the last step lands on the target) and the time only
+  // grows on the way (the surplus stays positive, else it falls short at once): once the time is behind the
+  // slowest start's at the target, the answer at the end is "falls short" already.
+  const behindEarly = overAtTop && top >= 1 && ctx.aMinMps2 > 0;
+  if (BENCH && overAtTop) topRiskWalks++;
+  while (s < top && (overAtTop || riskAheadAt(ctx, up, s, ahead) > ctx.quantile)) {
     const ds = Math.min(0.05, top - s);
     const surplusN = notchDeliveredN(ctx, notch, s) - rigidResistanceAt(resistance, s);
     if (surplusN < leastN) return true;
     timeS += (ds * ctx.effMassKg) / surplusN;
     s += ds;
+    if (behindEarly && (sincePowerS + timeS) * ctx.aMinMps2 > top + 1e-9) return true;
   }
   return (sincePowerS + timeS) * ctx.aMinMps2 > s + 1e-9;
 }
