@@ -4,7 +4,8 @@
  * ratios within one run.
  *   --quick   skip the slow comparison with the general-purpose integrator; 100 all-different departures
  *             instead of 500 (the figure is scaled); the assistance search on 24 departures instead of 60; the pool's
- *             order of work on 40 departures instead of 100
+ *             order of work on 40 departures instead of 100; the mass searches' tail and the floor of a verified
+ *             departure on 30 departures instead of 100
  */
 import { availableParallelism, loadavg } from "node:os";
 import { benchDynamics } from "./dynamics.js";
@@ -13,7 +14,7 @@ import { run as benchStartup } from "./startup.js";
 import { run as benchBatch } from "./batch.js";
 import { benchBatchPool } from "./batchPool.js";
 import { benchAssistance } from "./assistance.js";
-import { benchMassJudgements } from "./massJudgements.js";
+import { benchMassJudgements, benchVerifiedFloor } from "./massJudgements.js";
 import { run as benchBundle } from "./bundle.js";
 import { run as benchFirstPlan } from "./firstPlan.js";
 import { run as benchNotesLibrary } from "./notesLibrary.js";
@@ -29,6 +30,7 @@ benchStartup();
 benchBatch();
 benchBatchPool(quick ? 40 : 100);
 benchMassJudgements(quick ? 16 : 40);
+benchVerifiedFloor(quick ? 30 : 100);
 benchAssistance(quick ? 24 : 60);
 await benchBundle();
 await benchFirstPlan();
