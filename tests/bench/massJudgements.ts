@@ -85,16 +85,18 @@ export function benchMassJudgements(n: number): void {
  *  - both mass searches (own verdict given, as `taut check` runs them) with the look-ahead's exact short cuts
  *    off and on (search.ts `setFallsShortTopRisk`; alternating which goes first): CPU and judgements, and
  *    whether any answer or judgement differs;
- *  - the judgements by why they were asked (startableMass.ts `JudgementReason`), and every judgement of the
- *    departures that judge 4 masses or more (a judgement's CPU includes the lumped guide's search before it);
+ *  - the judgements by why they were asked (startableMass.ts `JudgementReason`), the lumped guide's own
+ *    judgements apart, and every judgement of the departures that judge 4 masses or more;
  *  - the floor: a departure's own plan (as the check makes it) plus one holding plan at each distinct answer
  *    mass (above 0) — what no search can go under while every answer is a full-model plan — against one plan
  *    of the same train (verdict and verified plan, the ratio's denominator), next to the measured Σ
  *    departures (check, assistance, both masses: `runJob`) ÷ Σ plans.
- * What it showed on the first 100 (2 shared cores): the searches 23.9 → 23.1 s with the short cuts, 207
- * judgements either way and none different; 147 of them are the probe holding (the answer itself); the six
- * departures judging 4 or more masses 6.6 s; the floor 2.78× one plan against 4.39× measured, so no search
- * that verifies every answer with a full plan brings a departure to 1.5× a plan; 41 % need assistance.
+ * What it showed on the first 100 (2 shared cores, whose load moves a 25 s sum by ±10 %): the searches
+ * 23.9 → 23.1 s with the short cuts in one run, 26.7 → 26.7 s in another; departure 85 alone 3.3 → 2.2 s,
+ * its lumped guide 1.7 → 0.8 s; 207 full-model judgements either way and none different, 147 of them the
+ * probe holding (the answer itself); the six departures judging 4 or more masses 6.6–7.9 s; the floor 2.78×
+ * one plan against 4.3–4.4× measured, so no search that verifies every answer with a full plan brings a
+ * departure to 1.5× a plan; 41 % need assistance.
  * Run alone: npx tsx tests/bench/massJudgements.ts [n]
  */
 export function benchVerifiedFloor(n: number): void {
@@ -114,7 +116,7 @@ export function benchVerifiedFloor(n: number): void {
     return [v, cpuMs() - t0];
   };
   planStart(cases[0]!, { skipMassSearch: true }); // warm-up
-  const sum = { plan: 0, departure: 0, own: 0, holding: 0, before: 0, after: 0, judgedBefore: 0, judgedAfter: 0, assistOwn: 0, assistDeparture: 0 };
+  const sum = { plan: 0, departure: 0, own: 0, holding: 0, before: 0, after: 0, judgedBefore: 0, judgedAfter: 0, guideBefore: 0, guideAfter: 0, guideJudged: 0, assistOwn: 0, assistDeparture: 0 };
   let differ = 0;
   let needsAssistance = 0;
   let notHolding = 0;
@@ -139,6 +141,7 @@ export function benchVerifiedFloor(n: number): void {
     const search = (on: boolean) => {
       setFallsShortTopRisk(on);
       const judged: Array<{ need: string; massKg: number; holds: boolean; why: JudgementReason; ms: number }> = [];
+      const guide = { count: 0, ms: 0 };
       let t = cpuMs();
       const w0 = fallsShortTopRiskWalks();
       const [m, ms] = timed(() =>
@@ -149,9 +152,15 @@ export function benchVerifiedFloor(n: number): void {
             judged.push({ need, massKg, holds, why, ms: now - t });
             t = now;
           },
+          onGuideJudgement: () => {
+            const now = cpuMs();
+            guide.count++;
+            guide.ms += now - t;
+            t = now;
+          },
         }),
       );
-      return { m, ms, judged, walks: fallsShortTopRiskWalks() - w0 };
+      return { m, ms, judged, guide, walks: fallsShortTopRiskWalks() - w0 };
     };
     const [x, y] = k % 2 === 0 ? [search(false), search(true)] : [search(true), search(false)];
     const [before, after] = k % 2 === 0 ? [x, y] : [y, x];
@@ -161,6 +170,9 @@ export function benchVerifiedFloor(n: number): void {
     sum.after += after.ms;
     sum.judgedBefore += before.judged.length;
     sum.judgedAfter += after.judged.length;
+    sum.guideBefore += before.guide.ms;
+    sum.guideAfter += after.guide.ms;
+    sum.guideJudged += after.guide.count;
     const strip = (j: typeof after.judged) => j.map(({ ms: _ms, ...rest }) => rest);
     if (JSON.stringify(before.m) !== JSON.stringify(after.m) || JSON.stringify(strip(before.judged)) !== JSON.stringify(strip(after.judged))) differ++;
     for (const j of after.judged) {
@@ -174,7 +186,8 @@ export function benchVerifiedFloor(n: number): void {
       tailCount++;
       tailMs += after.ms;
       const js = after.judged.map((j) => `${j.need} ${(j.massKg / 1000).toFixed(1)} t ${j.holds ? "holds" : "fails"} (${j.why}, ${j.ms.toFixed(0)} ms)`);
-      tail.push(`departure ${k + 1} (${c.train.wagons} wagons, ${c.conditions.rail}), ${(after.ms / 1000).toFixed(2)} s: ${js.join("; ")}`);
+      const g = after.guide.count ? `; lumped guide ${after.guide.count} judgements, ${before.guide.ms.toFixed(0)} → ${after.guide.ms.toFixed(0)} ms` : "";
+      tail.push(`departure ${k + 1} (${c.train.wagons} wagons, ${c.conditions.rail}), ${(before.ms / 1000).toFixed(2)} → ${(after.ms / 1000).toFixed(2)} s${g}: ${js.join("; ")}`);
     }
     // One holding plan at each distinct answer mass, nothing shared (a fresh memo each).
     const answers = [...new Set([after.m.startsKg, after.m.marginalKg])].filter((m) => m > 0);
@@ -195,7 +208,12 @@ export function benchVerifiedFloor(n: number): void {
     `${(sum.after / sum.before).toFixed(2)}×; judgements ${sum.judgedBefore} → ${sum.judgedAfter}; ${differ} of ${n} departures with another answer or judgement; ${walks} short-cut walks`,
   );
   const byReason = [...reasons].sort((a, b) => b[1].ms - a[1].ms).map(([key, r]) => `${key} ${r.count} (${s(r.ms)})`);
-  line("judgements by why they were asked", `${sum.judgedAfter}`, byReason.join(", "));
+  line("full-model judgements by why they were asked", `${sum.judgedAfter}`, byReason.join(", "));
+  line(
+    "lumped guide (judgements on a dozen bodies), short cuts off → on",
+    `${s(sum.guideBefore)} → ${s(sum.guideAfter)}`,
+    `${sum.guideJudged} judgements; not in the full-model judgements' CPU above`,
+  );
   line("departures judging 4 masses or more", `${tailCount}`, `${s(tailMs)} of the searches' ${s(sum.after)}`);
   for (const t of tail) console.log(`    ${t}`);
   line("Σ departures ÷ Σ plans (measured)", `${(sum.departure / sum.plan).toFixed(2)}×`, `${s(sum.departure)} ÷ ${s(sum.plan)}; a plan: verdict and verified plan`);

@@ -323,6 +323,8 @@ export interface StartableMassOptions {
   lumpedGuide?: boolean;
   /** Told of every judgement the searches make (for benchmarks and tests: how much work a search did). */
   onJudgement?: (need: "starts" | "goes", massKg: number, holds: boolean, score: number, why: JudgementReason) => void;
+  /** Told of every judgement on lumped wagons the guide makes (not a full-model judgement; for benchmarks). */
+  onGuideJudgement?: (need: "starts" | "goes", massKg: number, holds: boolean) => void;
 }
 
 /**
@@ -394,10 +396,20 @@ function searchMasses(c: StartCase, opts: StartableMassOptions): StartableMasses
       ? (m: number): MassJudgement =>
           withLumpedWagons(lump, () => {
             const d = judge(withTrailingMass(c, m), { depth: "starts", stopWhenFailed: verdictOnly, ...(stop ? { shouldStop: stop } : {}) });
-            return { holds: d.verdict === "starts", score: d.margin };
+            const holds = d.verdict === "starts";
+            opts.onGuideJudgement?.("starts", m, holds);
+            return { holds, score: d.margin };
           })
       : null;
-  const goesGuide = lump > 1 ? (m: number): MassJudgement => withLumpedWagons(lump, () => goesJudgement(withTrailingMass(c, m), stop, { stopWhenFailed: verdictOnly })) : null;
+  const goesGuide =
+    lump > 1
+      ? (m: number): MassJudgement =>
+          withLumpedWagons(lump, () => {
+            const j = goesJudgement(withTrailingMass(c, m), stop, { stopWhenFailed: verdictOnly });
+            opts.onGuideJudgement?.("goes", m, j.holds);
+            return j;
+          })
+      : null;
   const own = opts.own;
   const ownKg = c.train.trailingMassKg;
   // Every verdict found, by mass (the reconciling search starts from the nearest ones).
