@@ -1,9 +1,12 @@
 /** Plain-text tables for the terminal: columns padded, numbers right-aligned. */
 import { cliTr } from "./lang.js";
+import { cli } from "../i18n/en/cli.js";
 
 export function textTable(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<string>>): string {
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
-  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+<]?[\d.,]+\+?%?( @[\d.,]+)?$|^—$|^none$/.test(r[i] ?? "")));
+  // "none" (no mass starts) in this run's language stands in a column of numbers: "nincs", "keine" too.
+  const none = new Set(["—", "none", cliTr().ns(cli)("none")]);
+  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+<]?[\d.,]+\+?%?( @[\d.,]+)?$/.test(r[i] ?? "") || none.has(r[i] ?? "")));
   const line = (cells: readonly string[]) =>
     cells.map((c, i) => (isNum[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join("  ").trimEnd();
   return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");

@@ -7,10 +7,11 @@
  */
 import { readdirSync, readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
-import { describe, expect, it } from "vitest";
+import { afterEach, describe, expect, it } from "vitest";
 import { planStart, type PlanResult, type StartCase } from "../../src/core/index.js";
 import { renderPlan } from "../../src/cli/render/plan.js";
 import { marginNum, textTable } from "../../src/cli/table.js";
+import { setCliLanguage } from "../../src/cli/lang.js";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { planReport } from "../../src/profiles/report.js";
@@ -71,4 +72,19 @@ describe("the readable plan, as a driver reads it", () => {
       for (const l of d.p.limits.filter((x) => x.margin >= 99)) expect(d.text).toMatch(new RegExp(`\\n {2}${l.name.replace("-", " ")}\\s+99\\+ {2}`));
     }
   });
+});
+
+describe("a column of masses keeps its figures right-aligned in every language", () => {
+  afterEach(() => setCliLanguage("en"));
+  // The load table's "none" (not even a light train starts) in English, Hungarian and German: a column holding it
+  // fell back to left alignment in hu/de ("nincs", "keine"), so 683 stood under 2063's first digits.
+  for (const [lang, none] of [["en", "none"], ["hu", "nincs"], ["de", "keine"]] as const) {
+    it(lang, () => {
+      setCliLanguage(lang);
+      const rows = textTable(["rail", "no sand"], [["dry", "2063"], ["damp", "683"], ["leaves", none]]).split("\n").slice(2);
+      const ends = rows.map((r) => r.length);
+      expect(new Set(ends).size, rows.join("\n")).toBe(1);
+      expect(rows[1]!.endsWith(" 683")).toBe(true);
+    });
+  }
 });
