@@ -4,7 +4,9 @@
  * binding limit); and every figure with its basis, rounded as `taut plan` rounds it.
  */
 import { fireEvent, render, screen, waitFor } from "@solidjs/testing-library";
-import { describe, expect, it } from "vitest";
+import { readFileSync } from "node:fs";
+import { join } from "node:path";
+import { describe, expect, it, onTestFinished } from "vitest";
 import { PALETTES } from "../../src/app/charts/palette.js";
 import { effortChart, totalAdhesionN } from "../../src/app/charts/effortSpeed.js";
 import { CabStepsView } from "../../src/app/screens/CabSteps/View.js";
@@ -173,5 +175,41 @@ describe("figures with their basis, as the command line rounds them", () => {
       const median = totalAdhesionN(c, c.conditions.rail, st.adhesionUseAt.speedMps, 0.5);
       expect(st.adhesionUseAt.tractiveEffortN / median, `step ${i + 1}`).toBeCloseTo(st.adhesionUse, 3);
     });
+  });
+});
+
+describe("the margins list marks the binding limit without an alarm where it is met", () => {
+  // The app's own style sheet, so that the colour a row is drawn in is the one a driver sees (day theme).
+  const sheet = readFileSync(join(process.cwd(), "src/app/styles.css"), "utf8");
+  function rows(p: PlanResult) {
+    const style = document.createElement("style");
+    style.textContent = sheet;
+    document.head.append(style);
+    onTestFinished(() => style.remove());
+    render(() => (
+      <ResultView status="done" progress={1} result={p} current error={null} startCase={demoCase()} units="metric" palette={PALETTES.day} illustrative={false} onOpenCab={() => undefined} onRetry={() => undefined} />
+    ));
+    return [...document.querySelectorAll(".margins li")].map((li) => ({ name: li.querySelector(".margin-name")!.textContent, limiting: li.classList.contains("limiting"), short: li.classList.contains("short"), colour: getComputedStyle(li.querySelector(".margin-name")!).color, weight: getComputedStyle(li.querySelector(".margin-name")!).fontWeight }));
+  }
+
+  it("a train that starts: its binding limit bold, not red (a red × 1.40 beside a green Starts read as an alarm)", () => {
+    const p = planStart(demoCase(), { skipMassSearch: true });
+    expect(p.verdict).toBe("starts");
+    const r = rows(p);
+    expect(r.filter((x) => x.limiting)).toHaveLength(1);
+    const [binding, ...others] = [...r.filter((x) => x.limiting), ...r.filter((x) => !x.limiting)];
+    // Bold, in the colour of the other rows (jsdom gives the cascaded value: the theme variable's name).
+    expect(binding!.weight).toBe("700");
+    expect(binding!.colour).not.toBe("var(--alert)");
+    for (const o of others) expect(binding!.colour).toBe(o.colour);
+  });
+
+  it("a train that needs assistance: its binding limit, below × 1, red as its bar", () => {
+    const base = planStart(demoCase(), { skipMassSearch: true });
+    const p: PlanResult = { ...base, verdict: "needs-assistance", margin: 0.8, margins: { ...base.margins, adhesion: 0.8 }, binding: "adhesion" };
+    const r = rows(p);
+    expect(r.filter((x) => x.short).map((x) => x.name)).toEqual(["Adhesion"]);
+    expect(r.find((x) => x.limiting)!.colour).toBe("var(--alert)");
+    expect(r.filter((x) => !x.limiting).map((x) => x.colour)).not.toContain("var(--alert)");
   });
 });

@@ -176,7 +176,10 @@ export function ResultView(props: ResultViewProps): JSX.Element {
       </Show>
 
       <Show when={shownResult()} fallback={<Show when={!invalid()}>{<p class="placeholder-text">{t("planningDots")}</p>}</Show>}>
-        {(res) => (
+        {(res) => {
+          /** This margin is the one the plan's own margin is of (the binding limit's). */
+          const binds = (k: Reason) => res().limits.find((l) => l.name === res().binding)?.reason === k;
+          return (
           <>
             <div ref={setBanner}>
               <VerdictBanner
@@ -240,7 +243,9 @@ export function ResultView(props: ResultViewProps): JSX.Element {
               <ul class="margins">
                 <For each={(["adhesion", "power", "coupler", "distance", "brake"] as Reason[]).filter((k) => k !== "brake" || res().margins.brake < 99)}>
                   {(k) => (
-                    <li classList={{ limiting: res().limits.find((l) => l.name === res().binding)?.reason === k }}>
+                    // The limit that binds is marked bold; it is red only when it is not met (below × 1, as its bar):
+                    // a red "× 1.40" beside a green "Starts" read as an alarm where there is none.
+                    <li classList={{ limiting: binds(k), short: binds(k) && res().margins[k] < 1 }}>
                       <span class="margin-name">{MARGIN_WORD[k]()}</span>
                       <span class="margin-bar" aria-hidden="true">
                         <span style={{ width: `${Math.min(100, (res().margins[k] / 2) * 100)}%` }} classList={{ under: res().margins[k] < 1 }} />
@@ -332,7 +337,8 @@ export function ResultView(props: ResultViewProps): JSX.Element {
               empty={t("chartEffortEmpty")}
             />
           </>
-        )}
+          );
+        }}
       </Show>
 
       <Show when={shownResult()}>
