@@ -191,12 +191,14 @@ function StartsAlready(props: { answer: AssistanceAnswer; units: UnitSystem }): 
         <VerdictIcon verdict="starts" size={32} /> {t("startsAlready")}
       </h2>
       <p>
-        {t("startsAlreadyLine", {
-          margin: margin(b().margin),
-          limit: limitWord(b().binding),
-          force: show("force", b().peakCouplerForceN, props.units),
-          target: b().timeToTargetS !== null ? t("targetAfter", { time: duration(b().timeToTargetS!) }) : "",
-        })}
+        <Figures
+          text={t("startsAlreadyLine", {
+            margin: margin(b().margin),
+            limit: limitWord(b().binding),
+            force: show("force", b().peakCouplerForceN, props.units),
+            target: b().timeToTargetS !== null ? t("targetAfter", { time: duration(b().timeToTargetS!) }) : "",
+          })}
+        />
       </p>
     </section>
   );

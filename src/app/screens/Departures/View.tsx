@@ -21,6 +21,7 @@ import { divideLine, limitWord, optionHeadline } from "../shared/words.js";
 import type { RunState } from "./createDeparturesRun.js";
 import type { DepartureRow, DeparturesSummary } from "./rows.js";
 import { rowErrorText } from "./rowErrors.js";
+import { Figures } from "../../components/Figures.js";
 
 const t = tr.ns(departures);
 const tc = tr.ns(compact);
@@ -299,7 +300,7 @@ function Row(props: { row: DepartureRow; units: UnitSystem; onOpen?: (row: Depar
     <tr classList={{ pending: !a() }} data-row={x().id} data-verdict={a()?.verdict ?? "pending"}>
       <td data-label={t("colDeparture")} class="dep">
         <span class="row-id">{x().id}</span>
-        <span class="row-sub">{sub()}</span>
+        <span class="row-sub"><Figures text={sub()} /></span>
       </td>
       <td data-label={t("colVerdict")} class="verdict-td">
         <Show when={a()} fallback={<span>{t("waiting")}</span>}>

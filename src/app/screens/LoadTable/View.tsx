@@ -168,7 +168,7 @@ export function LoadTableView(props: LoadTableViewProps): JSX.Element {
                 caption={
                   <>
                     {t("tableCaption")}
-                    {props.trainMassKg !== null ? t("thisTrainMarked", { mass: show("mass", props.trainMassKg, props.units) }) : ""}
+                    {props.trainMassKg !== null ? <Figures text={t("thisTrainMarked", { mass: show("mass", props.trainMassKg, props.units) })} /> : ""}
                   </>
                 }
                 cell={cell}

@@ -286,7 +286,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
                     <Show when={limitN()}>
                       {(l) => (
                         <span class="basis" data-coupler-basis>
-                          {t("couplerBasis", { allowed: show("force", l() / factor(), props.units), limit: show("force", l(), props.units), factor: appNumber(factor(), Number.isInteger(factor() * 10) ? 1 : 2) })}
+                          <Figures text={t("couplerBasis", { allowed: show("force", l() / factor(), props.units), limit: show("force", l(), props.units), factor: appNumber(factor(), Number.isInteger(factor() * 10) ? 1 : 2) })} />
                         </span>
                       )}
                     </Show>
@@ -297,7 +297,7 @@ export function ResultView(props: ResultViewProps): JSX.Element {
                   <dd>
                     {Number.isFinite(res().maxStartableMassKg) ? showAtMost("mass", res().maxStartableMassKg, props.units) : props.massPending ? t("workingOut") : "–"}
                     <Show when={Number.isFinite(res().largestMarginalMassKg) && res().largestMarginalMassKg > res().maxStartableMassKg}>
-                      <span class="muted">{t("marginalUpTo", { mass: showAtMost("mass", res().largestMarginalMassKg, props.units) })}</span>
+                      <span class="muted"><Figures text={t("marginalUpTo", { mass: showAtMost("mass", res().largestMarginalMassKg, props.units) })} /></span>
                     </Show>
                   </dd>
                 </div>
