@@ -12,6 +12,7 @@ import { planStart, type PlanResult, type StartCase } from "../../src/core/index
 import { renderPlan } from "../../src/cli/render/plan.js";
 import { marginNum, textTable } from "../../src/cli/table.js";
 import { setCliLanguage } from "../../src/cli/lang.js";
+import { parseSequence, renderSimulation, simulateCase } from "../../src/cli/commands/simulate.js";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { planReport } from "../../src/profiles/report.js";
@@ -87,4 +88,39 @@ describe("a column of masses keeps its figures right-aligned in every language",
       expect(rows[1]!.endsWith(" 683")).toBe(true);
     });
   }
+});
+
+describe("taut simulate, read after a run that did not start", () => {
+  // The covered-goods demo on its leaf-fall rail, power taken well before the plan's moment for the locomotive
+  // brake to come off (the train brake's release along the train: about 45 s).
+  const goods = demos.find((d) => d.name === "demo-goods-cinderfield.json")!;
+  const early = simulateCase(goods.c, parseSequence("1@0,4@5,8@10", 8), {});
+  const text = renderSimulation(early);
+
+  it("the exercised run ends before the locomotive brake comes off, with a slip", () => {
+    expect(early.final.time_s).toBeLessThan(early.locoBrakeRelease_s);
+    expect(early.slipEvents.length).toBeGreaterThan(0);
+    expect(String(early.locoBrakeRelease_s)).toMatch(/\.\d{4,}/); // worked out, not given
+  });
+
+  it("gives the worked-out release to 0.1 s, as the run's other times", () => {
+    expect(text).toContain(`locomotive brake off at ${once(early.locoBrakeRelease_s, 1)} s`);
+    expect(text).not.toMatch(/brake off at \d+\.\d{2,} s/);
+    // One given on the command line reads as given.
+    expect(renderSimulation(simulateCase(goods.c, parseSequence("1@0,4@5,8@10", 8), { releaseAtS: 7.25, durationS: 8 }))).toContain("locomotive brake off at 7.25 s");
+  });
+
+  it("says the locomotive brake was still applied when the run ended, beside the slip and the stall", () => {
+    const flat = text.replace(/\s+/g, " ");
+    expect(flat).toContain(`WARNING: The locomotive brake was still applied when the run ended at ${once(early.final.time_s, 1)} s; it comes off at ${once(early.locoBrakeRelease_s, 1)} s`);
+    expect(early.warnings.some((w) => w.startsWith("The locomotive brake was still applied"))).toBe(true);
+    // A run that lasts past the release says nothing of it.
+    const late = simulateCase(goods.c, parseSequence("1@0", 8), { durationS: Math.ceil(early.locoBrakeRelease_s) + 2 });
+    expect(late.warnings.some((w) => w.includes("locomotive brake was still applied"))).toBe(false);
+  });
+
+  it("counts a slip's power cuts in words that agree with the count (1 power cut, not 1 cuts)", () => {
+    expect(text).toMatch(/\(1 power cut\)|\(\d+ power cuts\)/);
+    expect(text).not.toMatch(/\(\d+ cuts\)/);
+  });
 });

@@ -180,7 +180,7 @@ const ENGLISH = createTranslator("en", null);
  * protection cuts power again and again is not one to drive (spinning burns the rail; PRACTICE.md).
  */
 export function simulationWarnings(
-  r: Pick<SimulateReport, "slipEvents" | "slipTime_s" | "targetReached" | "lastVehicleMoves_s">,
+  r: Pick<SimulateReport, "slipEvents" | "slipTime_s" | "targetReached" | "lastVehicleMoves_s" | "locoBrakeRelease_s" | "final">,
   tr: Translator = cliTr(),
 ): string[] {
   const t = tr.ns(cliSimulate);
@@ -200,7 +200,17 @@ export function simulationWarnings(
     );
   }
   if (r.lastVehicleMoves_s === null) out.push(t("didNotStart"));
+  // A run that ends before the locomotive brake comes off was held by it throughout: say so, beside the slips.
+  if (r.final.time_s < r.locoBrakeRelease_s) out.push(t("brakeStillOn", { end: n(r.final.time_s, 1), release: releaseText(r.locoBrakeRelease_s, tr) }));
   return out;
+}
+
+/**
+ * When the locomotive brake comes off: a time the user gave (--release-at) as given, the plan's own moment
+ * (worked out, 45.06666666666667 s) to 0.1 s as the other times of the run.
+ */
+function releaseText(s: number, tr: Translator = cliTr()): string {
+  return (String(s).split(".")[1] ?? "").length > 3 ? tr.num(s, 1) : String(s).replace(".", tr.num(0.5, 1).charAt(1));
 }
 
 export function renderSimulation(r: SimulateReport): string {
@@ -218,7 +228,7 @@ export function renderSimulation(r: SimulateReport): string {
   const lines = [
     ...warnings.flatMap((w) => wrap(`${prefix}${w}`, 100, " ".repeat(prefix.length))),
     ...(warnings.length > 0 ? [""] : []),
-    t("sequence", { list: r.sequence.map((e) => t("sequenceEntry", { notch: String(e.notch), time: asGiven(e.atS) })).join(", "), time: asGiven(r.locoBrakeRelease_s) }),
+    t("sequence", { list: r.sequence.map((e) => t("sequenceEntry", { notch: String(e.notch), time: asGiven(e.atS) })).join(", "), time: releaseText(r.locoBrakeRelease_s) }),
     t("adhesion", { what: r.adhesionQuantile === 0.5 ? t("median") : t("quantile", { percent: String(Math.round(r.adhesionQuantile * 100)) }) }),
     t("lastMoves", { what: r.lastVehicleMoves_s === null ? t("neverMoved") : t("movedAfter", { time: num(r.lastVehicleMoves_s, 1), travel: num(r.locoTravelToStretch_m, 2) }) }),
     t("peak", { force: num(r.peakCouplerForce_kN), coupling: String(r.peakAt.coupling + 1), time: num(r.peakAt.time_s, 1), compression: num(r.peakCompression_kN) }),

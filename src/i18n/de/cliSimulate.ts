@@ -8,6 +8,7 @@ export const cliSimulateDe = translation<typeof cliSimulate.en>()({
   episodes: { one: "{count} Schleuderphase", other: "{count} Schleuderphasen" },
   powerCuts: { one: "{count} Zugkraftabschaltung", other: "{count} Zugkraftabschaltungen" },
   reachedWhileCut: "; das Ziel wurde nur erreicht, während der Schleuderschutz die Zugkraft abschaltete",
+  brakeStillOn: "Die Lokbremse war noch angelegt, als der Lauf bei {end} s endete; sie löst bei {release} s (--release-at legt fest, wann).",
   didNotStart: "Der Zug fuhr nicht an: das letzte Fahrzeug bewegte sich nie.",
   sequence: "Folge: {list}; Lokbremse gelöst bei {time} s",
   sequenceEntry: "Fahrstufe {notch} bei {time} s",

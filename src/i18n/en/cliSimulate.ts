@@ -7,6 +7,7 @@ export const cliSimulate = namespace("cliSimulate", {
   episodes: { one: "{count} episode", other: "{count} episodes" },
   powerCuts: { one: "{count} power cut", other: "{count} power cuts" },
   reachedWhileCut: "; the target was reached only while the protection cut power",
+  brakeStillOn: "The locomotive brake was still applied when the run ended at {end} s; it comes off at {release} s (--release-at sets when).",
   didNotStart: "The train did not start: the last vehicle never moved.",
   sequence: "Sequence: {list}; locomotive brake off at {time} s",
   sequenceEntry: "notch {notch} at {time} s",
@@ -21,8 +22,7 @@ export const cliSimulate = namespace("cliSimulate", {
   slip: "Wheel slip: {what}",
   slipNone: "none",
   slipAll: "{time} s in all — {list}",
-  // English keeps "(1 cuts)" as it always printed; the other languages choose by count.
-  slipEpisode: { one: "unit {unit} {from}–{to} s ({count} cuts)", other: "unit {unit} {from}–{to} s ({count} cuts)" },
+  slipEpisode: { one: "unit {unit} {from}–{to} s ({count} power cut)", other: "unit {unit} {from}–{to} s ({count} power cuts)" },
   trainBrake: "Train brake: {what}",
   alreadyReleased: "already released",
   releasedFrom: "released from {time} s",

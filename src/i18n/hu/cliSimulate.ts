@@ -8,6 +8,7 @@ export const cliSimulateHu = translation<typeof cliSimulate.en>()({
   episodes: { one: "{count} perdülés", other: "{count} perdülés" },
   powerCuts: { one: "{count} vonóerő-leállítás", other: "{count} vonóerő-leállítás" },
   reachedWhileCut: "; a célt csak úgy érte el, hogy közben a perdülésvédelem leállította a vonóerőt",
+  brakeStillOn: "A mozdonyfék még be volt fékezve, amikor a futás {end} s-nál véget ért; {release} s-nál old (a --release-at állítja be, mikor).",
   didNotStart: "A vonat nem indult el: az utolsó jármű nem mozdult meg.",
   sequence: "Sorrend: {list}; mozdonyfék oldása {time} s-kor",
   sequenceEntry: "{notch}. fokozat {time} s-kor",
