@@ -13,6 +13,7 @@ import { renderPlan } from "../../src/cli/render/plan.js";
 import { marginNum, textTable } from "../../src/cli/table.js";
 import { setCliLanguage } from "../../src/cli/lang.js";
 import { parseSequence, renderSimulation, simulateCase } from "../../src/cli/commands/simulate.js";
+import { tableCommand } from "../../src/cli/commands/table.js";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
 import { planReport } from "../../src/profiles/report.js";
@@ -122,5 +123,12 @@ describe("taut simulate, read after a run that did not start", () => {
   it("counts a slip's power cuts in words that agree with the count (1 power cut, not 1 cuts)", () => {
     expect(text).toMatch(/\(1 power cut\)|\(\d+ power cuts\)/);
     expect(text).not.toMatch(/\(\d+ cuts\)/);
+  });
+});
+
+describe("usage lines mark as optional what has a default", () => {
+  it("taut table: --loco has a default (the reference train's locomotives), so it stands in brackets", () => {
+    expect(tableCommand.usage).toContain("[--loco ID]");
+    expect(tableCommand.usage).not.toMatch(/(^|\s)--loco ID/);
   });
 });

@@ -34,7 +34,7 @@ const DEFAULT_LIMIT_KN = { knuckle: 970, screw: 850 } as const;
 export const tableCommand: Command = {
   name: "table",
   summary: "load table of a location: largest startable mass per rail condition, with and without sand",
-  usage: "taut table LOCATION.json [--note ID] --loco ID [--count N] [--wagons N] [--wagon-type ID] [--slack MM] [--limit KN] [--temperature C] [--target-kmh V] [--jobs N] [--json|--csv]",
+  usage: "taut table LOCATION.json [--note ID] [--loco ID] [--count N] [--wagons N] [--wagon-type ID] [--slack MM] [--limit KN] [--temperature C] [--target-kmh V] [--jobs N] [--json|--csv]",
   help: [
     "The largest trailing mass the locomotives start at a location, for every rail condition, without and",
     "with sand. Every figure is a bisection over the start planner's verdict (below the static limit), so a",
