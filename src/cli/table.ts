@@ -4,9 +4,11 @@ import { cli } from "../i18n/en/cli.js";
 
 export function textTable(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<string>>): string {
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
-  // "none" (no mass starts) in this run's language stands in a column of numbers: "nincs", "keine" too.
+  // "none" (no mass starts) in this run's language stands in a column of numbers: "nincs", "keine" too; a
+  // figure may carry a marker (" *": the slip protection acts in that step), or room for one ("  ") so that the
+  // figures line up.
   const none = new Set(["—", "none", cliTr().ns(cli)("none")]);
-  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+<]?[\d.,]+\+?%?( @[\d.,]+)?$/.test(r[i] ?? "") || none.has(r[i] ?? "")));
+  const isNum = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+<]?[\d.,]+\+?%?( @[\d.,]+)?( \*| {2})?$/.test(r[i] ?? "") || none.has(r[i] ?? "")));
   const line = (cells: readonly string[]) =>
     cells.map((c, i) => (isNum[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join("  ").trimEnd();
   return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");

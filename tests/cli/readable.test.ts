@@ -132,3 +132,20 @@ describe("usage lines mark as optional what has a default", () => {
     expect(tableCommand.usage).not.toMatch(/(^|\s)--loco ID/);
   });
 });
+
+describe("the step table's slip risk column lines up its figures", () => {
+  it("a plan with steps the slip protection acts in (marked *): every row's % stands in one place", () => {
+    const marked = demos.filter((d) => d.p.steps.some((s) => s.protectionActs) && d.p.steps.some((s) => !s.protectionActs && s.notch > 0));
+    expect(marked.length).toBeGreaterThan(0);
+    for (const d of marked) {
+      const lines = d.text.split("\n");
+      const head = lines.findIndex((l) => l.startsWith("#  phase"));
+      const spans = [...lines[head + 1]!.matchAll(/-+/g)].map((m) => [m.index, m.index + m[0].length] as const);
+      const col = lines[head]!.indexOf("slip risk");
+      const [from, to] = spans.find(([a, b]) => col >= a && col < b)!;
+      const rows = lines.slice(head + 2, head + 2 + d.p.steps.length);
+      const at = rows.map((r) => r.slice(from, to).indexOf("%"));
+      expect(new Set(at).size, `${d.name}\n${rows.join("\n")}`).toBe(1);
+    }
+  });
+});

@@ -79,6 +79,8 @@ export function renderPlan(p: PlanReport): string {
     lines.push(t("timeToTarget", { time: p.timeToTarget_s === null ? t("targetNotReached") : t("targetAfter", { time: num(p.timeToTarget_s) }), peak: num(p.peakCouplerForce_kN) }));
   }
   if (p.steps.length > 0) {
+    // A step the slip protection acts in is marked " *"; the others keep room for the mark, so the figures line up.
+    const marked = p.steps.some((s) => s.protectionActs);
     lines.push("");
     lines.push(
       textTable(
@@ -92,7 +94,7 @@ export function renderPlan(p: PlanReport): string {
           num(s.tractiveEffort_kN),
           s.adhesionUseAt_kmh !== undefined ? `${pct(s.adhesionUse)} @${num(s.adhesionUseAt_kmh, 1)}` : pct(s.adhesionUse),
           // Whole percent, as the step's why line gives it (rounding.ts wholePercent).
-          `${pct(s.slipRisk)}${s.protectionActs ? " *" : ""}`,
+          `${pct(s.slipRisk)}${s.protectionActs ? " *" : marked ? "  " : ""}`,
           num(s.peakCouplerForce_kN),
           stillSlipping(s),
         ]),
