@@ -240,8 +240,22 @@ describe("choosing where the front stands", () => {
     const ask = (front: StretchRequest["front"]) => railmlStretch(m, { front, direction: "up", behindM: 500, aheadM: 100 });
     expect(ask({ kind: "absPos", absPos: 20_000 })).toMatchObject({ ok: false, message: "No track covers the line position 20000 m (absPos)." });
     expect(ask({ kind: "pos", track: "X", pos: 1 })).toMatchObject({ ok: false, message: 'There is no track "X" in the file.' });
-    expect(ask({ kind: "ocp", ocp: "Nowhere" })).toMatchObject({ ok: false, message: 'There is no operational point "Nowhere" in the file.' });
+    // A file without operational points says so, and what to give instead.
+    expect(ask({ kind: "ocp", ocp: "Nowhere" })).toMatchObject({ ok: false, message: 'There is no operational point "Nowhere" in the file. It names none: give a line position, or a track and a pos on it.' });
     expect(ask({ kind: "pos", track: "T1", pos: 0 })).toMatchObject({ ok: false, message: expect.stringContaining("no track behind the front") });
+  });
+});
+
+describe("an operational point not found", () => {
+  it("names the file's operational points (name and id, the first ten), so the next try can be one of them", () => {
+    const ocps = Array.from({ length: 12 }, (_, i) => ({ id: `op${i + 1}`, name: `Invented halt ${i + 1}` }));
+    const m = readRailmlText(railmlFile({ tracks: [oneTrack], ocps }));
+    const r = railmlStretch(m, { front: { kind: "ocp", ocp: "Invented" }, direction: "up", behindM: 500, aheadM: 100 });
+    expect(r.ok).toBe(false);
+    const message = r.ok ? "" : r.message;
+    expect(message).toMatch(/^There is no operational point "Invented" in the file\. Its operational points: "Invented halt 1" \(op1\), "Invented halt 2" \(op2\), /);
+    expect(message).toContain('"Invented halt 10" (op10), …');
+    expect(message).not.toContain("op11");
   });
 });
 

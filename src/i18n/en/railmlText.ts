@@ -17,7 +17,10 @@ export const railmlText = namespace("railmlText", {
   noTrackCovers: "No track{which} covers the line position {absPos} m (absPos).",
   noAbsPos: "The file gives no absPos at the tracks' ends, so a line position cannot be found: choose a track and a pos on it, or an operational point.",
   absPosOnSeveral: "The line position {absPos} m is on {count} tracks ({list}): choose one of them.",
-  noOcp: "There is no operational point \"{ocp}\" in the file.",
+  noOcp: "There is no operational point \"{ocp}\" in the file.{known}",
+  // After noOcp: what the file does name, so the next try can be one of them.
+  knownOcps: " Its operational points: {list}.",
+  noOcps: " It names none: give a line position, or a track and a pos on it.",
   ocpNotPlaced: "The operational point \"{ocp}\" is not placed on any track{which} (no crossSection refers to it).",
   ocpOnSeveral: "The operational point \"{ocp}\" is on {count} tracks ({list}): choose one of them.",
   // Walking the line.

@@ -165,7 +165,12 @@ function findFront(
   }
   const key = f.ocp.trim().toLowerCase();
   const ocps = m.ocps.filter((o) => [o.id, o.name, o.code].some((x) => x !== undefined && x.toLowerCase() === key));
-  if (ocps.length === 0) return failed(say("noOcp", { ocp: f.ocp }));
+  if (ocps.length === 0) {
+    // Name what the file has (the first ten, each by its name and id), so the next try can be one of them.
+    const listed = m.ocps.slice(0, 10).map((o) => `"${o.name ?? o.code ?? o.id}"${o.name !== undefined || o.code !== undefined ? ` (${o.id})` : ""}`);
+    const list = listed.join(", ") + (m.ocps.length > 10 ? ", …" : "");
+    return failed(say("noOcp", { ocp: f.ocp, known: m.ocps.length > 0 ? say("knownOcps", { list }) : say("noOcps") }));
+  }
   const ids = new Set(ocps.map((o) => o.id));
   const places = m.tracks.flatMap((t) => t.crossSections.filter((c) => ids.has(c.ocpRef) && (!f.track || t.id === f.track)).map((c) => ({ t, pos: c.pos })));
   if (places.length === 0) return failed(say("ocpNotPlaced", { ocp: f.ocp, which: f.track ? ` "${f.track}"` : "" }));
