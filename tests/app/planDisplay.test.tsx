@@ -17,6 +17,8 @@ import { planStart } from "../../src/core/planner/index.js";
 import type { PlanResult } from "../../src/core/planner/types.js";
 import { planReport } from "../../src/profiles/report.js";
 import { demoCase, fixturePlan } from "./fixtures.js";
+import { builtinLibrary } from "../../src/profiles/builtin.js";
+import { parseStartCase } from "../../src/profiles/parse.js";
 import { renderWithApp } from "./harness.js";
 
 const massInput = () => document.querySelector<HTMLInputElement>('input[name="train.trailingMass_t"]')!;
@@ -202,6 +204,18 @@ describe("the margins list marks the binding limit without an alarm where it is 
     expect(binding!.weight).toBe("700");
     expect(binding!.colour).not.toBe("var(--alert)");
     for (const o of others) expect(binding!.colour).toBe(o.colour);
+  });
+
+  it("a row for each kind of limit the plan judged, as `taut plan` lists them (a train that never moved has no distance row)", () => {
+    const parsed = parseStartCase(JSON.parse(readFileSync(join(process.cwd(), "profiles/cases/demo-goods-cinderfield.json"), "utf8")), builtinLibrary());
+    if (!parsed.ok) throw new Error("demo case");
+    const p = planStart(parsed.value, { skipMassSearch: true });
+    // The covered-goods demo on its leaf-fall rail does not move: its plan judges adhesion, power and the couplers.
+    expect(p.limits.map((l) => l.name)).toEqual(["adhesion", "power", "coupler-tension", "coupler-compression"]);
+    expect(p.margins.distance).toBe(99);
+    expect(rows(p).map((x) => x.name)).toEqual(["Adhesion", "Power", "Coupler"]);
+    // The aggregate demo judges distance and brake holding too.
+    expect(rows(planStart(demoCase(), { skipMassSearch: true })).map((x) => x.name)).toContain("Distance");
   });
 
   it("a train that needs assistance: its binding limit, below × 1, red as its bar", () => {

@@ -241,7 +241,9 @@ export function ResultView(props: ResultViewProps): JSX.Element {
             <section class="panel" aria-labelledby="margins-h">
               <h2 id="margins-h">{t("margins")}</h2>
               <ul class="margins">
-                <For each={(["adhesion", "power", "coupler", "distance", "brake"] as Reason[]).filter((k) => k !== "brake" || res().margins.brake < 99)}>
+                {/* A row for each kind of limit the plan judged, as `taut plan` lists them: a train that never moved
+                    has no distance limit, and showed "Distance × 99+" here. */}
+                <For each={(["adhesion", "power", "coupler", "distance", "brake"] as Reason[]).filter((k) => res().limits.some((l) => l.reason === k) && (k !== "brake" || res().margins.brake < 99))}>
                   {(k) => (
                     // The limit that binds is marked bold; it is red only when it is not met (below × 1, as its bar):
                     // a red "× 1.40" beside a green "Starts" read as an alarm where there is none.
