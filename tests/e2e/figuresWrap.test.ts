@@ -1,6 +1,6 @@
 /**
  * No figure parts from its unit at the end of a line, on the screens a driver and a dispatcher read (Start plan,
- * Assistance check, Departures with the demo day, Load table), in English and German, at 1280×800, 800×1280 and
+ * Assistance check, Departures with the demo day, Load table), in English, Hungarian and German, at 1280×800, 800×1280 and
  * 600×960 (the narrowest width the app supports). A driver reading "3" at the end of one line and "min 22 s" on
  * the next, or "1,400" and "t)", reads another figure; the app keeps each figure in a span that does not wrap
  * (components/Figures.tsx), and this measures where the lines really end. The figures are found with the
@@ -96,7 +96,7 @@ afterAll(async () => {
 });
 
 describe("a figure and its unit stay on one line", () => {
-  for (const [lang, radio] of [["en", "English"], ["de", "Deutsch"]] as const) {
+  for (const [lang, radio] of [["en", "English"], ["hu", "Magyar"], ["de", "Deutsch"]] as const) {
     it(`${lang}: Start plan, Assistance check, Departures and Load table at 1280×800, 800×1280 and 600×960`, async () => {
       await page.setViewportSize(LANDSCAPE);
       await go("settings");

@@ -12,6 +12,7 @@ import { COUPLING_DEFAULTS } from "../../state/caseDraft.js";
 import { issueFinder, type InputSectionProps } from "./inputSection.js";
 import { train } from "../../../i18n/en/train.js";
 import { tr } from "../../i18n.js";
+import { Figures } from "../../components/Figures.js";
 
 const t = tr.ns(train);
 
@@ -73,7 +74,7 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
           onValue={(v) => s.set("train", "length_m", v)}
           units={props.units}
           issue={issue("train.length_m")}
-          hint={<>{perWagon(d.train.length_m, d.train.wagons, props.units)}</>}
+          hint={<Figures text={perWagon(d.train.length_m, d.train.wagons, props.units)} />}
         />
       </div>
       <div class="field" data-field="train.wagonType">
@@ -127,7 +128,7 @@ export function TrainSection(props: TrainSectionProps): JSX.Element {
           onValue={(v) => s.set("train", "couplerLimit_kN", v)}
           units={props.units}
           issue={issue("train.couplerLimit_kN")}
-          hint={<>{t("typical", { force: show("force", COUPLING_DEFAULTS[d.train.coupling].couplerLimit_kN * 1000, props.units) })}</>}
+          hint={<Figures text={t("typical", { force: show("force", COUPLING_DEFAULTS[d.train.coupling].couplerLimit_kN * 1000, props.units) })} />}
         />
       </div>
       <SegmentedButtons

@@ -8,6 +8,7 @@ import { issueFinder, type InputSectionProps } from "./inputSection.js";
 import { groups } from "../../../i18n/en/groups.js";
 import { train } from "../../../i18n/en/train.js";
 import { tr } from "../../i18n.js";
+import { Figures } from "../../components/Figures.js";
 
 const tt = tr.ns(train);
 const t = tr.ns(groups);
@@ -63,7 +64,7 @@ export default function WagonGroups(props: WagonGroupsProps): JSX.Element {
                 step={50}
                 min={0}
                 issue={issue(`train.groups[${k}].mass_t`)}
-                hint={<>{g().wagons >= 1 && g().mass_t > 0 ? tt("perWagon", { value: show("mass", (g().mass_t * 1000) / g().wagons, props.units) }) : ""}</>}
+                hint={<Figures text={g().wagons >= 1 && g().mass_t > 0 ? tt("perWagon", { value: show("mass", (g().mass_t * 1000) / g().wagons, props.units) }) : ""} />}
               />
             </div>
             <div class="field" data-field={`train.groups[${k}].wagonType`}>
