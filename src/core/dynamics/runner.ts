@@ -7,7 +7,7 @@ import { adhesionSpeedFactor, slipRisk } from "../physics/adhesion.js";
 import { BENCH } from "./benchOnly.js";
 import { activeOnlyStepping, applyBrakes, applyBrakesFrom, countVehicleSteps, createState, evaluate, evaluateActive, shapedState, shapedTakeUp, step, stepActive, vehicleStepsDone, type DynamicsState } from "./dynamics.js";
 import { CONTROL_INTERVAL_S, integratorSteps, stepDividing, type TrainModel } from "../train/trainModel.js";
-import { SETTLE_AFTER_CHANGE_S, SWAY_WINDOW_S, maySettle, measureSway, mustUnsettle, settle, settledStep, unsettle, type Settled } from "./settled.js";
+import { SETTLED_MIN_SPEED_MPS, SETTLE_AFTER_CHANGE_S, SWAY_WINDOW_S, maySettle, measureSway, mustUnsettle, settle, settledRefusal as settleRefusal, settledStep, unsettle, type Settled } from "./settled.js";
 
 /** What a controller (a driver, or the planner's policy) can observe. */
 export interface Observation {
@@ -88,6 +88,22 @@ export function vehicleStepsBeforeAllMoved(): number {
  * vehicle-steps a full step of every vehicle would have done at 12…17.
  */
 const phaseTally = new Float64Array(18);
+
+/**
+ * The full chain's work after every vehicle moved, vehicle-steps, by why it was not the settled train (for
+ * the benchmarks): 0 running as one not asked for yet, 1 the brakes still releasing, 2…6 within the settle
+ * delay and sway window after a notch change (0–4, 4–6, 6–8, 8–10, 10–14 s after it), 7 later (the window
+ * measured and running as one refused, or a fresh window under way), 8 the settled train. Then the refusals
+ * at a window's end: 9 too slow, 10 a vehicle not moving forward, 11 a coupling near its slack. Of 7: 12 the
+ * lead slower than running as one asks (`SETTLED_MIN_SPEED_MPS` × 1.5), 13 slower than 3 m/s, 14 faster; 15 (of 12)
+ * slower than it may run as one (`SETTLED_MIN_SPEED_MPS`).
+ */
+const settleTally = new Float64Array(16);
+
+/** A copy of `settleTally` so far, this process. */
+export function workBySettleState(): Float64Array {
+  return settleTally.slice();
+}
 
 /** A copy of the work by phase so far (`phaseTally`), this process. */
 export function workByPhase(): Float64Array {
@@ -267,7 +283,10 @@ export class Run {
       this.afterStep();
       this.steps++;
       countVehicleSteps(m.n);
-      if (BENCH) tally(5, m.n, 1, m.n);
+      if (BENCH) {
+        tally(5, m.n, 1, m.n);
+        settleTally[8]! += m.n;
+      }
     } else if (this.quiescent()) {
       // Everything stands and is held: only brakes and the effort lag change. One evaluation over the
       // interval finds the moment (to within the interval) when something breaks away.
@@ -302,7 +321,15 @@ export class Run {
         this.afterStep();
       }
       this.steps += steps;
-      if (BENCH) tally(this.rollingStepS > 0 ? 3 : 4, steps * m.n, steps, m.n);
+      if (BENCH) {
+        tally(this.rollingStepS > 0 ? 3 : 4, steps * m.n, steps, m.n);
+        const why = this.settleState();
+        settleTally[why]! += steps * m.n;
+        if (why === 7) {
+          const v = s.v[this.lead]!;
+          settleTally[v < SETTLED_MIN_SPEED_MPS * 1.5 ? (v < SETTLED_MIN_SPEED_MPS ? 15 : 12) : v < 3 ? 13 : 14]! += steps * m.n;
+        }
+      }
     }
     // The clock counts whole intervals, so rounding in the steps never accumulates: after k intervals the
     // time is exactly t0 + k × interval.
@@ -351,12 +378,23 @@ export class Run {
     measureSway(this.m, s, this.meanScratch, this.sway);
     if (s.t - this.swayFromS < SWAY_WINDOW_S) return;
     if (maySettle(this.m, s, this.lead, this.meanScratch, this.sway)) this.settled = settle(this.m, s, this.lead, this.meanScratch, this.sway);
+    else if (BENCH) settleTally[9 + settleRefusal(this.m, s, this.lead)]!++;
     this.swayFromS = Infinity;
   }
 
   /** Every vehicle moving, the brakes off, and the last notch change long enough ago for its surge to pass. */
   private mayRunAsOne(): boolean {
     return this.startedCount === this.m.n && this.s.t > this.brakesDoneS && this.s.t - this.notchChangedS >= SETTLE_AFTER_CHANGE_S;
+  }
+
+  /** Why the full chain runs now that every vehicle has moved (`settleTally`'s index). */
+  private settleState(): number {
+    if (!this.settleWhenSteady) return 0;
+    if (this.s.t <= this.brakesDoneS) return 1;
+    const since = this.s.t - this.notchChangedS;
+    if (since < SETTLE_AFTER_CHANGE_S) return 2;
+    if (since < SETTLE_AFTER_CHANGE_S + SWAY_WINDOW_S) return since < 6 ? 3 : since < 8 ? 4 : since < 10 ? 5 : 6;
+    return 7;
   }
 
   /** Nothing moves, nothing accelerates, the effort is not changing. */

@@ -140,6 +140,13 @@ export function maySettle(m: TrainModel, s: DynamicsState, lead: number, mean: F
   return true;
 }
 
+/** Why `maySettle` refused (for the benchmarks): 0 too slow, 1 a vehicle not moving forward, 2 a coupling near its slack. */
+export function settledRefusal(m: TrainModel, s: DynamicsState, lead: number): number {
+  if (s.v[lead]! < SETTLED_MIN_SPEED_MPS * 1.5) return 0;
+  for (let i = 0; i < m.n; i++) if (s.v[i]! <= 0) return 1;
+  return 2;
+}
+
 /** Begin running the train as one: the vehicles' places behind the lead kept as they are now. */
 export function settle(m: TrainModel, s: DynamicsState, lead: number, mean: Float64Array, measuredSway: Float64Array): Settled {
   const n = m.n;
