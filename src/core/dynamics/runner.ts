@@ -94,11 +94,12 @@ const phaseTally = new Float64Array(18);
  * the benchmarks): 0 running as one not asked for yet, 1 the brakes still releasing, 2…6 within the settle
  * delay and sway window after a notch change (0–4, 4–6, 6–8, 8–10, 10–14 s after it), 7 later (the window
  * measured and running as one refused, or a fresh window under way), 8 the settled train. Then the refusals
- * at a window's end: 9 too slow, 10 a vehicle not moving forward, 11 a coupling near its slack. Of 7: 12 the
+ * at a window's end: 9 too slow, 10 a vehicle not moving forward, 11 a coupling in its slack or its
+ * quasi-static force within the floor of it, 16 only the sway measured takes a coupling to its slack. Of 7: 12 the
  * lead slower than running as one asks (`SETTLED_MIN_SPEED_MPS` × 1.5), 13 slower than 3 m/s, 14 faster; 15 (of 12)
  * slower than it may run as one (`SETTLED_MIN_SPEED_MPS`).
  */
-const settleTally = new Float64Array(16);
+const settleTally = new Float64Array(17);
 
 /** A copy of `settleTally` so far, this process. */
 export function workBySettleState(): Float64Array {
@@ -378,7 +379,7 @@ export class Run {
     measureSway(this.m, s, this.meanScratch, this.sway);
     if (s.t - this.swayFromS < SWAY_WINDOW_S) return;
     if (maySettle(this.m, s, this.lead, this.meanScratch, this.sway)) this.settled = settle(this.m, s, this.lead, this.meanScratch, this.sway);
-    else if (BENCH) settleTally[9 + settleRefusal(this.m, s, this.lead)]!++;
+    else if (BENCH) settleTally[9 + settleRefusal(this.m, s, this.lead, this.meanScratch)]!++;
     this.swayFromS = Infinity;
   }
 

@@ -140,11 +140,14 @@ export function maySettle(m: TrainModel, s: DynamicsState, lead: number, mean: F
   return true;
 }
 
-/** Why `maySettle` refused (for the benchmarks): 0 too slow, 1 a vehicle not moving forward, 2 a coupling near its slack. */
-export function settledRefusal(m: TrainModel, s: DynamicsState, lead: number): number {
+/** Why `maySettle` refused (for the benchmarks): 0 too slow, 1 a vehicle not moving forward, 2 a coupling in its slack or
+ * its quasi-static force within the floor of it, 7 only the sway measured takes a coupling to its slack. */
+export function settledRefusal(m: TrainModel, s: DynamicsState, lead: number, mean: Float64Array): number {
   if (s.v[lead]! < SETTLED_MIN_SPEED_MPS * 1.5) return 0;
   for (let i = 0; i < m.n; i++) if (s.v[i]! <= 0) return 1;
-  return 2;
+  const k = m.n - 1;
+  for (let j = 0; j < k; j++) if (s.engaged[j]! === 0 || s.engaged[j]! * mean[j]! <= SWAY_FLOOR_N) return 2;
+  return 7;
 }
 
 /** Begin running the train as one: the vehicles' places behind the lead kept as they are now. */
