@@ -6,7 +6,8 @@
  * Plans alone, then the checks with their mass searches (`runJob`, as tests/bench/batch.ts). Then each
  * departure's plan replayed with the full chain and as one (the same notch timing): every coupling's own peak
  * as one against the full chain's, the worst high and the worst low (the app draws each coupling's peak).
- * Run: `nice npx tsx tests/bench/settleWindow.ts` (`--plans`: the plans' breakdown only).
+ * Run: `nice npx tsx tests/bench/settleWindow.ts` (`--plans`: the plans' breakdown only; `--couplings`:
+ * the couplings' peaks only).
  *
  * What it showed (40 departures): the window is not what binds. Of the plans' full-chain work after every
  * vehicle moved (61 M vehicle-steps), 14 % falls 0–14 s after a notch change (10 % 4–14 s, within the sway
@@ -93,15 +94,15 @@ export function couplingPeaks(cases: StartCase[]): void {
     }
     if (lo < -0.001) low++;
     if (hi > 0.01) high++;
-    console.log(`  ${String(c.train.wagons).padStart(3)} wagons: steps ${one.steps}/${full.steps}, worst high ${(100 * hi).toFixed(2)} %, worst low ${(100 * lo).toFixed(2)} %${lo < -0.001 ? ` (${where})` : ""}`);
+    const train = (one.peakTensionN - full.peakTensionN) / full.peakTensionN;
+    console.log(`  ${String(c.train.wagons).padStart(3)} wagons: steps ${one.steps}/${full.steps}, train's peak ${train >= 0 ? "+" : ""}${(100 * train).toFixed(2)} %, worst high ${(100 * hi).toFixed(2)} %, worst low ${(100 * lo).toFixed(2)} %${lo < -0.001 ? ` (${where})` : ""}`);
   }
   console.log(`  ${settled} plans run as one somewhere; ${low} with a coupling's peak more than 0.1 % low, ${high} with one more than 1 % high`);
 }
 
 const many = seededDepartures(40, 200);
 planStart(many[0]!, { skipMassSearch: true }); // warm-up
-settleBreakdown("40 seeded departures, plans", many, false);
-if (!process.argv.includes("--plans")) {
-  settleBreakdown("40 seeded departures, checks with mass searches", many, true);
-  couplingPeaks(many);
-}
+const only = process.argv.includes("--plans") ? "plans" : process.argv.includes("--couplings") ? "couplings" : "";
+if (only !== "couplings") settleBreakdown("40 seeded departures, plans", many, false);
+if (only === "") settleBreakdown("40 seeded departures, checks with mass searches", many, true);
+if (only !== "plans") couplingPeaks(many);
