@@ -149,6 +149,8 @@ export interface SearchTry {
   /** A dropped try: vehicle-steps done after it was certain to be dropped, and the time that took by the logger's clock, ms. */
   stepsAfterCertain: number;
   msAfterCertain?: number;
+  /** The accelerate phase: its vehicle-steps after the last rise of any unit's notch (every unit at the highest notch it takes from there). */
+  stepsAfterLastRaise?: number;
   /** Time it took by the logger's clock, ms; a stretch try's outcome. */
   ms: number;
   outcome?: StretchOutcome;
@@ -345,7 +347,7 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
   const wa = mark();
   const ta = b.run.s.t;
   const acc = yield* accelerate(ctx, b, built!.dwell, powerS, check, soFar, failed && (() => failed(soFar)));
-  if (BENCH && tryLog) logTry(wa, { phase: "accelerate", label: 0, kept: true, simS: b.run.s.t - ta, certainAfterS: null, stepsAfterCertain: 0 });
+  if (BENCH && tryLog) logTry(wa, { phase: "accelerate", label: 0, kept: true, simS: b.run.s.t - ta, certainAfterS: null, stepsAfterCertain: 0, stepsAfterLastRaise: vehicleStepsDone() - Math.max(wa.w, b.run.lastRaiseWork) });
   opts.onProgress?.(0.85);
   const out = accelerationOutcome(acc);
   return { ...builtPart, ...out, adhesionCapped: built!.capped || out.adhesionCapped, stoppedEarly: acc.stoppedEarly };

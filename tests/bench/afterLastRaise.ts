@@ -1,0 +1,85 @@
+/**
+ * Issue 14, units away from the head: how much of their plans' work comes after the plan's last notch rise
+ * (every unit then at the highest notch it takes; no surge from a rise can follow). Over the departures with
+ * units away from the head among the first `count` of the all-different generator: each own plan (planStart)
+ * and each check with its mass search (runJob check, masses: own plan and holding judgements), the
+ * vehicle-steps of the accelerate phase after its run's last rise of any unit's notch (search.ts logs it,
+ * BENCH only) against all the vehicle-steps done. With the several-places rule off (a train with units away
+ * from the head runs the full chain to the end) and on (settled.ts `setSeveralPlaces`).
+ * Run: `nice npx tsx tests/bench/afterLastRaise.ts [count]` (default 200).
+ */
+import { planStart } from "../../src/core/planner/index.js";
+import { logSearchTries, type SearchTry } from "../../src/core/planner/search.js";
+import { setSeveralPlaces } from "../../src/core/dynamics/settled.js";
+import { vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
+import { builtinLibrary } from "../../src/profiles/builtin.js";
+import { parseStartCase } from "../../src/profiles/parse.js";
+import type { StartCase } from "../../src/core/train/types.js";
+import { runJob } from "../../src/cli/batch/jobs.js";
+import { allDifferentDepartures } from "./departures.js";
+
+/** The departures with a unit away from the head among the first `count`. */
+export function unitsAwayDepartures(count: number): Array<{ id: string; c: StartCase }> {
+  const lib = builtinLibrary();
+  const out: Array<{ id: string; c: StartCase }> = [];
+  for (const d of allDifferentDepartures(count)) {
+    const r = parseStartCase(d, lib);
+    if (r.ok && r.value.locomotives.some((l) => l.position !== "head")) out.push({ id: String(d.id), c: r.value });
+  }
+  return out;
+}
+
+interface Share {
+  total: number;
+  accelerate: number;
+  afterRaise: number;
+}
+
+function measure(f: () => void): Share {
+  const log: SearchTry[] = [];
+  logSearchTries(log);
+  const w0 = vehicleStepsDone();
+  try {
+    f();
+  } finally {
+    logSearchTries(null);
+  }
+  const acc = log.filter((t) => t.phase === "accelerate");
+  return {
+    total: vehicleStepsDone() - w0,
+    accelerate: acc.reduce((a, t) => a + t.vehicleSteps, 0),
+    afterRaise: acc.reduce((a, t) => a + (t.stepsAfterLastRaise ?? 0), 0),
+  };
+}
+
+function add(a: Share, b: Share): void {
+  a.total += b.total;
+  a.accelerate += b.accelerate;
+  a.afterRaise += b.afterRaise;
+}
+
+const M = (x: number) => (x / 1e6).toFixed(2);
+const pc = (x: number, of: number) => ((100 * x) / Math.max(1, of)).toFixed(1);
+
+if (import.meta.url === `file://${process.argv[1]}`) {
+  const count = Number(process.argv[2] ?? 200);
+  const cases = unitsAwayDepartures(count);
+  for (const on of [false, true]) {
+    setSeveralPlaces(on);
+    const own: Share = { total: 0, accelerate: 0, afterRaise: 0 };
+    const check: Share = { total: 0, accelerate: 0, afterRaise: 0 };
+    const rows: string[] = [];
+    for (const { id, c } of cases) {
+      const o = measure(() => planStart(c, { skipMassSearch: true }));
+      const k = measure(() => runJob({ kind: "check", case: c, masses: true }));
+      add(own, o);
+      add(check, k);
+      rows.push(`  ${id}: own ${M(o.total)} M, after last rise ${pc(o.afterRaise, o.total)} %; check ${M(k.total)} M, after last rise ${pc(k.afterRaise, k.total)} %`);
+    }
+    setSeveralPlaces(true);
+    console.log(`several-places rule ${on ? "on" : "off"}: ${cases.length} departures with units away from the head among the first ${count}`);
+    if (process.env.ROWS) console.log(rows.join("\n"));
+    console.log(`  own plans: ${M(own.total)} M vehicle-steps, accelerate ${pc(own.accelerate, own.total)} %, after the last notch rise ${M(own.afterRaise)} M = ${pc(own.afterRaise, own.total)} %`);
+    console.log(`  checks with mass searches: ${M(check.total)} M vehicle-steps, accelerate ${pc(check.accelerate, check.total)} %, after the last notch rise ${M(check.afterRaise)} M = ${pc(check.afterRaise, check.total)} %`);
+  }
+}
