@@ -10,7 +10,7 @@
  */
 import { planStart } from "../../src/core/planner/index.js";
 import { logSearchTries, type SearchTry } from "../../src/core/planner/search.js";
-import { setSeveralPlaces } from "../../src/core/dynamics/settled.js";
+import { SETTLED_MIN_SPEED_MPS, setSeveralPlaces } from "../../src/core/dynamics/settled.js";
 import { vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
@@ -33,6 +33,8 @@ interface Share {
   total: number;
   accelerate: number;
   afterRaise: number;
+  slow: number;
+  asOne: number;
 }
 
 function measure(f: () => void): Share {
@@ -49,6 +51,8 @@ function measure(f: () => void): Share {
     total: vehicleStepsDone() - w0,
     accelerate: acc.reduce((a, t) => a + t.vehicleSteps, 0),
     afterRaise: acc.reduce((a, t) => a + (t.stepsAfterLastRaise ?? 0), 0),
+    slow: acc.reduce((a, t) => a + (t.afterRaiseSlow ?? 0), 0),
+    asOne: acc.reduce((a, t) => a + (t.afterRaiseAsOne ?? 0), 0),
   };
 }
 
@@ -56,6 +60,8 @@ function add(a: Share, b: Share): void {
   a.total += b.total;
   a.accelerate += b.accelerate;
   a.afterRaise += b.afterRaise;
+  a.slow += b.slow;
+  a.asOne += b.asOne;
 }
 
 const M = (x: number) => (x / 1e6).toFixed(2);
@@ -66,8 +72,8 @@ if (import.meta.url === `file://${process.argv[1]}`) {
   const cases = unitsAwayDepartures(count);
   for (const on of [false, true]) {
     setSeveralPlaces(on);
-    const own: Share = { total: 0, accelerate: 0, afterRaise: 0 };
-    const check: Share = { total: 0, accelerate: 0, afterRaise: 0 };
+    const own: Share = { total: 0, accelerate: 0, afterRaise: 0, slow: 0, asOne: 0 };
+    const check: Share = { total: 0, accelerate: 0, afterRaise: 0, slow: 0, asOne: 0 };
     const rows: string[] = [];
     for (const { id, c } of cases) {
       const o = measure(() => planStart(c, { skipMassSearch: true }));
@@ -79,7 +85,9 @@ if (import.meta.url === `file://${process.argv[1]}`) {
     setSeveralPlaces(true);
     console.log(`several-places rule ${on ? "on" : "off"}: ${cases.length} departures with units away from the head among the first ${count}`);
     if (process.env.ROWS) console.log(rows.join("\n"));
-    console.log(`  own plans: ${M(own.total)} M vehicle-steps, accelerate ${pc(own.accelerate, own.total)} %, after the last notch rise ${M(own.afterRaise)} M = ${pc(own.afterRaise, own.total)} %`);
-    console.log(`  checks with mass searches: ${M(check.total)} M vehicle-steps, accelerate ${pc(check.accelerate, check.total)} %, after the last notch rise ${M(check.afterRaise)} M = ${pc(check.afterRaise, check.total)} %`);
+    for (const [what, x] of [["own plans", own], ["checks with mass searches", check]] as const) {
+      console.log(`  ${what}: ${M(x.total)} M vehicle-steps, accelerate ${pc(x.accelerate, x.total)} %, after the last notch rise ${M(x.afterRaise)} M = ${pc(x.afterRaise, x.total)} %`);
+      console.log(`    of which below ${1.5 * SETTLED_MIN_SPEED_MPS} m/s ${M(x.slow)} M, running as one ${M(x.asOne)} M, the chain while moving ${M(x.afterRaise - x.slow - x.asOne)} M = ${pc(x.afterRaise - x.slow - x.asOne, x.total)} %`);
+    }
   }
 }

@@ -9,6 +9,7 @@
 import { BENCH } from "../dynamics/benchOnly.js";
 import { vehicleStepsDone } from "../dynamics/dynamics.js";
 import { Run, type BrakeSchedule, type Observation } from "../dynamics/runner.js";
+import { SETTLED_MIN_SPEED_MPS } from "../dynamics/settled.js";
 import { stabilityTimeStep } from "../train/trainModel.js";
 import { Branch } from "./branch.js";
 import { rigidResistanceAt, rigidResistanceCurve } from "./need.js";
@@ -151,6 +152,9 @@ export interface SearchTry {
   msAfterCertain?: number;
   /** The accelerate phase: its vehicle-steps after the last rise of any unit's notch (every unit at the highest notch it takes from there). */
   stepsAfterLastRaise?: number;
+  /** Of those: in control intervals ending below the speed a train may run as one at (settled.ts), and running as one. */
+  afterRaiseSlow?: number;
+  afterRaiseAsOne?: number;
   /** Time it took by the logger's clock, ms; a stretch try's outcome. */
   ms: number;
   outcome?: StretchOutcome;
@@ -346,8 +350,19 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
   // Accelerate: hold the notch the policy settles on (adjusting as speed changes) to the target.
   const wa = mark();
   const ta = b.run.s.t;
-  const acc = yield* accelerate(ctx, b, built!.dwell, powerS, check, soFar, failed && (() => failed(soFar)));
-  if (BENCH && tryLog) logTry(wa, { phase: "accelerate", label: 0, kept: true, simS: b.run.s.t - ta, certainAfterS: null, stepsAfterCertain: 0, stepsAfterLastRaise: vehicleStepsDone() - Math.max(wa.w, b.run.lastRaiseWork) });
+  const ticks: number[] | null = BENCH && tryLog ? [] : null;
+  const acc = yield* accelerate(ctx, b, built!.dwell, powerS, check, soFar, failed && (() => failed(soFar)), ticks);
+  if (BENCH && tryLog && ticks) {
+    const from = Math.max(wa.w, b.run.lastRaiseWork);
+    let slow = 0;
+    let asOne = 0;
+    for (let i = 0; i < ticks.length; i += 3) {
+      if (ticks[i]! < from) continue;
+      if (ticks[i + 2] === 1) slow += ticks[i + 1]!;
+      else if (ticks[i + 2] === 2) asOne += ticks[i + 1]!;
+    }
+    logTry(wa, { phase: "accelerate", label: 0, kept: true, simS: b.run.s.t - ta, certainAfterS: null, stepsAfterCertain: 0, stepsAfterLastRaise: vehicleStepsDone() - from, afterRaiseSlow: slow, afterRaiseAsOne: asOne });
+  }
   opts.onProgress?.(0.85);
   const out = accelerationOutcome(acc);
   return { ...builtPart, ...out, adhesionCapped: built!.capped || out.adhesionCapped, stoppedEarly: acc.stoppedEarly };
@@ -710,7 +725,7 @@ interface AccelerateOutcome {
  * Carry on with the same policy until the target, a stall or the time limit (or, when given, `failed` holds);
  * pausing with `soFar` every `ACCELERATE_SLICE_TICKS` control intervals.
  */
-function* accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: number, check: () => void, soFar: PlanSoFar, failed?: () => boolean): Generator<PlanSoFar, AccelerateOutcome, void> {
+function* accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: number, check: () => void, soFar: PlanSoFar, failed?: () => boolean, intervals: number[] | null = null): Generator<PlanSoFar, AccelerateOutcome, void> {
   // Stretched and rolling, no coupling goes in or out of its slack any more: the stability-limited step
   // is enough (the accuracy limit is for slack engagement).
   if (ctx.startKind === "power") b.run.setStep(Math.max(b.run.dt, stabilityTimeStep(ctx.model)));
@@ -730,7 +745,10 @@ function* accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numb
   // The step current at the end of the build is the one held to accelerate.
   b.current.phase = b.current.phase === "stretch" ? "stretch" : "accelerate";
   for (;;) {
+    const w0 = BENCH && intervals ? vehicleStepsDone() : 0;
     const obs = b.tick(ctx);
+    // The benchmark's record of each interval: work counter before it, its work, 1 slow / 2 as one / 0 the chain.
+    if (BENCH && intervals) intervals.push(w0, vehicleStepsDone() - w0, obs.leadSpeedMps < 1.5 * SETTLED_MIN_SPEED_MPS ? 1 : b.run.runningAsOne ? 2 : 0);
     if (obs.tailTravelM > bestTail) bestTail = obs.tailTravelM;
     if (targetReached(ctx, obs)) {
       reachedS = obs.timeS;
