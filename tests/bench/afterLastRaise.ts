@@ -5,8 +5,13 @@
  * and each check with its mass search (runJob check, masses: own plan and holding judgements), the
  * vehicle-steps of the accelerate phase after its run's last rise of any unit's notch (search.ts logs it,
  * BENCH only) against all the vehicle-steps done. With the several-places rule off (a train with units away
- * from the head runs the full chain to the end) and on (settled.ts `setSeveralPlaces`).
- * Run: `nice npx tsx tests/bench/afterLastRaise.ts [count]` (default 200).
+ * from the head runs the full chain to the end) and on (settled.ts `setSeveralPlaces`). That work is split by
+ * what the train does in each control interval: below 1.5 m/s (no train runs as one there, settled.ts
+ * `SETTLED_MIN_SPEED_MPS`), running as one, or the chain while moving — the last is the most a rule letting
+ * rattling couplings run as one after the last rise could save.
+ * Run: `nice npx tsx tests/bench/afterLastRaise.ts [count]` (default 200; `ROWS=1` prints each departure).
+ * Measured (200): checks 420.15 M vehicle-steps, 40.9 % after the last rise, of it 81.60 M below 1.5 m/s and
+ * 87.79 M (20.9 % of all) the chain while moving; own plans 95.17 M, 15.4 % and 14.0 %.
  */
 import { planStart } from "../../src/core/planner/index.js";
 import { logSearchTries, type SearchTry } from "../../src/core/planner/search.js";

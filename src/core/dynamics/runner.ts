@@ -174,8 +174,6 @@ export class Run {
   /** The notches of the last interval and when they last changed, s. */
   private notchSeen!: Int32Array;
   private notchChangedS = -Infinity;
-  /** The work counter (`vehicleStepsDone`) when a unit's notch last rose in this run (BENCH only; −∞: none yet). */
-  lastRaiseWork = -Infinity;
   /** Each coupling's quasi-static force and the sways above and below it measured since `swayFromS` (settled.ts `measureSway`), N. */
   private meanScratch!: Float64Array;
   private sway!: Float64Array;
@@ -356,7 +354,6 @@ export class Run {
     const s = this.s;
     for (let k = 0; k < this.m.nl; k++) {
       if (s.notch[k] !== this.notchSeen[k]) {
-        if (BENCH) for (let q = 0; q < this.m.nl; q++) if (s.notch[q]! > this.notchSeen[q]!) this.lastRaiseWork = vehicleStepsDone();
         this.notchSeen.set(s.notch);
         this.notchChangedS = s.t;
         this.swayFromS = Infinity;
@@ -540,7 +537,6 @@ export class Run {
     r.episodes = this.episodes.map((e) => ({ ...e }));
     r.lastSlipCount = this.lastSlipCount.slice();
     r.notchSeen = this.notchSeen.slice();
-    r.lastRaiseWork = this.lastRaiseWork;
     r.settled = this.settled ? { ...this.settled, meanN: this.settled.meanN.slice() } : null;
     r.sway = this.sway.slice();
     r.meanScratch = this.meanScratch.slice();

@@ -353,10 +353,12 @@ export function* searchPhases(ctx: PlannerContext, opts: SearchOptions): Generat
   const ticks: number[] | null = BENCH && tryLog ? [] : null;
   const acc = yield* accelerate(ctx, b, built!.dwell, powerS, check, soFar, failed && (() => failed(soFar)), ticks);
   if (BENCH && tryLog && ticks) {
-    const from = Math.max(wa.w, b.run.lastRaiseWork);
+    // From the interval in which a unit's notch last rose (the phase's start if none rose in it).
+    let from = wa.w;
+    for (let i = 0; i < ticks.length; i += 4) if (ticks[i + 3] === 1) from = ticks[i]!;
     let slow = 0;
     let asOne = 0;
-    for (let i = 0; i < ticks.length; i += 3) {
+    for (let i = 0; i < ticks.length; i += 4) {
       if (ticks[i]! < from) continue;
       if (ticks[i + 2] === 1) slow += ticks[i + 1]!;
       else if (ticks[i + 2] === 2) asOne += ticks[i + 1]!;
@@ -744,11 +746,18 @@ function* accelerate(ctx: PlannerContext, b: Branch, dwell: number, powerS: numb
   let stoppedEarly = false;
   // The step current at the end of the build is the one held to accelerate.
   b.current.phase = b.current.phase === "stretch" ? "stretch" : "accelerate";
+  const seen = BENCH && intervals ? Int32Array.from(b.run.s.notch) : null;
   for (;;) {
     const w0 = BENCH && intervals ? vehicleStepsDone() : 0;
+    let rose = 0;
+    if (BENCH && seen) {
+      for (let k = 0; k < seen.length; k++) if (b.run.s.notch[k]! > seen[k]!) rose = 1;
+      seen.set(b.run.s.notch);
+    }
     const obs = b.tick(ctx);
-    // The benchmark's record of each interval: work counter before it, its work, 1 slow / 2 as one / 0 the chain.
-    if (BENCH && intervals) intervals.push(w0, vehicleStepsDone() - w0, obs.leadSpeedMps < 1.5 * SETTLED_MIN_SPEED_MPS ? 1 : b.run.runningAsOne ? 2 : 0);
+    // The benchmark's record of each interval: work counter before it, its work, 1 slow / 2 as one / 0 the
+    // chain, and 1 if a unit's notch rose at its start.
+    if (BENCH && intervals) intervals.push(w0, vehicleStepsDone() - w0, obs.leadSpeedMps < 1.5 * SETTLED_MIN_SPEED_MPS ? 1 : b.run.runningAsOne ? 2 : 0, rose);
     if (obs.tailTravelM > bestTail) bestTail = obs.tailTravelM;
     if (targetReached(ctx, obs)) {
       reachedS = obs.timeS;
