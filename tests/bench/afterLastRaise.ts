@@ -4,8 +4,8 @@
  * units away from the head among the first `count` of the all-different generator: each own plan (planStart)
  * and each check with its mass search (runJob check, masses: own plan and holding judgements), the
  * vehicle-steps of the accelerate phase after its run's last rise of any unit's notch (search.ts logs it,
- * BENCH only) against all the vehicle-steps done. With the several-places rule off (a train with units away
- * from the head runs the full chain to the end) and on (settled.ts `setSeveralPlaces`). That work is split by
+ * BENCH only) against all the vehicle-steps done (a train with units away from the head runs the full chain
+ * to the end: no rule lets couplings rattling between powered places run as one). That work is split by
  * what the train does in each control interval: below 1.5 m/s (no train runs as one there, settled.ts
  * `SETTLED_MIN_SPEED_MPS`), running as one, or the chain while moving — the last is the most a rule letting
  * rattling couplings run as one after the last rise could save.
@@ -15,7 +15,7 @@
  */
 import { planStart } from "../../src/core/planner/index.js";
 import { logSearchTries, type SearchTry } from "../../src/core/planner/search.js";
-import { SETTLED_MIN_SPEED_MPS, setSeveralPlaces } from "../../src/core/dynamics/settled.js";
+import { SETTLED_MIN_SPEED_MPS } from "../../src/core/dynamics/settled.js";
 import { vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
 import { builtinLibrary } from "../../src/profiles/builtin.js";
 import { parseStartCase } from "../../src/profiles/parse.js";
@@ -75,8 +75,7 @@ const pc = (x: number, of: number) => ((100 * x) / Math.max(1, of)).toFixed(1);
 if (import.meta.url === `file://${process.argv[1]}`) {
   const count = Number(process.argv[2] ?? 200);
   const cases = unitsAwayDepartures(count);
-  for (const on of [false, true]) {
-    setSeveralPlaces(on);
+  {
     const own: Share = { total: 0, accelerate: 0, afterRaise: 0, slow: 0, asOne: 0 };
     const check: Share = { total: 0, accelerate: 0, afterRaise: 0, slow: 0, asOne: 0 };
     const rows: string[] = [];
@@ -87,8 +86,7 @@ if (import.meta.url === `file://${process.argv[1]}`) {
       add(check, k);
       rows.push(`  ${id}: own ${M(o.total)} M, after last rise ${pc(o.afterRaise, o.total)} %; check ${M(k.total)} M, after last rise ${pc(k.afterRaise, k.total)} %`);
     }
-    setSeveralPlaces(true);
-    console.log(`several-places rule ${on ? "on" : "off"}: ${cases.length} departures with units away from the head among the first ${count}`);
+    console.log(`${cases.length} departures with units away from the head among the first ${count}`);
     if (process.env.ROWS) console.log(rows.join("\n"));
     for (const [what, x] of [["own plans", own], ["checks with mass searches", check]] as const) {
       console.log(`  ${what}: ${M(x.total)} M vehicle-steps, accelerate ${pc(x.accelerate, x.total)} %, after the last notch rise ${M(x.afterRaise)} M = ${pc(x.afterRaise, x.total)} %`);
