@@ -112,10 +112,12 @@ describe("the settled train as one mass agrees with the full chain", () => {
 });
 
 describe("a coupling at its creeping peak runs as one, its new peak reported at its crest", () => {
-  it("the 150-wagon plan's notch timing: fewer steps than when a new peak sent the train back, every coupling's peak within 1 % of the full chain", () => {
+  it("the 150-wagon plan's notch timing: no more steps than when a new peak sent the train back, every coupling's peak never low and within 1 % high", () => {
     // The long train creeps up to speed with its head couplings at the highest force they have reached;
     // when no crest may pass the peak reached, it stays in the full chain there. Running as one, each new
     // peak is the quasi-static force plus the upward sway measured before it settled: high by at most that.
+    // A settled stretch that ends before the run does (here at each notch of the acceleration but the last)
+    // is run again with the full chain (runner.ts `runStretchAsChain`), so only the final stretch saves steps.
     const c = longTrainCase();
     const d = judge(c);
     const r = d.shown.search!;
@@ -129,12 +131,15 @@ describe("a coupling at its creeping peak runs as one, its new peak reported at 
     const noNewPeak = simulate(m, controls, asOne);
     setCreepingPeakAsOne(true);
     const one = simulate(m, controls, asOne);
-    expect(one.steps).toBeLessThan(0.8 * noNewPeak.steps);
-    expect(noNewPeak.steps).toBeLessThan(full.steps);
+    expect(one.steps).toBeLessThanOrEqual(noNewPeak.steps);
+    expect(one.steps).toBeLessThan(full.steps);
     expect(rel(one.peakTensionN, full.peakTensionN)).toBeLessThanOrEqual(0.01);
+    expect(one.peakTensionN).toBeGreaterThanOrEqual(full.peakTensionN * (1 - 0.001));
     for (let j = 0; j < m.n - 1; j++) {
       expect(rel(one.couplerPeakTensionN[j]!, full.couplerPeakTensionN[j]!), `coupling ${j}`).toBeLessThanOrEqual(0.01);
       expect(rel(one.couplerPeakCompressionN[j]!, full.couplerPeakCompressionN[j]!), `coupling ${j}`).toBeLessThanOrEqual(0.01);
+      expect(one.couplerPeakTensionN[j]!, `coupling ${j} low`).toBeGreaterThanOrEqual(full.couplerPeakTensionN[j]! * (1 - 0.001));
+      expect(one.couplerPeakCompressionN[j]!, `coupling ${j} low`).toBeGreaterThanOrEqual(full.couplerPeakCompressionN[j]! * (1 - 0.001));
     }
     expect(rel(one.final.leadSpeedMps, full.final.leadSpeedMps)).toBeLessThanOrEqual(0.01);
     expect(rel(one.final.leadTravelM, full.final.leadTravelM)).toBeLessThanOrEqual(0.01);

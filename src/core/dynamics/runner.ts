@@ -7,7 +7,7 @@ import { adhesionSpeedFactor, slipRisk } from "../physics/adhesion.js";
 import { BENCH } from "./benchOnly.js";
 import { activeOnlyStepping, applyBrakes, applyBrakesFrom, countVehicleSteps, createState, evaluate, evaluateActive, shapedState, shapedTakeUp, step, stepActive, vehicleStepsDone, type DynamicsState } from "./dynamics.js";
 import { CONTROL_INTERVAL_S, integratorSteps, stepDividing, type TrainModel } from "../train/trainModel.js";
-import { SETTLED_MIN_SPEED_MPS, SETTLE_AFTER_CHANGE_S, SWAY_WINDOW_S, maySettle, measureSway, mustUnsettle, settle, settledRefusal as settleRefusal, settledStep, unsettle, type Settled } from "./settled.js";
+import { SETTLED_MIN_SPEED_MPS, SETTLE_AFTER_CHANGE_S, SWAY_WINDOW_S, maySettle, measureSway, mustUnsettle, settle, settledRefusal as settleRefusal, settledStep, type Settled } from "./settled.js";
 
 /** What a controller (a driver, or the planner's policy) can observe. */
 export interface Observation {
@@ -171,6 +171,11 @@ export class Run {
   private settleWhenSteady = false;
   /** The settled train while it runs as one (null: the full chain). */
   private settled: Settled | null = null;
+  /**
+   * The run as it stood when the train settled (never changed afterwards, so clones share it): a settled
+   * stretch that must end before the run does is run again from here with the full chain.
+   */
+  private settledFrom: RunSnapshot | null = null;
   /** The notches of the last interval and when they last changed, s. */
   private notchSeen!: Int32Array;
   private notchChangedS = -Infinity;
@@ -275,10 +280,16 @@ export class Run {
 
   /** Advance by one control interval: integrate, or skip at once when nothing can move. */
   advanceInterval(): void {
+    this.followNotches();
+    this.interval();
+    if (this.settleWhenSteady && !this.settled && this.mayRunAsOne()) this.measureOrSettle();
+  }
+
+  /** One control interval of the settled train or the chain, with the clock, series and step change after it. */
+  private interval(): void {
     const m = this.m;
     const s = this.s;
     const steps = this.stepsPerInterval;
-    this.followNotches();
     if (this.settled) {
       settledStep(m, s, this.settled, this.lead, this.controlIntervalS);
       this.afterStep();
@@ -341,7 +352,6 @@ export class Run {
       this.setStep(this.rollingStepS);
       this.rollingStepS = 0;
     }
-    if (this.settleWhenSteady && !this.settled && this.mayRunAsOne()) this.measureOrSettle();
   }
 
   /** The brakes' holding capacities for the present time (only the vehicles whose brake can be changing: `applyBrakesFrom`). */
@@ -351,6 +361,7 @@ export class Run {
 
   /** Note a notch change; the settled train goes back to the chain for it (and when slow or near a slack). */
   private followNotches(): void {
+    if (this.settled && mustUnsettle(this.m, this.s, this.settled, this.lead)) this.runStretchAsChain();
     const s = this.s;
     for (let k = 0; k < this.m.nl; k++) {
       if (s.notch[k] !== this.notchSeen[k]) {
@@ -360,10 +371,64 @@ export class Run {
         break;
       }
     }
-    if (this.settled && mustUnsettle(this.m, s, this.settled, this.lead)) {
-      unsettle(this.m, s, this.settled, this.lead);
-      this.settled = null;
+  }
+
+  /**
+   * The settled stretch ends before the run does: go back to where the train settled and run the stretch
+   * again with the full chain, in the notches it settled in, observed every interval as a controller does.
+   * So the clock, series, slips and every coupling's peak are the full chain's, and its sway carries on into
+   * what follows (the settled train cannot hand it back). The notches now asked for stay asked for.
+   */
+  private runStretchAsChain(): void {
+    const snap = this.settledFrom!;
+    const end = this.intervals;
+    const notches = this.s.notch.slice();
+    this.settled = null;
+    this.settledFrom = null;
+    this.restore(snap);
+    // The controller observed the interval in which the train settled.
+    this.observe();
+    while (this.intervals < end) {
+      this.interval();
+      this.observe();
     }
+    this.s.notch.set(notches);
+  }
+
+  /** The run as it stands (a snapshot to run a settled stretch again from). */
+  private snapshot(): RunSnapshot {
+    return {
+      s: cloneState(this.s),
+      intervals: this.intervals,
+      steps: this.steps,
+      dt: this.dt,
+      stepsPerInterval: this.stepsPerInterval,
+      rollingStepS: this.rollingStepS,
+      brakesReleased: this.brakesReleased,
+      seriesN: this.series.n,
+      seriesMaxT: this.seriesMaxT,
+      seriesMaxC: this.seriesMaxC,
+      episodes: this.episodes.map((e) => ({ ...e })),
+      openEpisode: this.openEpisode.map((e) => (e ? this.episodes.indexOf(e) : -1)),
+      lastSlipCount: this.lastSlipCount.slice(),
+    };
+  }
+
+  /** Back to a snapshot (which stays as it is). */
+  private restore(p: RunSnapshot): void {
+    this.s = cloneState(p.s);
+    this.intervals = p.intervals;
+    this.steps = p.steps;
+    this.dt = p.dt;
+    this.stepsPerInterval = p.stepsPerInterval;
+    this.rollingStepS = p.rollingStepS;
+    this.brakesReleased = p.brakesReleased;
+    this.series.n = p.seriesN;
+    this.seriesMaxT = p.seriesMaxT;
+    this.seriesMaxC = p.seriesMaxC;
+    this.episodes = p.episodes.map((e) => ({ ...e }));
+    this.openEpisode = p.openEpisode.map((i) => (i >= 0 ? this.episodes[i]! : null));
+    this.lastSlipCount = p.lastSlipCount.slice();
   }
 
   /**
@@ -378,7 +443,10 @@ export class Run {
     }
     measureSway(this.m, s, this.meanScratch, this.sway);
     if (s.t - this.swayFromS < SWAY_WINDOW_S) return;
-    if (maySettle(this.m, s, this.lead, this.meanScratch, this.sway)) this.settled = settle(this.m, s, this.lead, this.meanScratch, this.sway);
+    if (maySettle(this.m, s, this.lead, this.meanScratch, this.sway)) {
+      this.settledFrom = this.snapshot();
+      this.settled = settle(this.m, s, this.lead, this.meanScratch, this.sway);
+    }
     else if (BENCH) settleTally[9 + settleRefusal(this.m, s, this.lead, this.meanScratch)]!++;
     this.swayFromS = Infinity;
   }
@@ -561,6 +629,23 @@ export class Run {
       effortN: t(b.effortN),
     };
   }
+}
+
+/** What a run is when the train settles, to run the settled stretch again with the full chain from. */
+interface RunSnapshot {
+  s: DynamicsState;
+  intervals: number;
+  steps: number;
+  dt: number;
+  stepsPerInterval: number;
+  rollingStepS: number;
+  brakesReleased: number;
+  seriesN: number;
+  seriesMaxT: number;
+  seriesMaxC: number;
+  episodes: SlipEpisode[];
+  openEpisode: number[];
+  lastSlipCount: Int32Array;
 }
 
 /** Time after k control intervals, s: k ÷ (intervals per second) when that is a whole number, so 0.1 s intervals give decimal times. */

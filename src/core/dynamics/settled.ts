@@ -5,15 +5,15 @@
  * Then one Newton's law for the whole train per control interval replaces the chain's hundreds of stiff
  * steps, and the couplings' forces (their peaks, the wheel-climb check's buff) follow from the prefix sums.
  *
- * It is left for the full chain at once when anything could start a surge or a run-in: a notch change, the
- * speed falling low, a coupling's force less its sway reaching zero (it would go into its slack). On the way back every
- * coupling is given the deflection its gear needs for that force (the hysteresis followed from where the
- * chain left it), so the chain carries on from the settled state without a spurious jolt.
+ * It ends when anything could start a surge or a run-in: a notch change, the speed falling low, a coupling's
+ * force less its sway reaching zero (it would go into its slack). The chain's remaining sway adds to the next
+ * surge, and the settled train cannot hand that sway back, so a settled stretch that ends before the run
+ * does is run again with the full chain from where the train settled (runner.ts `runStretchAsChain`): only a
+ * stretch in which the run ends stays run as one, and every figure before it is the full chain's.
  */
 import { GRAVITY_MPS2 } from "../physics/constants.js";
-import { PRELOAD_RAMP_M } from "../physics/coupling.js";
 import { BENCH } from "./benchOnly.js";
-import { evaluate, gearForce, updateTraction, type DynamicsState } from "./dynamics.js";
+import { updateTraction, type DynamicsState } from "./dynamics.js";
 import type { TrainModel } from "../train/trainModel.js";
 
 /** Slowest speed at which the train may run as one, m/s: below it vehicles may stop and stick again. */
@@ -256,56 +256,4 @@ function settledForces(m: TrainModel, s: DynamicsState, st: Settled, v: number):
   s.intervalMaxCompressionN = maxC;
   s.acc.fill(a);
   return a;
-}
-
-/**
- * Back to the chain: each coupling given the deflection at which its gear, followed from where the chain
- * left it, carries the present quasi-static force; the vehicles placed accordingly behind the lead, all at
- * the train's speed; the chain's forces and accelerations evaluated there.
- */
-export function unsettle(m: TrainModel, s: DynamicsState, st: Settled, lead: number): void {
-  const n = m.n;
-  const x = s.x;
-  // Extension of each coupling for its force; then the places from the head, shifted to keep the lead's.
-  const xLead = x[lead]!;
-  x[0] = 0;
-  for (let j = 0; j < n - 1; j++) {
-    const side = st.side[j]!;
-    const e = deflectionFor(m, s, j, side * st.meanN[j]!, side > 0);
-    const ext = side * (m.halfSlackM[j]! + e);
-    x[j + 1] = x[j]! + m.ext0M[j]! - ext;
-  }
-  const shift = xLead - x[lead]!;
-  for (let i = 0; i < n; i++) x[i]! += shift;
-  evaluate(m, s, 0);
-}
-
-/** The gear deflection at which coupling j carries `forceN` on its side (draft or buff), the hysteresis followed from its last state; sets that state. */
-function deflectionFor(m: TrainModel, s: DynamicsState, j: number, forceN: number, draft: boolean): number {
-  const travel = draft ? m.draftTravelM[j]! : m.buffTravelM[j]!;
-  const rated = draft ? m.draftRatedN[j]! : m.buffRatedN[j]!;
-  const lin = draft ? m.draftLinear[j]! : m.buffLinear[j]!;
-  const preload = draft ? m.draftPreloadN[j]! : m.buffPreloadN[j]!;
-  const prevF = s.gearF[j]!;
-  const prevE = s.gearDefl[j]!;
-  const unload = m.unloadRatio[j]!;
-  const kT = m.transitionK[j]!;
-  const endK = m.endStopK[j]!;
-  const force = (e: number) => {
-    const gf = gearForce(prevF, prevE, e, travel, rated, lin, preload, unload, kT);
-    return e > travel ? gf + endK * (e - travel) : gf;
-  };
-  let lo = 0;
-  let hi = Math.max(prevE, PRELOAD_RAMP_M, travel);
-  while (force(hi) < forceN) hi *= 2;
-  // The force is non-decreasing in the deflection: bisect to well below a micrometre.
-  for (let it = 0; it < 60 && hi - lo > 1e-9; it++) {
-    const mid = 0.5 * (lo + hi);
-    if (force(mid) < forceN) lo = mid;
-    else hi = mid;
-  }
-  const e = hi;
-  s.gearF[j] = gearForce(prevF, prevE, e, travel, rated, lin, preload, unload, kT);
-  s.gearDefl[j] = e;
-  return e;
 }
