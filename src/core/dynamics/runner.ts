@@ -279,8 +279,8 @@ export class Run {
   }
 
   /** Advance by one control interval: integrate, or skip at once when nothing can move. */
-  advanceInterval(): void {
-    this.followNotches();
+  advanceInterval(onStretchRunAgain?: (obs: Observation) => void): void {
+    this.followNotches(onStretchRunAgain);
     this.interval();
     if (this.settleWhenSteady && !this.settled && this.mayRunAsOne()) this.measureOrSettle();
   }
@@ -360,8 +360,8 @@ export class Run {
   }
 
   /** Note a notch change; the settled train goes back to the chain for it (and when slow or near a slack). */
-  private followNotches(): void {
-    if (this.settled && mustUnsettle(this.m, this.s, this.settled, this.lead)) this.runStretchAsChain();
+  private followNotches(onStretchRunAgain?: (obs: Observation) => void): void {
+    if (this.settled && mustUnsettle(this.m, this.s, this.settled, this.lead)) this.runStretchAsChain(onStretchRunAgain);
     const s = this.s;
     for (let k = 0; k < this.m.nl; k++) {
       if (s.notch[k] !== this.notchSeen[k]) {
@@ -377,9 +377,10 @@ export class Run {
    * The settled stretch ends before the run does: go back to where the train settled and run the stretch
    * again with the full chain, in the notches it settled in, observed every interval as a controller does.
    * So the clock, series, slips and every coupling's peak are the full chain's, and its sway carries on into
-   * what follows (the settled train cannot hand it back). The notches now asked for stay asked for.
+   * what follows (the settled train cannot hand it back). The notches now asked for stay asked for. Each
+   * observation of the stretch run again goes to `onObserved` (a branch folds it into its step records).
    */
-  private runStretchAsChain(): void {
+  private runStretchAsChain(onObserved?: (obs: Observation) => void): void {
     const snap = this.settledFrom!;
     const end = this.intervals;
     const notches = this.s.notch.slice();
@@ -390,7 +391,8 @@ export class Run {
     this.observe();
     while (this.intervals < end) {
       this.interval();
-      this.observe();
+      const obs = this.observe();
+      onObserved?.(obs);
     }
     this.s.notch.set(notches);
   }

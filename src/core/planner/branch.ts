@@ -46,6 +46,9 @@ export interface WheelClimbPeak {
 export class Branch {
   /** Group notches still to come (a helper's driver follows the head's call a little later) and when. */
   pending: { atS: number; notches: Int32Array } | null = null;
+  /** The context of the tick under way, and the branch's own receiver of a stretch's observations run again (made once). */
+  private tickCtx: PlannerContext | null = null;
+  private readonly noteStretchAgain = (obs: Observation): void => this.noteAgain(this.tickCtx!, obs);
 
   constructor(
     public run: Run,
@@ -119,9 +122,12 @@ export class Branch {
     });
   }
 
-  /** Fold an observation into the current step's records. */
-  note(ctx: PlannerContext, obs: Observation): void {
-    const st = this.current;
+  /**
+   * Fold an observation into the current step's records (or into `st`, a step it falls in: a settled stretch
+   * run again with the full chain; its end figures then only when the observation is at the step's end).
+   */
+  note(ctx: PlannerContext, obs: Observation, st: StepRecord = this.current): void {
+    const atEnd = st === this.current || obs.timeS >= st.endS - 1e-9;
     // The plan ends at its target speed; the control interval in which the train passes it carries a light
     // train some way beyond (0.2 s at 0.4 m/s² is 0.3 km/h). The step's adhesion figures are taken up to
     // the target, where the plan's own rule judged the notch (search.ts notchRiskAhead): a notch that asks
@@ -139,11 +145,21 @@ export class Branch {
     }
     if (obs.maxTensionN > st.peakTensionN) st.peakTensionN = obs.maxTensionN;
     if (obs.maxCompressionN > st.peakCompressionN) st.peakCompressionN = obs.maxCompressionN;
-    st.endS = obs.timeS;
-    st.endTravelM = obs.leadTravelM;
-    st.endSpeedMps = obs.leadSpeedMps;
-    st.effortN = obs.effortTargetN;
+    if (atEnd) {
+      st.endS = obs.timeS;
+      st.endTravelM = obs.leadTravelM;
+      st.endSpeedMps = obs.leadSpeedMps;
+      st.effortN = obs.effortTargetN;
+    }
     if (ctx.wheelClimb.active && obs.maxCompressionN > 0) this.noteWheelClimb(ctx, st);
+  }
+
+  /** An observation of a settled stretch run again with the full chain, into the step it falls in. */
+  private noteAgain(ctx: PlannerContext, obs: Observation): void {
+    const steps = this.steps;
+    let k = steps.length - 1;
+    while (k > 0 && steps[k]!.startS >= obs.timeS) k--;
+    this.note(ctx, obs, steps[k]!);
   }
 
   /** The wheel-climb L/V of every coupling in buff on a curve now; the step keeps the highest. */
@@ -173,7 +189,8 @@ export class Branch {
       this.run.setGroupNotches(this.pending.notches);
       this.pending = null;
     }
-    this.run.advanceInterval();
+    this.tickCtx = ctx;
+    this.run.advanceInterval(this.noteStretchAgain);
     const obs = this.run.observe();
     this.note(ctx, obs);
     return obs;
