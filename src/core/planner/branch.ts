@@ -46,9 +46,8 @@ export interface WheelClimbPeak {
 export class Branch {
   /** Group notches still to come (a helper's driver follows the head's call a little later) and when. */
   pending: { atS: number; notches: Int32Array } | null = null;
-  /** The context of the tick under way, and the branch's own receiver of a stretch's observations run again (made once). */
+  /** The context of the tick under way (for the receiver of a stretch's observations run again). */
   private tickCtx: PlannerContext | null = null;
-  private readonly noteStretchAgain = (obs: Observation): void => this.noteAgain(this.tickCtx!, obs);
 
   constructor(
     public run: Run,
@@ -154,8 +153,8 @@ export class Branch {
     if (ctx.wheelClimb.active && obs.maxCompressionN > 0) this.noteWheelClimb(ctx, st);
   }
 
-  /** An observation of a settled stretch run again with the full chain, into the step it falls in. */
-  private noteAgain(ctx: PlannerContext, obs: Observation): void {
+  /** An observation of a settled stretch run again with the full chain, into the step it falls in (called by againReceiver). */
+  noteAgain(ctx: PlannerContext, obs: Observation): void {
     const steps = this.steps;
     let k = steps.length - 1;
     while (k > 0 && steps[k]!.startS >= obs.timeS) k--;
@@ -190,14 +189,34 @@ export class Branch {
       this.pending = null;
     }
     this.tickCtx = ctx;
-    this.run.advanceInterval(this.noteStretchAgain);
+    this.run.advanceInterval(againReceiver(this));
     const obs = this.run.observe();
     this.note(ctx, obs);
     return obs;
+  }
+
+  /** The context of the tick under way (for againReceiver). */
+  tickCtxNow(): PlannerContext {
+    return this.tickCtx!;
   }
 
   /** Largest coupler tension over all steps so far, N. */
   peakTensionN(): number {
     return this.steps.reduce((m, s) => Math.max(m, s.peakTensionN), 0);
   }
+}
+
+/**
+ * Each branch's receiver of a settled stretch's observations run again, made once per branch and kept beside
+ * it rather than on it: a branch is plain state (searches compare branches figure for figure, and a closure
+ * of its own would make two equal branches differ).
+ */
+const againReceivers = new WeakMap<Branch, (obs: Observation) => void>();
+function againReceiver(b: Branch): (obs: Observation) => void {
+  let f = againReceivers.get(b);
+  if (f === undefined) {
+    f = (obs: Observation): void => b.noteAgain(b.tickCtxNow(), obs);
+    againReceivers.set(b, f);
+  }
+  return f;
 }
