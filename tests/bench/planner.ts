@@ -69,6 +69,9 @@ function benchPlanWork(): void {
  * off: before) the long train stayed in the chain while it crept up to speed at its head couplings' peak;
  * after, it runs as one there too, each new peak reported at the quasi-static force plus the upward sway.
  * The same before/after over 24 seeded departures, with the largest change of a plan's peak tension.
+ * Since a settled stretch that ends before the run does is run again with the full chain (a hand-back from
+ * one mass lost the chain's sway and gave later peaks up to 3 % low), only the stretch the run ends in saves
+ * work: this plan 4.66 → about 12.0 M vehicle-steps against 12.80 M for the full chain throughout.
  */
 function benchLongPlanWork(c: StartCase): void {
   const one = (c: StartCase, asOne: boolean, creeping: boolean, runs: number) => {
