@@ -51,6 +51,18 @@ describe("step cards", () => {
     expect(cards[3]!.querySelectorAll(".alert")).toHaveLength(2);
   });
 
+  it("a risk just over the threshold that rounds to it says 'just above', not a figure above itself", () => {
+    // 10.04 % against a 10 % threshold: the card shows whole percent as everywhere else (10 %), so "10 % — above
+    // your 10 %" would contradict itself. 14 % on step 4 stays plainly above.
+    const steps = FIXTURE_STEPS.map((st, k) => (k === 2 ? { ...st, slipRisk: 0.1004 } : st));
+    resultView(fixturePlan({ steps }));
+    const cards = [...document.querySelectorAll(".step-card")];
+    expect(cards[2]!.textContent).toContain("10 % — just above your 10 %");
+    expect(cards[2]!.querySelector(".alert")).not.toBeNull();
+    expect(cards[3]!.textContent).toContain("14 % — above your 10 %");
+    expect(cards[3]!.textContent).not.toContain("just above");
+  });
+
   it("shows every figure in US units when asked", () => {
     resultView(fixturePlan(), "us");
     const third = document.querySelectorAll(".step-card")[2]!;

@@ -21,6 +21,7 @@ export const stepsDe = translation<typeof steps.en>()({
   expectedSpeed: "Erwartete Geschwindigkeit",
   slipRisk: "Schleuderrisiko",
   aboveYour: " — über Ihren {threshold}",
+  justAboveYour: " — knapp über Ihren {threshold}",
   tractiveEffort: "Zugkraft",
   atStepEnd: "bei {speed}, am Ende des Schritts",
   peakCoupler: "Größte Kupplungskraft",

@@ -20,6 +20,7 @@ export const steps = namespace("steps", {
   expectedSpeed: "Expected speed",
   slipRisk: "Slip risk",
   aboveYour: " — above your {threshold}",
+  justAboveYour: " — just above your {threshold}",
   tractiveEffort: "Tractive effort",
   atStepEnd: "at {speed}, the step's end",
   peakCoupler: "Peak coupler force",

@@ -21,6 +21,7 @@ export const stepsHu = translation<typeof steps.en>()({
   expectedSpeed: "Várható sebesség",
   slipRisk: "Perdülési kockázat",
   aboveYour: " — a beállított {threshold} felett",
+  justAboveYour: " — épp a beállított {threshold} felett",
   tractiveEffort: "Vonóerő",
   atStepEnd: "{speed} sebességnél, a lépés végén",
   peakCoupler: "Legnagyobb kapcsolóerő",

@@ -25,6 +25,9 @@ export interface StepCardProps {
 export function StepCard(props: StepCardProps): JSX.Element {
   const s = () => props.step;
   const risky = () => s().slipRisk > props.slipThreshold;
+  // A risk just over the threshold can round to the same whole percent ("10 % — above your 10 %" would read as a
+  // contradiction); the figures stay whole percent as everywhere else, the words say it is only just over.
+  const riskTiesThreshold = () => percentOf(s().slipRisk, 0) === percentOf(props.slipThreshold, 0);
   const heavy = () => s().peakCouplerForceN > props.couplerWorkingN;
   return (
     <li class={`step-card phase-${s().phase}`} aria-label={t("stepOf", { number: props.index + 1, count: props.count, notch: notchText(s().notch) })}>
@@ -54,7 +57,7 @@ export function StepCard(props: StepCardProps): JSX.Element {
             <dt>{t("slipRisk")}</dt>
             <dd>
               {percentOf(s().slipRisk, 0)}
-              <Show when={risky()}>{t("aboveYour", { threshold: percentOf(props.slipThreshold, 0) })}</Show>
+              <Show when={risky()}>{t(riskTiesThreshold() ? "justAboveYour" : "aboveYour", { threshold: percentOf(props.slipThreshold, 0) })}</Show>
             </dd>
           </div>
           <div>
