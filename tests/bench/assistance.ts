@@ -16,10 +16,8 @@ import { searchAssistance, setFullRanking, setJudgeByFloor, setKnownCeiling } fr
 import { withEvaluationMemo } from "../../src/core/planner/evaluationMemo.js";
 import { CHECK_ASSISTANCE_BUDGET, CHECK_DIVIDE_BUDGET } from "../../src/cli/batch/jobs.js";
 import { assistanceReport } from "../../src/profiles/assistanceReport.js";
-import { builtinLibrary } from "../../src/profiles/builtin.js";
-import { parseStartCase } from "../../src/profiles/parse.js";
-import { allDifferentDepartures } from "./departures.js";
 import { heading, line, median } from "./util.js";
+import { allDifferentCases } from "../tools/departures.js";
 
 /** Work counters: vehicle-steps integrated and plan searches run (each begins one run from standing). */
 const work = { vehicleSteps: 0, searches: 0 };
@@ -102,12 +100,7 @@ function assistanceOf(c: StartCase, ranking: Ranking, exact?: Map<number, number
 
 export function benchAssistance(n: number): void {
   countWork();
-  const lib = builtinLibrary();
-  const cases = allDifferentDepartures(n).map((d) => {
-    const r = parseStartCase(d, lib);
-    if (!r.ok) throw new Error(`generated departure ${String(d.id)} does not parse`);
-    return r.value;
-  });
+  const cases = allDifferentCases(n);
   planStart(cases[0]!, { skipMassSearch: true }); // warm-up
   // One plan of each train (its verdict and verified plan, no mass search): the ratio's denominator.
   let planMs = 0;

@@ -21,12 +21,12 @@ import { loadTable } from "../../src/core/dispatch/loadTable.js";
 import { tableCase } from "../../src/cli/commands/table.js";
 import { builtinCaseJson, builtinLibrary, builtinLocations } from "../../src/profiles/builtin.js";
 import { allDifferentDepartures } from "./departures.js";
-import { heading, line, target } from "./util.js";
+import { cpuMs, heading, line, target } from "./util.js";
+import { allDifferentCases } from "../tools/departures.js";
 import { runJob, type CheckOutcome } from "../../src/cli/batch/jobs.js";
 import { judge, planStart, startableMasses } from "../../src/core/planner/index.js";
 import type { StartCase } from "../../src/core/train/types.js";
 import { vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
-import { parseStartCase } from "../../src/profiles/parse.js";
 
 const repo = fileURLToPath(new URL("../../", import.meta.url));
 
@@ -131,12 +131,7 @@ export function run(): void {
  * all-different departures, in this process, one after the other: Σ departures ÷ Σ plans.
  */
 export function departureAgainstPlan(n: number): void {
-  const lib = builtinLibrary();
-  const cases = allDifferentDepartures(n).map((d) => {
-    const r = parseStartCase(d, lib);
-    if (!r.ok) throw new Error(`generated departure ${String(d.id)} does not parse`);
-    return r.value;
-  });
+  const cases = allDifferentCases(n);
   planStart(cases[0]!, { skipMassSearch: true }); // warm-up
   let planMs = 0;
   let departureMs = 0;
@@ -180,10 +175,6 @@ export function departureAgainstPlan(n: number): void {
  * limit has failed, alternating which goes first; and whether the figures agree to the kilogram.
  */
 function massSearchesBeforeAfter(cases: readonly StartCase[]): void {
-  const cpuMs = () => {
-    const u = process.cpuUsage();
-    return (u.user + u.system) / 1000;
-  };
   let before = 0;
   let after = 0;
   let stepsBefore = 0;
@@ -246,19 +237,12 @@ function massSearchesBeforeAfter(cases: readonly StartCase[]): void {
  * guided by lumped wagons (startableMass.ts): the full-model plans, the work and the figures.
  */
 export function guidedMassSearches(): void {
-  const lib = builtinLibrary();
   const picked = [24, 63, 64, 67, 93];
-  const all = allDifferentDepartures(100);
-  const cpuMs = () => {
-    const u = process.cpuUsage();
-    return (u.user + u.system) / 1000;
-  };
+  const all = allDifferentCases(100);
   const tot = { full: { ms: 0, steps: 0, plans: 0 }, guided: { ms: 0, steps: 0, plans: 0 } };
   const notes: string[] = [];
   for (const k of picked) {
-    const r = parseStartCase(all[k], lib);
-    if (!r.ok) throw new Error(`generated departure ${k + 1} does not parse`);
-    const c = r.value;
+    const c = all[k]!;
     const own = judge(c, { depth: "marginal" }).verdict;
     const search = (lumpedGuide: boolean) => {
       const t0 = cpuMs();

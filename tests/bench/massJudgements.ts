@@ -16,10 +16,8 @@ import { runJob, type CheckOutcome } from "../../src/cli/batch/jobs.js";
 import { withEvaluationMemo } from "../../src/core/planner/evaluationMemo.js";
 import { vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
 import { vehicleStepsBeforeAllMoved } from "../../src/core/dynamics/runner.js";
-import { builtinLibrary } from "../../src/profiles/builtin.js";
-import { parseStartCase } from "../../src/profiles/parse.js";
-import { allDifferentDepartures } from "./departures.js";
-import { heading, line } from "./util.js";
+import { cpuMs, heading, line } from "./util.js";
+import { allDifferentCases } from "../tools/departures.js";
 
 interface Tally {
   judgements: number;
@@ -29,16 +27,7 @@ interface Tally {
 }
 
 export function benchMassJudgements(n: number): void {
-  const lib = builtinLibrary();
-  const cases = allDifferentDepartures(n).map((d) => {
-    const r = parseStartCase(d, lib);
-    if (!r.ok) throw new Error(`generated departure ${String(d.id)} does not parse`);
-    return r.value;
-  });
-  const cpuMs = () => {
-    const u = process.cpuUsage();
-    return (u.user + u.system) / 1000;
-  };
+  const cases = allDifferentCases(n);
   const held: Tally = { judgements: 0, steps: 0, beforeAllMoved: 0, cpuMs: 0 };
   const failed: Tally = { judgements: 0, steps: 0, beforeAllMoved: 0, cpuMs: 0 };
   let searchMs = 0;
@@ -100,16 +89,7 @@ export function benchMassJudgements(n: number): void {
  * Run alone: npx tsx tests/bench/massJudgements.ts [n]
  */
 export function benchVerifiedFloor(n: number): void {
-  const lib = builtinLibrary();
-  const cases = allDifferentDepartures(n).map((d) => {
-    const r = parseStartCase(d, lib);
-    if (!r.ok) throw new Error(`generated departure ${String(d.id)} does not parse`);
-    return r.value;
-  });
-  const cpuMs = () => {
-    const u = process.cpuUsage();
-    return (u.user + u.system) / 1000;
-  };
+  const cases = allDifferentCases(n);
   const timed = <T>(f: () => T): [T, number] => {
     const t0 = cpuMs();
     const v = f();

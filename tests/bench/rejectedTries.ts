@@ -26,21 +26,10 @@ import { judge, planStart, startableMasses } from "../../src/core/planner/index.
 import { withTrailingMass } from "../../src/core/planner/startableMass.js";
 import { logSearchTries, setCutDroppedPaces, type SearchTry } from "../../src/core/planner/search.js";
 import { vehicleStepsDone } from "../../src/core/dynamics/dynamics.js";
-import { builtinLibrary } from "../../src/profiles/builtin.js";
-import { parseStartCase } from "../../src/profiles/parse.js";
 import type { StartCase } from "../../src/core/train/types.js";
 import { runJob, type CheckOutcome } from "../../src/cli/batch/jobs.js";
-import { allDifferentDepartures } from "./departures.js";
-import { heading, line } from "./util.js";
-
-export function departureCases(n: number): StartCase[] {
-  const lib = builtinLibrary();
-  return allDifferentDepartures(n).map((d) => {
-    const r = parseStartCase(d, lib);
-    if (!r.ok) throw new Error(`generated departure ${String(d.id)} does not parse`);
-    return r.value;
-  });
-}
+import { cpuMs, heading, line } from "./util.js";
+import { allDifferentCases } from "../tools/departures.js";
 
 /** Each departure's largest startable mass, kg (0: none). */
 export function largestStartable(cases: readonly StartCase[]): number[] {
@@ -80,10 +69,6 @@ function summarise(name: string, log: SearchTry[], plans: number): void {
   }
 }
 
-function cpuMs(): number {
-  const u = process.cpuUsage();
-  return (u.user + u.system) / 1000;
-}
 
 /** The own plans and the holding judgements of `cases`, their parts logged; CPU ms of each kind. */
 export function measureTries(cases: readonly StartCase[], masses: readonly number[], own: SearchTry[], holding: SearchTry[]): { ownMs: number; holdingMs: number; holdingPlans: number } {
@@ -149,7 +134,7 @@ export function droppedPacesBeforeAfter(cases: readonly StartCase[], rounds = 2)
 
 if (import.meta.url === `file://${process.argv[1]}`) {
   const n = Number(process.argv.find((a, i) => i >= 2 && /^\d+$/.test(a)) ?? 40);
-  const cases = departureCases(n);
+  const cases = allDifferentCases(n);
   if (process.argv.includes("--saving")) {
     droppedPacesBeforeAfter(cases);
     process.exit(0);

@@ -55,3 +55,9 @@ export function printTargets(): void {
   heading("Targets (issue 14) — figures of this run; a ratio ≤ 1 meets the goal");
   for (const t of targets) console.log(`  ${t.target.padEnd(64)} ${t.figure.padStart(12)}  ${t.ratio === null ? "      " : `${t.ratio.toFixed(2).padStart(5)}×`}  ${t.note ?? ""}`);
 }
+
+/** This process's CPU time so far (user + system), ms. */
+export function cpuMs(): number {
+  const u = process.cpuUsage();
+  return (u.user + u.system) / 1000;
+}

@@ -15,7 +15,7 @@
  * dynamics, e.g. Garg & Dukkipati, "Dynamics of Railway Vehicle Systems", 1984, ch. 9.
  */
 import { afterEach, describe, expect, it } from "vitest";
-import { judge, type StartCase } from "../../src/core/index.js";
+import { judge } from "../../src/core/index.js";
 import { brakeSchedule, setRunAsOneWhenSettled } from "../../src/core/planner/search.js";
 import { notchSequence } from "../../src/core/planner/plan.js";
 import { continueRun, sequenceControls, simulate } from "../../src/core/dynamics/simulate.js";
@@ -25,17 +25,8 @@ import { GRAVITY_MPS2 } from "../../src/core/physics/constants.js";
 import { setCreepingPeakAsOne } from "../../src/core/dynamics/settled.js";
 import { seededDepartures } from "../tools/departures.js";
 import { longTrainCase } from "../bench/dynamics.js";
+import { decide, rel } from "./helpers/asOne.js";
 
-const rel = (x: number, ref: number): number => (x === ref ? 0 : Math.abs(x - ref) / Math.max(Math.abs(ref), 1e-9));
-
-function decide(c: StartCase, asOne: boolean) {
-  setRunAsOneWhenSettled(asOne);
-  try {
-    return judge(c);
-  } finally {
-    setRunAsOneWhenSettled(true);
-  }
-}
 
 afterEach(() => {
   setRunAsOneWhenSettled(true);

@@ -22,20 +22,9 @@ import { brakeSchedule, setRunAsOneWhenSettled } from "../../src/core/planner/se
 import { notchSequence } from "../../src/core/planner/plan.js";
 import { sequenceControls, simulate } from "../../src/core/dynamics/simulate.js";
 import { modelFromCase } from "../../src/core/train/trainModel.js";
-import { builtinLibrary } from "../../src/profiles/builtin.js";
-import { parseStartCase } from "../../src/profiles/parse.js";
-import { allDifferentDepartures } from "../bench/departures.js";
+import { allDifferentCases } from "../tools/departures.js";
+import { decide, rel } from "./helpers/asOne.js";
 
-const rel = (x: number, ref: number): number => (x === ref ? 0 : Math.abs(x - ref) / Math.max(Math.abs(ref), 1e-9));
-
-function decide(c: StartCase, asOne: boolean) {
-  setRunAsOneWhenSettled(asOne);
-  try {
-    return judge(c);
-  } finally {
-    setRunAsOneWhenSettled(true);
-  }
-}
 
 afterEach(() => setRunAsOneWhenSettled(true));
 
@@ -96,12 +85,8 @@ const BANDS: Array<[number, number]> = [
 
 /** The first two seeded departures in each band that start (a plan to compare), with their decisions. */
 function sample(): Array<{ c: StartCase; full: ReturnType<typeof judge>; one: ReturnType<typeof judge> }> {
-  const lib = builtinLibrary();
   const picked = BANDS.map(() => [] as Array<{ c: StartCase; full: ReturnType<typeof judge>; one: ReturnType<typeof judge> }>);
-  for (const d of allDifferentDepartures(200, 20261202)) {
-    const r = parseStartCase(d, lib);
-    if (!r.ok) throw new Error(`generated departure ${String(d.id)} does not parse`);
-    const c = r.value;
+  for (const c of allDifferentCases(200)) {
     const b = BANDS.findIndex(([lo, hi]) => c.train.wagons >= lo && c.train.wagons < hi);
     if (b < 0 || picked[b]!.length >= 2) continue;
     const full = decide(c, false);
@@ -135,13 +120,10 @@ describe("the settled train as one mass agrees with the full chain at every leng
   });
 
   it("the departures whose couplings came out low after the train went back to the chain: no figure low now", () => {
-    const lib = builtinLibrary();
-    const all = allDifferentDepartures(100);
+    const all = allDifferentCases(100);
     let settledSomewhere = 0;
     for (const k of [0, 8, 25, 32, 39, 50, 62, 66, 97]) {
-      const r = parseStartCase(all[k]!, lib);
-      if (!r.ok) throw new Error(`generated departure ${k} does not parse`);
-      const c = r.value;
+      const c = all[k]!;
       const full = decide(c, false);
       const one = decide(c, true);
       const id = `departure ${k}: ${c.train.wagons} wagons, ${c.conditions.rail}`;

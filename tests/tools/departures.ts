@@ -17,3 +17,12 @@ export function seededDepartures(n: number, maxWagons: number): StartCase[] {
   }
   return out;
 }
+
+/** The first `n` seeded departures (the bench's seed), as start cases. */
+export function allDifferentCases(n: number): StartCase[] {
+  return allDifferentDepartures(n).map((d) => {
+    const r = parseStartCase(d, lib);
+    if (!r.ok) throw new Error(`generated departure ${String(d.id)} does not parse`);
+    return r.value;
+  });
+}
